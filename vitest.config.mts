@@ -1,0 +1,14 @@
+import { fileURLToPath } from 'node:url';
+import { defineConfig } from 'vitest/config';
+
+export default defineConfig({
+  resolve: {
+    alias: { '@': fileURLToPath(new URL('./', import.meta.url)) },
+  },
+  test: {
+    include: ['tests/shared/**/*.test.ts', 'tests/server/**/*.test.ts', 'tests/db/**/*.test.ts'],
+    pool: 'forks',
+    environment: 'node',
+    testTimeout: 20000,
+  },
+});
