@@ -1,0 +1,29 @@
+import fs from 'node:fs';
+import path from 'node:path';
+import Database from 'better-sqlite3';
+
+/**
+ * Copies a live database with SQLite's online backup API, which is safe while the server is
+ * writing (a plain file copy of a WAL database can miss committed pages).
+ */
+export async function backupDatabase(sourcePath: string, backupDir: string, now = new Date()): Promise<string> {
+  fs.mkdirSync(backupDir, { recursive: true });
+  const stamp = now.toISOString().replace(/[:.]/g, '-');
+  const target = path.join(backupDir, `trailtally-${stamp}.db`);
+  const sqlite = new Database(sourcePath, { readonly: true, fileMustExist: true });
+  try {
+    await sqlite.backup(target);
+  } finally {
+    sqlite.close();
+  }
+  return target;
+}
+
+if (require.main === module) {
+  void (async () => {
+    const { loadEnv } = await import('../server/env');
+    const env = loadEnv();
+    const target = await backupDatabase(env.DATABASE_PATH, path.join(env.DATA_DIR, 'backups'));
+    console.log(`Backed up ${env.DATABASE_PATH} to ${target}`);
+  })();
+}

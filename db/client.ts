@@ -1,0 +1,28 @@
+import fs from 'node:fs';
+import path from 'node:path';
+import Database from 'better-sqlite3';
+import { drizzle } from 'drizzle-orm/better-sqlite3';
+import type { BetterSQLite3Database } from 'drizzle-orm/better-sqlite3';
+import type { BaseSQLiteDatabase } from 'drizzle-orm/sqlite-core';
+import type { RunResult } from 'better-sqlite3';
+import * as schema from './schema';
+
+export type Db = BetterSQLite3Database<typeof schema> & { $client: Database.Database };
+
+/** The database or a transaction on it: what query functions take, so they compose inside transactions. */
+export type DbExecutor = BaseSQLiteDatabase<'sync', RunResult, typeof schema>;
+
+/** Opens (creating if needed) the SQLite file with the pragmas every connection needs. */
+export function openDatabase(filePath: string): Db {
+  if (filePath !== ':memory:') fs.mkdirSync(path.dirname(path.resolve(filePath)), { recursive: true });
+  const sqlite = new Database(filePath);
+  // WAL lets readers continue while a write is in flight; the busy timeout makes a second
+  // writer wait instead of failing at once with SQLITE_BUSY.
+  sqlite.pragma('journal_mode = WAL');
+  sqlite.pragma('foreign_keys = ON');
+  sqlite.pragma('busy_timeout = 5000');
+  sqlite.pragma('synchronous = NORMAL');
+  return drizzle(sqlite, { schema });
+}
+
+export { schema };

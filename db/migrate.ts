@@ -1,0 +1,22 @@
+import path from 'node:path';
+import { migrate } from 'drizzle-orm/better-sqlite3/migrator';
+import type { Db } from './client';
+
+const MIGRATIONS_FOLDER = path.resolve(__dirname, '..', 'drizzle');
+
+/** Applies the drizzle-kit migrations in `drizzle/` that this database has not seen yet. */
+export function runMigrations(db: Db): void {
+  migrate(db, { migrationsFolder: MIGRATIONS_FOLDER });
+}
+
+if (require.main === module) {
+  void (async () => {
+    const { loadEnv } = await import('../server/env');
+    const { openDatabase } = await import('./client');
+    const env = loadEnv();
+    const db = openDatabase(env.DATABASE_PATH);
+    runMigrations(db);
+    db.$client.close();
+    console.log(`Migrated ${env.DATABASE_PATH}`);
+  })();
+}

@@ -1,0 +1,53 @@
+import crypto from 'node:crypto';
+import fs from 'node:fs';
+import path from 'node:path';
+import { z } from 'zod';
+
+// The only place that reads process.env: everything else receives a checked Env.
+const envSchema = z.object({
+  NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
+  PORT: z.coerce.number().int().min(0).max(65535).default(8080),
+  HOST: z.string().default('0.0.0.0'),
+  DATABASE_PATH: z.string().min(1).default('./data/trailtally.db'),
+  PUBLIC_URL: z.url().optional(),
+  BETTER_AUTH_SECRET: z.string().min(32, 'BETTER_AUTH_SECRET must be at least 32 characters').optional(),
+  WEB_DIR: z.string().default('./dist'),
+  DEV_WEB_ORIGIN: z.url().optional(),
+  LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
+  SEED_DEMO: z.enum(['auto', 'never']).default('auto'),
+});
+
+export type Env = z.infer<typeof envSchema> & {
+  DATA_DIR: string;
+  PUBLIC_URL: string;
+  BETTER_AUTH_SECRET: string;
+};
+
+export function loadEnv(source: NodeJS.ProcessEnv = process.env): Env {
+  const parsed = envSchema.safeParse(source);
+  if (!parsed.success) {
+    const lines = parsed.error.issues.map((issue) => `  ${issue.path.join('.')}: ${issue.message}`);
+    throw new Error(`Invalid configuration:\n${lines.join('\n')}`);
+  }
+  const env = parsed.data;
+  const dataDir = path.dirname(path.resolve(env.DATABASE_PATH));
+  return {
+    ...env,
+    DATA_DIR: dataDir,
+    PUBLIC_URL: env.PUBLIC_URL ?? `http://localhost:${env.PORT}`,
+    BETTER_AUTH_SECRET: env.BETTER_AUTH_SECRET ?? readOrCreateSecret(dataDir),
+  };
+}
+
+/**
+ * Without a configured secret, generate one the first time and keep it beside the database, so
+ * sessions survive restarts. The file is readable by its owner only and never printed.
+ */
+function readOrCreateSecret(dataDir: string): string {
+  const file = path.join(dataDir, 'auth-secret');
+  if (fs.existsSync(file)) return fs.readFileSync(file, 'utf8').trim();
+  fs.mkdirSync(dataDir, { recursive: true });
+  const secret = crypto.randomBytes(48).toString('base64url');
+  fs.writeFileSync(file, `${secret}\n`, { mode: 0o600 });
+  return secret;
+}

@@ -1,0 +1,40 @@
+// One error shape for every API answer: { error: { code, message, fields? } }.
+export type ErrorCode =
+  | 'bad_request'
+  | 'validation_failed'
+  | 'unauthorized'
+  | 'forbidden'
+  | 'not_found'
+  | 'conflict'
+  | 'unprocessable'
+  | 'payload_too_large'
+  | 'rate_limited'
+  | 'internal';
+
+export type ErrorBody = {
+  error: { code: ErrorCode; message: string; fields?: Record<string, string[]> };
+};
+
+export class HttpError extends Error {
+  constructor(
+    readonly status: number,
+    readonly code: ErrorCode,
+    message: string,
+    readonly fields?: Record<string, string[]>,
+    readonly extra?: Record<string, unknown>,
+  ) {
+    super(message);
+    this.name = 'HttpError';
+  }
+
+  toBody(): ErrorBody & Record<string, unknown> {
+    const error = this.fields
+      ? { code: this.code, message: this.message, fields: this.fields }
+      : { code: this.code, message: this.message };
+    return { error, ...this.extra };
+  }
+}
+
+export const notFound = (what = 'That was not found.') => new HttpError(404, 'not_found', what);
+export const unauthorized = () =>
+  new HttpError(401, 'unauthorized', 'Please sign in to continue.');

@@ -1,0 +1,61 @@
+import pino from 'pino';
+import { openDatabase } from '../db/client';
+import { runMigrations } from '../db/migrate';
+import { DEMO_ACCOUNT, isDatabaseEmpty, seedDemo } from '../db/seed';
+import { createApp } from './app';
+import { loadEnv } from './env';
+import { createMemoryMailer } from './mail/mailer';
+
+/** Starts the server: migrate, seed demo data on a first start, listen, and close cleanly on signals. */
+export async function main(): Promise<void> {
+  const env = loadEnv();
+  const logger = pino({ level: env.LOG_LEVEL });
+  const db = openDatabase(env.DATABASE_PATH);
+  runMigrations(db);
+
+  const app = createApp({
+    db,
+    mailer: createMemoryMailer(),
+    now: () => new Date(),
+    logger,
+    config: {
+      authSecret: env.BETTER_AUTH_SECRET,
+      publicUrl: env.PUBLIC_URL,
+      devWebOrigin: env.DEV_WEB_ORIGIN,
+      webDir: env.WEB_DIR,
+    },
+  });
+
+  if (env.NODE_ENV !== 'production' && env.SEED_DEMO === 'auto' && isDatabaseEmpty(db)) {
+    await seedDemo(db, app.locals.auth, new Date());
+    console.log(`Demo data added. Sign in as ${DEMO_ACCOUNT.email} with password ${DEMO_ACCOUNT.password}`);
+  }
+
+  const server = app.listen(env.PORT, env.HOST, () => {
+    const address = server.address();
+    const port = typeof address === 'object' && address ? address.port : env.PORT;
+    console.log(`Trailtally is ready at http://localhost:${port}`);
+  });
+
+  let closing = false;
+  const shutdown = (signal: string) => {
+    if (closing) return;
+    closing = true;
+    console.log(`${signal} received, closing…`);
+    server.close(() => {
+      db.$client.close();
+      process.exit(0);
+    });
+    // Keep-alive connections can hold close() open; do not wait for them forever.
+    setTimeout(() => process.exit(0), 5000).unref();
+  };
+  process.on('SIGTERM', () => shutdown('SIGTERM'));
+  process.on('SIGINT', () => shutdown('SIGINT'));
+}
+
+if (require.main === module) {
+  main().catch((error: unknown) => {
+    console.error(error instanceof Error ? error.message : error);
+    process.exit(1);
+  });
+}

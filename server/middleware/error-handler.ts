@@ -1,0 +1,40 @@
+import type { NextFunction, Request, Response } from 'express';
+import { ZodError } from 'zod';
+import { HttpError } from '../errors';
+
+type BodyParserError = Error & { type?: string; status?: number };
+
+function fieldsOf(error: ZodError): Record<string, string[]> {
+  const fields: Record<string, string[]> = {};
+  for (const issue of error.issues) {
+    const key = issue.path.length > 0 ? issue.path.join('.') : '_';
+    (fields[key] ??= []).push(issue.message);
+  }
+  return fields;
+}
+
+/** Turns anything thrown into the stable error body; stack traces stay in the log. */
+export function toHttpError(err: unknown): HttpError {
+  if (err instanceof HttpError) return err;
+  if (err instanceof ZodError) {
+    return new HttpError(400, 'validation_failed', 'Some fields need attention.', fieldsOf(err));
+  }
+  const parserError = err as BodyParserError;
+  if (parserError?.type === 'entity.parse.failed') {
+    return new HttpError(400, 'bad_request', 'The request body is not valid JSON.');
+  }
+  if (parserError?.type === 'entity.too.large') {
+    return new HttpError(413, 'payload_too_large', 'The request body is too large.');
+  }
+  if (typeof parserError?.status === 'number' && parserError.status >= 400 && parserError.status < 500) {
+    return new HttpError(parserError.status, 'bad_request', 'The request could not be read.');
+  }
+  return new HttpError(500, 'internal', 'Something went wrong on our side. Please try again.');
+}
+
+export function errorHandler(err: unknown, req: Request, res: Response, _next: NextFunction) {
+  const httpError = toHttpError(err);
+  if (httpError.status >= 500) req.log?.error({ err }, 'request failed');
+  if (res.headersSent) return;
+  res.status(httpError.status).json(httpError.toBody());
+}

@@ -1,0 +1,32 @@
+import { fromNodeHeaders } from 'better-auth/node';
+import type { NextFunction, Request, Response } from 'express';
+import type { Auth } from '../auth';
+import { unauthorized } from '../errors';
+
+export type SessionUser = { id: string; email: string; name: string };
+
+declare global {
+  // eslint-disable-next-line @typescript-eslint/no-namespace
+  namespace Express {
+    interface Locals {
+      user?: SessionUser;
+    }
+  }
+}
+
+/** Lets a request through only with a valid session; the user is then in res.locals.user. */
+export function requireSession(auth: Auth) {
+  return async (req: Request, res: Response, next: NextFunction) => {
+    const found = await auth.api.getSession({ headers: fromNodeHeaders(req.headers) });
+    if (!found) throw unauthorized();
+    res.locals.user = { id: found.user.id, email: found.user.email, name: found.user.name };
+    next();
+  };
+}
+
+/** The signed-in user of a route behind requireSession. */
+export function currentUser(res: Response): SessionUser {
+  const user = res.locals.user;
+  if (!user) throw unauthorized();
+  return user;
+}

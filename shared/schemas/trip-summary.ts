@@ -1,0 +1,23 @@
+import { z } from 'zod';
+
+/** A calendar date, YYYY-MM-DD, that really exists (no 31 February). */
+export const isoDateSchema = z.iso.date({ error: 'Use a date like 2027-09-12.' });
+
+/** What the trips list shows of a trip; the API answers GET /api/trips with these. */
+export const tripSummarySchema = z.object({
+  id: z.string(),
+  name: z.string(),
+  startDate: isoDateSchema,
+  endDate: isoDateSchema,
+  timeZone: z.string(),
+  version: z.number().int(),
+  updatedAt: z.string(),
+});
+
+export type TripSummary = z.infer<typeof tripSummarySchema>;
+
+export const tripListResponseSchema = z.object({ trips: z.array(tripSummarySchema) });
+export type TripListResponse = z.infer<typeof tripListResponseSchema>;
+
+export const tripResponseSchema = z.object({ trip: tripSummarySchema });
+export type TripResponse = z.infer<typeof tripResponseSchema>;
