@@ -1,0 +1,36 @@
+import { Nunito_400Regular } from '@expo-google-fonts/nunito/400Regular';
+import { Nunito_600SemiBold } from '@expo-google-fonts/nunito/600SemiBold';
+import { Nunito_700Bold } from '@expo-google-fonts/nunito/700Bold';
+import { Nunito_800ExtraBold } from '@expo-google-fonts/nunito/800ExtraBold';
+import { QueryClientProvider } from '@tanstack/react-query';
+import { useFonts } from 'expo-font';
+import { Stack } from 'expo-router';
+import { useState } from 'react';
+import { LoadingScreen } from '@/components/layout/loading-screen';
+import { colors } from '@/components/theme/tokens';
+import { useSession } from '@/stores/auth-client';
+import { createQueryClient } from '@/stores/queries/query-client';
+
+export default function RootLayout() {
+  const [queryClient] = useState(createQueryClient);
+  const [fontsLoaded, fontError] = useFonts({ Nunito_400Regular, Nunito_600SemiBold, Nunito_700Bold, Nunito_800ExtraBold });
+  const session = useSession();
+
+  // Hold the first paint until the fonts and the session are known, so nobody sees a flash of
+  // the sign-in page while already signed in. A font failure still lets the app run.
+  if ((!fontsLoaded && !fontError) || session.isPending) return <LoadingScreen />;
+
+  const signedIn = !!session.data;
+  return (
+    <QueryClientProvider client={queryClient}>
+      <Stack screenOptions={{ headerShown: false, contentStyle: { backgroundColor: colors.dune } }}>
+        <Stack.Protected guard={signedIn}>
+          <Stack.Screen name="(app)" />
+        </Stack.Protected>
+        <Stack.Protected guard={!signedIn}>
+          <Stack.Screen name="(auth)" />
+        </Stack.Protected>
+      </Stack>
+    </QueryClientProvider>
+  );
+}

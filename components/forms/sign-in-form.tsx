@@ -1,0 +1,61 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { Controller, useForm } from 'react-hook-form';
+import { StyleSheet, View } from 'react-native';
+import { signInSchema, type SignInInput } from '@/shared/schemas/account';
+import { space } from '@/components/theme/tokens';
+import { Banner } from '@/components/ui/banner';
+import { Button } from '@/components/ui/button';
+import { TextField } from '@/components/ui/text-field';
+
+type Props = { onSubmit: (values: SignInInput) => Promise<void>; formError?: string };
+
+export function SignInForm({ onSubmit, formError }: Props) {
+  const { control, handleSubmit, formState } = useForm<SignInInput>({
+    resolver: zodResolver(signInSchema),
+    defaultValues: { email: '', password: '' },
+  });
+  const submit = handleSubmit(onSubmit);
+  return (
+    <View style={styles.form}>
+      {formError ? <Banner testID="sign-in-error" message={formError} /> : null}
+      <Controller
+        control={control}
+        name="email"
+        render={({ field, fieldState }) => (
+          <TextField
+            testID="sign-in-email"
+            label="E-mail"
+            autoComplete="email"
+            inputMode="email"
+            autoCapitalize="none"
+            value={field.value}
+            onChangeText={field.onChange}
+            onBlur={field.onBlur}
+            error={fieldState.error?.message}
+            onSubmitEditing={submit}
+          />
+        )}
+      />
+      <Controller
+        control={control}
+        name="password"
+        render={({ field, fieldState }) => (
+          <TextField
+            testID="sign-in-password"
+            label="Password"
+            autoComplete="current-password"
+            secureTextEntry
+            value={field.value}
+            onChangeText={field.onChange}
+            onBlur={field.onBlur}
+            error={fieldState.error?.message}
+            onSubmitEditing={submit}
+          />
+        )}
+      />
+      <Button testID="sign-in-submit" label="Sign in" busy={formState.isSubmitting} onPress={submit} />
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({ form: { gap: space.lg } });

@@ -1,0 +1,76 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { Controller, useForm } from 'react-hook-form';
+import { StyleSheet, View } from 'react-native';
+import { PASSWORD_MIN_LENGTH, signUpSchema, type SignUpInput } from '@/shared/schemas/account';
+import { space } from '@/components/theme/tokens';
+import { Banner } from '@/components/ui/banner';
+import { Button } from '@/components/ui/button';
+import { TextField } from '@/components/ui/text-field';
+
+type Props = { onSubmit: (values: SignUpInput) => Promise<void>; formError?: string };
+
+export function SignUpForm({ onSubmit, formError }: Props) {
+  const { control, handleSubmit, formState } = useForm<SignUpInput>({
+    resolver: zodResolver(signUpSchema),
+    defaultValues: { name: '', email: '', password: '' },
+  });
+  const submit = handleSubmit(onSubmit);
+  return (
+    <View style={styles.form}>
+      {formError ? <Banner testID="sign-up-error" message={formError} /> : null}
+      <Controller
+        control={control}
+        name="name"
+        render={({ field, fieldState }) => (
+          <TextField
+            testID="sign-up-name"
+            label="Your name"
+            autoComplete="name"
+            value={field.value}
+            onChangeText={field.onChange}
+            onBlur={field.onBlur}
+            error={fieldState.error?.message}
+          />
+        )}
+      />
+      <Controller
+        control={control}
+        name="email"
+        render={({ field, fieldState }) => (
+          <TextField
+            testID="sign-up-email"
+            label="E-mail"
+            autoComplete="email"
+            inputMode="email"
+            autoCapitalize="none"
+            value={field.value}
+            onChangeText={field.onChange}
+            onBlur={field.onBlur}
+            error={fieldState.error?.message}
+          />
+        )}
+      />
+      <Controller
+        control={control}
+        name="password"
+        render={({ field, fieldState }) => (
+          <TextField
+            testID="sign-up-password"
+            label="Password"
+            hint={`At least ${PASSWORD_MIN_LENGTH} characters.`}
+            autoComplete="new-password"
+            secureTextEntry
+            value={field.value}
+            onChangeText={field.onChange}
+            onBlur={field.onBlur}
+            error={fieldState.error?.message}
+            onSubmitEditing={submit}
+          />
+        )}
+      />
+      <Button testID="sign-up-submit" label="Create account" busy={formState.isSubmitting} onPress={submit} />
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({ form: { gap: space.lg } });

@@ -1,0 +1,8 @@
+import { useWindowDimensions } from 'react-native';
+
+/** From this width the app shows a side navigation and panes side by side. */
+export const WIDE_MIN_WIDTH = 1024;
+
+export function useIsWide(): boolean {
+  return useWindowDimensions().width >= WIDE_MIN_WIDTH;
+}

@@ -1,0 +1,5 @@
+// Named freshness times for TanStack Query; never inline numbers.
+export const STALE = {
+  SECONDS: { THIRTY: 30_000 },
+  MINUTES: { ONE: 60_000, FIVE: 5 * 60_000 },
+} as const;
