@@ -2,7 +2,7 @@ import { and, asc, eq } from 'drizzle-orm';
 import type { DbExecutor } from '../client';
 import { trips } from '../schema/trips';
 import type { TripRow } from '../schema/trips';
-import type { TripSummary } from '../../shared/schemas/trip-summary';
+import type { TripSummary } from '@/shared/schemas/trip-summary';
 
 export function toTripSummary(row: TripRow): TripSummary {
   return {

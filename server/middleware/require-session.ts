@@ -8,6 +8,7 @@ export type SessionUser = { id: string; email: string; name: string };
 declare global {
   // eslint-disable-next-line @typescript-eslint/no-namespace
   namespace Express {
+    // eslint-disable-next-line @typescript-eslint/consistent-type-definitions -- declaration merging needs an interface
     interface Locals {
       user?: SessionUser;
     }

@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import { z } from 'zod';
-import { findTripForOwner, listTripsForOwner, toTripSummary } from '../../db/queries/trips';
-import type { TripListResponse, TripResponse } from '../../shared/schemas/trip-summary';
+import { findTripForOwner, listTripsForOwner, toTripSummary } from '@/db/queries/trips';
+import type { TripListResponse, TripResponse } from '@/shared/schemas/trip-summary';
 import type { AppDeps } from '../app';
 import { notFound } from '../errors';
 import { currentUser } from '../middleware/require-session';

@@ -1,0 +1,59 @@
+import { spawnSync } from 'node:child_process';
+import crypto from 'node:crypto';
+import fs from 'node:fs';
+import path from 'node:path';
+
+const ROOT = path.resolve(__dirname, '..');
+const OUT_DIR = path.join(ROOT, 'dist');
+const STAMP = path.join(OUT_DIR, '.source-fingerprint');
+// Everything that ends up in the web bundle. Server-only folders are left out on purpose.
+const SOURCES = ['app', 'components', 'stores', 'shared', 'assets', 'app.json', 'package-lock.json', 'tsconfig.json'];
+
+function listFiles(entry: string): string[] {
+  const full = path.join(ROOT, entry);
+  if (!fs.existsSync(full)) return [];
+  if (fs.statSync(full).isFile()) return [entry];
+  return fs
+    .readdirSync(full, { withFileTypes: true })
+    .flatMap((child) => listFiles(path.join(entry, child.name)))
+    .sort();
+}
+
+/** A hash of the bundle's sources' contents: mtimes change on every clone, contents do not. */
+export function sourceFingerprint(): string {
+  const hash = crypto.createHash('sha256');
+  for (const file of SOURCES.flatMap(listFiles)) {
+    hash.update(file);
+    hash.update(fs.readFileSync(path.join(ROOT, file)));
+  }
+  return hash.digest('hex');
+}
+
+export function ensureWebBuild({ force = false } = {}): void {
+  const fingerprint = sourceFingerprint();
+  const current = fs.existsSync(STAMP) ? fs.readFileSync(STAMP, 'utf8').trim() : '';
+  if (!force && current === fingerprint && fs.existsSync(path.join(OUT_DIR, 'index.html'))) {
+    console.log('Web app is up to date (dist/).');
+    return;
+  }
+  console.log(
+    current ? 'Web app sources changed: rebuilding dist/ …' : 'Building the web app into dist/ (first start; about a minute) …',
+  );
+  const result = spawnSync('npx', ['expo', 'export', '--platform', 'web', '--output-dir', 'dist'], {
+    cwd: ROOT,
+    stdio: 'inherit',
+    env: { ...process.env, CI: '1', EXPO_NO_TELEMETRY: '1' },
+  });
+  if (result.status !== 0) throw new Error('The web build failed; see the output above.');
+  fs.writeFileSync(STAMP, `${fingerprint}\n`);
+  console.log('Web app built.');
+}
+
+if (require.main === module) {
+  try {
+    ensureWebBuild({ force: process.argv.includes('--force') });
+  } catch (error) {
+    console.error(error instanceof Error ? error.message : error);
+    process.exit(1);
+  }
+}

@@ -1,0 +1,70 @@
+import { spawn, type ChildProcess } from 'node:child_process';
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import { chromium, type Browser, type Page } from 'playwright-core';
+
+export const SCREENSHOT_DIR = path.resolve(__dirname, '..', '..', 'test-results');
+
+export type RunningServer = { url: string; stop: () => Promise<void> };
+
+/** Starts the real server (built web app, fresh database with demo data) on a free port. */
+export async function startServer(): Promise<RunningServer> {
+  const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'trailtally-e2e-'));
+  const child: ChildProcess = spawn(path.resolve('node_modules/.bin/tsx'), ['server/index.ts'], {
+    env: { ...process.env, PORT: '0', HOST: '127.0.0.1', DATABASE_PATH: path.join(dir, 'e2e.db'), LOG_LEVEL: 'warn', NODE_ENV: 'development' },
+    stdio: ['ignore', 'pipe', 'pipe'],
+  });
+  let output = '';
+  const url = await new Promise<string>((resolve, reject) => {
+    const timer = setTimeout(() => reject(new Error(`server did not start:\n${output}`)), 60_000);
+    const onData = (chunk: Buffer) => {
+      output += chunk.toString();
+      const match = /ready at (http:\/\/localhost:\d+)/.exec(output);
+      if (match?.[1]) {
+        clearTimeout(timer);
+        resolve(match[1].replace('localhost', '127.0.0.1'));
+      }
+    };
+    child.stdout?.on('data', onData);
+    child.stderr?.on('data', onData);
+    child.on('exit', (code) => reject(new Error(`server exited with ${code}:\n${output}`)));
+  });
+  return {
+    url,
+    stop: () =>
+      new Promise<void>((resolve) => {
+        child.once('exit', () => {
+          fs.rmSync(dir, { recursive: true, force: true });
+          resolve();
+        });
+        child.kill('SIGTERM');
+      }),
+  };
+}
+
+export async function launchBrowser(): Promise<Browser> {
+  return chromium.launch({
+    executablePath: process.env.CHROME_PATH ?? '/usr/bin/chromium',
+    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+  });
+}
+
+export const VIEWPORTS = {
+  phone: { width: 360, height: 800 },
+  desktop: { width: 1440, height: 900 },
+} as const;
+
+export async function screenshot(page: Page, name: string): Promise<void> {
+  fs.mkdirSync(SCREENSHOT_DIR, { recursive: true });
+  await page.screenshot({ path: path.join(SCREENSHOT_DIR, `${name}.png`), fullPage: true });
+}
+
+/** Collects uncaught page errors so a test can assert that none happened. */
+export function trackPageErrors(page: Page): string[] {
+  const errors: string[] = [];
+  page.on('pageerror', (error) => errors.push(error.message));
+  return errors;
+}
+
+export const byTestId = (id: string) => `[data-testid="${id}"]`;

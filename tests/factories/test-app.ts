@@ -1,0 +1,57 @@
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import request from 'supertest';
+import { openDatabase, type Db } from '@/db/client';
+import { runMigrations } from '@/db/migrate';
+import { createApp, type TrailtallyApp } from '@/server/app';
+import { createMemoryMailer } from '@/server/mail/mailer';
+
+export type TestContext = {
+  app: TrailtallyApp;
+  db: Db;
+  mailer: ReturnType<typeof createMemoryMailer>;
+  close: () => void;
+};
+
+/** A real app on a fresh temporary SQLite file with the real migrations. */
+export function createTestApp(): TestContext {
+  const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'trailtally-test-'));
+  const db = openDatabase(path.join(dir, 'test.db'));
+  runMigrations(db);
+  const mailer = createMemoryMailer();
+  const app = createApp({
+    db,
+    mailer,
+    now: () => new Date('2026-11-20T10:00:00Z'),
+    config: {
+      authSecret: 'test-secret-that-is-long-enough-for-better-auth-0123456789',
+      publicUrl: 'http://localhost:8080',
+      authRateLimit: { windowMs: 60_000, limit: 1000 },
+    },
+  });
+  return {
+    app,
+    db,
+    mailer,
+    close: () => {
+      db.$client.close();
+      fs.rmSync(dir, { recursive: true, force: true });
+    },
+  };
+}
+
+let counter = 0;
+
+/** Signs up a new user through the real auth routes; the agent then carries the session cookie. */
+export async function signUpAgent(app: TrailtallyApp, name = 'Test Traveller') {
+  counter += 1;
+  const email = `traveller${counter}-${Date.now()}@example.test`;
+  const agent = request.agent(app);
+  const response = await agent
+    .post('/api/auth/sign-up/email')
+    .set('Origin', 'http://localhost:8080')
+    .send({ name, email, password: 'correct-horse-battery' });
+  if (response.status !== 200) throw new Error(`sign-up failed: ${response.status} ${response.text}`);
+  return { agent, email, userId: (response.body as { user: { id: string } }).user.id };
+}
