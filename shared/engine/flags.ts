@@ -1,0 +1,224 @@
+// Flags: where the budget breaks, why, how big, and concrete fixes as data the UI can apply as an edit.
+import type { Appliance } from '../schemas/appliance';
+import { CHEMISTRY } from './battery';
+import { ceilHalf, hhmm, kwh, localIso, localShort, utcIso, whereAt, whereText } from './describe';
+import { CONTINUOUS_SHARE } from './generator';
+import { chargerDcW } from './hookup';
+import { dcCurrentA } from './inverter';
+import { applianceStep, onShare } from './loads';
+import { prevDayType, type Prepared } from './prepare';
+import type { Fix, Flag } from './result-types';
+import type { LedgerColumns } from './walk';
+
+/** A portable generator assumed when the rig has none (common 2 kW class). */
+export const ASSUMED_GENERATOR_W = 2000;
+const NIGHT_HOURS = 14; // a pitch night, afternoon arrival to morning departure
+const HIGH_CURRENT_A = 150;
+
+export type FlagContext = { p: Prepared; l: LedgerColumns; capacityWh: number; reservePct: number };
+
+function chargeV(p: Prepared): number {
+  const b = p.input.rig.battery;
+  return b.nominalV * CHEMISTRY[b.chemistry].chargeVoltageRatio;
+}
+
+function generatorFix(ctx: FlagContext, stopIndex: number, deficitWh: number): Fix | null {
+  const { p } = ctx;
+  const stop = p.input.trip.stops[stopIndex];
+  const charger = p.input.rig.shoreCharger;
+  if (!stop?.generatorHours || !charger) return null;
+  const genW = (p.input.rig.generator?.ratedW ?? ASSUMED_GENERATOR_W) * CONTINUOUS_SHARE;
+  const rateW = chargerDcW(genW, charger.amps, chargeV(p), charger.efficiency);
+  const hours = ceilHalf(deficitWh / rateW);
+  const { startHour, endHour } = stop.generatorHours;
+  const what = p.input.rig.generator ? 'generator' : `a ${ASSUMED_GENERATOR_W} W portable generator`;
+  return {
+    kind: 'add-generator-hours',
+    text: `${hours} h of ${what} inside ${hhmm(startHour)}–${hhmm(endHour)} at stop ${stopIndex + 1}`,
+    params: { stopIndex, hours, startHour, endHour, assumedGenerator: !p.input.rig.generator },
+  };
+}
+
+function hookupFix(ctx: FlagContext, stopIndex: number, deficitWh: number): Fix | null {
+  const { p } = ctx;
+  const charger = p.input.rig.shoreCharger;
+  const stop = p.input.trip.stops[stopIndex];
+  if (!charger || !stop || stop.hookup) return null;
+  const h = p.input.options.assumedHookup;
+  const perNightWh = chargerDcW(h.amps * h.volts, charger.amps, chargeV(p), charger.efficiency) * NIGHT_HOURS;
+  const nights = Math.max(1, Math.ceil(deficitWh / perNightWh));
+  return {
+    kind: 'add-hookup-night',
+    text: `${nights === 1 ? 'a hookup night' : `${nights} hookup nights`} at stop ${stopIndex + 1} (${h.amps} A)`,
+    params: { stopIndex, nights, amps: h.amps, volts: h.volts },
+  };
+}
+
+function applianceWhAtStop(p: Prepared, a: Appliance, stopIndex: number): number {
+  let wh = 0;
+  for (let i = 0; i < p.n; i++) {
+    if (p.where[i] !== stopIndex) continue;
+    const step = { minuteOfDay: p.minuteOfDay[i] ?? 0, dayIndex: p.dayIndex[i] ?? 0, dayType: p.travelDay[i] ? 'travel' as const : 'camp' as const, durationMin: (p.stepH[i] ?? 1) * 60 };
+    wh += applianceStep(a, onShare(a, step, prevDayType(p, i), p.ambientC[i] ?? 15), p.stepH[i] ?? 1).electricWh;
+  }
+  return wh;
+}
+
+function moveLoadFix(ctx: FlagContext, stopIndex: number): Fix | null {
+  const { p } = ctx;
+  const drives = p.input.trip.drives.length;
+  if (drives === 0) return null;
+  let best: { a: Appliance; wh: number } | null = null;
+  for (const a of p.input.appliances) {
+    if (a.schedule.kind !== 'routine') continue;
+    const wh = applianceWhAtStop(p, a, stopIndex);
+    if (wh > 0 && (!best || wh > best.wh)) best = { a, wh };
+  }
+  if (!best) return null;
+  const driveIndex = Math.min(stopIndex, drives - 1);
+  return {
+    kind: 'move-appliance-to-drive',
+    text: `move the ${best.a.name.toLowerCase()} (${kwh(best.wh)} at this stop) to the drive`,
+    params: { applianceId: best.a.id, driveIndex, savesWh: Math.round(best.wh) },
+  };
+}
+
+function batteryFix(ctx: FlagContext, deficitWh: number): Fix {
+  const b = ctx.p.input.rig.battery;
+  const usableShare = 1 - ctx.reservePct / 100;
+  const extraAh = Math.ceil(deficitWh / usableShare / b.nominalV / 10) * 10;
+  return { kind: 'add-battery', text: `about ${extraAh} Ah more battery at ${b.nominalV} V`, params: { extraAh } };
+}
+
+function shortfallFlags(ctx: FlagContext): Flag[] {
+  const { p, l, capacityWh, reservePct } = ctx;
+  const flags: Flag[] = [];
+  let i = 0;
+  while (i < p.n) {
+    if ((l.socPct[i] ?? 100) >= reservePct - 1e-9 && (l.energyShortWh[i] ?? 0) === 0) { i++; continue; }
+    const start = i;
+    let low = i;
+    let shortWh = 0;
+    while (i < p.n && ((l.socPct[i] ?? 100) < reservePct - 1e-9 || (l.energyShortWh[i] ?? 0) > 0)) {
+      if ((l.socPct[i] ?? 100) < (l.socPct[low] ?? 100)) low = i;
+      shortWh += l.energyShortWh[i] ?? 0;
+      i++;
+    }
+    const deficitWh = ((reservePct - (l.socPct[low] ?? 0)) / 100) * capacityWh + shortWh;
+    const where = whereAt(p, low);
+    const stopIndex = where.kind === 'stop' ? where.stopIndex : where.driveIndex;
+    const fixes = [generatorFix(ctx, stopIndex, deficitWh), hookupFix(ctx, stopIndex, deficitWh), moveLoadFix(ctx, stopIndex), batteryFix(ctx, deficitWh)]
+      .filter((f): f is Fix => f !== null);
+    const kind = shortWh > 0 ? 'energy-short' : 'below-reserve';
+    const what = shortWh > 0 ? `runs the battery empty, ${kwh(shortWh)} short,` : `falls ${kwh(deficitWh)} below the ${reservePct} % reserve`;
+    flags.push({
+      id: `${kind}-${start}`, kind, severity: 'danger', atUtc: utcIso(p, low), atLocal: localIso(p, low), where,
+      cause: `${capitalise(whereText(p, where))} ${what} by ${localShort(p, low)} (lowest ${(l.socPct[low] ?? 0).toFixed(0)} %)`,
+      size: { value: Math.round(deficitWh), unit: 'Wh' }, fixes,
+    });
+  }
+  return flags;
+}
+
+function capitalise(s: string): string {
+  return s.charAt(0).toUpperCase() + s.slice(1);
+}
+
+function overloadFlags(ctx: FlagContext): Flag[] {
+  const { p } = ctx;
+  const inv = p.input.rig.inverter;
+  if (!inv) return [];
+  const surgeW = inv.surgeW ?? inv.ratedW * 2;
+  const seen = new Set<number>();
+  const flags: Flag[] = [];
+  for (let i = 0; i < p.n; i++) {
+    const running = p.acRunningW[i] ?? 0;
+    if ((p.hookupW[i] ?? 0) > 0 || seen.has(p.where[i] ?? 0)) continue;
+    const over = running > inv.ratedW || running + (p.acSurgeExtraW[i] ?? 0) > surgeW;
+    if (!over) continue;
+    seen.add(p.where[i] ?? 0);
+    const where = whereAt(p, i);
+    const names = overlappingAc(p, i);
+    const ratedW = Math.ceil(Math.max(running, (running + (p.acSurgeExtraW[i] ?? 0)) / 2) / 500) * 500;
+    flags.push({
+      id: `inverter-overload-${i}`, kind: 'inverter-overload', severity: 'warning', atUtc: utcIso(p, i), atLocal: localIso(p, i), where,
+      cause: `At ${whereText(p, where)} around ${localShort(p, i)} the AC loads scheduled together (${names.join(', ')}) can ask ${Math.round(running)} W of a ${inv.ratedW} W inverter`,
+      size: { value: Math.round(running), unit: 'W' },
+      fixes: [
+        { kind: 'stagger-appliances', text: `do not run ${names.join(' and ')} in the same minutes`, params: { applianceIds: overlappingAcIds(p, i) } },
+        { kind: 'larger-inverter', text: `an inverter of at least ${ratedW} W`, params: { ratedW } },
+      ],
+    });
+  }
+  return flags;
+}
+
+function runningAc(p: Prepared, i: number): Appliance[] {
+  const step = { minuteOfDay: p.minuteOfDay[i] ?? 0, dayIndex: p.dayIndex[i] ?? 0, dayType: p.travelDay[i] ? 'travel' as const : 'camp' as const, durationMin: (p.stepH[i] ?? 1) * 60 };
+  return p.input.appliances.filter((a) => a.circuit === 'ac' && onShare(a, step, prevDayType(p, i), p.ambientC[i] ?? 15) > 0);
+}
+function overlappingAc(p: Prepared, i: number): string[] {
+  return runningAc(p, i).map((a) => a.name.toLowerCase());
+}
+function overlappingAcIds(p: Prepared, i: number): string[] {
+  return runningAc(p, i).map((a) => a.id);
+}
+
+function coldFlags(ctx: FlagContext): Flag[] {
+  const { p, l } = ctx;
+  const seen = new Set<number>();
+  const flags: Flag[] = [];
+  for (let i = 0; i < p.n; i++) {
+    if (!l.coldBlocked[i] || seen.has(p.where[i] ?? 0)) continue;
+    seen.add(p.where[i] ?? 0);
+    let hours = 0;
+    for (let j = 0; j < p.n; j++) if (l.coldBlocked[j] && p.where[j] === p.where[i]) hours += p.stepH[j] ?? 1;
+    const where = whereAt(p, i);
+    flags.push({
+      id: `cold-charge-blocked-${i}`, kind: 'cold-charge-blocked', severity: 'warning', atUtc: utcIso(p, i), atLocal: localIso(p, i), where,
+      cause: `Below 0 °C at ${whereText(p, where)} the lithium battery must not charge; charging is held off for ${hours.toFixed(0)} h`,
+      size: { value: hours, unit: 'h' },
+      fixes: [{ kind: 'keep-battery-warm', text: 'keep the battery inside the heated space (or use a self-heating battery)', params: { heatedSpace: true } }],
+    });
+  }
+  return flags;
+}
+
+function propaneFlags(ctx: FlagContext): Flag[] {
+  const { p, l } = ctx;
+  let burned = 0;
+  let outAt = -1;
+  for (let i = 0; i < p.n; i++) {
+    burned += l.propaneBurnedKg[i] ?? 0;
+    if (outAt < 0 && (l.propaneLeftKg[i] ?? 0) <= 0 && (l.propaneBurnedKg[i] ?? 0) > 0) outAt = i;
+  }
+  if (outAt < 0) return [];
+  const startKg = p.input.rig.propaneTanks.reduce((s, t) => s + (t.propaneKg * t.fillPct) / 100, 0);
+  const extraKg = Math.ceil((burned - startKg) * 10) / 10;
+  const where = whereAt(p, outAt);
+  return [{
+    id: `propane-out-${outAt}`, kind: 'propane-out', severity: 'danger', atUtc: utcIso(p, outAt), atLocal: localIso(p, outAt), where,
+    cause: `Propane runs out at ${whereText(p, where)} by ${localShort(p, outAt)}; the plan burns ${burned.toFixed(1)} kg against ${startKg.toFixed(1)} kg aboard`,
+    size: { value: extraKg, unit: 'kg' },
+    fixes: [{ kind: 'add-propane', text: `${extraKg} kg more propane (a refill or another cylinder)`, params: { extraKg } }],
+  }];
+}
+
+function cablingFlags(ctx: FlagContext): Flag[] {
+  const { p } = ctx;
+  const inv = p.input.rig.inverter;
+  if (!inv) return [];
+  const amps = dcCurrentA(inv.ratedW / inv.efficiency, p.input.rig.battery.nominalV);
+  if (amps < HIGH_CURRENT_A) return [];
+  const where = whereAt(p, 0);
+  return [{
+    id: 'high-dc-current', kind: 'high-dc-current', severity: 'info', atUtc: utcIso(p, 0), atLocal: localIso(p, 0), where,
+    cause: `At full output the ${inv.ratedW} W inverter draws about ${Math.round(amps)} A from the ${p.input.rig.battery.nominalV} V bank`,
+    size: { value: Math.round(amps), unit: 'A' },
+    fixes: [{ kind: 'check-cabling', text: `size cables and fuse for ${Math.round(amps)} A by the applicable code and have a qualified installer check them`, params: { currentA: Math.round(amps), minFuseA: Math.ceil(amps * 1.25) } }],
+  }];
+}
+
+export function buildFlags(ctx: FlagContext): Flag[] {
+  return [...shortfallFlags(ctx), ...propaneFlags(ctx), ...coldFlags(ctx), ...overloadFlags(ctx), ...cablingFlags(ctx)];
+}

@@ -1,0 +1,24 @@
+// Public API of the budget engine. Pure: no I/O, no React, no Node built-ins.
+export { simulateTrip, simulateParsed } from './simulate';
+export { findHeadroom } from './headroom';
+export { APPLIANCE_LIBRARY, libraryItem, applianceFromLibrary, type LibraryItem, type LibraryBasis } from './appliance-library';
+export { DEMO_TRIPS, highlandLoop, desertSpringLoop } from './demo-trips';
+export type * from './result-types';
+export type { HeadroomResult, HeadroomLever } from './headroom';
+export { sunPosition, cooperDeclinationDeg, sunFromHourAngle, dayOfYearUtc } from './sun-position';
+export { spencerFactor, extraterrestrialW } from './extraterrestrial';
+export { haurwitzGhi, ineichenPerez, kastenYoungAirMass, pressureRatio } from './clear-sky';
+export { SKY_CLEARNESS, SKY_ORDER, shiftSky } from './sky-outlook';
+export { erbs, erbsDiffuseFraction } from './decomposition';
+export { cosIncidence, isotropicSkyDiffuse, groundReflected, hayDaviesSkyDiffuse, planeOfArray } from './transposition';
+export { resolveExposure, beamFactor, diffuseFactor, horizonAt, skyViewFromHorizon } from './site-exposure';
+export { noctCellTempC, effectiveNoctC, pvDcPowerW, FLUSH_EXTRA_C } from './pv-module';
+export { controllerOutputW, controllerLimitW, pwmFactor } from './charge-controller';
+export { CHEMISTRY, peukertRuntimeH, peukertFactor, acceptanceLimitShare, chargeBlockedByCold } from './battery';
+export { inverterDcDrawW, dcCurrentA, checkOverload } from './inverter';
+export { thermostatDuty, applianceStep } from './loads';
+export { ambientC } from './temperature-curve';
+export { hookupCapacityW, chargerDcW } from './hookup';
+export { vehicleChargeW } from './vehicle-charging';
+export { defaultFuelModel, generatorFuel, generatorEfficiency } from './generator';
+export * from './fuel';

@@ -1,0 +1,274 @@
+// Precomputation shared by every scenario of one trip: the time grid, where each hour is, local time, ambient
+// temperature, sun geometry and clear-sky irradiance (three samples per hour, Simpson's rule, so sunrise and
+// sunset inside an hour are weighed properly), and the appliance loads. Scenarios (sky band, headroom) reuse it.
+import type { EngineInput } from '../schemas/engine-input';
+import type { DayType } from '../schemas/common';
+import type { Stop } from '../schemas/trip';
+import { haurwitzGhi, ineichenPerez, kastenYoungAirMass, pressureRatio } from './clear-sky';
+import { extraterrestrialW } from './extraterrestrial';
+import { applianceStep, onShare } from './loads';
+import type { LocalStep } from './routines';
+import { windowsShare } from './routines';
+import { resolveExposure, type ResolvedExposure } from './site-exposure';
+import { dayOfYearUtc, sunPosition } from './sun-position';
+import { ambientC } from './temperature-curve';
+import {
+  buildGrid, buildSegments, fillOffsets, HOUR_MS, localDayNumber, localMinuteOfDay, type Segment,
+} from './time-grid';
+
+export const SAMPLES = 3; // start, middle, end of each step
+export const QUARTERS = 4; // generator sub-steps
+
+export type Prepared = {
+  input: EngineInput;
+  n: number;
+  startMs: Float64Array;
+  stepH: Float64Array;
+  offsetMin: Float64Array;
+  /** Stop index, or −(drive index + 1) on a drive. */
+  where: Int16Array;
+  /** Stop whose sky, zone and temperatures apply (the stop left, on a drive). */
+  stopOf: Int16Array;
+  onRoadShare: Float64Array;
+  dayIndex: Int32Array;
+  travelDay: Uint8Array;
+  /** 1 where trip day d has driving on it. */
+  travelByDay: Uint8Array;
+  minuteOfDay: Float64Array;
+  ambientC: Float64Array;
+  lat: Float64Array;
+  lon: Float64Array;
+  sunAltMid: Float64Array;
+  /** Per sample (n × SAMPLES): sun altitude, azimuth, clear-sky GHI. */
+  alt: Float64Array;
+  az: Float64Array;
+  ghiClear: Float64Array;
+  dniExtra: Float64Array;
+  exposures: ResolvedExposure[];
+  openExposure: ResolvedExposure;
+  hookupW: Float64Array;
+  /** Bit q set: quarter q of the step lies inside the stop's allowed generator hours (or routine). */
+  genAllowed: Uint8Array;
+  genRoutine: Uint8Array;
+  acWh: Float64Array;
+  dcWh: Float64Array;
+  heatWh: Float64Array;
+  acRunningW: Float64Array;
+  acSurgeExtraW: Float64Array;
+  acStandbyOn: Uint8Array;
+};
+
+function segmentAt(segs: readonly Segment[], ms: number, hint: number): number {
+  let i = Math.min(hint, segs.length - 1);
+  while (i < segs.length - 1 && ms >= (segs[i]?.endMs ?? 0)) i++;
+  return i;
+}
+
+function fillPlaces(p: Prepared, segs: readonly Segment[], stops: readonly Stop[]): void {
+  let seg = 0;
+  for (let i = 0; i < p.n; i++) {
+    const t = p.startMs[i] ?? 0;
+    const dt = p.stepH[i] ?? 1;
+    const mid = t + (dt * HOUR_MS) / 2;
+    seg = segmentAt(segs, mid, seg);
+    const s = segs[seg];
+    if (!s) continue;
+    if (s.kind === 'stop') {
+      const stop = stops[s.index];
+      p.where[i] = s.index;
+      p.stopOf[i] = s.index;
+      p.lat[i] = stop?.lat ?? 0;
+      p.lon[i] = stop?.lon ?? 0;
+      continue;
+    }
+    const from = stops[s.index];
+    const to = stops[s.index + 1];
+    const f = s.endMs > s.startMs ? (mid - s.startMs) / (s.endMs - s.startMs) : 0;
+    p.where[i] = -(s.index + 1);
+    p.stopOf[i] = s.index;
+    p.lat[i] = (from?.lat ?? 0) + f * ((to?.lat ?? 0) - (from?.lat ?? 0));
+    p.lon[i] = (from?.lon ?? 0) + f * ((to?.lon ?? 0) - (from?.lon ?? 0));
+    const road = Math.max(0, Math.min(t + dt * HOUR_MS, s.roadEndMs) - Math.max(t, s.startMs));
+    p.onRoadShare[i] = road / (dt * HOUR_MS);
+  }
+}
+
+function fillLocalTime(p: Prepared, stops: readonly Stop[]): void {
+  let a = 0;
+  while (a < p.n) {
+    const stop = p.stopOf[a] ?? 0;
+    let b = a + 1;
+    while (b < p.n && p.stopOf[b] === stop) b++;
+    fillOffsets(stops[stop]?.timeZone ?? 'UTC', p.startMs, a, b, p.offsetMin);
+    a = b;
+  }
+  const firstDay = localDayNumber(p.startMs[0] ?? 0, p.offsetMin[0] ?? 0);
+  const travelDays = new Set<number>();
+  for (let i = 0; i < p.n; i++) {
+    const t = p.startMs[i] ?? 0;
+    const off = p.offsetMin[i] ?? 0;
+    const day = localDayNumber(t, off) - firstDay;
+    p.dayIndex[i] = day;
+    p.minuteOfDay[i] = localMinuteOfDay(t, off);
+    if ((p.onRoadShare[i] ?? 0) > 0) travelDays.add(day);
+    const st = stops[p.stopOf[i] ?? 0];
+    const hourOfDay = ((p.minuteOfDay[i] ?? 0) + (p.stepH[i] ?? 1) * 30) / 60;
+    p.ambientC[i] = st ? ambientC(st.lowC, st.highC, hourOfDay) : 15;
+  }
+  for (let i = 0; i < p.n; i++) p.travelDay[i] = travelDays.has(p.dayIndex[i] ?? 0) ? 1 : 0;
+  p.travelByDay = new Uint8Array((p.dayIndex[p.n - 1] ?? 0) + 2);
+  for (const d of travelDays) if (d >= 0) p.travelByDay[d] = 1;
+}
+
+function clearSkyGhi(stop: Stop | undefined, altDeg: number, dniExtra: number): number {
+  const zen = 90 - altDeg;
+  if (altDeg <= 0) return 0;
+  if (stop?.linkeTurbidity === undefined) return haurwitzGhi(zen);
+  const am = kastenYoungAirMass(zen) * pressureRatio(stop.elevationM);
+  return ineichenPerez({ zenithDeg: zen, airMassAbsolute: am, linkeTurbidity: stop.linkeTurbidity, elevationM: stop.elevationM, dniExtra }).ghi;
+}
+
+function fillSun(p: Prepared, stops: readonly Stop[], solarConstant: number): void {
+  let prevEndMs = Number.NaN;
+  let prevLat = Number.NaN;
+  let prevLon = Number.NaN;
+  let prevAlt = 0;
+  let prevAz = 0;
+  for (let i = 0; i < p.n; i++) {
+    const t = p.startMs[i] ?? 0;
+    const dt = (p.stepH[i] ?? 1) * HOUR_MS;
+    const lat = p.lat[i] ?? 0;
+    const lon = p.lon[i] ?? 0;
+    const stop = stops[p.stopOf[i] ?? 0];
+    const dniExtra = extraterrestrialW(dayOfYearUtc(t), solarConstant);
+    p.dniExtra[i] = dniExtra;
+    const mid = sunPosition(t + dt / 2, lat, lon);
+    p.sunAltMid[i] = mid.altitudeDeg;
+    const k = i * SAMPLES;
+    // The sun moves under 8° in half an hour: well below the horizon at mid-step, the whole step is dark.
+    if (mid.altitudeDeg < -8) {
+      for (let s = 0; s < SAMPLES; s++) p.alt[k + s] = -90;
+      prevEndMs = Number.NaN;
+      continue;
+    }
+    const start = prevEndMs === t && prevLat === lat && prevLon === lon ? { altitudeDeg: prevAlt, azimuthDeg: prevAz } : sunPosition(t, lat, lon);
+    const end = sunPosition(t + dt, lat, lon);
+    const samples = [start, mid, end];
+    samples.forEach((sp, s) => {
+      p.alt[k + s] = sp.altitudeDeg;
+      p.az[k + s] = sp.azimuthDeg;
+      p.ghiClear[k + s] = clearSkyGhi(stop, sp.altitudeDeg, dniExtra);
+    });
+    prevEndMs = t + dt;
+    prevLat = lat;
+    prevLon = lon;
+    prevAlt = end.altitudeDeg;
+    prevAz = end.azimuthDeg;
+  }
+}
+
+function localStep(p: Prepared, i: number): LocalStep {
+  return {
+    minuteOfDay: p.minuteOfDay[i] ?? 0,
+    dayIndex: p.dayIndex[i] ?? 0,
+    dayType: p.travelDay[i] ? 'travel' : 'camp',
+    durationMin: (p.stepH[i] ?? 1) * 60,
+  };
+}
+
+export function prevDayType(p: Prepared, i: number): DayType {
+  return p.travelByDay[(p.dayIndex[i] ?? 0) - 1] ? 'travel' : 'camp';
+}
+
+function fillLoads(p: Prepared): void {
+  const appliances = p.input.appliances;
+  for (let i = 0; i < p.n; i++) {
+    const step = localStep(p, i);
+    const prev = prevDayType(p, i);
+    const dtH = p.stepH[i] ?? 1;
+    const amb = p.ambientC[i] ?? 15;
+    let ac = 0, dc = 0, heat = 0, running = 0, surge = 0, standby = 0;
+    for (const a of appliances) {
+      const share = onShare(a, step, prev, amb);
+      const e = applianceStep(a, share, dtH);
+      if (a.circuit === 'ac') {
+        ac += e.electricWh;
+        if (e.running) {
+          running += a.runningW * a.quantity;
+          surge = Math.max(surge, (a.surgeW ?? a.runningW) - a.runningW);
+        }
+        if (a.standbyW > 0) standby = 1;
+      } else {
+        dc += e.electricWh;
+        heat += e.heatWh;
+      }
+    }
+    p.acWh[i] = ac;
+    p.dcWh[i] = dc;
+    p.heatWh[i] = heat;
+    p.acRunningW[i] = running;
+    p.acSurgeExtraW[i] = surge;
+    p.acStandbyOn[i] = standby;
+  }
+}
+
+function inHourWindow(hourOfDay: number, startHour: number, endHour: number): boolean {
+  if (startHour === endHour) return false;
+  return startHour < endHour ? hourOfDay >= startHour && hourOfDay < endHour : hourOfDay >= startHour || hourOfDay < endHour;
+}
+
+function fillGenerator(p: Prepared, stops: readonly Stop[]): void {
+  const gen = p.input.rig.generator;
+  for (let i = 0; i < p.n; i++) {
+    const where = p.where[i] ?? 0;
+    const stop = where >= 0 ? stops[where] : undefined;
+    const hours = stop?.generatorHours ?? null;
+    const dtMin = (p.stepH[i] ?? 1) * 60;
+    const step = localStep(p, i);
+    const prev = prevDayType(p, i);
+    let allowed = 0;
+    let routine = 0;
+    for (let q = 0; q < QUARTERS; q++) {
+      const qMin = (p.minuteOfDay[i] ?? 0) + ((q + 0.5) * dtMin) / QUARTERS;
+      const hourOfDay = (qMin / 60) % 24;
+      if (hours && inHourWindow(hourOfDay, hours.startHour, hours.endHour)) allowed |= 1 << q;
+      if (gen?.mode.kind === 'routine' && stop) {
+        const qStep: LocalStep = { ...step, minuteOfDay: (step.minuteOfDay + (q * dtMin) / QUARTERS) % 1440, durationMin: dtMin / QUARTERS };
+        if (windowsShare(gen.mode.windows, qStep, prev) >= 0.5) routine |= 1 << q;
+      }
+    }
+    p.genAllowed[i] = allowed;
+    p.genRoutine[i] = routine;
+  }
+}
+
+function allocate(input: EngineInput, n: number): Prepared {
+  const f = (): Float64Array => new Float64Array(n);
+  return {
+    input, n, startMs: f(), stepH: f(), offsetMin: f(), where: new Int16Array(n), stopOf: new Int16Array(n), onRoadShare: f(),
+    dayIndex: new Int32Array(n), travelDay: new Uint8Array(n), travelByDay: new Uint8Array(1), minuteOfDay: f(), ambientC: f(), lat: f(), lon: f(), sunAltMid: f(),
+    alt: new Float64Array(n * SAMPLES), az: new Float64Array(n * SAMPLES), ghiClear: new Float64Array(n * SAMPLES), dniExtra: f(),
+    exposures: [], openExposure: resolveExposure({ kind: 'preset', preset: 'open' }), hookupW: f(), genAllowed: new Uint8Array(n),
+    genRoutine: new Uint8Array(n), acWh: f(), dcWh: f(), heatWh: f(), acRunningW: f(), acSurgeExtraW: f(), acStandbyOn: new Uint8Array(n),
+  };
+}
+
+export function prepare(input: EngineInput): Prepared {
+  const grid = buildGrid(input.trip);
+  const p = allocate(input, grid.n);
+  p.startMs.set(grid.startMs);
+  p.stepH.set(grid.stepH);
+  const stops = input.trip.stops;
+  p.exposures = stops.map((s) => resolveExposure(s.exposure));
+  fillPlaces(p, buildSegments(input.trip), stops);
+  fillLocalTime(p, stops);
+  fillSun(p, stops, input.options.solarConstantWm2);
+  fillLoads(p);
+  fillGenerator(p, stops);
+  for (let i = 0; i < p.n; i++) {
+    const w = p.where[i] ?? -1;
+    const h = w >= 0 ? stops[w]?.hookup : null;
+    p.hookupW[i] = h ? h.amps * h.volts : 0;
+  }
+  return p;
+}

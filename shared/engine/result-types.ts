@@ -1,0 +1,113 @@
+// The shapes simulateTrip and findHeadroom return. Plain data (numbers, strings, arrays) so they serialise.
+import type { FuelKind } from '../schemas/rig';
+
+export type Where = { kind: 'stop'; stopIndex: number } | { kind: 'drive'; driveIndex: number };
+
+export type LedgerRow = {
+  index: number;
+  utc: string;
+  local: string;
+  where: Where;
+  stepH: number;
+  sunAltitudeDeg: number;
+  /** Plane-of-array irradiance of the first array (GHI if flat), W/m², step average, at the site. */
+  irradianceWm2: number;
+  ambientC: number;
+  solarAvailableWh: number;
+  solarUsedWh: number;
+  solarWastedWh: number;
+  acLoadWh: number;
+  dcLoadWh: number;
+  inverterLossWh: number;
+  chargerLossWh: number;
+  batteryLossWh: number;
+  hookupWh: number;
+  vehicleWh: number;
+  generatorWh: number;
+  generatorH: number;
+  /** Generator fuel in the generator's unit (kg propane, L petrol/diesel). */
+  generatorFuel: number;
+  propaneBurnedKg: number;
+  /** Into the battery terminals (+) or out of them (−), Wh. */
+  batteryFlowWh: number;
+  storedWh: number;
+  socPct: number;
+  energyShortWh: number;
+  propaneLeftKg: number;
+};
+
+export type FuelAmount = { fuel: FuelKind; amount: number; unit: 'kg' | 'L' };
+
+export type DaySheet = {
+  dayIndex: number;
+  /** Local date of the place at the day's first step, YYYY-MM-DD. */
+  date: string;
+  stopIndexes: number[];
+  travel: boolean;
+  harvestWh: number;
+  solarAvailableWh: number;
+  useWh: number;
+  /** Harvest minus use, Wh. */
+  netWh: number;
+  hookupWh: number;
+  vehicleWh: number;
+  generatorWh: number;
+  generatorHours: number;
+  generatorFuel: number;
+  propaneUsedKg: number;
+  lowestSocPct: number;
+  endSocPct: number;
+  energyShortWh: number;
+};
+
+export type Headline = {
+  capacityWh: number;
+  reservePct: number;
+  lowestSocPct: number;
+  lowestAtUtc: string;
+  lowestAtLocal: string;
+  lowestWhere: Where;
+  energyShortWh: number;
+  /** Usable battery (above reserve) over the average daily draw, with no charging at all. */
+  daysOfAutonomy: number;
+  /** Share of all energy sources that came from solar. */
+  solarFraction: number;
+  solarUsedWh: number;
+  solarWastedWh: number;
+  hookupWh: number;
+  vehicleWh: number;
+  generatorHours: number;
+  generatorFuel: FuelAmount | null;
+  propaneStartKg: number;
+  propaneLeftKg: number;
+};
+
+export type FixKind =
+  | 'add-generator-hours' | 'add-hookup-night' | 'move-appliance-to-drive' | 'add-battery' | 'add-solar'
+  | 'stagger-appliances' | 'larger-inverter' | 'add-propane' | 'keep-battery-warm' | 'check-cabling';
+
+export type Fix = { kind: FixKind; text: string; params: Record<string, number | string | boolean | string[]> };
+
+export type FlagKind = 'below-reserve' | 'energy-short' | 'inverter-overload' | 'cold-charge-blocked' | 'propane-out' | 'high-dc-current';
+
+export type Flag = {
+  id: string;
+  kind: FlagKind;
+  severity: 'danger' | 'warning' | 'info';
+  atUtc: string;
+  atLocal: string;
+  where: Where;
+  cause: string;
+  size: { value: number; unit: 'Wh' | 'W' | 'A' | 'kg' | 'h' };
+  fixes: Fix[];
+};
+
+export type BandRun = { skyShift: -1 | 1; socPct: number[]; lowestSocPct: number };
+
+export type SimulationResult = {
+  ledger: LedgerRow[];
+  days: DaySheet[];
+  headline: Headline;
+  flags: Flag[];
+  band: { better: BandRun; worse: BandRun } | null;
+};

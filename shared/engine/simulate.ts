@@ -1,0 +1,137 @@
+// simulateTrip: validate the input, precompute the trip once, walk the battery hour by hour under the planned
+// sky (full ledger) and, together, under one sky level better and one worse (state of charge only).
+import { engineInputSchema, type EngineInput, type EngineInputDraft } from '../schemas/engine-input';
+import { CHEMISTRY } from './battery';
+import { localIso, utcIso, whereAt } from './describe';
+import { buildFlags } from './flags';
+import { fuelUnit } from './fuel';
+import { prepare, type Prepared } from './prepare';
+import type { BandRun, DaySheet, Headline, LedgerRow, SimulationResult } from './result-types';
+import { solarSeries, type SolarSeries } from './solar';
+import { localLabel } from './time-grid';
+import { generatorPlanFor, newLedger, walk, type LedgerColumns, type Scenario, type WalkResult } from './walk';
+
+export function reservePctOf(input: EngineInput): number {
+  const b = input.rig.battery;
+  return b.reservePct ?? 100 - CHEMISTRY[b.chemistry].recommendedDodPct;
+}
+
+export function capacityWhOf(input: EngineInput): number {
+  return input.rig.battery.capacityAh * input.rig.battery.nominalV;
+}
+
+export function plannedScenario(p: Prepared, solar: SolarSeries): Scenario {
+  return { solarW: solar.availableW, solarScale: 1, capacityWh: capacityWhOf(p.input), hookupW: p.hookupW, generator: generatorPlanFor(p) };
+}
+
+function ledgerRows(p: Prepared, l: LedgerColumns, solar: SolarSeries): LedgerRow[] {
+  const rows: LedgerRow[] = new Array<LedgerRow>(p.n);
+  for (let i = 0; i < p.n; i++) {
+    rows[i] = {
+      index: i, utc: utcIso(p, i), local: localIso(p, i), where: whereAt(p, i), stepH: p.stepH[i] ?? 1,
+      sunAltitudeDeg: p.sunAltMid[i] ?? 0, irradianceWm2: solar.poaWm2[i] ?? 0, ambientC: p.ambientC[i] ?? 0,
+      solarAvailableWh: l.solarAvailableWh[i] ?? 0, solarUsedWh: l.solarUsedWh[i] ?? 0, solarWastedWh: l.solarWastedWh[i] ?? 0,
+      acLoadWh: l.acLoadWh[i] ?? 0, dcLoadWh: l.dcLoadWh[i] ?? 0, inverterLossWh: l.inverterLossWh[i] ?? 0,
+      chargerLossWh: l.chargerLossWh[i] ?? 0, batteryLossWh: l.batteryLossWh[i] ?? 0, hookupWh: l.hookupWh[i] ?? 0,
+      vehicleWh: l.vehicleWh[i] ?? 0, generatorWh: l.generatorWh[i] ?? 0, generatorH: l.generatorH[i] ?? 0,
+      generatorFuel: l.generatorFuel[i] ?? 0, propaneBurnedKg: l.propaneBurnedKg[i] ?? 0, batteryFlowWh: l.batteryFlowWh[i] ?? 0,
+      storedWh: l.storedWh[i] ?? 0, socPct: l.socPct[i] ?? 0, energyShortWh: l.energyShortWh[i] ?? 0, propaneLeftKg: l.propaneLeftKg[i] ?? 0,
+    };
+  }
+  return rows;
+}
+
+function emptyDay(p: Prepared, i: number): DaySheet {
+  return {
+    dayIndex: p.dayIndex[i] ?? 0, date: localLabel(p.startMs[i] ?? 0, p.offsetMin[i] ?? 0).slice(0, 10), stopIndexes: [], travel: p.travelDay[i] === 1,
+    harvestWh: 0, solarAvailableWh: 0, useWh: 0, netWh: 0, hookupWh: 0, vehicleWh: 0, generatorWh: 0, generatorHours: 0, generatorFuel: 0,
+    propaneUsedKg: 0, lowestSocPct: 100, endSocPct: 0, energyShortWh: 0,
+  };
+}
+
+function daySheets(p: Prepared, l: LedgerColumns): DaySheet[] {
+  const days: DaySheet[] = [];
+  let d: DaySheet | undefined;
+  for (let i = 0; i < p.n; i++) {
+    if (!d || d.dayIndex !== p.dayIndex[i]) {
+      d = emptyDay(p, i);
+      days.push(d);
+    }
+    const w = p.where[i] ?? -1;
+    if (w >= 0 && !d.stopIndexes.includes(w)) d.stopIndexes.push(w);
+    d.harvestWh += l.solarUsedWh[i] ?? 0;
+    d.solarAvailableWh += l.solarAvailableWh[i] ?? 0;
+    d.useWh += (l.acLoadWh[i] ?? 0) + (l.dcLoadWh[i] ?? 0);
+    d.hookupWh += l.hookupWh[i] ?? 0;
+    d.vehicleWh += l.vehicleWh[i] ?? 0;
+    d.generatorWh += l.generatorWh[i] ?? 0;
+    d.generatorHours += l.generatorH[i] ?? 0;
+    d.generatorFuel += l.generatorFuel[i] ?? 0;
+    d.propaneUsedKg += l.propaneBurnedKg[i] ?? 0;
+    d.lowestSocPct = Math.min(d.lowestSocPct, l.socPct[i] ?? 0);
+    d.endSocPct = l.socPct[i] ?? 0;
+    d.energyShortWh += l.energyShortWh[i] ?? 0;
+  }
+  for (const day of days) day.netWh = day.harvestWh - day.useWh;
+  return days;
+}
+
+function sum(a: Float64Array): number {
+  let s = 0;
+  for (const v of a) s += v;
+  return s;
+}
+
+function headline(p: Prepared, l: LedgerColumns, r: WalkResult): Headline {
+  const input = p.input;
+  const capacityWh = capacityWhOf(input);
+  const reservePct = reservePctOf(input);
+  const solarUsedWh = sum(l.solarUsedWh);
+  const hookupWh = sum(l.hookupWh);
+  const vehicleWh = sum(l.vehicleWh);
+  const generatorWh = sum(l.generatorWh);
+  const sources = solarUsedWh + hookupWh + vehicleWh + generatorWh;
+  const totalH = sum(p.stepH);
+  const drawWh = sum(l.acLoadWh) + sum(l.dcLoadWh) + sum(l.inverterLossWh);
+  const dailyDraw = totalH > 0 ? (drawWh / totalH) * 24 : 0;
+  const gen = input.rig.generator;
+  const propaneStartKg = input.rig.propaneTanks.reduce((s, t) => s + (t.propaneKg * t.fillPct) / 100, 0);
+  // A lowest at the very start (nothing ever drew the battery down) is reported at the first step.
+  const low = r.lowestIndex;
+  return {
+    capacityWh, reservePct, lowestSocPct: r.lowestSocPct, lowestAtUtc: utcIso(p, low), lowestAtLocal: localIso(p, low), lowestWhere: whereAt(p, low),
+    energyShortWh: r.energyShortWh,
+    daysOfAutonomy: dailyDraw > 0 ? (capacityWh * (1 - reservePct / 100)) / dailyDraw : Number.POSITIVE_INFINITY,
+    solarFraction: sources > 0 ? solarUsedWh / sources : 0,
+    solarUsedWh, solarWastedWh: sum(l.solarWastedWh), hookupWh, vehicleWh, generatorHours: r.generatorHours,
+    generatorFuel: gen ? { fuel: gen.fuel, amount: sum(l.generatorFuel), unit: fuelUnit(gen.fuel) } : null,
+    propaneStartKg, propaneLeftKg: l.propaneLeftKg[p.n - 1] ?? propaneStartKg,
+  };
+}
+
+function bandRun(p: Prepared, shift: -1 | 1): BandRun {
+  const r = walk(p, plannedScenario(p, solarSeries(p, shift)), null);
+  return { skyShift: shift, socPct: Array.from(r.socPct), lowestSocPct: r.lowestSocPct };
+}
+
+/** Simulate a validated input (no parsing); exposed for callers that already hold an EngineInput. */
+export function simulateParsed(input: EngineInput): SimulationResult {
+  const p = prepare(input);
+  const solar = solarSeries(p, 0);
+  const l = newLedger(p.n);
+  const r = walk(p, plannedScenario(p, solar), l);
+  const flags = buildFlags({ p, l, capacityWh: capacityWhOf(input), reservePct: reservePctOf(input) });
+  return {
+    ledger: ledgerRows(p, l, solar),
+    days: daySheets(p, l),
+    headline: headline(p, l, r),
+    flags,
+    band: input.options.skyBand ? { better: bandRun(p, -1), worse: bandRun(p, 1) } : null,
+  };
+}
+
+/** Validate and simulate. Invalid input throws a ZodError listing each bad field. */
+export function simulateTrip(input: EngineInputDraft): SimulationResult {
+  return simulateParsed(engineInputSchema.parse(input));
+}
+

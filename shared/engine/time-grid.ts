@@ -1,0 +1,102 @@
+// The trip's time grid: one-hour steps in UTC from the first arrival to the last departure, each placed at a
+// stop or on a drive, with its local time from the place's IANA zone (luxon). Offsets are looked up once per
+// day-long block and bisected only where a daylight-saving change falls, so the hot loops never call luxon and
+// no hour is dropped or doubled (the walk is in UTC; local time only labels the steps).
+import { IANAZone } from 'luxon';
+import type { Trip } from '../schemas/trip';
+
+export const HOUR_MS = 3_600_000;
+const DAY_MS = 86_400_000;
+
+export type Segment =
+  | { kind: 'stop'; index: number; startMs: number; endMs: number }
+  | { kind: 'drive'; index: number; startMs: number; endMs: number; roadEndMs: number };
+
+export function buildSegments(trip: Trip): Segment[] {
+  const segs: Segment[] = [];
+  trip.stops.forEach((stop, i) => {
+    const startMs = Date.parse(stop.arriveAt);
+    const endMs = Date.parse(stop.departAt);
+    segs.push({ kind: 'stop', index: i, startMs, endMs });
+    const next = trip.stops[i + 1];
+    const drive = trip.drives[i];
+    if (next && drive) {
+      const nextMs = Date.parse(next.arriveAt);
+      // Time on the road sits at the start of the gap; any rest is a roadside pause.
+      segs.push({ kind: 'drive', index: i, startMs: endMs, endMs: nextMs, roadEndMs: endMs + drive.hoursOnRoad * HOUR_MS });
+    }
+  });
+  return segs;
+}
+
+export type TimeGrid = {
+  n: number;
+  startMs: Float64Array;
+  stepH: Float64Array;
+};
+
+export function buildGrid(trip: Trip): TimeGrid {
+  const first = trip.stops[0];
+  const last = trip.stops[trip.stops.length - 1];
+  const t0 = first ? Date.parse(first.arriveAt) : 0;
+  const t1 = last ? Date.parse(last.departAt) : 0;
+  const n = Math.max(1, Math.ceil((t1 - t0) / HOUR_MS - 1e-9));
+  const startMs = new Float64Array(n);
+  const stepH = new Float64Array(n);
+  for (let i = 0; i < n; i++) {
+    startMs[i] = t0 + i * HOUR_MS;
+    stepH[i] = Math.min(1, (t1 - (t0 + i * HOUR_MS)) / HOUR_MS);
+  }
+  return { n, startMs, stepH };
+}
+
+/** Offsets in minutes for steps [from, to) that share one zone. */
+export function fillOffsets(zoneName: string, ms: Float64Array, from: number, to: number, out: Float64Array): void {
+  const zone = IANAZone.create(zoneName);
+  const at = (i: number): number => zone.offset(ms[i] ?? 0);
+  const fill = (a: number, b: number, oa: number, ob: number): void => {
+    if (oa === ob) {
+      for (let i = a; i <= b; i++) out[i] = oa;
+      return;
+    }
+    if (b - a <= 1) {
+      out[a] = oa;
+      out[b] = ob;
+      return;
+    }
+    const m = (a + b) >> 1;
+    const om = at(m);
+    fill(a, m, oa, om);
+    fill(m, b, om, ob);
+  };
+  const block = Math.max(1, Math.floor(DAY_MS / HOUR_MS) - 1); // a zone never changes twice inside a block
+  let a = from;
+  let oa = at(a);
+  while (a < to - 1) {
+    const b = Math.min(to - 1, a + block);
+    const ob = at(b);
+    fill(a, b, oa, ob);
+    a = b;
+    oa = ob;
+  }
+  if (from === to - 1) out[from] = oa;
+}
+
+/** A local wall-clock label such as 2027-09-12T14:00+01:00, built without Date's local getters. */
+export function localLabel(utcMs: number, offsetMin: number): string {
+  const wall = new Date(utcMs + offsetMin * 60_000).toISOString().slice(0, 16);
+  const sign = offsetMin < 0 ? '-' : '+';
+  const abs = Math.abs(offsetMin);
+  const hh = String(Math.floor(abs / 60)).padStart(2, '0');
+  const mm = String(abs % 60).padStart(2, '0');
+  return `${wall}${sign}${hh}:${mm}`;
+}
+
+export function localDayNumber(utcMs: number, offsetMin: number): number {
+  return Math.floor((utcMs + offsetMin * 60_000) / DAY_MS);
+}
+
+export function localMinuteOfDay(utcMs: number, offsetMin: number): number {
+  const local = utcMs + offsetMin * 60_000;
+  return (local - Math.floor(local / DAY_MS) * DAY_MS) / 60_000;
+}

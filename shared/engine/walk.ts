@@ -1,0 +1,221 @@
+// The battery walk: steps through the prepared hours in UTC, covering AC loads from hookup, generator or
+// inverter, DC loads from solar, vehicle, charger or battery, and books every watt-hour so the balance closes:
+//   solarUsed + vehicle + hookup + generator + short = acLoad + dcLoad + inverterLoss + chargerLoss + batteryLoss + Δstored
+// Rule-driven or routine generators step in quarter hours so a mid-hour start is caught.
+import type { FuelModel } from '../schemas/rig';
+import { acceptanceLimitShare, chargeBlockedByCold, CHEMISTRY, peukertFactor, type ChemistryPreset } from './battery';
+import { CONTINUOUS_SHARE, defaultFuelModel, generatorFuel } from './generator';
+import { chargerDcW } from './hookup';
+import { propaneKgFromHeatWh } from './fuel';
+import { QUARTERS, type Prepared } from './prepare';
+import { vehicleChargeW } from './vehicle-charging';
+
+export const LEDGER_COLUMNS = [
+  'solarAvailableWh', 'solarUsedWh', 'solarWastedWh', 'acLoadWh', 'dcLoadWh', 'inverterLossWh', 'chargerLossWh',
+  'batteryLossWh', 'hookupWh', 'vehicleWh', 'generatorWh', 'generatorH', 'generatorFuel', 'propaneBurnedKg',
+  'batteryFlowWh', 'storedWh', 'socPct', 'energyShortWh', 'propaneLeftKg', 'coldBlocked',
+] as const;
+export type LedgerColumn = (typeof LEDGER_COLUMNS)[number];
+export type LedgerColumns = Record<LedgerColumn, Float64Array>;
+
+export type GeneratorPlan =
+  | { kind: 'none' }
+  | { kind: 'rule'; startBelow: number; stopAbove: number; ratedW: number; model: FuelModel; propane: boolean; fuelKind: 'propane' | 'petrol' | 'diesel' }
+  | { kind: 'routine'; ratedW: number; model: FuelModel; propane: boolean; fuelKind: 'propane' | 'petrol' | 'diesel' };
+
+export type Scenario = {
+  solarW: Float64Array;
+  solarScale: number;
+  capacityWh: number;
+  hookupW: Float64Array;
+  generator: GeneratorPlan;
+};
+
+export type WalkResult = {
+  socPct: Float64Array;
+  lowestSocPct: number;
+  lowestIndex: number;
+  energyShortWh: number;
+  generatorHours: number;
+};
+
+export function generatorPlanFor(p: Prepared): GeneratorPlan {
+  const g = p.input.rig.generator;
+  if (!g || g.mode.kind === 'off') return { kind: 'none' };
+  const model = g.fuelModel ?? defaultFuelModel(g.ratedW);
+  const base = { ratedW: g.ratedW, model, propane: g.fuel === 'propane', fuelKind: g.fuel };
+  if (g.mode.kind === 'routine') return { kind: 'routine', ...base };
+  return { kind: 'rule', startBelow: g.mode.startBelowSocPct / 100, stopAbove: g.mode.stopAboveSocPct / 100, ...base };
+}
+
+export function newLedger(n: number): LedgerColumns {
+  const out = {} as Record<LedgerColumn, Float64Array>;
+  for (const c of LEDGER_COLUMNS) out[c] = new Float64Array(n);
+  return out;
+}
+
+/** Mutable per-step flows, reused across steps to keep the loop free of allocations. */
+type Flow = {
+  solarUsed: number; vehicle: number; hookup: number; generator: number; acLoad: number; dcLoad: number;
+  invLoss: number; chgLoss: number; batLoss: number; short: number; flow: number; fuel: number; cold: number;
+};
+
+function zeroFlow(f: Flow): void {
+  f.solarUsed = f.vehicle = f.hookup = f.generator = f.acLoad = f.dcLoad = 0;
+  f.invLoss = f.chgLoss = f.batLoss = f.short = f.flow = f.fuel = f.cold = 0;
+}
+
+type Ctx = {
+  p: Prepared; chem: ChemistryPreset; cap: number; chargeV: number; nominalV: number; capacityAh: number;
+  invEff: number; invIdle: number; invAlways: boolean; hasInverter: boolean;
+  chgAmps: number; chgEff: number; vehW: number; heated: boolean; gen: GeneratorPlan;
+};
+
+/** One step of dtH hours with the generator on or off; returns the new stored energy, books flows into f. */
+function step(c: Ctx, i: number, dtH: number, stored: number, genOn: boolean, solarW: number, hookW: number, f: Flow): number {
+  const stepH = c.p.stepH[i] ?? 1;
+  const acW = (c.p.acWh[i] ?? 0) / stepH;
+  const dcW = (c.p.dcWh[i] ?? 0) / stepH;
+  const genCap = genOn && c.gen.kind !== 'none' ? c.gen.ratedW * CONTINUOUS_SHARE : 0;
+  const hookAc = Math.min(acW, hookW);
+  const genAc = Math.min(acW - hookAc, genCap);
+  const invAc = acW - hookAc - genAc;
+  let unserved = 0;
+  let invDc = 0;
+  if (c.hasInverter) {
+    const on = invAc > 0 || c.invAlways || (c.p.acStandbyOn[i] ?? 0) > 0;
+    invDc = on ? invAc / c.invEff + c.invIdle : 0;
+  } else unserved = invAc;
+  const hookSpare = hookW - hookAc;
+  const genSpare = genCap - genAc;
+  const chgMax = c.chgAmps > 0 ? chargerDcW(hookSpare + genSpare, c.chgAmps, c.chargeV, c.chgEff) : 0;
+  const vehW = c.vehW * (c.p.onRoadShare[i] ?? 0);
+  let demand = dcW + invDc;
+  const solarToLoad = Math.min(solarW, demand); demand -= solarToLoad;
+  const vehToLoad = Math.min(vehW, demand); demand -= vehToLoad;
+  const chgToLoad = Math.min(chgMax, demand); demand -= chgToLoad;
+  let solarToBat = 0, vehToBat = 0, chgToBat = 0, batLoss = 0, short = unserved * dtH, flow = 0;
+  let next = stored;
+  if (demand > 0) {
+    const need = demand * dtH;
+    const removal = (need / c.chem.dischargeEfficiency) * peukertFactor(demand / c.nominalV, c.capacityAh, c.chem.peukertK);
+    if (removal <= stored) { next = stored - removal; batLoss = removal - need; flow = -need; }
+    else { const delivered = need * (stored / removal); short += need - delivered; batLoss = stored - delivered; flow = -delivered; next = 0; }
+  } else {
+    const soc = stored / c.cap;
+    const cold = chargeBlockedByCold(c.chem.lithium, c.heated, c.p.ambientC[i] ?? 20);
+    const limitIn = cold ? 0 : (acceptanceLimitShare(soc, dtH, c.chem) * c.cap) / c.chem.chargeEfficiency;
+    let room = limitIn;
+    solarToBat = Math.min((solarW - solarToLoad) * dtH, room); room -= solarToBat;
+    vehToBat = Math.min((vehW - vehToLoad) * dtH, room); room -= vehToBat;
+    chgToBat = Math.min((chgMax - chgToLoad) * dtH, room);
+    flow = solarToBat + vehToBat + chgToBat;
+    batLoss = flow * (1 - c.chem.chargeEfficiency);
+    next = Math.min(c.cap, stored + flow - batLoss);
+    if (cold && solarW + vehW + chgMax > solarToLoad + vehToLoad + chgToLoad) f.cold = 1;
+  }
+  const chgDc = chgToLoad * dtH + chgToBat;
+  const chgAc = chgDc / c.chgEff;
+  const chgFromHook = Math.min(chgAc, hookSpare * dtH);
+  const genOut = genAc * dtH + (chgAc - chgFromHook);
+  f.solarUsed += solarToLoad * dtH + solarToBat;
+  f.vehicle += vehToLoad * dtH + vehToBat;
+  f.hookup += hookAc * dtH + chgFromHook;
+  f.generator += genOut;
+  f.acLoad += acW * dtH;
+  f.dcLoad += dcW * dtH;
+  f.invLoss += invDc > 0 ? (invDc - invAc) * dtH : 0;
+  f.chgLoss += chgAc - chgDc;
+  f.batLoss += batLoss;
+  f.short += short;
+  f.flow += flow;
+  if (genOn && c.gen.kind !== 'none') f.fuel += generatorFuel(c.gen.model, c.gen.fuelKind, dtH, genOut);
+  return next;
+}
+
+function context(p: Prepared, s: Scenario): Ctx {
+  const rig = p.input.rig;
+  const chem = CHEMISTRY[rig.battery.chemistry];
+  return {
+    p, chem, cap: s.capacityWh, chargeV: rig.battery.nominalV * chem.chargeVoltageRatio, nominalV: rig.battery.nominalV,
+    capacityAh: s.capacityWh / rig.battery.nominalV, invEff: rig.inverter?.efficiency ?? 1, invIdle: rig.inverter?.idleW ?? 0,
+    invAlways: rig.inverter?.mode === 'always', hasInverter: rig.inverter !== null,
+    chgAmps: rig.shoreCharger?.amps ?? 0, chgEff: rig.shoreCharger?.efficiency ?? 1,
+    vehW: rig.vehicleCharger ? vehicleChargeW(rig.vehicleCharger.kind, rig.vehicleCharger.amps, rig.battery.nominalV * chem.chargeVoltageRatio) : 0,
+    heated: rig.battery.heatedSpace, gen: s.generator,
+  };
+}
+
+function writeLedger(l: LedgerColumns, i: number, f: Flow, solarAvailWh: number, genH: number, propaneKg: number, stored: number, cap: number, propaneLeft: number): void {
+  l.solarAvailableWh[i] = solarAvailWh;
+  l.solarUsedWh[i] = f.solarUsed;
+  l.solarWastedWh[i] = Math.max(0, solarAvailWh - f.solarUsed);
+  l.acLoadWh[i] = f.acLoad;
+  l.dcLoadWh[i] = f.dcLoad;
+  l.inverterLossWh[i] = f.invLoss;
+  l.chargerLossWh[i] = f.chgLoss;
+  l.batteryLossWh[i] = f.batLoss;
+  l.hookupWh[i] = f.hookup;
+  l.vehicleWh[i] = f.vehicle;
+  l.generatorWh[i] = f.generator;
+  l.generatorH[i] = genH;
+  l.generatorFuel[i] = f.fuel;
+  l.propaneBurnedKg[i] = propaneKg;
+  l.batteryFlowWh[i] = f.flow;
+  l.storedWh[i] = stored;
+  l.socPct[i] = (stored / cap) * 100;
+  l.energyShortWh[i] = f.short;
+  l.propaneLeftKg[i] = propaneLeft;
+  l.coldBlocked[i] = f.cold;
+}
+
+export function walk(p: Prepared, s: Scenario, ledger: LedgerColumns | null): WalkResult {
+  const c = context(p, s);
+  const rig = p.input.rig;
+  const f: Flow = { solarUsed: 0, vehicle: 0, hookup: 0, generator: 0, acLoad: 0, dcLoad: 0, invLoss: 0, chgLoss: 0, batLoss: 0, short: 0, flow: 0, fuel: 0, cold: 0 };
+  const socPct = new Float64Array(p.n);
+  let stored = (rig.battery.initialSocPct / 100) * c.cap;
+  let propane = rig.propaneTanks.reduce((sum, t) => sum + (t.propaneKg * t.fillPct) / 100, 0);
+  let lowest = stored / c.cap;
+  let lowestIndex = 0;
+  let shortWh = 0;
+  let genHours = 0;
+  let genRunning = false;
+  for (let i = 0; i < p.n; i++) {
+    zeroFlow(f);
+    const dtH = p.stepH[i] ?? 1;
+    const solarW = (s.solarW[i] ?? 0) * s.solarScale;
+    const hookW = s.hookupW[i] ?? 0;
+    const mask = c.gen.kind === 'rule' ? (p.genAllowed[i] ?? 0) : c.gen.kind === 'routine' ? (p.genRoutine[i] ?? 0) : 0;
+    let genH = 0;
+    if (mask === 0) {
+      genRunning = false;
+      stored = step(c, i, dtH, stored, false, solarW, hookW, f);
+    } else {
+      const q = dtH / QUARTERS;
+      for (let k = 0; k < QUARTERS; k++) {
+        const allowed = (mask & (1 << k)) !== 0;
+        genRunning = decideGenerator(c.gen, allowed, genRunning, stored / c.cap);
+        if (genRunning) genH += q;
+        stored = step(c, i, q, stored, genRunning, solarW, hookW, f);
+        if (stored / c.cap < lowest) { lowest = stored / c.cap; lowestIndex = i; }
+      }
+    }
+    if (stored / c.cap < lowest) { lowest = stored / c.cap; lowestIndex = i; }
+    const heatKg = propaneKgFromHeatWh(p.heatWh[i] ?? 0);
+    const genKg = c.gen.kind !== 'none' && c.gen.propane ? f.fuel : 0;
+    propane = Math.max(0, propane - heatKg - genKg);
+    socPct[i] = (stored / c.cap) * 100;
+    shortWh += f.short;
+    genHours += genH;
+    if (ledger) writeLedger(ledger, i, f, solarW * dtH, genH, heatKg + genKg, stored, c.cap, propane);
+  }
+  return { socPct, lowestSocPct: lowest * 100, lowestIndex, energyShortWh: shortWh, generatorHours: genHours };
+}
+
+function decideGenerator(gen: GeneratorPlan, allowed: boolean, running: boolean, soc: number): boolean {
+  if (!allowed) return false;
+  if (gen.kind === 'routine') return true;
+  if (gen.kind !== 'rule') return false;
+  return running ? soc < gen.stopAbove : soc < gen.startBelow;
+}

@@ -1,0 +1,42 @@
+// Appliance contract: a load with its watts and when it runs.
+import { z } from 'zod';
+import { fractionSchema, routineWindowSchema } from './common';
+
+export const circuitSchema = z.enum(['ac', 'dc', 'fuel']);
+export type Circuit = z.infer<typeof circuitSchema>;
+
+export const scheduleSchema = z.discriminatedUnion('kind', [
+  z.object({ kind: z.literal('always') }),
+  z.object({ kind: z.literal('routine'), windows: z.array(routineWindowSchema).min(1).max(24) }),
+  z.object({
+    kind: z.literal('thermostat'),
+    /** cooling runs above the set point, heating below it. */
+    mode: z.enum(['cooling', 'heating']),
+    setPointC: z.number().min(-10).max(40),
+    /** Degrees past the set point at which the unit runs flat out. */
+    fullDutyDeltaC: z.number().positive().max(40).default(12),
+    /** When given, the thermostat is only active inside these windows (e.g. while someone is aboard). */
+    activeWindows: z.array(routineWindowSchema).max(24).optional(),
+  }),
+]);
+export type Schedule = z.infer<typeof scheduleSchema>;
+
+export const applianceSchema = z
+  .object({
+    id: z.string().min(1).max(64),
+    name: z.string().min(1).max(80),
+    /** ac: through the inverter or hookup; dc: straight off the battery; fuel: burns propane, runningW is its fan/controls on DC. */
+    circuit: circuitSchema,
+    quantity: z.number().int().min(1).max(50).default(1),
+    runningW: z.number().min(0).max(10_000),
+    standbyW: z.number().min(0).max(500).default(0),
+    /** Share of the scheduled time the appliance actually draws running watts (a fridge compressor cycles). */
+    dutyCycle: fractionSchema.default(1),
+    surgeW: z.number().min(0).max(30_000).optional(),
+    /** fuel circuit only: propane heat input while running, W (HHV). */
+    heatInputW: z.number().min(0).max(40_000).default(0),
+    schedule: scheduleSchema,
+  })
+  .refine((a) => a.circuit === 'fuel' || a.heatInputW === 0, { message: 'Only fuel appliances have heatInputW', path: ['heatInputW'] });
+export type Appliance = z.infer<typeof applianceSchema>;
+export type ApplianceInput = z.input<typeof applianceSchema>;

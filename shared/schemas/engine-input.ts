@@ -1,0 +1,24 @@
+// The whole engine input: one trip on one rig with its appliances.
+import { z } from 'zod';
+import { applianceSchema } from './appliance';
+import { optionsSchema } from './options';
+import { rigSchema } from './rig';
+import { tripSchema } from './trip';
+
+export const engineInputSchema = z
+  .object({
+    trip: tripSchema,
+    rig: rigSchema,
+    appliances: z.array(applianceSchema).max(200).default([]),
+    options: optionsSchema.default(optionsSchema.parse({})),
+  })
+  .superRefine((input, ctx) => {
+    const seen = new Set<string>();
+    input.appliances.forEach((a, i) => {
+      if (seen.has(a.id)) ctx.addIssue({ code: 'custom', path: ['appliances', i, 'id'], message: `Duplicate appliance id ${a.id}` });
+      seen.add(a.id);
+    });
+  });
+export type EngineInput = z.infer<typeof engineInputSchema>;
+/** What callers may pass before defaults are filled in. */
+export type EngineInputDraft = z.input<typeof engineInputSchema>;

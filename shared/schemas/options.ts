@@ -1,0 +1,16 @@
+// Simulation options, all with defaults a user would expect.
+import { z } from 'zod';
+import { hookupSchema } from './trip';
+
+export const optionsSchema = z.object({
+  transposition: z.enum(['hay-davies', 'isotropic']).default('hay-davies'),
+  /** Ground reflectance; 0.2 is the common default for grass and gravel. */
+  groundReflectance: z.number().min(0).max(1).default(0.2),
+  /** W/m²; 1361 after Kopp & Lean (2011). */
+  solarConstantWm2: z.number().min(1300).max(1400).default(1361),
+  /** Run the same trip under one sky level better and one worse. */
+  skyBand: z.boolean().default(true),
+  /** Hookup the headroom finder assumes when it books a night at a stop that has none. */
+  assumedHookup: hookupSchema.default({ amps: 16, volts: 230 }),
+});
+export type Options = z.infer<typeof optionsSchema>;

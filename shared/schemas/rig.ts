@@ -1,0 +1,119 @@
+// Rig contract: the power system a trip runs on.
+import { z } from 'zod';
+import { fractionSchema, percentSchema, positiveSchema, routineWindowSchema } from './common';
+
+export const chemistrySchema = z.enum(['lifepo4', 'agm', 'flooded']);
+export type Chemistry = z.infer<typeof chemistrySchema>;
+
+export const batterySchema = z.object({
+  chemistry: chemistrySchema,
+  capacityAh: positiveSchema.max(10_000),
+  nominalV: z.number().min(6).max(60),
+  /** State of charge that must never be crossed; left out, it follows the chemistry's recommended depth of discharge. */
+  reservePct: percentSchema.optional(),
+  initialSocPct: percentSchema.default(100),
+  /** A battery inside the heated living space is not held to the ambient temperature for the cold-charge rule. */
+  heatedSpace: z.boolean().default(false),
+});
+export type Battery = z.infer<typeof batterySchema>;
+
+export const solarArraySchema = z
+  .object({
+    name: z.string().min(1).max(80).default('Roof array'),
+    ratedW: positiveSchema.max(20_000),
+    mounting: z.enum(['flat', 'tilted']).default('flat'),
+    tiltDeg: z.number().min(0).max(90).default(0),
+    /** Direction the panel faces, degrees clockwise from north (180 = south). */
+    azimuthDeg: z.number().min(0).max(360).default(180),
+    /** Flush roof panels have little air behind them and run hotter than racked ones. */
+    fit: z.enum(['flush', 'racked']).default('flush'),
+    noctC: z.number().min(30).max(70).default(45),
+    gammaPctPerC: z.number().min(-1).max(0).default(-0.4),
+    /** Maximum-power voltage; matters for PWM controllers, which hold the panel at battery voltage. */
+    vmpV: z.number().positive().max(200).default(18),
+    derate: fractionSchema.default(0.86),
+  })
+  .refine((a) => a.mounting === 'tilted' || a.tiltDeg === 0, { message: 'A flat array has tiltDeg 0', path: ['tiltDeg'] });
+export type SolarArray = z.infer<typeof solarArraySchema>;
+
+export const controllerSchema = z.object({
+  kind: z.enum(['mppt', 'pwm']).default('mppt'),
+  maxAmps: positiveSchema.max(500),
+  efficiency: z.number().min(0.5).max(1).default(0.97),
+});
+export type Controller = z.infer<typeof controllerSchema>;
+
+export const inverterSchema = z.object({
+  ratedW: positiveSchema.max(20_000),
+  surgeW: positiveSchema.max(60_000).optional(),
+  efficiency: z.number().min(0.5).max(1).default(0.9),
+  idleW: z.number().min(0).max(200).default(10),
+  /** on-demand: idle draw only in hours with AC load on the battery; always: on the whole trip. */
+  mode: z.enum(['on-demand', 'always']).default('on-demand'),
+});
+export type Inverter = z.infer<typeof inverterSchema>;
+
+export const shoreChargerSchema = z.object({
+  amps: positiveSchema.max(500),
+  efficiency: z.number().min(0.5).max(1).default(0.9),
+});
+export type ShoreCharger = z.infer<typeof shoreChargerSchema>;
+
+export const vehicleChargerSchema = z.object({
+  kind: z.enum(['dc-dc', 'alternator']).default('dc-dc'),
+  amps: positiveSchema.max(300),
+});
+export type VehicleCharger = z.infer<typeof vehicleChargerSchema>;
+
+export const fuelKindSchema = z.enum(['propane', 'petrol', 'diesel']);
+export type FuelKind = z.infer<typeof fuelKindSchema>;
+
+export const generatorModeSchema = z.discriminatedUnion('kind', [
+  z.object({ kind: z.literal('rule'), startBelowSocPct: percentSchema.default(40), stopAboveSocPct: percentSchema.default(90) }),
+  z.object({ kind: z.literal('routine'), windows: z.array(routineWindowSchema).min(1) }),
+  z.object({ kind: z.literal('off') }),
+]);
+export type GeneratorMode = z.infer<typeof generatorModeSchema>;
+
+/** Part-load fuel model, as fuel energy (higher heating value): idle + slope × electrical output. */
+export const fuelModelSchema = z.object({
+  idleFuelKwhPerH: z.number().min(0).max(50),
+  fuelKwhPerKwhOut: z.number().min(1).max(20),
+});
+export type FuelModel = z.infer<typeof fuelModelSchema>;
+
+export const generatorSchema = z
+  .object({
+    ratedW: positiveSchema.max(20_000),
+    fuel: fuelKindSchema.default('petrol'),
+    mode: generatorModeSchema.default({ kind: 'rule', startBelowSocPct: 40, stopAboveSocPct: 90 }),
+    fuelModel: fuelModelSchema.optional(),
+  })
+  .refine((g) => g.mode.kind !== 'rule' || g.mode.stopAboveSocPct > g.mode.startBelowSocPct, {
+    message: 'stopAboveSocPct must be above startBelowSocPct',
+    path: ['mode', 'stopAboveSocPct'],
+  });
+export type Generator = z.infer<typeof generatorSchema>;
+
+export const propaneTankSchema = z.object({
+  name: z.string().min(1).max(80).default('Cylinder'),
+  propaneKg: positiveSchema.max(500),
+  fillPct: percentSchema.default(100),
+});
+export type PropaneTank = z.infer<typeof propaneTankSchema>;
+
+export const rigSchema = z
+  .object({
+    name: z.string().min(1).max(120),
+    battery: batterySchema,
+    solarArrays: z.array(solarArraySchema).max(8).default([]),
+    controller: controllerSchema.nullable().default(null),
+    inverter: inverterSchema.nullable().default(null),
+    shoreCharger: shoreChargerSchema.nullable().default(null),
+    vehicleCharger: vehicleChargerSchema.nullable().default(null),
+    generator: generatorSchema.nullable().default(null),
+    propaneTanks: z.array(propaneTankSchema).max(8).default([]),
+  })
+  .refine((r) => r.solarArrays.length === 0 || r.controller !== null, { message: 'Solar arrays need a charge controller', path: ['controller'] });
+export type Rig = z.infer<typeof rigSchema>;
+export type RigInput = z.input<typeof rigSchema>;
