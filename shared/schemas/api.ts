@@ -1,0 +1,104 @@
+// The JSON contract between the API and the screens. Records are the engine's input schemas plus
+// the server-owned fields (id, version); requests reuse the same schemas so forms, API and engine agree.
+import { z } from 'zod';
+import { applianceFieldsSchema, applianceSchema, scheduleSchema } from './appliance';
+import { rigSchema } from './rig';
+import { roleSchema } from './roles';
+import { driveSchema, stopSchema } from './trip';
+import { isoDateSchema, tripSummarySchema } from './trip-summary';
+import { timeZoneSchema } from './common';
+
+/** Every update names the version it was based on; a stale one gets 409 with the current record. */
+export const versionSchema = z.number().int().min(1);
+const idSchema = z.string().min(1).max(64);
+
+// ---- records (responses) ----
+export const rigRecordSchema = z.object({ id: idSchema, version: versionSchema, rig: rigSchema });
+export type RigRecord = z.infer<typeof rigRecordSchema>;
+
+export const stopRecordSchema = z.object({ id: idSchema, version: versionSchema, notes: z.string(), stop: stopSchema });
+export type StopRecord = z.infer<typeof stopRecordSchema>;
+
+export const driveRecordSchema = z.object({ id: idSchema, version: versionSchema, drive: driveSchema });
+export type DriveRecord = z.infer<typeof driveRecordSchema>;
+
+export const applianceRecordSchema = z.object({
+  id: idSchema,
+  version: versionSchema,
+  /** The member who looks after this appliance's routine, if any. */
+  caretakerUserId: z.string().nullable(),
+  appliance: applianceSchema,
+});
+export type ApplianceRecord = z.infer<typeof applianceRecordSchema>;
+
+export const memberSchema = z.object({ userId: z.string(), name: z.string(), email: z.string(), role: roleSchema });
+export type Member = z.infer<typeof memberSchema>;
+
+export const tripDetailSchema = z.object({
+  trip: tripSummarySchema.extend({ notes: z.string(), ownerId: z.string(), role: roleSchema }),
+  rig: rigRecordSchema,
+  /** In route order; drives[i] goes from stops[i] to stops[i + 1]. */
+  stops: z.array(stopRecordSchema),
+  drives: z.array(driveRecordSchema),
+  appliances: z.array(applianceRecordSchema),
+});
+export type TripDetail = z.infer<typeof tripDetailSchema>;
+
+export const activityEntrySchema = z.object({
+  id: z.string(),
+  at: z.string(),
+  userId: z.string().nullable(),
+  userName: z.string().nullable(),
+  summary: z.string(),
+});
+export type ActivityEntry = z.infer<typeof activityEntrySchema>;
+
+// ---- requests ----
+const tripFieldsSchema = z.object({
+  name: z.string().trim().min(1, { error: 'Give the trip a name.' }).max(120),
+  startDate: isoDateSchema,
+  endDate: isoDateSchema,
+  timeZone: timeZoneSchema,
+  notes: z.string().max(4000).default(''),
+});
+
+export const createTripRequestSchema = tripFieldsSchema
+  .extend({
+    /** Start from one of My rigs (copied onto the trip) or from a preset rig. */
+    rigSource: z.discriminatedUnion('kind', [
+      z.object({ kind: z.literal('saved'), rigId: idSchema }),
+      z.object({ kind: z.literal('preset'), presetId: z.string().min(1).max(64) }),
+    ]),
+  })
+  .strict()
+  .refine((t) => t.endDate >= t.startDate, { message: 'The trip must end on or after its first day.', path: ['endDate'] });
+export type CreateTripRequest = z.input<typeof createTripRequestSchema>;
+
+export const updateTripRequestSchema = tripFieldsSchema
+  .partial()
+  .extend({ version: versionSchema })
+  .strict();
+export type UpdateTripRequest = z.input<typeof updateTripRequestSchema>;
+
+export const createRigRequestSchema = z.object({ rig: rigSchema }).strict();
+export const updateRigRequestSchema = z.object({ version: versionSchema, rig: rigSchema }).strict();
+export const replaceTripRigRequestSchema = z.object({ version: versionSchema, rigId: idSchema }).strict();
+export const saveTripRigRequestSchema = z.object({ name: z.string().trim().min(1).max(120) }).strict();
+
+export const createStopRequestSchema = z.object({ stop: stopSchema, notes: z.string().max(4000).default('') }).strict();
+export const updateStopRequestSchema = z
+  .object({ version: versionSchema, stop: stopSchema, notes: z.string().max(4000).default('') })
+  .strict();
+export const reorderStopsRequestSchema = z.object({ tripVersion: versionSchema, stopIds: z.array(idSchema).min(1).max(60) }).strict();
+
+export const updateDriveRequestSchema = z.object({ version: versionSchema, drive: driveSchema }).strict();
+
+export const createApplianceRequestSchema = z
+  .object({ appliance: applianceFieldsSchema, caretakerUserId: z.string().nullable().default(null) })
+  .strict();
+export const updateApplianceRequestSchema = z
+  .object({ version: versionSchema, appliance: applianceFieldsSchema, caretakerUserId: z.string().nullable().default(null) })
+  .strict();
+export const updateScheduleRequestSchema = z.object({ version: versionSchema, schedule: scheduleSchema }).strict();
+
+export const updateMemberRoleRequestSchema = z.object({ role: roleSchema }).strict();
