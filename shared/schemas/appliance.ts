@@ -21,9 +21,7 @@ export const scheduleSchema = z.discriminatedUnion('kind', [
 ]);
 export type Schedule = z.infer<typeof scheduleSchema>;
 
-export const applianceSchema = z
-  .object({
-    id: z.string().min(1).max(64),
+const applianceShape = {
     name: z.string().min(1).max(80),
     /** ac: through the inverter or hookup; dc: straight off the battery; fuel: burns propane, runningW is its fan/controls on DC. */
     circuit: circuitSchema,
@@ -36,7 +34,19 @@ export const applianceSchema = z
     /** fuel circuit only: propane heat input while running, W (HHV). */
     heatInputW: z.number().min(0).max(40_000).default(0),
     schedule: scheduleSchema,
-  })
-  .refine((a) => a.circuit === 'fuel' || a.heatInputW === 0, { message: 'Only fuel appliances have heatInputW', path: ['heatInputW'] });
+};
+
+const heatInputOnlyForFuel = {
+  check: (a: { circuit: string; heatInputW: number }) => a.circuit === 'fuel' || a.heatInputW === 0,
+  params: { message: 'Only fuel appliances have heatInputW', path: ['heatInputW'] },
+};
+
+/** An appliance's fields without its id (the server assigns ids; forms edit these). */
+export const applianceFieldsSchema = z.object(applianceShape).refine(heatInputOnlyForFuel.check, heatInputOnlyForFuel.params);
+export type ApplianceFields = z.infer<typeof applianceFieldsSchema>;
+
+export const applianceSchema = z
+  .object({ id: z.string().min(1).max(64), ...applianceShape })
+  .refine(heatInputOnlyForFuel.check, heatInputOnlyForFuel.params);
 export type Appliance = z.infer<typeof applianceSchema>;
 export type ApplianceInput = z.input<typeof applianceSchema>;
