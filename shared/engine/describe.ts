@@ -1,8 +1,9 @@
 // Words and labels for results: where a step is, and local times for cause texts.
-import { DateTime } from 'luxon';
 import type { Prepared } from './prepare';
 import type { Where } from './result-types';
-import { localLabel } from './time-grid';
+import { localDayNumber, localLabel } from './time-grid';
+
+const WEEKDAYS = ['Thu', 'Fri', 'Sat', 'Sun', 'Mon', 'Tue', 'Wed'] as const; // 1970-01-01 was a Thursday
 
 export function whereAt(p: Prepared, i: number): Where {
   const w = p.where[i] ?? 0;
@@ -27,9 +28,11 @@ export function localIso(p: Prepared, i: number): string {
 
 /** "Thu 21:00" at the end of step i, in the place's zone. */
 export function localShort(p: Prepared, i: number): string {
-  const stop = p.input.trip.stops[p.stopOf[i] ?? 0];
+  // The offset of step i applies to its end too, except across a clock change, where an hour's label slip is harmless.
   const ms = (p.startMs[i] ?? 0) + (p.stepH[i] ?? 1) * 3_600_000;
-  return DateTime.fromMillis(ms, { zone: stop?.timeZone ?? 'UTC' }).setLocale('en-GB').toFormat('ccc HH:mm');
+  const off = p.offsetMin[i] ?? 0;
+  const day = WEEKDAYS[((localDayNumber(ms, off) % 7) + 7) % 7] ?? '';
+  return `${day} ${localLabel(ms, off).slice(11, 16)}`;
 }
 
 export function hhmm(hour: number): string {

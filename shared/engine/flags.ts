@@ -5,7 +5,7 @@ import { ceilHalf, hhmm, kwh, localIso, localShort, utcIso, whereAt, whereText }
 import { CONTINUOUS_SHARE } from './generator';
 import { chargerDcW } from './hookup';
 import { dcCurrentA } from './inverter';
-import { applianceStep, onShare } from './loads';
+import { onShare } from './loads';
 import { prevDayType, type Prepared } from './prepare';
 import type { Fix, Flag } from './result-types';
 import type { LedgerColumns } from './walk';
@@ -54,14 +54,8 @@ function hookupFix(ctx: FlagContext, stopIndex: number, deficitWh: number): Fix 
   };
 }
 
-function applianceWhAtStop(p: Prepared, a: Appliance, stopIndex: number): number {
-  let wh = 0;
-  for (let i = 0; i < p.n; i++) {
-    if (p.where[i] !== stopIndex) continue;
-    const step = { minuteOfDay: p.minuteOfDay[i] ?? 0, dayIndex: p.dayIndex[i] ?? 0, dayType: p.travelDay[i] ? 'travel' as const : 'camp' as const, durationMin: (p.stepH[i] ?? 1) * 60 };
-    wh += applianceStep(a, onShare(a, step, prevDayType(p, i), p.ambientC[i] ?? 15), p.stepH[i] ?? 1).electricWh;
-  }
-  return wh;
+function applianceWhAtStop(p: Prepared, applianceIndex: number, stopIndex: number): number {
+  return p.applianceStopWh[applianceIndex * p.input.trip.stops.length + stopIndex] ?? 0;
 }
 
 function moveLoadFix(ctx: FlagContext, stopIndex: number): Fix | null {
@@ -69,9 +63,9 @@ function moveLoadFix(ctx: FlagContext, stopIndex: number): Fix | null {
   const drives = p.input.trip.drives.length;
   if (drives === 0) return null;
   let best: { a: Appliance; wh: number } | null = null;
-  for (const a of p.input.appliances) {
+  for (const [j, a] of p.input.appliances.entries()) {
     if (a.schedule.kind !== 'routine') continue;
-    const wh = applianceWhAtStop(p, a, stopIndex);
+    const wh = applianceWhAtStop(p, j, stopIndex);
     if (wh > 0 && (!best || wh > best.wh)) best = { a, wh };
   }
   if (!best) return null;

@@ -6,7 +6,8 @@ import type { DayType } from '../schemas/common';
 import type { Stop } from '../schemas/trip';
 import { haurwitzGhi, ineichenPerez, kastenYoungAirMass, pressureRatio } from './clear-sky';
 import { extraterrestrialW } from './extraterrestrial';
-import { applianceStep, onShare } from './loads';
+// Energy per step follows applianceStep in loads.ts, inlined here to keep the loop free of allocations.
+import { onShare } from './loads';
 import type { LocalStep } from './routines';
 import { windowsShare } from './routines';
 import { resolveExposure, type ResolvedExposure } from './site-exposure';
@@ -56,6 +57,8 @@ export type Prepared = {
   acRunningW: Float64Array;
   acSurgeExtraW: Float64Array;
   acStandbyOn: Uint8Array;
+  /** Electric Wh of appliance a at stop w: index a × stops + w (used to suggest which load to move). */
+  applianceStopWh: Float64Array;
 };
 
 function segmentAt(segs: readonly Segment[], ms: number, hint: number): number {
@@ -182,25 +185,32 @@ export function prevDayType(p: Prepared, i: number): DayType {
 
 function fillLoads(p: Prepared): void {
   const appliances = p.input.appliances;
+  const stopsCount = p.input.trip.stops.length;
+  p.applianceStopWh = new Float64Array(appliances.length * stopsCount);
   for (let i = 0; i < p.n; i++) {
+    const where = p.where[i] ?? -1;
     const step = localStep(p, i);
     const prev = prevDayType(p, i);
     const dtH = p.stepH[i] ?? 1;
     const amb = p.ambientC[i] ?? 15;
     let ac = 0, dc = 0, heat = 0, running = 0, surge = 0, standby = 0;
-    for (const a of appliances) {
+    for (let j = 0; j < appliances.length; j++) {
+      const a = appliances[j];
+      if (!a) continue;
       const share = onShare(a, step, prev, amb);
-      const e = applianceStep(a, share, dtH);
+      const runShare = share * a.dutyCycle;
+      const electricWh = a.quantity * (a.runningW * runShare + a.standbyW * (1 - runShare)) * dtH;
+      if (where >= 0) p.applianceStopWh[j * stopsCount + where] = (p.applianceStopWh[j * stopsCount + where] ?? 0) + electricWh;
       if (a.circuit === 'ac') {
-        ac += e.electricWh;
-        if (e.running) {
+        ac += electricWh;
+        if (share > 0) {
           running += a.runningW * a.quantity;
           surge = Math.max(surge, (a.surgeW ?? a.runningW) - a.runningW);
         }
         if (a.standbyW > 0) standby = 1;
       } else {
-        dc += e.electricWh;
-        heat += e.heatWh;
+        dc += electricWh;
+        heat += a.quantity * a.heatInputW * runShare * dtH;
       }
     }
     p.acWh[i] = ac;
@@ -249,7 +259,7 @@ function allocate(input: EngineInput, n: number): Prepared {
     dayIndex: new Int32Array(n), travelDay: new Uint8Array(n), travelByDay: new Uint8Array(1), minuteOfDay: f(), ambientC: f(), lat: f(), lon: f(), sunAltMid: f(),
     alt: new Float64Array(n * SAMPLES), az: new Float64Array(n * SAMPLES), ghiClear: new Float64Array(n * SAMPLES), dniExtra: f(),
     exposures: [], openExposure: resolveExposure({ kind: 'preset', preset: 'open' }), hookupW: f(), genAllowed: new Uint8Array(n),
-    genRoutine: new Uint8Array(n), acWh: f(), dcWh: f(), heatWh: f(), acRunningW: f(), acSurgeExtraW: f(), acStandbyOn: new Uint8Array(n),
+    genRoutine: new Uint8Array(n), acWh: f(), dcWh: f(), heatWh: f(), acRunningW: f(), acSurgeExtraW: f(), acStandbyOn: new Uint8Array(n), applianceStopWh: new Float64Array(0),
   };
 }
 

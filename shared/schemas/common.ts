@@ -15,9 +15,17 @@ export const isoInstantSchema = z
   .regex(ISO_INSTANT, { message: 'Use an ISO time with an offset or Z, e.g. 2027-09-12T14:00+01:00' })
   .refine((s) => Number.isFinite(Date.parse(s)), { message: 'Not a real date and time' });
 
-export const timeZoneSchema = z
-  .string()
-  .refine((zone) => IANAZone.isValidZone(zone), { message: 'Use an IANA time zone such as Europe/London' });
+// Checking a zone builds an Intl formatter, which is slow; remember the answers.
+const zoneValidity = new Map<string, boolean>();
+function isValidZone(zone: string): boolean {
+  const known = zoneValidity.get(zone);
+  if (known !== undefined) return known;
+  const valid = IANAZone.isValidZone(zone);
+  zoneValidity.set(zone, valid);
+  return valid;
+}
+
+export const timeZoneSchema = z.string().refine(isValidZone, { message: 'Use an IANA time zone such as Europe/London' });
 
 export const localHourSchema = z.number().int().min(0).max(24);
 

@@ -1,5 +1,4 @@
 // Trip contract: stops (where the rig stays) and drives (the moves between them).
-import { DateTime } from 'luxon';
 import { z } from 'zod';
 import { isoInstantSchema, localHourSchema, nonNegativeSchema, fractionSchema, timeZoneSchema } from './common';
 
@@ -88,7 +87,7 @@ export const tripSchema = z
     const first = trip.stops[0];
     const last = trip.stops[trip.stops.length - 1];
     if (first && last) {
-      const days = DateTime.fromISO(last.departAt).diff(DateTime.fromISO(first.arriveAt), 'days').days;
+      const days = (Date.parse(last.departAt) - Date.parse(first.arriveAt)) / 86_400_000;
       if (days > MAX_TRIP_DAYS) ctx.addIssue({ code: 'custom', path: ['stops'], message: `A trip may last at most ${MAX_TRIP_DAYS} days` });
     }
   });
