@@ -12,6 +12,12 @@ export const tripSummarySchema = z.object({
   timeZone: z.string(),
   version: z.number().int(),
   updatedAt: z.string(),
+  /** Filled in lists: the caller's role, the rig's name and the budget's headline. */
+  role: z.enum(['owner', 'planner', 'crew', 'viewer']).optional(),
+  rigName: z.string().nullable().optional(),
+  lowestSocPct: z.number().nullable().optional(),
+  reservePct: z.number().nullable().optional(),
+  flagCount: z.number().int().nullable().optional(),
 });
 
 export type TripSummary = z.infer<typeof tripSummarySchema>;
