@@ -10,6 +10,10 @@ import { LoadingScreen } from '@/components/layout/loading-screen';
 import { colors } from '@/components/theme/tokens';
 import { useSession } from '@/stores/auth-client';
 import { createQueryClient } from '@/stores/queries/query-client';
+import { hydrateUnits } from '@/stores/units-store';
+
+// Before the first render, so no screen shows metric figures for a moment to a US-units user.
+hydrateUnits();
 
 export default function RootLayout() {
   const [queryClient] = useState(createQueryClient);

@@ -29,6 +29,17 @@ export function sourceFingerprint(): string {
   return hash.digest('hex');
 }
 
+/**
+ * Skia on the web needs canvaskit.wasm beside the app. It comes from the installed canvaskit-wasm package
+ * (so it always matches Skia's JS) and is copied into public/ for the export; it is never committed.
+ */
+export function copyCanvasKit(): void {
+  const source = require.resolve('canvaskit-wasm/bin/full/canvaskit.wasm', { paths: [path.join(ROOT, 'node_modules/@shopify/react-native-skia')] });
+  const target = path.join(ROOT, 'public', 'canvaskit.wasm');
+  fs.mkdirSync(path.dirname(target), { recursive: true });
+  if (!fs.existsSync(target) || fs.statSync(target).size !== fs.statSync(source).size) fs.copyFileSync(source, target);
+}
+
 export function ensureWebBuild({ force = false } = {}): void {
   const fingerprint = sourceFingerprint();
   const current = fs.existsSync(STAMP) ? fs.readFileSync(STAMP, 'utf8').trim() : '';
@@ -39,6 +50,7 @@ export function ensureWebBuild({ force = false } = {}): void {
   console.log(
     current ? 'Web app sources changed: rebuilding dist/ …' : 'Building the web app into dist/ (first start; about a minute) …',
   );
+  copyCanvasKit();
   const result = spawnSync('npx', ['expo', 'export', '--platform', 'web', '--output-dir', 'dist'], {
     cwd: ROOT,
     stdio: 'inherit',

@@ -7,9 +7,12 @@ import { Text } from '@/components/ui/text';
 import { BrandMark } from './brand-mark';
 import { NAV_ITEMS } from './nav-items';
 import { ServerStatusBanner } from './server-status-banner';
+import { ToastHost } from './toast-host';
+import { useSyncUnitsFromServer } from '@/stores/queries/preferences';
 
 /** Signed-in frame: a side navigation on wide screens, bottom tabs on phones. */
 export function AppShell({ children }: { children: ReactNode }) {
+  useSyncUnitsFromServer();
   const wide = useIsWide();
   const pathname = usePathname();
   const links = NAV_ITEMS.map((item) => {
@@ -48,6 +51,7 @@ export function AppShell({ children }: { children: ReactNode }) {
           <ServerStatusBanner />
           {children}
         </View>
+        <ToastHost />
       </View>
     );
   }
@@ -60,6 +64,7 @@ export function AppShell({ children }: { children: ReactNode }) {
       <View style={styles.tabs} role="navigation" aria-label="Main">
         {links}
       </View>
+      <ToastHost />
     </View>
   );
 }

@@ -56,3 +56,10 @@ export async function apiFetch<T>(path: string, init: RequestInit & { json?: unk
   if (!response.ok) throw readError(response.status, body);
   return body as T;
 }
+
+/** A 409's body carries the record as it is now on the server, so the screen can offer a choice. */
+export function conflictCurrent<T>(error: unknown): T | null {
+  if (!(error instanceof ApiError) || error.status !== 409) return null;
+  const body = error.body as { current?: T } | undefined;
+  return body?.current ?? null;
+}

@@ -1,5 +1,6 @@
-import { useQuery } from '@tanstack/react-query';
-import type { TripListResponse, TripResponse } from '@/shared/schemas/trip-summary';
+import { useMutation, useQuery, useQueryClient, type QueryClient } from '@tanstack/react-query';
+import type { CreateTripRequest, TripDetail, UpdateTripRequest } from '@/shared/schemas/api';
+import type { TripListResponse } from '@/shared/schemas/trip-summary';
 import { apiFetch } from './api-client';
 import { STALE } from './stale';
 
@@ -7,7 +8,22 @@ export const tripKeys = {
   root: ['trips'] as const,
   list: () => [...tripKeys.root, 'list'] as const,
   detail: (tripId: string) => [...tripKeys.root, 'detail', tripId] as const,
+  budget: (tripId: string) => [...tripKeys.root, 'budget', tripId] as const,
+  activity: (tripId: string) => [...tripKeys.root, 'activity', tripId] as const,
+  members: (tripId: string) => [...tripKeys.root, 'members', tripId] as const,
 };
+
+const tripPath = (tripId: string) => `/api/trips/${encodeURIComponent(tripId)}`;
+
+/** Every mutation on a trip bumps its version: refresh its detail, budget, activity and the list's card. */
+export async function invalidateTrip(queryClient: QueryClient, tripId: string): Promise<void> {
+  await Promise.all([
+    queryClient.invalidateQueries({ queryKey: tripKeys.detail(tripId) }),
+    queryClient.invalidateQueries({ queryKey: tripKeys.budget(tripId) }),
+    queryClient.invalidateQueries({ queryKey: tripKeys.activity(tripId) }),
+    queryClient.invalidateQueries({ queryKey: tripKeys.list() }),
+  ]);
+}
 
 export function useTripsQuery() {
   return useQuery({
@@ -20,7 +36,45 @@ export function useTripsQuery() {
 export function useTripQuery(tripId: string) {
   return useQuery({
     queryKey: tripKeys.detail(tripId),
-    queryFn: () => apiFetch<TripResponse>(`/api/trips/${encodeURIComponent(tripId)}`),
+    queryFn: () => apiFetch<TripDetail>(tripPath(tripId)),
     staleTime: STALE.SECONDS.THIRTY,
+  });
+}
+
+export function useTripCreateMutation() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (body: CreateTripRequest) => apiFetch<TripDetail>('/api/trips', { method: 'POST', json: body }),
+    onSuccess: (detail) => {
+      queryClient.setQueryData(tripKeys.detail(detail.trip.id), detail);
+      return queryClient.invalidateQueries({ queryKey: tripKeys.list() });
+    },
+  });
+}
+
+export function useTripUpdateMutation(tripId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (body: UpdateTripRequest) => apiFetch<TripDetail>(tripPath(tripId), { method: 'PATCH', json: body }),
+    onSuccess: () => invalidateTrip(queryClient, tripId),
+  });
+}
+
+export function useTripDeleteMutation() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (tripId: string) => apiFetch<void>(tripPath(tripId), { method: 'DELETE' }),
+    onSuccess: (_data, tripId) => {
+      queryClient.removeQueries({ queryKey: tripKeys.detail(tripId) });
+      return queryClient.invalidateQueries({ queryKey: tripKeys.list() });
+    },
+  });
+}
+
+export function useTripDuplicateMutation() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (tripId: string) => apiFetch<TripDetail>(`${tripPath(tripId)}/duplicate`, { method: 'POST' }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: tripKeys.list() }),
   });
 }

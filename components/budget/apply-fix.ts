@@ -1,0 +1,89 @@
+// Turns an engine Fix into the edit that carries it out, or null when the fix is advice only
+// (staggering appliances, checking cables). Pure, so it is tested without a screen.
+import { ASSUMED_GENERATOR_W } from '@/shared/engine/flags';
+import type { DaySheet, Fix } from '@/shared/engine/result-types';
+import type { StopRecord, TripDetail } from '@/shared/schemas/api';
+import type { RoutineWindow } from '@/shared/schemas/common';
+import type { RigInput } from '@/shared/schemas/rig';
+
+export type FixEdit =
+  | { kind: 'rig'; rig: RigInput; summary: string }
+  | { kind: 'stop'; record: StopRecord; stop: StopRecord['stop']; summary: string };
+
+const num = (v: unknown): number | null => (typeof v === 'number' && Number.isFinite(v) ? v : null);
+
+/** Trip days spent (at least partly) at a stop, from the day sheets. */
+export function dayIndexesAtStop(days: DaySheet[], stopIndex: number): number[] {
+  return days.filter((d) => d.stopIndexes.includes(stopIndex)).map((d) => d.dayIndex);
+}
+
+function generatorEdit(detail: TripDetail, fix: Fix, days: DaySheet[]): FixEdit | null {
+  const stopIndex = num(fix.params.stopIndex);
+  const hours = num(fix.params.hours);
+  const startHour = num(fix.params.startHour) ?? 8;
+  if (stopIndex === null || hours === null) return null;
+  const dayIndexes = dayIndexesAtStop(days, stopIndex);
+  if (dayIndexes.length === 0) return null;
+  const window: RoutineWindow = {
+    days: { kind: 'trip-days', dayIndexes },
+    // Run in the evening part of the allowed hours, when the battery is lowest after sunset.
+    startHour: Math.max(startHour, Math.min(23, (num(fix.params.endHour) ?? 20) - Math.ceil(hours))),
+    startMinute: 0,
+    minutes: Math.max(1, Math.min(1440, Math.round(hours * 60))),
+  };
+  const rig = detail.rig.rig;
+  const current = rig.generator;
+  const windows = current?.mode.kind === 'routine' ? [...current.mode.windows, window] : [window];
+  return {
+    kind: 'rig',
+    rig: {
+      ...rig,
+      generator: current
+        ? { ...current, mode: { kind: 'routine', windows } }
+        : { ratedW: ASSUMED_GENERATOR_W, fuel: 'petrol', mode: { kind: 'routine', windows } },
+    },
+    summary: `Generator ${hours} h at ${detail.stops[stopIndex]?.stop.name ?? 'that stop'}`,
+  };
+}
+
+export function editForFix(detail: TripDetail, fix: Fix, days: DaySheet[]): FixEdit | null {
+  const rig = detail.rig.rig;
+  switch (fix.kind) {
+    case 'add-battery': {
+      const extraAh = num(fix.params.extraAh);
+      if (extraAh === null) return null;
+      return { kind: 'rig', rig: { ...rig, battery: { ...rig.battery, capacityAh: rig.battery.capacityAh + extraAh } }, summary: `Battery +${extraAh} Ah` };
+    }
+    case 'add-solar': {
+      const extraW = num(fix.params.extraW);
+      const first = rig.solarArrays[0];
+      if (extraW === null || !first) return null;
+      return { kind: 'rig', rig: { ...rig, solarArrays: [{ ...first, ratedW: first.ratedW + extraW }, ...rig.solarArrays.slice(1)] }, summary: `Solar +${extraW} W` };
+    }
+    case 'larger-inverter': {
+      const ratedW = num(fix.params.ratedW);
+      if (ratedW === null) return null;
+      const inverter = rig.inverter ?? { ratedW, efficiency: 0.9, idleW: 10, mode: 'on-demand' as const };
+      return { kind: 'rig', rig: { ...rig, inverter: { ...inverter, ratedW } }, summary: `Inverter ${ratedW} W` };
+    }
+    case 'add-propane': {
+      const extraKg = num(fix.params.extraKg);
+      if (extraKg === null) return null;
+      return { kind: 'rig', rig: { ...rig, propaneTanks: [...rig.propaneTanks, { name: 'Extra cylinder', propaneKg: extraKg, fillPct: 100 }] }, summary: `Propane +${extraKg} kg` };
+    }
+    case 'keep-battery-warm':
+      return { kind: 'rig', rig: { ...rig, battery: { ...rig.battery, heatedSpace: true } }, summary: 'Battery kept in the heated space' };
+    case 'add-hookup-night': {
+      const stopIndex = num(fix.params.stopIndex);
+      const amps = num(fix.params.amps);
+      const volts = num(fix.params.volts);
+      const record = stopIndex === null ? undefined : detail.stops[stopIndex];
+      if (!record || amps === null || volts === null) return null;
+      return { kind: 'stop', record, stop: { ...record.stop, hookup: { amps, volts } }, summary: `Hookup at ${record.stop.name}` };
+    }
+    case 'add-generator-hours':
+      return generatorEdit(detail, fix, days);
+    default:
+      return null;
+  }
+}

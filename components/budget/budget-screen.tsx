@@ -1,0 +1,91 @@
+import { StyleSheet, View } from 'react-native';
+import { Panes, TabScroll } from '@/components/trip/tab-scroll';
+import { useApplyEdit } from '@/components/trip/use-apply-edit';
+import { Banner } from '@/components/ui/banner';
+import { EmptyState } from '@/components/ui/empty-state';
+import { QueryError } from '@/components/ui/query-error';
+import { Skeleton } from '@/components/ui/skeleton';
+import { space } from '@/components/theme/tokens';
+import type { TripDetail } from '@/shared/schemas/api';
+import { can } from '@/shared/schemas/roles';
+import { useUnits } from '@/stores/units-store';
+import { clearWhatIf } from '@/stores/what-if-store';
+import { editForFix } from './apply-fix';
+import { DayBars } from './day-bars';
+import { EstimateCaution } from './estimate-caution';
+import { FlagList } from './flag-list';
+import { HeadlineFigures } from './headline-figures';
+import { SocChartCard } from './soc-chart-card';
+import { useBudgetView } from './use-budget-view';
+import { editsForWhatIf, WhatIfPanel } from './what-if-panel';
+
+export function BudgetScreen({ detail }: { detail: TripDetail }) {
+  const units = useUnits();
+  const view = useBudgetView(detail);
+  const { apply, busy } = useApplyEdit(detail.trip.id);
+  const canEdit = can(detail.trip.role, 'editTrip');
+
+  const whatIf = <WhatIfPanel detail={detail} canEdit={canEdit} busyKey={busy} onKeep={async (key) => {
+    if (await apply(`keep-${key}`, editsForWhatIf(detail, key), detail.rig.version)) clearWhatIf(detail.trip.id, key);
+  }} />;
+
+  if (view.state === 'loading') {
+    return (
+      <TabScroll testID="budget-screen-loading">
+        <Skeleton testID="budget-loading" height={120} />
+        <Skeleton height={300} />
+      </TabScroll>
+    );
+  }
+  if (view.state === 'error') {
+    return (
+      <TabScroll testID="budget-screen-error">
+        <QueryError testID="budget-error" error={view.error} onRetry={view.retry} />
+      </TabScroll>
+    );
+  }
+  if (view.state === 'empty') {
+    return (
+      <TabScroll testID="budget-screen">
+        <EmptyState testID="budget-empty" title="No budget yet" body={`${view.reason} Open the Route tab to add stops, then Loads for appliances.`} />
+        {whatIf}
+      </TabScroll>
+    );
+  }
+  const { result } = view;
+  return (
+    <TabScroll testID="budget-screen">
+      {view.whatIf ? <Banner testID="what-if-banner" tone="info" message="Showing a what-if: these figures are not saved. Keep the change below, or discard it." /> : null}
+      <HeadlineFigures headline={result.headline} units={units} />
+      <Panes
+        main={
+          <View style={styles.column}>
+            <SocChartCard result={result} stops={detail.stops} />
+            <DayBars days={result.days} />
+          </View>
+        }
+        side={
+          <View style={styles.column}>
+            <FlagList
+              flags={result.flags}
+              days={result.days}
+              detail={detail}
+              canEdit={canEdit && !view.whatIf}
+              readOnlyReason={!canEdit ? 'Only the trip owner or a planner can apply fixes.' : 'Fixes can be applied once the what-ifs are kept or discarded.'}
+              busyKey={busy}
+              onApply={(key, flag, i) => {
+                const fix = flag.fixes[i];
+                const edit = fix ? editForFix(detail, fix, result.days) : null;
+                if (edit) void apply(key, [edit], detail.rig.version);
+              }}
+            />
+            {whatIf}
+          </View>
+        }
+      />
+      <EstimateCaution />
+    </TabScroll>
+  );
+}
+
+const styles = StyleSheet.create({ column: { gap: space.xl } });

@@ -1,0 +1,63 @@
+import { StyleSheet, View } from 'react-native';
+import { energy, text } from '@/components/format/units';
+import { localDay } from '@/components/format/time';
+import { colors, radii, space } from '@/components/theme/tokens';
+import { Card } from '@/components/ui/card';
+import { Text } from '@/components/ui/text';
+import type { DaySheet } from '@/shared/engine/result-types';
+
+const BAR_HEIGHT = 120;
+
+/** Harvest against use per day, drawn with plain views so it shows before the chart library loads. */
+export function DayBars({ days }: { days: DaySheet[] }) {
+  const max = Math.max(1, ...days.flatMap((d) => [d.harvestWh + d.hookupWh + d.vehicleWh + d.generatorWh, d.useWh]));
+  return (
+    <Card testID="day-bars">
+      <Text variant="title" role="heading" aria-level={2}>
+        Each day: harvest and use
+      </Text>
+      <View style={styles.legend}>
+        <View style={[styles.key, { backgroundColor: colors.sunlit }]} />
+        <Text variant="caption">Solar</Text>
+        <View style={[styles.key, { backgroundColor: colors.lake }]} />
+        <Text variant="caption">Hookup, vehicle, generator</Text>
+        <View style={[styles.key, { backgroundColor: colors.mist }]} />
+        <Text variant="caption">Use</Text>
+      </View>
+      <View style={styles.row} role="list">
+        {days.map((d) => {
+          const other = d.hookupWh + d.vehicleWh + d.generatorWh;
+          const label = `${localDay(`${d.date}T12:00`)}: solar ${text(energy(d.harvestWh))}, other charging ${text(energy(other))}, use ${text(energy(d.useWh))}`;
+          return (
+            <View key={d.dayIndex} style={styles.day} role="listitem" accessible accessibilityLabel={label} testID={`day-bar-${d.dayIndex}`}>
+              <View style={styles.bars}>
+                <View style={styles.stack}>
+                  <View style={[styles.bar, { height: (other / max) * BAR_HEIGHT, backgroundColor: colors.lake }]} />
+                  <View style={[styles.bar, { height: (d.harvestWh / max) * BAR_HEIGHT, backgroundColor: colors.sunlit }]} />
+                </View>
+                <View style={[styles.bar, styles.use, { height: (d.useWh / max) * BAR_HEIGHT }]} />
+              </View>
+              <Text variant="caption" color={d.energyShortWh > 0 ? 'ember' : 'inkSoft'} numberOfLines={1}>
+                {d.date.slice(8)}
+              </Text>
+            </View>
+          );
+        })}
+      </View>
+      <Text variant="caption" color="inkSoft">
+        Bars show watt-hours per local day; a day number in orange had an energy shortfall.
+      </Text>
+    </Card>
+  );
+}
+
+const styles = StyleSheet.create({
+  legend: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.xs, columnGap: space.sm },
+  key: { width: 12, height: 12, borderRadius: 3 },
+  row: { flexDirection: 'row', alignItems: 'flex-end', gap: space.xs, justifyContent: 'space-between' },
+  day: { flex: 1, alignItems: 'center', gap: space.xs, minWidth: 0 },
+  bars: { height: BAR_HEIGHT, flexDirection: 'row', alignItems: 'flex-end', gap: 2 },
+  stack: { justifyContent: 'flex-end' },
+  bar: { width: 10, borderTopLeftRadius: radii.sm / 2, borderTopRightRadius: radii.sm / 2 },
+  use: { backgroundColor: colors.mist },
+});

@@ -1,0 +1,95 @@
+import { StyleSheet, View } from 'react-native';
+import { localMoment } from '@/components/format/time';
+import { colors, radii, space } from '@/components/theme/tokens';
+import { Button } from '@/components/ui/button';
+import { Card } from '@/components/ui/card';
+import { Caution } from '@/components/ui/cautions';
+import { Text } from '@/components/ui/text';
+import type { DaySheet, Flag } from '@/shared/engine/result-types';
+import type { TripDetail } from '@/shared/schemas/api';
+import { editForFix } from './apply-fix';
+
+const FLAG_TITLE: Record<Flag['kind'], string> = {
+  'below-reserve': 'Below the reserve',
+  'energy-short': 'Energy short',
+  'inverter-overload': 'Inverter overloaded',
+  'cold-charge-blocked': 'Too cold to charge',
+  'propane-out': 'Propane runs out',
+  'high-dc-current': 'High DC current',
+};
+
+type Props = {
+  flags: Flag[];
+  days: DaySheet[];
+  detail: TripDetail;
+  canEdit: boolean;
+  readOnlyReason?: string;
+  busyKey: string | null;
+  onApply: (key: string, flag: Flag, fixIndex: number) => void;
+};
+
+export function FlagList({ flags, days, detail, canEdit, readOnlyReason, busyKey, onApply }: Props) {
+  const where = (f: Flag) =>
+    f.where.kind === 'stop' ? (detail.stops[f.where.stopIndex]?.stop.name ?? `stop ${f.where.stopIndex + 1}`) : `drive ${f.where.driveIndex + 1}`;
+  const hasGeneratorFix = flags.some((f) => f.fixes.some((x) => x.kind === 'add-generator-hours'));
+  return (
+    <Card testID="flag-list">
+      <Text variant="title" role="heading" aria-level={2}>
+        Flags {flags.length > 0 ? `(${flags.length})` : ''}
+      </Text>
+      {flags.length === 0 ? (
+        <Text color="pine" testID="flags-none">
+          No flags: the plan stays above the reserve all trip.
+        </Text>
+      ) : null}
+      {flags.map((flag) => (
+        <View key={flag.id} style={[styles.flag, flag.severity === 'danger' ? styles.danger : flag.severity === 'warning' ? styles.warning : styles.info]} testID={`flag-${flag.id}`}>
+          <Text variant="label" color={flag.severity === 'danger' ? 'ember' : 'ink'}>
+            {FLAG_TITLE[flag.kind]} · {flag.size.value.toLocaleString('en-GB')} {flag.size.unit}
+          </Text>
+          <Text variant="caption" color="inkSoft">
+            {localMoment(flag.atLocal)} at {where(flag)}
+          </Text>
+          <Text>{flag.cause}</Text>
+          {flag.fixes.map((fix, i) => {
+            const edit = canEdit ? editForFix(detail, fix, days) : null;
+            const key = `${flag.id}-${i}`;
+            return (
+              <View key={key} style={styles.fix}>
+                <Text variant="caption" style={styles.fixText}>
+                  Fix: {fix.text}
+                </Text>
+                {edit ? (
+                  <Button
+                    testID={`fix-${flag.id}-${i}`}
+                    tone="secondary"
+                    label="Apply"
+                    accessibilityLabel={`Apply fix: ${fix.text}`}
+                    busy={busyKey === key}
+                    disabled={busyKey !== null}
+                    onPress={() => onApply(key, flag, i)}
+                  />
+                ) : null}
+              </View>
+            );
+          })}
+        </View>
+      ))}
+      {!canEdit && flags.length > 0 && readOnlyReason ? (
+        <Text variant="caption" color="inkSoft">
+          {readOnlyReason}
+        </Text>
+      ) : null}
+      {hasGeneratorFix ? <Caution kind="generator" testID="caution-generator-fix" /> : null}
+    </Card>
+  );
+}
+
+const styles = StyleSheet.create({
+  flag: { borderLeftWidth: 4, borderRadius: radii.sm, padding: space.md, gap: space.xs, backgroundColor: colors.dune },
+  danger: { borderLeftColor: colors.ember },
+  warning: { borderLeftColor: colors.sunlit },
+  info: { borderLeftColor: colors.lake },
+  fix: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.sm, justifyContent: 'space-between' },
+  fixText: { flex: 1, minWidth: 160 },
+});
