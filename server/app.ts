@@ -15,7 +15,10 @@ import type { Mailer } from './mail/mailer';
 import { errorHandler } from './middleware/error-handler';
 import { requireSession } from './middleware/require-session';
 import { healthRouter } from './routes/health';
+import { preferencesRouter } from './routes/preferences';
+import { rigPresetsRouter, rigsRouter } from './routes/rigs';
 import { tripsRouter } from './routes/trips';
+import { createBudgetService } from './budget-service';
 import { webStatic } from './web-static';
 import packageJson from '../package.json';
 
@@ -82,7 +85,12 @@ export function createApp(deps: AppDeps): TrailtallyApp {
 
   app.use(express.json({ limit: JSON_BODY_LIMIT }));
   app.use('/api/health', healthRouter({ db, version: packageJson.version }));
-  app.use('/api/trips', requireSession(auth), tripsRouter({ db }));
+  const budgets = createBudgetService(db);
+  const signedIn = requireSession(auth);
+  app.use('/api/trips', signedIn, tripsRouter({ db, now: deps.now, budgets }));
+  app.use('/api/rigs', signedIn, rigsRouter({ db, now: deps.now }));
+  app.use('/api/rig-presets', signedIn, rigPresetsRouter());
+  app.use('/api/me/preferences', signedIn, preferencesRouter({ db }));
   app.use('/api', (req, _res, next) => next(new HttpError(404, 'not_found', `No API route for ${req.method} ${req.baseUrl}${req.path}.`)));
 
   const web = config.webDir ? webStatic(config.webDir) : undefined;

@@ -38,3 +38,10 @@ export class HttpError extends Error {
 export const notFound = (what = 'That was not found.') => new HttpError(404, 'not_found', what);
 export const unauthorized = () =>
   new HttpError(401, 'unauthorized', 'Please sign in to continue.');
+
+/** A stale version: the client gets the record as it now stands, to show and choose from. */
+export const conflict = (current: unknown) =>
+  new HttpError(409, 'conflict', 'Changed by someone else since you opened it.', undefined, { current });
+
+export const unprocessable = (field: string, message: string) =>
+  new HttpError(422, 'unprocessable', message, { [field]: [message] });

@@ -1,7 +1,7 @@
 import pino from 'pino';
 import { openDatabase } from '../db/client';
 import { runMigrations } from '../db/migrate';
-import { DEMO_ACCOUNT, isDatabaseEmpty, seedDemo } from '../db/seed';
+import { demoSignInText, isDatabaseEmpty, seedDemo } from '../db/seed';
 import { createApp } from './app';
 import { loadEnv } from './env';
 import { createMemoryMailer } from './mail/mailer';
@@ -28,7 +28,7 @@ export async function main(): Promise<void> {
 
   if (env.NODE_ENV !== 'production' && env.SEED_DEMO === 'auto' && isDatabaseEmpty(db)) {
     await seedDemo(db, app.locals.auth, new Date());
-    console.log(`Demo data added. Sign in as ${DEMO_ACCOUNT.email} with password ${DEMO_ACCOUNT.password}`);
+    console.log(`Demo data added. ${demoSignInText()}`);
   }
 
   const server = app.listen(env.PORT, env.HOST, () => {

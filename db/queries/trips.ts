@@ -1,10 +1,20 @@
-import { and, asc, eq } from 'drizzle-orm';
-import type { DbExecutor } from '../client';
-import { trips } from '../schema/trips';
-import type { TripRow } from '../schema/trips';
+import { and, asc, desc, eq, sql } from 'drizzle-orm';
+import type { TripDetail } from '@/shared/schemas/api';
+import type { Role } from '@/shared/schemas/roles';
+import type { Rig } from '@/shared/schemas/rig';
 import type { TripSummary } from '@/shared/schemas/trip-summary';
+import type { DbExecutor } from '../client';
+import { activity } from '../schema/activity';
+import { appliances, routineWindows } from '../schema/appliances';
+import { user } from '../schema/auth';
+import { drives } from '../schema/drives';
+import { memberships } from '../schema/memberships';
+import { rigs } from '../schema/rigs';
+import { stops } from '../schema/stops';
+import { trips, type TripRow } from '../schema/trips';
+import { applianceRecord, driveRecord, rigRecord, rigToColumns, stopRecord } from './mappers';
 
-export function toTripSummary(row: TripRow): TripSummary {
+export function toTripSummary(row: TripRow, extra: Partial<TripSummary> = {}): TripSummary {
   return {
     id: row.id,
     name: row.name,
@@ -13,27 +23,105 @@ export function toTripSummary(row: TripRow): TripSummary {
     timeZone: row.timeZone,
     version: row.version,
     updatedAt: row.updatedAt.toISOString(),
+    ...extra,
   };
 }
 
-export function listTripsForOwner(db: DbExecutor, ownerId: string): TripRow[] {
-  return db.select().from(trips).where(eq(trips.ownerId, ownerId)).orderBy(asc(trips.startDate)).all();
+/** Trips the user belongs to, with their role, in date order. */
+export function listTripsForMember(db: DbExecutor, userId: string): { trip: TripRow; role: Role }[] {
+  return db
+    .select({ trip: trips, role: memberships.role })
+    .from(memberships)
+    .innerJoin(trips, eq(trips.id, memberships.tripId))
+    .where(eq(memberships.userId, userId))
+    .orderBy(asc(trips.startDate), asc(trips.name))
+    .all();
 }
 
-export function findTripForOwner(db: DbExecutor, ownerId: string, tripId: string): TripRow | undefined {
+export function findMembership(db: DbExecutor, tripId: string, userId: string): { role: Role } | undefined {
   return db
-    .select()
-    .from(trips)
-    .where(and(eq(trips.id, tripId), eq(trips.ownerId, ownerId)))
+    .select({ role: memberships.role })
+    .from(memberships)
+    .where(and(eq(memberships.tripId, tripId), eq(memberships.userId, userId)))
     .get();
 }
 
-export type NewTrip = { ownerId: string; name: string; startDate: string; endDate: string; timeZone: string };
+export function findTrip(db: DbExecutor, tripId: string): TripRow | undefined {
+  return db.select().from(trips).where(eq(trips.id, tripId)).get();
+}
 
+export function findTripRig(db: DbExecutor, tripId: string) {
+  return db.select().from(rigs).where(eq(rigs.tripId, tripId)).get();
+}
+
+/** Everything a trip's screens and its budget need, in route order. */
+export function loadTripDetail(db: DbExecutor, tripId: string, role: Role): TripDetail | undefined {
+  const trip = findTrip(db, tripId);
+  const rig = findTripRig(db, tripId);
+  if (!trip || !rig) return undefined;
+  const stopRows = db.select().from(stops).where(eq(stops.tripId, tripId)).orderBy(asc(stops.position)).all();
+  const driveRows = db.select().from(drives).where(eq(drives.tripId, tripId)).orderBy(asc(drives.position)).all();
+  const applianceRows = db.select().from(appliances).where(eq(appliances.tripId, tripId)).orderBy(asc(appliances.position)).all();
+  const windowRows = db
+    .select({ window: routineWindows })
+    .from(routineWindows)
+    .innerJoin(appliances, eq(appliances.id, routineWindows.applianceId))
+    .where(eq(appliances.tripId, tripId))
+    .all()
+    .map((row) => row.window);
+  return {
+    trip: { ...toTripSummary(trip), notes: trip.notes, ownerId: trip.ownerId, role },
+    rig: rigRecord(rig),
+    stops: stopRows.map(stopRecord),
+    drives: driveRows.map(driveRecord),
+    appliances: applianceRows.map((row) => applianceRecord(row, windowRows.filter((w) => w.applianceId === row.id))),
+  };
+}
+
+export type NewTrip = { ownerId: string; name: string; startDate: string; endDate: string; timeZone: string; notes?: string };
+
+/** Inserts the trip row and makes its creator the owner member. */
 export function insertTrip(db: DbExecutor, trip: NewTrip, now: Date, id: string = crypto.randomUUID()): TripRow {
-  return db
+  const row = db
     .insert(trips)
-    .values({ id, ...trip, createdAt: now, updatedAt: now, version: 1 })
+    .values({ id, ...trip, notes: trip.notes ?? '', createdAt: now, updatedAt: now, version: 1, revision: 1 })
     .returning()
     .get();
+  db.insert(memberships).values({ tripId: id, userId: trip.ownerId, role: 'owner', createdAt: now }).run();
+  return row;
+}
+
+export function insertRig(db: DbExecutor, owner: { ownerId: string; tripId: string | null }, rig: Rig, now: Date) {
+  return db
+    .insert(rigs)
+    .values({ id: crypto.randomUUID(), ...owner, ...rigToColumns(rig), version: 1, createdAt: now, updatedAt: now })
+    .returning()
+    .get();
+}
+
+/** Marks the trip changed so cached budgets and ETags are renewed. */
+export function touchTrip(db: DbExecutor, tripId: string, now: Date, { bumpVersion = false } = {}): void {
+  db.update(trips)
+    .set({
+      revision: sql`${trips.revision} + 1`,
+      updatedAt: now,
+      ...(bumpVersion ? { version: sql`${trips.version} + 1` } : {}),
+    })
+    .where(eq(trips.id, tripId))
+    .run();
+}
+
+export function logActivity(db: DbExecutor, entry: { tripId: string; userId: string | null; summary: string; at: Date }): void {
+  db.insert(activity).values(entry).run();
+}
+
+export function listActivity(db: DbExecutor, tripId: string, limit = 100) {
+  return db
+    .select({ id: activity.id, at: activity.at, userId: activity.userId, userName: user.name, summary: activity.summary })
+    .from(activity)
+    .leftJoin(user, eq(user.id, activity.userId))
+    .where(eq(activity.tripId, tripId))
+    .orderBy(desc(activity.at), desc(activity.id))
+    .limit(limit)
+    .all();
 }

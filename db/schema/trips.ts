@@ -14,10 +14,15 @@ export const trips = sqliteTable(
     startDate: text('start_date').notNull(),
     endDate: text('end_date').notNull(),
     timeZone: text('time_zone').notNull(),
+    notes: text('notes').notNull().default(''),
     createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull(),
     updatedAt: integer('updated_at', { mode: 'timestamp_ms' }).notNull(),
-    // Bumped on every change; edits carry the version they were based on (optimistic concurrency).
+    // Bumped when the trip's own fields or its stop order change; edits to them carry the version
+    // they were based on (optimistic concurrency).
     version: integer('version').notNull().default(1),
+    // Bumped on any change to the trip or anything in it (stops, drives, rig, appliances): the
+    // budget's cache key and ETag.
+    revision: integer('revision').notNull().default(1),
   },
   (table) => [index('trips_owner_idx').on(table.ownerId)],
 );

@@ -17,7 +17,13 @@ function fieldsOf(error: ZodError): Record<string, string[]> {
 export function toHttpError(err: unknown): HttpError {
   if (err instanceof HttpError) return err;
   if (err instanceof ZodError) {
-    return new HttpError(400, 'validation_failed', 'Some fields need attention.', fieldsOf(err));
+    // Shape errors (types, ranges, missing fields) are 400; when every issue comes from a rule
+    // between fields (departure after arrival, drives that fit between stops) the request was
+    // well-formed but makes no sense: 422.
+    const semantic = err.issues.every((issue) => issue.code === 'custom');
+    return semantic
+      ? new HttpError(422, 'unprocessable', 'Some values do not fit together.', fieldsOf(err))
+      : new HttpError(400, 'validation_failed', 'Some fields need attention.', fieldsOf(err));
   }
   const parserError = err as BodyParserError;
   if (parserError?.type === 'entity.parse.failed') {

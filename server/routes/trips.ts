@@ -1,31 +1,109 @@
 import { Router } from 'express';
-import { z } from 'zod';
-import { findTripForOwner, listTripsForOwner, toTripSummary } from '@/db/queries/trips';
-import type { TripListResponse, TripResponse } from '@/shared/schemas/trip-summary';
-import type { AppDeps } from '../app';
-import { notFound } from '../errors';
+import type { Db } from '@/db/client';
+import { findRigPreset } from '@/shared/rig-presets';
+import { createTripRequestSchema, updateTripRequestSchema } from '@/shared/schemas/api';
+import { rigSchema } from '@/shared/schemas/rig';
+import { checkTripDatesCoverStops } from '@/shared/trip-rules';
+import { findSavedRig } from '@/db/queries/rigs';
+import { rigFromRow } from '@/db/queries/mappers';
+import { listStopRows } from '@/db/queries/stops';
+import { findTrip, findTripRig, insertRig, insertTrip, listTripsForMember, loadTripDetail, logActivity, toTripSummary, touchTrip } from '@/db/queries/trips';
+import { trips } from '@/db/schema/trips';
+import { eq } from 'drizzle-orm';
+import type { BudgetService } from '../budget-service';
+import { conflict, notFound, unprocessable } from '../errors';
 import { currentUser } from '../middleware/require-session';
+import { loadTripAccess, requirePermission, tripAccess } from '../middleware/trip-access';
+import { duplicateTrip } from '../trip-copy';
+import { tripItemsRouter } from './trip-items';
 
-const tripParams = z.object({ tripId: z.string().min(1).max(64) });
+type Deps = { db: Db; now: () => Date; budgets: BudgetService };
 
-export function tripsRouter({ db }: Pick<AppDeps, 'db'>): Router {
+export function tripsRouter({ db, now, budgets }: Deps): Router {
   const router = Router();
 
   router.get('/', (_req, res) => {
     const user = currentUser(res);
-    const body: TripListResponse = { trips: listTripsForOwner(db, user.id).map(toTripSummary) };
-    res.json(body);
+    const list = listTripsForMember(db, user.id).map(({ trip, role }) => {
+      const rig = findTripRig(db, trip.id);
+      const budget = budgets.forTrip(trip.id)?.result;
+      return toTripSummary(trip, {
+        role,
+        rigName: rig?.name ?? null,
+        lowestSocPct: budget ? budget.headline.lowestSocPct : null,
+        reservePct: budget ? budget.headline.reservePct : null,
+        flagCount: budget ? budget.flags.length : null,
+      });
+    });
+    res.json({ trips: list });
   });
 
-  router.get('/:tripId', (req, res) => {
+  router.post('/', (req, res) => {
     const user = currentUser(res);
-    const { tripId } = tripParams.parse(req.params);
-    const row = findTripForOwner(db, user.id, tripId);
-    // A trip that is not yours answers exactly like one that does not exist.
-    if (!row) throw notFound('That trip was not found.');
-    const body: TripResponse = { trip: toTripSummary(row) };
-    res.json(body);
+    const body = createTripRequestSchema.parse(req.body);
+    const source = body.rigSource;
+    let rig;
+    if (source.kind === 'saved') {
+      const saved = findSavedRig(db, user.id, source.rigId);
+      if (!saved) throw unprocessable('rigSource.rigId', 'That rig is not among your saved rigs.');
+      rig = rigFromRow(saved);
+    } else {
+      const preset = findRigPreset(source.presetId);
+      if (!preset) throw unprocessable('rigSource.presetId', 'There is no rig preset with that id.');
+      rig = rigSchema.parse(preset.rig);
+    }
+    const at = now();
+    const tripId = db.transaction((tx) => {
+      const trip = insertTrip(tx, { ownerId: user.id, name: body.name, startDate: body.startDate, endDate: body.endDate, timeZone: body.timeZone, notes: body.notes }, at);
+      insertRig(tx, { ownerId: user.id, tripId: trip.id }, rig, at);
+      logActivity(tx, { tripId: trip.id, userId: user.id, summary: `created the trip "${trip.name}"`, at });
+      return trip.id;
+    });
+    res.status(201).json(loadTripDetail(db, tripId, 'owner'));
   });
 
+  const trip = Router({ mergeParams: true });
+  router.use('/:tripId', loadTripAccess(db), trip);
+
+  trip.get('/', (_req, res) => {
+    const { tripId, role } = tripAccess(res);
+    const detail = loadTripDetail(db, tripId, role);
+    if (!detail) throw notFound('That trip was not found.');
+    res.json(detail);
+  });
+
+  trip.patch('/', requirePermission('editTrip'), (req, res) => {
+    const { tripId, role, userId } = tripAccess(res);
+    const body = updateTripRequestSchema.parse(req.body);
+    const { version, ...changes } = body;
+    db.transaction((tx) => {
+      const current = findTrip(tx, tripId);
+      if (!current) throw notFound('That trip was not found.');
+      if (current.version !== version) throw conflict(loadTripDetail(tx, tripId, role)?.trip);
+      const next = { startDate: changes.startDate ?? current.startDate, endDate: changes.endDate ?? current.endDate, timeZone: changes.timeZone ?? current.timeZone };
+      const breach = checkTripDatesCoverStops(next, listStopRows(tx, tripId));
+      if (breach) throw unprocessable(breach.field, breach.message);
+      tx.update(trips).set(changes).where(eq(trips.id, tripId)).run();
+      touchTrip(tx, tripId, now(), { bumpVersion: true });
+      const what = Object.keys(changes).join(', ') || 'nothing';
+      logActivity(tx, { tripId, userId, summary: `changed the trip's ${what}`, at: now() });
+    });
+    res.json(loadTripDetail(db, tripId, role));
+  });
+
+  trip.delete('/', requirePermission('deleteTrip'), (_req, res) => {
+    const { tripId } = tripAccess(res);
+    db.delete(trips).where(eq(trips.id, tripId)).run();
+    res.status(204).end();
+  });
+
+  trip.post('/duplicate', (_req, res) => {
+    const { tripId, userId } = tripAccess(res);
+    const copyId = duplicateTrip(db, tripId, userId, now());
+    res.status(201).json(loadTripDetail(db, copyId, 'owner'));
+  });
+
+  trip.use(tripItemsRouter({ db, now, budgets }));
   return router;
 }
+

@@ -1,0 +1,20 @@
+import { integer, real, sqliteTable, text, uniqueIndex } from 'drizzle-orm/sqlite-core';
+import { trips } from './trips';
+
+/** Drive n goes from the stop at position n to the one at n + 1; the API keeps one per gap. */
+export const drives = sqliteTable(
+  'drives',
+  {
+    id: text('id').primaryKey(),
+    tripId: text('trip_id')
+      .notNull()
+      .references(() => trips.id, { onDelete: 'cascade' }),
+    position: integer('position').notNull(),
+    hoursOnRoad: real('hours_on_road').notNull(),
+    vehicleCharging: integer('vehicle_charging', { mode: 'boolean' }).notNull(),
+    version: integer('version').notNull().default(1),
+  },
+  (table) => [uniqueIndex('drives_trip_position_idx').on(table.tripId, table.position)],
+);
+
+export type DriveRow = typeof drives.$inferSelect;

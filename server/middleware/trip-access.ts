@@ -1,0 +1,58 @@
+import type { NextFunction, Request, Response } from 'express';
+import { z } from 'zod';
+import type { Db } from '@/db/client';
+import { findMembership } from '@/db/queries/trips';
+import { can, type Permission, type Role } from '@/shared/schemas/roles';
+import { HttpError, notFound } from '../errors';
+import { currentUser } from './require-session';
+
+export type TripAccess = { tripId: string; role: Role; userId: string };
+
+declare global {
+  // eslint-disable-next-line @typescript-eslint/no-namespace
+  namespace Express {
+    // eslint-disable-next-line @typescript-eslint/consistent-type-definitions -- declaration merging needs an interface
+    interface Locals {
+      access?: TripAccess;
+    }
+  }
+}
+
+export const idParam = z.string().min(1).max(64);
+
+/**
+ * Resolves the signed-in user's role on :tripId. Someone who is not a member gets the same 404 as
+ * for a trip that does not exist, so a trip's existence never leaks.
+ */
+export function loadTripAccess(db: Db) {
+  return (req: Request, res: Response, next: NextFunction) => {
+    const user = currentUser(res);
+    const tripId = idParam.safeParse(req.params.tripId);
+    const membership = tripId.success ? findMembership(db, tripId.data, user.id) : undefined;
+    if (!tripId.success || !membership) throw notFound('That trip was not found.');
+    res.locals.access = { tripId: tripId.data, role: membership.role, userId: user.id };
+    next();
+  };
+}
+
+const REFUSALS: Record<Permission, string> = {
+  read: 'You cannot see this trip.',
+  editLoads: 'Only crew, planners and the owner can change appliances and routines.',
+  editTrip: 'Only planners and the owner can change the trip, its stops, drives and rig.',
+  manageMembers: 'Only the owner can manage members.',
+  deleteTrip: 'Only the owner can delete the trip.',
+};
+
+/** Lets a member through only when their role carries the permission; otherwise 403. */
+export function requirePermission(permission: Permission) {
+  return (_req: Request, res: Response, next: NextFunction) => {
+    if (!can(tripAccess(res).role, permission)) throw new HttpError(403, 'forbidden', REFUSALS[permission]);
+    next();
+  };
+}
+
+export function tripAccess(res: Response): TripAccess {
+  const access = res.locals.access;
+  if (!access) throw notFound('That trip was not found.');
+  return access;
+}

@@ -1,0 +1,47 @@
+import { Router } from 'express';
+import type { Db } from '@/db/client';
+import { listMembers, removeMember, setMemberRole } from '@/db/queries/members';
+import { findTrip, logActivity, touchTrip } from '@/db/queries/trips';
+import { updateMemberRoleRequestSchema } from '@/shared/schemas/api';
+import { HttpError, notFound } from '../errors';
+import { requirePermission, tripAccess } from '../middleware/trip-access';
+
+export function membersRouter({ db, now }: { db: Db; now: () => Date }): Router {
+  const router = Router({ mergeParams: true });
+
+  router.get('/', (_req, res) => {
+    res.json({ members: listMembers(db, tripAccess(res).tripId) });
+  });
+
+  router.patch('/:userId', requirePermission('manageMembers'), (req, res) => {
+    const { tripId, userId } = tripAccess(res);
+    const target = String(req.params.userId);
+    const { role } = updateMemberRoleRequestSchema.parse(req.body);
+    // Ownership moves only by an explicit hand-over, never by editing a role.
+    if (role === 'owner' || target === findTrip(db, tripId)?.ownerId) {
+      throw new HttpError(422, 'unprocessable', "The owner's role cannot be changed here; hand over ownership instead.", { role: ['Not allowed.'] });
+    }
+    db.transaction((tx) => {
+      if (!setMemberRole(tx, tripId, target, role)) throw notFound('That member was not found.');
+      touchTrip(tx, tripId, now());
+      logActivity(tx, { tripId, userId, summary: `made a member ${role}`, at: now() });
+    });
+    res.json({ members: listMembers(db, tripId) });
+  });
+
+  router.delete('/:userId', requirePermission('manageMembers'), (req, res) => {
+    const { tripId, userId } = tripAccess(res);
+    const target = String(req.params.userId);
+    if (target === findTrip(db, tripId)?.ownerId) {
+      throw new HttpError(422, 'unprocessable', 'The owner cannot be removed; hand over ownership first.');
+    }
+    db.transaction((tx) => {
+      if (!removeMember(tx, tripId, target)) throw notFound('That member was not found.');
+      touchTrip(tx, tripId, now());
+      logActivity(tx, { tripId, userId, summary: 'removed a member', at: now() });
+    });
+    res.status(204).end();
+  });
+
+  return router;
+}

@@ -1,0 +1,53 @@
+import { Router } from 'express';
+import type { Db } from '@/db/client';
+import { rigRecord } from '@/db/queries/mappers';
+import { deleteSavedRig, findSavedRig, listSavedRigs, updateRigRow } from '@/db/queries/rigs';
+import { insertRig } from '@/db/queries/trips';
+import { RIG_PRESETS } from '@/shared/rig-presets';
+import { createRigRequestSchema, updateRigRequestSchema } from '@/shared/schemas/api';
+import { notFound } from '../errors';
+import { idParam } from '../middleware/trip-access';
+import { currentUser } from '../middleware/require-session';
+import { unwrapWrite } from './write-result';
+
+/** "My rigs": each user's saved rigs. A trip runs on its own copy, edited under /trips/:id/rig. */
+export function rigsRouter({ db, now }: { db: Db; now: () => Date }): Router {
+  const router = Router();
+
+  router.get('/', (_req, res) => {
+    res.json({ rigs: listSavedRigs(db, currentUser(res).id).map(rigRecord) });
+  });
+
+  router.post('/', (req, res) => {
+    const { rig } = createRigRequestSchema.parse(req.body);
+    res.status(201).json(rigRecord(insertRig(db, { ownerId: currentUser(res).id, tripId: null }, rig, now())));
+  });
+
+  router.get('/:rigId', (req, res) => {
+    const row = findSavedRig(db, currentUser(res).id, idParam.parse(req.params.rigId));
+    if (!row) throw notFound('That rig was not found.');
+    res.json(rigRecord(row));
+  });
+
+  router.put('/:rigId', (req, res) => {
+    const userId = currentUser(res).id;
+    const { version, rig } = updateRigRequestSchema.parse(req.body);
+    const current = findSavedRig(db, userId, idParam.parse(req.params.rigId));
+    res.json(unwrapWrite(updateRigRow(db, current, version, rig, now()), rigRecord, 'rig'));
+  });
+
+  router.delete('/:rigId', (req, res) => {
+    if (!deleteSavedRig(db, currentUser(res).id, idParam.parse(req.params.rigId))) throw notFound('That rig was not found.');
+    res.status(204).end();
+  });
+
+  return router;
+}
+
+export function rigPresetsRouter(): Router {
+  const router = Router();
+  router.get('/', (_req, res) => {
+    res.json({ presets: RIG_PRESETS });
+  });
+  return router;
+}

@@ -1,0 +1,42 @@
+import { Router } from 'express';
+import type { Db } from '@/db/client';
+import { listActivity } from '@/db/queries/trips';
+import type { BudgetService } from '../budget-service';
+import { notFound } from '../errors';
+import { tripAccess } from '../middleware/trip-access';
+import { appliancesRouter } from './appliances';
+import { drivesRouter } from './drives';
+import { membersRouter } from './members';
+import { stopsRouter } from './stops';
+import { tripRigRouter } from './trip-rig';
+
+/** Everything under /api/trips/:tripId/… once the caller's role is known. */
+export function tripItemsRouter(deps: { db: Db; now: () => Date; budgets: BudgetService }): Router {
+  const router = Router({ mergeParams: true });
+  router.use('/stops', stopsRouter(deps));
+  router.use('/drives', drivesRouter(deps));
+  router.use('/appliances', appliancesRouter(deps));
+  router.use('/rig', tripRigRouter(deps));
+  router.use('/members', membersRouter(deps));
+
+  router.get('/budget', (req, res) => {
+    const answer = deps.budgets.forTrip(tripAccess(res).tripId);
+    if (!answer) throw notFound('That trip was not found.');
+    // The revision changes with every edit to the trip, so it is a strong validator.
+    const etag = `"budget-${answer.revision}"`;
+    res.setHeader('ETag', etag);
+    res.setHeader('Cache-Control', 'private, no-cache');
+    if (req.headers['if-none-match'] === etag) {
+      res.status(304).end();
+      return;
+    }
+    res.json({ version: answer.revision, result: answer.result, ...(answer.reason ? { reason: answer.reason } : {}) });
+  });
+
+  router.get('/activity', (_req, res) => {
+    const entries = listActivity(deps.db, tripAccess(res).tripId).map((entry) => ({ ...entry, id: String(entry.id), at: entry.at.toISOString() }));
+    res.json({ entries });
+  });
+
+  return router;
+}

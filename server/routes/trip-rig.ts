@@ -1,0 +1,52 @@
+import { Router } from 'express';
+import type { Db } from '@/db/client';
+import { rigFromRow, rigRecord } from '@/db/queries/mappers';
+import { findSavedRig, updateRigRow } from '@/db/queries/rigs';
+import { findTripRig, insertRig, logActivity, touchTrip } from '@/db/queries/trips';
+import { replaceTripRigRequestSchema, saveTripRigRequestSchema, updateRigRequestSchema } from '@/shared/schemas/api';
+import { notFound, unprocessable } from '../errors';
+import { requirePermission, tripAccess } from '../middleware/trip-access';
+import { unwrapWrite } from './write-result';
+
+export function tripRigRouter({ db, now }: { db: Db; now: () => Date }): Router {
+  const router = Router({ mergeParams: true });
+
+  router.put('/', requirePermission('editTrip'), (req, res) => {
+    const { tripId, userId } = tripAccess(res);
+    const { version, rig } = updateRigRequestSchema.parse(req.body);
+    const record = db.transaction((tx) => {
+      const updated = unwrapWrite(updateRigRow(tx, findTripRig(tx, tripId), version, rig, now()), rigRecord, 'rig');
+      touchTrip(tx, tripId, now());
+      logActivity(tx, { tripId, userId, summary: `changed the rig ${rig.name}`, at: now() });
+      return updated;
+    });
+    res.json(record);
+  });
+
+  // "Replace with one of My rigs": the trip's copy takes the saved rig's parts; the saved rig is untouched.
+  router.post('/replace', requirePermission('editTrip'), (req, res) => {
+    const { tripId, userId } = tripAccess(res);
+    const { version, rigId } = replaceTripRigRequestSchema.parse(req.body);
+    const record = db.transaction((tx) => {
+      const saved = findSavedRig(tx, userId, rigId);
+      if (!saved) throw unprocessable('rigId', 'That rig is not among your saved rigs.');
+      const updated = unwrapWrite(updateRigRow(tx, findTripRig(tx, tripId), version, rigFromRow(saved), now()), rigRecord, 'rig');
+      touchTrip(tx, tripId, now());
+      logActivity(tx, { tripId, userId, summary: `switched the trip to the rig ${saved.name}`, at: now() });
+      return updated;
+    });
+    res.json(record);
+  });
+
+  // "Save this rig to My rigs": any member may keep a copy of the trip's rig for their own trips.
+  router.post('/save', (req, res) => {
+    const { tripId, userId } = tripAccess(res);
+    const { name } = saveTripRigRequestSchema.parse(req.body);
+    const tripRig = findTripRig(db, tripId);
+    if (!tripRig) throw notFound('That trip has no rig.');
+    const row = insertRig(db, { ownerId: userId, tripId: null }, { ...rigFromRow(tripRig), name }, now());
+    res.status(201).json({ rig: rigRecord(row) });
+  });
+
+  return router;
+}
