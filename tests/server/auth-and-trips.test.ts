@@ -1,7 +1,7 @@
 import request from 'supertest';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { insertTrip } from '@/db/queries/trips';
 import { createTestApp, signUpAgent, type TestContext } from '../factories/test-app';
+import { createTrip } from '../factories/trip-factory';
 
 const ORIGIN = 'http://localhost:8080';
 let ctx: TestContext;
@@ -61,9 +61,8 @@ describe('GET /api/trips', () => {
   it('when two users each own trips, then each sees only their own', async () => {
     const first = await signUpAgent(ctx.app);
     const second = await signUpAgent(ctx.app);
-    const now = new Date('2026-11-20T10:00:00Z');
-    insertTrip(ctx.db, { ownerId: first.userId, name: 'Coast run', startDate: '2027-05-01', endDate: '2027-05-04', timeZone: 'Europe/London' }, now);
-    insertTrip(ctx.db, { ownerId: first.userId, name: 'Glen weekend', startDate: '2027-06-01', endDate: '2027-06-03', timeZone: 'Europe/London' }, now);
+    await createTrip(first.agent, { name: 'Coast run', startDate: '2027-05-01', endDate: '2027-05-04' });
+    await createTrip(first.agent, { name: 'Glen weekend', startDate: '2027-06-01', endDate: '2027-06-03' });
 
     const mine = await first.agent.get('/api/trips').expect(200);
     expect(mine.body.trips.map((trip: { name: string }) => trip.name)).toEqual(['Coast run', 'Glen weekend']);
@@ -75,7 +74,7 @@ describe('GET /api/trips', () => {
   it("when a user asks for another user's trip, then 404 as if it did not exist", async () => {
     const owner = await signUpAgent(ctx.app);
     const other = await signUpAgent(ctx.app);
-    const trip = insertTrip(ctx.db, { ownerId: owner.userId, name: 'Private', startDate: '2027-05-01', endDate: '2027-05-02', timeZone: 'UTC' }, new Date());
+    const { trip } = await createTrip(owner.agent, { name: 'Private' });
     await owner.agent.get(`/api/trips/${trip.id}`).expect(200);
     const response = await other.agent.get(`/api/trips/${trip.id}`);
     expect(response.status).toBe(404);

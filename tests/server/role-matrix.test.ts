@@ -1,0 +1,186 @@
+// Every trip route × every kind of caller, each cell asserted: who may do what is the product's
+// promise to a family sharing a plan, so it is checked exhaustively rather than by example.
+import request, { type Agent } from 'supertest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { createTestApp, signUpAgent, type TestContext } from '../factories/test-app';
+import { addAppliance, addStop, createTrip, getDetail, grant, LIGHTS, stopOnNextFreeDay } from '../factories/trip-factory';
+
+const ACTORS = ['owner', 'planner', 'crew', 'viewer', 'stranger', 'anonymous'] as const;
+type Actor = (typeof ACTORS)[number];
+type Caller = { agent: Agent; userId: string };
+type Cell = { method: 'get' | 'post' | 'patch' | 'put' | 'delete'; path: string; body?: object };
+type World = { ctx: TestContext; tripId: string; callers: Record<Exclude<Actor, 'anonymous'>, Caller> };
+type Row = { name: string; prepare: (world: World, actor: Actor) => Promise<Cell>; expected: Record<Actor, number> };
+
+/** Expected statuses by how much a route needs: read, editLoads, editTrip or owner-only. */
+const needs = (level: 'read' | 'loads' | 'trip' | 'owner', ok = 200): Record<Actor, number> => ({
+  owner: ok,
+  planner: level === 'owner' ? 403 : ok,
+  crew: level === 'read' || level === 'loads' ? ok : 403,
+  viewer: level === 'read' ? ok : 403,
+  stranger: 404,
+  anonymous: 401,
+});
+
+let world: World;
+
+const owner = () => world.callers.owner.agent;
+const base = () => `/api/trips/${world.tripId}`;
+
+const ROWS: Row[] = [
+  { name: 'GET trip', prepare: async () => ({ method: 'get', path: base() }), expected: needs('read') },
+  { name: 'GET budget', prepare: async () => ({ method: 'get', path: `${base()}/budget` }), expected: needs('read') },
+  { name: 'GET activity', prepare: async () => ({ method: 'get', path: `${base()}/activity` }), expected: needs('read') },
+  { name: 'GET members', prepare: async () => ({ method: 'get', path: `${base()}/members` }), expected: needs('read') },
+  { name: 'POST duplicate', prepare: async () => ({ method: 'post', path: `${base()}/duplicate` }), expected: needs('read', 201) },
+  { name: 'POST rig/save', prepare: async () => ({ method: 'post', path: `${base()}/rig/save`, body: { name: 'Kept rig' } }), expected: needs('read', 201) },
+  {
+    name: 'PATCH trip',
+    prepare: async () => {
+      const { trip } = await getDetail(owner(), world.tripId);
+      return { method: 'patch', path: base(), body: { version: trip.version, notes: `edited ${Date.now()}` } };
+    },
+    expected: needs('trip'),
+  },
+  {
+    name: 'DELETE trip',
+    prepare: async () => {
+      // A fresh trip per cell, with the same members, so one success does not spoil the next cell.
+      const { trip } = await createTrip(owner(), { name: 'Doomed' });
+      for (const role of ['planner', 'crew', 'viewer'] as const) grant(world.ctx.db, trip.id, world.callers[role].userId, role);
+      return { method: 'delete', path: `/api/trips/${trip.id}` };
+    },
+    expected: needs('owner', 204),
+  },
+  { name: 'POST stop', prepare: async () => ({ method: 'post', path: `${base()}/stops`, body: { stop: stopOnNextFreeDay() } }), expected: needs('trip', 201) },
+  {
+    name: 'PATCH stop',
+    prepare: async () => {
+      const stop = (await getDetail(owner(), world.tripId)).stops[0];
+      if (!stop) throw new Error('no stop');
+      return { method: 'patch', path: `${base()}/stops/${stop.id}`, body: { version: stop.version, stop: { ...stop.stop, highC: stop.stop.highC + 0.5 } } };
+    },
+    expected: needs('trip'),
+  },
+  {
+    name: 'DELETE stop',
+    prepare: async () => {
+      const stop = await addStop(owner(), world.tripId);
+      return { method: 'delete', path: `${base()}/stops/${stop.id}` };
+    },
+    expected: needs('trip', 204),
+  },
+  {
+    name: 'POST stops/reorder',
+    prepare: async () => {
+      const detail = await getDetail(owner(), world.tripId);
+      return { method: 'post', path: `${base()}/stops/reorder`, body: { tripVersion: detail.trip.version, stopIds: detail.stops.map((s) => s.id) } };
+    },
+    expected: needs('trip'),
+  },
+  {
+    name: 'PATCH drive',
+    prepare: async () => {
+      const drive = (await getDetail(owner(), world.tripId)).drives[0];
+      if (!drive) throw new Error('no drive');
+      return { method: 'patch', path: `${base()}/drives/${drive.id}`, body: { version: drive.version, drive: { hoursOnRoad: 1, vehicleCharging: !drive.drive.vehicleCharging } } };
+    },
+    expected: needs('trip'),
+  },
+  {
+    name: 'PUT rig',
+    prepare: async () => {
+      const { rig } = await getDetail(owner(), world.tripId);
+      return { method: 'put', path: `${base()}/rig`, body: { version: rig.version, rig: { ...rig.rig, name: `Rig ${Date.now()}` } } };
+    },
+    expected: needs('trip'),
+  },
+  {
+    name: 'POST rig/replace',
+    prepare: async (w, actor) => {
+      const { rig } = await getDetail(owner(), world.tripId);
+      // The replacement must be one of the caller's own saved rigs.
+      const caller = actor === 'anonymous' ? w.callers.owner : w.callers[actor];
+      const saved = await caller.agent.post('/api/rigs').send({ rig: { ...rig.rig, name: 'Spare' } });
+      return { method: 'post', path: `${base()}/rig/replace`, body: { version: rig.version, rigId: saved.body.id } };
+    },
+    expected: needs('trip'),
+  },
+  { name: 'POST appliance', prepare: async () => ({ method: 'post', path: `${base()}/appliances`, body: { appliance: LIGHTS } }), expected: needs('loads', 201) },
+  {
+    name: 'PATCH appliance',
+    prepare: async () => {
+      const item = (await getDetail(owner(), world.tripId)).appliances[0];
+      if (!item) throw new Error('no appliance');
+      const { id: _id, ...fields } = item.appliance;
+      return { method: 'patch', path: `${base()}/appliances/${item.id}`, body: { version: item.version, appliance: { ...fields, runningW: fields.runningW + 1 }, caretakerUserId: null } };
+    },
+    expected: needs('loads'),
+  },
+  {
+    name: 'PUT appliance schedule',
+    prepare: async () => {
+      const item = (await getDetail(owner(), world.tripId)).appliances[0];
+      if (!item) throw new Error('no appliance');
+      return { method: 'put', path: `${base()}/appliances/${item.id}/schedule`, body: { version: item.version, schedule: { kind: 'always' } } };
+    },
+    expected: needs('loads'),
+  },
+  {
+    name: 'DELETE appliance',
+    prepare: async () => {
+      const item = await addAppliance(owner(), world.tripId);
+      return { method: 'delete', path: `${base()}/appliances/${item.id}` };
+    },
+    expected: needs('loads', 204),
+  },
+  {
+    name: 'PATCH member role',
+    prepare: async (w) => {
+      const extra = await signUpAgent(w.ctx.app, 'Extra');
+      grant(w.ctx.db, world.tripId, extra.userId, 'viewer');
+      return { method: 'patch', path: `${base()}/members/${extra.userId}`, body: { role: 'crew' } };
+    },
+    expected: needs('owner'),
+  },
+  {
+    name: 'DELETE member',
+    prepare: async (w) => {
+      const extra = await signUpAgent(w.ctx.app, 'Extra');
+      grant(w.ctx.db, world.tripId, extra.userId, 'viewer');
+      return { method: 'delete', path: `${base()}/members/${extra.userId}` };
+    },
+    expected: needs('owner', 204),
+  },
+];
+
+beforeAll(async () => {
+  const ctx = createTestApp();
+  const [ownerCaller, planner, crew, viewer, stranger] = await Promise.all(
+    ['Owner', 'Planner', 'Crew', 'Viewer', 'Stranger'].map((name) => signUpAgent(ctx.app, name)),
+  );
+  if (!ownerCaller || !planner || !crew || !viewer || !stranger) throw new Error('sign-up failed');
+  const { trip } = await createTrip(ownerCaller.agent);
+  grant(ctx.db, trip.id, planner.userId, 'planner');
+  grant(ctx.db, trip.id, crew.userId, 'crew');
+  grant(ctx.db, trip.id, viewer.userId, 'viewer');
+  world = { ctx, tripId: trip.id, callers: { owner: ownerCaller, planner, crew, viewer, stranger } };
+  await addStop(ownerCaller.agent, trip.id);
+  await addStop(ownerCaller.agent, trip.id);
+  await addAppliance(ownerCaller.agent, trip.id);
+});
+afterAll(() => world?.ctx.close());
+
+describe.each(ROWS)('$name', (row) => {
+  it.each(ACTORS)('when called by %s, then the status is as the role rules say', async (actor) => {
+    const cell = await row.prepare(world, actor);
+    const client = actor === 'anonymous' ? request(world.ctx.app) : world.callers[actor].agent;
+    const pending = client[cell.method](cell.path);
+    const response = await (cell.body ? pending.send(cell.body) : pending);
+    expect({ actor, status: response.status, body: response.status >= 400 ? response.body : undefined }).toMatchObject({
+      actor,
+      status: row.expected[actor],
+    });
+    if (response.status >= 400) expect(response.body.error).toEqual(expect.objectContaining({ code: expect.any(String), message: expect.any(String) }));
+  });
+});
