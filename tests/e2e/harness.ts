@@ -1,5 +1,6 @@
 import { spawn, type ChildProcess } from 'node:child_process';
 import fs from 'node:fs';
+import net from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
 import { chromium, type Browser, type Page } from 'playwright-core';
@@ -8,11 +9,25 @@ export const SCREENSHOT_DIR = path.resolve(__dirname, '..', '..', 'test-results'
 
 export type RunningServer = { url: string; stop: () => Promise<void> };
 
+/** A port nobody is listening on, so the server's public URL (checked by better-auth's origin test) is known up front. */
+async function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const probe = net.createServer();
+    probe.once('error', reject);
+    probe.listen(0, '127.0.0.1', () => {
+      const address = probe.address();
+      const port = typeof address === 'object' && address ? address.port : 0;
+      probe.close(() => resolve(port));
+    });
+  });
+}
+
 /** Starts the real server (built web app, fresh database with demo data) on a free port. */
 export async function startServer(): Promise<RunningServer> {
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'trailtally-e2e-'));
+  const port = await freePort();
   const child: ChildProcess = spawn(path.resolve('node_modules/.bin/tsx'), ['server/index.ts'], {
-    env: { ...process.env, PORT: '0', HOST: '127.0.0.1', DATABASE_PATH: path.join(dir, 'e2e.db'), LOG_LEVEL: 'warn', NODE_ENV: 'development' },
+    env: { ...process.env, PORT: String(port), PUBLIC_URL: `http://127.0.0.1:${port}`, HOST: '127.0.0.1', DATABASE_PATH: path.join(dir, 'e2e.db'), LOG_LEVEL: 'warn', NODE_ENV: 'development' },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
   let output = '';
@@ -20,10 +35,9 @@ export async function startServer(): Promise<RunningServer> {
     const timer = setTimeout(() => reject(new Error(`server did not start:\n${output}`)), 60_000);
     const onData = (chunk: Buffer) => {
       output += chunk.toString();
-      const match = /ready at (http:\/\/localhost:\d+)/.exec(output);
-      if (match?.[1]) {
+      if (/ready at http/.test(output)) {
         clearTimeout(timer);
-        resolve(match[1].replace('localhost', '127.0.0.1'));
+        resolve(`http://127.0.0.1:${port}`);
       }
     };
     child.stdout?.on('data', onData);

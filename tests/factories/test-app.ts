@@ -15,7 +15,7 @@ export type TestContext = {
 };
 
 /** A real app on a fresh temporary SQLite file with the real migrations. */
-export function createTestApp(): TestContext {
+export function createTestApp(options: { authAttemptsPerMinute?: number } = {}): TestContext {
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'trailtally-test-'));
   const db = openDatabase(path.join(dir, 'test.db'));
   runMigrations(db);
@@ -27,7 +27,7 @@ export function createTestApp(): TestContext {
     config: {
       authSecret: 'test-secret-that-is-long-enough-for-better-auth-0123456789',
       publicUrl: 'http://localhost:8080',
-      authRateLimit: { windowMs: 60_000, limit: 1000 },
+      authRateLimit: { windowMs: 60_000, limit: options.authAttemptsPerMinute ?? 1000 },
     },
   });
   return {

@@ -82,6 +82,22 @@ describe('GET /api/trips', () => {
   });
 });
 
+describe('sign-in rate limit', () => {
+  it('when sign-in is tried too often, then 429 with the stable error body', async () => {
+    const limited = createTestApp({ authAttemptsPerMinute: 3 });
+    try {
+      const attempt = () =>
+        request(limited.app).post('/api/auth/sign-in/email').set('Origin', ORIGIN).send({ email: 'x@example.test', password: 'wrong-password' });
+      for (let i = 0; i < 3; i += 1) expect((await attempt()).status).toBe(401);
+      const refused = await attempt();
+      expect(refused.status).toBe(429);
+      expect(refused.body.error.code).toBe('rate_limited');
+    } finally {
+      limited.close();
+    }
+  });
+});
+
 describe('errors and health', () => {
   it('when the JSON body is malformed, then 400 with the stable error body', async () => {
     const { agent } = await signUpAgent(ctx.app);
