@@ -1,7 +1,7 @@
 // Words and labels for results: where a step is, and local times for cause texts.
 import type { Prepared } from './prepare';
 import type { Where } from './result-types';
-import { localDayNumber, localLabel } from './time-grid';
+import { localDayNumber, localLabel, utcIsoString } from './time-grid';
 
 const WEEKDAYS = ['Thu', 'Fri', 'Sat', 'Sun', 'Mon', 'Tue', 'Wed'] as const; // 1970-01-01 was a Thursday
 
@@ -19,7 +19,7 @@ export function whereText(p: Prepared, where: Where): string {
 }
 
 export function utcIso(p: Prepared, i: number): string {
-  return new Date(p.startMs[i] ?? 0).toISOString();
+  return utcIsoString(p.startMs[i] ?? 0);
 }
 
 export function localIso(p: Prepared, i: number): string {

@@ -2,16 +2,17 @@
 // temperature, sun geometry and clear-sky irradiance (three samples per hour, Simpson's rule, so sunrise and
 // sunset inside an hour are weighed properly), and the appliance loads. Scenarios (sky band, headroom) reuse it.
 import type { EngineInput } from '../schemas/engine-input';
-import type { DayType } from '../schemas/common';
+import type { Appliance } from '../schemas/appliance';
+import type { DayType, RoutineWindow } from '../schemas/common';
 import type { Stop } from '../schemas/trip';
 import { haurwitzGhi, ineichenPerez, kastenYoungAirMass, pressureRatio } from './clear-sky';
 import { extraterrestrialW } from './extraterrestrial';
-// Energy per step follows applianceStep in loads.ts, inlined here to keep the loop free of allocations.
-import { onShare } from './loads';
+// Energy per step follows onShare and applianceStep in loads.ts, inlined here to keep the loop free of allocations.
+import { thermostatDuty } from './loads';
 import type { LocalStep } from './routines';
 import { windowsShare } from './routines';
 import { resolveExposure, type ResolvedExposure } from './site-exposure';
-import { dayOfYearUtc, sunPosition } from './sun-position';
+import { sunPositionInto } from './sun-position';
 import { ambientC } from './temperature-curve';
 import {
   buildGrid, buildSegments, fillOffsets, HOUR_MS, localDayNumber, localMinuteOfDay, type Segment,
@@ -131,42 +132,64 @@ function clearSkyGhi(stop: Stop | undefined, altDeg: number, dniExtra: number): 
   return ineichenPerez({ zenithDeg: zen, airMassAbsolute: am, linkeTurbidity: stop.linkeTurbidity, elevationM: stop.elevationM, dniExtra }).ghi;
 }
 
+/** dayOfYearUtc and extraterrestrialW with the year's start and the last day remembered: one Date per year, not per step. */
+type DayCache = { yearStartMs: number; nextYearMs: number; day: number; dniExtra: number };
+
+function dniExtraAt(c: DayCache, utcMs: number, solarConstant: number): number {
+  if (!(utcMs >= c.yearStartMs && utcMs < c.nextYearMs)) {
+    const y = new Date(utcMs).getUTCFullYear();
+    c.yearStartMs = Date.UTC(y, 0, 1);
+    c.nextYearMs = Date.UTC(y + 1, 0, 1);
+    c.day = Number.NaN;
+  }
+  // The same expression as dayOfYearUtc, so the day (and the irradiance) is unchanged.
+  const day = Math.floor((utcMs - c.yearStartMs) / 86_400_000) + 1;
+  if (day !== c.day) {
+    c.day = day;
+    c.dniExtra = extraterrestrialW(day, solarConstant);
+  }
+  return c.dniExtra;
+}
+
 function fillSun(p: Prepared, stops: readonly Stop[], solarConstant: number): void {
+  const pos = new Float64Array(6); // start, middle, end: altitude and azimuth each
+  const days: DayCache = { yearStartMs: Number.NaN, nextYearMs: Number.NaN, day: Number.NaN, dniExtra: 0 };
   let prevEndMs = Number.NaN;
   let prevLat = Number.NaN;
   let prevLon = Number.NaN;
-  let prevAlt = 0;
-  let prevAz = 0;
   for (let i = 0; i < p.n; i++) {
     const t = p.startMs[i] ?? 0;
     const dt = (p.stepH[i] ?? 1) * HOUR_MS;
     const lat = p.lat[i] ?? 0;
     const lon = p.lon[i] ?? 0;
     const stop = stops[p.stopOf[i] ?? 0];
-    const dniExtra = extraterrestrialW(dayOfYearUtc(t), solarConstant);
+    const dniExtra = dniExtraAt(days, t, solarConstant);
     p.dniExtra[i] = dniExtra;
-    const mid = sunPosition(t + dt / 2, lat, lon);
-    p.sunAltMid[i] = mid.altitudeDeg;
+    sunPositionInto(t + dt / 2, lat, lon, pos, 2);
+    const midAlt = pos[2] ?? 0;
+    p.sunAltMid[i] = midAlt;
     const k = i * SAMPLES;
     // The sun moves under 8° in half an hour: well below the horizon at mid-step, the whole step is dark.
-    if (mid.altitudeDeg < -8) {
+    if (midAlt < -8) {
       for (let s = 0; s < SAMPLES; s++) p.alt[k + s] = -90;
       prevEndMs = Number.NaN;
       continue;
     }
-    const start = prevEndMs === t && prevLat === lat && prevLon === lon ? { altitudeDeg: prevAlt, azimuthDeg: prevAz } : sunPosition(t, lat, lon);
-    const end = sunPosition(t + dt, lat, lon);
-    const samples = [start, mid, end];
-    samples.forEach((sp, s) => {
-      p.alt[k + s] = sp.altitudeDeg;
-      p.az[k + s] = sp.azimuthDeg;
-      p.ghiClear[k + s] = clearSkyGhi(stop, sp.altitudeDeg, dniExtra);
-    });
+    // The previous step's end is this step's start when the rig has not moved: reuse it.
+    if (prevEndMs === t && prevLat === lat && prevLon === lon) {
+      pos[0] = pos[4] ?? 0;
+      pos[1] = pos[5] ?? 0;
+    } else sunPositionInto(t, lat, lon, pos, 0);
+    sunPositionInto(t + dt, lat, lon, pos, 4);
+    for (let s = 0; s < SAMPLES; s++) {
+      const alt = pos[2 * s] ?? 0;
+      p.alt[k + s] = alt;
+      p.az[k + s] = pos[2 * s + 1] ?? 0;
+      p.ghiClear[k + s] = clearSkyGhi(stop, alt, dniExtra);
+    }
     prevEndMs = t + dt;
     prevLat = lat;
     prevLon = lon;
-    prevAlt = end.altitudeDeg;
-    prevAz = end.azimuthDeg;
   }
 }
 
@@ -183,21 +206,84 @@ export function prevDayType(p: Prepared, i: number): DayType {
   return p.travelByDay[(p.dayIndex[i] ?? 0) - 1] ? 'travel' : 'camp';
 }
 
+/** The routine windows an appliance's schedule reads (its routine, or a thermostat's active windows). */
+function scheduleWindows(a: Appliance): readonly RoutineWindow[] | undefined {
+  const s = a.schedule;
+  return s.kind === 'routine' ? s.windows : s.kind === 'thermostat' ? s.activeWindows : undefined;
+}
+
+/**
+ * Steps that look the same to a routine (local start minute, length, today's and yesterday's day type) share a
+ * slot, so each appliance's routine share is worked out once per slot (a few dozen on a month-long trip) instead
+ * of once per step. Windows that name trip days also depend on the day, so those appliances are left per step.
+ */
+function stepSlots(p: Prepared): { slotOf: Int32Array; first: number[] } {
+  const slotOf = new Int32Array(p.n);
+  const first: number[] = [];
+  const byNumber = new Map<number, number>();
+  const byText = new Map<string, number>();
+  for (let i = 0; i < p.n; i++) {
+    const minute = p.minuteOfDay[i] ?? 0;
+    const stepH = p.stepH[i] ?? 1;
+    const types = (p.travelDay[i] ? 1 : 0) + (prevDayType(p, i) === 'travel' ? 2 : 0);
+    // Whole minutes and whole hours (nearly every step) key a number; anything else a string.
+    const whole = stepH === 1 && Number.isInteger(minute);
+    const numKey = minute * 4 + types;
+    const textKey = whole ? '' : `${minute}|${stepH}|${types}`;
+    let slot = whole ? byNumber.get(numKey) : byText.get(textKey);
+    if (slot === undefined) {
+      slot = first.length;
+      first.push(i);
+      if (whole) byNumber.set(numKey, slot);
+      else byText.set(textKey, slot);
+    }
+    slotOf[i] = slot;
+  }
+  return { slotOf, first };
+}
+
 function fillLoads(p: Prepared): void {
   const appliances = p.input.appliances;
+  const m = appliances.length;
   const stopsCount = p.input.trip.stops.length;
-  p.applianceStopWh = new Float64Array(appliances.length * stopsCount);
+  p.applianceStopWh = new Float64Array(m * stopsCount);
+  const { slotOf, first } = stepSlots(p);
+  // Per appliance: 0 share read from the slot table, 1 worked out per step (trip-day windows).
+  const perStep = new Uint8Array(m);
+  const slotShare = new Float64Array(first.length * m);
+  for (let j = 0; j < m; j++) {
+    const a = appliances[j];
+    if (!a) continue;
+    const windows = scheduleWindows(a);
+    if (windows?.some((w) => w.days.kind === 'trip-days')) {
+      perStep[j] = 1;
+      continue;
+    }
+    for (let slot = 0; slot < first.length; slot++) {
+      const i = first[slot] ?? 0;
+      slotShare[slot * m + j] = windows ? windowsShare(windows, localStep(p, i), prevDayType(p, i)) : 1;
+    }
+  }
   for (let i = 0; i < p.n; i++) {
     const where = p.where[i] ?? -1;
-    const step = localStep(p, i);
-    const prev = prevDayType(p, i);
     const dtH = p.stepH[i] ?? 1;
     const amb = p.ambientC[i] ?? 15;
+    const row = (slotOf[i] ?? 0) * m;
+    let step: LocalStep | null = null;
     let ac = 0, dc = 0, heat = 0, running = 0, surge = 0, standby = 0;
-    for (let j = 0; j < appliances.length; j++) {
+    for (let j = 0; j < m; j++) {
       const a = appliances[j];
       if (!a) continue;
-      const share = onShare(a, step, prev, amb);
+      const sched = a.schedule;
+      let windowShare: number;
+      if (perStep[j]) {
+        step ??= localStep(p, i);
+        const windows = scheduleWindows(a);
+        windowShare = windows ? windowsShare(windows, step, prevDayType(p, i)) : 1;
+      } else windowShare = slotShare[row + j] ?? 0;
+      // onShare in loads.ts, term for term: the routine share, or the active share times the thermostat duty.
+      const share = sched.kind === 'always' ? 1 : sched.kind === 'routine' ? windowShare
+        : windowShare * thermostatDuty(sched.mode, amb, sched.setPointC, sched.fullDutyDeltaC);
       const runShare = share * a.dutyCycle;
       const electricWh = a.quantity * (a.runningW * runShare + a.standbyW * (1 - runShare)) * dtH;
       if (where >= 0) p.applianceStopWh[j * stopsCount + where] = (p.applianceStopWh[j * stopsCount + where] ?? 0) + electricWh;

@@ -82,14 +82,58 @@ export function fillOffsets(zoneName: string, ms: Float64Array, from: number, to
   if (from === to - 1) out[from] = oa;
 }
 
+const TWO_DIGITS = Array.from({ length: 100 }, (_, i) => String(i).padStart(2, '0'));
+const LAST_MS = 253_402_300_800_000; // 10000-01-01T00:00Z: four-digit years only
+
+/** YYYY-MM-DDTHH:MM of a UTC instant, as new Date(ms).toISOString() spells it (civil date from days, Hinnant). */
+function isoMinutes(ms: number): string {
+  const days = Math.floor(ms / DAY_MS);
+  const msOfDay = ms - days * DAY_MS;
+  const z = days + 719_468;
+  const era = Math.floor(z / 146_097);
+  const doe = z - era * 146_097;
+  const yoe = Math.floor((doe - Math.floor(doe / 1460) + Math.floor(doe / 36_524) - Math.floor(doe / 146_096)) / 365);
+  const doy = doe - (365 * yoe + Math.floor(yoe / 4) - Math.floor(yoe / 100));
+  const mp = Math.floor((5 * doy + 2) / 153);
+  const day = doy - Math.floor((153 * mp + 2) / 5) + 1;
+  const month = mp < 10 ? mp + 3 : mp - 9;
+  const year = yoe + era * 400 + (month <= 2 ? 1 : 0);
+  const minuteOfDay = Math.floor(msOfDay / 60_000);
+  return `${String(year).padStart(4, '0')}-${TWO_DIGITS[month] ?? ''}-${TWO_DIGITS[day] ?? ''}T${TWO_DIGITS[Math.floor(minuteOfDay / 60)] ?? ''}:${TWO_DIGITS[minuteOfDay % 60] ?? ''}`;
+}
+
+/** Whole milliseconds from 1970 to 9999: the fast path; anything else goes through Date, as before. */
+const plainInstant = (ms: number): boolean => Number.isInteger(ms) && ms >= 0 && ms < LAST_MS;
+
+/** new Date(ms).toISOString() without the Date (the ledger labels every step). */
+export function utcIsoString(ms: number): string {
+  if (!plainInstant(ms)) return new Date(ms).toISOString();
+  const rest = ms - Math.floor(ms / 60_000) * 60_000;
+  const sec = Math.floor(rest / 1000);
+  const milli = rest - sec * 1000;
+  return `${isoMinutes(ms)}:${TWO_DIGITS[sec] ?? ''}.${String(milli).padStart(3, '0')}Z`;
+}
+
+const offsetSuffixes = new Map<number, string>();
+
+function offsetSuffix(offsetMin: number): string {
+  let text = offsetSuffixes.get(offsetMin);
+  if (text === undefined) {
+    const sign = offsetMin < 0 ? '-' : '+';
+    const abs = Math.abs(offsetMin);
+    const hh = String(Math.floor(abs / 60)).padStart(2, '0');
+    const mm = String(abs % 60).padStart(2, '0');
+    text = `${sign}${hh}:${mm}`;
+    offsetSuffixes.set(offsetMin, text);
+  }
+  return text;
+}
+
 /** A local wall-clock label such as 2027-09-12T14:00+01:00, built without Date's local getters. */
 export function localLabel(utcMs: number, offsetMin: number): string {
-  const wall = new Date(utcMs + offsetMin * 60_000).toISOString().slice(0, 16);
-  const sign = offsetMin < 0 ? '-' : '+';
-  const abs = Math.abs(offsetMin);
-  const hh = String(Math.floor(abs / 60)).padStart(2, '0');
-  const mm = String(abs % 60).padStart(2, '0');
-  return `${wall}${sign}${hh}:${mm}`;
+  const wallMs = utcMs + offsetMin * 60_000;
+  const wall = plainInstant(wallMs) ? isoMinutes(wallMs) : new Date(wallMs).toISOString().slice(0, 16);
+  return `${wall}${offsetSuffix(offsetMin)}`;
 }
 
 export function localDayNumber(utcMs: number, offsetMin: number): number {
