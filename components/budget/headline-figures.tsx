@@ -32,4 +32,4 @@ export function HeadlineFigures({ headline, units }: { headline: Headline; units
   );
 }
 
-const styles = StyleSheet.create({ card: { flexDirection: 'row', flexWrap: 'wrap', gap: space.xl, rowGap: space.lg } });
+const styles = StyleSheet.create({ card: { flexDirection: 'row', flexWrap: 'wrap', columnGap: space.lg, rowGap: space.lg } });

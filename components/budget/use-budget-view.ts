@@ -1,9 +1,9 @@
-import { simulateTrip } from '@/shared/engine';
 import type { SimulationResult } from '@/shared/engine/result-types';
 import type { TripDetail } from '@/shared/schemas/api';
 import { toEngineInput } from '@/shared/trip-to-engine-input';
 import { useBudgetQuery } from '@/stores/queries/budget';
 import { anyWhatIf, useWhatIf } from '@/stores/what-if-store';
+import { simulateCached } from './simulate-cached';
 import { applyWhatIf } from './what-if';
 
 export type BudgetView =
@@ -11,21 +11,6 @@ export type BudgetView =
   | { state: 'error'; error: unknown; retry: () => void }
   | { state: 'empty'; reason: string }
   | { state: 'ready'; result: SimulationResult; whatIf: boolean };
-
-type Simulated = { key: string; result: SimulationResult | null; error: string | null };
-// One simulation per distinct input: re-rendering the screen must not re-run the engine.
-let lastSimulated: Simulated | null = null;
-
-function simulateCached(input: Parameters<typeof simulateTrip>[0]): Simulated {
-  const key = JSON.stringify(input);
-  if (lastSimulated?.key === key) return lastSimulated;
-  try {
-    lastSimulated = { key, result: simulateTrip(input), error: null };
-  } catch (error) {
-    lastSimulated = { key, result: null, error: error instanceof Error ? error.message : 'The plan could not be simulated.' };
-  }
-  return lastSimulated;
-}
 
 /** The server's budget, or — while what-ifs are on — the same engine run in the browser on the changed input. */
 export function useBudgetView(detail: TripDetail): BudgetView {

@@ -30,6 +30,6 @@ export function Figure({ label, figure, note, color = 'ink', testID }: Props) {
 }
 
 const styles = StyleSheet.create({
-  wrap: { gap: 2, minWidth: 140, flexGrow: 1, flexBasis: 140 },
+  wrap: { gap: 2, minWidth: 120, flexGrow: 1, flexBasis: 120 },
   row: { flexDirection: 'row', alignItems: 'baseline', gap: space.xs, flexWrap: 'wrap' },
 });

@@ -1,0 +1,9 @@
+import { useLocalSearchParams } from 'expo-router';
+import { LoadsScreen } from '@/components/loads/loads-screen';
+import { useTripQuery } from '@/stores/queries/trips';
+
+export default function TripLoadsRoute() {
+  const { tripId } = useLocalSearchParams<{ tripId: string }>();
+  const trip = useTripQuery(tripId);
+  return trip.data ? <LoadsScreen detail={trip.data} /> : null;
+}

@@ -1,0 +1,130 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useState } from 'react';
+import { Controller, useForm, useWatch } from 'react-hook-form';
+import { StyleSheet, View } from 'react-native';
+import { space } from '@/components/theme/tokens';
+import { Banner } from '@/components/ui/banner';
+import { Button } from '@/components/ui/button';
+import { ChoiceChips } from '@/components/ui/choice-chips';
+import { ConflictNotice } from '@/components/ui/conflict-notice';
+import { NumberField } from '@/components/ui/number-field';
+import { TextField } from '@/components/ui/text-field';
+import { Caution } from '@/components/ui/cautions';
+import type { ApplianceRecord } from '@/shared/schemas/api';
+import { applianceFieldsSchema, type ApplianceFields } from '@/shared/schemas/appliance';
+import type { z } from 'zod';
+import { ApiError, conflictCurrent } from '@/stores/queries/api-client';
+import { useApplianceSaveMutation } from '@/stores/queries/appliances';
+import { showToast } from '@/stores/toast-store';
+
+type Props = { tripId: string; record: ApplianceRecord | null; initial: ApplianceFields; canEdit: boolean; onSaved: (r: ApplianceRecord) => void };
+
+const fieldsOf = (r: ApplianceRecord): ApplianceFields => {
+  const { id: _id, ...fields } = r.appliance;
+  return fields;
+};
+
+/** An appliance's own figures (name, circuit, watts, duty cycle); its routine is edited beside it. */
+export function ApplianceForm({ tripId, record, initial, canEdit, onSaved }: Props) {
+  const save = useApplianceSaveMutation(tripId);
+  const [formError, setFormError] = useState<string>();
+  const [conflict, setConflict] = useState<ApplianceRecord | null>(null);
+  const { control, handleSubmit, reset, formState } = useForm<z.input<typeof applianceFieldsSchema>, unknown, ApplianceFields>({ resolver: zodResolver(applianceFieldsSchema), defaultValues: initial });
+  const circuit = useWatch({ control, name: 'circuit' });
+
+  const send = (version: number | undefined) =>
+    handleSubmit(async (values) => {
+      setFormError(undefined);
+      try {
+        const saved = await save.mutateAsync({ applianceId: record?.id ?? null, version, appliance: values, caretakerUserId: record?.caretakerUserId ?? null });
+        setConflict(null);
+        showToast(`${values.name} saved`);
+        reset(fieldsOf(saved));
+        onSaved(saved);
+      } catch (error) {
+        const current = conflictCurrent<ApplianceRecord>(error);
+        if (current) setConflict(current);
+        // The form keeps what the person typed; only the message changes.
+        else setFormError(error instanceof ApiError ? error.message : 'The appliance could not be saved.');
+      }
+    });
+
+  const num = (name: 'runningW' | 'standbyW' | 'quantity' | 'heatInputW', label: string, unit?: string) => (
+    <Controller
+      control={control}
+      name={name}
+      render={({ field, fieldState }) => (
+        <View style={styles.cell}>
+          <NumberField testID={`appliance-${name}`} label={label} unit={unit} editable={canEdit} value={field.value} onChangeNumber={field.onChange} onBlur={field.onBlur} error={fieldState.error?.message} />
+        </View>
+      )}
+    />
+  );
+
+  return (
+    <View style={styles.form} testID="appliance-form">
+      {formError ? <Banner testID="appliance-form-error" message={formError} /> : null}
+      <Controller
+        control={control}
+        name="name"
+        render={({ field, fieldState }) => (
+          <TextField testID="appliance-name" label="Name" editable={canEdit} value={field.value} onChangeText={field.onChange} onBlur={field.onBlur} error={fieldState.error?.message} />
+        )}
+      />
+      <Controller
+        control={control}
+        name="circuit"
+        render={({ field }) => (
+          <ChoiceChips testID="appliance-circuit" label="Circuit" disabled={!canEdit} value={field.value} onChange={field.onChange} options={[{ value: 'ac', label: 'AC' }, { value: 'dc', label: 'DC' }, { value: 'fuel', label: 'Fuel' }]} />
+        )}
+      />
+      <View style={styles.grid}>
+        {num('runningW', circuit === 'fuel' ? 'Fan and controls' : 'Running', 'W')}
+        {num('standbyW', 'Standby', 'W')}
+        {num('quantity', 'How many')}
+        <Controller
+          control={control}
+          name="dutyCycle"
+          render={({ field, fieldState }) => (
+            <View style={styles.cell}>
+              <NumberField
+                testID="appliance-duty"
+                label="Duty cycle"
+                unit="%"
+                hint="share of its hours it really draws"
+                editable={canEdit}
+                value={field.value === undefined ? undefined : Math.round(field.value * 100)}
+                onChangeNumber={(v) => field.onChange(v === null ? null : v / 100)}
+                error={fieldState.error?.message}
+              />
+            </View>
+          )}
+        />
+        {circuit === 'fuel' ? num('heatInputW', 'Propane heat input', 'W') : null}
+      </View>
+      {circuit === 'fuel' ? <Caution kind="propane" testID="caution-propane-appliance" /> : null}
+      {conflict ? (
+        <ConflictNotice
+          testID="appliance-conflict"
+          what="appliance"
+          theirVersion={conflict.version}
+          busy={save.isPending}
+          onKeepMine={() => void send(conflict.version)()}
+          onTakeTheirs={() => {
+            reset(fieldsOf(conflict));
+            setConflict(null);
+          }}
+        />
+      ) : null}
+      {canEdit ? (
+        <Button testID="appliance-save" label={record ? 'Save appliance' : 'Add appliance'} busy={formState.isSubmitting} disabled={formState.isSubmitting} onPress={send(record?.version)} />
+      ) : null}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  form: { gap: space.lg },
+  grid: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md },
+  cell: { flexGrow: 1, flexBasis: 130 },
+});

@@ -1,0 +1,188 @@
+import { useState } from 'react';
+import { StyleSheet, View } from 'react-native';
+import { simulateCached } from '@/components/budget/simulate-cached';
+import { percent, temperature, text } from '@/components/format/units';
+import { colors, radii, space } from '@/components/theme/tokens';
+import { Button } from '@/components/ui/button';
+import { ChoiceChips } from '@/components/ui/choice-chips';
+import { ConflictNotice } from '@/components/ui/conflict-notice';
+import { NumberField } from '@/components/ui/number-field';
+import { Text } from '@/components/ui/text';
+import type { ApplianceRecord, TripDetail } from '@/shared/schemas/api';
+import { scheduleSchema, type Schedule } from '@/shared/schemas/appliance';
+import { toEngineInput } from '@/shared/trip-to-engine-input';
+import { fromDisplay, toDisplay } from '@/shared/units';
+import { conflictCurrent } from '@/stores/queries/api-client';
+import { useScheduleSaveMutation } from '@/stores/queries/appliances';
+import { useBudgetQuery } from '@/stores/queries/budget';
+import { showToast } from '@/stores/toast-store';
+import { useUnits } from '@/stores/units-store';
+import { formatWindow, setMinutes, stripOf, type StripKey } from './routine-cells';
+import { RoutineStrip } from './routine-strip';
+
+type Props = { detail: TripDetail; record: ApplianceRecord; canEdit: boolean };
+
+const STRIPS: { value: StripKey; label: string }[] = [
+  { value: 'all', label: 'Every day' },
+  { value: 'camp', label: 'Camp days' },
+  { value: 'travel', label: 'Travel days' },
+];
+
+/** The routine editor; changes are a draft (with a live estimate) until "Save routine". */
+export function ScheduleEditor({ detail, record, canEdit }: Props) {
+  const units = useUnits();
+  const save = useScheduleSaveMutation(detail.trip.id);
+  const budget = useBudgetQuery(detail.trip.id);
+  const [draft, setDraft] = useState<Schedule>(record.appliance.schedule);
+  const [base, setBase] = useState({ id: record.id, version: record.version });
+  const [strip, setStrip] = useState<StripKey>('all');
+  const [conflict, setConflict] = useState<ApplianceRecord | null>(null);
+  // A newer record from the server (after a save or a refetch) replaces the draft, unless a conflict is open.
+  if ((base.id !== record.id || base.version !== record.version) && !conflict) {
+    setBase({ id: record.id, version: record.version });
+    setDraft(record.appliance.schedule);
+  }
+  const dirty = JSON.stringify(draft) !== JSON.stringify(record.appliance.schedule);
+  const valid = scheduleSchema.safeParse(draft);
+
+  const input = dirty && valid.success ? toEngineInput({ ...detail, appliances: detail.appliances.map((a) => (a.id === record.id ? { ...a, appliance: { ...a.appliance, schedule: valid.data } } : a)) }) : null;
+  const preview = input ? simulateCached(input).result : null;
+  const before = budget.data?.result?.headline.lowestSocPct;
+
+  const submit = async (version: number) => {
+    if (!valid.success) return;
+    try {
+      await save.mutateAsync({ applianceId: record.id, version, schedule: valid.data });
+      setConflict(null);
+      showToast(`Routine saved for ${record.appliance.name}`);
+    } catch (error) {
+      const current = conflictCurrent<ApplianceRecord>(error);
+      if (current) setConflict(current);
+      else showToast(error instanceof Error ? error.message : 'The routine could not be saved.', { tone: 'danger' });
+    }
+  };
+
+  const windows = draft.kind === 'routine' ? draft.windows : draft.kind === 'thermostat' ? (draft.activeWindows ?? []) : [];
+  const setWindows = (w: typeof windows) => {
+    if (draft.kind === 'routine') setDraft({ ...draft, windows: w });
+    else if (draft.kind === 'thermostat') setDraft({ ...draft, activeWindows: w.length > 0 ? w : undefined });
+  };
+  const stripWindows = windows.map((w, i) => ({ w, i })).filter(({ w }) => stripOf(w.days) === strip);
+
+  return (
+    <View style={styles.wrap} testID="schedule-editor">
+      <Text variant="title" role="heading" aria-level={3}>
+        When it runs
+      </Text>
+      <ChoiceChips
+        testID="schedule-kind"
+        label="Runs"
+        disabled={!canEdit}
+        value={draft.kind}
+        options={[
+          { value: 'routine', label: 'On a routine' },
+          { value: 'always', label: 'All the time' },
+          { value: 'thermostat', label: 'By temperature' },
+        ]}
+        onChange={(kind) =>
+          setDraft(
+            kind === 'always'
+              ? { kind: 'always' }
+              : kind === 'thermostat'
+                ? { kind: 'thermostat', mode: 'heating', setPointC: 18, fullDutyDeltaC: 12 }
+                : { kind: 'routine', windows: [{ days: { kind: 'all' }, startHour: 19, startMinute: 0, minutes: 60 }] },
+          )
+        }
+      />
+      {draft.kind === 'thermostat' ? (
+        <View style={styles.fields}>
+          <ChoiceChips testID="thermostat-mode" label="Mode" disabled={!canEdit} value={draft.mode} options={[{ value: 'heating', label: 'Heating' }, { value: 'cooling', label: 'Cooling' }]} onChange={(mode) => setDraft({ ...draft, mode })} />
+          <NumberField
+            testID="thermostat-set-point"
+            label={draft.mode === 'heating' ? 'Heat below' : 'Cool above'}
+            unit={temperature(0, units).unit}
+            editable={canEdit}
+            value={Math.round(toDisplay(draft.setPointC, 'temperature', units).value)}
+            onChangeNumber={(v) => v !== null && setDraft({ ...draft, setPointC: fromDisplay(v, 'temperature', units) })}
+            error={valid.success ? undefined : valid.error.issues.find((i) => i.path.includes('setPointC'))?.message}
+          />
+          <Text variant="caption" color="inkSoft">
+            Optionally limit it to the hours below (for example while someone is aboard); leave them empty to follow the temperature all day.
+          </Text>
+        </View>
+      ) : null}
+      {draft.kind !== 'always' ? (
+        <>
+          <ChoiceChips testID="routine-strip-kind" label="Day type" value={strip} options={STRIPS} onChange={setStrip} />
+          <RoutineStrip testID="routine-strip" windows={windows} strip={strip} disabled={!canEdit} onChange={setWindows} />
+          {stripWindows.map(({ w, i }) => (
+            <View key={`${i}-${w.startHour}`} style={styles.window}>
+              <Text variant="label" style={styles.windowLabel}>
+                {formatWindow(w)}
+              </Text>
+              <View style={styles.minutes}>
+                <NumberField
+                  testID={`window-minutes-${w.startHour}`}
+                  label="Minutes"
+                  editable={canEdit}
+                  value={w.minutes}
+                  onChangeNumber={(v) => v !== null && v > 0 && setWindows(setMinutes(windows, i, v))}
+                />
+              </View>
+            </View>
+          ))}
+          {windows.some((w) => stripOf(w.days) === null) ? (
+            <Text variant="caption" color="inkSoft">
+              This routine also has windows on particular trip days; they are kept as they are.
+            </Text>
+          ) : null}
+        </>
+      ) : null}
+      {!valid.success && draft.kind === 'routine' ? (
+        <Text variant="caption" color="ember" role="alert">
+          Light at least one hour, or choose “All the time”.
+        </Text>
+      ) : null}
+      {preview ? (
+        <View style={styles.preview} testID="routine-preview">
+          <Text variant="label">
+            Lowest charge with this routine: {text(percent(preview.headline.lowestSocPct))}
+            {before !== undefined ? ` (saved plan: ${text(percent(before))})` : ''}
+          </Text>
+          <Text variant="caption" color="inkSoft">
+            Not saved yet.
+          </Text>
+        </View>
+      ) : null}
+      {conflict ? (
+        <ConflictNotice
+          testID="schedule-conflict"
+          what="appliance"
+          theirVersion={conflict.version}
+          busy={save.isPending}
+          onKeepMine={() => void submit(conflict.version)}
+          onTakeTheirs={() => {
+            setDraft(conflict.appliance.schedule);
+            setConflict(null);
+          }}
+        />
+      ) : null}
+      {canEdit ? (
+        <View style={styles.actions}>
+          <Button testID="schedule-save" label="Save routine" busy={save.isPending} disabled={!dirty || !valid.success} onPress={() => void submit(record.version)} />
+          {dirty ? <Button testID="schedule-reset" label="Undo changes" tone="quiet" onPress={() => setDraft(record.appliance.schedule)} /> : null}
+        </View>
+      ) : null}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  wrap: { gap: space.md },
+  fields: { gap: space.md },
+  window: { flexDirection: 'row', alignItems: 'flex-end', gap: space.md },
+  windowLabel: { flex: 1, paddingBottom: space.md },
+  minutes: { width: 120 },
+  preview: { padding: space.md, borderRadius: radii.md, backgroundColor: colors.pineSoft, gap: 2 },
+  actions: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
+});

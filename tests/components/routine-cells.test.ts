@@ -1,0 +1,94 @@
+import { describe, expect, it } from 'vitest';
+import {
+  cellsFor, dailyWh, formatWindow, hoursOfWindow, paintRange, runsOf, setMinutes, toggleCell, windowsFromCells, type Cells,
+} from '@/components/loads/routine-cells';
+import type { RoutineWindow } from '@/shared/schemas/common';
+
+const all = { kind: 'all' } as const;
+const camp = { kind: 'day-type', dayType: 'camp' } as const;
+const win = (startHour: number, minutes: number, startMinute = 0, days: RoutineWindow['days'] = all): RoutineWindow => ({ days, startHour, startMinute, minutes });
+const lit = (...hours: number[]): Cells => Array.from({ length: 24 }, (_, h) => hours.includes(h));
+
+describe('hoursOfWindow', () => {
+  it.each([
+    ['a whole hour', win(7, 60), [7]],
+    ['ten minutes at half past', win(7, 10, 30), [7]],
+    ['a window that ends exactly on the hour', win(18, 120), [18, 19]],
+    ['crossing into the next hour', win(7, 40, 30), [7, 8]],
+    ['across midnight', win(22, 180), [22, 23, 0]],
+    ['a whole day', win(0, 1440), Array.from({ length: 24 }, (_, h) => h)],
+  ])('when %s, then it lights the right cells', (_name, w, hours) => {
+    expect(hoursOfWindow(w).sort((a, b) => a - b)).toEqual([...hours].sort((a, b) => a - b));
+  });
+});
+
+describe('runsOf', () => {
+  it.each([
+    ['nothing lit', lit(), []],
+    ['one run', lit(7, 8, 9), [[7, 3]]],
+    ['two runs', lit(7, 19, 20), [[7, 1], [19, 2]]],
+    ['a run across midnight is one run', lit(22, 23, 0, 1), [[22, 4]]],
+    ['every hour', lit(...Array.from({ length: 24 }, (_, h) => h)), [[0, 24]]],
+  ])('when %s, then the runs are found', (_name, cells, runs) => {
+    expect(runsOf(cells)).toEqual(runs);
+  });
+});
+
+describe('cells and windows', () => {
+  it('when a cell is toggled on next to a window, then the windows merge into one run', () => {
+    const next = toggleCell([win(19, 60)], 'all', 20);
+    expect(next).toEqual([win(19, 120)]);
+  });
+
+  it('when a cell is toggled off in the middle, then the window splits in two', () => {
+    const next = toggleCell([win(18, 180)], 'all', 19);
+    expect(next).toEqual([win(18, 60), win(20, 60)]);
+  });
+
+  it('when another cell changes, then a short window keeps its minutes and start minute', () => {
+    const hairDryer = win(7, 10, 30);
+    const next = toggleCell([hairDryer], 'all', 21);
+    expect(next).toContainEqual(hairDryer);
+    expect(next).toContainEqual(win(21, 60));
+  });
+
+  it('when the camp-day strip is edited, then the every-day windows are untouched', () => {
+    const everyDay = win(7, 10);
+    const next = toggleCell([everyDay, win(8, 60, 0, camp)], 'camp', 8);
+    expect(next).toEqual([everyDay]);
+    expect(cellsFor(next, 'camp').some(Boolean)).toBe(false);
+  });
+
+  it('when windows for particular trip days exist, then editing a strip keeps them', () => {
+    const special = win(12, 30, 0, { kind: 'trip-days', dayIndexes: [2] });
+    expect(toggleCell([special], 'all', 5)).toContainEqual(special);
+  });
+
+  it('when a drag paints from 23 back to 20, then hours 20–23 are lit as one window', () => {
+    expect(paintRange([], 'all', 23, 20, true)).toEqual([win(20, 240)]);
+  });
+
+  it('when cells wrap past midnight, then one window crosses midnight', () => {
+    expect(windowsFromCells(lit(23, 0), 'all', [])).toEqual([win(23, 120)]);
+  });
+
+  it('when minutes are set beyond the lit hours, then they are held to the hours', () => {
+    expect(setMinutes([win(7, 60)], 0, 90)).toEqual([win(7, 60)]);
+    expect(setMinutes([win(7, 10, 30)], 0, 25)).toEqual([win(7, 25)]);
+  });
+});
+
+describe('dailyWh and formatWindow', () => {
+  it('when a 60 W laptop runs 3 h, then it uses 180 Wh a day', () => {
+    expect(dailyWh([win(19, 180)], 'all', 60, 1)).toBe(180);
+  });
+  it('when a fridge cycles at a third duty all day, then energy scales with it', () => {
+    expect(dailyWh([win(0, 1440)], 'all', 45, 1 / 3)).toBeCloseTo(360);
+  });
+  it.each([
+    [win(7, 10, 30), '07:30–07:40'],
+    [win(22, 180), '22:00–01:00'],
+  ])('when a window is shown, then it reads as a time range', (w, label) => {
+    expect(formatWindow(w)).toBe(label);
+  });
+});
