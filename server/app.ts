@@ -11,6 +11,7 @@ import type { Db } from '../db/client';
 import { createAuth } from './auth';
 import type { Auth } from './auth';
 import { HttpError } from './errors';
+import type { CapturedMail } from './mail/local-smtp';
 import type { Mailer } from './mail/mailer';
 import { errorHandler } from './middleware/error-handler';
 import { requireSession } from './middleware/require-session';
@@ -18,6 +19,7 @@ import { healthRouter } from './routes/health';
 import { preferencesRouter } from './routes/preferences';
 import { rigPresetsRouter, rigsRouter } from './routes/rigs';
 import { tripsRouter } from './routes/trips';
+import { inviteLinksRouter } from './routes/invite-links';
 import { createBudgetService } from './budget-service';
 import { webStatic } from './web-static';
 import packageJson from '../package.json';
@@ -29,6 +31,9 @@ export type AppConfig = {
   devWebOrigin?: string;
   webDir?: string;
   authRateLimit?: { windowMs: number; limit: number };
+  requireEmailVerification?: boolean;
+  /** Hides development-only routes (the Outbox). */
+  production?: boolean;
 };
 
 export type AppDeps = {
@@ -37,6 +42,8 @@ export type AppDeps = {
   now: () => Date;
   config: AppConfig;
   logger?: Logger;
+  /** The local SMTP fake's captured mail, shown by the development Outbox. */
+  outbox?: { messages: () => CapturedMail[] };
 };
 
 export type TrailtallyApp = Express & { locals: { auth: Auth } };
@@ -47,7 +54,13 @@ const JSON_BODY_LIMIT = '100kb';
 export function createApp(deps: AppDeps): TrailtallyApp {
   const { db, config } = deps;
   const trustedOrigins = [config.publicUrl, ...(config.devWebOrigin ? [config.devWebOrigin] : [])];
-  const auth = createAuth(db, { secret: config.authSecret, baseUrl: config.publicUrl, trustedOrigins });
+  const auth = createAuth(db, {
+    secret: config.authSecret,
+    baseUrl: config.publicUrl,
+    trustedOrigins,
+    mailer: deps.mailer,
+    requireEmailVerification: config.requireEmailVerification ?? false,
+  });
 
   const app = express() as TrailtallyApp;
   app.locals.auth = auth;
@@ -87,7 +100,8 @@ export function createApp(deps: AppDeps): TrailtallyApp {
   app.use('/api/health', healthRouter({ db, version: packageJson.version }));
   const budgets = createBudgetService(db);
   const signedIn = requireSession(auth);
-  app.use('/api/trips', signedIn, tripsRouter({ db, now: deps.now, budgets }));
+  app.use('/api/trips', signedIn, tripsRouter({ db, now: deps.now, budgets, mailer: deps.mailer, publicUrl: config.publicUrl }));
+  app.use('/api/invites', inviteLinksRouter({ db, now: deps.now, auth }));
   app.use('/api/rigs', signedIn, rigsRouter({ db, now: deps.now }));
   app.use('/api/rig-presets', signedIn, rigPresetsRouter());
   app.use('/api/me/preferences', signedIn, preferencesRouter({ db }));

@@ -2,11 +2,16 @@ import { betterAuth } from 'better-auth';
 import { drizzleAdapter } from 'better-auth/adapters/drizzle';
 import type { Db } from '../db/client';
 import { account, session, user, verification } from '../db/schema/auth';
+import type { Mailer } from './mail/mailer';
+import { resetPasswordMail, verifyEmailMail } from './mail/templates';
 
 export type AuthConfig = {
   secret: string;
   baseUrl: string;
   trustedOrigins: string[];
+  mailer: Mailer;
+  /** Whether sign-in waits for a verified e-mail address (a deployment setting; see README). */
+  requireEmailVerification: boolean;
 };
 
 export function createAuth(db: Db, config: AuthConfig) {
@@ -24,7 +29,19 @@ export function createAuth(db: Db, config: AuthConfig) {
       enabled: true,
       minPasswordLength: 8,
       maxPasswordLength: 128,
-      autoSignIn: true,
+      autoSignIn: !config.requireEmailVerification,
+      requireEmailVerification: config.requireEmailVerification,
+      resetPasswordTokenExpiresIn: 60 * 60,
+      sendResetPassword: async ({ user: who, url }) => {
+        await config.mailer.send(resetPasswordMail({ to: who.email, name: who.name, url }));
+      },
+    },
+    emailVerification: {
+      sendOnSignUp: true,
+      autoSignInAfterVerification: true,
+      sendVerificationEmail: async ({ user: who, url }) => {
+        await config.mailer.send(verifyEmailMail({ to: who.email, name: who.name, url }));
+      },
     },
     // Requests are limited by express-rate-limit in front of this handler, one policy for all.
     rateLimit: { enabled: false },

@@ -15,9 +15,16 @@ const envSchema = z.object({
   DEV_WEB_ORIGIN: z.url().optional(),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
   SEED_DEMO: z.enum(['auto', 'never']).default('auto'),
+  /** A provider's SMTP URL (smtp[s]://user:pass@host:port). Unset: a local SMTP fake on loopback keeps the mail. */
+  SMTP_URL: z.url().optional(),
+  /** Port for the local SMTP fake; 0 picks a free one. */
+  SMTP_FAKE_PORT: z.coerce.number().int().min(0).max(65535).default(0),
+  /** Whether sign-in waits until the e-mail address is verified. Default: on in production, off otherwise. */
+  REQUIRE_EMAIL_VERIFICATION: z.enum(['true', 'false']).optional(),
 });
 
-export type Env = z.infer<typeof envSchema> & {
+export type Env = Omit<z.infer<typeof envSchema>, 'REQUIRE_EMAIL_VERIFICATION'> & {
+  REQUIRE_EMAIL_VERIFICATION: boolean;
   DATA_DIR: string;
   PUBLIC_URL: string;
   BETTER_AUTH_SECRET: string;
@@ -33,6 +40,9 @@ export function loadEnv(source: NodeJS.ProcessEnv = process.env): Env {
   const dataDir = path.dirname(path.resolve(env.DATABASE_PATH));
   return {
     ...env,
+    REQUIRE_EMAIL_VERIFICATION: env.REQUIRE_EMAIL_VERIFICATION
+      ? env.REQUIRE_EMAIL_VERIFICATION === 'true'
+      : env.NODE_ENV === 'production',
     DATA_DIR: dataDir,
     PUBLIC_URL: env.PUBLIC_URL ?? `http://localhost:${env.PORT}`,
     BETTER_AUTH_SECRET: env.BETTER_AUTH_SECRET ?? readOrCreateSecret(dataDir),

@@ -9,6 +9,11 @@ export type ErrorCode =
   | 'unprocessable'
   | 'payload_too_large'
   | 'rate_limited'
+  | 'invite_invalid'
+  | 'invite_expired'
+  | 'invite_used'
+  | 'invite_revoked'
+  | 'invite_wrong_account'
   | 'internal';
 
 export type ErrorBody = {

@@ -4,7 +4,8 @@ import { runMigrations } from '../db/migrate';
 import { demoSignInText, isDatabaseEmpty, seedDemo } from '../db/seed';
 import { createApp } from './app';
 import { loadEnv } from './env';
-import { createMemoryMailer } from './mail/mailer';
+import { startLocalSmtp, type LocalSmtp } from './mail/local-smtp';
+import { createSmtpMailer } from './mail/mailer';
 
 /** Starts the server: migrate, seed demo data on a first start, listen, and close cleanly on signals. */
 export async function main(): Promise<void> {
@@ -13,9 +14,16 @@ export async function main(): Promise<void> {
   const db = openDatabase(env.DATABASE_PATH);
   runMigrations(db);
 
+  // Without a provider configured, mail goes to a local SMTP fake that the Outbox shows.
+  let localSmtp: LocalSmtp | undefined;
+  if (!env.SMTP_URL) {
+    localSmtp = await startLocalSmtp(env.SMTP_FAKE_PORT);
+    console.log(`No SMTP_URL set: e-mail is kept by a local SMTP fake on ${localSmtp.url}${env.NODE_ENV === 'production' ? '' : ' (see /outbox)'}`);
+  }
   const app = createApp({
     db,
-    mailer: createMemoryMailer(),
+    mailer: createSmtpMailer(env.SMTP_URL ?? localSmtp?.url ?? ''),
+    ...(localSmtp ? { outbox: localSmtp } : {}),
     now: () => new Date(),
     logger,
     config: {
@@ -23,6 +31,8 @@ export async function main(): Promise<void> {
       publicUrl: env.PUBLIC_URL,
       devWebOrigin: env.DEV_WEB_ORIGIN,
       webDir: env.WEB_DIR,
+      requireEmailVerification: env.REQUIRE_EMAIL_VERIFICATION,
+      production: env.NODE_ENV === 'production',
     },
   });
 
@@ -43,6 +53,7 @@ export async function main(): Promise<void> {
     closing = true;
     console.log(`${signal} received, closing…`);
     server.close(() => {
+      void localSmtp?.close();
       db.$client.close();
       process.exit(0);
     });

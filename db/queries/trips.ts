@@ -84,7 +84,7 @@ export type NewTrip = { ownerId: string; name: string; startDate: string; endDat
 export function insertTrip(db: DbExecutor, trip: NewTrip, now: Date, id: string = crypto.randomUUID()): TripRow {
   const row = db
     .insert(trips)
-    .values({ id, ...trip, notes: trip.notes ?? '', createdAt: now, updatedAt: now, version: 1, revision: 1 })
+    .values({ id, ...trip, notes: trip.notes ?? '', createdAt: now, updatedAt: now, version: 1, revision: 1, routeRevision: 1 })
     .returning()
     .get();
   db.insert(memberships).values({ tripId: id, userId: trip.ownerId, role: 'owner', createdAt: now }).run();
@@ -100,12 +100,13 @@ export function insertRig(db: DbExecutor, owner: { ownerId: string; tripId: stri
 }
 
 /** Marks the trip changed so cached budgets and ETags are renewed. */
-export function touchTrip(db: DbExecutor, tripId: string, now: Date, { bumpVersion = false } = {}): void {
+export function touchTrip(db: DbExecutor, tripId: string, now: Date, { bumpVersion = false, routeChanged = false } = {}): void {
   db.update(trips)
     .set({
       revision: sql`${trips.revision} + 1`,
       updatedAt: now,
       ...(bumpVersion ? { version: sql`${trips.version} + 1` } : {}),
+      ...(routeChanged ? { routeRevision: sql`${trips.routeRevision} + 1` } : {}),
     })
     .where(eq(trips.id, tripId))
     .run();

@@ -7,3 +7,5 @@ export * from './appliances';
 export * from './memberships';
 export * from './activity';
 export * from './preferences';
+export * from './invites';
+export * from './clubs';

@@ -23,6 +23,8 @@ export const trips = sqliteTable(
     // Bumped on any change to the trip or anything in it (stops, drives, rig, appliances): the
     // budget's cache key and ETag.
     revision: integer('revision').notNull().default(1),
+    // Bumped when stops or drives change: copies of a shared trip compare it to say "the route changed".
+    routeRevision: integer('route_revision').notNull().default(1),
   },
   (table) => [index('trips_owner_idx').on(table.ownerId)],
 );

@@ -7,7 +7,7 @@ export type Mailer = { send(message: MailMessage): Promise<void> };
 
 const FROM = 'Trailtally <no-reply@trailtally.local>';
 
-/** A mailer over any nodemailer transport (SMTP in real use). */
+/** A mailer over any nodemailer transport: a provider's SMTP, or the local fake. */
 export function createMailer(transport: Transporter): Mailer {
   return {
     async send(message) {
@@ -16,17 +16,12 @@ export function createMailer(transport: Transporter): Mailer {
   };
 }
 
-/** Keeps messages in memory; for tests and for running without any SMTP configured. */
-export function createMemoryMailer(): Mailer & { sent: MailMessage[] } {
-  const sent: MailMessage[] = [];
-  return {
-    sent,
-    async send(message) {
-      sent.push(message);
-    },
-  };
-}
-
 export function createSmtpMailer(smtpUrl: string): Mailer {
-  return createMailer(nodemailer.createTransport(smtpUrl));
+  const url = new URL(smtpUrl);
+  // The local fake speaks plain SMTP on loopback; a provider's URL carries its own TLS settings.
+  const local = url.hostname === '127.0.0.1' || url.hostname === 'localhost';
+  const transport = local
+    ? nodemailer.createTransport({ host: url.hostname, port: Number(url.port), secure: false, ignoreTLS: true })
+    : nodemailer.createTransport(smtpUrl);
+  return createMailer(transport);
 }

@@ -34,7 +34,7 @@ export function drivesRouter({ db, now }: { db: Db; now: () => Date }): Router {
         .where(eq(drives.id, driveId))
         .returning()
         .get();
-      touchTrip(tx, tripId, now());
+      touchTrip(tx, tripId, now(), { routeChanged: true });
       logActivity(tx, { tripId, userId, summary: `changed the drive to ${to?.name ?? 'the next stop'}`, at: now() });
       return driveRecord(row);
     });

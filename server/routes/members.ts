@@ -3,6 +3,10 @@ import type { Db } from '@/db/client';
 import { listMembers, removeMember, setMemberRole } from '@/db/queries/members';
 import { findTrip, logActivity, touchTrip } from '@/db/queries/trips';
 import { updateMemberRoleRequestSchema } from '@/shared/schemas/api';
+import { handOverRequestSchema } from '@/shared/schemas/sharing';
+import { trips } from '@/db/schema/trips';
+import { eq } from 'drizzle-orm';
+import { findMembership } from '@/db/queries/trips';
 import { HttpError, notFound } from '../errors';
 import { requirePermission, tripAccess } from '../middleware/trip-access';
 
@@ -11,6 +15,22 @@ export function membersRouter({ db, now }: { db: Db; now: () => Date }): Router 
 
   router.get('/', (_req, res) => {
     res.json({ members: listMembers(db, tripAccess(res).tripId) });
+  });
+
+  // Hand the trip to another member: they become owner, the previous owner stays on as planner.
+  router.post('/hand-over', requirePermission('manageMembers'), (req, res) => {
+    const { tripId, userId } = tripAccess(res);
+    const { userId: target } = handOverRequestSchema.parse(req.body);
+    if (target === userId) throw new HttpError(422, 'unprocessable', 'You already own this trip.', { userId: ['Choose another member.'] });
+    db.transaction((tx) => {
+      if (!findMembership(tx, tripId, target)) throw notFound('That member was not found.');
+      setMemberRole(tx, tripId, target, 'owner');
+      setMemberRole(tx, tripId, userId, 'planner');
+      tx.update(trips).set({ ownerId: target }).where(eq(trips.id, tripId)).run();
+      touchTrip(tx, tripId, now());
+      logActivity(tx, { tripId, userId, summary: 'handed ownership to another member', at: now() });
+    });
+    res.json({ members: listMembers(db, tripId) });
   });
 
   router.patch('/:userId', requirePermission('manageMembers'), (req, res) => {

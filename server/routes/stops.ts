@@ -31,7 +31,7 @@ export function stopsRouter({ db, now }: Deps): Router {
     const row = db.transaction((tx) => {
       assertFits(tx, tripId, stop);
       const inserted = insertStop(tx, tripId, stop, notes);
-      touchTrip(tx, tripId, now());
+      touchTrip(tx, tripId, now(), { routeChanged: true });
       logActivity(tx, { tripId, userId, summary: `added the stop ${stop.name}`, at: now() });
       return inserted;
     });
@@ -52,7 +52,7 @@ export function stopsRouter({ db, now }: Deps): Router {
         .find((found) => found !== null);
       // Rolls back the whole reorder: the new layout would run past the trip's last day.
       if (breach) throw unprocessable('stopIds', `That order does not fit inside the trip's dates: ${breach.message}`);
-      touchTrip(tx, tripId, now(), { bumpVersion: true });
+      touchTrip(tx, tripId, now(), { bumpVersion: true, routeChanged: true });
       logActivity(tx, { tripId, userId, summary: 'reordered the stops', at: now() });
     });
     res.json(loadTripDetail(db, tripId, role));
@@ -67,7 +67,7 @@ export function stopsRouter({ db, now }: Deps): Router {
       const result = updateStop(tx, tripId, stopId, version, stop, notes);
       if (result.status === 'ok') assertFits(tx, tripId, stop, stopId);
       const updated = unwrapWrite(result, stopRecord, 'stop');
-      touchTrip(tx, tripId, now());
+      touchTrip(tx, tripId, now(), { routeChanged: true });
       logActivity(tx, { tripId, userId, summary: `changed the stop ${stop.name}`, at: now() });
       return updated;
     });
@@ -80,7 +80,7 @@ export function stopsRouter({ db, now }: Deps): Router {
     db.transaction((tx) => {
       const row = findStopRow(tx, tripId, stopId);
       if (!row || !deleteStop(tx, tripId, stopId)) throw notFound('That stop was not found.');
-      touchTrip(tx, tripId, now());
+      touchTrip(tx, tripId, now(), { routeChanged: true });
       logActivity(tx, { tripId, userId, summary: `removed the stop ${row.name}`, at: now() });
     });
     res.status(204).end();

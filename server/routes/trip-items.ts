@@ -9,15 +9,20 @@ import { drivesRouter } from './drives';
 import { membersRouter } from './members';
 import { stopsRouter } from './stops';
 import { tripRigRouter } from './trip-rig';
+import { tripInvitesRouter } from './trip-invites';
+import type { Mailer } from '../mail/mailer';
 
 /** Everything under /api/trips/:tripId/… once the caller's role is known. */
-export function tripItemsRouter(deps: { db: Db; now: () => Date; budgets: BudgetService }): Router {
+export type TripItemsDeps = { db: Db; now: () => Date; budgets: BudgetService; mailer: Mailer; publicUrl: string };
+
+export function tripItemsRouter(deps: TripItemsDeps): Router {
   const router = Router({ mergeParams: true });
   router.use('/stops', stopsRouter(deps));
   router.use('/drives', drivesRouter(deps));
   router.use('/appliances', appliancesRouter(deps));
   router.use('/rig', tripRigRouter(deps));
   router.use('/members', membersRouter(deps));
+  router.use('/invites', tripInvitesRouter(deps));
 
   router.get('/budget', (req, res) => {
     const answer = deps.budgets.forTrip(tripAccess(res).tripId);

@@ -10,16 +10,14 @@ import { listStopRows } from '@/db/queries/stops';
 import { findTrip, findTripRig, insertRig, insertTrip, listTripsForMember, loadTripDetail, logActivity, toTripSummary, touchTrip } from '@/db/queries/trips';
 import { trips } from '@/db/schema/trips';
 import { eq } from 'drizzle-orm';
-import type { BudgetService } from '../budget-service';
 import { conflict, notFound, unprocessable } from '../errors';
 import { currentUser } from '../middleware/require-session';
 import { loadTripAccess, requirePermission, tripAccess } from '../middleware/trip-access';
 import { duplicateTrip } from '../trip-copy';
-import { tripItemsRouter } from './trip-items';
+import { tripItemsRouter, type TripItemsDeps } from './trip-items';
 
-type Deps = { db: Db; now: () => Date; budgets: BudgetService };
-
-export function tripsRouter({ db, now, budgets }: Deps): Router {
+export function tripsRouter(deps: TripItemsDeps): Router {
+  const { db, now, budgets } = deps;
   const router = Router();
 
   router.get('/', (_req, res) => {
@@ -103,7 +101,7 @@ export function tripsRouter({ db, now, budgets }: Deps): Router {
     res.status(201).json(loadTripDetail(db, copyId, 'owner'));
   });
 
-  trip.use(tripItemsRouter({ db, now, budgets }));
+  trip.use(tripItemsRouter(deps));
   return router;
 }
 

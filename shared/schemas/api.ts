@@ -7,6 +7,7 @@ import { roleSchema } from './roles';
 import { driveSchema, stopSchema } from './trip';
 import { isoDateSchema, tripSummarySchema } from './trip-summary';
 import { timeZoneSchema } from './common';
+import { basedOnSchema } from './sharing';
 
 /** Every update names the version it was based on; a stale one gets 409 with the current record. */
 export const versionSchema = z.number().int().min(1);
@@ -41,6 +42,8 @@ export const tripDetailSchema = z.object({
   stops: z.array(stopRecordSchema),
   drives: z.array(driveRecordSchema),
   appliances: z.array(applianceRecordSchema),
+  /** Set on a member's copy of a club's trip. */
+  basedOn: basedOnSchema.nullable().optional(),
 });
 export type TripDetail = z.infer<typeof tripDetailSchema>;
 

@@ -5,7 +5,7 @@ import request from 'supertest';
 import { openDatabase, type Db } from '@/db/client';
 import { runMigrations } from '@/db/migrate';
 import { createApp, type TrailtallyApp } from '@/server/app';
-import { createMemoryMailer } from '@/server/mail/mailer';
+import { createMemoryMailer } from './memory-mailer';
 
 export type TestContext = {
   app: TrailtallyApp;

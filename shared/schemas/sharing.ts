@@ -1,0 +1,107 @@
+// Contracts for sharing: trip invites, clubs, and copies of a club's trip onto a member's rig.
+import { z } from 'zod';
+
+export const inviteRoleSchema = z.enum(['planner', 'crew', 'viewer'], {
+  error: 'Invite as planner, crew or viewer; ownership is handed over separately.',
+});
+export type InviteRole = z.infer<typeof inviteRoleSchema>;
+
+export const createInviteRequestSchema = z
+  .object({
+    email: z.email({ error: 'Enter an e-mail address like name@example.com.' }).max(254),
+    role: inviteRoleSchema,
+    message: z.string().trim().max(500, { error: 'Keep the note under 500 characters.' }).optional(),
+  })
+  .strict();
+export type CreateInviteRequest = z.input<typeof createInviteRequestSchema>;
+
+export const pendingInviteSchema = z.object({
+  id: z.string(),
+  email: z.string(),
+  role: inviteRoleSchema,
+  invitedByName: z.string().nullable(),
+  createdAt: z.string(),
+  expiresAt: z.string(),
+});
+export type PendingInvite = z.infer<typeof pendingInviteSchema>;
+
+export const inviteStatusSchema = z.enum(['valid', 'expired', 'used', 'revoked']);
+
+/** What the invite page shows before the invitee joins. */
+export const invitePreviewSchema = z.object({
+  kind: z.enum(['trip', 'club']),
+  name: z.string(),
+  role: z.string(),
+  email: z.string(),
+  invitedByName: z.string().nullable(),
+  status: inviteStatusSchema,
+  expiresAt: z.string(),
+});
+export type InvitePreview = z.infer<typeof invitePreviewSchema>;
+
+export const handOverRequestSchema = z.object({ userId: z.string().min(1).max(64) }).strict();
+
+export const createClubRequestSchema = z
+  .object({ name: z.string().trim().min(1, { error: 'Give the club a name.' }).max(120) })
+  .strict();
+
+/** Many households at once: pasted addresses ("Name <a@b>", commas or new lines) and/or a CSV of names and e-mails. */
+export const clubInviteRequestSchema = z
+  .object({
+    addresses: z.string().max(50_000).optional(),
+    csv: z.string().max(50_000).optional(),
+  })
+  .strict()
+  .refine((body) => (body.addresses ?? '').trim() !== '' || (body.csv ?? '').trim() !== '', {
+    message: 'Paste some addresses or choose a CSV file.',
+    path: ['addresses'],
+  });
+export type ClubInviteRequest = z.input<typeof clubInviteRequestSchema>;
+
+export const clubInviteReportSchema = z.object({
+  sent: z.array(z.object({ email: z.string(), name: z.string().nullable() })),
+  rejected: z.array(z.object({ line: z.number().int(), value: z.string(), reason: z.string() })),
+});
+export type ClubInviteReport = z.infer<typeof clubInviteReportSchema>;
+
+export const shareTripRequestSchema = z.object({ tripId: z.string().min(1).max(64) }).strict();
+
+export const copyTripRequestSchema = z
+  .object({ rigId: z.string().min(1).max(64), name: z.string().trim().min(1).max(120).optional() })
+  .strict();
+
+export const clubSummarySchema = z.object({
+  id: z.string(),
+  name: z.string(),
+  role: z.enum(['organiser', 'member']),
+  memberCount: z.number().int(),
+  sharedTripCount: z.number().int(),
+});
+export type ClubSummary = z.infer<typeof clubSummarySchema>;
+
+export const clubSharedTripSchema = z.object({
+  tripId: z.string(),
+  name: z.string(),
+  startDate: z.string(),
+  endDate: z.string(),
+  sharedByName: z.string().nullable(),
+  /** Households that copied it onto their own rig; the organiser sees the count, never their data. */
+  copies: z.number().int(),
+  myCopyTripId: z.string().nullable(),
+});
+
+export const clubDetailSchema = z.object({
+  club: clubSummarySchema,
+  members: z.array(z.object({ userId: z.string(), name: z.string(), role: z.enum(['organiser', 'member']) })),
+  pendingInvites: z.array(z.object({ id: z.string(), email: z.string(), name: z.string().nullable(), expiresAt: z.string() })),
+  trips: z.array(clubSharedTripSchema),
+});
+export type ClubDetail = z.infer<typeof clubDetailSchema>;
+
+export const basedOnSchema = z.object({
+  tripId: z.string(),
+  name: z.string(),
+  /** The original's stops or drives changed since this copy was made (or last acknowledged). */
+  routeChanged: z.boolean(),
+});
+export type BasedOn = z.infer<typeof basedOnSchema>;
