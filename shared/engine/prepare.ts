@@ -212,12 +212,15 @@ function scheduleWindows(a: Appliance): readonly RoutineWindow[] | undefined {
   return s.kind === 'routine' ? s.windows : s.kind === 'thermostat' ? s.activeWindows : undefined;
 }
 
+type Slots = { slotOf: Int32Array; first: number[] };
+
 /**
- * Steps that look the same to a routine (local start minute, length, today's and yesterday's day type) share a
- * slot, so each appliance's routine share is worked out once per slot (a few dozen on a month-long trip) instead
- * of once per step. Windows that name trip days also depend on the day, so those appliances are left per step.
+ * Steps that look the same to a routine (local start minute and length, and, when `withDayTypes`, today's and
+ * yesterday's day type) share a slot, so each appliance's routine share is worked out once per slot (a day's
+ * worth on a month-long trip) instead of once per step. Windows that name trip days also depend on the day, so
+ * those appliances are worked out per step.
  */
-function stepSlots(p: Prepared): { slotOf: Int32Array; first: number[] } {
+function stepSlots(p: Prepared, withDayTypes: boolean): Slots {
   const slotOf = new Int32Array(p.n);
   const first: number[] = [];
   const byNumber = new Map<number, number>();
@@ -225,7 +228,7 @@ function stepSlots(p: Prepared): { slotOf: Int32Array; first: number[] } {
   for (let i = 0; i < p.n; i++) {
     const minute = p.minuteOfDay[i] ?? 0;
     const stepH = p.stepH[i] ?? 1;
-    const types = (p.travelDay[i] ? 1 : 0) + (prevDayType(p, i) === 'travel' ? 2 : 0);
+    const types = withDayTypes ? (p.travelDay[i] ? 1 : 0) + (prevDayType(p, i) === 'travel' ? 2 : 0) : 0;
     // Whole minutes and whole hours (nearly every step) key a number; anything else a string.
     const whole = stepH === 1 && Number.isInteger(minute);
     const numKey = minute * 4 + types;
@@ -242,69 +245,74 @@ function stepSlots(p: Prepared): { slotOf: Int32Array; first: number[] } {
   return { slotOf, first };
 }
 
+/** Each step's scheduled share for one appliance (onShare in loads.ts, term for term) into `share`. */
+function fillShares(p: Prepared, a: Appliance, slots: () => { time: Slots; typed: Slots }, share: Float64Array): void {
+  const sched = a.schedule;
+  const n = p.n;
+  if (sched.kind === 'always') {
+    share.fill(1, 0, n);
+    return;
+  }
+  const windows = sched.kind === 'routine' ? sched.windows : sched.activeWindows;
+  if (!windows) share.fill(1, 0, n);
+  else if (windows.some((w) => w.days.kind === 'trip-days')) {
+    for (let i = 0; i < n; i++) share[i] = windowsShare(windows, localStep(p, i), prevDayType(p, i));
+  } else {
+    const all = slots();
+    const { slotOf, first } = windows.some((w) => w.days.kind === 'day-type') ? all.typed : all.time;
+    const slotShare = new Float64Array(first.length);
+    for (let slot = 0; slot < first.length; slot++) {
+      const at = first[slot] ?? 0;
+      slotShare[slot] = windowsShare(windows, localStep(p, at), prevDayType(p, at));
+    }
+    for (let i = 0; i < n; i++) share[i] = slotShare[slotOf[i] ?? 0] ?? 0;
+  }
+  if (sched.kind === 'thermostat') {
+    const amb = p.ambientC;
+    for (let i = 0; i < n; i++) share[i] = (share[i] ?? 0) * thermostatDuty(sched.mode, amb[i] ?? 15, sched.setPointC, sched.fullDutyDeltaC);
+  }
+}
+
 function fillLoads(p: Prepared): void {
   const appliances = p.input.appliances;
-  const m = appliances.length;
   const stopsCount = p.input.trip.stops.length;
-  p.applianceStopWh = new Float64Array(m * stopsCount);
-  const { slotOf, first } = stepSlots(p);
-  // Per appliance: 0 share read from the slot table, 1 worked out per step (trip-day windows).
-  const perStep = new Uint8Array(m);
-  const slotShare = new Float64Array(first.length * m);
-  for (let j = 0; j < m; j++) {
+  const n = p.n;
+  const stopWh = new Float64Array(appliances.length * stopsCount);
+  p.applianceStopWh = stopWh;
+  let known: { time: Slots; typed: Slots } | null = null;
+  const slots = (): { time: Slots; typed: Slots } => (known ??= { time: stepSlots(p, false), typed: stepSlots(p, true) });
+  const share = new Float64Array(n);
+  const { stepH, where, acWh, dcWh, heatWh, acRunningW, acSurgeExtraW, acStandbyOn } = p;
+  // Appliance by appliance over all steps: each step's totals still add the appliances in list order, and each
+  // appliance's per-stop total still adds the steps in time order, so every sum is the same as step by step.
+  for (let j = 0; j < appliances.length; j++) {
     const a = appliances[j];
     if (!a) continue;
-    const windows = scheduleWindows(a);
-    if (windows?.some((w) => w.days.kind === 'trip-days')) {
-      perStep[j] = 1;
-      continue;
-    }
-    for (let slot = 0; slot < first.length; slot++) {
-      const i = first[slot] ?? 0;
-      slotShare[slot * m + j] = windows ? windowsShare(windows, localStep(p, i), prevDayType(p, i)) : 1;
-    }
-  }
-  for (let i = 0; i < p.n; i++) {
-    const where = p.where[i] ?? -1;
-    const dtH = p.stepH[i] ?? 1;
-    const amb = p.ambientC[i] ?? 15;
-    const row = (slotOf[i] ?? 0) * m;
-    let step: LocalStep | null = null;
-    let ac = 0, dc = 0, heat = 0, running = 0, surge = 0, standby = 0;
-    for (let j = 0; j < m; j++) {
-      const a = appliances[j];
-      if (!a) continue;
-      const sched = a.schedule;
-      let windowShare: number;
-      if (perStep[j]) {
-        step ??= localStep(p, i);
-        const windows = scheduleWindows(a);
-        windowShare = windows ? windowsShare(windows, step, prevDayType(p, i)) : 1;
-      } else windowShare = slotShare[row + j] ?? 0;
-      // onShare in loads.ts, term for term: the routine share, or the active share times the thermostat duty.
-      const share = sched.kind === 'always' ? 1 : sched.kind === 'routine' ? windowShare
-        : windowShare * thermostatDuty(sched.mode, amb, sched.setPointC, sched.fullDutyDeltaC);
-      const runShare = share * a.dutyCycle;
-      const electricWh = a.quantity * (a.runningW * runShare + a.standbyW * (1 - runShare)) * dtH;
-      if (where >= 0) p.applianceStopWh[j * stopsCount + where] = (p.applianceStopWh[j * stopsCount + where] ?? 0) + electricWh;
-      if (a.circuit === 'ac') {
-        ac += electricWh;
-        if (share > 0) {
-          running += a.runningW * a.quantity;
-          surge = Math.max(surge, (a.surgeW ?? a.runningW) - a.runningW);
+    fillShares(p, a, slots, share);
+    const { quantity, runningW, standbyW, dutyCycle, heatInputW } = a;
+    const isAc = a.circuit === 'ac';
+    const surgeExtra = (a.surgeW ?? runningW) - runningW;
+    const standby = standbyW > 0;
+    const base = j * stopsCount;
+    for (let i = 0; i < n; i++) {
+      const sh = share[i] ?? 0;
+      const dtH = stepH[i] ?? 1;
+      const runShare = sh * dutyCycle;
+      const electricWh = quantity * (runningW * runShare + standbyW * (1 - runShare)) * dtH;
+      const w = where[i] ?? -1;
+      if (w >= 0) stopWh[base + w] = (stopWh[base + w] ?? 0) + electricWh;
+      if (isAc) {
+        acWh[i] = (acWh[i] ?? 0) + electricWh;
+        if (sh > 0) {
+          acRunningW[i] = (acRunningW[i] ?? 0) + runningW * quantity;
+          acSurgeExtraW[i] = Math.max(acSurgeExtraW[i] ?? 0, surgeExtra);
         }
-        if (a.standbyW > 0) standby = 1;
+        if (standby) acStandbyOn[i] = 1;
       } else {
-        dc += electricWh;
-        heat += a.quantity * a.heatInputW * runShare * dtH;
+        dcWh[i] = (dcWh[i] ?? 0) + electricWh;
+        heatWh[i] = (heatWh[i] ?? 0) + quantity * heatInputW * runShare * dtH;
       }
     }
-    p.acWh[i] = ac;
-    p.dcWh[i] = dc;
-    p.heatWh[i] = heat;
-    p.acRunningW[i] = running;
-    p.acSurgeExtraW[i] = surge;
-    p.acStandbyOn[i] = standby;
   }
 }
 

@@ -4,17 +4,17 @@
 // shading) is computed once per trip and reused by every scenario; the inner loop allocates nothing.
 import { CHEMISTRY } from './battery';
 import { controllerLimitW, pwmFactor } from './charge-controller';
-import { erbsDiffuseFraction } from './decomposition';
 import { SAMPLES, type Prepared } from './prepare';
 import { effectiveNoctC } from './pv-module';
 import { beamFactor, diffuseFactor } from './site-exposure';
 import { shiftSky, SKY_CLEARNESS } from './sky-outlook';
-import { cosIncidence } from './transposition';
 
 const RAD = Math.PI / 180;
 const SIMPSON = [1 / 6, 4 / 6, 1 / 6] as const;
 const MIN_COS_ZENITH = 0.065; // as in decomposition.ts
 const MAX_ZENITH_DEG = 87;
+// A module-local copy: an imported binding in the innermost loops costs a lookup per use once compiled.
+const S = SAMPLES;
 
 export type SolarSeries = {
   /** Controller output available, W (step average). */
@@ -31,9 +31,11 @@ type Geometry = {
   cosZ: Float64Array; // per sample
   beamF: Float64Array; // per sample
   diffF: Float64Array; // per step
-  cosInc: Float64Array; // per sample × array, clamped at 0
-  rb: Float64Array; // per sample × array, Hay–Davies beam ratio
+  cosInc: Float64Array; // per sample × array, clamped at 0 (tilted arrays only; flat arrays take GHI)
+  rb: Float64Array; // per sample × array, Hay–Davies beam ratio (tilted arrays only)
   capW: number;
+  /** The planned sky's series, kept so the band can copy the steps whose sky the shift leaves unchanged. */
+  planned: SolarSeries | null;
 };
 
 const geometryCache = new WeakMap<Prepared, Geometry>();
@@ -58,30 +60,38 @@ function geometry(p: Prepared): Geometry {
   if (cached) return cached;
   const { arrays, capW } = arrayConstants(p);
   const m = arrays.length;
-  const ns = p.n * SAMPLES;
+  const ns = p.n * S;
   const g: Geometry = {
     m, arrays, capW, cosZ: new Float64Array(ns), beamF: new Float64Array(ns), diffF: new Float64Array(p.n),
-    cosInc: new Float64Array(ns * m), rb: new Float64Array(ns * m),
+    cosInc: new Float64Array(ns * m), rb: new Float64Array(ns * m), planned: null,
   };
-  const solar = p.input.rig.solarArrays;
+  // cosIncidence (transposition.ts) term for term, with the panel's and the sun's sines and cosines taken once.
+  const panels = p.input.rig.solarArrays.map((a, j) => {
+    const b = (a.mounting === 'tilted' ? a.tiltDeg : 0) * RAD;
+    return { j, cosB: Math.cos(b), sinB: Math.sin(b), azimuthDeg: a.azimuthDeg };
+  }).filter((panel) => arrays[panel.j]?.tilted);
+  const stopDiffuse = p.exposures.map((e) => diffuseFactor(e));
+  const openDiffuse = diffuseFactor(p.openExposure);
+  const { alt: alts, az: azs } = p;
+  const { cosZ, beamF, cosInc, rb } = g;
   for (let i = 0; i < p.n; i++) {
     const where = p.where[i] ?? -1;
     const exp = where >= 0 ? (p.exposures[where] ?? p.openExposure) : p.openExposure;
-    g.diffF[i] = diffuseFactor(exp);
-    for (let s = 0; s < SAMPLES; s++) {
-      const k = i * SAMPLES + s;
-      const alt = p.alt[k] ?? -90;
+    g.diffF[i] = where >= 0 ? (stopDiffuse[where] ?? openDiffuse) : openDiffuse;
+    for (let s = 0; s < S; s++) {
+      const k = i * S + s;
+      const alt = alts[k] ?? -90;
       if (alt <= 0) continue;
-      const az = p.az[k] ?? 180;
-      const cz = Math.cos((90 - alt) * RAD);
-      g.cosZ[k] = cz;
-      g.beamF[k] = beamFactor(exp, alt, az);
-      for (let j = 0; j < m; j++) {
-        const a = solar[j];
-        const tilt = a && a.mounting === 'tilted' ? a.tiltDeg : 0;
-        const ci = Math.max(0, cosIncidence(90 - alt, az, tilt, a?.azimuthDeg ?? 180));
-        g.cosInc[k * m + j] = ci;
-        g.rb[k * m + j] = ci / Math.max(cz, 0.01745);
+      const az = azs[k] ?? 180;
+      const z = (90 - alt) * RAD;
+      const cz = Math.cos(z);
+      const sz = Math.sin(z);
+      cosZ[k] = cz;
+      beamF[k] = beamFactor(exp, alt, az);
+      for (const panel of panels) {
+        const ci = Math.max(0, cz * panel.cosB + sz * panel.sinB * Math.cos((az - panel.azimuthDeg) * RAD));
+        cosInc[k * m + panel.j] = ci;
+        rb[k * m + panel.j] = ci / Math.max(cz, 0.01745);
       }
     }
   }
@@ -97,48 +107,62 @@ export function solarSeries(p: Prepared, skyShift: number): SolarSeries {
   const hayDavies = opt.transposition === 'hay-davies';
   const rho = opt.groundReflectance;
   const clearness = stops.map((s) => SKY_CLEARNESS[shiftSky(s.skyOutlook, skyShift)]);
+  const planned = skyShift === 0 ? null : g.planned;
+  // A stop whose sky the shift leaves as planned (clear made better, overcast made worse) gives the planned figures.
+  const same = stops.map((s, w) => planned !== null && clearness[w] === SKY_CLEARNESS[s.skyOutlook]);
   const availableW = new Float64Array(p.n);
   const poaWm2 = new Float64Array(p.n);
-  if (g.m === 0) return { availableW, poaWm2 };
+  const series = { availableW, poaWm2 };
+  if (skyShift === 0) g.planned = series;
+  if (g.m === 0) return series;
+  const { alt: alts, ghiClear, dniExtra: dniExtras, ambientC, stopOf } = p;
+  const { cosZ, beamF, diffF, cosInc, rb, arrays, m, capW } = g;
   for (let i = 0; i < p.n; i++) {
-    if ((p.alt[i * SAMPLES + 1] ?? -90) <= -8) continue;
-    const f = clearness[p.stopOf[i] ?? 0] ?? 1;
-    const dniExtra = p.dniExtra[i] ?? 1361;
-    const diffF = g.diffF[i] ?? 1;
-    const ambient = p.ambientC[i] ?? 20;
-    let w = 0;
+    if ((alts[i * S + 1] ?? -90) <= -8) continue;
+    const w = stopOf[i] ?? 0;
+    if (planned && same[w]) {
+      availableW[i] = planned.availableW[i] ?? 0;
+      poaWm2[i] = planned.poaWm2[i] ?? 0;
+      continue;
+    }
+    const f = clearness[w] ?? 1;
+    const dniExtra = dniExtras[i] ?? 1361;
+    const diff = diffF[i] ?? 1;
+    const ambient = ambientC[i] ?? 20;
+    let watts = 0;
     let poaFirst = 0;
-    for (let s = 0; s < SAMPLES; s++) {
-      const k = i * SAMPLES + s;
-      const cz = g.cosZ[k] ?? 0;
-      const ghiSky = (p.ghiClear[k] ?? 0) * f;
+    for (let s = 0; s < S; s++) {
+      const k = i * S + s;
+      const cz = cosZ[k] ?? 0;
+      const ghiSky = (ghiClear[k] ?? 0) * f;
       if (cz <= 0 || ghiSky <= 0) continue;
-      // Erbs split (decomposition.ts), then the site's shading of beam and diffuse.
+      // Erbs split (decomposition.ts, the diffuse fraction written out), then the site's shading of beam and diffuse.
       const kt = Math.min(2, ghiSky / (dniExtra * Math.max(cz, MIN_COS_ZENITH)));
-      const low = 90 - (p.alt[k] ?? 0) > MAX_ZENITH_DEG;
-      const dhiSky = low ? ghiSky : erbsDiffuseFraction(kt) * ghiSky;
+      const low = 90 - (alts[k] ?? 0) > MAX_ZENITH_DEG;
+      const diffuseShare = kt <= 0.22 ? 1 - 0.09 * kt : kt <= 0.8 ? 0.9511 - 0.1604 * kt + 4.388 * kt ** 2 - 16.638 * kt ** 3 + 12.336 * kt ** 4 : 0.165;
+      const dhiSky = low ? ghiSky : diffuseShare * ghiSky;
       const dniSky = low ? 0 : Math.max(0, (ghiSky - dhiSky) / cz);
-      const dni = dniSky * (g.beamF[k] ?? 1);
-      const dhi = dhiSky * diffF;
+      const dni = dniSky * (beamF[k] ?? 1);
+      const dhi = dhiSky * diff;
       const ghi = dni * cz + dhi;
       const ai = dni / dniExtra;
       let sampleW = 0;
-      for (let j = 0; j < g.m; j++) {
-        const a = g.arrays[j];
+      for (let j = 0; j < m; j++) {
+        const a = arrays[j];
         if (!a) continue;
         let poa = ghi;
         if (a.tilted) {
-          const sky = hayDavies ? dhi * (ai * (g.rb[k * g.m + j] ?? 0) + (1 - ai) * a.iso) : dhi * a.iso;
-          poa = dni * (g.cosInc[k * g.m + j] ?? 0) + sky + ghi * rho * a.ground;
+          const sky = hayDavies ? dhi * (ai * (rb[k * m + j] ?? 0) + (1 - ai) * a.iso) : dhi * a.iso;
+          poa = dni * (cosInc[k * m + j] ?? 0) + sky + ghi * rho * a.ground;
         }
         if (j === 0) poaFirst += (SIMPSON[s] ?? 0) * poa;
         const cell = ambient + ((a.noct - 20) / 800) * poa;
         sampleW += Math.max(0, a.ratedW * (poa / 1000) * (1 + a.gamma * (cell - 25)) * a.derate) * a.convert;
       }
-      w += (SIMPSON[s] ?? 0) * Math.min(sampleW, g.capW);
+      watts += (SIMPSON[s] ?? 0) * Math.min(sampleW, capW);
     }
-    availableW[i] = w;
+    availableW[i] = watts;
     poaWm2[i] = poaFirst;
   }
-  return { availableW, poaWm2 };
+  return series;
 }

@@ -3,10 +3,9 @@
 //   solarUsed + vehicle + hookup + generator + short = acLoad + dcLoad + inverterLoss + chargerLoss + batteryLoss + Δstored
 // Rule-driven or routine generators step in quarter hours so a mid-hour start is caught.
 import type { FuelModel } from '../schemas/rig';
-import { acceptanceLimitShare, chargeBlockedByCold, CHEMISTRY, peukertFactor, type ChemistryPreset } from './battery';
-import { CONTINUOUS_SHARE, defaultFuelModel, generatorFuel } from './generator';
-import { chargerDcW } from './hookup';
-import { propaneKgFromHeatWh } from './fuel';
+import { CHEMISTRY, type ChemistryPreset } from './battery';
+import { CONTINUOUS_SHARE, defaultFuelModel } from './generator';
+import { kwhPerFuelUnit, propaneKgFromHeatWh } from './fuel';
 import { QUARTERS, type Prepared } from './prepare';
 import { vehicleChargeW } from './vehicle-charging';
 
@@ -65,31 +64,54 @@ function zeroFlow(f: Flow): void {
   f.invLoss = f.chgLoss = f.batLoss = f.short = f.flow = f.fuel = f.cold = 0;
 }
 
+/** Acceptance terms of acceptanceLimitShare (battery.ts) for one step length, computed once per length. */
+type Acceptance = { dtH: number; rate: number; taperGain: number; tail: number };
+
 type Ctx = {
   p: Prepared; chem: ChemistryPreset; cap: number; chargeV: number; nominalV: number; capacityAh: number;
   invEff: number; invIdle: number; invAlways: boolean; hasInverter: boolean;
   chgAmps: number; chgEff: number; vehW: number; heated: boolean; gen: GeneratorPlan;
+  // Constants of the helpers the step inlines (peukertFactor, acceptanceLimitShare, chargerDcW, generatorFuel),
+  // each computed by the same expression the helper uses, so the arithmetic per step is unchanged.
+  i20: number; peukertExp: number; taperStart: number; chgCapW: number; genCapW: number; fuelPerKwh: number;
+  idleFuelKwhPerH: number; fuelKwhPerKwhOut: number; full: Acceptance; quarter: Acceptance; other: Acceptance;
 };
+
+function acceptance(chem: ChemistryPreset, dtH: number): Acceptance {
+  const rate = chem.maxChargeC * dtH * chem.chargeEfficiency;
+  const k = chem.maxChargeC / (1 - chem.taperStartSoc);
+  const tail = 1 - Math.exp(-k * dtH);
+  return { dtH, rate, taperGain: (1 - chem.taperStartSoc) * tail, tail };
+}
+
+function acceptanceFor(c: Ctx, dtH: number): Acceptance {
+  if (dtH === c.full.dtH) return c.full;
+  if (dtH === c.quarter.dtH) return c.quarter;
+  if (dtH !== c.other.dtH) c.other = acceptance(c.chem, dtH);
+  return c.other;
+}
 
 /** One step of dtH hours with the generator on or off; returns the new stored energy, books flows into f. */
 function step(c: Ctx, i: number, dtH: number, stored: number, genOn: boolean, solarW: number, hookW: number, f: Flow): number {
-  const stepH = c.p.stepH[i] ?? 1;
-  const acW = (c.p.acWh[i] ?? 0) / stepH;
-  const dcW = (c.p.dcWh[i] ?? 0) / stepH;
-  const genCap = genOn && c.gen.kind !== 'none' ? c.gen.ratedW * CONTINUOUS_SHARE : 0;
+  const p = c.p;
+  const stepH = p.stepH[i] ?? 1;
+  const acW = (p.acWh[i] ?? 0) / stepH;
+  const dcW = (p.dcWh[i] ?? 0) / stepH;
+  const genCap = genOn ? c.genCapW : 0;
   const hookAc = Math.min(acW, hookW);
   const genAc = Math.min(acW - hookAc, genCap);
   const invAc = acW - hookAc - genAc;
   let unserved = 0;
   let invDc = 0;
   if (c.hasInverter) {
-    const on = invAc > 0 || c.invAlways || (c.p.acStandbyOn[i] ?? 0) > 0;
+    const on = invAc > 0 || c.invAlways || (p.acStandbyOn[i] ?? 0) > 0;
     invDc = on ? invAc / c.invEff + c.invIdle : 0;
   } else unserved = invAc;
   const hookSpare = hookW - hookAc;
   const genSpare = genCap - genAc;
-  const chgMax = c.chgAmps > 0 ? chargerDcW(hookSpare + genSpare, c.chgAmps, c.chargeV, c.chgEff) : 0;
-  const vehW = c.vehW * (c.p.onRoadShare[i] ?? 0);
+  // chargerDcW in hookup.ts
+  const chgMax = c.chgAmps > 0 ? Math.max(0, Math.min(c.chgCapW, (hookSpare + genSpare) * c.chgEff)) : 0;
+  const vehW = c.vehW * (p.onRoadShare[i] ?? 0);
   let demand = dcW + invDc;
   const solarToLoad = Math.min(solarW, demand); demand -= solarToLoad;
   const vehToLoad = Math.min(vehW, demand); demand -= vehToLoad;
@@ -98,13 +120,22 @@ function step(c: Ctx, i: number, dtH: number, stored: number, genOn: boolean, so
   let next = stored;
   if (demand > 0) {
     const need = demand * dtH;
-    const removal = (need / c.chem.dischargeEfficiency) * peukertFactor(demand / c.nominalV, c.capacityAh, c.chem.peukertK);
+    // peukertFactor in battery.ts
+    const currentA = demand / c.nominalV;
+    const peukert = currentA <= c.i20 ? 1 : Math.pow(currentA / c.i20, c.peukertExp);
+    const removal = (need / c.chem.dischargeEfficiency) * peukert;
     if (removal <= stored) { next = stored - removal; batLoss = removal - need; flow = -need; }
     else { const delivered = need * (stored / removal); short += need - delivered; batLoss = stored - delivered; flow = -delivered; next = 0; }
   } else {
     const soc = stored / c.cap;
-    const cold = chargeBlockedByCold(c.chem.lithium, c.heated, c.p.ambientC[i] ?? 20);
-    const limitIn = cold ? 0 : (acceptanceLimitShare(soc, dtH, c.chem) * c.cap) / c.chem.chargeEfficiency;
+    // chargeBlockedByCold and acceptanceLimitShare in battery.ts
+    const cold = c.chem.lithium && !c.heated && (p.ambientC[i] ?? 20) < 0;
+    let share = 0;
+    if (!cold) {
+      const acc = acceptanceFor(c, dtH);
+      share = soc < c.taperStart ? Math.max(0, Math.min(acc.rate, c.taperStart - soc + acc.taperGain)) : Math.max(0, (1 - soc) * acc.tail);
+    }
+    const limitIn = cold ? 0 : (share * c.cap) / c.chem.chargeEfficiency;
     let room = limitIn;
     solarToBat = Math.min((solarW - solarToLoad) * dtH, room); room -= solarToBat;
     vehToBat = Math.min((vehW - vehToLoad) * dtH, room); room -= vehToBat;
@@ -129,20 +160,31 @@ function step(c: Ctx, i: number, dtH: number, stored: number, genOn: boolean, so
   f.batLoss += batLoss;
   f.short += short;
   f.flow += flow;
-  if (genOn && c.gen.kind !== 'none') f.fuel += generatorFuel(c.gen.model, c.gen.fuelKind, dtH, genOut);
+  // generatorFuel in generator.ts
+  if (genOn && c.gen.kind !== 'none') f.fuel += (c.idleFuelKwhPerH * dtH + c.fuelKwhPerKwhOut * (genOut / 1000)) / c.fuelPerKwh;
   return next;
 }
 
 function context(p: Prepared, s: Scenario): Ctx {
   const rig = p.input.rig;
   const chem = CHEMISTRY[rig.battery.chemistry];
+  const chargeV = rig.battery.nominalV * chem.chargeVoltageRatio;
+  const capacityAh = s.capacityWh / rig.battery.nominalV;
+  const chgAmps = rig.shoreCharger?.amps ?? 0;
+  const gen = s.generator;
   return {
-    p, chem, cap: s.capacityWh, chargeV: rig.battery.nominalV * chem.chargeVoltageRatio, nominalV: rig.battery.nominalV,
-    capacityAh: s.capacityWh / rig.battery.nominalV, invEff: rig.inverter?.efficiency ?? 1, invIdle: rig.inverter?.idleW ?? 0,
+    p, chem, cap: s.capacityWh, chargeV, nominalV: rig.battery.nominalV,
+    capacityAh, invEff: rig.inverter?.efficiency ?? 1, invIdle: rig.inverter?.idleW ?? 0,
     invAlways: rig.inverter?.mode === 'always', hasInverter: rig.inverter !== null,
-    chgAmps: rig.shoreCharger?.amps ?? 0, chgEff: rig.shoreCharger?.efficiency ?? 1,
+    chgAmps, chgEff: rig.shoreCharger?.efficiency ?? 1,
     vehW: rig.vehicleCharger ? vehicleChargeW(rig.vehicleCharger.kind, rig.vehicleCharger.amps, rig.battery.nominalV * chem.chargeVoltageRatio) : 0,
-    heated: rig.battery.heatedSpace, gen: s.generator,
+    heated: rig.battery.heatedSpace, gen,
+    i20: capacityAh / 20, peukertExp: chem.peukertK - 1, taperStart: chem.taperStartSoc, chgCapW: chgAmps * chargeV,
+    genCapW: gen.kind !== 'none' ? gen.ratedW * CONTINUOUS_SHARE : 0,
+    fuelPerKwh: gen.kind !== 'none' ? kwhPerFuelUnit(gen.fuelKind) : 1,
+    idleFuelKwhPerH: gen.kind !== 'none' ? gen.model.idleFuelKwhPerH : 0,
+    fuelKwhPerKwhOut: gen.kind !== 'none' ? gen.model.fuelKwhPerKwhOut : 0,
+    full: acceptance(chem, 1), quarter: acceptance(chem, 1 / QUARTERS), other: acceptance(chem, Number.NaN),
   };
 }
 
