@@ -1,0 +1,9 @@
+import { useLocalSearchParams } from 'expo-router';
+import { PeopleScreen } from '@/components/people/people-screen';
+import { useTripQuery } from '@/stores/queries/trips';
+
+export default function TripPeopleRoute() {
+  const { tripId } = useLocalSearchParams<{ tripId: string }>();
+  const trip = useTripQuery(tripId);
+  return trip.data ? <PeopleScreen detail={trip.data} /> : null;
+}

@@ -1,0 +1,9 @@
+import { useLocalSearchParams } from 'expo-router';
+import { RouteScreen } from '@/components/route/route-screen';
+import { useTripQuery } from '@/stores/queries/trips';
+
+export default function TripRouteRoute() {
+  const { tripId } = useLocalSearchParams<{ tripId: string }>();
+  const trip = useTripQuery(tripId);
+  return trip.data ? <RouteScreen detail={trip.data} /> : null;
+}

@@ -1,0 +1,245 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useState, type ReactNode } from 'react';
+import { Controller, useFieldArray, useForm, useWatch, type Control, type FieldPathByValue } from 'react-hook-form';
+import { StyleSheet, View } from 'react-native';
+import { mass } from '@/components/format/units';
+import { space } from '@/components/theme/tokens';
+import { Banner } from '@/components/ui/banner';
+import { Button } from '@/components/ui/button';
+import { Card } from '@/components/ui/card';
+import { Caution } from '@/components/ui/cautions';
+import { ChoiceChips } from '@/components/ui/choice-chips';
+import { ConflictNotice } from '@/components/ui/conflict-notice';
+import { NumberField } from '@/components/ui/number-field';
+import { Text } from '@/components/ui/text';
+import { TextField } from '@/components/ui/text-field';
+import type { RigRecord } from '@/shared/schemas/api';
+import { rigSchema, type Rig, type RigInput } from '@/shared/schemas/rig';
+import { fromDisplay, toDisplay } from '@/shared/units';
+import { ApiError, conflictCurrent } from '@/stores/queries/api-client';
+import { useTripRigSaveMutation } from '@/stores/queries/rigs';
+import { showToast } from '@/stores/toast-store';
+import { useUnits } from '@/stores/units-store';
+import { BATTERY_PRESETS, GENERATOR_PRESETS, INVERTER_PRESETS, SOLAR_PRESETS, TANK_PRESETS } from './part-presets';
+
+type NumPath = FieldPathByValue<RigInput, number | undefined>;
+
+function Num({ control, name, label, unit, testID, disabled }: { control: Control<RigInput, unknown, Rig>; name: NumPath; label: string; unit?: string; testID: string; disabled: boolean }) {
+  return (
+    <Controller
+      control={control}
+      name={name}
+      render={({ field, fieldState }) => (
+        <View style={styles.cell}>
+          <NumberField testID={testID} label={label} unit={unit} editable={!disabled} value={field.value as number | undefined} onChangeNumber={field.onChange} onBlur={field.onBlur} error={fieldState.error?.message} />
+        </View>
+      )}
+    />
+  );
+}
+
+function Section({ title, children, testID, right }: { title: string; children: ReactNode; testID: string; right?: ReactNode }) {
+  return (
+    <Card testID={testID}>
+      <View style={styles.head}>
+        <Text variant="title" role="heading" aria-level={2}>
+          {title}
+        </Text>
+        {right}
+      </View>
+      {children}
+    </Card>
+  );
+}
+
+function Presets({ items, onPick, testID, disabled }: { items: { label: string }[]; onPick: (i: number) => void; testID: string; disabled: boolean }) {
+  if (disabled) return null;
+  return (
+    <View style={styles.presets}>
+      <Text variant="caption" color="inkSoft">
+        Common sizes:
+      </Text>
+      {items.map((item, i) => (
+        <Button key={item.label} testID={`${testID}-${i}`} tone="quiet" label={item.label} accessibilityLabel={`Use ${item.label}`} onPress={() => onPick(i)} />
+      ))}
+    </View>
+  );
+}
+
+/** The trip's rig in grouped sections; saved as one record with its version. */
+export function RigForm({ tripId, record, canEdit }: { tripId: string; record: RigRecord; canEdit: boolean }) {
+  const units = useUnits();
+  const save = useTripRigSaveMutation(tripId);
+  const [formError, setFormError] = useState<string>();
+  const [conflict, setConflict] = useState<RigRecord | null>(null);
+  const { control, handleSubmit, setValue, reset, formState } = useForm<RigInput, unknown, Rig>({ resolver: zodResolver(rigSchema), defaultValues: record.rig });
+  const arrays = useFieldArray({ control, name: 'solarArrays' });
+  const tanks = useFieldArray({ control, name: 'propaneTanks' });
+  const [chemistry, inverter, generator, controller, shoreCharger, vehicleCharger] = useWatch({ control, name: ['battery.chemistry', 'inverter', 'generator', 'controller', 'shoreCharger', 'vehicleCharger'] });
+  const off = !canEdit;
+  const massUnit = mass(0, units).unit;
+
+  const send = (version: number) =>
+    handleSubmit(async (rig) => {
+      setFormError(undefined);
+      try {
+        await save.mutateAsync({ version, rig });
+        setConflict(null);
+        showToast('Rig saved');
+      } catch (error) {
+        const current = conflictCurrent<RigRecord>(error);
+        if (current) setConflict(current);
+        else setFormError(error instanceof ApiError ? error.message : 'The rig could not be saved.');
+      }
+    });
+
+  const toggle = (label: string, on: boolean, testID: string, onChange: (on: boolean) => void) =>
+    canEdit ? <Button testID={testID} tone="quiet" label={on ? `Remove ${label}` : `Add ${label}`} onPress={() => onChange(!on)} /> : null;
+
+  return (
+    <View style={styles.form} testID="rig-form">
+      {formError ? <Banner testID="rig-form-error" message={formError} /> : null}
+      {Object.keys(formState.errors).length > 0 ? <Banner testID="rig-form-invalid" message="Some figures need a look: see the messages below." /> : null}
+      <Controller control={control} name="name" render={({ field, fieldState }) => (
+        <TextField testID="rig-name" label="Rig name" editable={canEdit} value={field.value} onChangeText={field.onChange} onBlur={field.onBlur} error={fieldState.error?.message} />
+      )} />
+      <Section title="Battery bank" testID="rig-battery">
+        <Presets testID="preset-battery" disabled={off} items={BATTERY_PRESETS} onPick={(i) => {
+          const p = BATTERY_PRESETS[i]?.battery;
+          if (p?.chemistry) setValue('battery.chemistry', p.chemistry, { shouldDirty: true });
+          if (p?.capacityAh) setValue('battery.capacityAh', p.capacityAh, { shouldDirty: true });
+          if (p?.nominalV) setValue('battery.nominalV', p.nominalV, { shouldDirty: true });
+        }} />
+        <Controller control={control} name="battery.chemistry" render={({ field }) => (
+          <ChoiceChips testID="rig-chemistry" label="Chemistry" disabled={off} value={field.value} onChange={field.onChange} options={[{ value: 'lifepo4', label: 'LiFePO4' }, { value: 'agm', label: 'AGM' }, { value: 'flooded', label: 'Flooded lead-acid' }]} />
+        )} />
+        <View style={styles.grid}>
+          <Num control={control} disabled={off} name="battery.capacityAh" label="Capacity" unit="Ah" testID="rig-capacity" />
+          <Num control={control} disabled={off} name="battery.nominalV" label="Voltage" unit="V" testID="rig-voltage" />
+          <Num control={control} disabled={off} name="battery.reservePct" label="Reserve" unit="%" testID="rig-reserve" />
+          <Num control={control} disabled={off} name="battery.initialSocPct" label="Charge at the start" unit="%" testID="rig-initial-soc" />
+        </View>
+        <Controller control={control} name="battery.heatedSpace" render={({ field }) => (
+          <ChoiceChips testID="rig-heated" label="Where the battery sits" disabled={off} value={field.value ? 'inside' : 'outside'} onChange={(v) => field.onChange(v === 'inside')} options={[{ value: 'outside', label: 'Outside the heated space' }, { value: 'inside', label: 'Inside the heated space' }]} />
+        )} />
+        <Caution kind="lithiumCold" testID={chemistry === 'lifepo4' ? 'caution-lithium' : 'caution-lead-acid'} />
+      </Section>
+
+      <Section title="Solar" testID="rig-solar">
+        {arrays.fields.map((f, i) => (
+          <View key={f.id} style={styles.grid}>
+            <Num control={control} disabled={off} name={`solarArrays.${i}.ratedW`} label={`Array ${i + 1}`} unit="W" testID={`rig-array-${i}-watts`} />
+            <Num control={control} disabled={off} name={`solarArrays.${i}.tiltDeg`} label="Tilt" unit="°" testID={`rig-array-${i}-tilt`} />
+            {canEdit ? <Button testID={`rig-array-${i}-remove`} tone="quiet" label="Remove" accessibilityLabel={`Remove array ${i + 1}`} onPress={() => arrays.remove(i)} /> : null}
+          </View>
+        ))}
+        <Presets testID="preset-solar" disabled={off} items={SOLAR_PRESETS.map((w) => ({ label: `+ ${w} W flat` }))} onPick={(i) => {
+          arrays.append({ name: 'Roof array', ratedW: SOLAR_PRESETS[i] ?? 200, mounting: 'flat', tiltDeg: 0 });
+          if (!controller) setValue('controller', { kind: 'mppt', maxAmps: 30, efficiency: 0.97 }, { shouldDirty: true });
+        }} />
+        {controller ? (
+          <>
+            <Controller control={control} name="controller.kind" render={({ field }) => (
+              <ChoiceChips testID="rig-controller-kind" label="Charge controller" disabled={off} value={field.value ?? 'mppt'} onChange={field.onChange} options={[{ value: 'mppt', label: 'MPPT' }, { value: 'pwm', label: 'PWM' }]} />
+            )} />
+            <View style={styles.grid}>
+              <Num control={control} disabled={off} name="controller.maxAmps" label="Controller rating" unit="A" testID="rig-controller-amps" />
+            </View>
+          </>
+        ) : null}
+        {formState.errors.controller?.message ? <Text color="ember" variant="caption">{formState.errors.controller.message}</Text> : null}
+      </Section>
+
+      <Section title="Inverter" testID="rig-inverter" right={toggle('inverter', !!inverter, 'rig-inverter-toggle', (on) => setValue('inverter', on ? (INVERTER_PRESETS[1]?.inverter ?? null) : null, { shouldDirty: true }))}>
+        {inverter ? (
+          <>
+            <Presets testID="preset-inverter" disabled={off} items={INVERTER_PRESETS} onPick={(i) => setValue('inverter', INVERTER_PRESETS[i]?.inverter ?? null, { shouldDirty: true })} />
+            <View style={styles.grid}>
+              <Num control={control} disabled={off} name="inverter.ratedW" label="Rating" unit="W" testID="rig-inverter-watts" />
+              <Num control={control} disabled={off} name="inverter.idleW" label="Idle draw" unit="W" testID="rig-inverter-idle" />
+            </View>
+          </>
+        ) : (
+          <Text color="inkSoft">No inverter: AC appliances run only on a hookup or generator.</Text>
+        )}
+      </Section>
+
+      <Section title="Chargers" testID="rig-chargers">
+        <View style={styles.grid}>
+          {shoreCharger ? <Num control={control} disabled={off} name="shoreCharger.amps" label="Shore charger" unit="A" testID="rig-shore-amps" /> : null}
+          {vehicleCharger ? <Num control={control} disabled={off} name="vehicleCharger.amps" label="Vehicle charger (DC-DC or alternator)" unit="A" testID="rig-vehicle-amps" /> : null}
+        </View>
+        <View style={styles.presets}>
+          {toggle('shore charger', !!shoreCharger, 'rig-shore-toggle', (on) => setValue('shoreCharger', on ? { amps: 20, efficiency: 0.9 } : null, { shouldDirty: true }))}
+          {toggle('vehicle charger', !!vehicleCharger, 'rig-vehicle-toggle', (on) => setValue('vehicleCharger', on ? { kind: 'dc-dc', amps: 25 } : null, { shouldDirty: true }))}
+        </View>
+      </Section>
+
+      <Section title="Generator" testID="rig-generator" right={toggle('generator', !!generator, 'rig-generator-toggle', (on) => setValue('generator', on ? (GENERATOR_PRESETS[0]?.generator ?? null) : null, { shouldDirty: true }))}>
+        {generator ? (
+          <>
+            <Presets testID="preset-generator" disabled={off} items={GENERATOR_PRESETS} onPick={(i) => setValue('generator', GENERATOR_PRESETS[i]?.generator ?? null, { shouldDirty: true })} />
+            <View style={styles.grid}>
+              <Num control={control} disabled={off} name="generator.ratedW" label="Rating" unit="W" testID="rig-generator-watts" />
+            </View>
+            <Controller control={control} name="generator.fuel" render={({ field }) => (
+              <ChoiceChips testID="rig-generator-fuel" label="Fuel" disabled={off} value={field.value ?? 'petrol'} onChange={field.onChange} options={[{ value: 'petrol', label: 'Petrol' }, { value: 'diesel', label: 'Diesel' }, { value: 'propane', label: 'Propane' }]} />
+            )} />
+            <Text variant="caption" color="inkSoft">
+              {generator.mode?.kind === 'routine' ? 'Runs on set hours (from a fix or a saved routine).' : generator.mode?.kind === 'off' ? 'Switched off.' : 'Starts when the charge runs low, inside the hours each stop allows.'}
+            </Text>
+          </>
+        ) : (
+          <Text color="inkSoft">No generator.</Text>
+        )}
+        <Caution kind="generator" testID="caution-generator" />
+      </Section>
+
+      <Section title="Propane" testID="rig-propane">
+        {tanks.fields.map((f, i) => (
+          <Controller key={f.id} control={control} name={`propaneTanks.${i}.propaneKg`} render={({ field, fieldState }) => (
+            <View style={styles.grid}>
+              <View style={styles.cell}>
+                <NumberField
+                  testID={`rig-tank-${i}`}
+                  label={`Cylinder ${i + 1}`}
+                  unit={massUnit}
+                  editable={canEdit}
+                  value={field.value === undefined ? undefined : Math.round(toDisplay(field.value, 'mass', units).value * 10) / 10}
+                  onChangeNumber={(v) => field.onChange(v === null ? null : fromDisplay(v, 'mass', units))}
+                  error={fieldState.error?.message}
+                />
+              </View>
+              {canEdit ? <Button testID={`rig-tank-${i}-remove`} tone="quiet" label="Remove" accessibilityLabel={`Remove cylinder ${i + 1}`} onPress={() => tanks.remove(i)} /> : null}
+            </View>
+          )} />
+        ))}
+        <Presets testID="preset-tank" disabled={off} items={TANK_PRESETS.map((t) => ({ label: `+ ${t.label}` }))} onPick={(i) => tanks.append({ name: 'Cylinder', propaneKg: TANK_PRESETS[i]?.propaneKg ?? 6, fillPct: 100 })} />
+        <Caution kind="propane" testID="caution-propane" />
+      </Section>
+      <Caution kind="cabling" testID="caution-cabling" />
+      {conflict ? (
+        <ConflictNotice
+          testID="rig-conflict"
+          what="rig"
+          theirVersion={conflict.version}
+          busy={save.isPending}
+          onKeepMine={() => void send(conflict.version)()}
+          onTakeTheirs={() => {
+            reset(conflict.rig);
+            setConflict(null);
+          }}
+        />
+      ) : null}
+      {canEdit ? <Button testID="rig-save" label="Save rig" busy={formState.isSubmitting} disabled={formState.isSubmitting} onPress={send(record.version)} /> : null}
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  form: { gap: space.xl },
+  head: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', justifyContent: 'space-between', gap: space.sm },
+  grid: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'flex-end', gap: space.md },
+  cell: { flexGrow: 1, flexBasis: 140 },
+  presets: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.xs },
+});

@@ -1,0 +1,192 @@
+import { useState } from 'react';
+import { StyleSheet, View } from 'react-native';
+import { localMoment } from '@/components/format/time';
+import { temperature } from '@/components/format/units';
+import { useIsWide } from '@/components/theme/breakpoints';
+import { colors, radii, space } from '@/components/theme/tokens';
+import { Panes, TabScroll } from '@/components/trip/tab-scroll';
+import { Banner } from '@/components/ui/banner';
+import { Button } from '@/components/ui/button';
+import { Card } from '@/components/ui/card';
+import { EmptyState } from '@/components/ui/empty-state';
+import { NumberField } from '@/components/ui/number-field';
+import { Text } from '@/components/ui/text';
+import type { DriveRecord, StopRecord, TripDetail } from '@/shared/schemas/api';
+import { can } from '@/shared/schemas/roles';
+import { ApiError } from '@/stores/queries/api-client';
+import { useDriveSaveMutation, useStopDeleteMutation, useStopsReorderMutation } from '@/stores/queries/route';
+import { showToast } from '@/stores/toast-store';
+import { useUnits } from '@/stores/units-store';
+import { StopForm } from './stop-form';
+import { SunPath } from './sun-path';
+
+const EXPOSURE: Record<string, string> = { open: 'open sky', 'light-cover': 'light tree cover', 'partial-shade': 'partial shade', 'deep-forest': 'deep forest' };
+const SKY: Record<string, string> = { clear: 'clear', hazy: 'hazy or smoke', 'broken-cloud': 'broken cloud', overcast: 'overcast' };
+
+type Editing = { kind: 'stop'; id: string } | { kind: 'new' } | null;
+
+function DriveRow({ tripId, record, index, canEdit }: { tripId: string; record: DriveRecord; index: number; canEdit: boolean }) {
+  const save = useDriveSaveMutation(tripId);
+  const [hours, setHours] = useState<number | null>(record.drive.hoursOnRoad);
+  const dirty = hours !== record.drive.hoursOnRoad;
+  const send = async (drive: DriveRecord['drive']) => {
+    try {
+      await save.mutateAsync({ driveId: record.id, version: record.version, drive });
+      showToast('Drive saved');
+    } catch (error) {
+      showToast(error instanceof ApiError ? error.message : 'The drive could not be saved.', { tone: 'danger' });
+    }
+  };
+  return (
+    <View style={styles.drive} testID={`drive-${index}`}>
+      <Text variant="label" color="lake">
+        Drive {index + 1}: {record.drive.hoursOnRoad} h on the road{record.drive.vehicleCharging ? ', charging from the vehicle' : ''}
+      </Text>
+      {canEdit ? (
+        <View style={styles.driveEdit}>
+          <View style={styles.driveField}>
+            <NumberField testID={`drive-${index}-hours`} label="Hours on the road" value={hours} onChangeNumber={setHours} />
+          </View>
+          <Button testID={`drive-${index}-save`} tone="secondary" label="Save" disabled={!dirty || hours === null} busy={save.isPending} onPress={() => hours !== null && void send({ ...record.drive, hoursOnRoad: hours })} />
+          <Button
+            testID={`drive-${index}-charging`}
+            tone="quiet"
+            label={record.drive.vehicleCharging ? 'Vehicle charging: on' : 'Vehicle charging: off'}
+            accessibilityLabel={`Vehicle charging during drive ${index + 1}: ${record.drive.vehicleCharging ? 'on' : 'off'}. Press to switch.`}
+            onPress={() => void send({ ...record.drive, vehicleCharging: !record.drive.vehicleCharging })}
+          />
+        </View>
+      ) : null}
+    </View>
+  );
+}
+
+export function RouteScreen({ detail }: { detail: TripDetail }) {
+  const wide = useIsWide();
+  const units = useUnits();
+  const canEdit = can(detail.trip.role, 'editTrip');
+  const [editing, setEditing] = useState<Editing>(null);
+  const reorder = useStopsReorderMutation(detail.trip.id);
+  const remove = useStopDeleteMutation(detail.trip.id);
+  const current = editing?.kind === 'stop' ? detail.stops.find((s) => s.id === editing.id) : undefined;
+
+  const move = async (index: number, by: -1 | 1) => {
+    const ids = detail.stops.map((s) => s.id);
+    const [moved] = ids.splice(index, 1);
+    if (moved === undefined) return;
+    ids.splice(index + by, 0, moved);
+    try {
+      await reorder.mutateAsync({ tripVersion: detail.trip.version, stopIds: ids });
+      showToast('Route order saved');
+    } catch (error) {
+      showToast(error instanceof ApiError ? error.message : 'The order could not be saved.', { tone: 'danger' });
+    }
+  };
+
+  const stopCard = (record: StopRecord, i: number) => {
+    const s = record.stop;
+    return (
+      <Card key={record.id} testID={`stop-${i}`} style={current?.id === record.id ? styles.selected : null}>
+        <View style={styles.stopHead}>
+          <View style={styles.badge}>
+            <Text variant="label" color="white">
+              {i + 1}
+            </Text>
+          </View>
+          <Text variant="title" style={styles.stopName}>
+            {s.name}
+          </Text>
+        </View>
+        <Text variant="caption" color="inkSoft">
+          {localMoment(s.arriveAt)} → {localMoment(s.departAt)}
+        </Text>
+        <Text>
+          {s.exposure.kind === 'preset' ? EXPOSURE[s.exposure.preset] : 'custom horizon'} · {SKY[s.skyOutlook]} · {s.hookup ? `hookup ${s.hookup.amps} A ${s.hookup.volts} V` : 'no hookup'} ·{' '}
+          {temperature(s.lowC, units).value}–{temperature(s.highC, units).value} {temperature(0, units).unit}
+        </Text>
+        {canEdit ? (
+          <View style={styles.actions}>
+            <Button testID={`stop-${i}-edit`} tone="secondary" label="Edit" accessibilityLabel={`Edit ${s.name}`} onPress={() => setEditing({ kind: 'stop', id: record.id })} />
+            <Button testID={`stop-${i}-up`} tone="quiet" label="↑ Earlier" accessibilityLabel={`Move ${s.name} earlier`} disabled={i === 0 || reorder.isPending} onPress={() => void move(i, -1)} />
+            <Button testID={`stop-${i}-down`} tone="quiet" label="↓ Later" accessibilityLabel={`Move ${s.name} later`} disabled={i === detail.stops.length - 1 || reorder.isPending} onPress={() => void move(i, 1)} />
+          </View>
+        ) : (
+          <Button testID={`stop-${i}-view`} tone="quiet" label="Sun path" accessibilityLabel={`Show the sun path at ${s.name}`} onPress={() => setEditing({ kind: 'stop', id: record.id })} />
+        )}
+      </Card>
+    );
+  };
+
+  const list = (
+    <View style={styles.column}>
+      {!canEdit ? <Banner testID="route-read-only" tone="info" message="Only the trip owner or a planner can change the route." /> : null}
+      {detail.stops.length === 0 ? (
+        <EmptyState testID="route-empty" title="No stops yet" body="Add the first place you will stay: its coordinates, dates and how open the sky is." />
+      ) : null}
+      {detail.stops.map((record, i) => {
+        const drive = detail.drives[i];
+        return (
+          <View key={record.id} style={styles.column}>
+            {stopCard(record, i)}
+            {drive && i < detail.stops.length - 1 ? <DriveRow tripId={detail.trip.id} record={drive} index={i} canEdit={canEdit} /> : null}
+          </View>
+        );
+      })}
+      {canEdit ? <Button testID="stop-add" label="Add a stop" onPress={() => setEditing({ kind: 'new' })} /> : null}
+    </View>
+  );
+
+  const editor =
+    editing === null ? (
+      wide ? (
+        <Card testID="stop-editor-empty">
+          <Text color="inkSoft">Choose a stop to edit it and see its sun path.</Text>
+        </Card>
+      ) : null
+    ) : (
+      <Card testID="stop-editor">
+        <Text variant="title" role="heading" aria-level={2}>
+          {current ? current.stop.name : 'New stop'}
+        </Text>
+        {current ? <SunPath stop={current.stop} testID="sun-path" /> : null}
+        {canEdit ? (
+          <StopForm
+            key={current ? `${current.id}-${current.version}` : 'new'}
+            tripId={detail.trip.id}
+            record={current ?? null}
+            fallbackZone={detail.trip.timeZone}
+            onDone={() => setEditing(null)}
+          />
+        ) : (
+          <Button testID="stop-close" tone="quiet" label="Close" onPress={() => setEditing(null)} />
+        )}
+        {current && canEdit ? (
+          <Button
+            testID="stop-delete"
+            tone="danger"
+            label="Remove stop"
+            busy={remove.isPending}
+            onPress={async () => {
+              await remove.mutateAsync(current.id);
+              showToast(`${current.stop.name} removed`);
+              setEditing(null);
+            }}
+          />
+        ) : null}
+      </Card>
+    );
+
+  return <TabScroll testID="route-screen">{wide ? <Panes main={list} side={editor} sideWidth={560} /> : editing ? editor : list}</TabScroll>;
+}
+
+const styles = StyleSheet.create({
+  column: { gap: space.md },
+  selected: { borderColor: colors.pine, borderWidth: 2 },
+  stopHead: { flexDirection: 'row', alignItems: 'center', gap: space.sm },
+  stopName: { flex: 1 },
+  badge: { width: 32, height: 32, borderRadius: 16, backgroundColor: colors.lake, alignItems: 'center', justifyContent: 'center' },
+  actions: { flexDirection: 'row', flexWrap: 'wrap', gap: space.xs },
+  drive: { marginLeft: space.xl, paddingLeft: space.lg, borderLeftWidth: 3, borderLeftColor: colors.lake, borderStyle: 'dashed', gap: space.sm, paddingVertical: space.sm, borderRadius: radii.sm },
+  driveEdit: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'flex-end', gap: space.sm },
+  driveField: { width: 160 },
+});

@@ -1,0 +1,88 @@
+// The stop editor's form values: what a person types (local date and time, display units, horizon as a list)
+// and the conversion to and from the shared stop schema, which stays the one validator.
+import { DateTime } from 'luxon';
+import { z } from 'zod';
+import { stopSchema, type SitePreset, type SkyOutlook, type Stop, type StopInput } from '@/shared/schemas/trip';
+import { fromDisplay, toDisplay, type UnitSystem } from '@/shared/units';
+
+const LOCAL = 'yyyy-MM-dd HH:mm';
+
+export const stopFormSchema = z.object({
+  name: z.string().trim().min(1, { error: 'Give the stop a name.' }).max(120),
+  lat: z.number({ error: 'Enter a latitude.' }).min(-90, { error: 'Latitude runs from −90 to 90.' }).max(90, { error: 'Latitude runs from −90 to 90.' }),
+  lon: z.number({ error: 'Enter a longitude.' }).min(-180, { error: 'Longitude runs from −180 to 180.' }).max(180, { error: 'Longitude runs from −180 to 180.' }),
+  timeZone: z.string().min(1, { error: 'Choose a time zone.' }),
+  arrive: z.string().regex(/^\d{4}-\d{2}-\d{2} \d{2}:\d{2}$/, { error: 'Use a date and time like 2027-09-12 15:00.' }),
+  depart: z.string().regex(/^\d{4}-\d{2}-\d{2} \d{2}:\d{2}$/, { error: 'Use a date and time like 2027-09-14 10:00.' }),
+  exposureKind: z.enum(['preset', 'custom']),
+  preset: z.enum(['open', 'light-cover', 'partial-shade', 'deep-forest']),
+  horizon: z.string(),
+  canopyPct: z.number({ error: 'Enter a share from 0 to 100.' }).min(0).max(100),
+  skyOutlook: z.enum(['clear', 'hazy', 'broken-cloud', 'overcast']),
+  hookupOn: z.boolean(),
+  amps: z.number({ error: 'Enter the amps.' }).positive().max(100),
+  volts: z.number({ error: 'Enter the volts.' }).positive().max(480),
+  generatorOn: z.boolean(),
+  generatorStart: z.number({ error: 'Enter an hour.' }).int().min(0).max(24),
+  generatorEnd: z.number({ error: 'Enter an hour.' }).int().min(0).max(24),
+  low: z.number({ error: 'Enter the expected low.' }),
+  high: z.number({ error: 'Enter the expected high.' }),
+  notes: z.string().max(4000),
+});
+export type StopFormValues = z.infer<typeof stopFormSchema>;
+
+export function toFormValues(stop: Stop | null, notes: string, units: UnitSystem, fallbackZone: string): StopFormValues {
+  const zone = stop?.timeZone ?? fallbackZone;
+  const local = (iso: string | undefined, fallback: string) => (iso ? DateTime.fromISO(iso, { setZone: true }).setZone(zone).toFormat(LOCAL) : fallback);
+  const exposure = stop?.exposure ?? { kind: 'preset' as const, preset: 'open' as const };
+  const t = (c: number) => Math.round(toDisplay(c, 'temperature', units).value);
+  return {
+    name: stop?.name ?? '', lat: stop?.lat ?? 0, lon: stop?.lon ?? 0, timeZone: zone,
+    arrive: local(stop?.arriveAt, ''), depart: local(stop?.departAt, ''),
+    exposureKind: exposure.kind, preset: exposure.kind === 'preset' ? exposure.preset : 'open',
+    horizon: exposure.kind === 'custom' ? exposure.horizonDeg.join(', ') : '0, 0, 0, 0, 0, 0, 0, 0',
+    canopyPct: exposure.kind === 'custom' ? Math.round(exposure.canopyTransmittance * 100) : 0,
+    skyOutlook: stop?.skyOutlook ?? 'clear',
+    hookupOn: !!stop?.hookup, amps: stop?.hookup?.amps ?? 16, volts: stop?.hookup?.volts ?? 230,
+    generatorOn: stop ? stop.generatorHours !== null : true, generatorStart: stop?.generatorHours?.startHour ?? 8, generatorEnd: stop?.generatorHours?.endHour ?? 20,
+    low: t(stop?.lowC ?? 8), high: t(stop?.highC ?? 18), notes,
+  };
+}
+
+export type StopFromForm = { ok: true; stop: StopInput } | { ok: false; errors: Partial<Record<keyof StopFormValues, string>> };
+
+const FIELD_OF: Record<string, keyof StopFormValues> = {
+  name: 'name', lat: 'lat', lon: 'lon', timeZone: 'timeZone', arriveAt: 'arrive', departAt: 'depart', exposure: 'horizon',
+  highC: 'high', lowC: 'low', hookup: 'amps', generatorHours: 'generatorStart',
+};
+
+/** Builds the API's stop from the form and runs the shared schema on it; its messages land on the right fields. */
+export function fromFormValues(v: StopFormValues, units: UnitSystem): StopFromForm {
+  const iso = (local: string) => DateTime.fromFormat(local, LOCAL, { zone: v.timeZone }).toISO({ suppressSeconds: true, suppressMilliseconds: true });
+  const arriveAt = iso(v.arrive);
+  const departAt = iso(v.depart);
+  const errors: Partial<Record<keyof StopFormValues, string>> = {};
+  if (!arriveAt) errors.arrive = 'That date and time does not exist in this time zone.';
+  if (!departAt) errors.depart = 'That date and time does not exist in this time zone.';
+  const horizonDeg = v.horizon.split(/[\s,;]+/).filter(Boolean).map(Number);
+  if (v.exposureKind === 'custom' && (horizonDeg.length < 4 || horizonDeg.length > 36 || horizonDeg.some((h) => !Number.isFinite(h) || h < 0 || h > 90))) {
+    errors.horizon = 'List 4 to 36 angles from 0 to 90°, clockwise from north (for example 8 or 16 of them).';
+  }
+  if (!arriveAt || !departAt || errors.horizon) return { ok: false, errors };
+  const stop: StopInput = {
+    name: v.name.trim(), lat: v.lat, lon: v.lon, timeZone: v.timeZone, arriveAt, departAt,
+    exposure: v.exposureKind === 'preset' ? { kind: 'preset', preset: v.preset as SitePreset } : { kind: 'custom', horizonDeg, canopyTransmittance: v.canopyPct / 100 },
+    skyOutlook: v.skyOutlook as SkyOutlook,
+    hookup: v.hookupOn ? { amps: v.amps, volts: v.volts } : null,
+    generatorHours: v.generatorOn ? { startHour: v.generatorStart, endHour: v.generatorEnd } : null,
+    lowC: Math.round(fromDisplay(v.low, 'temperature', units) * 10) / 10,
+    highC: Math.round(fromDisplay(v.high, 'temperature', units) * 10) / 10,
+  };
+  const parsed = stopSchema.safeParse(stop);
+  if (parsed.success) return { ok: true, stop };
+  for (const issue of parsed.error.issues) {
+    const field = FIELD_OF[String(issue.path[0])];
+    if (field && !errors[field]) errors[field] = issue.path[0] === 'departAt' ? 'The stop must be left after it is reached.' : issue.path[0] === 'highC' ? 'The high must be at or above the low.' : issue.message;
+  }
+  return { ok: false, errors };
+}

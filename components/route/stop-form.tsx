@@ -1,0 +1,187 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useState } from 'react';
+import { Controller, useForm, useWatch, type Control } from 'react-hook-form';
+import { StyleSheet, View } from 'react-native';
+import { temperature } from '@/components/format/units';
+import { space } from '@/components/theme/tokens';
+import { Banner } from '@/components/ui/banner';
+import { Button } from '@/components/ui/button';
+import { Caution } from '@/components/ui/cautions';
+import { ChoiceChips } from '@/components/ui/choice-chips';
+import { ConflictNotice } from '@/components/ui/conflict-notice';
+import { NumberField } from '@/components/ui/number-field';
+import { TextField } from '@/components/ui/text-field';
+import type { StopRecord } from '@/shared/schemas/api';
+import { ApiError, conflictCurrent } from '@/stores/queries/api-client';
+import { useStopSaveMutation } from '@/stores/queries/route';
+import { showToast } from '@/stores/toast-store';
+import { useUnits } from '@/stores/units-store';
+import { fromFormValues, stopFormSchema, toFormValues, type StopFormValues } from './stop-form-values';
+
+type Props = { tripId: string; record: StopRecord | null; fallbackZone: string; onDone: () => void };
+type NumName = 'lat' | 'lon' | 'amps' | 'volts' | 'generatorStart' | 'generatorEnd' | 'low' | 'high' | 'canopyPct';
+
+function Num({ control, name, label, unit, testID }: { control: Control<StopFormValues>; name: NumName; label: string; unit?: string; testID: string }) {
+  return (
+    <Controller
+      control={control}
+      name={name}
+      render={({ field, fieldState }) => (
+        <View style={styles.cell}>
+          <NumberField testID={testID} label={label} unit={unit} value={field.value} onChangeNumber={field.onChange} onBlur={field.onBlur} error={fieldState.error?.message} />
+        </View>
+      )}
+    />
+  );
+}
+
+function Txt({ control, name, label, hint, testID }: { control: Control<StopFormValues>; name: 'name' | 'timeZone' | 'arrive' | 'depart' | 'horizon' | 'notes'; label: string; hint?: string; testID: string }) {
+  return (
+    <Controller
+      control={control}
+      name={name}
+      render={({ field, fieldState }) => (
+        <View style={styles.cell}>
+          <TextField testID={testID} label={label} hint={hint} value={field.value} onChangeText={field.onChange} onBlur={field.onBlur} error={fieldState.error?.message} />
+        </View>
+      )}
+    />
+  );
+}
+
+/** Add or edit a stop. The form keeps everything typed when the server refuses it. */
+export function StopForm({ tripId, record, fallbackZone, onDone }: Props) {
+  const units = useUnits();
+  const save = useStopSaveMutation(tripId);
+  const [formError, setFormError] = useState<string>();
+  const [conflict, setConflict] = useState<StopRecord | null>(null);
+  const { control, handleSubmit, setError, setValue, getValues, reset, formState } = useForm<StopFormValues>({
+    resolver: zodResolver(stopFormSchema),
+    defaultValues: toFormValues(record?.stop ?? null, record?.notes ?? '', units, fallbackZone),
+  });
+  const [exposureKind, hookupOn, generatorOn] = useWatch({ control, name: ['exposureKind', 'hookupOn', 'generatorOn'] });
+  const tUnit = temperature(0, units).unit;
+
+  const zoneFromCoordinates = async () => {
+    const { lat, lon } = getValues();
+    // Loaded on demand: the zone table is only needed here.
+    const { default: tzlookup } = await import('tz-lookup');
+    try {
+      setValue('timeZone', tzlookup(lat, lon), { shouldValidate: true });
+    } catch {
+      setError('timeZone', { message: 'No time zone found for those coordinates; type one such as Europe/London.' });
+    }
+  };
+
+  const send = (version: number | undefined) =>
+    handleSubmit(async (values) => {
+      setFormError(undefined);
+      const built = fromFormValues(values, units);
+      if (!built.ok) {
+        for (const [field, message] of Object.entries(built.errors)) setError(field as keyof StopFormValues, { message });
+        return;
+      }
+      try {
+        await save.mutateAsync({ stopId: record?.id ?? null, version, stop: built.stop, notes: values.notes });
+        showToast(`${values.name} saved`);
+        setConflict(null);
+        onDone();
+      } catch (error) {
+        const current = conflictCurrent<StopRecord>(error);
+        if (current) setConflict(current);
+        else if (error instanceof ApiError && error.fields) {
+          for (const [field, messages] of Object.entries(error.fields)) setFormError(`${field}: ${messages.join(' ')}`);
+        } else setFormError(error instanceof ApiError ? error.message : 'The stop could not be saved.');
+      }
+    });
+
+  return (
+    <View style={styles.form} testID="stop-form">
+      {formError ? <Banner testID="stop-form-error" message={formError} /> : null}
+      <Txt control={control} name="name" label="Name" testID="stop-name" />
+      <View style={styles.grid}>
+        <Num control={control} name="lat" label="Latitude" unit="°" testID="stop-lat" />
+        <Num control={control} name="lon" label="Longitude" unit="°" testID="stop-lon" />
+      </View>
+      <View style={styles.zoneRow}>
+        <Txt control={control} name="timeZone" label="Time zone" hint="an IANA name such as Europe/London" testID="stop-time-zone" />
+        <Button testID="stop-zone-from-coordinates" tone="secondary" label="From coordinates" onPress={() => void zoneFromCoordinates()} />
+      </View>
+      <View style={styles.grid}>
+        <Txt control={control} name="arrive" label="Arrive (local)" hint="YYYY-MM-DD HH:MM" testID="stop-arrive" />
+        <Txt control={control} name="depart" label="Leave (local)" hint="YYYY-MM-DD HH:MM" testID="stop-depart" />
+      </View>
+      <Controller control={control} name="exposureKind" render={({ field }) => (
+        <ChoiceChips testID="stop-exposure-kind" label="Site exposure" value={field.value} onChange={field.onChange} options={[{ value: 'preset', label: 'A usual site' }, { value: 'custom', label: 'Custom horizon' }]} />
+      )} />
+      {exposureKind === 'preset' ? (
+        <Controller control={control} name="preset" render={({ field }) => (
+          <ChoiceChips testID="stop-preset" label="Cover" value={field.value} onChange={field.onChange} options={[
+            { value: 'open', label: 'Open sky' }, { value: 'light-cover', label: 'Light tree cover' }, { value: 'partial-shade', label: 'Partial shade' }, { value: 'deep-forest', label: 'Deep forest' },
+          ]} />
+        )} />
+      ) : (
+        <View style={styles.grid}>
+          <Txt control={control} name="horizon" label="Horizon angles (°)" hint="clockwise from north, e.g. 5, 10, 25, 30, 20, 10, 25, 35" testID="stop-horizon" />
+          <Num control={control} name="canopyPct" label="Light through the cover" unit="%" testID="stop-canopy" />
+        </View>
+      )}
+      <Controller control={control} name="skyOutlook" render={({ field }) => (
+        <ChoiceChips testID="stop-sky" label="Sky outlook" value={field.value} onChange={field.onChange} options={[
+          { value: 'clear', label: 'Clear' }, { value: 'hazy', label: 'Hazy or smoke' }, { value: 'broken-cloud', label: 'Broken cloud' }, { value: 'overcast', label: 'Overcast' },
+        ]} />
+      )} />
+      <Controller control={control} name="hookupOn" render={({ field }) => (
+        <ChoiceChips testID="stop-hookup" label="Hookup" value={field.value ? 'yes' : 'no'} onChange={(v) => field.onChange(v === 'yes')} options={[{ value: 'no', label: 'None' }, { value: 'yes', label: 'Shore power' }]} />
+      )} />
+      {hookupOn ? (
+        <View style={styles.grid}>
+          <Num control={control} name="amps" label="Amps" unit="A" testID="stop-amps" />
+          <Num control={control} name="volts" label="Volts" unit="V" testID="stop-volts" />
+        </View>
+      ) : null}
+      <Controller control={control} name="generatorOn" render={({ field }) => (
+        <ChoiceChips testID="stop-generator" label="Generator allowed" value={field.value ? 'yes' : 'no'} onChange={(v) => field.onChange(v === 'yes')} options={[{ value: 'no', label: 'No' }, { value: 'yes', label: 'Yes, between' }]} />
+      )} />
+      {generatorOn ? (
+        <>
+          <View style={styles.grid}>
+            <Num control={control} name="generatorStart" label="From hour" testID="stop-generator-start" />
+            <Num control={control} name="generatorEnd" label="Until hour" testID="stop-generator-end" />
+          </View>
+          <Caution kind="generator" testID="caution-generator-stop" />
+        </>
+      ) : null}
+      <View style={styles.grid}>
+        <Num control={control} name="low" label="Expected low" unit={tUnit} testID="stop-low" />
+        <Num control={control} name="high" label="Expected high" unit={tUnit} testID="stop-high" />
+      </View>
+      <Txt control={control} name="notes" label="Notes" testID="stop-notes" />
+      {conflict ? (
+        <ConflictNotice
+          testID="stop-conflict"
+          what="stop"
+          theirVersion={conflict.version}
+          busy={save.isPending}
+          onKeepMine={() => void send(conflict.version)()}
+          onTakeTheirs={() => {
+            reset(toFormValues(conflict.stop, conflict.notes, units, fallbackZone));
+            setConflict(null);
+          }}
+        />
+      ) : null}
+      <View style={styles.actions}>
+        <Button testID="stop-save" label={record ? 'Save stop' : 'Add stop'} busy={formState.isSubmitting} disabled={formState.isSubmitting} onPress={send(record?.version)} />
+        <Button testID="stop-cancel" label="Cancel" tone="quiet" onPress={onDone} />
+      </View>
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  form: { gap: space.lg },
+  grid: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md },
+  cell: { flexGrow: 1, flexBasis: 140 },
+  zoneRow: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'flex-start', gap: space.md },
+  actions: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
+});
