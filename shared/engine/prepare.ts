@@ -98,12 +98,15 @@ function fillPlaces(p: Prepared, segs: readonly Segment[], stops: readonly Stop[
 }
 
 function fillLocalTime(p: Prepared, stops: readonly Stop[]): void {
+  // One pass per run of steps in the same zone (consecutive stops usually share one), not per stop: the offsets
+  // are the zone's own at each step either way, and each pass costs a luxon look-up per day.
+  const zoneAt = (i: number): string => stops[p.stopOf[i] ?? 0]?.timeZone ?? 'UTC';
   let a = 0;
   while (a < p.n) {
-    const stop = p.stopOf[a] ?? 0;
+    const zone = zoneAt(a);
     let b = a + 1;
-    while (b < p.n && p.stopOf[b] === stop) b++;
-    fillOffsets(stops[stop]?.timeZone ?? 'UTC', p.startMs, a, b, p.offsetMin);
+    while (b < p.n && zoneAt(b) === zone) b++;
+    fillOffsets(zone, p.startMs, a, b, p.offsetMin);
     a = b;
   }
   const firstDay = localDayNumber(p.startMs[0] ?? 0, p.offsetMin[0] ?? 0);

@@ -85,10 +85,8 @@ export function fillOffsets(zoneName: string, ms: Float64Array, from: number, to
 const TWO_DIGITS = Array.from({ length: 100 }, (_, i) => String(i).padStart(2, '0'));
 const LAST_MS = 253_402_300_800_000; // 10000-01-01T00:00Z: four-digit years only
 
-/** YYYY-MM-DDTHH:MM of a UTC instant, as new Date(ms).toISOString() spells it (civil date from days, Hinnant). */
-function isoMinutes(ms: number): string {
-  const days = Math.floor(ms / DAY_MS);
-  const msOfDay = ms - days * DAY_MS;
+/** YYYY-MM-DDT of a day number since 1970 (civil date from days, Hinnant). */
+function isoDate(days: number): string {
   const z = days + 719_468;
   const era = Math.floor(z / 146_097);
   const doe = z - era * 146_097;
@@ -98,8 +96,22 @@ function isoMinutes(ms: number): string {
   const day = doy - Math.floor((153 * mp + 2) / 5) + 1;
   const month = mp < 10 ? mp + 3 : mp - 9;
   const year = yoe + era * 400 + (month <= 2 ? 1 : 0);
-  const minuteOfDay = Math.floor(msOfDay / 60_000);
-  return `${String(year).padStart(4, '0')}-${TWO_DIGITS[month] ?? ''}-${TWO_DIGITS[day] ?? ''}T${TWO_DIGITS[Math.floor(minuteOfDay / 60)] ?? ''}:${TWO_DIGITS[minuteOfDay % 60] ?? ''}`;
+  return `${String(year).padStart(4, '0')}-${TWO_DIGITS[month] ?? ''}-${TWO_DIGITS[day] ?? ''}T`;
+}
+
+// Steps come hour after hour, so the date part is usually the previous call's.
+let lastDays = Number.NaN;
+let lastDate = '';
+
+/** YYYY-MM-DDTHH:MM of a UTC instant, as new Date(ms).toISOString() spells it. */
+function isoMinutes(ms: number): string {
+  const days = Math.floor(ms / DAY_MS);
+  if (days !== lastDays) {
+    lastDays = days;
+    lastDate = isoDate(days);
+  }
+  const minuteOfDay = Math.floor((ms - days * DAY_MS) / 60_000);
+  return `${lastDate}${TWO_DIGITS[Math.floor(minuteOfDay / 60)] ?? ''}:${TWO_DIGITS[minuteOfDay % 60] ?? ''}`;
 }
 
 /** Whole milliseconds from 1970 to 9999: the fast path; anything else goes through Date, as before. */
@@ -109,6 +121,7 @@ const plainInstant = (ms: number): boolean => Number.isInteger(ms) && ms >= 0 &&
 export function utcIsoString(ms: number): string {
   if (!plainInstant(ms)) return new Date(ms).toISOString();
   const rest = ms - Math.floor(ms / 60_000) * 60_000;
+  if (rest === 0) return `${isoMinutes(ms)}:00.000Z`;
   const sec = Math.floor(rest / 1000);
   const milli = rest - sec * 1000;
   return `${isoMinutes(ms)}:${TWO_DIGITS[sec] ?? ''}.${String(milli).padStart(3, '0')}Z`;

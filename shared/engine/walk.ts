@@ -5,7 +5,7 @@
 import type { FuelModel } from '../schemas/rig';
 import { CHEMISTRY, type ChemistryPreset } from './battery';
 import { CONTINUOUS_SHARE, defaultFuelModel } from './generator';
-import { kwhPerFuelUnit, propaneKgFromHeatWh } from './fuel';
+import { kwhPerFuelUnit, PROPANE_KWH_PER_KG } from './fuel';
 import { QUARTERS, type Prepared } from './prepare';
 import { vehicleChargeW } from './vehicle-charging';
 
@@ -75,6 +75,8 @@ type Ctx = {
   // each computed by the same expression the helper uses, so the arithmetic per step is unchanged.
   i20: number; peukertExp: number; taperStart: number; chgCapW: number; genCapW: number; fuelPerKwh: number;
   idleFuelKwhPerH: number; fuelKwhPerKwhOut: number; full: Acceptance; quarter: Acceptance; other: Acceptance;
+  /** The last Peukert current and factor: a step's quarters draw the same current, so the power is taken once. */
+  lastCurrentA: number; lastPeukert: number;
 };
 
 function acceptance(chem: ChemistryPreset, dtH: number): Acceptance {
@@ -122,7 +124,14 @@ function step(c: Ctx, i: number, dtH: number, stored: number, genOn: boolean, so
     const need = demand * dtH;
     // peukertFactor in battery.ts
     const currentA = demand / c.nominalV;
-    const peukert = currentA <= c.i20 ? 1 : Math.pow(currentA / c.i20, c.peukertExp);
+    let peukert = 1;
+    if (currentA > c.i20) {
+      if (currentA !== c.lastCurrentA) {
+        c.lastCurrentA = currentA;
+        c.lastPeukert = Math.pow(currentA / c.i20, c.peukertExp);
+      }
+      peukert = c.lastPeukert;
+    }
     const removal = (need / c.chem.dischargeEfficiency) * peukert;
     if (removal <= stored) { next = stored - removal; batLoss = removal - need; flow = -need; }
     else { const delivered = need * (stored / removal); short += need - delivered; batLoss = stored - delivered; flow = -delivered; next = 0; }
@@ -185,6 +194,7 @@ function context(p: Prepared, s: Scenario): Ctx {
     idleFuelKwhPerH: gen.kind !== 'none' ? gen.model.idleFuelKwhPerH : 0,
     fuelKwhPerKwhOut: gen.kind !== 'none' ? gen.model.fuelKwhPerKwhOut : 0,
     full: acceptance(chem, 1), quarter: acceptance(chem, 1 / QUARTERS), other: acceptance(chem, Number.NaN),
+    lastCurrentA: Number.NaN, lastPeukert: 1,
   };
 }
 
@@ -223,6 +233,8 @@ export function walk(p: Prepared, s: Scenario, ledger: LedgerColumns | null): Wa
   let shortWh = 0;
   let genHours = 0;
   let genRunning = false;
+  const quarters = QUARTERS; // module-local copies of imported bindings for the loop
+  const propaneKwhPerKg = PROPANE_KWH_PER_KG;
   for (let i = 0; i < p.n; i++) {
     zeroFlow(f);
     const dtH = p.stepH[i] ?? 1;
@@ -234,8 +246,8 @@ export function walk(p: Prepared, s: Scenario, ledger: LedgerColumns | null): Wa
       genRunning = false;
       stored = step(c, i, dtH, stored, false, solarW, hookW, f);
     } else {
-      const q = dtH / QUARTERS;
-      for (let k = 0; k < QUARTERS; k++) {
+      const q = dtH / quarters;
+      for (let k = 0; k < quarters; k++) {
         const allowed = (mask & (1 << k)) !== 0;
         genRunning = decideGenerator(c.gen, allowed, genRunning, stored / c.cap);
         if (genRunning) genH += q;
@@ -244,7 +256,7 @@ export function walk(p: Prepared, s: Scenario, ledger: LedgerColumns | null): Wa
       }
     }
     if (stored / c.cap < lowest) { lowest = stored / c.cap; lowestIndex = i; }
-    const heatKg = propaneKgFromHeatWh(p.heatWh[i] ?? 0);
+    const heatKg = (p.heatWh[i] ?? 0) / 1000 / propaneKwhPerKg; // propaneKgFromHeatWh in fuel.ts
     const genKg = c.gen.kind !== 'none' && c.gen.propane ? f.fuel : 0;
     propane = Math.max(0, propane - heatKg - genKg);
     socPct[i] = (stored / c.cap) * 100;
