@@ -40,3 +40,9 @@ export function maskEmail(email: string): string {
 export const invalidInvite = () => new HttpError(404, 'invite_invalid', 'This invite link is not valid. Check that it was copied whole.');
 
 export const isoDay = (date: Date) => date.toISOString().slice(0, 10);
+
+/** Tokens are 43 URL-safe characters; anything else is a tampered or truncated link. */
+export function parseInviteToken(raw: unknown): string {
+  if (typeof raw !== 'string' || !/^[A-Za-z0-9_-]{20,100}$/.test(raw)) throw invalidInvite();
+  return raw;
+}

@@ -1,5 +1,5 @@
 import { asc, eq, inArray } from 'drizzle-orm';
-import type { Db } from '@/db/client';
+import type { Db, DbExecutor } from '@/db/client';
 import { rigFromRow } from '@/db/queries/mappers';
 import { findTrip, findTripRig, insertRig, insertTrip, logActivity } from '@/db/queries/trips';
 import { appliances, routineWindows } from '@/db/schema/appliances';
@@ -12,7 +12,7 @@ import { notFound } from './errors';
  * Copies a trip with its rig, stops, drives, appliances and routines into a new trip owned by
  * `ownerId`, in one transaction. `rig` replaces the copied rig (for "copy onto my rig").
  */
-export function duplicateTrip(db: Db, tripId: string, ownerId: string, at: Date, options: { name?: string; rig?: Rig } = {}): string {
+export function duplicateTrip(db: Db | DbExecutor, tripId: string, ownerId: string, at: Date, options: { name?: string; rig?: Rig } = {}): string {
   return db.transaction((tx) => {
     const source = findTrip(tx, tripId);
     const sourceRig = findTripRig(tx, tripId);

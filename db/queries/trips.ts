@@ -12,6 +12,7 @@ import { memberships } from '../schema/memberships';
 import { rigs } from '../schema/rigs';
 import { stops } from '../schema/stops';
 import { trips, type TripRow } from '../schema/trips';
+import { tripCopies } from '../schema/clubs';
 import { applianceRecord, driveRecord, rigRecord, rigToColumns, stopRecord } from './mappers';
 
 export function toTripSummary(row: TripRow, extra: Partial<TripSummary> = {}): TripSummary {
@@ -69,7 +70,10 @@ export function loadTripDetail(db: DbExecutor, tripId: string, role: Role): Trip
     .where(eq(appliances.tripId, tripId))
     .all()
     .map((row) => row.window);
+  const copyOf = db.select().from(tripCopies).where(eq(tripCopies.copyTripId, tripId)).get();
+  const source = copyOf ? findTrip(db, copyOf.sourceTripId) : undefined;
   return {
+    basedOn: copyOf && source ? { tripId: source.id, name: source.name, routeChanged: source.routeRevision > copyOf.sourceRouteRevision } : null,
     trip: { ...toTripSummary(trip), notes: trip.notes, ownerId: trip.ownerId, role },
     rig: rigRecord(rig),
     stops: stopRows.map(stopRecord),

@@ -1,6 +1,7 @@
 import type { NextFunction, Request, Response } from 'express';
 import { z } from 'zod';
 import type { Db } from '@/db/client';
+import { sharedToUserClub } from '@/db/queries/clubs';
 import { findMembership } from '@/db/queries/trips';
 import { can, type Permission, type Role } from '@/shared/schemas/roles';
 import { HttpError, notFound } from '../errors';
@@ -20,17 +21,22 @@ declare global {
 
 export const idParam = z.string().min(1).max(64);
 
+/** A member's role; a trip shared to one of the user's clubs reads as viewer. */
+export function accessRole(db: Db, tripId: string, userId: string): Role | undefined {
+  return findMembership(db, tripId, userId)?.role ?? (sharedToUserClub(db, tripId, userId) ? 'viewer' : undefined);
+}
+
 /**
- * Resolves the signed-in user's role on :tripId. Someone who is not a member gets the same 404 as
+ * Resolves the signed-in user's role on :tripId. Someone who may not read it gets the same 404 as
  * for a trip that does not exist, so a trip's existence never leaks.
  */
 export function loadTripAccess(db: Db) {
   return (req: Request, res: Response, next: NextFunction) => {
     const user = currentUser(res);
     const tripId = idParam.safeParse(req.params.tripId);
-    const membership = tripId.success ? findMembership(db, tripId.data, user.id) : undefined;
-    if (!tripId.success || !membership) throw notFound('That trip was not found.');
-    res.locals.access = { tripId: tripId.data, role: membership.role, userId: user.id };
+    const role = tripId.success ? accessRole(db, tripId.data, user.id) : undefined;
+    if (!tripId.success || !role) throw notFound('That trip was not found.');
+    res.locals.access = { tripId: tripId.data, role, userId: user.id };
     next();
   };
 }

@@ -1,7 +1,8 @@
 import { Router } from 'express';
-import type { Db } from '@/db/client';
 import { findRigPreset } from '@/shared/rig-presets';
 import { createTripRequestSchema, updateTripRequestSchema } from '@/shared/schemas/api';
+import { copyTripRequestSchema } from '@/shared/schemas/sharing';
+import { tripCopies } from '@/db/schema/clubs';
 import { rigSchema } from '@/shared/schemas/rig';
 import { checkTripDatesCoverStops } from '@/shared/trip-rules';
 import { findSavedRig } from '@/db/queries/rigs';
@@ -99,6 +100,34 @@ export function tripsRouter(deps: TripItemsDeps): Router {
     const { tripId, userId } = tripAccess(res);
     const copyId = duplicateTrip(db, tripId, userId, now());
     res.status(201).json(loadTripDetail(db, copyId, 'owner'));
+  });
+
+  // "Copy onto my rig": anyone who can read the trip (a club's shared plan included) gets their own
+  // trip with its stops, drives and routines, running on one of their saved rigs, linked to the original.
+  trip.post('/copy', (req, res) => {
+    const { tripId, userId } = tripAccess(res);
+    const { rigId, name } = copyTripRequestSchema.parse(req.body);
+    const saved = findSavedRig(db, userId, rigId);
+    if (!saved) throw unprocessable('rigId', 'Choose one of your saved rigs (My rigs).');
+    const source = findTrip(db, tripId);
+    if (!source) throw notFound('That trip was not found.');
+    const at = now();
+    const copyId = db.transaction((tx) => {
+      const id = duplicateTrip(tx, tripId, userId, at, { name: name ?? source.name, rig: rigFromRow(saved) });
+      tx.insert(tripCopies).values({ copyTripId: id, sourceTripId: tripId, userId, sourceRouteRevision: source.routeRevision, copiedAt: at }).run();
+      return id;
+    });
+    res.status(201).json(loadTripDetail(db, copyId, 'owner'));
+  });
+
+  // The copy's owner has seen the original's new route: stop saying it changed.
+  trip.post('/based-on/seen', requirePermission('editTrip'), (_req, res) => {
+    const { tripId, role } = tripAccess(res);
+    const link = db.select().from(tripCopies).where(eq(tripCopies.copyTripId, tripId)).get();
+    const source = link ? findTrip(db, link.sourceTripId) : undefined;
+    if (!link || !source) throw notFound('This trip is not a copy of another.');
+    db.update(tripCopies).set({ sourceRouteRevision: source.routeRevision }).where(eq(tripCopies.copyTripId, tripId)).run();
+    res.json(loadTripDetail(db, tripId, role));
   });
 
   trip.use(tripItemsRouter(deps));

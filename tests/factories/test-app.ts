@@ -5,25 +5,27 @@ import request from 'supertest';
 import { openDatabase, type Db } from '@/db/client';
 import { runMigrations } from '@/db/migrate';
 import { createApp, type TrailtallyApp } from '@/server/app';
+import type { Mailer } from '@/server/mail/mailer';
 import { createMemoryMailer } from './memory-mailer';
 
 export type TestContext = {
   app: TrailtallyApp;
   db: Db;
+  /** Messages sent when no mailer was passed in. */
   mailer: ReturnType<typeof createMemoryMailer>;
   close: () => void;
 };
 
 /** A real app on a fresh temporary SQLite file with the real migrations. */
-export function createTestApp(options: { authAttemptsPerMinute?: number } = {}): TestContext {
+export function createTestApp(options: { authAttemptsPerMinute?: number; now?: () => Date; mailer?: Mailer } = {}): TestContext {
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'trailtally-test-'));
   const db = openDatabase(path.join(dir, 'test.db'));
   runMigrations(db);
   const mailer = createMemoryMailer();
   const app = createApp({
     db,
-    mailer,
-    now: () => new Date('2026-11-20T10:00:00Z'),
+    mailer: options.mailer ?? mailer,
+    now: options.now ?? (() => new Date('2026-11-20T10:00:00Z')),
     config: {
       authSecret: 'test-secret-that-is-long-enough-for-better-auth-0123456789',
       publicUrl: 'http://localhost:8080',
@@ -44,9 +46,9 @@ export function createTestApp(options: { authAttemptsPerMinute?: number } = {}):
 let counter = 0;
 
 /** Signs up a new user through the real auth routes; the agent then carries the session cookie. */
-export async function signUpAgent(app: TrailtallyApp, name = 'Test Traveller') {
+export async function signUpAgent(app: TrailtallyApp, name = 'Test Traveller', chosenEmail?: string) {
   counter += 1;
-  const email = `traveller${counter}-${Date.now()}@example.test`;
+  const email = chosenEmail ?? `traveller${counter}-${Date.now()}@example.test`;
   const agent = request.agent(app);
   const response = await agent
     .post('/api/auth/sign-up/email')
