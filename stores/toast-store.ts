@@ -8,7 +8,7 @@ export const useToastStore = create<ToastState>(() => ({ toasts: [] }));
 
 let nextId = 1;
 // Long enough to read a sentence and reach an "Undo" button.
-const TOAST_MS = 6000;
+const TOAST_MS = 6500;
 
 export function showToast(message: string, options: Omit<Partial<Toast>, 'id' | 'message'> = {}): number {
   const id = nextId++;

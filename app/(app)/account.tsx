@@ -2,6 +2,7 @@ import { useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
+import { NameCard, PasswordCard, UnitsCard } from '@/components/forms/account-forms';
 import { Banner } from '@/components/ui/banner';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
@@ -31,6 +32,9 @@ export default function AccountScreen() {
         <Text variant="title">{session.data?.user.name}</Text>
         <Text color="inkSoft">{session.data?.user.email}</Text>
       </Card>
+      <UnitsCard />
+      {session.data ? <NameCard name={session.data.user.name} /> : null}
+      <PasswordCard />
       {error ? <Banner testID="sign-out-error" message={error} /> : null}
       <Button testID="sign-out" label="Sign out" tone="secondary" busy={busy} onPress={signOut} />
     </Screen>

@@ -1,14 +1,30 @@
-import { Skeleton } from '@/components/ui/skeleton';
+import { Link } from 'expo-router';
+import { Pressable, StyleSheet } from 'react-native';
+import { TripList } from '@/components/trips/trip-list';
+import { colors, radii, space } from '@/components/theme/tokens';
 import { EmptyState } from '@/components/ui/empty-state';
 import { QueryError } from '@/components/ui/query-error';
 import { Screen } from '@/components/ui/screen';
-import { TripList } from '@/components/trips/trip-list';
+import { Skeleton } from '@/components/ui/skeleton';
+import { Text } from '@/components/ui/text';
 import { useTripsQuery } from '@/stores/queries/trips';
+
+function NewTripLink({ testID }: { testID: string }) {
+  return (
+    <Link href="/trips/new" asChild>
+      <Pressable testID={testID} accessibilityRole="link" accessibilityLabel="Plan a new trip" style={styles.newTrip}>
+        <Text variant="label" color="white">
+          + New trip
+        </Text>
+      </Pressable>
+    </Link>
+  );
+}
 
 export default function TripsScreen() {
   const trips = useTripsQuery();
   return (
-    <Screen testID="trips-screen" title="Trips" subtitle="Every trip, checked hour by hour against your rig.">
+    <Screen testID="trips-screen" title="Trips" subtitle="Every trip, checked hour by hour against your rig." actions={<NewTripLink testID="new-trip" />}>
       {trips.isPending ? (
         <>
           <Skeleton testID="trips-loading" height={132} />
@@ -21,6 +37,7 @@ export default function TripsScreen() {
           testID="trips-empty"
           title="No trips yet"
           body="A trip is your route, your rig and your daily routines. Once you plan one, Trailtally shows where the stored energy runs short and what fixes it."
+          action={<NewTripLink testID="trips-empty-new" />}
         />
       ) : (
         <TripList trips={trips.data.trips} />
@@ -28,3 +45,8 @@ export default function TripsScreen() {
     </Screen>
   );
 }
+
+// Link asChild needs one flat style object on the web.
+const styles = StyleSheet.create({
+  newTrip: { minHeight: 48, paddingHorizontal: space.xl, borderRadius: radii.pill, backgroundColor: colors.pine, alignItems: 'center', justifyContent: 'center' },
+});

@@ -1,54 +1,74 @@
 import { Link } from 'expo-router';
+import { useState } from 'react';
 import { Pressable, StyleSheet, View } from 'react-native';
 import { colors, radii, space } from '@/components/theme/tokens';
+import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { Text } from '@/components/ui/text';
 import type { TripSummary } from '@/shared/schemas/trip-summary';
 import { countNights, formatTripDates } from './format-trip-dates';
+import { SocGauge } from './soc-gauge';
 
-export function TripCard({ trip }: { trip: TripSummary }) {
+type Props = { trip: TripSummary; canDelete: boolean; onDuplicate: () => void; onDelete: () => void; busy: boolean };
+
+export function TripCard({ trip, canDelete, onDuplicate, onDelete, busy }: Props) {
+  const [confirming, setConfirming] = useState(false);
   const nights = countNights(trip.startDate, trip.endDate);
   const dates = formatTripDates(trip.startDate, trip.endDate);
+  const flags = trip.flagCount ?? null;
   return (
-    <Link href={{ pathname: '/trips/[tripId]', params: { tripId: trip.id } }} asChild>
-      <Pressable
-        testID={`trip-card-${trip.id}`}
-        accessibilityRole="link"
-        accessibilityLabel={`${trip.name}, ${dates}, ${nights} nights`}
-        style={styles.press}
-      >
-        <Card>
+    <Card testID={`trip-card-${trip.id}`}>
+      <Link href={{ pathname: '/trips/[tripId]', params: { tripId: trip.id } }} asChild>
+        <Pressable testID={`trip-open-${trip.id}`} accessibilityRole="link" accessibilityLabel={`${trip.name}, ${dates}, ${nights} nights`} style={styles.press}>
           <Text variant="title">{trip.name}</Text>
-          <Text color="inkSoft">{dates}</Text>
-          <View style={styles.meta}>
-            <View style={styles.chip}>
-              <Text variant="figure" color="pine">
-                {nights}
-              </Text>
-              <Text variant="unit" color="pine">
-                {nights === 1 ? 'night' : 'nights'}
-              </Text>
-            </View>
-            <Text variant="caption" color="inkSoft">
-              {trip.timeZone.replace(/_/g, ' ')}
+          <Text color="inkSoft">
+            {dates} · {nights} {nights === 1 ? 'night' : 'nights'}
+          </Text>
+          <Text variant="caption" color="inkSoft">
+            {trip.rigName ? `Rig: ${trip.rigName}` : 'No rig yet'}
+          </Text>
+        </Pressable>
+      </Link>
+      <View style={styles.meta}>
+        {trip.lowestSocPct !== null && trip.lowestSocPct !== undefined ? (
+          <SocGauge testID={`trip-gauge-${trip.id}`} lowestPct={trip.lowestSocPct} reservePct={trip.reservePct ?? null} />
+        ) : (
+          <Text variant="caption" color="inkSoft" style={styles.noBudget}>
+            No budget yet
+          </Text>
+        )}
+        {flags !== null ? (
+          <View style={[styles.flags, flags > 0 ? styles.flagsOn : null]} testID={`trip-flags-${trip.id}`}>
+            <Text variant="label" color={flags > 0 ? 'ember' : 'pine'}>
+              {flags === 0 ? 'No flags' : `${flags} ${flags === 1 ? 'flag' : 'flags'}`}
             </Text>
           </View>
-        </Card>
-      </Pressable>
-    </Link>
+        ) : null}
+      </View>
+      {confirming ? (
+        <View style={styles.actions}>
+          <Text variant="label" color="ember" style={styles.confirmText}>
+            Delete “{trip.name}” for everyone on it?
+          </Text>
+          <Button testID={`trip-delete-confirm-${trip.id}`} tone="danger" label="Delete" onPress={onDelete} />
+          <Button testID={`trip-delete-cancel-${trip.id}`} tone="quiet" label="Keep it" onPress={() => setConfirming(false)} />
+        </View>
+      ) : (
+        <View style={styles.actions}>
+          <Button testID={`trip-duplicate-${trip.id}`} tone="quiet" label="Duplicate" accessibilityLabel={`Duplicate ${trip.name}`} busy={busy} onPress={onDuplicate} />
+          {canDelete ? <Button testID={`trip-delete-${trip.id}`} tone="quiet" label="Delete…" accessibilityLabel={`Delete ${trip.name}`} onPress={() => setConfirming(true)} /> : null}
+        </View>
+      )}
+    </Card>
   );
 }
 
 const styles = StyleSheet.create({
-  press: { borderRadius: radii.lg },
-  meta: { flexDirection: 'row', alignItems: 'center', justifyContent: 'space-between', marginTop: space.sm, gap: space.md },
-  chip: {
-    flexDirection: 'row',
-    alignItems: 'baseline',
-    gap: space.xs,
-    backgroundColor: colors.pineSoft,
-    borderRadius: radii.pill,
-    paddingHorizontal: space.lg,
-    paddingVertical: space.xs,
-  },
+  press: { borderRadius: radii.md, gap: space.xs },
+  meta: { flexDirection: 'row', alignItems: 'center', gap: space.lg, marginTop: space.sm, flexWrap: 'wrap' },
+  noBudget: { flex: 1 },
+  flags: { borderRadius: radii.pill, paddingHorizontal: space.md, paddingVertical: space.xs, backgroundColor: colors.pineSoft },
+  flagsOn: { backgroundColor: colors.emberSoft },
+  actions: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.xs },
+  confirmText: { flexBasis: '100%' },
 });

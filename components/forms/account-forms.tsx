@@ -1,0 +1,104 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useState } from 'react';
+import { Controller, useForm } from 'react-hook-form';
+import { StyleSheet, View } from 'react-native';
+import { z } from 'zod';
+import { space } from '@/components/theme/tokens';
+import { Banner } from '@/components/ui/banner';
+import { Button } from '@/components/ui/button';
+import { Card } from '@/components/ui/card';
+import { ChoiceChips } from '@/components/ui/choice-chips';
+import { Text } from '@/components/ui/text';
+import { TextField } from '@/components/ui/text-field';
+import { signUpSchema } from '@/shared/schemas/account';
+import { authClient } from '@/stores/auth-client';
+import { usePreferencesMutation } from '@/stores/queries/preferences';
+import { showToast } from '@/stores/toast-store';
+import { useUnits } from '@/stores/units-store';
+import { describeAuthError } from './auth-error';
+
+export function UnitsCard() {
+  const units = useUnits();
+  const save = usePreferencesMutation();
+  return (
+    <Card testID="units-card">
+      <Text variant="title" role="heading" aria-level={2}>
+        Units
+      </Text>
+      <ChoiceChips
+        testID="units"
+        label="Show figures in"
+        value={units}
+        onChange={(v) => save.mutate({ units: v }, { onSuccess: () => showToast(v === 'us' ? 'Showing US units' : 'Showing metric units'), onError: () => showToast('Saved on this device only; the server did not answer.', { tone: 'danger' }) })}
+        options={[{ value: 'metric', label: 'Metric (°C, kg, L)' }, { value: 'us', label: 'US (°F, lb, gal)' }]}
+      />
+      <Text variant="caption" color="inkSoft">
+        Electrical figures stay in watts, watt-hours, amps and volts in both.
+      </Text>
+    </Card>
+  );
+}
+
+const nameSchema = signUpSchema.pick({ name: true });
+const passwordSchema = z
+  .object({ currentPassword: z.string().min(1, { error: 'Enter your current password.' }), newPassword: signUpSchema.shape.password, confirm: z.string() })
+  .refine((v) => v.newPassword === v.confirm, { message: 'The two new passwords differ.', path: ['confirm'] });
+
+export function NameCard({ name }: { name: string }) {
+  const [error, setError] = useState<string>();
+  const { control, handleSubmit, formState } = useForm<z.infer<typeof nameSchema>>({ resolver: zodResolver(nameSchema), defaultValues: { name } });
+  const submit = handleSubmit(async (v) => {
+    setError(undefined);
+    const result = await authClient.updateUser({ name: v.name });
+    if (result.error) setError(describeAuthError(result.error));
+    else showToast('Name saved');
+  });
+  return (
+    <Card testID="name-card">
+      <Text variant="title" role="heading" aria-level={2}>
+        Your name
+      </Text>
+      {error ? <Banner testID="name-error" message={error} /> : null}
+      <Controller control={control} name="name" render={({ field, fieldState }) => (
+        <TextField testID="account-name" label="Name" value={field.value} onChangeText={field.onChange} onBlur={field.onBlur} error={fieldState.error?.message} onSubmitEditing={submit} />
+      )} />
+      <Button testID="account-name-save" label="Save name" busy={formState.isSubmitting} disabled={formState.isSubmitting} onPress={submit} />
+    </Card>
+  );
+}
+
+export function PasswordCard() {
+  const [error, setError] = useState<string>();
+  const { control, handleSubmit, formState, reset } = useForm<z.infer<typeof passwordSchema>>({ resolver: zodResolver(passwordSchema), defaultValues: { currentPassword: '', newPassword: '', confirm: '' } });
+  const submit = handleSubmit(async (v) => {
+    setError(undefined);
+    const result = await authClient.changePassword({ currentPassword: v.currentPassword, newPassword: v.newPassword, revokeOtherSessions: true });
+    if (result.error) {
+      setError(result.error.code === 'INVALID_PASSWORD' ? 'Your current password is not right.' : describeAuthError(result.error));
+      return;
+    }
+    reset();
+    showToast('Password changed; other devices were signed out');
+  });
+  const field = (name: 'currentPassword' | 'newPassword' | 'confirm', label: string, autoComplete: 'current-password' | 'new-password') => (
+    <Controller control={control} name={name} render={({ field: f, fieldState }) => (
+      <TextField testID={`account-${name}`} label={label} secureTextEntry autoComplete={autoComplete} value={f.value} onChangeText={f.onChange} onBlur={f.onBlur} error={fieldState.error?.message} />
+    )} />
+  );
+  return (
+    <Card testID="password-card">
+      <Text variant="title" role="heading" aria-level={2}>
+        Password
+      </Text>
+      {error ? <Banner testID="password-error" message={error} /> : null}
+      <View style={styles.fields}>
+        {field('currentPassword', 'Current password', 'current-password')}
+        {field('newPassword', 'New password', 'new-password')}
+        {field('confirm', 'New password again', 'new-password')}
+      </View>
+      <Button testID="account-password-save" label="Change password" busy={formState.isSubmitting} disabled={formState.isSubmitting} onPress={submit} />
+    </Card>
+  );
+}
+
+const styles = StyleSheet.create({ fields: { gap: space.md } });

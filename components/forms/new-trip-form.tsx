@@ -1,0 +1,104 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useState } from 'react';
+import { Controller, useForm } from 'react-hook-form';
+import { StyleSheet, View } from 'react-native';
+import { z } from 'zod';
+import { space } from '@/components/theme/tokens';
+import { Banner } from '@/components/ui/banner';
+import { Button } from '@/components/ui/button';
+import { ChoiceChips } from '@/components/ui/choice-chips';
+import { Skeleton } from '@/components/ui/skeleton';
+import { Text } from '@/components/ui/text';
+import { TextField } from '@/components/ui/text-field';
+import { createTripRequestSchema, type CreateTripRequest, type TripDetail } from '@/shared/schemas/api';
+import { ApiError } from '@/stores/queries/api-client';
+import { useMyRigsQuery, useRigPresetsQuery } from '@/stores/queries/rigs';
+import { useTripCreateMutation } from '@/stores/queries/trips';
+
+// The form holds the rig choice as one string ("preset:id" or "saved:id") so a single chip group can pick it.
+const formSchema = z.object({
+  name: z.string().trim().min(1, { error: 'Give the trip a name.' }).max(120),
+  startDate: z.iso.date({ error: 'Use a date like 2027-09-12.' }),
+  endDate: z.iso.date({ error: 'Use a date like 2027-09-19.' }),
+  timeZone: z.string().min(1, { error: 'Choose a time zone.' }),
+  rig: z.string().regex(/^(preset|saved):.+/, { error: 'Choose a rig to start from.' }),
+}).refine((v) => v.endDate >= v.startDate, { message: 'The trip must end on or after its first day.', path: ['endDate'] });
+type FormValues = z.infer<typeof formSchema>;
+
+function toRequest(v: FormValues): CreateTripRequest {
+  const [kind, id] = [v.rig.slice(0, v.rig.indexOf(':')), v.rig.slice(v.rig.indexOf(':') + 1)];
+  return createTripRequestSchema.parse({
+    name: v.name, startDate: v.startDate, endDate: v.endDate, timeZone: v.timeZone, notes: '',
+    rigSource: kind === 'saved' ? { kind: 'saved', rigId: id } : { kind: 'preset', presetId: id },
+  });
+}
+
+const browserZone = (): string => {
+  try {
+    return Intl.DateTimeFormat().resolvedOptions().timeZone || 'UTC';
+  } catch {
+    return 'UTC';
+  }
+};
+
+export function NewTripForm({ onCreated }: { onCreated: (detail: TripDetail) => void }) {
+  const presets = useRigPresetsQuery();
+  const mine = useMyRigsQuery();
+  const create = useTripCreateMutation();
+  const [formError, setFormError] = useState<string>();
+  const { control, handleSubmit, formState, setError } = useForm<FormValues>({
+    resolver: zodResolver(formSchema),
+    defaultValues: { name: '', startDate: '', endDate: '', timeZone: browserZone(), rig: '' },
+  });
+  const submit = handleSubmit(async (values) => {
+    setFormError(undefined);
+    try {
+      onCreated(await create.mutateAsync(toRequest(values)));
+    } catch (error) {
+      if (error instanceof ApiError && error.fields) {
+        for (const [field, messages] of Object.entries(error.fields)) {
+          const key = field === 'rigSource' || field.startsWith('rigSource.') ? 'rig' : field;
+          if (key in values) setError(key as keyof FormValues, { message: messages.join(' ') });
+        }
+      }
+      setFormError(error instanceof ApiError ? error.message : 'The trip could not be created.');
+    }
+  });
+  const rigOptions = [
+    ...(mine.data?.rigs ?? []).map((r) => ({ value: `saved:${r.id}`, label: r.rig.name })),
+    ...(presets.data?.presets ?? []).map((p) => ({ value: `preset:${p.id}`, label: p.label })),
+  ];
+  const text = (name: 'name' | 'startDate' | 'endDate' | 'timeZone', label: string, hint?: string) => (
+    <Controller control={control} name={name} render={({ field, fieldState }) => (
+      <View style={styles.cell}>
+        <TextField testID={`new-trip-${name}`} label={label} hint={hint} value={field.value} onChangeText={field.onChange} onBlur={field.onBlur} error={fieldState.error?.message} onSubmitEditing={submit} />
+      </View>
+    )} />
+  );
+  return (
+    <View style={styles.form} testID="new-trip-form">
+      {formError ? <Banner testID="new-trip-error" message={formError} /> : null}
+      {text('name', 'Trip name')}
+      <View style={styles.grid}>
+        {text('startDate', 'First day', 'YYYY-MM-DD')}
+        {text('endDate', 'Last day', 'YYYY-MM-DD')}
+      </View>
+      {text('timeZone', 'Home time zone', 'an IANA name such as Europe/London')}
+      {presets.isPending || mine.isPending ? <Skeleton testID="new-trip-rigs-loading" height={96} /> : null}
+      <Controller control={control} name="rig" render={({ field, fieldState }) => (
+        <View style={styles.rig}>
+          <ChoiceChips testID="new-trip-rig" label="Start from a rig (My rigs first, then common rigs)" value={field.value} onChange={field.onChange} options={rigOptions} />
+          {fieldState.error ? <Text variant="caption" color="ember" role="alert">{fieldState.error.message}</Text> : null}
+        </View>
+      )} />
+      <Button testID="new-trip-submit" label="Create trip" busy={formState.isSubmitting} disabled={formState.isSubmitting} onPress={submit} />
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  form: { gap: space.lg },
+  grid: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md },
+  cell: { flexGrow: 1, flexBasis: 160 },
+  rig: { gap: space.xs },
+});
