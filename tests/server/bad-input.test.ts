@@ -6,6 +6,7 @@ import type { Agent } from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { z } from 'zod';
 import * as api from '@/shared/schemas/api';
+import * as sharing from '@/shared/schemas/sharing';
 import { preferencesSchema } from '@/server/routes/preferences';
 import { createTestApp, signUpAgent, type TestContext } from '../factories/test-app';
 import { addAppliance, addStop, createTrip, getDetail, grant, LIGHTS, stopOnNextFreeDay } from '../factories/trip-factory';
@@ -15,7 +16,7 @@ type Route = { name: string; method: 'post' | 'patch' | 'put'; path: () => strin
 let ctx: TestContext;
 let agent: Agent;
 let tripId: string;
-let ids: { stop: string; drive: string; appliance: string; member: string; savedRig: string };
+let ids: { stop: string; drive: string; appliance: string; member: string; savedRig: string; club: string };
 let snapshot: Awaited<ReturnType<typeof getDetail>>;
 
 /** A hash of every row the app owns (auth sessions excluded: reading them may refresh them). */
@@ -63,6 +64,12 @@ const ROUTES: Route[] = [
   { name: 'PATCH member', method: 'patch', path: () => `/api/trips/${tripId}/members/${ids.member}`, schema: api.updateMemberRoleRequestSchema, valid: () => ({ role: 'crew' }) },
   { name: 'POST /rigs', method: 'post', path: () => '/api/rigs', schema: api.createRigRequestSchema, valid: () => ({ rig: snapshot.rig.rig }) },
   { name: 'PUT /rigs/:id', method: 'put', path: () => `/api/rigs/${ids.savedRig}`, schema: api.updateRigRequestSchema, valid: () => ({ version: 1, rig: snapshot.rig.rig }) },
+  { name: 'POST invite', method: 'post', path: () => `/api/trips/${tripId}/invites`, schema: sharing.createInviteRequestSchema, valid: () => ({ email: 'new@example.test', role: 'crew' }) },
+  { name: 'POST hand-over', method: 'post', path: () => `/api/trips/${tripId}/members/hand-over`, schema: sharing.handOverRequestSchema, valid: () => ({ userId: ids.member }) },
+  { name: 'POST copy', method: 'post', path: () => `/api/trips/${tripId}/copy`, schema: sharing.copyTripRequestSchema, valid: () => ({ rigId: ids.savedRig }) },
+  { name: 'POST /clubs', method: 'post', path: () => '/api/clubs', schema: sharing.createClubRequestSchema, valid: () => ({ name: 'Club' }) },
+  { name: 'POST club invites', method: 'post', path: () => `/api/clubs/${ids.club}/invites`, schema: sharing.clubInviteRequestSchema, valid: () => ({ addresses: 'a@example.test' }) },
+  { name: 'POST club trips', method: 'post', path: () => `/api/clubs/${ids.club}/trips`, schema: sharing.shareTripRequestSchema, valid: () => ({ tripId }) },
   { name: 'PUT /me/preferences', method: 'put', path: () => '/api/me/preferences', schema: preferencesSchema, valid: () => ({ units: 'us' }) },
 ];
 
@@ -124,7 +131,8 @@ beforeAll(async () => {
   const appliance = await addAppliance(agent, tripId);
   snapshot = await getDetail(agent, tripId);
   const saved = await agent.post('/api/rigs').send({ rig: snapshot.rig.rig });
-  ids = { stop: stop.id, drive: snapshot.drives[0]?.id ?? '', appliance: appliance.id, member: member.userId, savedRig: saved.body.id };
+  const club = await agent.post('/api/clubs').send({ name: 'Fuzz club' });
+  ids = { stop: stop.id, drive: snapshot.drives[0]?.id ?? '', appliance: appliance.id, member: member.userId, savedRig: saved.body.id, club: club.body.club.id };
 });
 afterAll(() => ctx.close());
 

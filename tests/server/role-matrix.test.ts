@@ -143,6 +143,38 @@ const ROWS: Row[] = [
     },
     expected: needs('owner'),
   },
+  { name: 'GET invites', prepare: async () => ({ method: 'get', path: `${base()}/invites` }), expected: needs('trip') },
+  {
+    name: 'POST invite (as viewer)',
+    prepare: async () => ({ method: 'post', path: `${base()}/invites`, body: { email: `guest-${crypto.randomUUID()}@example.test`, role: 'viewer' } }),
+    expected: needs('trip', 201),
+  },
+  {
+    name: 'POST invite resend',
+    prepare: async () => {
+      const created = await owner().post(`${base()}/invites`).send({ email: `resend-${crypto.randomUUID()}@example.test`, role: 'crew' });
+      return { method: 'post', path: `${base()}/invites/${created.body.invite.id}/resend` };
+    },
+    expected: needs('owner'),
+  },
+  {
+    name: 'DELETE invite',
+    prepare: async () => {
+      const created = await owner().post(`${base()}/invites`).send({ email: `revoke-${crypto.randomUUID()}@example.test`, role: 'crew' });
+      return { method: 'delete', path: `${base()}/invites/${created.body.invite.id}` };
+    },
+    expected: needs('owner', 204),
+  },
+  {
+    name: 'POST copy onto my rig',
+    prepare: async (w, actor) => {
+      const { rig } = await getDetail(owner(), world.tripId);
+      const caller = actor === 'anonymous' ? w.callers.owner : w.callers[actor];
+      const saved = await caller.agent.post('/api/rigs').send({ rig: { ...rig.rig, name: 'Mine' } });
+      return { method: 'post', path: `${base()}/copy`, body: { rigId: saved.body.id } };
+    },
+    expected: needs('read', 201),
+  },
   {
     name: 'DELETE member',
     prepare: async (w) => {
