@@ -111,7 +111,9 @@ function headline(p: Prepared, l: LedgerColumns, r: WalkResult): Headline {
 
 function bandRun(p: Prepared, shift: -1 | 1): BandRun {
   const r = walk(p, plannedScenario(p, solarSeries(p, shift)), null);
-  return { skyShift: shift, socPct: Array.from(r.socPct), lowestSocPct: r.lowestSocPct };
+  const socPct = new Array<number>(p.n);
+  for (let i = 0; i < p.n; i++) socPct[i] = r.socPct[i] ?? 0;
+  return { skyShift: shift, socPct, lowestSocPct: r.lowestSocPct };
 }
 
 /** Simulate a validated input (no parsing); exposed for callers that already hold an EngineInput. */

@@ -71,6 +71,9 @@ function geometry(p: Prepared): Geometry {
     return { j, cosB: Math.cos(b), sinB: Math.sin(b), azimuthDeg: a.azimuthDeg };
   }).filter((panel) => arrays[panel.j]?.tilted);
   const stopDiffuse = p.exposures.map((e) => diffuseFactor(e));
+  // Above the highest obstruction the beam is never blocked, so beamFactor's sector look-up is only needed below it.
+  const stopTop = p.exposures.map((e) => Math.max(...e.horizonDeg));
+  const openTop = Math.max(...p.openExposure.horizonDeg);
   const openDiffuse = diffuseFactor(p.openExposure);
   const { alt: alts, az: azs } = p;
   const { cosZ, beamF, cosInc, rb } = g;
@@ -78,6 +81,7 @@ function geometry(p: Prepared): Geometry {
     const where = p.where[i] ?? -1;
     const exp = where >= 0 ? (p.exposures[where] ?? p.openExposure) : p.openExposure;
     g.diffF[i] = where >= 0 ? (stopDiffuse[where] ?? openDiffuse) : openDiffuse;
+    const top = where >= 0 ? (stopTop[where] ?? openTop) : openTop;
     for (let s = 0; s < S; s++) {
       const k = i * S + s;
       const alt = alts[k] ?? -90;
@@ -87,7 +91,7 @@ function geometry(p: Prepared): Geometry {
       const cz = Math.cos(z);
       const sz = Math.sin(z);
       cosZ[k] = cz;
-      beamF[k] = beamFactor(exp, alt, az);
+      beamF[k] = alt >= top ? 1 : beamFactor(exp, alt, az);
       for (const panel of panels) {
         const ci = Math.max(0, cz * panel.cosB + sz * panel.sinB * Math.cos((az - panel.azimuthDeg) * RAD));
         cosInc[k * m + panel.j] = ci;

@@ -51,12 +51,22 @@ function deltaT(d: number): number {
   return -20 + 32 * t * t - 0.5628 * (2150 - y);
 }
 
+let lastLat = Number.NaN;
+let sinPhi = 0;
+let cosPhi = 1;
+
 /** sunPosition into out[k] (altitude, degrees, refraction-corrected) and out[k + 1] (azimuth from north). */
 export function sunPositionInto(utcMs: number, lat: number, lon: number, out: Float64Array, k: number): void {
   // new Date(ms).valueOf() truncates fractional milliseconds and is NaN beyond ±8.64e15 ms.
   const ms = Math.abs(utcMs) <= 8.64e15 ? Math.trunc(utcMs) + 0 : Number.NaN;
   const lw = RAD * -lon;
-  const phi = RAD * lat;
+  if (!Object.is(lat, lastLat)) {
+    // A stop's steps share one latitude: its sine and cosine are the same numbers every time.
+    lastLat = lat;
+    const phi = RAD * lat;
+    sinPhi = Math.sin(phi);
+    cosPhi = Math.cos(phi);
+  }
   const d = ms / DAY_MS - 0.5 + J1970 - J2000;
   const dTT = d + deltaT(d) / 86400;
   const t = dTT / 36525;
@@ -71,10 +81,10 @@ export function sunPositionInto(utcMs: number, lat: number, lon: number, out: Fl
   const ra = Math.atan2(Math.cos(e) * Math.sin(L), Math.cos(L));
   const dec = Math.asin(Math.sin(e) * Math.sin(L));
   const H = RAD * (280.46061837 + 360.98564736629 * d) - lw - ra;
-  const h = Math.asin(Math.sin(phi) * Math.sin(dec) + Math.cos(phi) * Math.cos(dec) * Math.cos(H));
+  const h = Math.asin(sinPhi * Math.sin(dec) + cosPhi * Math.cos(dec) * Math.cos(H));
   const hr = h < 0 ? 0 : h;
   out[k] = (h + 2967e-7 / Math.tan(hr + 0.00312536 / (hr + 0.08901179))) / RAD;
-  out[k + 1] = (Math.atan2(Math.sin(H), Math.cos(H) * Math.sin(phi) - Math.tan(dec) * Math.cos(phi)) / RAD + 540) % 360;
+  out[k + 1] = (Math.atan2(Math.sin(H), Math.cos(H) * sinPhi - Math.tan(dec) * cosPhi) / RAD + 540) % 360;
 }
 
 /** Cooper (1969) declination, degrees, for day of year n (Duffie & Beckman eq. 1.6.1a). */
