@@ -62,11 +62,12 @@ const tripFieldsSchema = z.object({
   startDate: isoDateSchema,
   endDate: isoDateSchema,
   timeZone: timeZoneSchema,
-  notes: z.string().max(4000).default(''),
+  notes: z.string().max(4000),
 });
 
 export const createTripRequestSchema = tripFieldsSchema
   .extend({
+    notes: z.string().max(4000).default(''),
     /** Start from one of My rigs (copied onto the trip) or from a preset rig. */
     rigSource: z.discriminatedUnion('kind', [
       z.object({ kind: z.literal('saved'), rigId: idSchema }),
@@ -77,6 +78,7 @@ export const createTripRequestSchema = tripFieldsSchema
   .refine((t) => t.endDate >= t.startDate, { message: 'The trip must end on or after its first day.', path: ['endDate'] });
 export type CreateTripRequest = z.input<typeof createTripRequestSchema>;
 
+// No defaults here: a field left out of an update stays as it is.
 export const updateTripRequestSchema = tripFieldsSchema
   .partial()
   .extend({ version: versionSchema })

@@ -155,3 +155,12 @@ describe('the seeded demo trips', () => {
     }
   });
 });
+
+describe('partial updates', () => {
+  it('when only the name is sent, then the notes and dates stay as they were', async () => {
+    const { agent } = await signUpAgent(ctx.app);
+    const { trip } = await createTrip(agent, { notes: 'Book the rally field early' });
+    const renamed = (await agent.patch(`/api/trips/${trip.id}`).send({ version: trip.version, name: 'Renamed' }).expect(200)).body;
+    expect(renamed.trip).toMatchObject({ name: 'Renamed', notes: 'Book the rally field early', startDate: trip.startDate, endDate: trip.endDate });
+  });
+});
