@@ -3,7 +3,7 @@
 // sunset inside an hour are weighed properly), and the appliance loads. Scenarios (sky band, headroom) reuse it.
 import type { EngineInput } from '../schemas/engine-input';
 import type { Appliance } from '../schemas/appliance';
-import type { DayType, RoutineWindow } from '../schemas/common';
+import type { DayType } from '../schemas/common';
 import type { Stop } from '../schemas/trip';
 import { haurwitzGhi, ineichenPerez, kastenYoungAirMass, pressureRatio } from './clear-sky';
 import { extraterrestrialW } from './extraterrestrial';
@@ -207,12 +207,6 @@ function localStep(p: Prepared, i: number): LocalStep {
 
 export function prevDayType(p: Prepared, i: number): DayType {
   return p.travelByDay[(p.dayIndex[i] ?? 0) - 1] ? 'travel' : 'camp';
-}
-
-/** The routine windows an appliance's schedule reads (its routine, or a thermostat's active windows). */
-function scheduleWindows(a: Appliance): readonly RoutineWindow[] | undefined {
-  const s = a.schedule;
-  return s.kind === 'routine' ? s.windows : s.kind === 'thermostat' ? s.activeWindows : undefined;
 }
 
 type Slots = { slotOf: Int32Array; first: number[] };
