@@ -35,7 +35,7 @@ export function updateAppliance(
   tripId: string,
   applianceId: string,
   version: number,
-  change: { fields: ApplianceFields; caretakerUserId: string | null } | { schedule: Schedule },
+  change: { fields: ApplianceFields; caretakerUserId?: string | null } | { schedule: Schedule },
 ): VersionedWrite<ApplianceRecord> {
   const current = findAppliance(db, tripId, applianceId);
   if (!current) return { status: 'missing' };
@@ -44,7 +44,7 @@ export function updateAppliance(
   const columns =
     'schedule' in change
       ? scheduleToColumns(change.schedule)
-      : { ...applianceToColumns(change.fields), caretakerUserId: change.caretakerUserId };
+      : { ...applianceToColumns(change.fields), caretakerUserId: change.caretakerUserId === undefined ? current.caretakerUserId : change.caretakerUserId };
   db.update(appliances)
     .set({ ...columns, version: version + 1 })
     .where(and(eq(appliances.id, applianceId), eq(appliances.version, version)))

@@ -29,12 +29,12 @@ export function insertStop(db: DbExecutor, tripId: string, stop: Stop, notes: st
 
 export type VersionedWrite<T> = { status: 'ok'; row: T } | { status: 'conflict'; current: T } | { status: 'missing' };
 
-export function updateStop(db: DbExecutor, tripId: string, stopId: string, version: number, stop: Stop, notes: string): VersionedWrite<StopRow> {
+export function updateStop(db: DbExecutor, tripId: string, stopId: string, version: number, stop: Stop, notes?: string): VersionedWrite<StopRow> {
   const current = findStopRow(db, tripId, stopId);
   if (!current) return { status: 'missing' };
   if (current.version !== version) return { status: 'conflict', current };
   db.update(stops)
-    .set({ ...stopToColumns(stop), notes, version: version + 1 })
+    .set({ ...stopToColumns(stop), notes: notes ?? current.notes, version: version + 1 })
     .where(and(eq(stops.id, stopId), eq(stops.version, version)))
     .run();
   resequenceStops(db, tripId);

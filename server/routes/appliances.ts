@@ -7,8 +7,8 @@ import { notFound, unprocessable } from '../errors';
 import { idParam, requirePermission, tripAccess } from '../middleware/trip-access';
 import { unwrapWrite } from './write-result';
 
-function assertCaretakerIsMember(db: DbExecutor, tripId: string, caretakerUserId: string | null): void {
-  if (caretakerUserId !== null && !findMembership(db, tripId, caretakerUserId)) {
+function assertCaretakerIsMember(db: DbExecutor, tripId: string, caretakerUserId: string | null | undefined): void {
+  if (caretakerUserId != null && !findMembership(db, tripId, caretakerUserId)) {
     throw unprocessable('caretakerUserId', 'The person looking after an appliance must be a member of the trip.');
   }
 }

@@ -91,8 +91,9 @@ export const replaceTripRigRequestSchema = z.object({ version: versionSchema, ri
 export const saveTripRigRequestSchema = z.object({ name: z.string().trim().min(1).max(120) }).strict();
 
 export const createStopRequestSchema = z.object({ stop: stopSchema, notes: z.string().max(4000).default('') }).strict();
+/** notes left out: kept as they are. */
 export const updateStopRequestSchema = z
-  .object({ version: versionSchema, stop: stopSchema, notes: z.string().max(4000).default('') })
+  .object({ version: versionSchema, stop: stopSchema, notes: z.string().max(4000).optional() })
   .strict();
 export const reorderStopsRequestSchema = z.object({ tripVersion: versionSchema, stopIds: z.array(idSchema).min(1).max(60) }).strict();
 
@@ -101,8 +102,9 @@ export const updateDriveRequestSchema = z.object({ version: versionSchema, drive
 export const createApplianceRequestSchema = z
   .object({ appliance: applianceFieldsSchema, caretakerUserId: z.string().nullable().default(null) })
   .strict();
+/** caretakerUserId left out: kept as it is; null clears it. */
 export const updateApplianceRequestSchema = z
-  .object({ version: versionSchema, appliance: applianceFieldsSchema, caretakerUserId: z.string().nullable().default(null) })
+  .object({ version: versionSchema, appliance: applianceFieldsSchema, caretakerUserId: z.string().nullable().optional() })
   .strict();
 export const updateScheduleRequestSchema = z.object({ version: versionSchema, schedule: scheduleSchema }).strict();
 
