@@ -101,7 +101,7 @@ export function createApp(deps: AppDeps): TrailtallyApp {
 
   app.use(express.json({ limit: JSON_BODY_LIMIT }));
   app.use('/api/health', healthRouter({ db, version: packageJson.version }));
-  const budgets = createBudgetService(db);
+  const budgets = createBudgetService(db, (err, tripId) => deps.logger?.error({ err, tripId }, 'budget failed'));
   const signedIn = requireSession(auth);
   app.use('/api/trips', signedIn, tripsRouter({ db, now: deps.now, budgets, mailer: deps.mailer, publicUrl: config.publicUrl }));
   app.use('/api/invites', inviteLinksRouter({ db, now: deps.now, auth }));

@@ -13,7 +13,7 @@ const CACHE_LIMIT = 200;
  * Runs the engine for a trip and keeps the answer per (trip, revision): any change to the trip
  * bumps its revision, so a cached budget is never stale and needs no invalidation.
  */
-export function createBudgetService(db: Db) {
+export function createBudgetService(db: Db, onError: (error: unknown, tripId: string) => void = () => undefined) {
   const cache = new Map<string, BudgetAnswer>();
 
   function compute(tripId: string, revision: number): BudgetAnswer {
@@ -25,7 +25,13 @@ export function createBudgetService(db: Db) {
       const issue = parsed.error.issues[0];
       return { revision, result: null, reason: `The plan cannot be simulated yet: ${issue?.path.join('.')} ${issue?.message}` };
     }
-    return { revision, result: simulateParsed(parsed.data) };
+    try {
+      return { revision, result: simulateParsed(parsed.data) };
+    } catch (error) {
+      // An engine fault must not take the trip's pages down with it; say so and log it.
+      onError(error, tripId);
+      return { revision, result: null, reason: 'The budget could not be computed for this plan. Please report it.' };
+    }
   }
 
   return {
