@@ -8,15 +8,23 @@ import type { Stop } from '../schemas/trip';
 import { haurwitzGhi, ineichenPerez, kastenYoungAirMass, pressureRatio } from './clear-sky';
 import { extraterrestrialW } from './extraterrestrial';
 // Energy per step follows onShare and applianceStep in loads.ts, inlined here to keep the loop free of allocations.
-import { thermostatDuty } from './loads';
+import { thermostatDuty as thermostatDutyOf } from './loads';
 import type { LocalStep } from './routines';
 import { windowsShare } from './routines';
 import { resolveExposure, type ResolvedExposure } from './site-exposure';
 import { sunPositionInto } from './sun-position';
-import { ambientC } from './temperature-curve';
+import { ambientC as ambientCurve } from './temperature-curve';
 import {
-  buildGrid, buildSegments, fillOffsets, HOUR_MS, localDayNumber, localMinuteOfDay, type Segment,
+  buildGrid, buildSegments, fillOffsets, HOUR_MS as HOUR_MS_IMPORTED, localDayNumber as dayNumberOf, localMinuteOfDay as minuteOfDayOf, type Segment,
 } from './time-grid';
+
+// Module-local copies of imported bindings used once per step: once compiled to CommonJS (as the benchmark and
+// the server run it) every use of an imported name is a property read through a getter.
+const HOUR_MS = HOUR_MS_IMPORTED;
+const localDayNumber = dayNumberOf;
+const localMinuteOfDay = minuteOfDayOf;
+const ambientC = ambientCurve;
+const thermostatDuty = thermostatDutyOf;
 
 export const SAMPLES = 3; // start, middle, end of each step
 export const QUARTERS = 4; // generator sub-steps
@@ -58,7 +66,7 @@ export type Prepared = {
   acRunningW: Float64Array;
   acSurgeExtraW: Float64Array;
   acStandbyOn: Uint8Array;
-  /** Electric Wh of appliance a at stop w: index a × stops + w (used to suggest which load to move). */
+  /** Electric Wh of appliance a at stop w: index a × stops + w, for routine appliances (the loads a flag may suggest moving). */
   applianceStopWh: Float64Array;
 };
 
@@ -280,6 +288,15 @@ function fillLoads(p: Prepared): void {
   const slots = (): { time: Slots; typed: Slots } => (known ??= { time: stepSlots(p, false), typed: stepSlots(p, true) });
   const share = new Float64Array(n);
   const { stepH, where, acWh, dcWh, heatWh, acRunningW, acSurgeExtraW, acStandbyOn } = p;
+  // Steps of one stop are consecutive: per-stop totals add each stop's run of steps in time order.
+  const runs: { stop: number; from: number; to: number }[] = [];
+  for (let i = 0; i < n; i++) {
+    const w = where[i] ?? -1;
+    if (w < 0) continue;
+    const last = runs[runs.length - 1];
+    if (last && last.stop === w && last.to === i) last.to = i + 1;
+    else runs.push({ stop: w, from: i, to: i + 1 });
+  }
   const energy = new Float64Array(n);
   // Appliance by appliance over all steps: each step's totals still add the appliances in list order, and each
   // appliance's per-stop total still adds the steps in time order, so every sum is the same as step by step.
@@ -289,17 +306,23 @@ function fillLoads(p: Prepared): void {
     if (!a) continue;
     fillShares(p, a, slots, share);
     const { quantity, runningW, standbyW, dutyCycle, heatInputW } = a;
+    const total = a.circuit === 'ac' ? acWh : dcWh;
     for (let i = 0; i < n; i++) {
       const runShare = (share[i] ?? 0) * dutyCycle;
-      energy[i] = quantity * (runningW * runShare + standbyW * (1 - runShare)) * (stepH[i] ?? 1);
+      const e = quantity * (runningW * runShare + standbyW * (1 - runShare)) * (stepH[i] ?? 1);
+      energy[i] = e;
+      total[i] = (total[i] ?? 0) + e;
     }
-    const base = j * stopsCount;
-    for (let i = 0; i < n; i++) {
-      const w = where[i] ?? -1;
-      if (w >= 0) stopWh[base + w] = (stopWh[base + w] ?? 0) + (energy[i] ?? 0);
+    // Only routine loads are ever suggested for moving to a drive, so only theirs are totalled per stop.
+    if (a.schedule.kind === 'routine') {
+      const base = j * stopsCount;
+      for (const r of runs) {
+        let sum = stopWh[base + r.stop] ?? 0;
+        for (let i = r.from; i < r.to; i++) sum += energy[i] ?? 0;
+        stopWh[base + r.stop] = sum;
+      }
     }
     if (a.circuit === 'ac') {
-      for (let i = 0; i < n; i++) acWh[i] = (acWh[i] ?? 0) + (energy[i] ?? 0);
       const runningTotalW = runningW * quantity;
       const surgeExtra = (a.surgeW ?? runningW) - runningW;
       for (let i = 0; i < n; i++) {
@@ -309,11 +332,8 @@ function fillLoads(p: Prepared): void {
         }
       }
       if (standbyW > 0) acStandbyOn.fill(1, 0, n);
-    } else {
-      for (let i = 0; i < n; i++) dcWh[i] = (dcWh[i] ?? 0) + (energy[i] ?? 0);
-      if (heatInputW !== 0) {
-        for (let i = 0; i < n; i++) heatWh[i] = (heatWh[i] ?? 0) + quantity * heatInputW * ((share[i] ?? 0) * dutyCycle) * (stepH[i] ?? 1);
-      }
+    } else if (heatInputW !== 0) {
+      for (let i = 0; i < n; i++) heatWh[i] = (heatWh[i] ?? 0) + quantity * heatInputW * ((share[i] ?? 0) * dutyCycle) * (stepH[i] ?? 1);
     }
   }
 }
