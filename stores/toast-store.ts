@@ -12,7 +12,7 @@ const TOAST_MS = 6500;
 
 export function showToast(message: string, options: Omit<Partial<Toast>, 'id' | 'message'> = {}): number {
   const id = nextId++;
-  useToastStore.setState((s) => ({ toasts: [...s.toasts.slice(-2), { id, message, tone: options.tone ?? 'success', action: options.action }] }));
+  useToastStore.setState((s) => ({ toasts: [...s.toasts.slice(-1), { id, message, tone: options.tone ?? 'success', action: options.action }] }));
   setTimeout(() => dismissToast(id), TOAST_MS);
   return id;
 }

@@ -7,12 +7,12 @@ import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/text-field';
 
-type Props = { onSubmit: (values: SignInInput) => Promise<void>; formError?: string };
+type Props = { onSubmit: (values: SignInInput) => Promise<void>; formError?: string; defaultEmail?: string; submitLabel?: string };
 
-export function SignInForm({ onSubmit, formError }: Props) {
+export function SignInForm({ onSubmit, formError, defaultEmail = '', submitLabel }: Props) {
   const { control, handleSubmit, formState } = useForm<SignInInput>({
     resolver: zodResolver(signInSchema),
-    defaultValues: { email: '', password: '' },
+    defaultValues: { email: defaultEmail, password: '' },
   });
   const submit = handleSubmit(onSubmit);
   return (
@@ -53,7 +53,7 @@ export function SignInForm({ onSubmit, formError }: Props) {
           />
         )}
       />
-      <Button testID="sign-in-submit" label="Sign in" busy={formState.isSubmitting} onPress={submit} />
+      <Button testID="sign-in-submit" label={submitLabel ?? 'Sign in'} busy={formState.isSubmitting} onPress={submit} />
     </View>
   );
 }

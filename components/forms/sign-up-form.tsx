@@ -7,12 +7,12 @@ import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { TextField } from '@/components/ui/text-field';
 
-type Props = { onSubmit: (values: SignUpInput) => Promise<void>; formError?: string };
+type Props = { onSubmit: (values: SignUpInput) => Promise<void>; formError?: string; defaultEmail?: string; submitLabel?: string };
 
-export function SignUpForm({ onSubmit, formError }: Props) {
+export function SignUpForm({ onSubmit, formError, defaultEmail = '', submitLabel }: Props) {
   const { control, handleSubmit, formState } = useForm<SignUpInput>({
     resolver: zodResolver(signUpSchema),
-    defaultValues: { name: '', email: '', password: '' },
+    defaultValues: { name: '', email: defaultEmail, password: '' },
   });
   const submit = handleSubmit(onSubmit);
   return (
@@ -68,7 +68,7 @@ export function SignUpForm({ onSubmit, formError }: Props) {
           />
         )}
       />
-      <Button testID="sign-up-submit" label="Create account" busy={formState.isSubmitting} onPress={submit} />
+      <Button testID="sign-up-submit" label={submitLabel ?? 'Create account'} busy={formState.isSubmitting} onPress={submit} />
     </View>
   );
 }

@@ -1,4 +1,5 @@
 import { Pressable, StyleSheet, View } from 'react-native';
+import { useIsWide } from '@/components/theme/breakpoints';
 import { colors, radii, shadow, space } from '@/components/theme/tokens';
 import { Text } from '@/components/ui/text';
 import { dismissToast, useToastStore } from '@/stores/toast-store';
@@ -6,9 +7,10 @@ import { dismissToast, useToastStore } from '@/stores/toast-store';
 /** Short confirmations ("Saved") and undo offers, announced politely to screen readers. */
 export function ToastHost() {
   const toasts = useToastStore((s) => s.toasts);
+  const wide = useIsWide();
   if (toasts.length === 0) return null;
   return (
-    <View style={styles.host} pointerEvents="box-none" aria-live="polite">
+    <View style={[styles.host, wide ? styles.hostWide : null]} pointerEvents="box-none" aria-live="polite">
       {toasts.map((t) => (
         <View key={t.id} style={[styles.toast, t.tone === 'danger' ? styles.danger : null]} testID="toast" role="status">
           <Text variant="label" color="white" style={styles.message}>
@@ -43,6 +45,8 @@ export function ToastHost() {
 
 const styles = StyleSheet.create({
   host: { position: 'absolute', left: space.lg, right: space.lg, bottom: 88, alignItems: 'center', gap: space.sm, zIndex: 10 },
+  // On a wide screen the corner keeps toasts off the chart and the flags.
+  hostWide: { left: undefined, right: space.xl, bottom: space.xl, width: 420, alignItems: 'stretch' },
   toast: { flexDirection: 'row', alignItems: 'center', gap: space.sm, maxWidth: 520, width: '100%', backgroundColor: colors.ink, borderRadius: radii.md, paddingLeft: space.lg, paddingRight: space.xs, paddingVertical: space.xs, ...shadow.card },
   danger: { backgroundColor: colors.ember },
   message: { flex: 1, paddingVertical: space.sm },

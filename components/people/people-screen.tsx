@@ -1,13 +1,18 @@
-import { StyleSheet, View } from 'react-native';
+import { Panes, TabScroll } from '@/components/trip/tab-scroll';
 import { ROLE_LABEL } from '@/components/trip/role-label';
-import { TabScroll } from '@/components/trip/tab-scroll';
-import { colors, radii, space } from '@/components/theme/tokens';
 import { Card } from '@/components/ui/card';
 import { QueryError } from '@/components/ui/query-error';
 import { Skeleton } from '@/components/ui/skeleton';
 import { Text } from '@/components/ui/text';
 import type { TripDetail } from '@/shared/schemas/api';
-import { useActivityQuery, useMembersQuery } from '@/stores/queries/budget';
+import { can } from '@/shared/schemas/roles';
+import { useSession } from '@/stores/auth-client';
+import { useTripMembersQuery } from '@/stores/queries/members';
+import { ActivityList } from './activity-list';
+import { InviteForm } from './invite-form';
+import { MemberRow } from './member-row';
+import { PendingInvites } from './pending-invites';
+import { ShareToClub } from './share-to-club';
 
 const ROLE_NOTE = {
   owner: 'everything, including members and deleting the trip',
@@ -16,55 +21,72 @@ const ROLE_NOTE = {
   viewer: 'reads the plan, the budget and the cautions',
 } as const;
 
-/** Who is on the trip and what they may do; invitations arrive in a later release. */
-export function PeopleScreen({ detail }: { detail: TripDetail }) {
-  const members = useMembersQuery(detail.trip.id);
-  const activity = useActivityQuery(detail.trip.id);
+function Heading({ children }: { children: string }) {
   return (
-    <TabScroll testID="people-screen">
+    <Text variant="title" role="heading" aria-level={2}>
+      {children}
+    </Text>
+  );
+}
+
+/** Who is on the trip and what they may do; owners and planners invite, the owner manages. */
+export function PeopleScreen({ detail }: { detail: TripDetail }) {
+  const tripId = detail.trip.id;
+  const myRole = detail.trip.role;
+  const me = useSession().data?.user.id;
+  const members = useTripMembersQuery(tripId);
+  const canInvite = can(myRole, 'editTrip');
+  const canManage = can(myRole, 'manageMembers');
+
+  const main = (
+    <>
       <Card testID="members">
-        <Text variant="title" role="heading" aria-level={2}>
-          People on this trip
-        </Text>
+        <Heading>People on this trip</Heading>
         {members.isPending ? <Skeleton testID="members-loading" height={96} /> : null}
         {members.isError ? <QueryError testID="members-error" error={members.error} onRetry={() => void members.refetch()} /> : null}
-        {members.data?.members.map((m) => (
-          <View key={m.userId} style={styles.member} testID={`member-${m.userId}`}>
-            <View style={styles.memberText}>
-              <Text variant="label">{m.name}</Text>
-              <Text variant="caption" color="inkSoft">
-                {m.email}
-              </Text>
-            </View>
-            <View style={styles.role}>
-              <Text variant="caption" color="pine">
-                {ROLE_LABEL[m.role]}
-              </Text>
-            </View>
-          </View>
-        ))}
+        {members.data?.members.map((m) => <MemberRow key={m.userId} tripId={tripId} member={m} isMe={m.userId === me} canManage={canManage} />)}
         <Text variant="caption" color="inkSoft">
-          Owner: {ROLE_NOTE.owner}. Planner: {ROLE_NOTE.planner}. Crew: {ROLE_NOTE.crew}. Viewer: {ROLE_NOTE.viewer}.
+          {ROLE_LABEL.owner}: {ROLE_NOTE.owner}. {ROLE_LABEL.planner}: {ROLE_NOTE.planner}. {ROLE_LABEL.crew}: {ROLE_NOTE.crew}. {ROLE_LABEL.viewer}:{' '}
+          {ROLE_NOTE.viewer}.
         </Text>
       </Card>
+      {canInvite ? (
+        <Card testID="invite-card">
+          <Heading>Invite someone</Heading>
+          <Text color="inkSoft">They get an e-mail with a link that works once, for 7 days.</Text>
+          <InviteForm tripId={tripId} myRole={myRole} />
+        </Card>
+      ) : (
+        <Card testID="invite-readonly">
+          <Text color="inkSoft">As {ROLE_LABEL[myRole]} you can see who is on the trip; the owner or a planner invites new people.</Text>
+        </Card>
+      )}
+      {canInvite ? (
+        <Card testID="invites-card">
+          <Heading>Waiting to join</Heading>
+          <PendingInvites tripId={tripId} canManage={canManage} />
+        </Card>
+      ) : null}
+    </>
+  );
+  const side = (
+    <>
+      {canInvite ? (
+        <Card testID="share-club-card">
+          <Heading>Share to a club</Heading>
+          <ShareToClub tripId={tripId} />
+        </Card>
+      ) : null}
       <Card testID="activity">
-        <Text variant="title" role="heading" aria-level={2}>
-          Recent changes
-        </Text>
-        {activity.isPending ? <Skeleton height={96} /> : null}
-        {activity.data?.entries.length === 0 ? <Text color="inkSoft">Nothing has changed yet.</Text> : null}
-        {activity.data?.entries.slice(0, 20).map((e) => (
-          <Text key={e.id} variant="caption">
-            {new Date(e.at).toLocaleString('en-GB', { dateStyle: 'medium', timeStyle: 'short' })} — {e.userName ?? 'Someone'} {e.summary}
-          </Text>
-        ))}
+        <Heading>Recent changes</Heading>
+        <ActivityList tripId={tripId} />
       </Card>
+    </>
+  );
+  return (
+    <TabScroll testID="people-screen">
+      <Panes main={main} side={side} />
     </TabScroll>
   );
 }
 
-const styles = StyleSheet.create({
-  member: { flexDirection: 'row', alignItems: 'center', gap: space.md, paddingVertical: space.sm, borderBottomWidth: 1, borderBottomColor: colors.line },
-  memberText: { flex: 1 },
-  role: { backgroundColor: colors.pineSoft, borderRadius: radii.pill, paddingHorizontal: space.md, paddingVertical: space.xs },
-});

@@ -57,7 +57,7 @@ describe.each(Object.entries(VIEWPORTS))('at %s width', (name, viewport) => {
     await page.fill(byTestId('sign-in-password'), DEMO_ACCOUNT.password);
     await page.click(byTestId('sign-in-submit'));
     await page.waitForSelector(byTestId('trip-list'));
-    const cards = await page.locator('[data-testid^="trip-card-"]').allTextContents();
+    const cards = await page.locator('[data-testid^="trip-open-"]').allTextContents();
     expect(cards.join(' ')).toContain('Highland loop');
     expect(cards.join(' ')).toContain('Desert spring loop');
     await page.waitForTimeout(300);
@@ -71,9 +71,9 @@ describe.each(Object.entries(VIEWPORTS))('at %s width', (name, viewport) => {
     const titleFont = await page.locator('[role="heading"]').first().evaluate((el) => getComputedStyle(el).fontFamily);
     expect(titleFont).toContain('Nunito');
 
-    await page.locator('[data-testid^="trip-card-"]').filter({ hasText: 'Highland loop' }).click();
-    await page.waitForSelector(byTestId('trip-screen'));
-    expect(await page.textContent(byTestId('trip-screen'))).toContain('12–19 Sep 2027');
+    await page.locator('[data-testid^="trip-open-"]').filter({ hasText: 'Highland loop' }).click();
+    await page.waitForSelector(byTestId('trip-frame'));
+    expect(await page.textContent(byTestId('trip-frame'))).toContain('12–19 Sep 2027');
     await screenshot(page, `trip-${name}`);
     expect(errors).toEqual([]);
     await page.close();

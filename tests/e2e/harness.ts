@@ -7,7 +7,7 @@ import { chromium, type Browser, type Page } from 'playwright-core';
 
 export const SCREENSHOT_DIR = path.resolve(__dirname, '..', '..', 'test-results');
 
-export type RunningServer = { url: string; stop: () => Promise<void> };
+export type RunningServer = { url: string; dbPath: string; stop: () => Promise<void> };
 
 /** A port nobody is listening on, so the server's public URL (checked by better-auth's origin test) is known up front. */
 async function freePort(): Promise<number> {
@@ -26,8 +26,9 @@ async function freePort(): Promise<number> {
 export async function startServer(): Promise<RunningServer> {
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'trailtally-e2e-'));
   const port = await freePort();
+  const dbPath = path.join(dir, 'e2e.db');
   const child: ChildProcess = spawn(path.resolve('node_modules/.bin/tsx'), ['server/index.ts'], {
-    env: { ...process.env, PORT: String(port), PUBLIC_URL: `http://127.0.0.1:${port}`, HOST: '127.0.0.1', DATABASE_PATH: path.join(dir, 'e2e.db'), LOG_LEVEL: 'warn', NODE_ENV: 'development' },
+    env: { ...process.env, PORT: String(port), PUBLIC_URL: `http://127.0.0.1:${port}`, HOST: '127.0.0.1', DATABASE_PATH: dbPath, LOG_LEVEL: 'warn', NODE_ENV: 'development' },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
   let output = '';
@@ -46,6 +47,7 @@ export async function startServer(): Promise<RunningServer> {
   });
   return {
     url,
+    dbPath,
     stop: () =>
       new Promise<void>((resolve) => {
         child.once('exit', () => {
@@ -82,3 +84,31 @@ export function trackPageErrors(page: Page): string[] {
 }
 
 export const byTestId = (id: string) => `[data-testid="${id}"]`;
+
+/** Signs in through the form and waits for the trips list. */
+export async function signIn(page: Page, url: string, email: string, password: string): Promise<void> {
+  await page.goto(url);
+  await page.waitForSelector(byTestId('sign-in-screen'));
+  await page.fill(byTestId('sign-in-email'), email);
+  await page.fill(byTestId('sign-in-password'), password);
+  await page.click(byTestId('sign-in-submit'));
+  await page.waitForSelector(byTestId('trips-screen'));
+}
+
+/** Opens a trip from the list by its name and returns its id. */
+export async function openTrip(page: Page, name: string): Promise<string> {
+  await page.locator('[data-testid^="trip-open-"]').filter({ hasText: name }).first().click();
+  await page.waitForSelector(byTestId('trip-frame'));
+  const match = /\/trips\/([^/]+)/.exec(new URL(page.url()).pathname);
+  if (!match?.[1]) throw new Error(`not on a trip page: ${page.url()}`);
+  return match[1];
+}
+
+/** Runs axe on the page and returns the serious and critical violations, with where they were found. */
+export async function seriousA11yViolations(page: Page): Promise<string[]> {
+  const { default: AxeBuilder } = await import('@axe-core/playwright');
+  const result = await new AxeBuilder({ page }).analyze();
+  return result.violations
+    .filter((v) => v.impact === 'serious' || v.impact === 'critical')
+    .map((v) => `${v.id} (${v.impact}): ${v.nodes.slice(0, 3).map((n) => n.target.join(' ')).join(' | ')}`);
+}

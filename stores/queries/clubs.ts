@@ -1,0 +1,86 @@
+import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { TripDetail } from '@/shared/schemas/api';
+import type { ClubDetail, ClubInviteReport, ClubInviteRequest, ClubSummary } from '@/shared/schemas/sharing';
+import { apiFetch } from './api-client';
+import { STALE } from './stale';
+import { invalidateTrip, tripKeys } from './trips';
+
+export const clubKeys = {
+  root: ['clubs'] as const,
+  list: () => [...clubKeys.root, 'list'] as const,
+  detail: (clubId: string) => [...clubKeys.root, 'detail', clubId] as const,
+};
+
+export type ClubInviteResult = ClubInviteReport & { alreadyMembers: number };
+
+const clubPath = (clubId: string) => `/api/clubs/${encodeURIComponent(clubId)}`;
+
+export function useClubsQuery() {
+  return useQuery({ queryKey: clubKeys.list(), queryFn: () => apiFetch<{ clubs: ClubSummary[] }>('/api/clubs'), staleTime: STALE.SECONDS.THIRTY });
+}
+
+export function useClubQuery(clubId: string) {
+  return useQuery({ queryKey: clubKeys.detail(clubId), queryFn: () => apiFetch<ClubDetail>(clubPath(clubId)), staleTime: STALE.SECONDS.THIRTY });
+}
+
+export function useClubCreateMutation() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (name: string) => apiFetch<{ club: ClubSummary }>('/api/clubs', { method: 'POST', json: { name } }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: clubKeys.list() }),
+  });
+}
+
+export function useClubInviteMutation(clubId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (body: ClubInviteRequest) => apiFetch<ClubInviteResult>(`${clubPath(clubId)}/invites`, { method: 'POST', json: body }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: clubKeys.detail(clubId) }),
+  });
+}
+
+export function useClubInviteRevokeMutation(clubId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (inviteId: string) => apiFetch<void>(`${clubPath(clubId)}/invites/${encodeURIComponent(inviteId)}`, { method: 'DELETE' }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: clubKeys.detail(clubId) }),
+  });
+}
+
+export function useShareTripToClubMutation() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: ({ clubId, tripId }: { clubId: string; tripId: string }) =>
+      apiFetch<unknown>(`${clubPath(clubId)}/trips`, { method: 'POST', json: { tripId } }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: clubKeys.root }),
+  });
+}
+
+export function useUnshareTripMutation(clubId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (tripId: string) => apiFetch<void>(`${clubPath(clubId)}/trips/${encodeURIComponent(tripId)}`, { method: 'DELETE' }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: clubKeys.root }),
+  });
+}
+
+/** "Copy onto my rig": a new trip the caller owns, running on one of their saved rigs. */
+export function useCopyOntoRigMutation() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: ({ tripId, rigId }: { tripId: string; rigId: string }) =>
+      apiFetch<TripDetail>(`/api/trips/${encodeURIComponent(tripId)}/copy`, { method: 'POST', json: { rigId } }),
+    onSuccess: (detail) => {
+      queryClient.setQueryData(tripKeys.detail(detail.trip.id), detail);
+      return Promise.all([queryClient.invalidateQueries({ queryKey: tripKeys.list() }), queryClient.invalidateQueries({ queryKey: clubKeys.root })]);
+    },
+  });
+}
+
+export function useBasedOnSeenMutation(tripId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: () => apiFetch<unknown>(`/api/trips/${encodeURIComponent(tripId)}/based-on/seen`, { method: 'POST' }),
+    onSuccess: () => invalidateTrip(queryClient, tripId),
+  });
+}

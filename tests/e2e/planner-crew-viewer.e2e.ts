@@ -1,0 +1,189 @@
+// The planner's whole job in the browser: a trip leader builds a trip on a laptop and fixes a flag, a crew
+// member changes a routine on a phone, a viewer can only read.
+import { eq } from 'drizzle-orm';
+import type { Browser, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { openDatabase } from '@/db/client';
+import { addMember } from '@/db/queries/members';
+import { user } from '@/db/schema/auth';
+import { DEMO_CREW, DEMO_VIEWER } from '@/db/seed';
+import { byTestId, launchBrowser, openTrip, screenshot, signIn, startServer, trackPageErrors, VIEWPORTS, type RunningServer } from './harness';
+
+let server: RunningServer;
+let browser: Browser;
+const TRIP = 'Glen and shore test';
+const LEADER = { name: 'Ailsa Leader', email: `leader-${Date.now()}@example.test`, password: 'leader-password-1' };
+let tripId = '';
+
+beforeAll(async () => {
+  server = await startServer();
+  browser = await launchBrowser();
+});
+afterAll(async () => {
+  await browser?.close();
+  await server?.stop();
+});
+
+async function addStop(page: Page, index: number, s: { name: string; lat: string; lon: string; arrive: string; depart: string; forest?: boolean }) {
+  await page.click(byTestId('stop-add'));
+  await page.waitForSelector(byTestId('stop-form'));
+  await page.fill(byTestId('stop-name'), s.name);
+  await page.fill(byTestId('stop-lat'), s.lat);
+  await page.fill(byTestId('stop-lon'), s.lon);
+  await page.fill(byTestId('stop-arrive'), s.arrive);
+  await page.fill(byTestId('stop-depart'), s.depart);
+  if (s.forest) await page.click(byTestId('stop-preset-deep-forest'));
+  await page.click(byTestId('stop-save'));
+  await page.waitForSelector(byTestId(`stop-${index}`));
+  await page.waitForSelector(byTestId('stop-form'), { state: 'detached' });
+}
+
+/** The headline lowest charge as a number, once the budget has loaded. */
+async function lowestCharge(page: Page): Promise<number> {
+  await page.waitForSelector(byTestId('figure-lowest-value'));
+  return Number((await page.textContent(byTestId('figure-lowest-value')))?.replace(/[^\d.]/g, ''));
+}
+
+describe('a trip leader at 1440 px', () => {
+  it('when they build a trip from scratch and apply a flag\'s fix, then the flag goes', async () => {
+    const page = await browser.newPage({ viewport: VIEWPORTS.desktop });
+    const errors = trackPageErrors(page);
+    await page.goto(server.url);
+    await page.click(byTestId('go-to-sign-up'));
+    await page.fill(byTestId('sign-up-name'), LEADER.name);
+    await page.fill(byTestId('sign-up-email'), LEADER.email);
+    await page.fill(byTestId('sign-up-password'), LEADER.password);
+    await page.click(byTestId('sign-up-submit'));
+    await page.waitForSelector(byTestId('trips-empty'));
+
+    // A new trip whose rig starts from a preset.
+    await page.click(byTestId('trips-empty-new'));
+    await page.waitForSelector(byTestId('new-trip-rig-preset:van-small'));
+    await page.click(byTestId('new-trip-submit'));
+    await expect.poll(() => page.textContent(byTestId('new-trip-form'))).toContain('Give the trip a name.');
+    await page.fill(byTestId('new-trip-name'), TRIP);
+    await page.fill(byTestId('new-trip-startDate'), '2027-10-04');
+    await page.fill(byTestId('new-trip-endDate'), '2027-10-10');
+    await page.fill(byTestId('new-trip-timeZone'), 'Europe/London');
+    await page.click(byTestId('new-trip-rig-preset:van-small'));
+    await page.click(byTestId('new-trip-submit'));
+    await page.waitForSelector(byTestId('route-screen'));
+    tripId = /\/trips\/([^/]+)/.exec(new URL(page.url()).pathname)?.[1] ?? '';
+    expect(tripId).not.toBe('');
+
+    // A bad latitude is refused on the field, and the rest of the typing is kept.
+    await page.click(byTestId('stop-add'));
+    await page.fill(byTestId('stop-name'), 'Birch hollow');
+    await page.fill(byTestId('stop-lat'), '123');
+    await page.click(byTestId('stop-save'));
+    await expect.poll(() => page.textContent(byTestId('stop-form'))).toContain('Latitude runs from −90 to 90.');
+    expect(await page.inputValue(byTestId('stop-name'))).toBe('Birch hollow');
+    await page.click(byTestId('stop-cancel'));
+
+    await addStop(page, 0, { name: 'Birch hollow', lat: '57.0', lon: '-4.0', arrive: '2027-10-04 14:00', depart: '2027-10-06 10:00' });
+    await addStop(page, 1, { name: 'Deep glen', lat: '57.1', lon: '-4.2', arrive: '2027-10-06 13:00', depart: '2027-10-08 10:00', forest: true });
+    await addStop(page, 2, { name: 'Shore field', lat: '57.3', lon: '-4.5', arrive: '2027-10-08 13:00', depart: '2027-10-10 10:00' });
+    await page.waitForSelector(byTestId('drive-1'));
+    await page.click(byTestId('stop-1-edit'));
+    await page.waitForSelector(byTestId('sun-path'));
+    await screenshot(page, 'leader-route-desktop');
+    await page.click(byTestId('stop-cancel'));
+
+    await page.click(byTestId('tab-loads'));
+    await page.waitForSelector(byTestId('loads-empty'));
+    for (const key of ['fridge-12v-compressor', 'led-lights', 'laptop', 'tv', 'water-pump']) {
+      await page.click(byTestId(`library-${key}`));
+      await page.click(byTestId('appliance-save'));
+      await page.waitForSelector(byTestId('schedule-editor'));
+    }
+    const loads = await page.textContent(byTestId('loads-screen'));
+    for (const name of ['12 V compressor fridge', 'LED lights', 'Laptop', 'TV', 'Water pump']) expect(loads).toContain(name);
+    await screenshot(page, 'leader-loads-desktop');
+
+    await page.click(byTestId('tab-budget'));
+    await page.waitForSelector(byTestId('flag-list'));
+    await page.waitForSelector(`${byTestId('soc-chart')} canvas`);
+    const shortfalls = page.locator('[data-testid^="flag-energy-short"], [data-testid^="flag-below-reserve"]');
+    expect(await shortfalls.count()).toBeGreaterThan(0);
+    const shortBefore = Number((await page.textContent(byTestId('figure-short-value')))?.replace(/\D/g, ''));
+    await screenshot(page, 'leader-budget-flag-desktop');
+    // Apply the first shortfall flag's battery fix until the plan holds; each applied fix must remove its flag.
+    for (let round = 0; round < 6 && (await shortfalls.count()) > 0; round++) {
+      const flag = shortfalls.first();
+      const flagId = (await flag.getAttribute('data-testid')) ?? '';
+      await flag.getByRole('button', { name: /more battery/ }).click();
+      await expect.poll(() => page.locator(byTestId(flagId)).count(), { timeout: 15_000 }).toBe(0);
+      if (round === 0) {
+        await expect.poll(async () => Number((await page.textContent(byTestId('figure-short-value')))?.replace(/\D/g, ''))).toBeLessThan(shortBefore);
+      }
+    }
+    await expect.poll(() => shortfalls.count()).toBe(0);
+    expect(await page.textContent(byTestId('figure-short-value'))).toBe('0');
+    await screenshot(page, 'leader-budget-fixed-desktop');
+    expect(errors).toEqual([]);
+    await page.close();
+  });
+});
+
+describe('members of the trip', () => {
+  beforeAll(() => {
+    // There is no invitation flow yet: memberships are written straight into the server's database.
+    const db = openDatabase(server.dbPath);
+    for (const [email, role] of [[DEMO_CREW.email, 'crew'], [DEMO_VIEWER.email, 'viewer']] as const) {
+      const row = db.select({ id: user.id }).from(user).where(eq(user.email, email)).get();
+      if (!row) throw new Error(`no seeded user ${email}`);
+      addMember(db, tripId, row.id, role, new Date());
+    }
+    db.$client.close();
+  });
+
+  it('when a crew member at 360 px lengthens a routine, then the lowest charge changes', async () => {
+    const page = await browser.newPage({ viewport: VIEWPORTS.phone });
+    const errors = trackPageErrors(page);
+    await signIn(page, server.url, DEMO_CREW.email, DEMO_CREW.password);
+    await openTrip(page, TRIP);
+    const before = await lowestCharge(page);
+
+    await page.click(byTestId('tab-loads'));
+    await page.locator('[data-testid^="appliance-"]').filter({ hasText: 'Laptop' }).first().click();
+    await page.waitForSelector(byTestId('routine-strip'));
+    // Crew may edit loads but not the route.
+    for (const hour of [8, 9, 10, 11, 12, 13]) await page.click(byTestId(`routine-strip-cell-${hour}`));
+    await expect.poll(() => page.textContent(byTestId('routine-preview'))).toContain('Lowest charge with this routine');
+    await screenshot(page, 'crew-routine-phone');
+    await page.click(byTestId('schedule-save'));
+    await expect.poll(() => page.textContent(byTestId('toast'))).toContain('Routine saved');
+
+    await page.click(byTestId('tab-budget'));
+    await expect.poll(() => lowestCharge(page), { timeout: 15_000 }).toBeLessThan(before);
+    await page.click(byTestId('tab-route'));
+    await page.waitForSelector(byTestId('route-read-only'));
+    expect(await page.locator(byTestId('stop-add')).count()).toBe(0);
+    expect(errors).toEqual([]);
+    await page.close();
+  });
+
+  it('when a viewer opens the trip, then nothing offers an edit', async () => {
+    const page = await browser.newPage({ viewport: VIEWPORTS.phone });
+    await signIn(page, server.url, DEMO_VIEWER.email, DEMO_VIEWER.password);
+    await openTrip(page, TRIP);
+    await page.waitForSelector(byTestId('budget-screen'));
+    expect(await page.locator('[data-testid^="fix-"]').count()).toBe(0);
+    expect(await page.locator('[data-testid^="what-if-keep-"]').count()).toBe(0);
+    await page.click(byTestId('tab-loads'));
+    await page.waitForSelector(byTestId('loads-read-only'));
+    expect(await page.locator(byTestId('add-appliance')).count()).toBe(0);
+    await page.locator('[data-testid^="appliance-"]').filter({ hasText: 'Laptop' }).first().click();
+    await page.waitForSelector(byTestId('routine-strip'));
+    expect(await page.locator(byTestId('schedule-save')).count()).toBe(0);
+    expect(await page.locator(byTestId('routine-strip-cell-3')).getAttribute('aria-disabled')).toBe('true');
+    await page.click(byTestId('tab-rig'));
+    await page.waitForSelector(byTestId('rig-read-only'));
+    expect(await page.locator(byTestId('rig-save')).count()).toBe(0);
+    await screenshot(page, 'viewer-rig-phone');
+    // The server refuses a viewer's write even if a screen were to offer one.
+    const status = await page.evaluate(async (id) => (await fetch(`/api/trips/${id}`, { method: 'PATCH', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ version: 1, name: 'Hijack' }) })).status, tripId);
+    expect(status).toBe(403);
+    await page.close();
+  });
+});

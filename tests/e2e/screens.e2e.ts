@@ -1,0 +1,64 @@
+// Every screen at phone and laptop widths: a screenshot for review and an axe scan with no serious or
+// critical violations.
+import type { Browser, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { DEMO_ACCOUNT } from '@/db/seed';
+import { byTestId, launchBrowser, openTrip, screenshot, seriousA11yViolations, signIn, startServer, trackPageErrors, VIEWPORTS, type RunningServer } from './harness';
+
+let server: RunningServer;
+let browser: Browser;
+
+beforeAll(async () => {
+  server = await startServer();
+  browser = await launchBrowser();
+});
+afterAll(async () => {
+  await browser?.close();
+  await server?.stop();
+});
+
+type Check = { name: string; open: (page: Page, tripPath: string) => Promise<void> };
+
+const tab = (testID: string, ready: string, extra?: (page: Page) => Promise<void>): Check['open'] => async (page, tripPath) => {
+  await page.goto(`${server.url}${tripPath}`);
+  await page.waitForSelector(byTestId('trip-frame'));
+  await page.click(byTestId(testID));
+  await page.waitForSelector(byTestId(ready));
+  await extra?.(page);
+};
+
+const CHECKS: Check[] = [
+  { name: 'trips', open: async (page) => { await page.goto(server.url); await page.waitForSelector(byTestId('trip-list')); } },
+  { name: 'new-trip', open: async (page) => { await page.click(byTestId('new-trip')); await page.waitForSelector(byTestId('new-trip-rig-preset:van-small')); } },
+  { name: 'account', open: async (page) => { await page.goto(`${server.url}/account`); await page.waitForSelector(byTestId('units-card')); } },
+  { name: 'budget', open: tab('tab-budget', 'budget-screen', async (page) => { await page.waitForSelector(`${byTestId('soc-chart')} canvas`); }) },
+  { name: 'budget-what-if', open: tab('tab-budget', 'budget-screen', async (page) => { await page.click(byTestId('what-if-extraBattery')); await page.waitForSelector(byTestId('what-if-banner')); await page.waitForSelector(`${byTestId('soc-chart')} canvas`); }) },
+  { name: 'route', open: tab('tab-route', 'route-screen') },
+  { name: 'route-stop', open: tab('tab-route', 'route-screen', async (page) => { await page.click(byTestId('stop-1-edit')); await page.waitForSelector(byTestId('sun-path')); }) },
+  { name: 'loads', open: tab('tab-loads', 'loads-screen') },
+  { name: 'loads-routine', open: tab('tab-loads', 'loads-screen', async (page) => { await page.locator('[data-testid^="appliance-"]').filter({ hasText: 'Hair dryer' }).first().click(); await page.waitForSelector(byTestId('routine-strip')); }) },
+  { name: 'rig', open: tab('tab-rig', 'rig-form') },
+  { name: 'people', open: tab('tab-people', 'members') },
+  { name: 'ledger', open: tab('tab-ledger', 'ledger-list') },
+];
+
+describe.each(Object.entries(VIEWPORTS))('at %s width', (size, viewport) => {
+  it('when each screen is opened, then it renders without errors and axe finds nothing serious', async () => {
+    const page = await browser.newPage({ viewport });
+    const errors = trackPageErrors(page);
+    await signIn(page, server.url, DEMO_ACCOUNT.email, DEMO_ACCOUNT.password);
+    await openTrip(page, 'Highland loop');
+    const tripPath = new URL(page.url()).pathname;
+    await page.goto(server.url);
+    const violations: string[] = [];
+    for (const check of CHECKS) {
+      await check.open(page, tripPath);
+      await page.waitForTimeout(200);
+      await screenshot(page, `screen-${check.name}-${size}`);
+      for (const v of await seriousA11yViolations(page)) violations.push(`${check.name}: ${v}`);
+    }
+    expect(violations).toEqual([]);
+    expect(errors).toEqual([]);
+    await page.close();
+  });
+});
