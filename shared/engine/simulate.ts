@@ -8,7 +8,7 @@ import { fuelUnit } from './fuel';
 import { prepare, type Prepared } from './prepare';
 import type { BandRun, DaySheet, Headline, LedgerRow, SimulationResult } from './result-types';
 import { solarSeries, type SolarSeries } from './solar';
-import { localLabel } from './time-grid';
+import { localLabel, utcIsoString } from './time-grid';
 import { generatorPlanFor, newLedger, walk, type LedgerColumns, type Scenario, type WalkResult } from './walk';
 
 export function reservePctOf(input: EngineInput): number {
@@ -26,16 +26,24 @@ export function plannedScenario(p: Prepared, solar: SolarSeries): Scenario {
 
 function ledgerRows(p: Prepared, l: LedgerColumns, solar: SolarSeries): LedgerRow[] {
   const rows: LedgerRow[] = new Array<LedgerRow>(p.n);
+  // Columns read into locals once: the loop builds one object per hour and nothing else.
+  const { stepH, sunAltMid, ambientC, startMs, offsetMin } = p;
+  const poa = solar.poaWm2;
+  const {
+    solarAvailableWh, solarUsedWh, solarWastedWh, acLoadWh, dcLoadWh, inverterLossWh, chargerLossWh, batteryLossWh, hookupWh,
+    vehicleWh, generatorWh, generatorH, generatorFuel, propaneBurnedKg, batteryFlowWh, storedWh, socPct, energyShortWh, propaneLeftKg,
+  } = l;
   for (let i = 0; i < p.n; i++) {
+    const t = startMs[i] ?? 0;
     rows[i] = {
-      index: i, utc: utcIso(p, i), local: localIso(p, i), where: whereAt(p, i), stepH: p.stepH[i] ?? 1,
-      sunAltitudeDeg: p.sunAltMid[i] ?? 0, irradianceWm2: solar.poaWm2[i] ?? 0, ambientC: p.ambientC[i] ?? 0,
-      solarAvailableWh: l.solarAvailableWh[i] ?? 0, solarUsedWh: l.solarUsedWh[i] ?? 0, solarWastedWh: l.solarWastedWh[i] ?? 0,
-      acLoadWh: l.acLoadWh[i] ?? 0, dcLoadWh: l.dcLoadWh[i] ?? 0, inverterLossWh: l.inverterLossWh[i] ?? 0,
-      chargerLossWh: l.chargerLossWh[i] ?? 0, batteryLossWh: l.batteryLossWh[i] ?? 0, hookupWh: l.hookupWh[i] ?? 0,
-      vehicleWh: l.vehicleWh[i] ?? 0, generatorWh: l.generatorWh[i] ?? 0, generatorH: l.generatorH[i] ?? 0,
-      generatorFuel: l.generatorFuel[i] ?? 0, propaneBurnedKg: l.propaneBurnedKg[i] ?? 0, batteryFlowWh: l.batteryFlowWh[i] ?? 0,
-      storedWh: l.storedWh[i] ?? 0, socPct: l.socPct[i] ?? 0, energyShortWh: l.energyShortWh[i] ?? 0, propaneLeftKg: l.propaneLeftKg[i] ?? 0,
+      index: i, utc: utcIsoString(t), local: localLabel(t, offsetMin[i] ?? 0), where: whereAt(p, i), stepH: stepH[i] ?? 1,
+      sunAltitudeDeg: sunAltMid[i] ?? 0, irradianceWm2: poa[i] ?? 0, ambientC: ambientC[i] ?? 0,
+      solarAvailableWh: solarAvailableWh[i] ?? 0, solarUsedWh: solarUsedWh[i] ?? 0, solarWastedWh: solarWastedWh[i] ?? 0,
+      acLoadWh: acLoadWh[i] ?? 0, dcLoadWh: dcLoadWh[i] ?? 0, inverterLossWh: inverterLossWh[i] ?? 0,
+      chargerLossWh: chargerLossWh[i] ?? 0, batteryLossWh: batteryLossWh[i] ?? 0, hookupWh: hookupWh[i] ?? 0,
+      vehicleWh: vehicleWh[i] ?? 0, generatorWh: generatorWh[i] ?? 0, generatorH: generatorH[i] ?? 0,
+      generatorFuel: generatorFuel[i] ?? 0, propaneBurnedKg: propaneBurnedKg[i] ?? 0, batteryFlowWh: batteryFlowWh[i] ?? 0,
+      storedWh: storedWh[i] ?? 0, socPct: socPct[i] ?? 0, energyShortWh: energyShortWh[i] ?? 0, propaneLeftKg: propaneLeftKg[i] ?? 0,
     };
   }
   return rows;

@@ -48,9 +48,16 @@ export function generatorPlanFor(p: Prepared): GeneratorPlan {
 }
 
 export function newLedger(n: number): LedgerColumns {
-  const out = {} as Record<LedgerColumn, Float64Array>;
-  for (const c of LEDGER_COLUMNS) out[c] = new Float64Array(n);
-  return out;
+  // One ArrayBuffer for all the columns (one allocation, not twenty) and an object literal with a fixed shape.
+  const buf = new ArrayBuffer(n * 8 * LEDGER_COLUMNS.length);
+  let k = 0;
+  const col = (): Float64Array => new Float64Array(buf, 8 * n * k++, n);
+  return {
+    solarAvailableWh: col(), solarUsedWh: col(), solarWastedWh: col(), acLoadWh: col(), dcLoadWh: col(), inverterLossWh: col(),
+    chargerLossWh: col(), batteryLossWh: col(), hookupWh: col(), vehicleWh: col(), generatorWh: col(), generatorH: col(),
+    generatorFuel: col(), propaneBurnedKg: col(), batteryFlowWh: col(), storedWh: col(), socPct: col(), energyShortWh: col(),
+    propaneLeftKg: col(), coldBlocked: col(),
+  };
 }
 
 /** Mutable per-step flows, reused across steps to keep the loop free of allocations. */
