@@ -5,6 +5,7 @@ export default function AuthLayout() {
     <Stack screenOptions={{ headerShown: false }}>
       <Stack.Screen name="sign-in" options={{ title: 'Sign in · Trailtally' }} />
       <Stack.Screen name="sign-up" options={{ title: 'Create account · Trailtally' }} />
+      <Stack.Screen name="forgot-password" options={{ title: 'Forgot password · Trailtally' }} />
     </Stack>
   );
 }

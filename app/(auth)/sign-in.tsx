@@ -24,11 +24,18 @@ export default function SignInScreen() {
       title="Sign in"
       subtitle="Check whether your batteries last the whole trip."
       footer={
-        <Link href="/sign-up" testID="go-to-sign-up" accessibilityLabel="Create an account">
-          <Text variant="label" color="pine">
-            New here? Create an account
-          </Text>
-        </Link>
+        <>
+          <Link href="/sign-up" testID="go-to-sign-up" accessibilityLabel="Create an account">
+            <Text variant="label" color="pine">
+              New here? Create an account
+            </Text>
+          </Link>
+          <Link href="/forgot-password" testID="go-to-forgot-password" accessibilityLabel="Forgot your password?">
+            <Text variant="label" color="pine">
+              Forgot your password?
+            </Text>
+          </Link>
+        </>
       }
     >
       <SignInForm onSubmit={onSubmit} formError={formError} />

@@ -2,7 +2,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { Controller, useForm } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
-import { z } from 'zod';
+import type { z } from 'zod';
 import { describeAuthError } from '@/components/forms/auth-error';
 import { space } from '@/components/theme/tokens';
 import { Banner } from '@/components/ui/banner';

@@ -1,10 +1,16 @@
 import { useLocalSearchParams } from 'expo-router';
 import { BudgetScreen } from '@/components/budget/budget-screen';
+import { BasedOnBanner } from '@/components/trip/based-on-banner';
 import { useTripQuery } from '@/stores/queries/trips';
 
 export default function TripBudgetRoute() {
   const { tripId } = useLocalSearchParams<{ tripId: string }>();
   const trip = useTripQuery(tripId);
   // The trip frame shows loading and errors; a tab renders once the trip is here.
-  return trip.data ? <BudgetScreen detail={trip.data} /> : null;
+  return trip.data ? (
+    <>
+      <BasedOnBanner detail={trip.data} />
+      <BudgetScreen detail={trip.data} />
+    </>
+  ) : null;
 }

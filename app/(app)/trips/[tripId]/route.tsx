@@ -1,9 +1,15 @@
 import { useLocalSearchParams } from 'expo-router';
 import { RouteScreen } from '@/components/route/route-screen';
+import { BasedOnBanner } from '@/components/trip/based-on-banner';
 import { useTripQuery } from '@/stores/queries/trips';
 
 export default function TripRouteRoute() {
   const { tripId } = useLocalSearchParams<{ tripId: string }>();
   const trip = useTripQuery(tripId);
-  return trip.data ? <RouteScreen detail={trip.data} /> : null;
+  return trip.data ? (
+    <>
+      <BasedOnBanner detail={trip.data} />
+      <RouteScreen detail={trip.data} />
+    </>
+  ) : null;
 }

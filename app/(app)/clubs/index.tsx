@@ -1,0 +1,5 @@
+import { ClubListScreen } from '@/components/clubs/club-list-screen';
+
+export default function ClubsRoute() {
+  return <ClubListScreen />;
+}
