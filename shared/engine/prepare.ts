@@ -5,7 +5,7 @@ import type { EngineInput } from '../schemas/engine-input';
 import type { Appliance } from '../schemas/appliance';
 import type { DayType } from '../schemas/common';
 import type { Stop } from '../schemas/trip';
-import { haurwitzGhi, ineichenPerez, kastenYoungAirMass, pressureRatio } from './clear-sky';
+import { ineichenPerez, kastenYoungAirMass, pressureRatio } from './clear-sky';
 import { extraterrestrialW } from './extraterrestrial';
 // Energy per step follows onShare and applianceStep in loads.ts, inlined here to keep the loop free of allocations.
 import { thermostatDuty as thermostatDutyOf } from './loads';
@@ -49,10 +49,11 @@ export type Prepared = {
   lat: Float64Array;
   lon: Float64Array;
   sunAltMid: Float64Array;
-  /** Per sample (n × SAMPLES): sun altitude, azimuth, clear-sky GHI. */
+  /** Per sample (n × SAMPLES): sun altitude, azimuth, clear-sky GHI, and cos of the zenith (0 with the sun down). */
   alt: Float64Array;
   az: Float64Array;
   ghiClear: Float64Array;
+  cosZ: Float64Array;
   dniExtra: Float64Array;
   exposures: ResolvedExposure[];
   openExposure: ResolvedExposure;
@@ -135,10 +136,13 @@ function fillLocalTime(p: Prepared, stops: readonly Stop[]): void {
   for (const d of travelDays) if (d >= 0) p.travelByDay[d] = 1;
 }
 
-function clearSkyGhi(stop: Stop | undefined, altDeg: number, dniExtra: number): number {
+const RAD = Math.PI / 180;
+
+/** cz: cos((90 − altDeg)°), as haurwitzGhi computes it, so Haurwitz is written out here with the same numbers. */
+function clearSkyGhi(stop: Stop | undefined, altDeg: number, cz: number, dniExtra: number): number {
   const zen = 90 - altDeg;
   if (altDeg <= 0) return 0;
-  if (stop?.linkeTurbidity === undefined) return haurwitzGhi(zen);
+  if (stop?.linkeTurbidity === undefined) return cz > 0 ? 1098 * cz * Math.exp(-0.059 / cz) : 0; // haurwitzGhi
   const am = kastenYoungAirMass(zen) * pressureRatio(stop.elevationM);
   return ineichenPerez({ zenithDeg: zen, airMassAbsolute: am, linkeTurbidity: stop.linkeTurbidity, elevationM: stop.elevationM, dniExtra }).ghi;
 }
@@ -196,7 +200,9 @@ function fillSun(p: Prepared, stops: readonly Stop[], solarConstant: number): vo
       const alt = pos[2 * s] ?? 0;
       p.alt[k + s] = alt;
       p.az[k + s] = pos[2 * s + 1] ?? 0;
-      p.ghiClear[k + s] = clearSkyGhi(stop, alt, dniExtra);
+      const cz = alt > 0 ? Math.cos((90 - alt) * RAD) : 0;
+      p.cosZ[k + s] = cz;
+      p.ghiClear[k + s] = clearSkyGhi(stop, alt, cz, dniExtra);
     }
     prevEndMs = t + dt;
     prevLat = lat;
@@ -372,7 +378,7 @@ function allocate(input: EngineInput, n: number): Prepared {
   // All step columns are views into one ArrayBuffer: one allocation instead of thirty. 8-byte columns first,
   // then 4-, 2- and 1-byte ones, so every view starts aligned. A column added below without counting it here
   // makes the view constructor throw at once.
-  const f64 = 16 + 3 * SAMPLES;
+  const f64 = 16 + 4 * SAMPLES;
   const buf = new ArrayBuffer(n * (8 * f64 + 4 * 1 + 2 * 2 + 1 * 4));
   let at = 0;
   const view = <T>(make: (b: ArrayBuffer, offset: number, length: number) => T, bytes: number, length: number): T => {
@@ -386,7 +392,7 @@ function allocate(input: EngineInput, n: number): Prepared {
   const u8 = (): Uint8Array => view((b, o, len) => new Uint8Array(b, o, len), 1, n);
   return {
     input, n, startMs: f(), stepH: f(), offsetMin: f(), onRoadShare: f(), minuteOfDay: f(), ambientC: f(), lat: f(), lon: f(), sunAltMid: f(),
-    alt: f(n * SAMPLES), az: f(n * SAMPLES), ghiClear: f(n * SAMPLES), dniExtra: f(), hookupW: f(), acWh: f(), dcWh: f(), heatWh: f(),
+    alt: f(n * SAMPLES), az: f(n * SAMPLES), ghiClear: f(n * SAMPLES), cosZ: f(n * SAMPLES), dniExtra: f(), hookupW: f(), acWh: f(), dcWh: f(), heatWh: f(),
     acRunningW: f(), acSurgeExtraW: f(), dayIndex: i32(), where: i16(), stopOf: i16(), travelDay: u8(), genAllowed: u8(), genRoutine: u8(),
     acStandbyOn: u8(), travelByDay: new Uint8Array(1), exposures: [], openExposure: resolveExposure({ kind: 'preset', preset: 'open' }),
     applianceStopWh: new Float64Array(0),

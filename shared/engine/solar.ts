@@ -61,9 +61,11 @@ function geometry(p: Prepared): Geometry {
   const { arrays, capW } = arrayConstants(p);
   const m = arrays.length;
   const ns = p.n * S;
+  // One buffer for the per-sample columns; cos of the zenith comes from the precomputation (same numbers).
+  const buf = new ArrayBuffer(8 * (ns + p.n + 2 * ns * m));
   const g: Geometry = {
-    m, arrays, capW, cosZ: new Float64Array(ns), beamF: new Float64Array(ns), diffF: new Float64Array(p.n),
-    cosInc: new Float64Array(ns * m), rb: new Float64Array(ns * m), planned: null,
+    m, arrays, capW, cosZ: p.cosZ, beamF: new Float64Array(buf, 0, ns), diffF: new Float64Array(buf, 8 * ns, p.n),
+    cosInc: new Float64Array(buf, 8 * (ns + p.n), ns * m), rb: new Float64Array(buf, 8 * (ns + p.n + ns * m), ns * m), planned: null,
   };
   // cosIncidence (transposition.ts) term for term, with the panel's and the sun's sines and cosines taken once.
   const panels = p.input.rig.solarArrays.map((a, j) => {
@@ -75,8 +77,8 @@ function geometry(p: Prepared): Geometry {
   const stopTop = p.exposures.map((e) => Math.max(...e.horizonDeg));
   const openTop = Math.max(...p.openExposure.horizonDeg);
   const openDiffuse = diffuseFactor(p.openExposure);
-  const { alt: alts, az: azs } = p;
-  const { cosZ, beamF, cosInc, rb } = g;
+  const { alt: alts, az: azs, cosZ } = p;
+  const { beamF, cosInc, rb } = g;
   for (let i = 0; i < p.n; i++) {
     const where = p.where[i] ?? -1;
     const exp = where >= 0 ? (p.exposures[where] ?? p.openExposure) : p.openExposure;
@@ -87,11 +89,10 @@ function geometry(p: Prepared): Geometry {
       const alt = alts[k] ?? -90;
       if (alt <= 0) continue;
       const az = azs[k] ?? 180;
-      const z = (90 - alt) * RAD;
-      const cz = Math.cos(z);
-      const sz = Math.sin(z);
-      cosZ[k] = cz;
       beamF[k] = alt >= top ? 1 : beamFactor(exp, alt, az);
+      if (panels.length === 0) continue;
+      const cz = cosZ[k] ?? 0;
+      const sz = Math.sin((90 - alt) * RAD);
       for (const panel of panels) {
         const ci = Math.max(0, cz * panel.cosB + sz * panel.sinB * Math.cos((az - panel.azimuthDeg) * RAD));
         cosInc[k * m + panel.j] = ci;
