@@ -19,10 +19,15 @@ export default function RootLayout() {
   const [queryClient] = useState(createQueryClient);
   const [fontsLoaded, fontError] = useFonts({ Nunito_400Regular, Nunito_600SemiBold, Nunito_700Bold, Nunito_800ExtraBold });
   const session = useSession();
+  // better-auth reports "pending" again while it refetches after a sign-in from signed out; only the
+  // first answer may hold the app, or the navigator is torn down and pages outside the groups (an
+  // invite being joined) lose their place.
+  const [sessionKnown, setSessionKnown] = useState(false);
+  if (!session.isPending && !sessionKnown) setSessionKnown(true);
 
   // Hold the first paint until the fonts and the session are known, so nobody sees a flash of
   // the sign-in page while already signed in. A font failure still lets the app run.
-  if ((!fontsLoaded && !fontError) || session.isPending) return <LoadingScreen />;
+  if ((!fontsLoaded && !fontError) || !sessionKnown) return <LoadingScreen />;
 
   const signedIn = !!session.data;
   return (
