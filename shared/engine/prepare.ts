@@ -306,19 +306,33 @@ function fillLoads(p: Prepared): void {
   const energy = new Float64Array(n);
   // Appliance by appliance over all steps: each step's totals still add the appliances in list order, and each
   // appliance's per-stop total still adds the steps in time order, so every sum is the same as step by step.
-  // Short branch-free loops over one array each run faster than one loop that does everything.
   for (let j = 0; j < appliances.length; j++) {
     const a = appliances[j];
     if (!a) continue;
-    fillShares(p, a, slots, share);
+    const always = a.schedule.kind === 'always';
+    if (!always) fillShares(p, a, slots, share);
     const { quantity, runningW, standbyW, dutyCycle, heatInputW } = a;
-    const total = a.circuit === 'ac' ? acWh : dcWh;
+    const isAc = a.circuit === 'ac';
+    const total = isAc ? acWh : dcWh;
+    const heats = !isAc && heatInputW !== 0;
+    const runningTotalW = runningW * quantity;
+    const surgeExtra = (a.surgeW ?? runningW) - runningW;
+    // One pass per appliance; the branches below are fixed for the whole pass.
     for (let i = 0; i < n; i++) {
-      const runShare = (share[i] ?? 0) * dutyCycle;
-      const e = quantity * (runningW * runShare + standbyW * (1 - runShare)) * (stepH[i] ?? 1);
+      const sh = always ? 1 : (share[i] ?? 0);
+      const runShare = sh * dutyCycle;
+      const dtH = stepH[i] ?? 1;
+      const e = quantity * (runningW * runShare + standbyW * (1 - runShare)) * dtH;
       energy[i] = e;
       total[i] = (total[i] ?? 0) + e;
+      if (isAc) {
+        if (sh > 0) {
+          acRunningW[i] = (acRunningW[i] ?? 0) + runningTotalW;
+          acSurgeExtraW[i] = Math.max(acSurgeExtraW[i] ?? 0, surgeExtra);
+        }
+      } else if (heats) heatWh[i] = (heatWh[i] ?? 0) + quantity * heatInputW * runShare * dtH;
     }
+    if (isAc && standbyW > 0) acStandbyOn.fill(1, 0, n);
     // Only routine loads are ever suggested for moving to a drive, so only theirs are totalled per stop.
     if (a.schedule.kind === 'routine') {
       const base = j * stopsCount;
@@ -327,19 +341,6 @@ function fillLoads(p: Prepared): void {
         for (let i = r.from; i < r.to; i++) sum += energy[i] ?? 0;
         stopWh[base + r.stop] = sum;
       }
-    }
-    if (a.circuit === 'ac') {
-      const runningTotalW = runningW * quantity;
-      const surgeExtra = (a.surgeW ?? runningW) - runningW;
-      for (let i = 0; i < n; i++) {
-        if ((share[i] ?? 0) > 0) {
-          acRunningW[i] = (acRunningW[i] ?? 0) + runningTotalW;
-          acSurgeExtraW[i] = Math.max(acSurgeExtraW[i] ?? 0, surgeExtra);
-        }
-      }
-      if (standbyW > 0) acStandbyOn.fill(1, 0, n);
-    } else if (heatInputW !== 0) {
-      for (let i = 0; i < n; i++) heatWh[i] = (heatWh[i] ?? 0) + quantity * heatInputW * ((share[i] ?? 0) * dutyCycle) * (stepH[i] ?? 1);
     }
   }
 }
