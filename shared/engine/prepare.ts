@@ -357,17 +357,19 @@ function fillGenerator(p: Prepared, stops: readonly Stop[]): void {
     const stop = where >= 0 ? stops[where] : undefined;
     const hours = stop?.generatorHours ?? null;
     const dtMin = (p.stepH[i] ?? 1) * 60;
-    const step = localStep(p, i);
-    const prev = prevDayType(p, i);
+    const routineWindows = gen?.mode.kind === 'routine' && stop ? gen.mode.windows : null;
+    // The local step is only read by a routine generator's windows.
+    const step = routineWindows ? localStep(p, i) : null;
+    const prev = routineWindows ? prevDayType(p, i) : 'camp';
     let allowed = 0;
     let routine = 0;
     for (let q = 0; q < QUARTERS; q++) {
       const qMin = (p.minuteOfDay[i] ?? 0) + ((q + 0.5) * dtMin) / QUARTERS;
       const hourOfDay = (qMin / 60) % 24;
       if (hours && inHourWindow(hourOfDay, hours.startHour, hours.endHour)) allowed |= 1 << q;
-      if (gen?.mode.kind === 'routine' && stop) {
+      if (routineWindows && step) {
         const qStep: LocalStep = { ...step, minuteOfDay: (step.minuteOfDay + (q * dtMin) / QUARTERS) % 1440, durationMin: dtMin / QUARTERS };
-        if (windowsShare(gen.mode.windows, qStep, prev) >= 0.5) routine |= 1 << q;
+        if (windowsShare(routineWindows, qStep, prev) >= 0.5) routine |= 1 << q;
       }
     }
     p.genAllowed[i] = allowed;
