@@ -1,7 +1,7 @@
 // Headroom finder: the smallest extra battery, extra solar, generator time inside the allowed hours, or number
 // of hookup nights that keeps the lowest charge at or above the reserve (and never runs the battery empty).
 // Each lever is a monotone search (bisection) over battery walks that reuse one precomputed trip.
-import { engineInputSchema, type EngineInputDraft } from '../schemas/engine-input';
+import { engineInputSchema, type EngineInput, type EngineInputDraft } from '../schemas/engine-input';
 import { defaultFuelModel } from './generator';
 import { ASSUMED_GENERATOR_W } from './flags';
 import { prepare, type Prepared } from './prepare';
@@ -155,8 +155,13 @@ function notNeeded(lever: HeadroomLever['lever'], unit: HeadroomLever['unit'], l
   return { lever, status: 'not-needed', amount: 0, unit, resultingLowestSocPct: lowest, text: 'none needed: the plan holds the reserve', params: {} };
 }
 
+/** Validate and search. Invalid input throws a ZodError listing each bad field. */
 export function findHeadroom(draft: EngineInputDraft): HeadroomResult {
-  const input = engineInputSchema.parse(draft);
+  return findHeadroomParsed(engineInputSchema.parse(draft));
+}
+
+/** Search a validated input (no parsing): every trial below is a battery walk over one precomputed trip. */
+export function findHeadroomParsed(input: EngineInput): HeadroomResult {
   const p = prepare(input);
   const base = plannedScenario(p, solarSeries(p, 0));
   const reservePct = reservePctOf(input);
