@@ -85,7 +85,7 @@ export function WhatIfPanel({ detail, canEdit, busyKey, onKeep }: Props) {
 const styles = StyleSheet.create({
   activeCard: { borderColor: colors.sunlit, borderWidth: 2 },
   head: { flexDirection: 'row', alignItems: 'center', gap: space.sm },
-  badge: { backgroundColor: colors.ember, borderRadius: radii.pill, paddingHorizontal: space.sm, paddingVertical: 2 },
+  badge: { backgroundColor: colors.emberInk, borderRadius: radii.pill, paddingHorizontal: space.sm, paddingVertical: 2 },
   row: { gap: space.sm },
   toggle: { flexDirection: 'row', alignItems: 'center', gap: space.md, minHeight: 52, padding: space.sm, borderRadius: radii.md, borderWidth: 1, borderColor: colors.line },
   toggleOn: { borderColor: colors.pine, backgroundColor: colors.pineSoft },

@@ -48,7 +48,7 @@ const styles = StyleSheet.create({
   // On a wide screen the corner keeps toasts off the chart and the flags.
   hostWide: { left: undefined, right: space.xl, bottom: space.xl, width: 420, alignItems: 'stretch' },
   toast: { flexDirection: 'row', alignItems: 'center', gap: space.sm, maxWidth: 520, width: '100%', backgroundColor: colors.ink, borderRadius: radii.md, paddingLeft: space.lg, paddingRight: space.xs, paddingVertical: space.xs, ...shadow.card },
-  danger: { backgroundColor: colors.ember },
+  danger: { backgroundColor: colors.emberInk },
   message: { flex: 1, paddingVertical: space.sm },
   action: { minHeight: 44, minWidth: 44, paddingHorizontal: space.md, alignItems: 'center', justifyContent: 'center' },
 });

@@ -19,11 +19,14 @@ import { downloadFile } from './download-file';
 type Col = { title: string; width: number; get: (r: LedgerRow) => string; tone?: (r: LedgerRow) => 'ember' | 'ink' };
 const wh = (v: number) => (Math.abs(v) < 0.5 ? '·' : String(Math.round(v)));
 
-function Row({ cells, header, testID }: { cells: { text: string; width: number; tone?: 'ember' | 'ink' }[]; header?: boolean; testID?: string }) {
+type RowProps = { cells: { text: string; width: number; tone?: 'ember' | 'ink' }[]; header?: boolean; testID?: string; table?: boolean };
+
+/** One table row; `table` gives it table roles, which only hold where rows are the table's direct children. */
+function Row({ cells, header, testID, table = false }: RowProps) {
   return (
-    <View style={[styles.row, header ? styles.headerRow : null]} testID={testID} role="row">
+    <View style={[styles.row, header ? styles.headerRow : null]} testID={testID} role={table ? 'row' : undefined}>
       {cells.map((c, i) => (
-        <Text key={i} variant={header ? 'caption' : 'body'} color={c.tone ?? 'ink'} role={header ? 'columnheader' : 'cell'} style={[styles.cell, { width: c.width }, i > 1 ? styles.num : null]} numberOfLines={header ? 2 : 1}>
+        <Text key={i} variant={header ? 'caption' : 'body'} color={c.tone ?? 'ink'} role={table ? (header ? 'columnheader' : 'cell') : undefined} style={[styles.cell, { width: c.width }, i > 1 ? styles.num : null]} numberOfLines={header ? 2 : 1}>
           {c.text}
         </Text>
       ))}
@@ -67,11 +70,12 @@ export function LedgerScreen({ detail }: { detail: TripDetail }) {
           </Text>
           <Button testID="days-csv" tone="secondary" label="Download days (CSV)" onPress={() => downloadFile(`${slug}-days.csv`, daysCsv(result.days))} />
         </View>
-        <ScrollView horizontal>
+        <ScrollView horizontal focusable accessibilityLabel="Day sheets table, scrolls sideways">
           <View role="table" aria-label="Day sheets">
-            <Row header cells={['Day', 'Stops', 'Harvest Wh', 'Use Wh', 'Net Wh', 'Generator h', 'Lowest %', 'Short Wh'].map((t, i) => ({ text: t, width: i === 0 ? 110 : i === 1 ? 200 : 90 }))} />
+            <Row table header cells={['Day', 'Stops', 'Harvest Wh', 'Use Wh', 'Net Wh', 'Generator h', 'Lowest %', 'Short Wh'].map((t, i) => ({ text: t, width: i === 0 ? 110 : i === 1 ? 200 : 90 }))} />
             {result.days.map((d) => (
               <Row
+                table
                 key={d.dayIndex}
                 testID={`day-row-${d.dayIndex}`}
                 cells={[
@@ -101,10 +105,13 @@ export function LedgerScreen({ detail }: { detail: TripDetail }) {
         <Text variant="caption" color="inkSoft" testID="ledger-count">
           {rows.length} of {result.ledger.length} hours
         </Text>
-        <ScrollView horizontal>
-          <View style={{ width: tableWidth }} role="table" aria-label="Hourly ledger">
+        <ScrollView horizontal focusable accessibilityLabel="Hourly ledger, scrolls sideways">
+          <View style={{ width: tableWidth }}>
             <FlatList
               testID="ledger-list"
+              // Focusable so keyboard users can scroll the hours (axe: scrollable-region-focusable).
+              focusable
+              accessibilityLabel="Hourly ledger rows"
               style={styles.list}
               data={rows}
               keyExtractor={(r) => String(r.index)}

@@ -104,7 +104,7 @@ export function MemberRow({ tripId, member, isMe, canManage }: Props) {
 const styles = StyleSheet.create({
   row: { paddingVertical: space.sm, borderBottomWidth: 1, borderBottomColor: colors.line, gap: space.sm },
   head: { flexDirection: 'row', alignItems: 'center', gap: space.sm, flexWrap: 'wrap' },
-  text: { flex: 1, minWidth: 160 },
+  text: { flex: 1, minWidth: 120 },
   pill: { backgroundColor: colors.pineSoft, borderRadius: radii.pill, paddingHorizontal: space.md, paddingVertical: space.xs },
   panel: { gap: space.md, paddingBottom: space.sm },
   actions: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm, alignItems: 'flex-start' },

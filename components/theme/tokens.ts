@@ -14,6 +14,11 @@ export const colors = {
   pineSoft: '#E3EFE8',
   emberSoft: '#FBE6DB',
   inkSoft: '#4A5568',
+  // Darker shades of ember and lake for text and small labels: the palette shades fall short of the
+  // 4.5:1 contrast that small text needs on dune and white.
+  emberInk: '#A8431A',
+  lakeInk: '#2C5F8C',
+  infoSoft: '#E4EEF7',
 } as const;
 
 export type ColorName = keyof typeof colors;

@@ -63,7 +63,7 @@ export function TripFrame({ tripId, children }: { tripId: string; children: Reac
             </Text>
           </View>
         )}
-        <ScrollView horizontal showsHorizontalScrollIndicator={false} contentContainerStyle={styles.tabs} role="tablist" aria-label="Trip sections">
+        <ScrollView horizontal showsHorizontalScrollIndicator={false} contentContainerStyle={styles.tabs} role="navigation" aria-label="Trip sections">
           {tabs}
         </ScrollView>
       </View>

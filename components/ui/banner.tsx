@@ -22,5 +22,5 @@ export function Banner({ message, tone = 'danger', testID }: { message: string; 
 const styles = StyleSheet.create({
   banner: { borderRadius: radii.md, padding: space.lg, borderWidth: 1 },
   danger: { backgroundColor: colors.emberSoft, borderColor: colors.ember },
-  info: { backgroundColor: '#E4EEF7', borderColor: colors.lake },
+  info: { backgroundColor: colors.infoSoft, borderColor: colors.lake },
 });

@@ -14,7 +14,7 @@ export type ButtonProps = Omit<PressableProps, 'children'> & {
 const toneStyles: Record<Tone, { bg: string; fg: 'white' | 'pine' | 'ember' | 'ink'; border: string }> = {
   primary: { bg: colors.pine, fg: 'white', border: colors.pine },
   secondary: { bg: colors.card, fg: 'pine', border: colors.pine },
-  danger: { bg: colors.ember, fg: 'white', border: colors.ember },
+  danger: { bg: colors.emberInk, fg: 'white', border: colors.emberInk },
   quiet: { bg: 'transparent', fg: 'ink', border: 'transparent' },
 };
 

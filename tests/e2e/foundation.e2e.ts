@@ -73,7 +73,7 @@ describe.each(Object.entries(VIEWPORTS))('at %s width', (name, viewport) => {
 
     await page.locator('[data-testid^="trip-open-"]').filter({ hasText: 'Highland loop' }).click();
     await page.waitForSelector(byTestId('trip-frame'));
-    expect(await page.textContent(byTestId('trip-frame'))).toContain('12–19 Sep 2027');
+    await expect.poll(() => page.textContent(byTestId('trip-frame'))).toContain('12–19 Sep 2027');
     await screenshot(page, `trip-${name}`);
     expect(errors).toEqual([]);
     await page.close();

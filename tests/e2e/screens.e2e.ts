@@ -44,7 +44,9 @@ const CHECKS: Check[] = [
 
 describe.each(Object.entries(VIEWPORTS))('at %s width', (size, viewport) => {
   it('when each screen is opened, then it renders without errors and axe finds nothing serious', async () => {
-    const page = await browser.newPage({ viewport });
+    // axe needs a page from an explicit context.
+    const context = await browser.newContext({ viewport });
+    const page = await context.newPage();
     const errors = trackPageErrors(page);
     await signIn(page, server.url, DEMO_ACCOUNT.email, DEMO_ACCOUNT.password);
     await openTrip(page, 'Highland loop');
@@ -59,6 +61,6 @@ describe.each(Object.entries(VIEWPORTS))('at %s width', (size, viewport) => {
     }
     expect(violations).toEqual([]);
     expect(errors).toEqual([]);
-    await page.close();
+    await context.close();
   });
 });

@@ -1,0 +1,216 @@
+// Sharing in the browser: an organiser invites by e-mail from the People tab, the invitee reads the
+// message in the development Outbox, follows its link, creates an account, joins and edits a routine.
+// Clubs, the club page, the Outbox and the invite page are screenshotted at both widths and axe-scanned.
+import type { Browser, Page } from 'playwright-core';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { DEMO_ACCOUNT, DEMO_CREW } from '@/db/seed';
+import { byTestId, launchBrowser, openTrip, screenshot, seriousA11yViolations, signIn, startServer, trackPageErrors, VIEWPORTS, type RunningServer } from './harness';
+
+let server: RunningServer;
+let browser: Browser;
+
+beforeAll(async () => {
+  server = await startServer();
+  browser = await launchBrowser();
+});
+afterAll(async () => {
+  await browser?.close();
+  await server?.stop();
+});
+
+const TRIP = 'Highland loop';
+
+/** A page in its own browser context: its own cookies, and what axe needs to scan it. */
+async function freshPage(viewport: { width: number; height: number }): Promise<Page> {
+  const context = await browser.newContext({ viewport });
+  return context.newPage();
+}
+
+async function expectAccessible(page: Page, screen: string): Promise<void> {
+  // Let toasts and late layout settle so the scan sees the screen as a person would.
+  await page.waitForTimeout(300);
+  expect({ screen, violations: await seriousA11yViolations(page) }).toEqual({ screen, violations: [] });
+}
+
+async function openPeople(page: Page): Promise<void> {
+  await openTrip(page, TRIP);
+  await page.click(byTestId('tab-people'));
+  await page.waitForSelector(byTestId('members'));
+  await page.waitForSelector('[data-testid^="member-"][data-testid$="-role"]');
+}
+
+async function invite(page: Page, email: string, role: 'crew' | 'viewer' | 'planner'): Promise<void> {
+  await page.fill(byTestId('invite-email'), email);
+  await page.click(byTestId(`invite-role-${role}`));
+  await page.click(byTestId('invite-submit'));
+  await page.locator(byTestId('pending-invites')).getByText(email).waitFor();
+}
+
+/** Opens the Outbox (signed out is fine), the newest message to `email`, and returns its reader. */
+async function openMessageTo(page: Page, email: string): Promise<void> {
+  await page.goto(`${server.url}/outbox`);
+  await page.waitForSelector(byTestId('outbox-list'));
+  await page.locator('[data-testid^="outbox-message-"]').filter({ hasText: email }).first().click();
+  await page.waitForSelector(byTestId('outbox-reader'));
+}
+
+describe('sharing a trip by e-mail', () => {
+  it('when the organiser invites a new address as crew at 360 px, then that person joins from the Outbox link and edits a routine', async () => {
+    const started = Date.now();
+    const organiser = await freshPage(VIEWPORTS.phone);
+    const organiserErrors = trackPageErrors(organiser);
+    await signIn(organiser, server.url, DEMO_ACCOUNT.email, DEMO_ACCOUNT.password);
+    await openPeople(organiser);
+    await screenshot(organiser, 'sharing-people-phone');
+    await expectAccessible(organiser, 'people (phone)');
+
+    // An existing member is refused beside the address, and what was typed stays.
+    await organiser.fill(byTestId('invite-email'), DEMO_CREW.email);
+    await organiser.click(byTestId('invite-submit'));
+    await expect.poll(() => organiser.textContent(byTestId('invite-card'))).toMatch(/already a member/i);
+    expect(await organiser.inputValue(byTestId('invite-email'))).toBe(DEMO_CREW.email);
+
+    const newcomer = `morag-${Date.now()}@example.test`;
+    await invite(organiser, newcomer, 'crew');
+    expect(await organiser.textContent(byTestId('pending-invites'))).toMatch(/Crew/);
+    expect(organiserErrors).toEqual([]);
+
+    // The invitee has no account and nothing open: a fresh, signed-out browser.
+    const member = await freshPage(VIEWPORTS.phone);
+    const memberErrors = trackPageErrors(member);
+    await openMessageTo(member, newcomer);
+    expect(await member.textContent(byTestId('outbox-reader'))).toContain('Highland loop');
+    await screenshot(member, 'sharing-outbox-phone');
+    await expectAccessible(member, 'outbox (phone)');
+
+    await member.click(byTestId('outbox-link-0'));
+    await member.waitForSelector(byTestId('invite-valid'));
+    expect(await member.textContent(byTestId('invite-screen'))).toMatch(/Highland loop as Crew/);
+    expect(await member.inputValue(byTestId('sign-up-email'))).toBe(newcomer);
+    await screenshot(member, 'sharing-invite-phone');
+    await expectAccessible(member, 'invite (phone)');
+
+    await member.fill(byTestId('sign-up-name'), 'Morag Sinclair');
+    await member.fill(byTestId('sign-up-password'), 'rally-field-2027');
+    await member.click(byTestId('sign-up-submit'));
+    await member.waitForSelector(byTestId('trip-frame'));
+    expect(new URL(member.url()).pathname).toMatch(/^\/trips\/[^/]+$/);
+    await expect.poll(() => member.textContent(byTestId('trip-frame'))).toContain('Crew');
+
+    // As crew, change when the laptop runs and save it.
+    await member.click(byTestId('tab-loads'));
+    await member.locator('[data-testid^="appliance-"]').filter({ hasText: 'Laptop' }).first().click();
+    await member.waitForSelector(byTestId('routine-strip'));
+    const cell = member.locator(byTestId('routine-strip-cell-9')).first();
+    const before = await cell.getAttribute('aria-checked');
+    await cell.click();
+    const after = before === 'true' ? 'false' : 'true';
+    expect(await cell.getAttribute('aria-checked')).toBe(after);
+    await member.click(byTestId('schedule-save'));
+    await member.locator(byTestId('toast')).filter({ hasText: 'Routine saved' }).waitFor();
+
+    // After a reload the routine reads back from the server as saved.
+    await member.reload();
+    await member.waitForSelector(byTestId('loads-screen'));
+    await member.locator('[data-testid^="appliance-"]').filter({ hasText: 'Laptop' }).first().click();
+    await member.waitForSelector(byTestId('routine-strip'));
+    expect(await member.locator(byTestId('routine-strip-cell-9')).first().getAttribute('aria-checked')).toBe(after);
+
+    // The link worked once: opening it again says so instead of joining twice.
+    await openMessageTo(member, newcomer);
+    await member.click(byTestId('outbox-link-0'));
+    await member.waitForSelector(byTestId('invite-used'));
+
+    // The organiser sees the newcomer as crew, and the invite is no longer waiting.
+    await organiser.reload();
+    await organiser.waitForSelector(byTestId('members'));
+    await expect.poll(() => organiser.textContent(byTestId('members'))).toContain('Morag Sinclair');
+    await expect.poll(() => organiser.textContent(byTestId('invites-card'))).not.toContain(newcomer);
+    expect(memberErrors).toEqual([]);
+    console.log(`invite → join → routine saved at 360 px: ${((Date.now() - started) / 1000).toFixed(1)} s`);
+    await member.context().close();
+    await organiser.context().close();
+  });
+
+  it('when someone signed in with another address opens an invite at 1440 px, then they are told to sign in with the invited one and nothing is joined', async () => {
+    const organiser = await freshPage(VIEWPORTS.desktop);
+    await signIn(organiser, server.url, DEMO_ACCOUNT.email, DEMO_ACCOUNT.password);
+    await openPeople(organiser);
+    const invited = `ewan-${Date.now()}@example.test`;
+    await invite(organiser, invited, 'viewer');
+    await screenshot(organiser, 'sharing-people-desktop');
+    await expectAccessible(organiser, 'people (desktop)');
+
+    const other = await freshPage(VIEWPORTS.desktop);
+    await signIn(other, server.url, DEMO_CREW.email, DEMO_CREW.password);
+    await openMessageTo(other, invited);
+    await screenshot(other, 'sharing-outbox-desktop');
+    await expectAccessible(other, 'outbox (desktop)');
+    await other.click(byTestId('outbox-link-0'));
+    await other.waitForSelector(byTestId('invite-wrong-account'));
+    expect(await other.textContent(byTestId('invite-wrong-account'))).toContain(invited);
+    expect(await other.locator(byTestId('invite-join')).count()).toBe(0);
+    await screenshot(other, 'sharing-invite-desktop');
+    await expectAccessible(other, 'invite (desktop)');
+
+    // Signing out keeps the page and offers the invited address.
+    await other.click(byTestId('invite-sign-out'));
+    await other.waitForSelector(byTestId('invite-auth'));
+    expect(await other.inputValue(byTestId('sign-up-email'))).toBe(invited);
+    await other.context().close();
+
+    await organiser.reload();
+    await organiser.waitForSelector(byTestId('pending-invites'));
+    expect(await organiser.textContent(byTestId('pending-invites'))).toContain(invited);
+    await organiser.context().close();
+  });
+});
+
+describe.each(Object.entries(VIEWPORTS))('clubs at %s width', (name, viewport) => {
+  it('when the organiser creates a club and pastes addresses with a bad one, then the good ones are sent and the bad one is reported by line', async () => {
+    const page = await freshPage(viewport);
+    const errors = trackPageErrors(page);
+    await signIn(page, server.url, DEMO_ACCOUNT.email, DEMO_ACCOUNT.password);
+    await page.click(byTestId('nav-clubs'));
+    await page.waitForSelector(byTestId('clubs-screen'));
+    if (await page.locator(byTestId('clubs-empty')).count()) {
+      await screenshot(page, `sharing-clubs-empty-${name}`);
+      await expectAccessible(page, `clubs empty (${name})`);
+    } else {
+      await page.click(byTestId('clubs-new'));
+    }
+    await page.fill(byTestId('create-club-name'), `Glen Rally Club ${name}`);
+    await page.click(byTestId('create-club-submit'));
+    await page.waitForSelector(byTestId('club-invite-form'));
+
+    await page.fill(byTestId('club-invite-addresses'), `Kirsty Bell <kirsty-${name}@example.test>\nangus-${name}@example.test, not an address`);
+    await page.click(byTestId('club-invite-submit'));
+    await page.waitForSelector(byTestId('club-invite-report'));
+    expect(await page.textContent(byTestId('club-invite-sent'))).toMatch(/^2 invites sent/);
+    expect(await page.textContent(byTestId('club-invite-rejected-0'))).toMatch(/Line 2: “not an address”/);
+    // Only the refused row stays in the box, ready to fix.
+    expect(await page.inputValue(byTestId('club-invite-addresses'))).toBe('not an address');
+    await expect.poll(() => page.textContent(byTestId('club-pending-invites'))).toContain(`kirsty-${name}@example.test`);
+
+    // Share the trip from its People tab; the club page then lists it with its copy count.
+    await page.goto(server.url);
+    await page.waitForSelector(byTestId('trips-screen'));
+    await openPeople(page);
+    await page.locator(byTestId('share-club-pick')).getByText(`Glen Rally Club ${name}`).click();
+    await page.click(byTestId('share-club-submit'));
+    await page.locator(byTestId('toast')).filter({ hasText: `Shared to Glen Rally Club ${name}` }).waitFor();
+    await page.click(byTestId('nav-clubs'));
+    await page.locator('[data-testid^="club-card-"]').filter({ hasText: `Glen Rally Club ${name}` }).click();
+    await page.waitForSelector(byTestId('club-trips'));
+    expect(await page.textContent(byTestId('club-trips'))).toContain('No household has copied it yet');
+    await screenshot(page, `sharing-club-${name}`);
+    await expectAccessible(page, `club (${name})`);
+
+    await page.click(byTestId('back-to-clubs'));
+    await page.waitForSelector(byTestId('club-list'));
+    await screenshot(page, `sharing-clubs-${name}`);
+    await expectAccessible(page, `clubs (${name})`);
+    expect(errors).toEqual([]);
+    await page.context().close();
+  });
+});
