@@ -1,5 +1,6 @@
 // Engine benchmark (tinybench): prints medians. Targets are reported, not asserted:
 // 30-day trip, 40 appliances, three sky scenarios < 2 ms; headroom on that trip < 50 ms; 7-day trip < 0.5 ms.
+import { cpus, loadavg } from 'node:os';
 import { Bench } from 'tinybench';
 import { findHeadroom, simulateTrip } from '../shared/engine';
 // The same trips are pinned by the golden test, so the figures measured here are for results known to be unchanged.
@@ -13,7 +14,11 @@ bench
   .add('findHeadroom: same 30-day trip', () => { findHeadroom(month); })
   .add('simulateTrip: 7 days, 15 appliances, 3 sky scenarios', () => { simulateTrip(week); });
 
+// Medians are wall time: on a shared machine they rise with the load, so the load is printed with them.
+const load = (): string => loadavg().map((x) => x.toFixed(2)).join(' ');
+
 async function main(): Promise<void> {
+  console.log(`${cpus().length} CPUs, load average before: ${load()}`);
   await bench.run();
   const targets = [2, 50, 0.5];
   bench.tasks.forEach((task, i) => {
@@ -21,6 +26,7 @@ async function main(): Promise<void> {
     const median = r && 'latency' in r ? r.latency.p50 : Number.NaN;
     console.log(`${task.name}: median ${median?.toFixed(3)} ms (target < ${targets[i]} ms)`);
   });
+  console.log(`load average after: ${load()}`);
 }
 
 void main();
