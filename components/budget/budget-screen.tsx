@@ -25,7 +25,7 @@ export function BudgetScreen({ detail }: { detail: TripDetail }) {
   const { apply, busy } = useApplyEdit(detail.trip.id);
   const canEdit = can(detail.trip.role, 'editTrip');
 
-  const whatIf = <WhatIfPanel detail={detail} canEdit={canEdit} busyKey={busy} onKeep={async (key) => {
+  const whatIf = <WhatIfPanel detail={detail} canEdit={canEdit} busyKey={busy} lowestNow={view.state === 'ready' ? view.result.headline.lowestSocPct : undefined} onKeep={async (key) => {
     if (await apply(`keep-${key}`, editsForWhatIf(detail, key), detail.rig.version)) clearWhatIf(detail.trip.id, key);
   }} />;
 

@@ -4,6 +4,7 @@ import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { Text } from '@/components/ui/text';
 import type { TripDetail } from '@/shared/schemas/api';
+import { useBudgetQuery } from '@/stores/queries/budget';
 import { anyWhatIf, clearWhatIf, toggleWhatIf, useWhatIf, type WhatIfKey } from '@/stores/what-if-store';
 import type { FixEdit } from './apply-fix';
 import { rigWithExtraBattery, rigWithExtraSolar, stopWithoutHookup, stopWithWorseSky, WHAT_IF_LABELS } from './what-if';
@@ -27,9 +28,10 @@ export function editsForWhatIf(detail: TripDetail, key: WhatIfKey): FixEdit[] {
   }
 }
 
-type Props = { detail: TripDetail; canEdit: boolean; busyKey: string | null; onKeep: (key: WhatIfKey) => void };
+type Props = { detail: TripDetail; canEdit: boolean; busyKey: string | null; onKeep: (key: WhatIfKey) => void; lowestNow?: number };
 
-export function WhatIfPanel({ detail, canEdit, busyKey, onKeep }: Props) {
+export function WhatIfPanel({ detail, canEdit, busyKey, onKeep, lowestNow }: Props) {
+  const saved = useBudgetQuery(detail.trip.id).data?.result?.headline.lowestSocPct;
   const tripId = detail.trip.id;
   const whatIf = useWhatIf(tripId);
   const active = anyWhatIf(whatIf);
@@ -77,6 +79,12 @@ export function WhatIfPanel({ detail, canEdit, busyKey, onKeep }: Props) {
           </View>
         );
       })}
+      {active && lowestNow !== undefined ? (
+        // Repeated here because on a phone the headline figures are far above this panel.
+        <Text variant="label" testID="what-if-result" aria-live="polite">
+          Lowest charge with these changes: {Math.round(lowestNow)}%{saved !== undefined ? ` (saved plan: ${Math.round(saved)}%)` : ''}
+        </Text>
+      ) : null}
       {active ? <Button testID="what-if-discard" label="Discard what-ifs" tone="quiet" onPress={() => clearWhatIf(tripId)} /> : null}
     </Card>
   );

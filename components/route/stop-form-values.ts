@@ -58,12 +58,17 @@ const FIELD_OF: Record<string, keyof StopFormValues> = {
 
 /** Builds the API's stop from the form and runs the shared schema on it; its messages land on the right fields. */
 export function fromFormValues(v: StopFormValues, units: UnitSystem): StopFromForm {
-  const iso = (local: string) => DateTime.fromFormat(local, LOCAL, { zone: v.timeZone }).toISO({ suppressSeconds: true, suppressMilliseconds: true });
+  const iso = (local: string) => {
+    const t = DateTime.fromFormat(local, LOCAL, { zone: v.timeZone });
+    // Luxon moves a time inside a spring-forward gap to a real one; a typed time that moved did not exist.
+    if (!t.isValid || t.toFormat(LOCAL) !== local) return null;
+    return t.toISO({ suppressSeconds: true, suppressMilliseconds: true });
+  };
   const arriveAt = iso(v.arrive);
   const departAt = iso(v.depart);
   const errors: Partial<Record<keyof StopFormValues, string>> = {};
-  if (!arriveAt) errors.arrive = 'That date and time does not exist in this time zone.';
-  if (!departAt) errors.depart = 'That date and time does not exist in this time zone.';
+  if (!arriveAt) errors.arrive = 'That date and time does not exist in this time zone (check the date, or a clock change).';
+  if (!departAt) errors.depart = 'That date and time does not exist in this time zone (check the date, or a clock change).';
   const horizonDeg = v.horizon.split(/[\s,;]+/).filter(Boolean).map(Number);
   if (v.exposureKind === 'custom' && (horizonDeg.length < 4 || horizonDeg.length > 36 || horizonDeg.some((h) => !Number.isFinite(h) || h < 0 || h > 90))) {
     errors.horizon = 'List 4 to 36 angles from 0 to 90°, clockwise from north (for example 8 or 16 of them).';

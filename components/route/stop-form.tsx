@@ -181,7 +181,8 @@ export function StopForm({ tripId, record, fallbackZone, onDone }: Props) {
 const styles = StyleSheet.create({
   form: { gap: space.lg },
   grid: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md },
-  cell: { flexGrow: 1, flexBasis: 140 },
+  // Basis 0 with a minimum width: equal columns in a row that wrap on a phone, and no fixed height in a column.
+  cell: { flexGrow: 1, flexBasis: 0, minWidth: 140 },
   zoneRow: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'flex-start', gap: space.md },
   actions: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
 });

@@ -1,0 +1,99 @@
+import { describe, expect, it } from 'vitest';
+import { editForFix } from '@/components/budget/apply-fix';
+import { applyWhatIf, rigWithExtraSolar } from '@/components/budget/what-if';
+import { filterLedger, ledgerCsv } from '@/components/ledger/ledger-csv';
+import { DEMO_TRIPS, simulateTrip } from '@/shared/engine';
+import type { Fix } from '@/shared/engine/result-types';
+import { toEngineInput } from '@/shared/trip-to-engine-input';
+import { NO_WHAT_IF } from '@/stores/what-if-store';
+import { demoDetail } from '../e2e/fixtures';
+
+const detail = demoDetail('highlandLoop');
+const input = toEngineInput(detail);
+if (!input) throw new Error('the demo trip has stops');
+const result = simulateTrip(input);
+
+describe('what-if edits', () => {
+  it('when no what-if is on, then the input is unchanged', () => {
+    expect(applyWhatIf(input, NO_WHAT_IF)).toEqual(input);
+  });
+  it('when half again the battery is on, then the lowest charge does not fall', () => {
+    const bigger = simulateTrip(applyWhatIf(input, { ...NO_WHAT_IF, extraBattery: true }));
+    expect(bigger.headline.capacityWh).toBeCloseTo(result.headline.capacityWh * 1.5, 0);
+    expect(bigger.headline.energyShortWh).toBeLessThan(result.headline.energyShortWh);
+  });
+  it('when the hookups are skipped, then no stop keeps one and less comes from shore power', () => {
+    const skipped = applyWhatIf(input, { ...NO_WHAT_IF, skipHookup: true });
+    expect(skipped.trip.stops.every((s) => s.hookup === null)).toBe(true);
+    expect(simulateTrip(skipped).headline.hookupWh).toBe(0);
+  });
+  it('when the sky is one level worse, then clear becomes hazy and overcast stays overcast', () => {
+    const worse = applyWhatIf(input, { ...NO_WHAT_IF, worseSky: true });
+    expect(input.trip.stops.map((s) => s.skyOutlook)).toContain('clear');
+    expect(worse.trip.stops.map((s) => s.skyOutlook)).not.toContain('clear');
+  });
+  it('when a rig has no solar, then more solar adds an array and a controller', () => {
+    const rig = rigWithExtraSolar({ ...detail.rig.rig, solarArrays: [], controller: null });
+    expect(rig.solarArrays).toHaveLength(1);
+    expect(rig.controller?.kind).toBe('mppt');
+  });
+});
+
+describe('flag fixes as edits', () => {
+  const fixes = result.flags.flatMap((f) => f.fixes);
+  const first = (kind: Fix['kind']) => fixes.find((f) => f.kind === kind);
+
+  it.each(['add-battery', 'add-hookup-night', 'add-generator-hours', 'larger-inverter'] as const)('when the fix is %s, then it becomes an edit', (kind) => {
+    const fix = first(kind);
+    expect(fix).toBeDefined();
+    if (fix) expect(editForFix(detail, fix, result.days)).not.toBeNull();
+  });
+
+  it('when advice cannot be an edit (stagger, cabling), then no edit is offered', () => {
+    for (const kind of ['stagger-appliances', 'check-cabling', 'move-appliance-to-drive'] as const) {
+      const fix = first(kind);
+      if (fix) expect(editForFix(detail, fix, result.days)).toBeNull();
+    }
+  });
+
+  it('when a battery fix is applied, then its energy-short flag is gone', () => {
+    const flag = result.flags.find((f) => f.kind === 'energy-short');
+    const fix = flag?.fixes.find((f) => f.kind === 'add-battery');
+    const edit = fix ? editForFix(detail, fix, result.days) : null;
+    if (edit?.kind !== 'rig') throw new Error('expected a rig edit');
+    const after = simulateTrip({ ...input, rig: edit.rig });
+    expect(after.flags.map((f) => f.id)).not.toContain(flag?.id);
+  });
+
+  it('when a generator fix names a stop, then the routine runs on that stop\'s days inside its hours', () => {
+    const fix = first('add-generator-hours');
+    const edit = fix ? editForFix(detail, fix, result.days) : null;
+    if (edit?.kind !== 'rig' || edit.rig.generator?.mode?.kind !== 'routine') throw new Error('expected a generator routine');
+    const w = edit.rig.generator.mode.windows[0];
+    expect(w?.days.kind).toBe('trip-days');
+    expect(w?.startHour).toBeGreaterThanOrEqual(Number(fix?.params.startHour));
+    expect((w?.startHour ?? 0) * 60 + (w?.minutes ?? 0)).toBeLessThanOrEqual(Number(fix?.params.endHour) * 60);
+  });
+});
+
+describe('ledger export', () => {
+  it('when only shortfalls are asked for, then every row left has one', () => {
+    const rows = filterLedger(result.ledger, { stopIndex: null, shortOnly: true });
+    expect(rows.length).toBeGreaterThan(0);
+    expect(rows.every((r) => r.energyShortWh > 0 || r.socPct <= 0)).toBe(true);
+  });
+  it('when one stop is chosen, then only its hours remain', () => {
+    const rows = filterLedger(result.ledger, { stopIndex: 1, shortOnly: false });
+    expect(rows.every((r) => r.where.kind === 'stop' && r.where.stopIndex === 1)).toBe(true);
+  });
+  it('when names carry commas or start like a formula, then the CSV quotes them', () => {
+    const csv = ledgerCsv(result.ledger.slice(0, 2), ['Loch, north shore', '=cmd']);
+    const lines = csv.trim().split('\r\n');
+    expect(lines).toHaveLength(3);
+    expect(lines[1]).toContain('"Loch, north shore"');
+  });
+});
+
+it('the demo fixture is the engine demo', () => {
+  expect(detail.trip.name).toBe(DEMO_TRIPS.highlandLoop.trip.name);
+});

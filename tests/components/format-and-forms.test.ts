@@ -1,0 +1,73 @@
+import { describe, expect, it } from 'vitest';
+import { energy, fuelAmount, mass, temperature } from '@/components/format/units';
+import { fromFormValues, toFormValues } from '@/components/route/stop-form-values';
+import { highlandLoop } from '@/shared/engine';
+import { stopSchema } from '@/shared/schemas/trip';
+import { readStoredUnits } from '@/stores/units-store';
+
+describe('unit formatting', () => {
+  it.each([
+    [950, { value: '950', unit: 'Wh' }],
+    [2075.9, { value: '2,076', unit: 'Wh' }],
+    [12_345, { value: '12.3', unit: 'kWh' }],
+  ])('when %s Wh is shown, then it reads %o', (wh, figure) => {
+    expect(energy(wh)).toEqual(figure);
+  });
+  it.each([
+    ['metric', { value: '20', unit: '°C' }],
+    ['us', { value: '68', unit: '°F' }],
+  ] as const)('when 20 °C is shown in %s, then it reads %o', (system, figure) => {
+    expect(temperature(20, system)).toEqual(figure);
+  });
+  it('when propane is shown in US units, then kilograms become pounds', () => {
+    expect(mass(9.07, 'us')).toEqual({ value: '20.0', unit: 'lb' });
+    expect(fuelAmount(3.785, 'L', 'us')).toEqual({ value: '1.0', unit: 'gal' });
+  });
+});
+
+describe('stored units', () => {
+  it.each([
+    [null, 'metric'],
+    ['{"units":"us"}', 'us'],
+    ['{"units":"imperial"}', 'metric'],
+    ['not json', 'metric'],
+  ] as const)('when storage holds %s, then the units are %s', (raw, units) => {
+    expect(readStoredUnits(raw)).toBe(units);
+  });
+});
+
+describe('stop form values', () => {
+  const stop = stopSchema.parse(highlandLoop.trip.stops[1]);
+
+  it('when a stored stop is opened and saved unchanged, then the same stop comes back', () => {
+    const built = fromFormValues(toFormValues(stop, '', 'metric', 'Europe/London'), 'metric');
+    if (!built.ok) throw new Error(JSON.stringify(built.errors));
+    expect(stopSchema.parse(built.stop)).toEqual(stop);
+  });
+
+  it('when US units are used, then temperatures go in as °F and are stored as °C', () => {
+    const values = toFormValues(stop, '', 'us', 'Europe/London');
+    expect(values.low).toBe(43);
+    const built = fromFormValues({ ...values, low: 32, high: 50 }, 'us');
+    expect(built.ok && built.stop.lowC).toBe(0);
+  });
+
+  it('when departure is before arrival, then the message lands on the depart field', () => {
+    const values = toFormValues(stop, '', 'metric', 'Europe/London');
+    const built = fromFormValues({ ...values, depart: '2027-09-13 10:00' }, 'metric');
+    expect(built.ok).toBe(false);
+    if (!built.ok) expect(built.errors.depart).toMatch(/left after/);
+  });
+
+  it('when a custom horizon has too few angles, then the horizon field says how to write it', () => {
+    const values = toFormValues(stop, '', 'metric', 'Europe/London');
+    const built = fromFormValues({ ...values, exposureKind: 'custom', horizon: '10, 20' }, 'metric');
+    expect(!built.ok && built.errors.horizon).toMatch(/4 to 36 angles/);
+  });
+
+  it('when a local time falls in the spring-forward gap, then it is refused', () => {
+    const values = toFormValues(stop, '', 'metric', 'Europe/London');
+    const built = fromFormValues({ ...values, arrive: '2027-03-28 01:30', depart: '2027-03-29 10:00' }, 'metric');
+    expect(built.ok).toBe(false);
+  });
+});
