@@ -46,11 +46,11 @@ async function invite(page: Page, email: string, role: 'crew' | 'viewer' | 'plan
   await page.locator(byTestId('pending-invites')).getByText(email).waitFor();
 }
 
-/** Opens the Outbox (signed out is fine), the newest message to `email`, and returns its reader. */
-async function openMessageTo(page: Page, email: string): Promise<void> {
+/** Opens the Outbox (signed out is fine) and the newest invite sent to `email` (sign-up also mails a confirmation). */
+async function openInviteMailTo(page: Page, email: string): Promise<void> {
   await page.goto(`${server.url}/outbox`);
   await page.waitForSelector(byTestId('outbox-list'));
-  await page.locator('[data-testid^="outbox-message-"]').filter({ hasText: email }).first().click();
+  await page.locator('[data-testid^="outbox-message-"]').filter({ hasText: email }).filter({ hasText: 'invited you' }).first().click();
   await page.waitForSelector(byTestId('outbox-reader'));
 }
 
@@ -78,7 +78,7 @@ describe('sharing a trip by e-mail', () => {
     // The invitee has no account and nothing open: a fresh, signed-out browser.
     const member = await freshPage(VIEWPORTS.phone);
     const memberErrors = trackPageErrors(member);
-    await openMessageTo(member, newcomer);
+    await openInviteMailTo(member, newcomer);
     expect(await member.textContent(byTestId('outbox-reader'))).toContain('Highland loop');
     await screenshot(member, 'sharing-outbox-phone');
     await expectAccessible(member, 'outbox (phone)');
@@ -117,7 +117,7 @@ describe('sharing a trip by e-mail', () => {
     expect(await member.locator(byTestId('routine-strip-cell-9')).first().getAttribute('aria-checked')).toBe(after);
 
     // The link worked once: opening it again says so instead of joining twice.
-    await openMessageTo(member, newcomer);
+    await openInviteMailTo(member, newcomer);
     await member.click(byTestId('outbox-link-0'));
     await member.waitForSelector(byTestId('invite-used'));
 
@@ -143,7 +143,7 @@ describe('sharing a trip by e-mail', () => {
 
     const other = await freshPage(VIEWPORTS.desktop);
     await signIn(other, server.url, DEMO_CREW.email, DEMO_CREW.password);
-    await openMessageTo(other, invited);
+    await openInviteMailTo(other, invited);
     await screenshot(other, 'sharing-outbox-desktop');
     await expectAccessible(other, 'outbox (desktop)');
     await other.click(byTestId('outbox-link-0'));
