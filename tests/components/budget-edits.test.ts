@@ -70,7 +70,7 @@ describe('flag fixes as edits', () => {
     const edit = fix ? editForFix(detail, fix, result.days) : null;
     if (edit?.kind !== 'rig' || edit.rig.generator?.mode?.kind !== 'routine') throw new Error('expected a generator routine');
     const w = edit.rig.generator.mode.windows[0];
-    expect(w?.days.kind).toBe('trip-days');
+    expect(w?.days?.kind).toBe('trip-days');
     expect(w?.startHour).toBeGreaterThanOrEqual(Number(fix?.params.startHour));
     expect((w?.startHour ?? 0) * 60 + (w?.minutes ?? 0)).toBeLessThanOrEqual(Number(fix?.params.endHour) * 60);
   });
