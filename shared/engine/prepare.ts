@@ -317,9 +317,13 @@ function fillLoads(p: Prepared): void {
     const heats = !isAc && heatInputW !== 0;
     const runningTotalW = runningW * quantity;
     const surgeExtra = (a.surgeW ?? runningW) - runningW;
+    // Off with no standby draw, a step adds exactly 0 to every total (which are never −0), so it is skipped.
+    const skipOff = !always && standbyW === 0;
+    if (skipOff) energy.fill(0);
     // One pass per appliance; the branches below are fixed for the whole pass.
     for (let i = 0; i < n; i++) {
       const sh = always ? 1 : (share[i] ?? 0);
+      if (skipOff && sh === 0) continue;
       const runShare = sh * dutyCycle;
       const dtH = stepH[i] ?? 1;
       const e = quantity * (runningW * runShare + standbyW * (1 - runShare)) * dtH;
