@@ -38,7 +38,10 @@ export function CopyOntoRig({ tripId, tripName, onCancel }: Props) {
   const submit = async () => {
     setError(undefined);
     try {
-      const detail = await copy.mutateAsync({ tripId, rigId });
+      const rigName = rigs.data.rigs.find((record) => record.id === rigId)?.rig.name;
+      // The copy sits in my list beside the club's plan: its name says which rig it runs on.
+      const name = rigName ? `${tripName} (${rigName})`.slice(0, 120) : undefined;
+      const detail = await copy.mutateAsync({ tripId, rigId, ...(name ? { name } : {}) });
       showToast(`${tripName} is now on your rig. Check its budget.`);
       router.push({ pathname: '/trips/[tripId]', params: { tripId: detail.trip.id } });
     } catch (failure) {

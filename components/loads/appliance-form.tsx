@@ -1,5 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useState } from 'react';
+import { useEffect, useRef, useState } from 'react';
 import { Controller, useForm, useWatch } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 import { space } from '@/components/theme/tokens';
@@ -31,6 +31,16 @@ export function ApplianceForm({ tripId, record, initial, canEdit, onSaved }: Pro
   const [conflict, setConflict] = useState<ApplianceRecord | null>(null);
   const { control, handleSubmit, reset, formState } = useForm<z.input<typeof applianceFieldsSchema>, unknown, ApplianceFields>({ resolver: zodResolver(applianceFieldsSchema), defaultValues: initial });
   const circuit = useWatch({ control, name: 'circuit' });
+  // The version this form was opened on: a save names it, so a change made meanwhile by someone else gets a 409.
+  const baseVersion = useRef(record?.version);
+  const { isDirty } = formState;
+  useEffect(() => {
+    // A newer record with nothing typed yet is simply shown; with typing in progress, the save decides.
+    if (record && record.version !== baseVersion.current && !isDirty) {
+      baseVersion.current = record.version;
+      reset(fieldsOf(record));
+    }
+  }, [record, isDirty, reset]);
 
   const send = (version: number | undefined) =>
     handleSubmit(async (values) => {
@@ -39,6 +49,7 @@ export function ApplianceForm({ tripId, record, initial, canEdit, onSaved }: Pro
         const saved = await save.mutateAsync({ applianceId: record?.id ?? null, version, appliance: values, caretakerUserId: record?.caretakerUserId ?? null });
         setConflict(null);
         showToast(`${values.name} saved`);
+        baseVersion.current = saved.version;
         reset(fieldsOf(saved));
         onSaved(saved);
       } catch (error) {
@@ -112,12 +123,13 @@ export function ApplianceForm({ tripId, record, initial, canEdit, onSaved }: Pro
           onKeepMine={() => void send(conflict.version)()}
           onTakeTheirs={() => {
             reset(fieldsOf(conflict));
+            baseVersion.current = conflict.version;
             setConflict(null);
           }}
         />
       ) : null}
       {canEdit ? (
-        <Button testID="appliance-save" label={record ? 'Save appliance' : 'Add appliance'} busy={formState.isSubmitting} disabled={formState.isSubmitting} onPress={send(record?.version)} />
+        <Button testID="appliance-save" label={record ? 'Save appliance' : 'Add appliance'} busy={formState.isSubmitting} disabled={formState.isSubmitting} onPress={() => void send(baseVersion.current)()} />
       ) : null}
     </View>
   );

@@ -120,7 +120,7 @@ export function LoadsScreen({ detail }: { detail: TripDetail }) {
           <Button testID="appliance-editor-close" tone="quiet" label="Close" onPress={() => setEditing(null)} />
         </View>
         <ApplianceForm
-          key={current ? `${current.id}-${current.version}` : editing.kind === 'new' ? editing.key : 'x'}
+          key={current ? current.id : editing.kind === 'new' ? editing.key : 'x'}
           tripId={detail.trip.id}
           record={current ?? null}
           initial={current ? (({ id: _id, ...rest }) => rest)(current.appliance) : editing.kind === 'new' ? editing.fields : BY_HAND}

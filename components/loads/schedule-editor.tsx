@@ -34,15 +34,16 @@ export function ScheduleEditor({ detail, record, canEdit }: Props) {
   const save = useScheduleSaveMutation(detail.trip.id);
   const budget = useBudgetQuery(detail.trip.id);
   const [draft, setDraft] = useState<Schedule>(record.appliance.schedule);
-  const [base, setBase] = useState({ id: record.id, version: record.version });
+  const [base, setBase] = useState({ id: record.id, version: record.version, schedule: record.appliance.schedule });
   const [strip, setStrip] = useState<StripKey>('all');
   const [conflict, setConflict] = useState<ApplianceRecord | null>(null);
-  // A newer record from the server (after a save or a refetch) replaces the draft, unless a conflict is open.
-  if ((base.id !== record.id || base.version !== record.version) && !conflict) {
-    setBase({ id: record.id, version: record.version });
+  const dirty = JSON.stringify(draft) !== JSON.stringify(base.schedule);
+  // A newer record from the server replaces the draft only while nothing is being edited; otherwise the
+  // save names the version the draft started from and a conflict asks the user.
+  if ((base.id !== record.id || base.version !== record.version) && !dirty && !conflict) {
+    setBase({ id: record.id, version: record.version, schedule: record.appliance.schedule });
     setDraft(record.appliance.schedule);
   }
-  const dirty = JSON.stringify(draft) !== JSON.stringify(record.appliance.schedule);
   const valid = scheduleSchema.safeParse(draft);
 
   const input = dirty && valid.success ? toEngineInput({ ...detail, appliances: detail.appliances.map((a) => (a.id === record.id ? { ...a, appliance: { ...a.appliance, schedule: valid.data } } : a)) }) : null;
@@ -52,7 +53,8 @@ export function ScheduleEditor({ detail, record, canEdit }: Props) {
   const submit = async (version: number) => {
     if (!valid.success) return;
     try {
-      await save.mutateAsync({ applianceId: record.id, version, schedule: valid.data });
+      const saved = await save.mutateAsync({ applianceId: record.id, version, schedule: valid.data });
+      setBase({ id: saved.id, version: saved.version, schedule: saved.appliance.schedule });
       setConflict(null);
       showToast(`Routine saved for ${record.appliance.name}`);
     } catch (error) {
@@ -162,6 +164,7 @@ export function ScheduleEditor({ detail, record, canEdit }: Props) {
           busy={save.isPending}
           onKeepMine={() => void submit(conflict.version)}
           onTakeTheirs={() => {
+            setBase({ id: conflict.id, version: conflict.version, schedule: conflict.appliance.schedule });
             setDraft(conflict.appliance.schedule);
             setConflict(null);
           }}
@@ -169,8 +172,8 @@ export function ScheduleEditor({ detail, record, canEdit }: Props) {
       ) : null}
       {canEdit ? (
         <View style={styles.actions}>
-          <Button testID="schedule-save" label="Save routine" busy={save.isPending} disabled={!dirty || !valid.success} onPress={() => void submit(record.version)} />
-          {dirty ? <Button testID="schedule-reset" label="Undo changes" tone="quiet" onPress={() => setDraft(record.appliance.schedule)} /> : null}
+          <Button testID="schedule-save" label="Save routine" busy={save.isPending} disabled={!dirty || !valid.success} onPress={() => void submit(base.version)} />
+          {dirty ? <Button testID="schedule-reset" label="Undo changes" tone="quiet" onPress={() => setDraft(base.schedule)} /> : null}
         </View>
       ) : null}
     </View>

@@ -1,5 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useState, type ReactNode } from 'react';
+import { useEffect, useRef, useState, type ReactNode } from 'react';
 import { Controller, useFieldArray, useForm, useWatch, type Control, type FieldPathByValue } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 import { mass } from '@/components/format/units';
@@ -77,13 +77,24 @@ export function RigForm({ tripId, record, canEdit }: { tripId: string; record: R
   const tanks = useFieldArray({ control, name: 'propaneTanks' });
   const [chemistry, inverter, generator, controller, shoreCharger, vehicleCharger] = useWatch({ control, name: ['battery.chemistry', 'inverter', 'generator', 'controller', 'shoreCharger', 'vehicleCharger'] });
   const off = !canEdit;
+  // Saves name the version the form was opened on, so someone else's change meanwhile is caught (409).
+  const baseVersion = useRef(record.version);
+  const { isDirty } = formState;
+  useEffect(() => {
+    if (record.version !== baseVersion.current && !isDirty) {
+      baseVersion.current = record.version;
+      reset(record.rig);
+    }
+  }, [record, isDirty, reset]);
   const massUnit = mass(0, units).unit;
 
   const send = (version: number) =>
     handleSubmit(async (rig) => {
       setFormError(undefined);
       try {
-        await save.mutateAsync({ version, rig });
+        const saved = await save.mutateAsync({ version, rig });
+        baseVersion.current = saved.version;
+        reset(saved.rig);
         setConflict(null);
         showToast('Rig saved');
       } catch (error) {
@@ -227,11 +238,12 @@ export function RigForm({ tripId, record, canEdit }: { tripId: string; record: R
           onKeepMine={() => void send(conflict.version)()}
           onTakeTheirs={() => {
             reset(conflict.rig);
+            baseVersion.current = conflict.version;
             setConflict(null);
           }}
         />
       ) : null}
-      {canEdit ? <Button testID="rig-save" label="Save rig" busy={formState.isSubmitting} disabled={formState.isSubmitting} onPress={send(record.version)} /> : null}
+      {canEdit ? <Button testID="rig-save" label="Save rig" busy={formState.isSubmitting} disabled={formState.isSubmitting} onPress={() => void send(baseVersion.current)()} /> : null}
     </View>
   );
 }

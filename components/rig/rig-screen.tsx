@@ -65,7 +65,7 @@ export function RigScreen({ detail }: { detail: TripDetail }) {
     <TabScroll testID="rig-screen">
       {!canEdit ? <Banner testID="rig-read-only" tone="info" message="Only the trip owner or a planner can change the rig." /> : null}
       <Panes
-        main={<RigForm key={`${detail.rig.id}-${detail.rig.version}`} tripId={detail.trip.id} record={detail.rig} canEdit={canEdit} />}
+        main={<RigForm key={detail.rig.id} tripId={detail.trip.id} record={detail.rig} canEdit={canEdit} />}
         side={canEdit ? <MyRigs detail={detail} /> : <View />}
         sideWidth={380}
       />

@@ -1,5 +1,5 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useState } from 'react';
+import { useEffect, useRef, useState } from 'react';
 import { Controller, useForm, useWatch, type Control } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 import { temperature } from '@/components/format/units';
@@ -61,6 +61,15 @@ export function StopForm({ tripId, record, fallbackZone, onDone }: Props) {
   });
   const [exposureKind, hookupOn, generatorOn] = useWatch({ control, name: ['exposureKind', 'hookupOn', 'generatorOn'] });
   const tUnit = temperature(0, units).unit;
+  // Saves name the version the form was opened on, so someone else's change meanwhile is caught (409).
+  const baseVersion = useRef(record?.version);
+  const { isDirty } = formState;
+  useEffect(() => {
+    if (record && record.version !== baseVersion.current && !isDirty) {
+      baseVersion.current = record.version;
+      reset(toFormValues(record.stop, record.notes, units, fallbackZone));
+    }
+  }, [record, isDirty, reset, units, fallbackZone]);
 
   const zoneFromCoordinates = async () => {
     const { lat, lon } = getValues();
@@ -166,12 +175,13 @@ export function StopForm({ tripId, record, fallbackZone, onDone }: Props) {
           onKeepMine={() => void send(conflict.version)()}
           onTakeTheirs={() => {
             reset(toFormValues(conflict.stop, conflict.notes, units, fallbackZone));
+            baseVersion.current = conflict.version;
             setConflict(null);
           }}
         />
       ) : null}
       <View style={styles.actions}>
-        <Button testID="stop-save" label={record ? 'Save stop' : 'Add stop'} busy={formState.isSubmitting} disabled={formState.isSubmitting} onPress={send(record?.version)} />
+        <Button testID="stop-save" label={record ? 'Save stop' : 'Add stop'} busy={formState.isSubmitting} disabled={formState.isSubmitting} onPress={() => void send(baseVersion.current)()} />
         <Button testID="stop-cancel" label="Cancel" tone="quiet" onPress={onDone} />
       </View>
     </View>

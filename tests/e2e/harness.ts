@@ -76,6 +76,21 @@ export async function screenshot(page: Page, name: string): Promise<void> {
   await page.screenshot({ path: path.join(SCREENSHOT_DIR, `${name}.png`), fullPage: true });
 }
 
+/**
+ * The trip screens scroll inside the page, so a full-page shot shows only the first screenful. This one grows the
+ * viewport to the tallest scrolling element first, so the whole screen can be reviewed, then restores it.
+ */
+export async function screenshotTall(page: Page, name: string): Promise<void> {
+  const viewport = page.viewportSize();
+  const height = await page.evaluate(() =>
+    Math.max(window.innerHeight, ...[...document.querySelectorAll('*')].map((el) => (el.scrollHeight > el.clientHeight + 4 ? el.scrollHeight + el.getBoundingClientRect().top : 0))),
+  );
+  if (viewport) await page.setViewportSize({ width: viewport.width, height: Math.min(6000, Math.ceil(height) + 120) });
+  await page.waitForTimeout(300);
+  await screenshot(page, name);
+  if (viewport) await page.setViewportSize(viewport);
+}
+
 /** Collects uncaught page errors so a test can assert that none happened. */
 export function trackPageErrors(page: Page): string[] {
   const errors: string[] = [];

@@ -147,8 +147,18 @@ describe('members of the trip', () => {
     await page.click(byTestId('tab-loads'));
     await page.locator('[data-testid^="appliance-"]').filter({ hasText: 'Laptop' }).first().click();
     await page.waitForSelector(byTestId('routine-strip'));
-    // Crew may edit loads but not the route.
-    for (const hour of [8, 9, 10, 11, 12, 13]) await page.click(byTestId(`routine-strip-cell-${hour}`));
+    // A drag across the morning cells paints them all; a tap adds one more.
+    const from = await page.locator(byTestId('routine-strip-cell-8')).boundingBox();
+    const to = await page.locator(byTestId('routine-strip-cell-11')).boundingBox();
+    if (!from || !to) throw new Error('routine cells not laid out');
+    await page.mouse.move(from.x + from.width / 2, from.y + from.height / 2);
+    await page.mouse.down();
+    await page.mouse.move(to.x + to.width / 2, to.y + to.height / 2, { steps: 8 });
+    await page.mouse.up();
+    for (const hour of [8, 9, 10, 11]) expect(await page.getAttribute(byTestId(`routine-strip-cell-${hour}`), 'aria-checked')).toBe('true');
+    await page.click(byTestId('routine-strip-cell-13'));
+    expect(await page.getAttribute(byTestId('routine-strip-cell-13'), 'aria-checked')).toBe('true');
+    expect(await page.getAttribute(byTestId('routine-strip-cell-12'), 'aria-checked')).toBe('false');
     await expect.poll(() => page.textContent(byTestId('routine-preview'))).toContain('Lowest charge with this routine');
     await screenshot(page, 'crew-routine-phone');
     await page.click(byTestId('schedule-save'));
@@ -156,6 +166,7 @@ describe('members of the trip', () => {
 
     await page.click(byTestId('tab-budget'));
     await expect.poll(() => lowestCharge(page), { timeout: 15_000 }).toBeLessThan(before);
+    // Crew may edit loads but not the route.
     await page.click(byTestId('tab-route'));
     await page.waitForSelector(byTestId('route-read-only'));
     expect(await page.locator(byTestId('stop-add')).count()).toBe(0);
@@ -185,5 +196,40 @@ describe('members of the trip', () => {
     const status = await page.evaluate(async (id) => (await fetch(`/api/trips/${id}`, { method: 'PATCH', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ version: 1, name: 'Hijack' }) })).status, tripId);
     expect(status).toBe(403);
     await page.close();
+  });
+});
+
+describe('two people editing at once', () => {
+  it('when a save meets a newer version, then the second editor is told and can keep theirs', async () => {
+    const context = await browser.newContext({ viewport: VIEWPORTS.desktop });
+    const first = await context.newPage();
+    await signIn(first, server.url, LEADER.email, LEADER.password);
+    await openTrip(first, TRIP);
+    const second = await context.newPage();
+    await second.goto(first.url());
+    for (const page of [first, second]) {
+      await page.waitForSelector(byTestId('trip-frame'));
+      await page.click(byTestId('tab-loads'));
+      await page.locator('[data-testid^="appliance-"]').filter({ hasText: 'TV' }).first().click();
+      await page.waitForSelector(byTestId('appliance-form'));
+    }
+    await first.fill(byTestId('appliance-runningW'), '120');
+    await first.click(byTestId('appliance-save'));
+    await expect.poll(() => first.textContent(byTestId('toast'))).toContain('saved');
+
+    await second.fill(byTestId('appliance-runningW'), '80');
+    await second.click(byTestId('appliance-save'));
+    await second.waitForSelector(byTestId('appliance-conflict'));
+    expect(await second.textContent(byTestId('appliance-conflict'))).toContain('changed by someone else since you opened it');
+    // What they typed is still in the form while they decide.
+    expect(await second.inputValue(byTestId('appliance-runningW'))).toBe('80');
+    await screenshot(second, 'conflict-desktop');
+    await second.click(byTestId('appliance-conflict-keep-mine'));
+    await second.waitForSelector(byTestId('appliance-conflict'), { state: 'detached' });
+    await first.reload();
+    await first.waitForSelector(byTestId('trip-frame'));
+    await first.click(byTestId('tab-loads'));
+    await expect.poll(() => first.textContent(byTestId('circuit-ac'))).toContain('80 W');
+    await context.close();
   });
 });

@@ -1,9 +1,10 @@
 // Every screen at phone and laptop widths: a screenshot for review and an axe scan with no serious or
 // critical violations.
+import fs from 'node:fs';
 import type { Browser, Page } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_ACCOUNT } from '@/db/seed';
-import { byTestId, launchBrowser, openTrip, screenshot, seriousA11yViolations, signIn, startServer, trackPageErrors, VIEWPORTS, type RunningServer } from './harness';
+import { byTestId, launchBrowser, openTrip, screenshotTall, seriousA11yViolations, signIn, startServer, trackPageErrors, VIEWPORTS, type RunningServer } from './harness';
 
 let server: RunningServer;
 let browser: Browser;
@@ -45,7 +46,7 @@ const CHECKS: Check[] = [
 describe.each(Object.entries(VIEWPORTS))('at %s width', (size, viewport) => {
   it('when each screen is opened, then it renders without errors and axe finds nothing serious', async () => {
     // axe needs a page from an explicit context.
-    const context = await browser.newContext({ viewport });
+    const context = await browser.newContext({ viewport, acceptDownloads: true });
     const page = await context.newPage();
     const errors = trackPageErrors(page);
     await signIn(page, server.url, DEMO_ACCOUNT.email, DEMO_ACCOUNT.password);
@@ -56,11 +57,30 @@ describe.each(Object.entries(VIEWPORTS))('at %s width', (size, viewport) => {
     for (const check of CHECKS) {
       await check.open(page, tripPath);
       await page.waitForTimeout(200);
-      await screenshot(page, `screen-${check.name}-${size}`);
+      await screenshotTall(page, `screen-${check.name}-${size}`);
       for (const v of await seriousA11yViolations(page)) violations.push(`${check.name}: ${v}`);
     }
     expect(violations).toEqual([]);
     expect(errors).toEqual([]);
+
+    // Pointing at the chart shows that hour's figures; the hour buttons do the same from a keyboard.
+    await CHECKS[3]?.open(page, tripPath);
+    const canvas = page.locator(`${byTestId('soc-chart')} canvas`).first();
+    const box = await canvas.boundingBox();
+    if (!box) throw new Error('no chart canvas');
+    await page.mouse.move(box.x + box.width * 0.4, box.y + box.height / 2);
+    await expect.poll(() => page.textContent(byTestId('soc-readout'))).toMatch(/charge \d+ %/);
+    await page.click(byTestId('soc-next-hour'));
+    await expect.poll(() => page.textContent(byTestId('soc-readout'))).toMatch(/charge \d+ %/);
+
+    // The hourly ledger downloads as CSV with a header row.
+    await page.click(byTestId('tab-ledger'));
+    await page.click(byTestId('ledger-short-short'));
+    const [download] = await Promise.all([page.waitForEvent('download'), page.click(byTestId('ledger-csv'))]);
+    const file = await download.path();
+    const csv = fs.readFileSync(file, 'utf8');
+    expect(csv.split('\r\n')[0]).toContain('state of charge %');
+    expect(csv.split('\r\n').length).toBeGreaterThan(2);
     await context.close();
   });
 });
