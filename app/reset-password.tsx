@@ -20,7 +20,7 @@ export default function ResetPasswordScreen() {
       title="Choose a new password"
       subtitle="Reset links work once, for one hour."
       footer={
-        <Link href="/sign-in" testID="reset-to-sign-in" accessibilityLabel="Go to sign in">
+        <Link href="/sign-in" replace testID="reset-to-sign-in" accessibilityLabel="Go to sign in">
           <Text variant="label" color="pine">
             Go to sign in
           </Text>

@@ -10,7 +10,7 @@ export default function ForgotPasswordScreen() {
       title="Forgot your password?"
       subtitle="We will e-mail you a link to choose a new one."
       footer={
-        <Link href="/sign-in" testID="forgot-back" accessibilityLabel="Back to sign in">
+        <Link href="/sign-in" dismissTo testID="forgot-back" accessibilityLabel="Back to sign in">
           <Text variant="label" color="pine">
             Back to sign in
           </Text>

@@ -112,7 +112,7 @@ export function InviteAcceptScreen({ kind, token }: { kind: InviteKind; token: s
       title={kind === 'trip' ? 'Trip invite' : 'Club invite'}
       subtitle="Trailtally plans whether a rig's stored energy lasts the whole trip."
       footer={
-        <Link href="/" testID="invite-home" accessibilityLabel="Go to Trailtally's start page">
+        <Link href="/" replace testID="invite-home" accessibilityLabel="Go to Trailtally's start page">
           <Text variant="label" color="pine">
             Go to Trailtally
           </Text>

@@ -81,7 +81,7 @@ export function OutboxScreen() {
   return (
     <ScrollView testID="outbox-screen" style={styles.scroll} contentContainerStyle={styles.content}>
       <View style={styles.inner}>
-        <Link href="/" testID="outbox-home" accessibilityLabel="Back to Trailtally" style={styles.back}>
+        <Link href="/" replace testID="outbox-home" accessibilityLabel="Back to Trailtally" style={styles.back}>
           <Text variant="label" color="pine">
             ‹ Trailtally
           </Text>

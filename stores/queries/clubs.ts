@@ -68,8 +68,8 @@ export function useUnshareTripMutation(clubId: string) {
 export function useCopyOntoRigMutation() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: ({ tripId, rigId }: { tripId: string; rigId: string }) =>
-      apiFetch<TripDetail>(`/api/trips/${encodeURIComponent(tripId)}/copy`, { method: 'POST', json: { rigId } }),
+    mutationFn: ({ tripId, ...body }: { tripId: string; rigId: string; name?: string }) =>
+      apiFetch<TripDetail>(`/api/trips/${encodeURIComponent(tripId)}/copy`, { method: 'POST', json: body }),
     onSuccess: (detail) => {
       queryClient.setQueryData(tripKeys.detail(detail.trip.id), detail);
       return Promise.all([queryClient.invalidateQueries({ queryKey: tripKeys.list() }), queryClient.invalidateQueries({ queryKey: clubKeys.root })]);
