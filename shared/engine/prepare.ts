@@ -7,8 +7,7 @@ import type { DayType } from '../schemas/common';
 import type { Stop } from '../schemas/trip';
 import { ineichenPerez, kastenYoungAirMass, pressureRatio } from './clear-sky';
 import { extraterrestrialW } from './extraterrestrial';
-// Energy per step follows onShare and applianceStep in loads.ts, inlined here to keep the loop free of allocations.
-import { thermostatDuty as thermostatDutyOf } from './loads';
+// Energy per step follows onShare, thermostatDuty and applianceStep in loads.ts, written out in fillShares and fillLoads.
 import type { LocalStep } from './routines';
 import { windowsShare } from './routines';
 import { resolveExposure, type ResolvedExposure } from './site-exposure';
@@ -24,7 +23,6 @@ const HOUR_MS = HOUR_MS_IMPORTED;
 const localDayNumber = dayNumberOf;
 const localMinuteOfDay = minuteOfDayOf;
 const ambientC = ambientCurve;
-const thermostatDuty = thermostatDutyOf;
 
 export const SAMPLES = 3; // start, middle, end of each step
 export const QUARTERS = 4; // generator sub-steps
@@ -280,7 +278,14 @@ function fillShares(p: Prepared, a: Appliance, slots: () => { time: Slots; typed
   }
   if (sched.kind === 'thermostat') {
     const amb = p.ambientC;
-    for (let i = 0; i < n; i++) share[i] = (share[i] ?? 0) * thermostatDuty(sched.mode, amb[i] ?? 15, sched.setPointC, sched.fullDutyDeltaC);
+    const cooling = sched.mode === 'cooling';
+    const { setPointC, fullDutyDeltaC } = sched;
+    for (let i = 0; i < n; i++) {
+      const a = amb[i] ?? 15;
+      // thermostatDuty in loads.ts, written out so the mode is decided once per appliance
+      const excess = cooling ? a - setPointC : setPointC - a;
+      share[i] = (share[i] ?? 0) * Math.min(1, Math.max(0, excess / fullDutyDeltaC));
+    }
   }
 }
 

@@ -86,7 +86,7 @@ function daySheets(p: Prepared, l: LedgerColumns): DaySheet[] {
 
 function sum(a: Float64Array): number {
   let s = 0;
-  for (const v of a) s += v;
+  for (let i = 0; i < a.length; i++) s += a[i] ?? 0;
   return s;
 }
 
