@@ -6,11 +6,15 @@ import { Card } from '@/components/ui/card';
 import { Text } from '@/components/ui/text';
 import type { OutboxMessage } from '@/stores/queries/outbox';
 
-/** A link to this app opens in place (keeping the tab); any other opens as an ordinary web link. */
+/**
+ * A link to one of the app's pages opens in place; anything else (the API's own links, such as the
+ * password-reset step that redirects back to the app, or another site) is an ordinary web link.
+ */
 function target(url: string): Href {
   if (typeof window === 'undefined') return url as Href;
   const origin = window.location.origin;
-  return (url.startsWith(`${origin}/`) ? url.slice(origin.length) : url) as Href;
+  const path = url.startsWith(`${origin}/`) ? url.slice(origin.length) : null;
+  return (path && !path.startsWith('/api/') ? path : url) as Href;
 }
 
 export function MessageView({ message, onClose }: { message: OutboxMessage; onClose: () => void }) {

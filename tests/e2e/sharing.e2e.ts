@@ -214,3 +214,47 @@ describe.each(Object.entries(VIEWPORTS))('clubs at %s width', (name, viewport) =
     await page.context().close();
   });
 });
+
+describe('account e-mails', () => {
+  it('when someone forgets their password, then the Outbox link lets them choose a new one and sign in with it', async () => {
+    const page = await freshPage(VIEWPORTS.phone);
+    const errors = trackPageErrors(page);
+    const email = `fenella-${Date.now()}@example.test`;
+    await page.goto(server.url);
+    await page.click(byTestId('go-to-sign-up'));
+    await page.fill(byTestId('sign-up-name'), 'Fenella Ross');
+    await page.fill(byTestId('sign-up-email'), email);
+    await page.fill(byTestId('sign-up-password'), 'first-password-1');
+    await page.click(byTestId('sign-up-submit'));
+    await page.waitForSelector(byTestId('trips-screen'));
+    await page.context().clearCookies();
+
+    await page.goto(`${server.url}/forgot-password`);
+    await page.fill(byTestId('forgot-email'), email);
+    await page.click(byTestId('forgot-submit'));
+    await page.waitForSelector(byTestId('forgot-sent'));
+
+    await page.goto(`${server.url}/outbox`);
+    await page.locator('[data-testid^="outbox-message-"]').filter({ hasText: email }).filter({ hasText: 'password' }).first().click();
+    await page.click(byTestId('outbox-link-0'));
+    await page.waitForSelector(byTestId('reset-password'));
+    await page.fill(byTestId('reset-password'), 'second-password-2');
+    await page.fill(byTestId('reset-repeat'), 'second-password-3');
+    await page.click(byTestId('reset-submit'));
+    await page.waitForSelector('text=The two passwords differ.');
+    await page.fill(byTestId('reset-repeat'), 'second-password-2');
+    await page.click(byTestId('reset-submit'));
+    await page.waitForSelector(byTestId('reset-done'));
+
+    await page.click(byTestId('reset-to-sign-in'));
+    await page.fill(byTestId('sign-in-email'), email);
+    await page.fill(byTestId('sign-in-password'), 'first-password-1');
+    await page.click(byTestId('sign-in-submit'));
+    await expect.poll(() => page.textContent(byTestId('sign-in-error'))).toMatch(/do not match/);
+    await page.fill(byTestId('sign-in-password'), 'second-password-2');
+    await page.click(byTestId('sign-in-submit'));
+    await page.waitForSelector(byTestId('trips-screen'));
+    expect(errors).toEqual([]);
+    await page.context().close();
+  });
+});
