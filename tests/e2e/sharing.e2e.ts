@@ -167,7 +167,7 @@ describe('sharing a trip by e-mail', () => {
 });
 
 describe.each(Object.entries(VIEWPORTS))('clubs at %s width', (name, viewport) => {
-  it('when the organiser creates a club and pastes addresses with a bad one, then the good ones are sent and the bad one is reported by line', async () => {
+  it('when the organiser creates a club and invites households with one bad address (pasted on a phone, a CSV file on a laptop), then the good ones are sent and the bad one is reported by line', async () => {
     const page = await freshPage(viewport);
     const errors = trackPageErrors(page);
     await signIn(page, server.url, DEMO_ACCOUNT.email, DEMO_ACCOUNT.password);
@@ -183,13 +183,23 @@ describe.each(Object.entries(VIEWPORTS))('clubs at %s width', (name, viewport) =
     await page.click(byTestId('create-club-submit'));
     await page.waitForSelector(byTestId('club-invite-form'));
 
-    await page.fill(byTestId('club-invite-addresses'), `Kirsty Bell <kirsty-${name}@example.test>\nangus-${name}@example.test, not an address`);
+    if (name === 'phone') {
+      await page.fill(byTestId('club-invite-addresses'), `Kirsty Bell <kirsty-${name}@example.test>\nangus-${name}@example.test, not an address`);
+    } else {
+      // On a laptop the organiser picks the club's CSV export (name,email per row) instead of pasting.
+      const csv = `name,email\nKirsty Bell,kirsty-${name}@example.test\nAngus Reid,angus-${name}@example.test\nNo Address,not an address\n`;
+      const chooser = page.waitForEvent('filechooser');
+      await page.click(byTestId('club-invite-csv'));
+      await (await chooser).setFiles({ name: 'households.csv', mimeType: 'text/csv', buffer: Buffer.from(csv) });
+      await page.waitForSelector(byTestId('club-invite-csv-chosen'));
+    }
     await page.click(byTestId('club-invite-submit'));
     await page.waitForSelector(byTestId('club-invite-report'));
     expect(await page.textContent(byTestId('club-invite-sent'))).toMatch(/^2 invites sent/);
-    expect(await page.textContent(byTestId('club-invite-rejected-0'))).toMatch(/Line 2: “not an address”/);
+    // Pasted, the bad address is on line 2; in the CSV it is the fourth line (after the header).
+    expect(await page.textContent(byTestId('club-invite-rejected-0'))).toMatch(name === 'phone' ? /Line 2: “not an address”/ : /Line 4: .*not an address/);
     // Only the refused row stays in the box, ready to fix.
-    expect(await page.inputValue(byTestId('club-invite-addresses'))).toBe('not an address');
+    expect(await page.inputValue(byTestId('club-invite-addresses'))).toContain('not an address');
     await expect.poll(() => page.textContent(byTestId('club-pending-invites'))).toContain(`kirsty-${name}@example.test`);
 
     // Share the trip from its People tab; the club page then lists it with its copy count.
