@@ -46,7 +46,7 @@ export function ToastHost() {
 const styles = StyleSheet.create({
   host: { position: 'absolute', left: space.lg, right: space.lg, bottom: 88, alignItems: 'center', gap: space.sm, zIndex: 10 },
   // On a wide screen the corner keeps toasts off the chart and the flags.
-  hostWide: { left: undefined, right: space.xl, bottom: space.xl, width: 420, alignItems: 'stretch' },
+  hostWide: { left: 'auto', right: space.xl, bottom: space.xl, width: 420, alignItems: 'stretch' },
   toast: { flexDirection: 'row', alignItems: 'center', gap: space.sm, maxWidth: 520, width: '100%', backgroundColor: colors.ink, borderRadius: radii.md, paddingLeft: space.lg, paddingRight: space.xs, paddingVertical: space.xs, ...shadow.card },
   danger: { backgroundColor: colors.emberInk },
   message: { flex: 1, paddingVertical: space.sm },

@@ -120,14 +120,14 @@ export function LoadsScreen({ detail }: { detail: TripDetail }) {
           <Button testID="appliance-editor-close" tone="quiet" label="Close" onPress={() => setEditing(null)} />
         </View>
         <ApplianceForm
-          key={current ? current.id : editing.kind === 'new' ? editing.key : 'x'}
+          key={current ? `form-${current.id}` : editing.kind === 'new' ? `new-${editing.key}` : 'form-none'}
           tripId={detail.trip.id}
           record={current ?? null}
           initial={current ? (({ id: _id, ...rest }) => rest)(current.appliance) : editing.kind === 'new' ? editing.fields : BY_HAND}
           canEdit={canEdit}
           onSaved={(saved) => setEditing({ kind: 'existing', id: saved.id })}
         />
-        {current ? <ScheduleEditor key={current.id} detail={detail} record={current} canEdit={canEdit} /> : null}
+        {current ? <ScheduleEditor key={`schedule-${current.id}`} detail={detail} record={current} canEdit={canEdit} /> : null}
         {current && canEdit ? (
           <Button
             testID="appliance-delete"

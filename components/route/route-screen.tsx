@@ -151,7 +151,7 @@ export function RouteScreen({ detail }: { detail: TripDetail }) {
         {current ? <SunPath stop={current.stop} testID="sun-path" /> : null}
         {canEdit ? (
           <StopForm
-            key={current ? current.id : 'new'}
+            key={current ? `form-${current.id}` : 'form-new'}
             tripId={detail.trip.id}
             record={current ?? null}
             fallbackZone={detail.trip.timeZone}

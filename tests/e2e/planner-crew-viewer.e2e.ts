@@ -148,6 +148,7 @@ describe('members of the trip', () => {
     await page.locator('[data-testid^="appliance-"]').filter({ hasText: 'Laptop' }).first().click();
     await page.waitForSelector(byTestId('routine-strip'));
     // A drag across the morning cells paints them all; a tap adds one more.
+    await page.locator(byTestId('routine-strip-cell-11')).scrollIntoViewIfNeeded();
     const from = await page.locator(byTestId('routine-strip-cell-8')).boundingBox();
     const to = await page.locator(byTestId('routine-strip-cell-11')).boundingBox();
     if (!from || !to) throw new Error('routine cells not laid out');

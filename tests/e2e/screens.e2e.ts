@@ -66,6 +66,7 @@ describe.each(Object.entries(VIEWPORTS))('at %s width', (size, viewport) => {
     // Pointing at the chart shows that hour's figures; the hour buttons do the same from a keyboard.
     await CHECKS[3]?.open(page, tripPath);
     const canvas = page.locator(`${byTestId('soc-chart')} canvas`).first();
+    await canvas.scrollIntoViewIfNeeded();
     const box = await canvas.boundingBox();
     if (!box) throw new Error('no chart canvas');
     await page.mouse.move(box.x + box.width * 0.4, box.y + box.height / 2);

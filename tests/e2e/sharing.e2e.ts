@@ -225,6 +225,80 @@ describe.each(Object.entries(VIEWPORTS))('clubs at %s width', (name, viewport) =
   });
 });
 
+describe('copy onto my rig', () => {
+  it('when a club member copies a shared trip onto their saved rig at 360 px, then it opens with its budget and hears when the club plan moves its stops', async () => {
+    const page = await freshPage(VIEWPORTS.phone);
+    const errors = trackPageErrors(page);
+    await signIn(page, server.url, DEMO_ACCOUNT.email, DEMO_ACCOUNT.password);
+    await page.click(byTestId('nav-clubs'));
+    await page.waitForSelector(byTestId('clubs-screen'));
+    if (await page.locator(byTestId('clubs-new')).count()) await page.click(byTestId('clubs-new'));
+    await page.fill(byTestId('create-club-name'), 'Firth Caravan Club');
+    await page.click(byTestId('create-club-submit'));
+    await page.waitForSelector(byTestId('club-invite-form'));
+    const clubPath = new URL(page.url()).pathname;
+
+    await page.goto(server.url);
+    const tripId = await openTrip(page, TRIP);
+    await page.click(byTestId('tab-people'));
+    await page.locator(byTestId('share-club-pick')).getByText('Firth Caravan Club').click();
+    await page.click(byTestId('share-club-submit'));
+    await page.locator(byTestId('toast')).filter({ hasText: 'Shared to Firth Caravan Club' }).waitFor();
+
+    // Without a saved rig the copy form says how to get one instead of failing.
+    await page.goto(`${server.url}${clubPath}`);
+    await page.click(byTestId(`club-trip-${tripId}-copy`));
+    await page.waitForSelector(byTestId(`copy-${tripId}-no-rigs`));
+    expect(await page.textContent(byTestId(`copy-${tripId}-no-rigs`))).toContain('Rig tab');
+
+    await page.goto(`${server.url}/trips/${tripId}/rig`);
+    await page.fill(byTestId('rig-save-name'), 'Our caravan');
+    await page.click(byTestId('rig-save-to-mine'));
+    await page.locator(byTestId('toast')).filter({ hasText: 'Saved “Our caravan”' }).waitFor();
+
+    await page.goto(`${server.url}${clubPath}`);
+    await page.click(byTestId(`club-trip-${tripId}-copy`));
+    await page.locator(byTestId(`copy-${tripId}-rig`)).getByText('Our caravan').click();
+    await page.click(byTestId(`copy-${tripId}-submit`));
+    await page.waitForSelector(byTestId('based-on-banner'));
+    const copyId = /\/trips\/([^/]+)/.exec(new URL(page.url()).pathname)?.[1];
+    expect(copyId).toBeTruthy();
+    expect(copyId).not.toBe(tripId);
+    expect(await page.textContent(byTestId('trip-frame'))).toContain('Highland loop (Our caravan)');
+    expect(await page.textContent(byTestId('based-on-banner'))).toContain("Based on the club's plan Highland loop");
+    await page.waitForSelector(byTestId('budget-screen'));
+    expect(await page.locator(byTestId('based-on-changed')).count()).toBe(0);
+
+    // The organiser renames the first stop of the club's plan (setup through the API; the Route tab is tested elsewhere).
+    const status = await page.evaluate(async (id) => {
+      const detail = (await (await fetch(`/api/trips/${id}`)).json()) as { stops: { id: string; version: number; notes: string; stop: { name: string } }[] };
+      const first = detail.stops[0];
+      if (!first) return 0;
+      const body = { version: first.version, notes: first.notes, stop: { ...first.stop, name: `${first.stop.name} (new pitch)` } };
+      return (await fetch(`/api/trips/${id}/stops/${first.id}`, { method: 'PATCH', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify(body) })).status;
+    }, tripId);
+    expect(status).toBe(200);
+
+    await page.reload();
+    await page.waitForSelector(byTestId('based-on-changed'));
+    await screenshot(page, 'sharing-copy-budget-phone');
+    await expectAccessible(page, 'copy budget (phone)');
+    await page.click(byTestId('tab-route'));
+    await page.click(byTestId('based-on-seen'));
+    await page.waitForSelector(byTestId('based-on-changed'), { state: 'detached' });
+    await page.reload();
+    await page.waitForSelector(byTestId('based-on-banner'));
+    expect(await page.locator(byTestId('based-on-changed')).count()).toBe(0);
+
+    await page.goto(`${server.url}${clubPath}`);
+    await expect.poll(() => page.textContent(byTestId(`club-trip-${tripId}-copies`))).toBe('1 household has copied it');
+    await page.click(byTestId(`club-trip-${tripId}-my-copy`));
+    await page.waitForURL(`**/trips/${copyId ?? ''}`);
+    expect(errors).toEqual([]);
+    await page.context().close();
+  });
+});
+
 describe('account e-mails', () => {
   it('when someone forgets their password, then the Outbox link lets them choose a new one and sign in with it', async () => {
     const page = await freshPage(VIEWPORTS.phone);
