@@ -42,6 +42,7 @@ export function ConfirmAction({ label, question, confirmLabel, onConfirm, busy, 
 }
 
 const styles = StyleSheet.create({
-  box: { gap: space.sm, padding: space.md, borderRadius: radii.md, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.dune },
+  // The question takes a whole row of its own so it wraps instead of running off a phone's edge.
+  box: { width: '100%', gap: space.sm, padding: space.md, borderRadius: radii.md, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.dune },
   row: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
 });

@@ -58,6 +58,7 @@ export function MemberRow({ tripId, member, isMe, canManage }: Props) {
             tone="quiet"
             aria-expanded={open}
             onPress={() => setOpen((v) => !v)}
+            style={styles.toggle}
           />
         ) : null}
       </View>
@@ -105,6 +106,7 @@ const styles = StyleSheet.create({
   row: { paddingVertical: space.sm, borderBottomWidth: 1, borderBottomColor: colors.line, gap: space.sm },
   head: { flexDirection: 'row', alignItems: 'center', gap: space.sm, flexWrap: 'wrap' },
   text: { flex: 1, minWidth: 120 },
+  toggle: { paddingHorizontal: space.md },
   pill: { backgroundColor: colors.pineSoft, borderRadius: radii.pill, paddingHorizontal: space.md, paddingVertical: space.xs },
   panel: { gap: space.md, paddingBottom: space.sm },
   actions: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm, alignItems: 'flex-start' },
