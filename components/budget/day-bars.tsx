@@ -17,12 +17,16 @@ export function DayBars({ days }: { days: DaySheet[] }) {
         Each day: harvest and use
       </Text>
       <View style={styles.legend}>
-        <View style={[styles.key, { backgroundColor: colors.sunlit }]} />
-        <Text variant="caption">Solar</Text>
-        <View style={[styles.key, { backgroundColor: colors.lake }]} />
-        <Text variant="caption">Hookup, vehicle, generator</Text>
-        <View style={[styles.key, { backgroundColor: colors.mist }]} />
-        <Text variant="caption">Use</Text>
+        {[
+          { color: colors.sunlit, label: 'Solar' },
+          { color: colors.lake, label: 'Hookup, vehicle, generator' },
+          { color: colors.mist, label: 'Use' },
+        ].map((k) => (
+          <View key={k.label} style={styles.legendItem}>
+            <View style={[styles.key, { backgroundColor: k.color }]} />
+            <Text variant="caption">{k.label}</Text>
+          </View>
+        ))}
       </View>
       <View style={styles.row} role="list">
         {days.map((d) => {
@@ -52,7 +56,8 @@ export function DayBars({ days }: { days: DaySheet[] }) {
 }
 
 const styles = StyleSheet.create({
-  legend: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.xs, columnGap: space.sm },
+  legend: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', rowGap: space.xs, columnGap: space.md },
+  legendItem: { flexDirection: 'row', alignItems: 'center', gap: space.xs },
   key: { width: 12, height: 12, borderRadius: 3 },
   row: { flexDirection: 'row', alignItems: 'flex-end', gap: space.xs, justifyContent: 'space-between' },
   day: { flex: 1, alignItems: 'center', gap: space.xs, minWidth: 0 },

@@ -29,7 +29,9 @@ export function SocChartCard({ result, stops }: Props) {
   const wide = useIsWide();
   const { width } = useWindowDimensions();
   const [selected, setSelected] = useState<number | null>(null);
-  const series = socSeries(result);
+  // About 70 px per day label; the chart is the window less the side navigation and the card's padding.
+  const chartWidth = wide ? Math.min(width - 240, 1320) - 560 : width - 80;
+  const series = socSeries(result, Math.floor(chartWidth / 70));
   const row = selected === null ? undefined : result.ledger[selected];
   const last = result.ledger.length - 1;
   const step = (by: number) => setSelected((s) => Math.max(0, Math.min(last, (s ?? (by > 0 ? -1 : last + 1)) + by)));

@@ -8,7 +8,8 @@ export type DayTick = { x: number; label: string };
 
 export type SocSeries = { points: SocPoint[]; stops: StopMark[]; dayTicks: DayTick[]; reservePct: number };
 
-export function socSeries(result: SimulationResult): SocSeries {
+/** `maxTicks` keeps day labels apart on a narrow chart (every second or third day is labelled). */
+export function socSeries(result: SimulationResult, maxTicks = 12): SocSeries {
   const band = result.band;
   const points = result.ledger.map((row, i) => ({
     x: i,
@@ -34,7 +35,8 @@ export function socSeries(result: SimulationResult): SocSeries {
       dayTicks.push({ x: i, label: t.isValid ? t.toFormat('ccc d') : date });
     }
   });
-  return { points, stops, dayTicks, reservePct: result.headline.reservePct };
+  const every = Math.max(1, Math.ceil(dayTicks.length / Math.max(1, maxTicks)));
+  return { points, stops, dayTicks: dayTicks.filter((_, i) => i % every === 0), reservePct: result.headline.reservePct };
 }
 
 /** Nearest ledger index for a horizontal position inside the plot area. */

@@ -68,6 +68,7 @@ export function LoadsScreen({ detail }: { detail: TripDetail }) {
   const wide = useIsWide();
   const canEdit = can(detail.trip.role, 'editLoads');
   const [editing, setEditing] = useState<Editing>(null);
+  const [confirmRemove, setConfirmRemove] = useState(false);
   const remove = useApplianceDeleteMutation(detail.trip.id);
   const current = editing?.kind === 'existing' ? detail.appliances.find((a) => a.id === editing.id) : undefined;
 
@@ -128,18 +129,26 @@ export function LoadsScreen({ detail }: { detail: TripDetail }) {
           onSaved={(saved) => setEditing({ kind: 'existing', id: saved.id })}
         />
         {current ? <ScheduleEditor key={`schedule-${current.id}`} detail={detail} record={current} canEdit={canEdit} /> : null}
-        {current && canEdit ? (
-          <Button
-            testID="appliance-delete"
-            tone="danger"
-            label="Remove appliance"
-            busy={remove.isPending}
-            onPress={async () => {
-              await remove.mutateAsync(current.id);
-              showToast(`${current.appliance.name} removed`);
-              setEditing(null);
-            }}
-          />
+        {current && canEdit && !confirmRemove ? <Button testID="appliance-delete" tone="quiet" label="Remove appliance…" onPress={() => setConfirmRemove(true)} /> : null}
+        {current && canEdit && confirmRemove ? (
+          <View style={styles.confirm}>
+            <Text variant="label" color="ember">
+              Remove {current.appliance.name} from this trip?
+            </Text>
+            <Button
+              testID="appliance-delete-confirm"
+              tone="danger"
+              label="Remove"
+              busy={remove.isPending}
+              onPress={async () => {
+                await remove.mutateAsync(current.id);
+                showToast(`${current.appliance.name} removed`);
+                setConfirmRemove(false);
+                setEditing(null);
+              }}
+            />
+            <Button testID="appliance-delete-cancel" tone="quiet" label="Keep it" onPress={() => setConfirmRemove(false)} />
+          </View>
         ) : null}
       </Card>
     );
@@ -158,4 +167,5 @@ const styles = StyleSheet.create({
   rowSelected: { borderColor: colors.pine, backgroundColor: colors.pineSoft },
   rowText: { flex: 1, gap: 2 },
   energy: { alignItems: 'flex-end' },
+  confirm: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.sm },
 });

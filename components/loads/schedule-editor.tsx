@@ -35,7 +35,12 @@ export function ScheduleEditor({ detail, record, canEdit }: Props) {
   const budget = useBudgetQuery(detail.trip.id);
   const [draft, setDraft] = useState<Schedule>(record.appliance.schedule);
   const [base, setBase] = useState({ id: record.id, version: record.version, schedule: record.appliance.schedule });
-  const [strip, setStrip] = useState<StripKey>('all');
+  // Open on the first day type that has windows, so a camp-days-only routine is not shown as empty.
+  const [strip, setStrip] = useState<StripKey>(() => {
+    const s = record.appliance.schedule;
+    const ws = s.kind === 'routine' ? s.windows : s.kind === 'thermostat' ? (s.activeWindows ?? []) : [];
+    return STRIPS.find((o) => ws.some((w) => stripOf(w.days) === o.value))?.value ?? 'all';
+  });
   const [conflict, setConflict] = useState<ApplianceRecord | null>(null);
   const dirty = JSON.stringify(draft) !== JSON.stringify(base.schedule);
   // A newer record from the server replaces the draft only while nothing is being edited; otherwise the
@@ -115,7 +120,16 @@ export function ScheduleEditor({ detail, record, canEdit }: Props) {
       ) : null}
       {draft.kind !== 'always' ? (
         <>
-          <ChoiceChips testID="routine-strip-kind" label="Day type" value={strip} options={STRIPS} onChange={setStrip} />
+          <ChoiceChips
+            testID="routine-strip-kind"
+            label="Day type"
+            value={strip}
+            options={STRIPS.map((o) => {
+              const n = windows.filter((w) => stripOf(w.days) === o.value).length;
+              return { value: o.value, label: n > 0 ? `${o.label} (${n})` : o.label };
+            })}
+            onChange={setStrip}
+          />
           <RoutineStrip testID="routine-strip" windows={windows} strip={strip} disabled={!canEdit} onChange={setWindows} />
           {stripWindows.map(({ w, i }) => (
             <View key={`${i}-${w.startHour}`} style={styles.window}>

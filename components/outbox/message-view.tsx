@@ -5,16 +5,10 @@ import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { Text } from '@/components/ui/text';
 import type { OutboxMessage } from '@/stores/queries/outbox';
+import { linkTarget } from './link-target';
 
-/**
- * A link to one of the app's pages opens in place; anything else (the API's own links, such as the
- * password-reset step that redirects back to the app, or another site) is an ordinary web link.
- */
 function target(url: string): Href {
-  if (typeof window === 'undefined') return url as Href;
-  const origin = window.location.origin;
-  const path = url.startsWith(`${origin}/`) ? url.slice(origin.length) : null;
-  return (path && !path.startsWith('/api/') ? path : url) as Href;
+  return (typeof window === 'undefined' ? url : linkTarget(url, window.location.origin)) as Href;
 }
 
 export function MessageView({ message, onClose }: { message: OutboxMessage; onClose: () => void }) {

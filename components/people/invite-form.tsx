@@ -9,11 +9,12 @@ import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { ChoiceChips } from '@/components/ui/choice-chips';
 import { TextField } from '@/components/ui/text-field';
-import { ROLE_RANK, type Role } from '@/shared/schemas/roles';
-import { inviteRoleSchema, type InviteRole } from '@/shared/schemas/sharing';
+import type { Role } from '@/shared/schemas/roles';
+import { inviteRoleSchema } from '@/shared/schemas/sharing';
 import { ApiError } from '@/stores/queries/api-client';
 import { useInviteCreateMutation } from '@/stores/queries/members';
 import { showToast } from '@/stores/toast-store';
+import { grantableRoles } from './grantable-roles';
 
 // The form keeps the note as typed ('' when empty); the request leaves it out then.
 const inviteFormSchema = z.object({
@@ -23,10 +24,6 @@ const inviteFormSchema = z.object({
 });
 type InviteFormValues = z.infer<typeof inviteFormSchema>;
 
-/** Nobody grants a role at or above their own, except the owner who may add planners. */
-export function grantableRoles(myRole: Role): InviteRole[] {
-  return inviteRoleSchema.options.filter((role) => ROLE_RANK[role] < ROLE_RANK[myRole]);
-}
 
 const FIELDS = ['email', 'role', 'message'] as const;
 

@@ -163,7 +163,7 @@ export function RouteScreen({ detail }: { detail: TripDetail }) {
         {current && canEdit ? (
           <Button
             testID="stop-delete"
-            tone="danger"
+            tone="quiet"
             label="Remove stop"
             busy={remove.isPending}
             onPress={async () => {
