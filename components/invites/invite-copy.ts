@@ -10,7 +10,7 @@ export const STATUS_COPY: Record<Exclude<Status, 'valid'>, { title: string; body
   },
   used: {
     title: 'This invite has already been used',
-    body: 'Each link works once. If you joined with it, sign in and you will find it in your list; otherwise ask for a new invite.',
+    body: 'Each link works once. If you already joined with it, it is in your lists in Trailtally; otherwise ask for a new invite.',
   },
   revoked: {
     title: 'This invite was withdrawn',
