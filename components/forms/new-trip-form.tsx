@@ -70,7 +70,7 @@ export function NewTripForm({ onCreated }: { onCreated: (detail: TripDetail) => 
   ];
   const text = (name: 'name' | 'startDate' | 'endDate' | 'timeZone', label: string, hint?: string) => (
     <Controller control={control} name={name} render={({ field, fieldState }) => (
-      <View style={styles.cell}>
+      <View style={name === 'startDate' || name === 'endDate' ? styles.cell : null}>
         <TextField testID={`new-trip-${name}`} label={label} hint={hint} value={field.value} onChangeText={field.onChange} onBlur={field.onBlur} error={fieldState.error?.message} onSubmitEditing={submit} />
       </View>
     )} />

@@ -22,6 +22,7 @@ type Props = { tripId: string; record: StopRecord | null; fallbackZone: string; 
 type NumName = 'lat' | 'lon' | 'amps' | 'volts' | 'generatorStart' | 'generatorEnd' | 'low' | 'high' | 'canopyPct';
 
 function Num({ control, name, label, unit, testID }: { control: Control<StopFormValues>; name: NumName; label: string; unit?: string; testID: string }) {
+  // Numbers always sit in a row of two.
   return (
     <Controller
       control={control}
@@ -35,13 +36,13 @@ function Num({ control, name, label, unit, testID }: { control: Control<StopForm
   );
 }
 
-function Txt({ control, name, label, hint, testID }: { control: Control<StopFormValues>; name: 'name' | 'timeZone' | 'arrive' | 'depart' | 'horizon' | 'notes'; label: string; hint?: string; testID: string }) {
+function Txt({ control, name, label, hint, testID, inRow = false }: { control: Control<StopFormValues>; name: 'name' | 'timeZone' | 'arrive' | 'depart' | 'horizon' | 'notes'; label: string; hint?: string; testID: string; inRow?: boolean }) {
   return (
     <Controller
       control={control}
       name={name}
       render={({ field, fieldState }) => (
-        <View style={styles.cell}>
+        <View style={inRow ? styles.cell : null}>
           <TextField testID={testID} label={label} hint={hint} value={field.value} onChangeText={field.onChange} onBlur={field.onBlur} error={fieldState.error?.message} />
         </View>
       )}
@@ -113,12 +114,12 @@ export function StopForm({ tripId, record, fallbackZone, onDone }: Props) {
         <Num control={control} name="lon" label="Longitude" unit="°" testID="stop-lon" />
       </View>
       <View style={styles.zoneRow}>
-        <Txt control={control} name="timeZone" label="Time zone" hint="an IANA name such as Europe/London" testID="stop-time-zone" />
+        <Txt control={control} name="timeZone" inRow label="Time zone" hint="an IANA name such as Europe/London" testID="stop-time-zone" />
         <Button testID="stop-zone-from-coordinates" tone="secondary" label="From coordinates" onPress={() => void zoneFromCoordinates()} />
       </View>
       <View style={styles.grid}>
-        <Txt control={control} name="arrive" label="Arrive (local)" hint="YYYY-MM-DD HH:MM" testID="stop-arrive" />
-        <Txt control={control} name="depart" label="Leave (local)" hint="YYYY-MM-DD HH:MM" testID="stop-depart" />
+        <Txt control={control} name="arrive" inRow label="Arrive (local)" hint="YYYY-MM-DD HH:MM" testID="stop-arrive" />
+        <Txt control={control} name="depart" inRow label="Leave (local)" hint="YYYY-MM-DD HH:MM" testID="stop-depart" />
       </View>
       <Controller control={control} name="exposureKind" render={({ field }) => (
         <ChoiceChips testID="stop-exposure-kind" label="Site exposure" value={field.value} onChange={field.onChange} options={[{ value: 'preset', label: 'A usual site' }, { value: 'custom', label: 'Custom horizon' }]} />
@@ -131,7 +132,7 @@ export function StopForm({ tripId, record, fallbackZone, onDone }: Props) {
         )} />
       ) : (
         <View style={styles.grid}>
-          <Txt control={control} name="horizon" label="Horizon angles (°)" hint="clockwise from north, e.g. 5, 10, 25, 30, 20, 10, 25, 35" testID="stop-horizon" />
+          <Txt control={control} name="horizon" inRow label="Horizon angles (°)" hint="clockwise from north, e.g. 5, 10, 25, 30, 20, 10, 25, 35" testID="stop-horizon" />
           <Num control={control} name="canopyPct" label="Light through the cover" unit="%" testID="stop-canopy" />
         </View>
       )}
