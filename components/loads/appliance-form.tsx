@@ -24,12 +24,27 @@ const fieldsOf = (r: ApplianceRecord): ApplianceFields => {
   return fields;
 };
 
+const LABELS: Partial<Record<keyof ApplianceFields, [string, string]>> = {
+  name: ['name', ''], circuit: ['circuit', ''], quantity: ['how many', ''], runningW: ['running', ' W'], standbyW: ['standby', ' W'], dutyCycle: ['duty cycle', ''], heatInputW: ['heat input', ' W'],
+};
+
+/** Their values for the fields where the two versions differ, e.g. "running 120 W". */
+function describeDifferences(mine: Partial<Record<keyof ApplianceFields, unknown>>, theirs: ApplianceFields): string[] {
+  return (Object.keys(LABELS) as (keyof ApplianceFields)[])
+    .filter((k) => JSON.stringify(mine[k]) !== JSON.stringify(theirs[k]))
+    .map((k) => {
+      const [label, unit] = LABELS[k] ?? [k, ''];
+      const value = k === 'dutyCycle' ? `${Math.round(theirs.dutyCycle * 100)} %` : `${String(theirs[k])}${unit}`;
+      return `${label} ${value}`;
+    });
+}
+
 /** An appliance's own figures (name, circuit, watts, duty cycle); its routine is edited beside it. */
 export function ApplianceForm({ tripId, record, initial, canEdit, onSaved }: Props) {
   const save = useApplianceSaveMutation(tripId);
   const [formError, setFormError] = useState<string>();
   const [conflict, setConflict] = useState<ApplianceRecord | null>(null);
-  const { control, handleSubmit, reset, formState } = useForm<z.input<typeof applianceFieldsSchema>, unknown, ApplianceFields>({ resolver: zodResolver(applianceFieldsSchema), defaultValues: initial });
+  const { control, handleSubmit, reset, formState, getValues } = useForm<z.input<typeof applianceFieldsSchema>, unknown, ApplianceFields>({ resolver: zodResolver(applianceFieldsSchema), defaultValues: initial });
   const circuit = useWatch({ control, name: 'circuit' });
   // The version this form was opened on: a save names it, so a change made meanwhile by someone else gets a 409.
   const baseVersion = useRef(record?.version);
@@ -119,6 +134,7 @@ export function ApplianceForm({ tripId, record, initial, canEdit, onSaved }: Pro
           testID="appliance-conflict"
           what="appliance"
           theirVersion={conflict.version}
+          theirs={describeDifferences(getValues(), fieldsOf(conflict))}
           busy={save.isPending}
           onKeepMine={() => void send(conflict.version)()}
           onTakeTheirs={() => {

@@ -224,6 +224,7 @@ describe('two people editing at once', () => {
     expect(await second.textContent(byTestId('appliance-conflict'))).toContain('changed by someone else since you opened it');
     // What they typed is still in the form while they decide.
     expect(await second.inputValue(byTestId('appliance-runningW'))).toBe('80');
+    expect(await second.textContent(byTestId('appliance-conflict-theirs'))).toContain('running 120 W');
     await screenshot(second, 'conflict-desktop');
     await second.click(byTestId('appliance-conflict-keep-mine'));
     await second.waitForSelector(byTestId('appliance-conflict'), { state: 'detached' });

@@ -132,7 +132,7 @@ describe('sharing a trip by e-mail', () => {
     await organiser.context().close();
   });
 
-  it('when someone signed in with another address opens an invite at 1440 px, then they are told to sign in with the invited one and nothing is joined', async () => {
+  it('when someone signed in with another address opens an invite at 1440 px, then they are told to sign in with the invited one, nothing is joined, and a revoked link says so', async () => {
     const organiser = await freshPage(VIEWPORTS.desktop);
     await signIn(organiser, server.url, DEMO_ACCOUNT.email, DEMO_ACCOUNT.password);
     await openPeople(organiser);
@@ -157,11 +157,23 @@ describe('sharing a trip by e-mail', () => {
     await other.click(byTestId('invite-sign-out'));
     await other.waitForSelector(byTestId('invite-auth'));
     expect(await other.inputValue(byTestId('sign-up-email'))).toBe(invited);
-    await other.context().close();
 
+    // Nothing was joined: the invite still waits, until the owner revokes it (after confirming).
     await organiser.reload();
     await organiser.waitForSelector(byTestId('pending-invites'));
-    expect(await organiser.textContent(byTestId('pending-invites'))).toContain(invited);
+    const row = organiser.locator('[data-testid^="invite-"]').filter({ hasText: invited }).first();
+    const inviteTestId = (await row.getAttribute('data-testid')) ?? '';
+    await organiser.click(byTestId(`${inviteTestId}-revoke`));
+    await organiser.click(byTestId(`${inviteTestId}-revoke-yes`));
+    await organiser.locator(byTestId('toast')).filter({ hasText: 'Invite revoked' }).waitFor();
+    await expect.poll(() => organiser.textContent(byTestId('invites-card'))).not.toContain(invited);
+
+    // The link now says it was withdrawn instead of offering to join.
+    await other.reload();
+    await other.waitForSelector(byTestId('invite-revoked'));
+    expect(await other.textContent(byTestId('invite-refused'))).toContain('withdrawn');
+    expect(await other.locator(byTestId('invite-auth')).count()).toBe(0);
+    await other.context().close();
     await organiser.context().close();
   });
 });
