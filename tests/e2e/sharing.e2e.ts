@@ -293,6 +293,8 @@ describe('copy onto my rig', () => {
 
     await page.reload();
     await page.waitForSelector(byTestId('based-on-changed'));
+    // Scan once the lazily loaded chart is in place, not while the page is still assembling.
+    await page.waitForSelector(`${byTestId('soc-chart')} canvas`);
     await screenshot(page, 'sharing-copy-budget-phone');
     await expectAccessible(page, 'copy budget (phone)');
     await page.click(byTestId('tab-route'));
