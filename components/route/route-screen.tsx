@@ -66,6 +66,7 @@ export function RouteScreen({ detail }: { detail: TripDetail }) {
   const units = useUnits();
   const canEdit = can(detail.trip.role, 'editTrip');
   const [editing, setEditing] = useState<Editing>(null);
+  const [confirmRemove, setConfirmRemove] = useState(false);
   const reorder = useStopsReorderMutation(detail.trip.id);
   const remove = useStopDeleteMutation(detail.trip.id);
   const current = editing?.kind === 'stop' ? detail.stops.find((s) => s.id === editing.id) : undefined;
@@ -160,18 +161,30 @@ export function RouteScreen({ detail }: { detail: TripDetail }) {
         ) : (
           <Button testID="stop-close" tone="quiet" label="Close" onPress={() => setEditing(null)} />
         )}
-        {current && canEdit ? (
-          <Button
-            testID="stop-delete"
-            tone="quiet"
-            label="Remove stop"
-            busy={remove.isPending}
-            onPress={async () => {
-              await remove.mutateAsync(current.id);
-              showToast(`${current.stop.name} removed`);
-              setEditing(null);
-            }}
-          />
+        {current && canEdit && !confirmRemove ? <Button testID="stop-delete" tone="quiet" label="Remove stop…" onPress={() => setConfirmRemove(true)} /> : null}
+        {current && canEdit && confirmRemove ? (
+          <View style={styles.actions}>
+            <Text variant="label" color="ember">
+              Remove {current.stop.name} and its drive from the route?
+            </Text>
+            <Button
+              testID="stop-delete-confirm"
+              tone="danger"
+              label="Remove"
+              busy={remove.isPending}
+              onPress={async () => {
+                try {
+                  await remove.mutateAsync(current.id);
+                  showToast(`${current.stop.name} removed`);
+                  setEditing(null);
+                } catch (error) {
+                  showToast(error instanceof ApiError ? error.message : 'The stop could not be removed.', { tone: 'danger' });
+                }
+                setConfirmRemove(false);
+              }}
+            />
+            <Button testID="stop-delete-cancel" tone="quiet" label="Keep it" onPress={() => setConfirmRemove(false)} />
+          </View>
         ) : null}
       </Card>
     );

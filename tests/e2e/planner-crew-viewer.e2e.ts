@@ -235,3 +235,33 @@ describe('two people editing at once', () => {
     await context.close();
   });
 });
+
+describe('the trips list', () => {
+  it('when a trip is duplicated and then deleted, then undo brings it back and a confirmed delete removes it', async () => {
+    const page = await browser.newPage({ viewport: VIEWPORTS.phone });
+    await signIn(page, server.url, LEADER.email, LEADER.password);
+    const original = page.locator('[data-testid^="trip-card-"]').filter({ hasText: TRIP });
+    const id = ((await original.first().getAttribute('data-testid')) ?? '').replace('trip-card-', '');
+    await page.click(byTestId(`trip-duplicate-${id}`));
+    await expect.poll(() => page.locator('[data-testid^="trip-open-"]').count()).toBe(2);
+    const ids = (await page.locator('[data-testid^="trip-card-"]').evaluateAll((els) => els.map((el) => el.getAttribute('data-testid') ?? ''))).map((t) => t.replace('trip-card-', ''));
+    const copyId = ids.find((other) => other !== id) ?? '';
+    expect(copyId).not.toBe('');
+
+    await page.click(byTestId(`trip-delete-${copyId}`));
+    await page.click(byTestId(`trip-delete-confirm-${copyId}`));
+    await expect.poll(() => page.locator(byTestId(`trip-card-${copyId}`)).count()).toBe(0);
+    await page.getByRole('button', { name: 'Undo' }).click();
+    await expect.poll(() => page.locator(byTestId(`trip-card-${copyId}`)).count()).toBe(1);
+
+    await page.click(byTestId(`trip-delete-${copyId}`));
+    await page.click(byTestId(`trip-delete-confirm-${copyId}`));
+    // After the undo window the server has deleted it: a fresh load no longer lists it.
+    await page.waitForTimeout(7000);
+    await page.reload();
+    await page.waitForSelector(byTestId('trip-list'));
+    expect(await page.locator(byTestId(`trip-card-${copyId}`)).count()).toBe(0);
+    expect(await page.locator(byTestId(`trip-card-${id}`)).count()).toBe(1);
+    await page.close();
+  });
+});

@@ -49,13 +49,21 @@ describe.each(Object.entries(VIEWPORTS))('at %s width', (size, viewport) => {
     const context = await browser.newContext({ viewport, acceptDownloads: true });
     const page = await context.newPage();
     const errors = trackPageErrors(page);
+    // The chart's Skia chunk and canvaskit.wasm load only when a chart is on screen.
+    const chartRequests: string[] = [];
+    page.on('request', (r) => {
+      if (/canvaskit\.wasm|soc-chart-canvas/.test(r.url())) chartRequests.push(r.url());
+    });
     await signIn(page, server.url, DEMO_ACCOUNT.email, DEMO_ACCOUNT.password);
+    expect(chartRequests).toEqual([]);
     await openTrip(page, 'Highland loop');
     const tripPath = new URL(page.url()).pathname;
     await page.goto(server.url);
     const violations: string[] = [];
+    chartRequests.length = 0;
     for (const check of CHECKS) {
       await check.open(page, tripPath);
+      if (check.name === 'account') expect(chartRequests).toEqual([]);
       await page.waitForTimeout(200);
       await screenshotTall(page, `screen-${check.name}-${size}`);
       for (const v of await seriousA11yViolations(page)) violations.push(`${check.name}: ${v}`);
