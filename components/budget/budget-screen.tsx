@@ -66,6 +66,7 @@ export function BudgetScreen({ detail }: { detail: TripDetail }) {
         }
         side={
           <View style={styles.column}>
+            {whatIf}
             <FlagList
               flags={result.flags}
               days={result.days}
@@ -79,7 +80,6 @@ export function BudgetScreen({ detail }: { detail: TripDetail }) {
                 if (edit) void apply(key, [edit], detail.rig.version);
               }}
             />
-            {whatIf}
           </View>
         }
       />
