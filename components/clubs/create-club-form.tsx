@@ -1,12 +1,12 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
-import { Controller, useForm } from 'react-hook-form';
+import { useForm } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 import type { z } from 'zod';
 import { space } from '@/components/theme/tokens';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
-import { TextField } from '@/components/ui/text-field';
+import { FormTextField } from '@/components/forms/form-text-field';
 import { createClubRequestSchema } from '@/shared/schemas/sharing';
 import type { ClubSummary } from '@/shared/schemas/sharing';
 import { ApiError } from '@/stores/queries/api-client';
@@ -34,21 +34,13 @@ export function CreateClubForm({ onCreated }: { onCreated: (club: ClubSummary) =
   return (
     <View style={styles.form} testID="create-club-form">
       {formError ? <Banner testID="create-club-error" message={formError} /> : null}
-      <Controller
+      <FormTextField
         control={control}
         name="name"
-        render={({ field, fieldState }) => (
-          <TextField
-            testID="create-club-name"
-            label="Club name"
-            placeholder="e.g. Lochside Tourers"
-            value={field.value}
-            onChangeText={field.onChange}
-            onBlur={field.onBlur}
-            error={fieldState.error?.message}
-            onSubmitEditing={submit}
-          />
-        )}
+        testID="create-club-name"
+        label="Club name"
+        placeholder="e.g. Lochside Tourers"
+        onSubmitEditing={submit}
       />
       <Button testID="create-club-submit" label="Create club" busy={formState.isSubmitting} onPress={submit} style={styles.button} />
     </View>

@@ -1,13 +1,13 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
-import { Controller, useForm } from 'react-hook-form';
+import { useForm } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 import type { z } from 'zod';
 import { describeAuthError } from '@/components/forms/auth-error';
 import { space } from '@/components/theme/tokens';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
-import { TextField } from '@/components/ui/text-field';
+import { FormTextField } from '@/components/forms/form-text-field';
 import { signInSchema } from '@/shared/schemas/account';
 import { authClient } from '@/stores/auth-client';
 
@@ -40,23 +40,15 @@ export function ForgotPasswordForm() {
   return (
     <View style={styles.form}>
       {formError ? <Banner testID="forgot-error" message={formError} /> : null}
-      <Controller
+      <FormTextField
         control={control}
         name="email"
-        render={({ field, fieldState }) => (
-          <TextField
-            testID="forgot-email"
-            label="E-mail"
-            autoComplete="email"
-            inputMode="email"
-            autoCapitalize="none"
-            value={field.value}
-            onChangeText={field.onChange}
-            onBlur={field.onBlur}
-            error={fieldState.error?.message}
-            onSubmitEditing={submit}
-          />
-        )}
+        testID="forgot-email"
+        label="E-mail"
+        autoComplete="email"
+        inputMode="email"
+        autoCapitalize="none"
+        onSubmitEditing={submit}
       />
       <Button testID="forgot-submit" label="Send me a reset link" busy={formState.isSubmitting} onPress={submit} />
     </View>

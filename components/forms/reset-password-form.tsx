@@ -1,13 +1,13 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
-import { Controller, useForm } from 'react-hook-form';
+import { useForm } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 import { z } from 'zod';
 import { describeAuthError } from '@/components/forms/auth-error';
 import { space } from '@/components/theme/tokens';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
-import { TextField } from '@/components/ui/text-field';
+import { FormTextField } from '@/components/forms/form-text-field';
 import { PASSWORD_MIN_LENGTH, signUpSchema } from '@/shared/schemas/account';
 import { authClient } from '@/stores/auth-client';
 
@@ -32,39 +32,23 @@ export function ResetPasswordForm({ token, onDone }: { token: string; onDone: ()
   return (
     <View style={styles.form}>
       {formError ? <Banner testID="reset-error" message={formError} /> : null}
-      <Controller
+      <FormTextField
         control={control}
         name="newPassword"
-        render={({ field, fieldState }) => (
-          <TextField
-            testID="reset-password"
-            label="New password"
-            hint={`At least ${PASSWORD_MIN_LENGTH} characters.`}
-            autoComplete="new-password"
-            secureTextEntry
-            value={field.value}
-            onChangeText={field.onChange}
-            onBlur={field.onBlur}
-            error={fieldState.error?.message}
-          />
-        )}
+        testID="reset-password"
+        label="New password"
+        hint={`At least ${PASSWORD_MIN_LENGTH} characters.`}
+        autoComplete="new-password"
+        secureTextEntry
       />
-      <Controller
+      <FormTextField
         control={control}
         name="repeat"
-        render={({ field, fieldState }) => (
-          <TextField
-            testID="reset-repeat"
-            label="New password again"
-            autoComplete="new-password"
-            secureTextEntry
-            value={field.value}
-            onChangeText={field.onChange}
-            onBlur={field.onBlur}
-            error={fieldState.error?.message}
-            onSubmitEditing={submit}
-          />
-        )}
+        testID="reset-repeat"
+        label="New password again"
+        autoComplete="new-password"
+        secureTextEntry
+        onSubmitEditing={submit}
       />
       <Button testID="reset-submit" label="Save new password" busy={formState.isSubmitting} onPress={submit} />
     </View>

@@ -1,11 +1,11 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import { Controller, useForm } from 'react-hook-form';
+import { useForm } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 import { signInSchema, type SignInInput } from '@/shared/schemas/account';
 import { space } from '@/components/theme/tokens';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
-import { TextField } from '@/components/ui/text-field';
+import { FormTextField } from '@/components/forms/form-text-field';
 
 type Props = { onSubmit: (values: SignInInput) => Promise<void>; formError?: string; defaultEmail?: string; submitLabel?: string };
 
@@ -18,40 +18,24 @@ export function SignInForm({ onSubmit, formError, defaultEmail = '', submitLabel
   return (
     <View style={styles.form}>
       {formError ? <Banner testID="sign-in-error" message={formError} /> : null}
-      <Controller
+      <FormTextField
         control={control}
         name="email"
-        render={({ field, fieldState }) => (
-          <TextField
-            testID="sign-in-email"
-            label="E-mail"
-            autoComplete="email"
-            inputMode="email"
-            autoCapitalize="none"
-            value={field.value}
-            onChangeText={field.onChange}
-            onBlur={field.onBlur}
-            error={fieldState.error?.message}
-            onSubmitEditing={submit}
-          />
-        )}
+        testID="sign-in-email"
+        label="E-mail"
+        autoComplete="email"
+        inputMode="email"
+        autoCapitalize="none"
+        onSubmitEditing={submit}
       />
-      <Controller
+      <FormTextField
         control={control}
         name="password"
-        render={({ field, fieldState }) => (
-          <TextField
-            testID="sign-in-password"
-            label="Password"
-            autoComplete="current-password"
-            secureTextEntry
-            value={field.value}
-            onChangeText={field.onChange}
-            onBlur={field.onBlur}
-            error={fieldState.error?.message}
-            onSubmitEditing={submit}
-          />
-        )}
+        testID="sign-in-password"
+        label="Password"
+        autoComplete="current-password"
+        secureTextEntry
+        onSubmitEditing={submit}
       />
       <Button testID="sign-in-submit" label={submitLabel ?? 'Sign in'} busy={formState.isSubmitting} onPress={submit} />
     </View>

@@ -1,11 +1,11 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import { Controller, useForm } from 'react-hook-form';
+import { useForm } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 import { PASSWORD_MIN_LENGTH, signUpSchema, type SignUpInput } from '@/shared/schemas/account';
 import { space } from '@/components/theme/tokens';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
-import { TextField } from '@/components/ui/text-field';
+import { FormTextField } from '@/components/forms/form-text-field';
 
 type Props = { onSubmit: (values: SignUpInput) => Promise<void>; formError?: string; defaultEmail?: string; submitLabel?: string };
 
@@ -18,55 +18,31 @@ export function SignUpForm({ onSubmit, formError, defaultEmail = '', submitLabel
   return (
     <View style={styles.form}>
       {formError ? <Banner testID="sign-up-error" message={formError} /> : null}
-      <Controller
+      <FormTextField
         control={control}
         name="name"
-        render={({ field, fieldState }) => (
-          <TextField
-            testID="sign-up-name"
-            label="Your name"
-            autoComplete="name"
-            value={field.value}
-            onChangeText={field.onChange}
-            onBlur={field.onBlur}
-            error={fieldState.error?.message}
-          />
-        )}
+        testID="sign-up-name"
+        label="Your name"
+        autoComplete="name"
       />
-      <Controller
+      <FormTextField
         control={control}
         name="email"
-        render={({ field, fieldState }) => (
-          <TextField
-            testID="sign-up-email"
-            label="E-mail"
-            autoComplete="email"
-            inputMode="email"
-            autoCapitalize="none"
-            value={field.value}
-            onChangeText={field.onChange}
-            onBlur={field.onBlur}
-            error={fieldState.error?.message}
-          />
-        )}
+        testID="sign-up-email"
+        label="E-mail"
+        autoComplete="email"
+        inputMode="email"
+        autoCapitalize="none"
       />
-      <Controller
+      <FormTextField
         control={control}
         name="password"
-        render={({ field, fieldState }) => (
-          <TextField
-            testID="sign-up-password"
-            label="Password"
-            hint={`At least ${PASSWORD_MIN_LENGTH} characters.`}
-            autoComplete="new-password"
-            secureTextEntry
-            value={field.value}
-            onChangeText={field.onChange}
-            onBlur={field.onBlur}
-            error={fieldState.error?.message}
-            onSubmitEditing={submit}
-          />
-        )}
+        testID="sign-up-password"
+        label="Password"
+        hint={`At least ${PASSWORD_MIN_LENGTH} characters.`}
+        autoComplete="new-password"
+        secureTextEntry
+        onSubmitEditing={submit}
       />
       <Button testID="sign-up-submit" label={submitLabel ?? 'Create account'} busy={formState.isSubmitting} onPress={submit} />
     </View>

@@ -7,8 +7,8 @@ import { ROLE_LABEL } from '@/components/trip/role-label';
 import { space } from '@/components/theme/tokens';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
+import { FormTextField } from '@/components/forms/form-text-field';
 import { ChoiceChips } from '@/components/ui/choice-chips';
-import { TextField } from '@/components/ui/text-field';
 import type { Role } from '@/shared/schemas/roles';
 import { inviteRoleSchema } from '@/shared/schemas/sharing';
 import { ApiError } from '@/stores/queries/api-client';
@@ -56,23 +56,15 @@ export function InviteForm({ tripId, myRole }: { tripId: string; myRole: Role })
   return (
     <View style={styles.form} testID="invite-form">
       {formError ? <Banner testID="invite-error" message={formError} /> : null}
-      <Controller
+      <FormTextField
         control={control}
         name="email"
-        render={({ field, fieldState }) => (
-          <TextField
-            testID="invite-email"
-            label="E-mail"
-            inputMode="email"
-            autoCapitalize="none"
-            autoComplete="off"
-            value={field.value}
-            onChangeText={field.onChange}
-            onBlur={field.onBlur}
-            error={fieldState.error?.message}
-            onSubmitEditing={submit}
-          />
-        )}
+        testID="invite-email"
+        label="E-mail"
+        inputMode="email"
+        autoCapitalize="none"
+        autoComplete="off"
+        onSubmitEditing={submit}
       />
       <Controller
         control={control}
@@ -87,23 +79,15 @@ export function InviteForm({ tripId, myRole }: { tripId: string; myRole: Role })
           />
         )}
       />
-      <Controller
+      <FormTextField
         control={control}
         name="message"
-        render={({ field, fieldState }) => (
-          <TextField
-            testID="invite-message"
-            label="Note (optional)"
-            hint="Goes into the e-mail, e.g. which appliances are theirs."
-            multiline
-            numberOfLines={3}
-            value={field.value}
-            onChangeText={field.onChange}
-            onBlur={field.onBlur}
-            error={fieldState.error?.message}
-            style={styles.note}
-          />
-        )}
+        testID="invite-message"
+        label="Note (optional)"
+        hint="Goes into the e-mail, e.g. which appliances are theirs."
+        multiline
+        numberOfLines={3}
+        style={styles.note}
       />
       <Button testID="invite-submit" label="Send invite" busy={formState.isSubmitting} onPress={submit} style={styles.submit} />
     </View>
