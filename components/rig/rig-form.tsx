@@ -1,12 +1,11 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useEffect, useRef, useState, type ReactNode } from 'react';
-import { Controller, useFieldArray, useForm, useWatch, type Control, type FieldPathByValue } from 'react-hook-form';
+import { useEffect, useRef, useState } from 'react';
+import { Controller, useFieldArray, useForm, useWatch } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 import { mass } from '@/components/format/units';
-import { space } from '@/components/theme/tokens';
+import { colors, space } from '@/components/theme/tokens';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
-import { Card } from '@/components/ui/card';
 import { Caution } from '@/components/ui/cautions';
 import { ChoiceChips } from '@/components/ui/choice-chips';
 import { ConflictNotice } from '@/components/ui/conflict-notice';
@@ -20,51 +19,11 @@ import { ApiError, conflictCurrent } from '@/stores/queries/api-client';
 import { useTripRigSaveMutation } from '@/stores/queries/rigs';
 import { showToast } from '@/stores/toast-store';
 import { useUnits } from '@/stores/units-store';
+import { GeneratorFields } from './generator-fields';
 import { BATTERY_PRESETS, GENERATOR_PRESETS, INVERTER_PRESETS, SOLAR_PRESETS, TANK_PRESETS } from './part-presets';
-
-type NumPath = FieldPathByValue<RigInput, number | undefined>;
-
-function Num({ control, name, label, unit, testID, disabled }: { control: Control<RigInput, unknown, Rig>; name: NumPath; label: string; unit?: string; testID: string; disabled: boolean }) {
-  return (
-    <Controller
-      control={control}
-      name={name}
-      render={({ field, fieldState }) => (
-        <View style={styles.cell}>
-          <NumberField testID={testID} label={label} unit={unit} editable={!disabled} value={field.value as number | undefined} onChangeNumber={field.onChange} onBlur={field.onBlur} error={fieldState.error?.message} />
-        </View>
-      )}
-    />
-  );
-}
-
-function Section({ title, children, testID, right }: { title: string; children: ReactNode; testID: string; right?: ReactNode }) {
-  return (
-    <Card testID={testID}>
-      <View style={styles.head}>
-        <Text variant="title" role="heading" aria-level={2}>
-          {title}
-        </Text>
-        {right}
-      </View>
-      {children}
-    </Card>
-  );
-}
-
-function Presets({ items, onPick, testID, disabled }: { items: { label: string }[]; onPick: (i: number) => void; testID: string; disabled: boolean }) {
-  if (disabled) return null;
-  return (
-    <View style={styles.presets}>
-      <Text variant="caption" color="inkSoft">
-        Common sizes:
-      </Text>
-      {items.map((item, i) => (
-        <Button key={item.label} testID={`${testID}-${i}`} tone="quiet" label={item.label} accessibilityLabel={`Use ${item.label}`} onPress={() => onPick(i)} />
-      ))}
-    </View>
-  );
-}
+import { Advanced, Num, Presets, Section } from './rig-fields';
+import { newSolarArray, percentOfFraction } from './rig-form-values';
+import { SolarArrayFields } from './solar-array-fields';
 
 /** The trip's rig in grouped sections; saved as one record with its version. */
 export function RigForm({ tripId, record, canEdit }: { tripId: string; record: RigRecord; canEdit: boolean }) {
@@ -125,27 +84,28 @@ export function RigForm({ tripId, record, canEdit }: { tripId: string; record: R
           <ChoiceChips testID="rig-chemistry" label="Chemistry" disabled={off} value={field.value} onChange={field.onChange} options={[{ value: 'lifepo4', label: 'LiFePO4' }, { value: 'agm', label: 'AGM' }, { value: 'flooded', label: 'Flooded lead-acid' }]} />
         )} />
         <View style={styles.grid}>
-          <Num control={control} disabled={off} name="battery.capacityAh" label="Capacity" unit="Ah" testID="rig-capacity" />
-          <Num control={control} disabled={off} name="battery.nominalV" label="Voltage" unit="V" testID="rig-voltage" />
-          <Num control={control} disabled={off} name="battery.reservePct" label="Reserve" unit="%" testID="rig-reserve" />
-          <Num control={control} disabled={off} name="battery.initialSocPct" label="Charge at the start" unit="%" testID="rig-initial-soc" />
+          <Num control={control} disabled={off} name="battery.capacityAh" label="Capacity" unit="Ah" range={[0, 10_000]} testID="rig-capacity" />
+          <Num control={control} disabled={off} name="battery.nominalV" label="Voltage" unit="V" range={[6, 60]} testID="rig-voltage" />
+        </View>
+        <View style={styles.grid}>
+          <Num control={control} disabled={off} optional name="battery.reservePct" label="Reserve" unit="%" range={[0, 100]} hint="left empty, the chemistry's usual depth of discharge" testID="rig-reserve" />
+          <Num control={control} disabled={off} name="battery.initialSocPct" label="Charge at the start" unit="%" range={[0, 100]} hint="state of charge when the trip begins" testID="rig-initial-soc" />
         </View>
         <Controller control={control} name="battery.heatedSpace" render={({ field }) => (
           <ChoiceChips testID="rig-heated" label="Where the battery sits" disabled={off} value={field.value ? 'inside' : 'outside'} onChange={(v) => field.onChange(v === 'inside')} options={[{ value: 'outside', label: 'Outside the heated space' }, { value: 'inside', label: 'Inside the heated space' }]} />
         )} />
+        <Text variant="caption" color="inkSoft">
+          Inside, the battery is kept warm by the living space, so a cold night outside does not stop it charging.
+        </Text>
         <Caution kind="lithiumCold" testID={chemistry === 'lifepo4' ? 'caution-lithium' : 'caution-lead-acid'} />
       </Section>
 
       <Section title="Solar" testID="rig-solar">
         {arrays.fields.map((f, i) => (
-          <View key={f.id} style={styles.grid}>
-            <Num control={control} disabled={off} name={`solarArrays.${i}.ratedW`} label={`Array ${i + 1}`} unit="W" testID={`rig-array-${i}-watts`} />
-            <Num control={control} disabled={off} name={`solarArrays.${i}.tiltDeg`} label="Tilt" unit="°" testID={`rig-array-${i}-tilt`} />
-            {canEdit ? <Button testID={`rig-array-${i}-remove`} tone="quiet" label="Remove" accessibilityLabel={`Remove array ${i + 1}`} onPress={() => arrays.remove(i)} /> : null}
-          </View>
+          <SolarArrayFields key={f.id} control={control} setValue={setValue} index={i} units={units} disabled={off} onRemove={canEdit ? () => arrays.remove(i) : null} />
         ))}
         <Presets testID="preset-solar" disabled={off} items={SOLAR_PRESETS.map((w) => ({ label: `+ ${w} W flat` }))} onPick={(i) => {
-          arrays.append({ name: 'Roof array', ratedW: SOLAR_PRESETS[i] ?? 200, mounting: 'flat', tiltDeg: 0 });
+          arrays.append(newSolarArray(SOLAR_PRESETS[i] ?? 200, arrays.fields.length));
           if (!controller) setValue('controller', { kind: 'mppt', maxAmps: 30, efficiency: 0.97 }, { shouldDirty: true });
         }} />
         {controller ? (
@@ -154,7 +114,8 @@ export function RigForm({ tripId, record, canEdit }: { tripId: string; record: R
               <ChoiceChips testID="rig-controller-kind" label="Charge controller" disabled={off} value={field.value ?? 'mppt'} onChange={field.onChange} options={[{ value: 'mppt', label: 'MPPT' }, { value: 'pwm', label: 'PWM' }]} />
             )} />
             <View style={styles.grid}>
-              <Num control={control} disabled={off} name="controller.maxAmps" label="Controller rating" unit="A" testID="rig-controller-amps" />
+              <Num control={control} disabled={off} name="controller.maxAmps" label="Controller rating" unit="A" range={[0, 500]} testID="rig-controller-amps" />
+              <Num control={control} disabled={off} name="controller.efficiency" label="Controller efficiency" shown={percentOfFraction} range={[0.5, 1]} hint="about 97 % for MPPT" testID="rig-controller-efficiency" />
             </View>
           </>
         ) : null}
@@ -166,9 +127,18 @@ export function RigForm({ tripId, record, canEdit }: { tripId: string; record: R
           <>
             <Presets testID="preset-inverter" disabled={off} items={INVERTER_PRESETS} onPick={(i) => setValue('inverter', INVERTER_PRESETS[i]?.inverter ?? null, { shouldDirty: true })} />
             <View style={styles.grid}>
-              <Num control={control} disabled={off} name="inverter.ratedW" label="Rating" unit="W" testID="rig-inverter-watts" />
-              <Num control={control} disabled={off} name="inverter.idleW" label="Idle draw" unit="W" testID="rig-inverter-idle" />
+              <Num control={control} disabled={off} name="inverter.ratedW" label="Rating" unit="W" range={[0, 20_000]} testID="rig-inverter-watts" />
+              <Num control={control} disabled={off} optional name="inverter.surgeW" label="Surge (optional)" unit="W" range={[0, 60_000]} hint="for a few seconds, when motors start" testID="rig-inverter-surge" />
             </View>
+            <Controller control={control} name="inverter.mode" render={({ field }) => (
+              <ChoiceChips testID="rig-inverter-mode" label="Switched on" disabled={off} value={field.value ?? 'on-demand'} onChange={field.onChange} options={[{ value: 'on-demand', label: 'Only when AC is used' }, { value: 'always', label: 'All the time' }]} />
+            )} />
+            <Advanced what="inverter losses" testID="rig-inverter-advanced">
+              <View style={styles.grid}>
+                <Num control={control} disabled={off} name="inverter.efficiency" label="Efficiency" shown={percentOfFraction} range={[0.5, 1]} hint="share of battery power that comes out as AC" testID="rig-inverter-efficiency" />
+                <Num control={control} disabled={off} name="inverter.idleW" label="Idle draw" unit="W" range={[0, 200]} hint={inverter.mode === 'always' ? 'drawn every hour of the trip' : 'drawn in hours with AC load'} testID="rig-inverter-idle" />
+              </View>
+            </Advanced>
           </>
         ) : (
           <Text color="inkSoft">No inverter: AC appliances run only on a hookup or generator.</Text>
@@ -176,10 +146,22 @@ export function RigForm({ tripId, record, canEdit }: { tripId: string; record: R
       </Section>
 
       <Section title="Chargers" testID="rig-chargers">
-        <View style={styles.grid}>
-          {shoreCharger ? <Num control={control} disabled={off} name="shoreCharger.amps" label="Shore charger" unit="A" testID="rig-shore-amps" /> : null}
-          {vehicleCharger ? <Num control={control} disabled={off} name="vehicleCharger.amps" label="Vehicle charger (DC-DC or alternator)" unit="A" testID="rig-vehicle-amps" /> : null}
-        </View>
+        {shoreCharger ? (
+          <View style={styles.grid}>
+            <Num control={control} disabled={off} name="shoreCharger.amps" label="Shore charger" unit="A" range={[0, 500]} testID="rig-shore-amps" />
+            <Num control={control} disabled={off} name="shoreCharger.efficiency" label="Shore charger efficiency" shown={percentOfFraction} range={[0.5, 1]} hint="share of hookup power that reaches the battery" testID="rig-shore-efficiency" />
+          </View>
+        ) : null}
+        {vehicleCharger ? (
+          <>
+            <Controller control={control} name="vehicleCharger.kind" render={({ field }) => (
+              <ChoiceChips testID="rig-vehicle-kind" label="Vehicle charging" disabled={off} value={field.value ?? 'dc-dc'} onChange={field.onChange} options={[{ value: 'dc-dc', label: 'DC-DC charger' }, { value: 'alternator', label: 'Straight from the alternator' }]} />
+            )} />
+            <View style={styles.grid}>
+              <Num control={control} disabled={off} name="vehicleCharger.amps" label="Vehicle charger" unit="A" range={[0, 300]} hint="while driving" testID="rig-vehicle-amps" />
+            </View>
+          </>
+        ) : null}
         <View style={styles.presets}>
           {toggle('shore charger', !!shoreCharger, 'rig-shore-toggle', (on) => setValue('shoreCharger', on ? { amps: 20, efficiency: 0.9 } : null, { shouldDirty: true }))}
           {toggle('vehicle charger', !!vehicleCharger, 'rig-vehicle-toggle', (on) => setValue('vehicleCharger', on ? { kind: 'dc-dc', amps: 25 } : null, { shouldDirty: true }))}
@@ -190,15 +172,8 @@ export function RigForm({ tripId, record, canEdit }: { tripId: string; record: R
         {generator ? (
           <>
             <Presets testID="preset-generator" disabled={off} items={GENERATOR_PRESETS} onPick={(i) => setValue('generator', GENERATOR_PRESETS[i]?.generator ?? null, { shouldDirty: true })} />
-            <View style={styles.grid}>
-              <Num control={control} disabled={off} name="generator.ratedW" label="Rating" unit="W" testID="rig-generator-watts" />
-            </View>
-            <Controller control={control} name="generator.fuel" render={({ field }) => (
-              <ChoiceChips testID="rig-generator-fuel" label="Fuel" disabled={off} value={field.value ?? 'petrol'} onChange={field.onChange} options={[{ value: 'petrol', label: 'Petrol' }, { value: 'diesel', label: 'Diesel' }, { value: 'propane', label: 'Propane' }]} />
-            )} />
-            <Text variant="caption" color="inkSoft">
-              {generator.mode?.kind === 'routine' ? 'Runs on set hours (from a fix or a saved routine).' : generator.mode?.kind === 'off' ? 'Switched off.' : 'Starts when the charge runs low, inside the hours each stop allows.'}
-            </Text>
+            {/* Keyed on the record so a reset (save, conflict) forgets set hours the new record does not have. */}
+            <GeneratorFields key={record.version} control={control} setValue={setValue} disabled={off} />
           </>
         ) : (
           <Text color="inkSoft">No generator.</Text>
@@ -208,22 +183,28 @@ export function RigForm({ tripId, record, canEdit }: { tripId: string; record: R
 
       <Section title="Propane" testID="rig-propane">
         {tanks.fields.map((f, i) => (
-          <Controller key={f.id} control={control} name={`propaneTanks.${i}.propaneKg`} render={({ field, fieldState }) => (
-            <View style={styles.grid}>
+          <View key={f.id} style={[styles.grid, styles.item]} testID={`rig-tank-${i}-card`}>
+            <Controller control={control} name={`propaneTanks.${i}.name`} render={({ field, fieldState }) => (
+              <View style={styles.cell}>
+                <TextField testID={`rig-tank-${i}-name`} label={`Cylinder ${i + 1} name`} editable={canEdit} value={field.value ?? ''} onChangeText={field.onChange} onBlur={field.onBlur} error={fieldState.error ? 'Give the cylinder a name (up to 80 letters).' : undefined} />
+              </View>
+            )} />
+            <Controller control={control} name={`propaneTanks.${i}.propaneKg`} render={({ field, fieldState }) => (
               <View style={styles.cell}>
                 <NumberField
                   testID={`rig-tank-${i}`}
-                  label={`Cylinder ${i + 1}`}
+                  label="Holds"
                   unit={massUnit}
                   editable={canEdit}
                   value={field.value === undefined ? undefined : Math.round(toDisplay(field.value, 'mass', units).value * 10) / 10}
                   onChangeNumber={(v) => field.onChange(v === null ? null : fromDisplay(v, 'mass', units))}
-                  error={fieldState.error?.message}
+                  error={fieldState.error ? `Enter how much propane it holds, in ${massUnit}.` : undefined}
                 />
               </View>
-              {canEdit ? <Button testID={`rig-tank-${i}-remove`} tone="quiet" label="Remove" accessibilityLabel={`Remove cylinder ${i + 1}`} onPress={() => tanks.remove(i)} /> : null}
-            </View>
-          )} />
+            )} />
+            <Num control={control} disabled={off} name={`propaneTanks.${i}.fillPct`} label="Full at the start" unit="%" range={[0, 100]} testID={`rig-tank-${i}-fill`} />
+            {canEdit ? <Button testID={`rig-tank-${i}-remove`} tone="quiet" style={styles.remove} label={`Remove cylinder ${i + 1}`} onPress={() => tanks.remove(i)} /> : null}
+          </View>
         ))}
         <Presets testID="preset-tank" disabled={off} items={TANK_PRESETS.map((t) => ({ label: `+ ${t.label}` }))} onPick={(i) => tanks.append({ name: 'Cylinder', propaneKg: TANK_PRESETS[i]?.propaneKg ?? 6, fillPct: 100 })} />
         <Caution kind="propane" testID="caution-propane" />
@@ -251,7 +232,12 @@ export function RigForm({ tripId, record, canEdit }: { tripId: string; record: R
 const styles = StyleSheet.create({
   form: { gap: space.xl },
   head: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', justifyContent: 'space-between', gap: space.sm },
-  grid: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'flex-end', gap: space.md },
-  cell: { flexGrow: 1, flexBasis: 140 },
+  grid: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'flex-start', gap: space.md },
+  // Basis 0 with a minimum width: equal columns that wrap to one per row on a phone.
+  cell: { flexGrow: 1, flexBasis: 0, minWidth: 140 },
+  // Level with the inputs beside it, which sit below their labels.
+  remove: { marginTop: space.xl },
+  // A rule under each cylinder, so on a phone one cylinder's fields do not run into the next one's.
+  item: { paddingBottom: space.md, borderBottomWidth: 1, borderBottomColor: colors.line },
   presets: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.xs },
 });

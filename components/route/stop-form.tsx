@@ -17,6 +17,7 @@ import { useStopSaveMutation } from '@/stores/queries/route';
 import { showToast } from '@/stores/toast-store';
 import { useUnits } from '@/stores/units-store';
 import { fromFormValues, stopFormSchema, toFormValues, type StopFormValues } from './stop-form-values';
+import { ZonePicker } from './zone-picker';
 
 type Props = { tripId: string; record: StopRecord | null; fallbackZone: string; onDone: () => void };
 type NumName = 'lat' | 'lon' | 'amps' | 'volts' | 'generatorStart' | 'generatorEnd' | 'low' | 'high' | 'canopyPct';
@@ -55,12 +56,13 @@ export function StopForm({ tripId, record, fallbackZone, onDone }: Props) {
   const units = useUnits();
   const save = useStopSaveMutation(tripId);
   const [formError, setFormError] = useState<string>();
+  const [zoneListOpen, setZoneListOpen] = useState(false);
   const [conflict, setConflict] = useState<StopRecord | null>(null);
   const { control, handleSubmit, setError, setValue, getValues, reset, formState } = useForm<StopFormValues>({
     resolver: zodResolver(stopFormSchema),
     defaultValues: toFormValues(record?.stop ?? null, record?.notes ?? '', units, fallbackZone),
   });
-  const [exposureKind, hookupOn, generatorOn] = useWatch({ control, name: ['exposureKind', 'hookupOn', 'generatorOn'] });
+  const [exposureKind, hookupOn, generatorOn, timeZone] = useWatch({ control, name: ['exposureKind', 'hookupOn', 'generatorOn', 'timeZone'] });
   const tUnit = temperature(0, units).unit;
   // Saves name the version the form was opened on, so someone else's change meanwhile is caught (409).
   const baseVersion = useRef(record?.version);
@@ -113,10 +115,31 @@ export function StopForm({ tripId, record, fallbackZone, onDone }: Props) {
         <Num control={control} name="lat" label="Latitude" unit="°" testID="stop-lat" />
         <Num control={control} name="lon" label="Longitude" unit="°" testID="stop-lon" />
       </View>
-      <View style={styles.zoneRow}>
-        <Txt control={control} name="timeZone" inRow label="Time zone" hint="an IANA name such as Europe/London" testID="stop-time-zone" />
-        <Button testID="stop-zone-from-coordinates" tone="secondary" label="From coordinates" onPress={() => void zoneFromCoordinates()} />
+      <View style={styles.zone}>
+        <Txt control={control} name="timeZone" label="Time zone" hint="an IANA name such as Europe/London" testID="stop-time-zone" />
+        <View style={styles.zoneButtons}>
+          <Button testID="stop-zone-from-coordinates" tone="secondary" label="From coordinates" onPress={() => void zoneFromCoordinates()} />
+          <Button
+            testID="stop-zone-list-toggle"
+            tone="secondary"
+            label={zoneListOpen ? 'Hide the list' : 'Pick from a list'}
+            accessibilityLabel={zoneListOpen ? 'Hide the time zone list' : 'Pick the time zone from a list'}
+            aria-expanded={zoneListOpen}
+            onPress={() => setZoneListOpen(!zoneListOpen)}
+          />
+        </View>
       </View>
+      {zoneListOpen ? (
+        <ZonePicker
+          testID="stop-zone-list"
+          value={timeZone}
+          onClose={() => setZoneListOpen(false)}
+          onPick={(zone) => {
+            setValue('timeZone', zone, { shouldValidate: true, shouldDirty: true });
+            setZoneListOpen(false);
+          }}
+        />
+      ) : null}
       <View style={styles.grid}>
         <Txt control={control} name="arrive" inRow label="Arrive (local)" hint="YYYY-MM-DD HH:MM" testID="stop-arrive" />
         <Txt control={control} name="depart" inRow label="Leave (local)" hint="YYYY-MM-DD HH:MM" testID="stop-depart" />
@@ -194,6 +217,8 @@ const styles = StyleSheet.create({
   grid: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md },
   // Basis 0 with a minimum width: equal columns in a row that wrap on a phone, and no fixed height in a column.
   cell: { flexGrow: 1, flexBasis: 0, minWidth: 140 },
-  zoneRow: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'flex-start', gap: space.md },
+  zone: { gap: space.sm },
+  // Under the zone's field rather than beside it: two buttons beside it left the zone name too narrow to read.
+  zoneButtons: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
   actions: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
 });

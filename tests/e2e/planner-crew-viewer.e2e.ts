@@ -123,6 +123,39 @@ describe('a trip leader at 1440 px', () => {
     expect(errors).toEqual([]);
     await page.close();
   });
+
+  it('when they set an advanced rig figure and pick a stop\'s zone from the list, then both are there after a reload', async () => {
+    const page = await browser.newPage({ viewport: VIEWPORTS.desktop });
+    const errors = trackPageErrors(page);
+    await signIn(page, server.url, LEADER.email, LEADER.password);
+    await page.goto(`${server.url}/trips/${tripId}/rig`);
+    await page.waitForSelector(byTestId('rig-form'));
+    // Less idle draw than the preset's, so the plan the flag fixes made to hold still holds for the crew test.
+    await page.click(byTestId('rig-inverter-advanced'));
+    await page.fill(byTestId('rig-inverter-idle'), '6');
+    await page.click(byTestId('rig-save'));
+    await expect.poll(() => page.textContent(byTestId('toast'))).toContain('Rig saved');
+    await page.reload();
+    await page.waitForSelector(byTestId('rig-form'));
+    await page.click(byTestId('rig-inverter-advanced'));
+    expect(await page.inputValue(byTestId('rig-inverter-idle'))).toBe('6');
+    expect(await page.getAttribute(byTestId('rig-inverter-mode-on-demand'), 'aria-checked')).toBe('true');
+
+    // Dublin keeps the same clock as London in October, so the stop's times stay valid in the new zone.
+    await page.click(byTestId('tab-route'));
+    await page.click(byTestId('stop-0-edit'));
+    await page.click(byTestId('stop-zone-list-toggle'));
+    await page.keyboard.type('dubl');
+    await page.click(byTestId('stop-zone-list-option-Europe/Dublin'));
+    expect(await page.inputValue(byTestId('stop-time-zone'))).toBe('Europe/Dublin');
+    await page.click(byTestId('stop-save'));
+    await page.waitForSelector(byTestId('stop-form'), { state: 'detached' });
+    await page.reload();
+    await page.click(byTestId('stop-0-edit'));
+    expect(await page.inputValue(byTestId('stop-time-zone'))).toBe('Europe/Dublin');
+    expect(errors).toEqual([]);
+    await page.close();
+  });
 });
 
 describe('members of the trip', () => {

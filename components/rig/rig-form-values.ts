@@ -1,0 +1,72 @@
+// Pure pieces of the rig form: how stored figures are shown (fractions as percent, panel temperatures in the
+// user's units) and typed back, and the whole parts the form adds, so every field starts filled.
+import { solarArraySchema, type RigInput, type SolarArray } from '@/shared/schemas/rig';
+import { fromDisplay, toDisplay, type UnitSystem } from '@/shared/units';
+
+const round = (v: number, digits: number) => Math.round(v * 10 ** digits) / 10 ** digits;
+
+/** A field's look in the form: from the stored value to what is shown, and back from what is typed. */
+export type Shown = {
+  unit: string;
+  show: (stored: number) => number;
+  store: (typed: number) => number;
+  /** The allowed range in the shown unit, for a message a person can act on. */
+  range: (min: number, max: number) => string;
+};
+
+const rangeText = (unit: string, show: (v: number) => number, digits: number) => (min: number, max: number) => {
+  const [a, b] = [round(show(min), digits), round(show(max), digits)].sort((x, y) => x - y);
+  return `Enter a figure from ${a} to ${b} ${unit}.`;
+};
+
+/** Efficiencies and derates are stored as fractions (0.9) and read as percentages (90 %). */
+export const percentOfFraction: Shown = {
+  unit: '%',
+  show: (f) => round(f * 100, 1),
+  store: (p) => round(p / 100, 4),
+  range: rangeText('%', (f) => f * 100, 1),
+};
+
+/** The panel's nominal operating cell temperature, in °C or °F. */
+export function panelTemperature(units: UnitSystem): Shown {
+  const unit = toDisplay(0, 'temperature', units).unit;
+  const show = (c: number) => round(toDisplay(c, 'temperature', units).value, 1);
+  return { unit, show, store: (t) => round(fromDisplay(t, 'temperature', units), 2), range: rangeText(unit, show, 1) };
+}
+
+/** Power change per degree: a step of 1 °F is 5/9 of a step of 1 °C, so the coefficient scales by that much. */
+export function perDegree(units: UnitSystem): Shown {
+  const unit = `%/${toDisplay(0, 'temperature', units).unit}`;
+  const factor = units === 'us' ? 5 / 9 : 1;
+  const show = (perC: number) => round(perC * factor, 3);
+  return { unit, show, store: (t) => round(t / factor, 4), range: rangeText(unit, show, 3) };
+}
+
+type SolarArrayInput = NonNullable<RigInput['solarArrays']>[number];
+
+/** A new array with every field filled from the schema's defaults, so the advanced fields never start blank. */
+export function newSolarArray(ratedW: number, index: number): SolarArray {
+  return solarArraySchema.parse({ name: index === 0 ? 'Roof array' : `Array ${index + 1}`, ratedW });
+}
+
+/** A flat array lies on the roof: its tilt is 0 (the schema insists) and its facing does not matter. */
+export function withMounting(array: SolarArrayInput, mounting: 'flat' | 'tilted'): SolarArrayInput {
+  // 30° is a usual fixed tilt to start from when a flat array is first tilted; the person then sets their own.
+  return { ...array, mounting, tiltDeg: mounting === 'flat' ? 0 : array.tiltDeg || 30 };
+}
+
+export type GeneratorModeInput = NonNullable<NonNullable<RigInput['generator']>['mode']>;
+export type GeneratorModeKind = GeneratorModeInput['kind'];
+
+/**
+ * The generator's mode when the person picks another kind. A rule keeps its thresholds if it had them; set hours
+ * (from a budget fix) are not edited in the form, so going back to them restores the ones the rig was opened with.
+ */
+export function generatorModeFor(kind: GeneratorModeKind, current: GeneratorModeInput | undefined, opened: GeneratorModeInput | undefined): GeneratorModeInput | undefined {
+  if (kind === 'off') return { kind: 'off' };
+  if (kind === 'rule') return current?.kind === 'rule' ? { kind: 'rule', startBelowSocPct: current.startBelowSocPct ?? 40, stopAboveSocPct: current.stopAboveSocPct ?? 90 } : { kind: 'rule', startBelowSocPct: 40, stopAboveSocPct: 90 };
+  return opened?.kind === 'routine' ? opened : current;
+}
+
+/** Typical part-load figures to start the fuel model from: a small inverter generator burns about 4 units of fuel energy per unit of electricity (from memory, rough). */
+export const FUEL_MODEL_START = { idleFuelKwhPerH: 0.6, fuelKwhPerKwhOut: 4 } as const;
