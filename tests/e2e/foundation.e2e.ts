@@ -1,25 +1,14 @@
-import type { Browser } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { describe, expect, it } from 'vitest';
 import { DEMO_ACCOUNT } from '@/db/seed';
-import { byTestId, launchBrowser, screenshot, startServer, trackPageErrors, VIEWPORTS, type RunningServer } from './harness';
+import { byTestId, screenshot, trackPageErrors, useServerAndBrowser, VIEWPORTS } from './harness';
 
-let server: RunningServer;
-let browser: Browser;
-
-beforeAll(async () => {
-  server = await startServer();
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.stop();
-});
+const suite = useServerAndBrowser();
 
 describe.each(Object.entries(VIEWPORTS))('at %s width', (name, viewport) => {
   it('when a new traveller signs up, then they see the empty state, can sign out and sign in as the demo user', async () => {
-    const page = await browser.newPage({ viewport });
+    const page = await suite.browser.newPage({ viewport });
     const errors = trackPageErrors(page);
-    await page.goto(server.url);
+    await page.goto(suite.server.url);
     await page.waitForSelector(byTestId('sign-in-screen'));
     await screenshot(page, `sign-in-${name}`);
 
@@ -82,8 +71,8 @@ describe.each(Object.entries(VIEWPORTS))('at %s width', (name, viewport) => {
 
 describe('when the server is unreachable', () => {
   it('then signing in says the server cannot be reached', async () => {
-    const page = await browser.newPage({ viewport: VIEWPORTS.phone });
-    await page.goto(server.url);
+    const page = await suite.browser.newPage({ viewport: VIEWPORTS.phone });
+    await page.goto(suite.server.url);
     await page.waitForSelector(byTestId('sign-in-screen'));
     await page.route('**/api/**', (route) => route.abort('connectionrefused'));
     await page.fill(byTestId('sign-in-email'), DEMO_ACCOUNT.email);

@@ -4,6 +4,7 @@ import net from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
 import { chromium, type Browser, type Page } from 'playwright-core';
+import { afterAll, beforeAll } from 'vitest';
 
 export const SCREENSHOT_DIR = path.resolve(__dirname, '..', '..', 'test-results');
 
@@ -126,4 +127,23 @@ export async function seriousA11yViolations(page: Page): Promise<string[]> {
   return result.violations
     .filter((v) => v.impact === 'serious' || v.impact === 'critical')
     .map((v) => `${v.id} (${v.impact}): ${v.nodes.slice(0, 3).map((n) => n.target.join(' ')).join(' | ')}`);
+}
+
+export type Suite = { server: RunningServer; browser: Browser };
+
+/**
+ * One real server and one browser for a test file: started before its first test, stopped after
+ * its last. Read `suite.server` and `suite.browser` inside tests, once they are set.
+ */
+export function useServerAndBrowser(): Suite {
+  const suite = {} as Suite;
+  beforeAll(async () => {
+    suite.server = await startServer();
+    suite.browser = await launchBrowser();
+  });
+  afterAll(async () => {
+    await suite.browser?.close();
+    await suite.server?.stop();
+  });
+  return suite;
 }

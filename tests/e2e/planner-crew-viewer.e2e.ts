@@ -1,28 +1,19 @@
 // The planner's whole job in the browser: a trip leader builds a trip on a laptop and fixes a flag, a crew
 // member changes a routine on a phone, a viewer can only read.
 import { eq } from 'drizzle-orm';
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { beforeAll, describe, expect, it } from 'vitest';
 import { openDatabase } from '@/db/client';
 import { addMember } from '@/db/queries/members';
 import { user } from '@/db/schema/auth';
 import { DEMO_CREW, DEMO_VIEWER } from '@/db/seed';
-import { byTestId, launchBrowser, openTrip, screenshot, signIn, startServer, trackPageErrors, VIEWPORTS, type RunningServer } from './harness';
+import { byTestId, openTrip, screenshot, signIn, trackPageErrors, useServerAndBrowser, VIEWPORTS } from './harness';
 
-let server: RunningServer;
-let browser: Browser;
 const TRIP = 'Glen and shore test';
 const LEADER = { name: 'Ailsa Leader', email: `leader-${Date.now()}@example.test`, password: 'leader-password-1' };
 let tripId = '';
 
-beforeAll(async () => {
-  server = await startServer();
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.stop();
-});
+const suite = useServerAndBrowser();
 
 async function addStop(page: Page, index: number, s: { name: string; lat: string; lon: string; arrive: string; depart: string; forest?: boolean }) {
   await page.click(byTestId('stop-add'));
@@ -46,9 +37,9 @@ async function lowestCharge(page: Page): Promise<number> {
 
 describe('a trip leader at 1440 px', () => {
   it('when they build a trip from scratch and apply a flag\'s fix, then the flag goes', async () => {
-    const page = await browser.newPage({ viewport: VIEWPORTS.desktop });
+    const page = await suite.browser.newPage({ viewport: VIEWPORTS.desktop });
     const errors = trackPageErrors(page);
-    await page.goto(server.url);
+    await page.goto(suite.server.url);
     await page.click(byTestId('go-to-sign-up'));
     await page.fill(byTestId('sign-up-name'), LEADER.name);
     await page.fill(byTestId('sign-up-email'), LEADER.email);
@@ -125,10 +116,10 @@ describe('a trip leader at 1440 px', () => {
   });
 
   it('when they set an advanced rig figure and pick a stop\'s zone from the list, then both are there after a reload', async () => {
-    const page = await browser.newPage({ viewport: VIEWPORTS.desktop });
+    const page = await suite.browser.newPage({ viewport: VIEWPORTS.desktop });
     const errors = trackPageErrors(page);
-    await signIn(page, server.url, LEADER.email, LEADER.password);
-    await page.goto(`${server.url}/trips/${tripId}/rig`);
+    await signIn(page, suite.server.url, LEADER.email, LEADER.password);
+    await page.goto(`${suite.server.url}/trips/${tripId}/rig`);
     await page.waitForSelector(byTestId('rig-form'));
     // Less idle draw than the preset's, so the plan the flag fixes made to hold still holds for the crew test.
     await page.click(byTestId('rig-inverter-advanced'));
@@ -161,7 +152,7 @@ describe('a trip leader at 1440 px', () => {
 describe('members of the trip', () => {
   beforeAll(() => {
     // There is no invitation flow yet: memberships are written straight into the server's database.
-    const db = openDatabase(server.dbPath);
+    const db = openDatabase(suite.server.dbPath);
     for (const [email, role] of [[DEMO_CREW.email, 'crew'], [DEMO_VIEWER.email, 'viewer']] as const) {
       const row = db.select({ id: user.id }).from(user).where(eq(user.email, email)).get();
       if (!row) throw new Error(`no seeded user ${email}`);
@@ -171,9 +162,9 @@ describe('members of the trip', () => {
   });
 
   it('when a crew member at 360 px lengthens a routine, then the lowest charge changes', async () => {
-    const page = await browser.newPage({ viewport: VIEWPORTS.phone });
+    const page = await suite.browser.newPage({ viewport: VIEWPORTS.phone });
     const errors = trackPageErrors(page);
-    await signIn(page, server.url, DEMO_CREW.email, DEMO_CREW.password);
+    await signIn(page, suite.server.url, DEMO_CREW.email, DEMO_CREW.password);
     await openTrip(page, TRIP);
     const before = await lowestCharge(page);
 
@@ -209,8 +200,8 @@ describe('members of the trip', () => {
   });
 
   it('when a viewer opens the trip, then nothing offers an edit', async () => {
-    const page = await browser.newPage({ viewport: VIEWPORTS.phone });
-    await signIn(page, server.url, DEMO_VIEWER.email, DEMO_VIEWER.password);
+    const page = await suite.browser.newPage({ viewport: VIEWPORTS.phone });
+    await signIn(page, suite.server.url, DEMO_VIEWER.email, DEMO_VIEWER.password);
     await openTrip(page, TRIP);
     await page.waitForSelector(byTestId('budget-screen'));
     expect(await page.locator('[data-testid^="fix-"]').count()).toBe(0);
@@ -235,9 +226,9 @@ describe('members of the trip', () => {
 
 describe('two people editing at once', () => {
   it('when a save meets a newer version, then the second editor is told and can keep theirs', async () => {
-    const context = await browser.newContext({ viewport: VIEWPORTS.desktop });
+    const context = await suite.browser.newContext({ viewport: VIEWPORTS.desktop });
     const first = await context.newPage();
-    await signIn(first, server.url, LEADER.email, LEADER.password);
+    await signIn(first, suite.server.url, LEADER.email, LEADER.password);
     await openTrip(first, TRIP);
     const second = await context.newPage();
     await second.goto(first.url());
@@ -271,8 +262,8 @@ describe('two people editing at once', () => {
 
 describe('the trips list', () => {
   it('when a trip is duplicated and then deleted, then undo brings it back and a confirmed delete removes it', async () => {
-    const page = await browser.newPage({ viewport: VIEWPORTS.phone });
-    await signIn(page, server.url, LEADER.email, LEADER.password);
+    const page = await suite.browser.newPage({ viewport: VIEWPORTS.phone });
+    await signIn(page, suite.server.url, LEADER.email, LEADER.password);
     const original = page.locator('[data-testid^="trip-card-"]').filter({ hasText: TRIP });
     const id = ((await original.first().getAttribute('data-testid')) ?? '').replace('trip-card-', '');
     await page.click(byTestId(`trip-duplicate-${id}`));

@@ -1,27 +1,17 @@
 // Every screen at phone and laptop widths: a screenshot for review and an axe scan with no serious or
 // critical violations.
 import fs from 'node:fs';
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
 import { DEMO_ACCOUNT } from '@/db/seed';
-import { byTestId, launchBrowser, openTrip, screenshotTall, seriousA11yViolations, signIn, startServer, trackPageErrors, VIEWPORTS, type RunningServer } from './harness';
+import { byTestId, openTrip, screenshotTall, seriousA11yViolations, signIn, trackPageErrors, useServerAndBrowser, VIEWPORTS } from './harness';
 
-let server: RunningServer;
-let browser: Browser;
-
-beforeAll(async () => {
-  server = await startServer();
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.stop();
-});
+const suite = useServerAndBrowser();
 
 type Check = { name: string; open: (page: Page, tripPath: string) => Promise<void> };
 
 const tab = (testID: string, ready: string, extra?: (page: Page) => Promise<void>): Check['open'] => async (page, tripPath) => {
-  await page.goto(`${server.url}${tripPath}`);
+  await page.goto(`${suite.server.url}${tripPath}`);
   await page.waitForSelector(byTestId('trip-frame'));
   await page.click(byTestId(testID));
   await page.waitForSelector(byTestId(ready));
@@ -29,9 +19,9 @@ const tab = (testID: string, ready: string, extra?: (page: Page) => Promise<void
 };
 
 const CHECKS: Check[] = [
-  { name: 'trips', open: async (page) => { await page.goto(server.url); await page.waitForSelector(byTestId('trip-list')); } },
+  { name: 'trips', open: async (page) => { await page.goto(suite.server.url); await page.waitForSelector(byTestId('trip-list')); } },
   { name: 'new-trip', open: async (page) => { await page.click(byTestId('new-trip')); await page.waitForSelector(byTestId('new-trip-rig-preset:van-small')); } },
-  { name: 'account', open: async (page) => { await page.goto(`${server.url}/account`); await page.waitForSelector(byTestId('units-card')); } },
+  { name: 'account', open: async (page) => { await page.goto(`${suite.server.url}/account`); await page.waitForSelector(byTestId('units-card')); } },
   { name: 'budget', open: tab('tab-budget', 'budget-screen', async (page) => { await page.waitForSelector(`${byTestId('soc-chart')} canvas`); }) },
   { name: 'budget-what-if', open: tab('tab-budget', 'budget-screen', async (page) => { await page.click(byTestId('what-if-extraBattery')); await page.waitForSelector(byTestId('what-if-banner')); await page.waitForSelector(`${byTestId('soc-chart')} canvas`); }) },
   { name: 'route', open: tab('tab-route', 'route-screen') },
@@ -46,7 +36,7 @@ const CHECKS: Check[] = [
 describe.each(Object.entries(VIEWPORTS))('at %s width', (size, viewport) => {
   it('when each screen is opened, then it renders without errors and axe finds nothing serious', async () => {
     // axe needs a page from an explicit context.
-    const context = await browser.newContext({ viewport, acceptDownloads: true });
+    const context = await suite.browser.newContext({ viewport, acceptDownloads: true });
     const page = await context.newPage();
     const errors = trackPageErrors(page);
     // The chart's Skia chunk and canvaskit.wasm load only when a chart is on screen.
@@ -54,11 +44,11 @@ describe.each(Object.entries(VIEWPORTS))('at %s width', (size, viewport) => {
     page.on('request', (r) => {
       if (/canvaskit\.wasm|soc-chart-canvas/.test(r.url())) chartRequests.push(r.url());
     });
-    await signIn(page, server.url, DEMO_ACCOUNT.email, DEMO_ACCOUNT.password);
+    await signIn(page, suite.server.url, DEMO_ACCOUNT.email, DEMO_ACCOUNT.password);
     expect(chartRequests).toEqual([]);
     await openTrip(page, 'Highland loop');
     const tripPath = new URL(page.url()).pathname;
-    await page.goto(server.url);
+    await page.goto(suite.server.url);
     const violations: string[] = [];
     chartRequests.length = 0;
     for (const check of CHECKS) {

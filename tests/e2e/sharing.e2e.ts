@@ -1,28 +1,18 @@
 // Sharing in the browser: an organiser invites by e-mail from the People tab, the invitee reads the
 // message in the development Outbox, follows its link, creates an account, joins and edits a routine.
 // Clubs, the club page, the Outbox and the invite page are screenshotted at both widths and axe-scanned.
-import type { Browser, Page } from 'playwright-core';
-import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
 import { DEMO_ACCOUNT, DEMO_CREW } from '@/db/seed';
-import { byTestId, launchBrowser, openTrip, screenshot, seriousA11yViolations, signIn, startServer, trackPageErrors, VIEWPORTS, type RunningServer } from './harness';
+import { byTestId, openTrip, screenshot, seriousA11yViolations, signIn, trackPageErrors, useServerAndBrowser, VIEWPORTS } from './harness';
 
-let server: RunningServer;
-let browser: Browser;
-
-beforeAll(async () => {
-  server = await startServer();
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.stop();
-});
+const suite = useServerAndBrowser();
 
 const TRIP = 'Highland loop';
 
 /** A page in its own browser context: its own cookies, and what axe needs to scan it. */
 async function freshPage(viewport: { width: number; height: number }): Promise<Page> {
-  const context = await browser.newContext({ viewport });
+  const context = await suite.browser.newContext({ viewport });
   return context.newPage();
 }
 
@@ -48,7 +38,7 @@ async function invite(page: Page, email: string, role: 'crew' | 'viewer' | 'plan
 
 /** Opens the Outbox (signed out is fine) and the newest invite sent to `email` (sign-up also mails a confirmation). */
 async function openInviteMailTo(page: Page, email: string): Promise<void> {
-  await page.goto(`${server.url}/outbox`);
+  await page.goto(`${suite.server.url}/outbox`);
   await page.waitForSelector(byTestId('outbox-list'));
   await page.locator('[data-testid^="outbox-message-"]').filter({ hasText: email }).filter({ hasText: 'invited you' }).first().click();
   await page.waitForSelector(byTestId('outbox-reader'));
@@ -59,7 +49,7 @@ describe('sharing a trip by e-mail', () => {
     const started = Date.now();
     const organiser = await freshPage(VIEWPORTS.phone);
     const organiserErrors = trackPageErrors(organiser);
-    await signIn(organiser, server.url, DEMO_ACCOUNT.email, DEMO_ACCOUNT.password);
+    await signIn(organiser, suite.server.url, DEMO_ACCOUNT.email, DEMO_ACCOUNT.password);
     await openPeople(organiser);
     await screenshot(organiser, 'sharing-people-phone');
     await expectAccessible(organiser, 'people (phone)');
@@ -75,7 +65,7 @@ describe('sharing a trip by e-mail', () => {
     expect(await organiser.textContent(byTestId('pending-invites'))).toMatch(/Crew/);
     expect(organiserErrors).toEqual([]);
 
-    // The invitee has no account and nothing open: a fresh, signed-out browser.
+    // The invitee has no account and nothing open: a fresh, signed-out browser context.
     const member = await freshPage(VIEWPORTS.phone);
     const memberErrors = trackPageErrors(member);
     await openInviteMailTo(member, newcomer);
@@ -134,7 +124,7 @@ describe('sharing a trip by e-mail', () => {
 
   it('when someone signed in with another address opens an invite at 1440 px, then they are told to sign in with the invited one, nothing is joined, and a revoked link says so', async () => {
     const organiser = await freshPage(VIEWPORTS.desktop);
-    await signIn(organiser, server.url, DEMO_ACCOUNT.email, DEMO_ACCOUNT.password);
+    await signIn(organiser, suite.server.url, DEMO_ACCOUNT.email, DEMO_ACCOUNT.password);
     await openPeople(organiser);
     const invited = `ewan-${Date.now()}@example.test`;
     await invite(organiser, invited, 'viewer');
@@ -142,7 +132,7 @@ describe('sharing a trip by e-mail', () => {
     await expectAccessible(organiser, 'people (desktop)');
 
     const other = await freshPage(VIEWPORTS.desktop);
-    await signIn(other, server.url, DEMO_CREW.email, DEMO_CREW.password);
+    await signIn(other, suite.server.url, DEMO_CREW.email, DEMO_CREW.password);
     await openInviteMailTo(other, invited);
     await screenshot(other, 'sharing-outbox-desktop');
     await expectAccessible(other, 'outbox (desktop)');
@@ -182,7 +172,7 @@ describe.each(Object.entries(VIEWPORTS))('clubs at %s width', (name, viewport) =
   it('when the organiser creates a club and invites households with one bad address (pasted on a phone, a CSV file on a laptop), then the good ones are sent and the bad one is reported by line', async () => {
     const page = await freshPage(viewport);
     const errors = trackPageErrors(page);
-    await signIn(page, server.url, DEMO_ACCOUNT.email, DEMO_ACCOUNT.password);
+    await signIn(page, suite.server.url, DEMO_ACCOUNT.email, DEMO_ACCOUNT.password);
     await page.click(byTestId('nav-clubs'));
     await page.waitForSelector(byTestId('clubs-screen'));
     if (await page.locator(byTestId('clubs-empty')).count()) {
@@ -215,7 +205,7 @@ describe.each(Object.entries(VIEWPORTS))('clubs at %s width', (name, viewport) =
     await expect.poll(() => page.textContent(byTestId('club-pending-invites'))).toContain(`kirsty-${name}@example.test`);
 
     // Share the trip from its People tab; the club page then lists it with its copy count.
-    await page.goto(server.url);
+    await page.goto(suite.server.url);
     await page.waitForSelector(byTestId('trips-screen'));
     await openPeople(page);
     await page.locator(byTestId('share-club-pick')).getByText(`Glen Rally Club ${name}`).click();
@@ -241,7 +231,7 @@ describe('copy onto my rig', () => {
   it('when a club member copies a shared trip onto their saved rig at 360 px, then it opens with its budget and hears when the club plan moves its stops', async () => {
     const page = await freshPage(VIEWPORTS.phone);
     const errors = trackPageErrors(page);
-    await signIn(page, server.url, DEMO_ACCOUNT.email, DEMO_ACCOUNT.password);
+    await signIn(page, suite.server.url, DEMO_ACCOUNT.email, DEMO_ACCOUNT.password);
     await page.click(byTestId('nav-clubs'));
     await page.waitForSelector(byTestId('clubs-screen'));
     if (await page.locator(byTestId('clubs-new')).count()) await page.click(byTestId('clubs-new'));
@@ -250,7 +240,7 @@ describe('copy onto my rig', () => {
     await page.waitForSelector(byTestId('club-invite-form'));
     const clubPath = new URL(page.url()).pathname;
 
-    await page.goto(server.url);
+    await page.goto(suite.server.url);
     const tripId = await openTrip(page, TRIP);
     await page.click(byTestId('tab-people'));
     await page.locator(byTestId('share-club-pick')).getByText('Firth Caravan Club').click();
@@ -258,17 +248,17 @@ describe('copy onto my rig', () => {
     await page.locator(byTestId('toast')).filter({ hasText: 'Shared to Firth Caravan Club' }).waitFor();
 
     // Without a saved rig the copy form says how to get one instead of failing.
-    await page.goto(`${server.url}${clubPath}`);
+    await page.goto(`${suite.server.url}${clubPath}`);
     await page.click(byTestId(`club-trip-${tripId}-copy`));
     await page.waitForSelector(byTestId(`copy-${tripId}-no-rigs`));
     expect(await page.textContent(byTestId(`copy-${tripId}-no-rigs`))).toContain('Rig tab');
 
-    await page.goto(`${server.url}/trips/${tripId}/rig`);
+    await page.goto(`${suite.server.url}/trips/${tripId}/rig`);
     await page.fill(byTestId('rig-save-name'), 'Our caravan');
     await page.click(byTestId('rig-save-to-mine'));
     await page.locator(byTestId('toast')).filter({ hasText: 'Saved “Our caravan”' }).waitFor();
 
-    await page.goto(`${server.url}${clubPath}`);
+    await page.goto(`${suite.server.url}${clubPath}`);
     await page.click(byTestId(`club-trip-${tripId}-copy`));
     await page.locator(byTestId(`copy-${tripId}-rig`)).getByText('Our caravan').click();
     await page.click(byTestId(`copy-${tripId}-submit`));
@@ -304,7 +294,7 @@ describe('copy onto my rig', () => {
     await page.waitForSelector(byTestId('based-on-banner'));
     expect(await page.locator(byTestId('based-on-changed')).count()).toBe(0);
 
-    await page.goto(`${server.url}${clubPath}`);
+    await page.goto(`${suite.server.url}${clubPath}`);
     await expect.poll(() => page.textContent(byTestId(`club-trip-${tripId}-copies`))).toBe('1 household has copied it');
     await page.click(byTestId(`club-trip-${tripId}-my-copy`));
     await page.waitForURL(`**/trips/${copyId ?? ''}`);
@@ -318,7 +308,7 @@ describe('account e-mails', () => {
     const page = await freshPage(VIEWPORTS.phone);
     const errors = trackPageErrors(page);
     const email = `fenella-${Date.now()}@example.test`;
-    await page.goto(server.url);
+    await page.goto(suite.server.url);
     await page.click(byTestId('go-to-sign-up'));
     await page.fill(byTestId('sign-up-name'), 'Fenella Ross');
     await page.fill(byTestId('sign-up-email'), email);
@@ -327,12 +317,12 @@ describe('account e-mails', () => {
     await page.waitForSelector(byTestId('trips-screen'));
     await page.context().clearCookies();
 
-    await page.goto(`${server.url}/forgot-password`);
+    await page.goto(`${suite.server.url}/forgot-password`);
     await page.fill(byTestId('forgot-email'), email);
     await page.click(byTestId('forgot-submit'));
     await page.waitForSelector(byTestId('forgot-sent'));
 
-    await page.goto(`${server.url}/outbox`);
+    await page.goto(`${suite.server.url}/outbox`);
     await page.locator('[data-testid^="outbox-message-"]').filter({ hasText: email }).filter({ hasText: 'password' }).first().click();
     await page.click(byTestId('outbox-link-0'));
     await page.waitForSelector(byTestId('reset-password'));
