@@ -1,18 +1,9 @@
 import type { AddressInfo } from 'node:net';
 import { simpleParser } from 'mailparser';
 import { SMTPServer } from 'smtp-server';
+import type { CapturedMail } from '@/shared/schemas/outbox';
 
-export type CapturedMail = {
-  id: string;
-  receivedAt: string;
-  from: string;
-  to: string[];
-  subject: string;
-  text: string;
-  html: string;
-  /** Every http(s) link in the text part, so the Outbox can show and tests can follow them. */
-  links: string[];
-};
+export type { CapturedMail };
 
 export type LocalSmtp = {
   url: string;

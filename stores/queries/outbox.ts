@@ -1,18 +1,10 @@
 import { useQuery } from '@tanstack/react-query';
 import { ApiError, apiFetch } from './api-client';
 import { STALE } from './stale';
+import type { CapturedMail } from '@/shared/schemas/outbox';
 
 /** One message the development mail fake caught. */
-export type OutboxMessage = {
-  id: string;
-  receivedAt: string;
-  from: string;
-  to: string[];
-  subject: string;
-  text: string;
-  html: string;
-  links: string[];
-};
+export type OutboxMessage = CapturedMail;
 
 export const outboxKeys = {
   root: ['outbox'] as const,
