@@ -1,6 +1,7 @@
 import { Router } from 'express';
 import type { Db } from '@/db/client';
 import { listActivity } from '@/db/queries/trips';
+import packageJson from '@/package.json';
 import type { BudgetService } from '../budget-service';
 import { notFound } from '../errors';
 import { tripAccess } from '../middleware/trip-access';
@@ -27,8 +28,9 @@ export function tripItemsRouter(deps: TripItemsDeps): Router {
   router.get('/budget', (req, res) => {
     const answer = deps.budgets.forTrip(tripAccess(res).tripId);
     if (!answer) throw notFound('That trip was not found.');
-    // The revision changes with every edit to the trip, so it is a strong validator.
-    const etag = `"budget-${answer.revision}"`;
+    // The revision changes with every edit to the trip; the app version changes when the engine
+    // may compute differently, so a browser never keeps a budget from an older release.
+    const etag = `"budget-${packageJson.version}-${answer.revision}"`;
     res.setHeader('ETag', etag);
     res.setHeader('Cache-Control', 'private, no-cache');
     if (req.headers['if-none-match'] === etag) {
