@@ -5,15 +5,53 @@ import globals from 'globals';
 import tseslint from 'typescript-eslint';
 
 const serverOnly = [
-  { group: ['@/db', '@/db/*', '@/server', '@/server/*', '**/db/*', '**/server/*'], message: 'Client code talks to the server over HTTP only (stores/queries).' },
+  {
+    group: ['@/db', '@/db/*', '@/server', '@/server/*', '**/db/*', '**/server/*'],
+    message: 'Client code talks to the server over HTTP only (stores/queries).',
+  },
 ];
 const sharedForbidden = [
-  { group: ['react', 'react-*', 'react-native', 'react-native-*', 'expo', 'expo-*', '@expo/*'], message: 'shared/ runs on both sides: no React or React Native.' },
-  { group: ['drizzle-orm', 'drizzle-orm/*', 'better-sqlite3', 'better-auth', 'better-auth/*', 'express'], message: 'shared/ has no database or server code.' },
+  {
+    group: ['react', 'react-*', 'react-native', 'react-native-*', 'expo', 'expo-*', '@expo/*'],
+    message: 'shared/ runs on both sides: no React or React Native.',
+  },
+  {
+    group: ['drizzle-orm', 'drizzle-orm/*', 'better-sqlite3', 'better-auth', 'better-auth/*', 'express'],
+    message: 'shared/ has no database or server code.',
+  },
   { group: ['node:*'], message: 'shared/ runs in the browser too: no Node built-ins.' },
-  { group: ['@/db/*', '@/server/*', '@/app/*', '@/components/*', '@/stores/*', '**/db/*', '**/server/*', '**/components/*', '**/stores/*'], message: 'shared/ imports nothing from the rest of the project.' },
+  {
+    group: [
+      '@/db/*',
+      '@/server/*',
+      '@/app/*',
+      '@/components/*',
+      '@/stores/*',
+      '**/db/*',
+      '**/server/*',
+      '**/components/*',
+      '**/stores/*',
+    ],
+    message: 'shared/ imports nothing from the rest of the project.',
+  },
 ];
-const nodeBuiltins = ['fs', 'path', 'os', 'crypto', 'child_process', 'http', 'https', 'url', 'util', 'stream', 'events', 'zlib', 'net', 'tls', 'worker_threads'];
+const nodeBuiltins = [
+  'fs',
+  'path',
+  'os',
+  'crypto',
+  'child_process',
+  'http',
+  'https',
+  'url',
+  'util',
+  'stream',
+  'events',
+  'zlib',
+  'net',
+  'tls',
+  'worker_threads',
+];
 
 export default tseslint.config(
   { ignores: ['node_modules/', 'dist/', '.expo/', 'data/', 'test-results/', 'drizzle/', 'public/', 'expo-env.d.ts'] },
@@ -28,7 +66,10 @@ export default tseslint.config(
       '@typescript-eslint/no-explicit-any': 'error',
       '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_' }],
       '@typescript-eslint/no-require-imports': 'off',
-      'no-restricted-imports': ['error', { patterns: [{ group: ['../../*'], message: 'Use the @/ alias instead of ../../ chains.' }] }],
+      'no-restricted-imports': [
+        'error',
+        { patterns: [{ group: ['../../*'], message: 'Use the @/ alias instead of ../../ chains.' }] },
+      ],
     },
   },
   {
@@ -36,20 +77,35 @@ export default tseslint.config(
     plugins: { 'react-hooks': reactHooks },
     rules: {
       ...reactHooks.configs.recommended.rules,
-      'no-restricted-imports': ['error', { patterns: [...serverOnly, { group: ['../../*'], message: 'Use the @/ alias.' }] }],
+      'no-restricted-imports': [
+        'error',
+        { patterns: [...serverOnly, { group: ['../../*'], message: 'Use the @/ alias.' }] },
+      ],
     },
   },
   {
     files: ['shared/**/*.ts'],
     rules: {
-      'no-restricted-imports': ['error', { paths: nodeBuiltins.map((name) => ({ name, message: 'shared/ runs in the browser too: no Node built-ins.' })), patterns: sharedForbidden }],
+      'no-restricted-imports': [
+        'error',
+        {
+          paths: nodeBuiltins.map((name) => ({ name, message: 'shared/ runs in the browser too: no Node built-ins.' })),
+          patterns: sharedForbidden,
+        },
+      ],
       'no-restricted-globals': ['error', { name: 'process', message: 'shared/ is pure: pass values in.' }],
     },
   },
   {
     files: ['server/**/*.ts', 'db/**/*.ts'],
     rules: {
-      'no-restricted-syntax': ['error', { selector: "MemberExpression[object.name='process'][property.name='env']", message: 'Read configuration through server/env.ts.' }],
+      'no-restricted-syntax': [
+        'error',
+        {
+          selector: "MemberExpression[object.name='process'][property.name='env']",
+          message: 'Read configuration through server/env.ts.',
+        },
+      ],
     },
   },
   {

@@ -6,7 +6,12 @@ export default defineConfig({
     alias: { '@': fileURLToPath(new URL('./', import.meta.url)) },
   },
   test: {
-    include: ['tests/shared/**/*.test.ts', 'tests/server/**/*.test.ts', 'tests/db/**/*.test.ts', 'tests/components/**/*.test.ts'],
+    include: [
+      'tests/shared/**/*.test.ts',
+      'tests/server/**/*.test.ts',
+      'tests/db/**/*.test.ts',
+      'tests/components/**/*.test.ts',
+    ],
     pool: 'forks',
     environment: 'node',
     testTimeout: 20000,

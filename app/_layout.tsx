@@ -17,7 +17,12 @@ hydrateUnits();
 
 export default function RootLayout() {
   const [queryClient] = useState(createQueryClient);
-  const [fontsLoaded, fontError] = useFonts({ Nunito_400Regular, Nunito_600SemiBold, Nunito_700Bold, Nunito_800ExtraBold });
+  const [fontsLoaded, fontError] = useFonts({
+    Nunito_400Regular,
+    Nunito_600SemiBold,
+    Nunito_700Bold,
+    Nunito_800ExtraBold,
+  });
   const session = useSession();
   // better-auth reports "pending" again while it refetches after a sign-in from signed out; only the
   // first answer may hold the app, or the navigator is torn down and pages outside the groups (an

@@ -10,9 +10,15 @@ export default function ResetPasswordScreen() {
   const { token, error } = useLocalSearchParams<{ token?: string; error?: string }>();
   const [done, setDone] = useState(false);
   let body;
-  if (done) body = <Banner testID="reset-done" tone="info" message="Your password is changed. Sign in with the new one." />;
+  if (done)
+    body = <Banner testID="reset-done" tone="info" message="Your password is changed. Sign in with the new one." />;
   else if (!token || error)
-    body = <Banner testID="reset-invalid" message="This reset link has expired or is incomplete. Ask for a new one from the sign-in page." />;
+    body = (
+      <Banner
+        testID="reset-invalid"
+        message="This reset link has expired or is incomplete. Ask for a new one from the sign-in page."
+      />
+    );
   else body = <ResetPasswordForm token={token} onDone={() => setDone(true)} />;
   return (
     <AuthShell

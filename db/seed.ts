@@ -34,14 +34,29 @@ export function insertTripFromEngineInput(db: Db, ownerId: string, draft: Engine
   const zone = first.timeZone;
   const dateIn = (iso: string) => DateTime.fromISO(iso, { zone }).toISODate() ?? iso.slice(0, 10);
   return db.transaction((tx) => {
-    const trip = insertTrip(tx, { ownerId, name: input.trip.name, startDate: dateIn(first.arriveAt), endDate: dateIn(last.departAt), timeZone: zone }, now);
+    const trip = insertTrip(
+      tx,
+      {
+        ownerId,
+        name: input.trip.name,
+        startDate: dateIn(first.arriveAt),
+        endDate: dateIn(last.departAt),
+        timeZone: zone,
+      },
+      now,
+    );
     insertRig(tx, { ownerId, tripId: trip.id }, input.rig, now);
     for (const stop of input.trip.stops) insertStop(tx, trip.id, stop, '');
     listStopRows(tx, trip.id).forEach((_row, i) => {
       const drive = input.trip.drives[i];
-      if (drive) tx.update(drives).set(drive).where(and(eq(drives.tripId, trip.id), eq(drives.position, i))).run();
+      if (drive)
+        tx.update(drives)
+          .set(drive)
+          .where(and(eq(drives.tripId, trip.id), eq(drives.position, i)))
+          .run();
     });
-    for (const { id: _id, ...fields } of input.appliances) insertAppliance(tx, trip.id, applianceFieldsSchema.parse(fields), null);
+    for (const { id: _id, ...fields } of input.appliances)
+      insertAppliance(tx, trip.id, applianceFieldsSchema.parse(fields), null);
     logActivity(tx, { tripId: trip.id, userId: ownerId, summary: `created the trip "${trip.name}"`, at: now });
     return trip.id;
   });
@@ -63,7 +78,10 @@ export async function seedDemo(db: Db, auth: Auth, now: Date): Promise<void> {
   ];
   db.transaction((tx) => {
     // Invented addresses cannot receive a confirmation e-mail; count them as confirmed.
-    tx.update(user).set({ emailVerified: true }).where(inArray(user.id, [planner.user.id, crew.user.id, viewer.user.id])).run();
+    tx.update(user)
+      .set({ emailVerified: true })
+      .where(inArray(user.id, [planner.user.id, crew.user.id, viewer.user.id]))
+      .run();
     for (const [userId, role] of members) addMember(tx, highland, userId, role, now);
     tx.update(appliances)
       .set({ caretakerUserId: crew.user.id })
@@ -90,7 +108,13 @@ if (require.main === module) {
     } else {
       // The demo addresses are not real: their sign-up e-mails go nowhere.
       const mailer = { send: async () => undefined };
-      const auth = createAuth(db, { secret: env.BETTER_AUTH_SECRET, baseUrl: env.PUBLIC_URL, trustedOrigins: [env.PUBLIC_URL], mailer, requireEmailVerification: false });
+      const auth = createAuth(db, {
+        secret: env.BETTER_AUTH_SECRET,
+        baseUrl: env.PUBLIC_URL,
+        trustedOrigins: [env.PUBLIC_URL],
+        mailer,
+        requireEmailVerification: false,
+      });
       await seedDemo(db, auth, new Date());
       console.log(`Demo data added. ${demoSignInText()}`);
     }

@@ -10,12 +10,21 @@ const month = trip(30, 40);
 const week = trip(7, 15);
 const bench = new Bench({ time: 2000, warmupTime: 500 });
 bench
-  .add('simulateTrip: 30 days, 40 appliances, 3 sky scenarios', () => { simulateTrip(month); })
-  .add('findHeadroom: same 30-day trip', () => { findHeadroom(month); })
-  .add('simulateTrip: 7 days, 15 appliances, 3 sky scenarios', () => { simulateTrip(week); });
+  .add('simulateTrip: 30 days, 40 appliances, 3 sky scenarios', () => {
+    simulateTrip(month);
+  })
+  .add('findHeadroom: same 30-day trip', () => {
+    findHeadroom(month);
+  })
+  .add('simulateTrip: 7 days, 15 appliances, 3 sky scenarios', () => {
+    simulateTrip(week);
+  });
 
 // Medians are wall time: on a shared machine they rise with the load, so the load is printed with them.
-const load = (): string => loadavg().map((x) => x.toFixed(2)).join(' ');
+const load = (): string =>
+  loadavg()
+    .map((x) => x.toFixed(2))
+    .join(' ');
 
 async function main(): Promise<void> {
   console.log(`${cpus().length} CPUs, load average before: ${load()}`);

@@ -34,7 +34,9 @@ export function sourceFingerprint(): string {
  * (so it always matches Skia's JS) and is copied into public/ for the export; it is never committed.
  */
 export function copyCanvasKit(): void {
-  const source = require.resolve('canvaskit-wasm/bin/full/canvaskit.wasm', { paths: [path.join(ROOT, 'node_modules/@shopify/react-native-skia')] });
+  const source = require.resolve('canvaskit-wasm/bin/full/canvaskit.wasm', {
+    paths: [path.join(ROOT, 'node_modules/@shopify/react-native-skia')],
+  });
   const target = path.join(ROOT, 'public', 'canvaskit.wasm');
   fs.mkdirSync(path.dirname(target), { recursive: true });
   if (!fs.existsSync(target) || fs.statSync(target).size !== fs.statSync(source).size) fs.copyFileSync(source, target);
@@ -48,7 +50,9 @@ export function ensureWebBuild({ force = false } = {}): void {
     return;
   }
   console.log(
-    current ? 'Web app sources changed: rebuilding dist/ …' : 'Building the web app into dist/ (first start; about a minute) …',
+    current
+      ? 'Web app sources changed: rebuilding dist/ …'
+      : 'Building the web app into dist/ (first start; about a minute) …',
   );
   copyCanvasKit();
   const result = spawnSync('npx', ['expo', 'export', '--platform', 'web', '--output-dir', 'dist'], {

@@ -7,7 +7,13 @@ export type Rejected = { line: number; value: string; reason: string };
 const email = z.email();
 const NAMED = /^\s*"?([^"<]*?)"?\s*<([^>]+)>\s*$/;
 
-function check(raw: string, name: string | null, line: number, accepted: Map<string, Recipient>, rejected: Rejected[]): void {
+function check(
+  raw: string,
+  name: string | null,
+  line: number,
+  accepted: Map<string, Recipient>,
+  rejected: Rejected[],
+): void {
   const address = raw.trim().toLowerCase();
   if (!email.safeParse(address).success) {
     rejected.push({ line, value: raw.trim(), reason: 'Not an e-mail address.' });
@@ -37,7 +43,11 @@ export function parseCsvAddresses(text: string, accepted: Map<string, Recipient>
   try {
     rows = parse(text, { relax_column_count: true, skip_empty_lines: true, trim: true, bom: true }) as string[][];
   } catch (error) {
-    rejected.push({ line: 0, value: '', reason: `The CSV could not be read: ${error instanceof Error ? error.message : 'unknown error'}` });
+    rejected.push({
+      line: 0,
+      value: '',
+      reason: `The CSV could not be read: ${error instanceof Error ? error.message : 'unknown error'}`,
+    });
     return;
   }
   const header = (rows[0] ?? []).map((cell) => cell.toLowerCase());
@@ -51,7 +61,10 @@ export function parseCsvAddresses(text: string, accepted: Map<string, Recipient>
   });
 }
 
-export function parseRecipients(input: { addresses?: string; csv?: string }): { recipients: Recipient[]; rejected: Rejected[] } {
+export function parseRecipients(input: { addresses?: string; csv?: string }): {
+  recipients: Recipient[];
+  rejected: Rejected[];
+} {
   const accepted = new Map<string, Recipient>();
   const rejected: Rejected[] = [];
   if (input.addresses) parsePastedAddresses(input.addresses, accepted, rejected);

@@ -70,7 +70,8 @@ export function createApp(deps: AppDeps): TrailtallyApp {
   app.disable('x-powered-by');
   app.set('trust proxy', 'loopback');
 
-  if (deps.logger) app.use(pinoHttp({ logger: deps.logger, autoLogging: { ignore: (req) => !req.url?.startsWith('/api') } }));
+  if (deps.logger)
+    app.use(pinoHttp({ logger: deps.logger, autoLogging: { ignore: (req) => !req.url?.startsWith('/api') } }));
   app.use(
     helmet({
       contentSecurityPolicy: {
@@ -93,7 +94,8 @@ export function createApp(deps: AppDeps): TrailtallyApp {
       ...authLimit,
       standardHeaders: 'draft-8',
       legacyHeaders: false,
-      handler: (_req, _res, next) => next(new HttpError(429, 'rate_limited', 'Too many attempts. Please wait a few minutes and try again.')),
+      handler: (_req, _res, next) =>
+        next(new HttpError(429, 'rate_limited', 'Too many attempts. Please wait a few minutes and try again.')),
     }),
   );
   // better-auth reads the raw body itself: its handler must come before express.json().
@@ -103,7 +105,11 @@ export function createApp(deps: AppDeps): TrailtallyApp {
   app.use('/api/health', healthRouter({ db, version: packageJson.version }));
   const budgets = createBudgetService(db, (err, tripId) => deps.logger?.error({ err, tripId }, 'budget failed'));
   const signedIn = requireSession(auth);
-  app.use('/api/trips', signedIn, tripsRouter({ db, now: deps.now, budgets, mailer: deps.mailer, publicUrl: config.publicUrl }));
+  app.use(
+    '/api/trips',
+    signedIn,
+    tripsRouter({ db, now: deps.now, budgets, mailer: deps.mailer, publicUrl: config.publicUrl }),
+  );
   app.use('/api/invites', inviteLinksRouter({ db, now: deps.now, auth }));
   app.use('/api/clubs', signedIn, clubsRouter({ db, now: deps.now, mailer: deps.mailer, publicUrl: config.publicUrl }));
   app.use('/api/club-invites', clubInviteLinksRouter({ db, now: deps.now, auth }));
@@ -111,7 +117,9 @@ export function createApp(deps: AppDeps): TrailtallyApp {
   app.use('/api/rigs', signedIn, rigsRouter({ db, now: deps.now }));
   app.use('/api/rig-presets', signedIn, rigPresetsRouter());
   app.use('/api/me/preferences', signedIn, preferencesRouter({ db }));
-  app.use('/api', (req, _res, next) => next(new HttpError(404, 'not_found', `No API route for ${req.method} ${req.baseUrl}${req.path}.`)));
+  app.use('/api', (req, _res, next) =>
+    next(new HttpError(404, 'not_found', `No API route for ${req.method} ${req.baseUrl}${req.path}.`)),
+  );
 
   const web = config.webDir ? webStatic(config.webDir) : undefined;
   if (web) app.use(web);

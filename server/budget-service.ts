@@ -23,7 +23,11 @@ export function createBudgetService(db: Db, onError: (error: unknown, tripId: st
     const parsed = engineInputSchema.safeParse(draft);
     if (!parsed.success) {
       const issue = parsed.error.issues[0];
-      return { revision, result: null, reason: `The plan cannot be simulated yet: ${issue?.path.join('.')} ${issue?.message}` };
+      return {
+        revision,
+        result: null,
+        reason: `The plan cannot be simulated yet: ${issue?.path.join('.')} ${issue?.message}`,
+      };
     }
     try {
       return { revision, result: simulateParsed(parsed.data) };

@@ -41,8 +41,7 @@ export class HttpError extends Error {
 }
 
 export const notFound = (what = 'That was not found.') => new HttpError(404, 'not_found', what);
-export const unauthorized = () =>
-  new HttpError(401, 'unauthorized', 'Please sign in to continue.');
+export const unauthorized = () => new HttpError(401, 'unauthorized', 'Please sign in to continue.');
 
 /** A stale version: the client gets the record as it now stands, to show and choose from. */
 export const conflict = (current: unknown) =>

@@ -18,7 +18,9 @@ export async function main(): Promise<void> {
   let localSmtp: LocalSmtp | undefined;
   if (!env.SMTP_URL) {
     localSmtp = await startLocalSmtp(env.SMTP_FAKE_PORT);
-    console.log(`No SMTP_URL set: e-mail is kept by a local SMTP fake on ${localSmtp.url}${env.NODE_ENV === 'production' ? '' : ' (see /outbox)'}`);
+    console.log(
+      `No SMTP_URL set: e-mail is kept by a local SMTP fake on ${localSmtp.url}${env.NODE_ENV === 'production' ? '' : ' (see /outbox)'}`,
+    );
   }
   const app = createApp({
     db,

@@ -27,7 +27,8 @@ export function inviteStatus(invite: InviteState, now: Date): 'valid' | 'expired
 export function assertUsable(invite: InviteState, now: Date): void {
   const status = inviteStatus(invite, now);
   if (status === 'revoked') throw new HttpError(410, 'invite_revoked', 'This invite was withdrawn. Ask for a new one.');
-  if (status === 'used') throw new HttpError(410, 'invite_used', 'This invite has already been used. Each link works once.');
+  if (status === 'used')
+    throw new HttpError(410, 'invite_used', 'This invite has already been used. Each link works once.');
   if (status === 'expired') throw new HttpError(410, 'invite_expired', 'This invite has expired. Ask for a new one.');
 }
 
@@ -37,7 +38,8 @@ export function maskEmail(email: string): string {
   return `${local.slice(0, 1)}•••@${domain}`;
 }
 
-export const invalidInvite = () => new HttpError(404, 'invite_invalid', 'This invite link is not valid. Check that it was copied whole.');
+export const invalidInvite = () =>
+  new HttpError(404, 'invite_invalid', 'This invite link is not valid. Check that it was copied whole.');
 
 export const isoDay = (date: Date) => date.toISOString().slice(0, 10);
 

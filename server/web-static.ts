@@ -16,7 +16,8 @@ export function webStatic(webDir: string): Router | undefined {
     express.static(root, {
       index: false,
       setHeaders(res, filePath) {
-        const hashed = filePath.includes(`${path.sep}_expo${path.sep}`) || filePath.includes(`${path.sep}assets${path.sep}`);
+        const hashed =
+          filePath.includes(`${path.sep}_expo${path.sep}`) || filePath.includes(`${path.sep}assets${path.sep}`);
         res.setHeader('Cache-Control', hashed ? 'public, max-age=31536000, immutable' : 'no-cache');
       },
     }),

@@ -56,7 +56,8 @@ export const RIG_PRESETS: readonly RigPreset[] = [
   {
     id: 'trailer-large',
     label: 'Travel trailer',
-    description: '5 kWh lithium, 800 W flat roof solar, 3000 W inverter, 2.2 kW dual-fuel generator, two 20 lb propane.',
+    description:
+      '5 kWh lithium, 800 W flat roof solar, 3000 W inverter, 2.2 kW dual-fuel generator, two 20 lb propane.',
     rig: {
       name: 'Travel trailer',
       battery: { chemistry: 'lifepo4', capacityAh: 390, nominalV: 12.8 },

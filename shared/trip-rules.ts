@@ -16,24 +16,32 @@ export function checkStopFits(trip: TripDates, stop: Interval, others: Interval[
   }
   const arriveDate = DateTime.fromISO(stop.arriveAt, { zone: trip.timeZone }).toISODate();
   const departDate = DateTime.fromISO(stop.departAt, { zone: trip.timeZone }).toISODate();
-  if (arriveDate === null || departDate === null) return { field: 'stop.arriveAt', message: 'Not a real date and time.' };
+  if (arriveDate === null || departDate === null)
+    return { field: 'stop.arriveAt', message: 'Not a real date and time.' };
   if (arriveDate < trip.startDate) {
     return { field: 'stop.arriveAt', message: `Arrival is before the trip starts (${trip.startDate}).` };
   }
   if (departDate > trip.endDate) {
     return { field: 'stop.departAt', message: `Departure is after the trip ends (${trip.endDate}).` };
   }
-  const clash = others.find((other) => ms(stop.arriveAt) < ms(other.departAt) && ms(other.arriveAt) < ms(stop.departAt));
+  const clash = others.find(
+    (other) => ms(stop.arriveAt) < ms(other.departAt) && ms(other.arriveAt) < ms(stop.departAt),
+  );
   if (clash) return { field: 'stop.arriveAt', message: `These dates overlap the stay at ${clash.name}.` };
   return null;
 }
 
 /** Every stop of a trip still fits when the trip's own dates change. */
 export function checkTripDatesCoverStops(trip: TripDates, stops: Interval[]): RuleBreach | null {
-  if (trip.endDate < trip.startDate) return { field: 'endDate', message: 'The trip must end on or after its first day.' };
+  if (trip.endDate < trip.startDate)
+    return { field: 'endDate', message: 'The trip must end on or after its first day.' };
   for (const stop of stops) {
     const breach = checkStopFits(trip, stop, []);
-    if (breach) return { field: breach.field === 'stop.departAt' ? 'endDate' : 'startDate', message: `${stop.name}: ${breach.message}` };
+    if (breach)
+      return {
+        field: breach.field === 'stop.departAt' ? 'endDate' : 'startDate',
+        message: `${stop.name}: ${breach.message}`,
+      };
   }
   return null;
 }

@@ -6,7 +6,9 @@ import type { EngineInputDraft } from './schemas/engine-input';
  * it for instant what-ifs, so both compute from exactly the same input.
  * Returns null while the trip has no stop yet: there is nothing to simulate.
  */
-export function toEngineInput(detail: Pick<TripDetail, 'trip' | 'rig' | 'stops' | 'drives' | 'appliances'>): EngineInputDraft | null {
+export function toEngineInput(
+  detail: Pick<TripDetail, 'trip' | 'rig' | 'stops' | 'drives' | 'appliances'>,
+): EngineInputDraft | null {
   if (detail.stops.length === 0) return null;
   return {
     trip: {

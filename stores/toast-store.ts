@@ -1,6 +1,11 @@
 import { create } from 'zustand';
 
-export type Toast = { id: number; message: string; tone: 'success' | 'info' | 'danger'; action?: { label: string; run: () => void } };
+export type Toast = {
+  id: number;
+  message: string;
+  tone: 'success' | 'info' | 'danger';
+  action?: { label: string; run: () => void };
+};
 
 type ToastState = { toasts: Toast[] };
 
@@ -12,7 +17,9 @@ const TOAST_MS = 6500;
 
 export function showToast(message: string, options: Omit<Partial<Toast>, 'id' | 'message'> = {}): number {
   const id = nextId++;
-  useToastStore.setState((s) => ({ toasts: [...s.toasts.slice(-1), { id, message, tone: options.tone ?? 'success', action: options.action }] }));
+  useToastStore.setState((s) => ({
+    toasts: [...s.toasts.slice(-1), { id, message, tone: options.tone ?? 'success', action: options.action }],
+  }));
   setTimeout(() => dismissToast(id), TOAST_MS);
   return id;
 }

@@ -24,7 +24,12 @@ function NewTripLink({ testID }: { testID: string }) {
 export default function TripsScreen() {
   const trips = useTripsQuery();
   return (
-    <Screen testID="trips-screen" title="Trips" subtitle="Every trip, checked hour by hour against your rig." actions={<NewTripLink testID="new-trip" />}>
+    <Screen
+      testID="trips-screen"
+      title="Trips"
+      subtitle="Every trip, checked hour by hour against your rig."
+      actions={<NewTripLink testID="new-trip" />}
+    >
       {trips.isPending ? (
         <>
           <Skeleton testID="trips-loading" height={132} />
@@ -48,5 +53,12 @@ export default function TripsScreen() {
 
 // Link asChild needs one flat style object on the web.
 const styles = StyleSheet.create({
-  newTrip: { minHeight: 48, paddingHorizontal: space.xl, borderRadius: radii.pill, backgroundColor: colors.pine, alignItems: 'center', justifyContent: 'center' },
+  newTrip: {
+    minHeight: 48,
+    paddingHorizontal: space.xl,
+    borderRadius: radii.pill,
+    backgroundColor: colors.pine,
+    alignItems: 'center',
+    justifyContent: 'center',
+  },
 });

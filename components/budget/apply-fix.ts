@@ -52,13 +52,21 @@ export function editForFix(detail: TripDetail, fix: Fix, days: DaySheet[]): FixE
     case 'add-battery': {
       const extraAh = num(fix.params.extraAh);
       if (extraAh === null) return null;
-      return { kind: 'rig', rig: { ...rig, battery: { ...rig.battery, capacityAh: rig.battery.capacityAh + extraAh } }, summary: `Battery +${extraAh} Ah` };
+      return {
+        kind: 'rig',
+        rig: { ...rig, battery: { ...rig.battery, capacityAh: rig.battery.capacityAh + extraAh } },
+        summary: `Battery +${extraAh} Ah`,
+      };
     }
     case 'add-solar': {
       const extraW = num(fix.params.extraW);
       const first = rig.solarArrays[0];
       if (extraW === null || !first) return null;
-      return { kind: 'rig', rig: { ...rig, solarArrays: [{ ...first, ratedW: first.ratedW + extraW }, ...rig.solarArrays.slice(1)] }, summary: `Solar +${extraW} W` };
+      return {
+        kind: 'rig',
+        rig: { ...rig, solarArrays: [{ ...first, ratedW: first.ratedW + extraW }, ...rig.solarArrays.slice(1)] },
+        summary: `Solar +${extraW} W`,
+      };
     }
     case 'larger-inverter': {
       const ratedW = num(fix.params.ratedW);
@@ -69,17 +77,33 @@ export function editForFix(detail: TripDetail, fix: Fix, days: DaySheet[]): FixE
     case 'add-propane': {
       const extraKg = num(fix.params.extraKg);
       if (extraKg === null) return null;
-      return { kind: 'rig', rig: { ...rig, propaneTanks: [...rig.propaneTanks, { name: 'Extra cylinder', propaneKg: extraKg, fillPct: 100 }] }, summary: `Propane +${extraKg} kg` };
+      return {
+        kind: 'rig',
+        rig: {
+          ...rig,
+          propaneTanks: [...rig.propaneTanks, { name: 'Extra cylinder', propaneKg: extraKg, fillPct: 100 }],
+        },
+        summary: `Propane +${extraKg} kg`,
+      };
     }
     case 'keep-battery-warm':
-      return { kind: 'rig', rig: { ...rig, battery: { ...rig.battery, heatedSpace: true } }, summary: 'Battery kept in the heated space' };
+      return {
+        kind: 'rig',
+        rig: { ...rig, battery: { ...rig.battery, heatedSpace: true } },
+        summary: 'Battery kept in the heated space',
+      };
     case 'add-hookup-night': {
       const stopIndex = num(fix.params.stopIndex);
       const amps = num(fix.params.amps);
       const volts = num(fix.params.volts);
       const record = stopIndex === null ? undefined : detail.stops[stopIndex];
       if (!record || amps === null || volts === null) return null;
-      return { kind: 'stop', record, stop: { ...record.stop, hookup: { amps, volts } }, summary: `Hookup at ${record.stop.name}` };
+      return {
+        kind: 'stop',
+        record,
+        stop: { ...record.stop, hookup: { amps, volts } },
+        summary: `Hookup at ${record.stop.name}`,
+      };
     }
     case 'add-generator-hours':
       return generatorEdit(detail, fix, days);

@@ -25,9 +25,18 @@ export function BudgetScreen({ detail }: { detail: TripDetail }) {
   const { apply, busy } = useApplyEdit(detail.trip.id);
   const canEdit = can(detail.trip.role, 'editTrip');
 
-  const whatIf = <WhatIfPanel detail={detail} canEdit={canEdit} busyKey={busy} lowestNow={view.state === 'ready' ? view.result.headline.lowestSocPct : undefined} onKeep={async (key) => {
-    if (await apply(`keep-${key}`, editsForWhatIf(detail, key), detail.rig.version)) clearWhatIf(detail.trip.id, key);
-  }} />;
+  const whatIf = (
+    <WhatIfPanel
+      detail={detail}
+      canEdit={canEdit}
+      busyKey={busy}
+      lowestNow={view.state === 'ready' ? view.result.headline.lowestSocPct : undefined}
+      onKeep={async (key) => {
+        if (await apply(`keep-${key}`, editsForWhatIf(detail, key), detail.rig.version))
+          clearWhatIf(detail.trip.id, key);
+      }}
+    />
+  );
 
   if (view.state === 'loading') {
     return (
@@ -47,7 +56,11 @@ export function BudgetScreen({ detail }: { detail: TripDetail }) {
   if (view.state === 'empty') {
     return (
       <TabScroll testID="budget-screen">
-        <EmptyState testID="budget-empty" title="No budget yet" body={`${view.reason} Open the Route tab to add stops, then Loads for appliances.`} />
+        <EmptyState
+          testID="budget-empty"
+          title="No budget yet"
+          body={`${view.reason} Open the Route tab to add stops, then Loads for appliances.`}
+        />
         {whatIf}
       </TabScroll>
     );
@@ -55,7 +68,13 @@ export function BudgetScreen({ detail }: { detail: TripDetail }) {
   const { result } = view;
   return (
     <TabScroll testID="budget-screen">
-      {view.whatIf ? <Banner testID="what-if-banner" tone="info" message="Showing a what-if: these figures are not saved. Keep the change below, or discard it." /> : null}
+      {view.whatIf ? (
+        <Banner
+          testID="what-if-banner"
+          tone="info"
+          message="Showing a what-if: these figures are not saved. Keep the change below, or discard it."
+        />
+      ) : null}
       <HeadlineFigures headline={result.headline} units={units} />
       <Panes
         main={
@@ -72,7 +91,11 @@ export function BudgetScreen({ detail }: { detail: TripDetail }) {
               days={result.days}
               detail={detail}
               canEdit={canEdit && !view.whatIf}
-              readOnlyReason={!canEdit ? 'Only the trip owner or a planner can apply fixes.' : 'Fixes can be applied once the what-ifs are kept or discarded.'}
+              readOnlyReason={
+                !canEdit
+                  ? 'Only the trip owner or a planner can apply fixes.'
+                  : 'Fixes can be applied once the what-ifs are kept or discarded.'
+              }
               busyKey={busy}
               onApply={(key, flag, i) => {
                 const fix = flag.fixes[i];

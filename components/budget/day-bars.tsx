@@ -33,11 +33,20 @@ export function DayBars({ days }: { days: DaySheet[] }) {
           const other = d.hookupWh + d.vehicleWh + d.generatorWh;
           const label = `${localDay(`${d.date}T12:00`)}: solar ${text(energy(d.harvestWh))}, other charging ${text(energy(other))}, use ${text(energy(d.useWh))}`;
           return (
-            <View key={d.dayIndex} style={styles.day} role="listitem" accessible accessibilityLabel={label} testID={`day-bar-${d.dayIndex}`}>
+            <View
+              key={d.dayIndex}
+              style={styles.day}
+              role="listitem"
+              accessible
+              accessibilityLabel={label}
+              testID={`day-bar-${d.dayIndex}`}
+            >
               <View style={styles.bars}>
                 <View style={styles.stack}>
                   <View style={[styles.bar, { height: (other / max) * BAR_HEIGHT, backgroundColor: colors.lake }]} />
-                  <View style={[styles.bar, { height: (d.harvestWh / max) * BAR_HEIGHT, backgroundColor: colors.sunlit }]} />
+                  <View
+                    style={[styles.bar, { height: (d.harvestWh / max) * BAR_HEIGHT, backgroundColor: colors.sunlit }]}
+                  />
                 </View>
                 <View style={[styles.bar, styles.use, { height: (d.useWh / max) * BAR_HEIGHT }]} />
               </View>

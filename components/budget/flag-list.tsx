@@ -30,7 +30,9 @@ type Props = {
 
 export function FlagList({ flags, days, detail, canEdit, readOnlyReason, busyKey, onApply }: Props) {
   const where = (f: Flag) =>
-    f.where.kind === 'stop' ? (detail.stops[f.where.stopIndex]?.stop.name ?? `stop ${f.where.stopIndex + 1}`) : `drive ${f.where.driveIndex + 1}`;
+    f.where.kind === 'stop'
+      ? (detail.stops[f.where.stopIndex]?.stop.name ?? `stop ${f.where.stopIndex + 1}`)
+      : `drive ${f.where.driveIndex + 1}`;
   const hasGeneratorFix = flags.some((f) => f.fixes.some((x) => x.kind === 'add-generator-hours'));
   return (
     <Card testID="flag-list">
@@ -43,7 +45,14 @@ export function FlagList({ flags, days, detail, canEdit, readOnlyReason, busyKey
         </Text>
       ) : null}
       {flags.map((flag) => (
-        <View key={flag.id} style={[styles.flag, flag.severity === 'danger' ? styles.danger : flag.severity === 'warning' ? styles.warning : styles.info]} testID={`flag-${flag.id}`}>
+        <View
+          key={flag.id}
+          style={[
+            styles.flag,
+            flag.severity === 'danger' ? styles.danger : flag.severity === 'warning' ? styles.warning : styles.info,
+          ]}
+          testID={`flag-${flag.id}`}
+        >
           <Text variant="label" color={flag.severity === 'danger' ? 'ember' : 'ink'}>
             {FLAG_TITLE[flag.kind]} · {flag.size.value.toLocaleString('en-GB')} {flag.size.unit}
           </Text>

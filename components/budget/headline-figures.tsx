@@ -19,17 +19,39 @@ export function HeadlineFigures({ headline, units }: { headline: Headline; units
         note={`${localMoment(headline.lowestAtLocal)} · reserve ${Math.round(headline.reservePct)}%`}
         color={belowReserve ? 'ember' : 'pine'}
       />
-      <Figure testID="figure-short" label="Energy short" figure={energy(headline.energyShortWh)} color={headline.energyShortWh > 0 ? 'ember' : 'ink'} />
+      <Figure
+        testID="figure-short"
+        label="Energy short"
+        figure={energy(headline.energyShortWh)}
+        color={headline.energyShortWh > 0 ? 'ember' : 'ink'}
+      />
       <Figure
         testID="figure-generator"
         label="Generator"
         figure={hours(headline.generatorHours)}
-        note={fuel ? `${fuelAmount(fuel.amount, fuel.unit, units).value} ${fuelAmount(fuel.amount, fuel.unit, units).unit} ${fuel.fuel}` : 'no generator'}
+        note={
+          fuel
+            ? `${fuelAmount(fuel.amount, fuel.unit, units).value} ${fuelAmount(fuel.amount, fuel.unit, units).unit} ${fuel.fuel}`
+            : 'no generator'
+        }
       />
-      <Figure testID="figure-propane" label="Propane left" figure={mass(headline.propaneLeftKg, units)} note={`of ${mass(headline.propaneStartKg, units).value} ${mass(headline.propaneStartKg, units).unit}`} />
-      <Figure testID="figure-wasted" label="Solar wasted" figure={energy(headline.solarWastedWh)} note={`${energy(headline.solarUsedWh).value} ${energy(headline.solarUsedWh).unit} used`} color="ink" />
+      <Figure
+        testID="figure-propane"
+        label="Propane left"
+        figure={mass(headline.propaneLeftKg, units)}
+        note={`of ${mass(headline.propaneStartKg, units).value} ${mass(headline.propaneStartKg, units).unit}`}
+      />
+      <Figure
+        testID="figure-wasted"
+        label="Solar wasted"
+        figure={energy(headline.solarWastedWh)}
+        note={`${energy(headline.solarUsedWh).value} ${energy(headline.solarUsedWh).unit} used`}
+        color="ink"
+      />
     </Card>
   );
 }
 
-const styles = StyleSheet.create({ card: { flexDirection: 'row', flexWrap: 'wrap', columnGap: space.lg, rowGap: space.lg } });
+const styles = StyleSheet.create({
+  card: { flexDirection: 'row', flexWrap: 'wrap', columnGap: space.lg, rowGap: space.lg },
+});

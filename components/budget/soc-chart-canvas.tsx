@@ -50,7 +50,15 @@ export default function SocChartCanvas({ series, height, selected, onSelect }: S
           labelColor: colors.inkSoft,
           lineColor: colors.line,
         }}
-        yAxis={[{ font, tickValues: [0, 25, 50, 75, 100], formatYLabel: (y) => `${y}%`, labelColor: colors.inkSoft, lineColor: colors.line }]}
+        yAxis={[
+          {
+            font,
+            tickValues: [0, 25, 50, 75, 100],
+            formatYLabel: (y) => `${y}%`,
+            labelColor: colors.inkSoft,
+            lineColor: colors.line,
+          },
+        ]}
         frame={{ lineColor: colors.line, lineWidth: 0 }}
       >
         {({ points: p, chartBounds, yScale, xScale }) => {
@@ -58,29 +66,67 @@ export default function SocChartCanvas({ series, height, selected, onSelect }: S
           const sel = selected === null ? null : p.soc[selected];
           return (
             <>
-              <AreaRange upperPoints={p.better} lowerPoints={p.worse} color={colors.sunlit} opacity={0.28} curveType="linear" />
+              <AreaRange
+                upperPoints={p.better}
+                lowerPoints={p.worse}
+                color={colors.sunlit}
+                opacity={0.28}
+                curveType="linear"
+              />
               <Area points={p.soc} y0={chartBounds.bottom} color={colors.pine} opacity={0.22} curveType="linear" />
               <ChartLine points={p.soc} color={colors.pine} strokeWidth={2.5} curveType="linear" />
-              <Line p1={vec(chartBounds.left, reserveY)} p2={vec(chartBounds.right, reserveY)} color={colors.ember} strokeWidth={1.5}>
+              <Line
+                p1={vec(chartBounds.left, reserveY)}
+                p2={vec(chartBounds.right, reserveY)}
+                color={colors.ember}
+                strokeWidth={1.5}
+              >
                 <DashPathEffect intervals={[6, 5]} />
               </Line>
-              {font ? <SkText x={chartBounds.left + 6} y={reserveY - 5} text={`reserve ${Math.round(reservePct)}%`} font={font} color={colors.ember} /> : null}
+              {font ? (
+                <SkText
+                  x={chartBounds.left + 6}
+                  y={reserveY - 5}
+                  text={`reserve ${Math.round(reservePct)}%`}
+                  font={font}
+                  color={colors.ember}
+                />
+              ) : null}
               {stops.map((s) => {
                 const x = xScale(s.x);
                 return (
-                  <Line key={`stop-${s.x}`} p1={vec(x, chartBounds.top)} p2={vec(x, chartBounds.bottom)} color={colors.lake} strokeWidth={1} opacity={0.55}>
+                  <Line
+                    key={`stop-${s.x}`}
+                    p1={vec(x, chartBounds.top)}
+                    p2={vec(x, chartBounds.bottom)}
+                    color={colors.lake}
+                    strokeWidth={1}
+                    opacity={0.55}
+                  >
                     <DashPathEffect intervals={[2, 4]} />
                   </Line>
                 );
               })}
               {font
                 ? stops.map((s) => (
-                    <SkText key={`stop-label-${s.x}`} x={xScale(s.x) + 4} y={chartBounds.top + 14} text={`${s.stopIndex + 1}`} font={font} color={colors.lake} />
+                    <SkText
+                      key={`stop-label-${s.x}`}
+                      x={xScale(s.x) + 4}
+                      y={chartBounds.top + 14}
+                      text={`${s.stopIndex + 1}`}
+                      font={font}
+                      color={colors.lake}
+                    />
                   ))
                 : null}
               {sel && sel.y !== null && sel.y !== undefined ? (
                 <>
-                  <Line p1={vec(sel.x, chartBounds.top)} p2={vec(sel.x, chartBounds.bottom)} color={colors.ink} strokeWidth={1} />
+                  <Line
+                    p1={vec(sel.x, chartBounds.top)}
+                    p2={vec(sel.x, chartBounds.bottom)}
+                    color={colors.ink}
+                    strokeWidth={1}
+                  />
                   <Circle cx={sel.x} cy={sel.y} r={5} color={colors.ink} />
                 </>
               ) : null}

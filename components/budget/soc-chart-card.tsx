@@ -17,7 +17,13 @@ type Props = { result: SimulationResult; stops: StopRecord[] };
 function Legend({ color, label, dashed }: { color: string; label: string; dashed?: boolean }) {
   return (
     <View style={styles.legendItem}>
-      <View style={[styles.swatch, { backgroundColor: dashed ? 'transparent' : color, borderColor: color }, dashed ? styles.dashed : null]} />
+      <View
+        style={[
+          styles.swatch,
+          { backgroundColor: dashed ? 'transparent' : color, borderColor: color },
+          dashed ? styles.dashed : null,
+        ]}
+      />
       <Text variant="caption" color="inkSoft">
         {label}
       </Text>
@@ -69,8 +75,9 @@ export function SocChartCard({ result, stops }: Props) {
           <>
             <Text variant="label">{localMoment(row.local)}</Text>
             <Text variant="caption" color="inkSoft">
-              {row.where.kind === 'stop' ? stopName(row.where.stopIndex) : 'On the road'} · charge {text(percent(row.socPct))} · solar{' '}
-              {text(energy(row.solarUsedWh))} · use {text(energy(row.acLoadWh + row.dcLoadWh))}
+              {row.where.kind === 'stop' ? stopName(row.where.stopIndex) : 'On the road'} · charge{' '}
+              {text(percent(row.socPct))} · solar {text(energy(row.solarUsedWh))} · use{' '}
+              {text(energy(row.acLoadWh + row.dcLoadWh))}
               {row.hookupWh > 0 ? ` · hookup ${text(energy(row.hookupWh))}` : ''}
               {row.generatorWh > 0 ? ` · generator ${text(energy(row.generatorWh))}` : ''}
               {row.energyShortWh > 0 ? ` · short ${text(energy(row.energyShortWh))}` : ''}
@@ -83,8 +90,20 @@ export function SocChartCard({ result, stops }: Props) {
         )}
       </View>
       <View style={styles.stepRow}>
-        <Button testID="soc-prev-hour" label="‹ Hour" tone="secondary" accessibilityLabel="Previous hour" onPress={() => step(-1)} />
-        <Button testID="soc-next-hour" label="Hour ›" tone="secondary" accessibilityLabel="Next hour" onPress={() => step(1)} />
+        <Button
+          testID="soc-prev-hour"
+          label="‹ Hour"
+          tone="secondary"
+          accessibilityLabel="Previous hour"
+          onPress={() => step(-1)}
+        />
+        <Button
+          testID="soc-next-hour"
+          label="Hour ›"
+          tone="secondary"
+          accessibilityLabel="Next hour"
+          onPress={() => step(1)}
+        />
       </View>
     </Card>
   );

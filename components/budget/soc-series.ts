@@ -36,7 +36,12 @@ export function socSeries(result: SimulationResult, maxTicks = 12): SocSeries {
     }
   });
   const every = Math.max(1, Math.ceil(dayTicks.length / Math.max(1, maxTicks)));
-  return { points, stops, dayTicks: dayTicks.filter((_, i) => i % every === 0), reservePct: result.headline.reservePct };
+  return {
+    points,
+    stops,
+    dayTicks: dayTicks.filter((_, i) => i % every === 0),
+    reservePct: result.headline.reservePct,
+  };
 }
 
 /** Nearest ledger index for a horizontal position inside the plot area. */

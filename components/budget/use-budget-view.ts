@@ -20,10 +20,13 @@ export function useBudgetView(detail: TripDetail): BudgetView {
     const input = toEngineInput(detail);
     if (!input) return { state: 'empty', reason: 'Add a stop to see a budget.' };
     const sim = simulateCached(applyWhatIf(input, whatIf));
-    return sim.result ? { state: 'ready', result: sim.result, whatIf: true } : { state: 'empty', reason: sim.error ?? '' };
+    return sim.result
+      ? { state: 'ready', result: sim.result, whatIf: true }
+      : { state: 'empty', reason: sim.error ?? '' };
   }
   if (budget.isPending) return { state: 'loading' };
   if (budget.isError) return { state: 'error', error: budget.error, retry: () => void budget.refetch() };
-  if (!budget.data.result) return { state: 'empty', reason: budget.data.reason ?? 'Add a stop and an appliance to see a budget.' };
+  if (!budget.data.result)
+    return { state: 'empty', reason: budget.data.reason ?? 'Add a stop and an appliance to see a budget.' };
   return { state: 'ready', result: budget.data.result, whatIf: false };
 }

@@ -22,13 +22,29 @@ export function editsForWhatIf(detail: TripDetail, key: WhatIfKey): FixEdit[] {
     case 'skipHookup':
       return detail.stops
         .filter((r) => r.stop.hookup !== null)
-        .map((r) => ({ kind: 'stop' as const, record: r, stop: stopWithoutHookup(r.stop) as TripDetail['stops'][number]['stop'], summary: `no hookup at ${r.stop.name}` }));
+        .map((r) => ({
+          kind: 'stop' as const,
+          record: r,
+          stop: stopWithoutHookup(r.stop) as TripDetail['stops'][number]['stop'],
+          summary: `no hookup at ${r.stop.name}`,
+        }));
     case 'worseSky':
-      return detail.stops.map((r) => ({ kind: 'stop' as const, record: r, stop: stopWithWorseSky(r.stop) as TripDetail['stops'][number]['stop'], summary: `sky at ${r.stop.name}` }));
+      return detail.stops.map((r) => ({
+        kind: 'stop' as const,
+        record: r,
+        stop: stopWithWorseSky(r.stop) as TripDetail['stops'][number]['stop'],
+        summary: `sky at ${r.stop.name}`,
+      }));
   }
 }
 
-type Props = { detail: TripDetail; canEdit: boolean; busyKey: string | null; onKeep: (key: WhatIfKey) => void; lowestNow?: number };
+type Props = {
+  detail: TripDetail;
+  canEdit: boolean;
+  busyKey: string | null;
+  onKeep: (key: WhatIfKey) => void;
+  lowestNow?: number;
+};
 
 export function WhatIfPanel({ detail, canEdit, busyKey, onKeep, lowestNow }: Props) {
   const saved = useBudgetQuery(detail.trip.id).data?.result?.headline.lowestSocPct;
@@ -74,7 +90,14 @@ export function WhatIfPanel({ detail, canEdit, busyKey, onKeep, lowestNow }: Pro
               </View>
             </Pressable>
             {on && canEdit ? (
-              <Button testID={`what-if-keep-${key}`} label="Keep this change" tone="primary" busy={busyKey === `keep-${key}`} disabled={busyKey !== null} onPress={() => onKeep(key)} />
+              <Button
+                testID={`what-if-keep-${key}`}
+                label="Keep this change"
+                tone="primary"
+                busy={busyKey === `keep-${key}`}
+                disabled={busyKey !== null}
+                onPress={() => onKeep(key)}
+              />
             ) : null}
           </View>
         );
@@ -82,10 +105,13 @@ export function WhatIfPanel({ detail, canEdit, busyKey, onKeep, lowestNow }: Pro
       {active && lowestNow !== undefined ? (
         // Repeated here because on a phone the headline figures are far above this panel.
         <Text variant="label" testID="what-if-result" aria-live="polite">
-          Lowest charge with these changes: {Math.round(lowestNow)}%{saved !== undefined ? ` (saved plan: ${Math.round(saved)}%)` : ''}
+          Lowest charge with these changes: {Math.round(lowestNow)}%
+          {saved !== undefined ? ` (saved plan: ${Math.round(saved)}%)` : ''}
         </Text>
       ) : null}
-      {active ? <Button testID="what-if-discard" label="Discard what-ifs" tone="quiet" onPress={() => clearWhatIf(tripId)} /> : null}
+      {active ? (
+        <Button testID="what-if-discard" label="Discard what-ifs" tone="quiet" onPress={() => clearWhatIf(tripId)} />
+      ) : null}
     </Card>
   );
 }
@@ -93,9 +119,23 @@ export function WhatIfPanel({ detail, canEdit, busyKey, onKeep, lowestNow }: Pro
 const styles = StyleSheet.create({
   activeCard: { borderColor: colors.sunlit, borderWidth: 2 },
   head: { flexDirection: 'row', alignItems: 'center', gap: space.sm },
-  badge: { backgroundColor: colors.emberInk, borderRadius: radii.pill, paddingHorizontal: space.sm, paddingVertical: 2 },
+  badge: {
+    backgroundColor: colors.emberInk,
+    borderRadius: radii.pill,
+    paddingHorizontal: space.sm,
+    paddingVertical: 2,
+  },
   row: { gap: space.sm },
-  toggle: { flexDirection: 'row', alignItems: 'center', gap: space.md, minHeight: 52, padding: space.sm, borderRadius: radii.md, borderWidth: 1, borderColor: colors.line },
+  toggle: {
+    flexDirection: 'row',
+    alignItems: 'center',
+    gap: space.md,
+    minHeight: 52,
+    padding: space.sm,
+    borderRadius: radii.md,
+    borderWidth: 1,
+    borderColor: colors.line,
+  },
   toggleOn: { borderColor: colors.pine, backgroundColor: colors.pineSoft },
   toggleText: { flex: 1 },
   knob: { width: 22, height: 22, borderRadius: 11, borderWidth: 2, borderColor: colors.mist },

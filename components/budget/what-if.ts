@@ -24,7 +24,8 @@ export function rigWithExtraBattery(rig: RigInput): RigInput {
 
 export function rigWithExtraSolar(rig: RigInput): RigInput {
   const arrays = rig.solarArrays ?? [];
-  if (arrays.length > 0) return { ...rig, solarArrays: arrays.map((a) => ({ ...a, ratedW: Math.round(a.ratedW * WHAT_IF_SCALE) })) };
+  if (arrays.length > 0)
+    return { ...rig, solarArrays: arrays.map((a) => ({ ...a, ratedW: Math.round(a.ratedW * WHAT_IF_SCALE) })) };
   const amps = Math.ceil(ADDED_SOLAR_W / rig.battery.nominalV / 5) * 5;
   return {
     ...rig,
@@ -34,7 +35,10 @@ export function rigWithExtraSolar(rig: RigInput): RigInput {
 }
 
 export const stopWithoutHookup = (stop: StopInput): StopInput => ({ ...stop, hookup: null });
-export const stopWithWorseSky = (stop: StopInput): StopInput => ({ ...stop, skyOutlook: shiftSky(stop.skyOutlook ?? 'clear', 1) });
+export const stopWithWorseSky = (stop: StopInput): StopInput => ({
+  ...stop,
+  skyOutlook: shiftSky(stop.skyOutlook ?? 'clear', 1),
+});
 
 export function applyWhatIf(input: EngineInputDraft, w: WhatIf): EngineInputDraft {
   let rig = input.rig;

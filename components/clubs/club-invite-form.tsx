@@ -50,14 +50,20 @@ export function ClubInviteForm({ clubId }: { clubId: string }) {
     setFormError(undefined);
     if (!addresses.trim() && !csv) return setFieldError('Paste some addresses or choose a CSV file.');
     try {
-      const result = await invite.mutateAsync({ ...(addresses.trim() ? { addresses } : {}), ...(csv ? { csv: csv.text } : {}) });
+      const result = await invite.mutateAsync({
+        ...(addresses.trim() ? { addresses } : {}),
+        ...(csv ? { csv: csv.text } : {}),
+      });
       setReport(result);
       showToast(`${result.sent.length} ${result.sent.length === 1 ? 'invite' : 'invites'} sent.`);
       // Keep only what failed in the box, so nothing typed is lost and the rest is not sent twice.
       setAddresses(result.rejected.map((row) => row.value).join('\n'));
       setCsv(undefined);
     } catch (error) {
-      const message = error instanceof ApiError ? (error.fields?.addresses?.[0] ?? error.message) : 'That did not work. Please try again.';
+      const message =
+        error instanceof ApiError
+          ? (error.fields?.addresses?.[0] ?? error.message)
+          : 'That did not work. Please try again.';
       if (error instanceof ApiError && error.fields?.addresses) setFieldError(message);
       else setFormError(message);
     }
@@ -83,14 +89,26 @@ export function ClubInviteForm({ clubId }: { clubId: string }) {
         {csv ? (
           <View style={styles.file} testID="club-invite-csv-chosen">
             <Text variant="caption">{csv.name}</Text>
-            <Button testID="club-invite-csv-clear" label="Remove" accessibilityLabel={`Remove ${csv.name}`} tone="quiet" onPress={() => setCsv(undefined)} />
+            <Button
+              testID="club-invite-csv-clear"
+              label="Remove"
+              accessibilityLabel={`Remove ${csv.name}`}
+              tone="quiet"
+              onPress={() => setCsv(undefined)}
+            />
           </View>
         ) : null}
       </View>
       <Text variant="caption" color="inkSoft">
         CSV: one household per row, name then e-mail (a header row is fine).
       </Text>
-      <Button testID="club-invite-submit" label="Send invites" busy={invite.isPending} onPress={() => void send()} style={styles.submit} />
+      <Button
+        testID="club-invite-submit"
+        label="Send invites"
+        busy={invite.isPending}
+        onPress={() => void send()}
+        style={styles.submit}
+      />
       {report ? <Report report={report} /> : null}
     </View>
   );
@@ -102,6 +120,13 @@ const styles = StyleSheet.create({
   row: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.sm },
   file: { flexDirection: 'row', alignItems: 'center', gap: space.xs },
   submit: { alignSelf: 'flex-start' },
-  report: { gap: space.sm, padding: space.md, borderRadius: radii.md, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.dune },
+  report: {
+    gap: space.sm,
+    padding: space.md,
+    borderRadius: radii.md,
+    borderWidth: 1,
+    borderColor: colors.line,
+    backgroundColor: colors.dune,
+  },
   rejected: { gap: space.xs },
 });

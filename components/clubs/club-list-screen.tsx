@@ -59,10 +59,16 @@ export function ClubListScreen() {
       testID="clubs-screen"
       title="Clubs"
       subtitle="Share a rally plan with many households; each copies it onto their own rig."
-      actions={!none && !creating ? <Button testID="clubs-new" label="Create a club" tone="secondary" onPress={() => setCreating(true)} /> : null}
+      actions={
+        !none && !creating ? (
+          <Button testID="clubs-new" label="Create a club" tone="secondary" onPress={() => setCreating(true)} />
+        ) : null
+      }
     >
       {clubs.isPending ? <Skeleton testID="clubs-loading" height={120} /> : null}
-      {clubs.isError ? <QueryError testID="clubs-error" error={clubs.error} onRetry={() => void clubs.refetch()} /> : null}
+      {clubs.isError ? (
+        <QueryError testID="clubs-error" error={clubs.error} onRetry={() => void clubs.refetch()} />
+      ) : null}
       {none ? (
         <EmptyState
           testID="clubs-empty"
@@ -94,5 +100,12 @@ const styles = StyleSheet.create({
     backgroundColor: colors.card,
   },
   cardWide: { width: 340 },
-  pill: { alignSelf: 'flex-start', backgroundColor: colors.pineSoft, borderRadius: radii.pill, paddingHorizontal: space.md, paddingVertical: space.xs, marginTop: space.xs },
+  pill: {
+    alignSelf: 'flex-start',
+    backgroundColor: colors.pineSoft,
+    borderRadius: radii.pill,
+    paddingHorizontal: space.md,
+    paddingVertical: space.xs,
+    marginTop: space.xs,
+  },
 });

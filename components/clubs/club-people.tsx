@@ -66,8 +66,28 @@ export function ClubPendingInvites({ detail }: { detail: ClubDetail }) {
 }
 
 const styles = StyleSheet.create({
-  row: { flexDirection: 'row', alignItems: 'center', gap: space.sm, paddingVertical: space.sm, borderBottomWidth: 1, borderBottomColor: colors.line },
-  invite: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.sm, paddingVertical: space.sm, borderBottomWidth: 1, borderBottomColor: colors.line },
+  row: {
+    flexDirection: 'row',
+    alignItems: 'center',
+    gap: space.sm,
+    paddingVertical: space.sm,
+    borderBottomWidth: 1,
+    borderBottomColor: colors.line,
+  },
+  invite: {
+    flexDirection: 'row',
+    flexWrap: 'wrap',
+    alignItems: 'center',
+    gap: space.sm,
+    paddingVertical: space.sm,
+    borderBottomWidth: 1,
+    borderBottomColor: colors.line,
+  },
   name: { flex: 1, minWidth: 160 },
-  pill: { backgroundColor: colors.pineSoft, borderRadius: radii.pill, paddingHorizontal: space.md, paddingVertical: space.xs },
+  pill: {
+    backgroundColor: colors.pineSoft,
+    borderRadius: radii.pill,
+    paddingHorizontal: space.md,
+    paddingVertical: space.xs,
+  },
 });

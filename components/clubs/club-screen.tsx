@@ -74,7 +74,11 @@ export function ClubScreen({ clubId }: { clubId: string }) {
     <Screen
       testID="club-screen"
       title={detail.club.name}
-      subtitle={organiser ? 'You organise this club.' : 'You are a member. Copy a shared trip onto your rig to check it against your own batteries.'}
+      subtitle={
+        organiser
+          ? 'You organise this club.'
+          : 'You are a member. Copy a shared trip onto your rig to check it against your own batteries.'
+      }
       actions={<BackLink />}
     >
       {side ? <Panes main={main} side={side} sideWidth={440} /> : main}

@@ -20,7 +20,11 @@ function TripRow({ clubId, trip, organiser }: { clubId: string; trip: SharedTrip
   const id = trip.tripId;
   return (
     <View style={styles.row} testID={`club-trip-${id}`}>
-      <Link href={{ pathname: '/trips/[tripId]', params: { tripId: id } }} testID={`club-trip-${id}-open`} accessibilityLabel={`Open the club's plan ${trip.name}`}>
+      <Link
+        href={{ pathname: '/trips/[tripId]', params: { tripId: id } }}
+        testID={`club-trip-${id}-open`}
+        accessibilityLabel={`Open the club's plan ${trip.name}`}
+      >
         <Text variant="title" color="ink">
           {trip.name}
         </Text>
@@ -30,14 +34,20 @@ function TripRow({ clubId, trip, organiser }: { clubId: string; trip: SharedTrip
         {trip.sharedByName ? ` · shared by ${trip.sharedByName}` : ''}
       </Text>
       <Text variant="caption" color="pine" testID={`club-trip-${id}-copies`}>
-        {trip.copies === 0 ? 'No household has copied it yet' : `${trip.copies} ${trip.copies === 1 ? 'household has' : 'households have'} copied it`}
+        {trip.copies === 0
+          ? 'No household has copied it yet'
+          : `${trip.copies} ${trip.copies === 1 ? 'household has' : 'households have'} copied it`}
       </Text>
       {copying ? (
         <CopyOntoRig tripId={id} tripName={trip.name} onCancel={() => setCopying(false)} />
       ) : (
         <View style={styles.actions}>
           {trip.myCopyTripId ? (
-            <Link href={{ pathname: '/trips/[tripId]', params: { tripId: trip.myCopyTripId } }} testID={`club-trip-${id}-my-copy`} accessibilityLabel={`Open my copy of ${trip.name}`}>
+            <Link
+              href={{ pathname: '/trips/[tripId]', params: { tripId: trip.myCopyTripId } }}
+              testID={`club-trip-${id}-my-copy`}
+              accessibilityLabel={`Open my copy of ${trip.name}`}
+            >
               <Text variant="label" color="pine">
                 Open my copy ›
               </Text>
@@ -60,7 +70,8 @@ function TripRow({ clubId, trip, organiser }: { clubId: string; trip: SharedTrip
               onConfirm={() =>
                 unshare.mutate(id, {
                   onSuccess: () => showToast(`${trip.name} is no longer shared.`),
-                  onError: (e) => showToast(e instanceof ApiError ? e.message : 'That did not work.', { tone: 'danger' }),
+                  onError: (e) =>
+                    showToast(e instanceof ApiError ? e.message : 'That did not work.', { tone: 'danger' }),
                 })
               }
             />
@@ -77,7 +88,7 @@ export function ClubTrips({ detail }: { detail: ClubDetail }) {
     return (
       <Text color="inkSoft" testID="club-trips-empty">
         {organiser
-          ? "No trip shared yet. Open one of your trips, go to its People tab and choose “Share to a club”."
+          ? 'No trip shared yet. Open one of your trips, go to its People tab and choose “Share to a club”.'
           : 'The organiser has not shared a trip yet. When they do, you can copy it onto your own rig here.'}
       </Text>
     );

@@ -24,12 +24,14 @@ export function CopyOntoRig({ tripId, tripName, onCancel }: Props) {
   const [error, setError] = useState<string>();
   const testID = `copy-${tripId}`;
   if (rigs.isPending) return <Skeleton testID={`${testID}-loading`} height={48} />;
-  if (rigs.isError) return <QueryError testID={`${testID}-error`} error={rigs.error} onRetry={() => void rigs.refetch()} />;
+  if (rigs.isError)
+    return <QueryError testID={`${testID}-error`} error={rigs.error} onRetry={() => void rigs.refetch()} />;
   if (rigs.data.rigs.length === 0)
     return (
       <View style={styles.wrap} testID={`${testID}-no-rigs`}>
         <Text color="inkSoft">
-          You have no saved rig yet. Open one of your trips, go to its Rig tab and choose “Save to My rigs”; then come back and copy this plan onto it.
+          You have no saved rig yet. Open one of your trips, go to its Rig tab and choose “Save to My rigs”; then come
+          back and copy this plan onto it.
         </Text>
         <Button testID={`${testID}-cancel`} label="Close" tone="quiet" onPress={onCancel} style={styles.left} />
       </View>
@@ -59,7 +61,12 @@ export function CopyOntoRig({ tripId, tripName, onCancel }: Props) {
         onChange={setPicked}
       />
       <View style={styles.row}>
-        <Button testID={`${testID}-submit`} label="Copy onto this rig" busy={copy.isPending} onPress={() => void submit()} />
+        <Button
+          testID={`${testID}-submit`}
+          label="Copy onto this rig"
+          busy={copy.isPending}
+          onPress={() => void submit()}
+        />
         <Button testID={`${testID}-cancel`} label="Cancel" tone="quiet" onPress={onCancel} />
       </View>
     </View>

@@ -18,7 +18,10 @@ type Values = z.input<typeof createClubRequestSchema>;
 export function CreateClubForm({ onCreated }: { onCreated: (club: ClubSummary) => void }) {
   const create = useClubCreateMutation();
   const [formError, setFormError] = useState<string>();
-  const { control, handleSubmit, formState, setError } = useForm<Values>({ resolver: zodResolver(createClubRequestSchema), defaultValues: { name: '' } });
+  const { control, handleSubmit, formState, setError } = useForm<Values>({
+    resolver: zodResolver(createClubRequestSchema),
+    defaultValues: { name: '' },
+  });
   const submit = handleSubmit(async ({ name }) => {
     setFormError(undefined);
     try {
@@ -42,7 +45,13 @@ export function CreateClubForm({ onCreated }: { onCreated: (club: ClubSummary) =
         placeholder="e.g. Lochside Tourers"
         onSubmitEditing={submit}
       />
-      <Button testID="create-club-submit" label="Create club" busy={formState.isSubmitting} onPress={submit} style={styles.button} />
+      <Button
+        testID="create-club-submit"
+        label="Create club"
+        busy={formState.isSubmitting}
+        onPress={submit}
+        style={styles.button}
+      />
     </View>
   );
 }

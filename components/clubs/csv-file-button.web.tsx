@@ -18,7 +18,8 @@ export function CsvFileButton({ onLoaded, onError, disabled, testID }: CsvFileBu
       const file = input.files?.[0];
       input.remove();
       if (!file) return;
-      if (file.size > MAX_BYTES) return onError('That file is too large: split it into lists of a few hundred households.');
+      if (file.size > MAX_BYTES)
+        return onError('That file is too large: split it into lists of a few hundred households.');
       setReading(true);
       file
         .text()
@@ -30,5 +31,14 @@ export function CsvFileButton({ onLoaded, onError, disabled, testID }: CsvFileBu
     document.body.appendChild(input);
     input.click();
   };
-  return <Button testID={testID} label="Choose a CSV file" tone="secondary" busy={reading} disabled={disabled} onPress={choose} />;
+  return (
+    <Button
+      testID={testID}
+      label="Choose a CSV file"
+      tone="secondary"
+      busy={reading}
+      disabled={disabled}
+      onPress={choose}
+    />
+  );
 }

@@ -15,7 +15,9 @@ export function energy(wh: number): Figure {
 }
 
 export function power(w: number): Figure {
-  return Math.abs(w) >= 10_000 ? { value: grouped(w / 1000, 1), unit: 'kW' } : { value: grouped(Math.round(w), 0), unit: 'W' };
+  return Math.abs(w) >= 10_000
+    ? { value: grouped(w / 1000, 1), unit: 'kW' }
+    : { value: grouped(Math.round(w), 0), unit: 'W' };
 }
 
 export function percent(pct: number): Figure {

@@ -29,8 +29,19 @@ export function UnitsCard() {
         testID="units"
         label="Show figures in"
         value={units}
-        onChange={(v) => save.mutate({ units: v }, { onSuccess: () => showToast(v === 'us' ? 'Showing US units' : 'Showing metric units'), onError: () => showToast('Saved on this device only; the server did not answer.', { tone: 'danger' }) })}
-        options={[{ value: 'metric', label: 'Metric (°C, kg, L)' }, { value: 'us', label: 'US (°F, lb, gal)' }]}
+        onChange={(v) =>
+          save.mutate(
+            { units: v },
+            {
+              onSuccess: () => showToast(v === 'us' ? 'Showing US units' : 'Showing metric units'),
+              onError: () => showToast('Saved on this device only; the server did not answer.', { tone: 'danger' }),
+            },
+          )
+        }
+        options={[
+          { value: 'metric', label: 'Metric (°C, kg, L)' },
+          { value: 'us', label: 'US (°F, lb, gal)' },
+        ]}
       />
       <Text variant="caption" color="inkSoft">
         Electrical figures stay in watts, watt-hours, amps and volts in both.
@@ -41,12 +52,19 @@ export function UnitsCard() {
 
 const nameSchema = signUpSchema.pick({ name: true });
 const passwordSchema = z
-  .object({ currentPassword: z.string().min(1, { error: 'Enter your current password.' }), newPassword: signUpSchema.shape.password, confirm: z.string() })
+  .object({
+    currentPassword: z.string().min(1, { error: 'Enter your current password.' }),
+    newPassword: signUpSchema.shape.password,
+    confirm: z.string(),
+  })
   .refine((v) => v.newPassword === v.confirm, { message: 'The two new passwords differ.', path: ['confirm'] });
 
 export function NameCard({ name }: { name: string }) {
   const [error, setError] = useState<string>();
-  const { control, handleSubmit, formState } = useForm<z.infer<typeof nameSchema>>({ resolver: zodResolver(nameSchema), defaultValues: { name } });
+  const { control, handleSubmit, formState } = useForm<z.infer<typeof nameSchema>>({
+    resolver: zodResolver(nameSchema),
+    defaultValues: { name },
+  });
   const submit = handleSubmit(async (v) => {
     setError(undefined);
     const result = await authClient.updateUser({ name: v.name });
@@ -59,31 +77,77 @@ export function NameCard({ name }: { name: string }) {
         Your name
       </Text>
       {error ? <Banner testID="name-error" message={error} /> : null}
-      <Controller control={control} name="name" render={({ field, fieldState }) => (
-        <TextField testID="account-name" label="Name" value={field.value} onChangeText={field.onChange} onBlur={field.onBlur} error={fieldState.error?.message} onSubmitEditing={submit} />
-      )} />
-      <Button testID="account-name-save" label="Save name" busy={formState.isSubmitting} disabled={formState.isSubmitting} onPress={submit} />
+      <Controller
+        control={control}
+        name="name"
+        render={({ field, fieldState }) => (
+          <TextField
+            testID="account-name"
+            label="Name"
+            value={field.value}
+            onChangeText={field.onChange}
+            onBlur={field.onBlur}
+            error={fieldState.error?.message}
+            onSubmitEditing={submit}
+          />
+        )}
+      />
+      <Button
+        testID="account-name-save"
+        label="Save name"
+        busy={formState.isSubmitting}
+        disabled={formState.isSubmitting}
+        onPress={submit}
+      />
     </Card>
   );
 }
 
 export function PasswordCard() {
   const [error, setError] = useState<string>();
-  const { control, handleSubmit, formState, reset } = useForm<z.infer<typeof passwordSchema>>({ resolver: zodResolver(passwordSchema), defaultValues: { currentPassword: '', newPassword: '', confirm: '' } });
+  const { control, handleSubmit, formState, reset } = useForm<z.infer<typeof passwordSchema>>({
+    resolver: zodResolver(passwordSchema),
+    defaultValues: { currentPassword: '', newPassword: '', confirm: '' },
+  });
   const submit = handleSubmit(async (v) => {
     setError(undefined);
-    const result = await authClient.changePassword({ currentPassword: v.currentPassword, newPassword: v.newPassword, revokeOtherSessions: true });
+    const result = await authClient.changePassword({
+      currentPassword: v.currentPassword,
+      newPassword: v.newPassword,
+      revokeOtherSessions: true,
+    });
     if (result.error) {
-      setError(result.error.code === 'INVALID_PASSWORD' ? 'Your current password is not right.' : describeAuthError(result.error));
+      setError(
+        result.error.code === 'INVALID_PASSWORD'
+          ? 'Your current password is not right.'
+          : describeAuthError(result.error),
+      );
       return;
     }
     reset();
     showToast('Password changed; other devices were signed out');
   });
-  const field = (name: 'currentPassword' | 'newPassword' | 'confirm', label: string, autoComplete: 'current-password' | 'new-password') => (
-    <Controller control={control} name={name} render={({ field: f, fieldState }) => (
-      <TextField testID={`account-${name}`} label={label} secureTextEntry autoComplete={autoComplete} value={f.value} onChangeText={f.onChange} onBlur={f.onBlur} error={fieldState.error?.message} />
-    )} />
+  const field = (
+    name: 'currentPassword' | 'newPassword' | 'confirm',
+    label: string,
+    autoComplete: 'current-password' | 'new-password',
+  ) => (
+    <Controller
+      control={control}
+      name={name}
+      render={({ field: f, fieldState }) => (
+        <TextField
+          testID={`account-${name}`}
+          label={label}
+          secureTextEntry
+          autoComplete={autoComplete}
+          value={f.value}
+          onChangeText={f.onChange}
+          onBlur={f.onBlur}
+          error={fieldState.error?.message}
+        />
+      )}
+    />
   );
   return (
     <Card testID="password-card">
@@ -96,7 +160,13 @@ export function PasswordCard() {
         {field('newPassword', 'New password', 'new-password')}
         {field('confirm', 'New password again', 'new-password')}
       </View>
-      <Button testID="account-password-save" label="Change password" busy={formState.isSubmitting} disabled={formState.isSubmitting} onPress={submit} />
+      <Button
+        testID="account-password-save"
+        label="Change password"
+        busy={formState.isSubmitting}
+        disabled={formState.isSubmitting}
+        onPress={submit}
+      />
     </Card>
   );
 }

@@ -18,11 +18,17 @@ type ForgotInput = z.infer<typeof forgotSchema>;
 export function ForgotPasswordForm() {
   const [sentTo, setSentTo] = useState<string>();
   const [formError, setFormError] = useState<string>();
-  const { control, handleSubmit, formState } = useForm<ForgotInput>({ resolver: zodResolver(forgotSchema), defaultValues: { email: '' } });
+  const { control, handleSubmit, formState } = useForm<ForgotInput>({
+    resolver: zodResolver(forgotSchema),
+    defaultValues: { email: '' },
+  });
   const submit = handleSubmit(async ({ email }) => {
     setFormError(undefined);
     try {
-      const { error } = await authClient.requestPasswordReset({ email, redirectTo: `${window.location.origin}/reset-password` });
+      const { error } = await authClient.requestPasswordReset({
+        email,
+        redirectTo: `${window.location.origin}/reset-password`,
+      });
       if (error) return setFormError(describeAuthError(error));
       setSentTo(email);
     } catch {

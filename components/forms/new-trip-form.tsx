@@ -16,19 +16,28 @@ import { useMyRigsQuery, useRigPresetsQuery } from '@/stores/queries/rigs';
 import { useTripCreateMutation } from '@/stores/queries/trips';
 
 // The form holds the rig choice as one string ("preset:id" or "saved:id") so a single chip group can pick it.
-const formSchema = z.object({
-  name: z.string().trim().min(1, { error: 'Give the trip a name.' }).max(120),
-  startDate: z.iso.date({ error: 'Use a date like 2027-09-12.' }),
-  endDate: z.iso.date({ error: 'Use a date like 2027-09-19.' }),
-  timeZone: z.string().min(1, { error: 'Choose a time zone.' }),
-  rig: z.string().regex(/^(preset|saved):.+/, { error: 'Choose a rig to start from.' }),
-}).refine((v) => v.endDate >= v.startDate, { message: 'The trip must end on or after its first day.', path: ['endDate'] });
+const formSchema = z
+  .object({
+    name: z.string().trim().min(1, { error: 'Give the trip a name.' }).max(120),
+    startDate: z.iso.date({ error: 'Use a date like 2027-09-12.' }),
+    endDate: z.iso.date({ error: 'Use a date like 2027-09-19.' }),
+    timeZone: z.string().min(1, { error: 'Choose a time zone.' }),
+    rig: z.string().regex(/^(preset|saved):.+/, { error: 'Choose a rig to start from.' }),
+  })
+  .refine((v) => v.endDate >= v.startDate, {
+    message: 'The trip must end on or after its first day.',
+    path: ['endDate'],
+  });
 type FormValues = z.infer<typeof formSchema>;
 
 function toRequest(v: FormValues): CreateTripRequest {
   const [kind, id] = [v.rig.slice(0, v.rig.indexOf(':')), v.rig.slice(v.rig.indexOf(':') + 1)];
   return createTripRequestSchema.parse({
-    name: v.name, startDate: v.startDate, endDate: v.endDate, timeZone: v.timeZone, notes: '',
+    name: v.name,
+    startDate: v.startDate,
+    endDate: v.endDate,
+    timeZone: v.timeZone,
+    notes: '',
     rigSource: kind === 'saved' ? { kind: 'saved', rigId: id } : { kind: 'preset', presetId: id },
   });
 }
@@ -69,11 +78,24 @@ export function NewTripForm({ onCreated }: { onCreated: (detail: TripDetail) => 
     ...(presets.data?.presets ?? []).map((p) => ({ value: `preset:${p.id}`, label: p.label })),
   ];
   const text = (name: 'name' | 'startDate' | 'endDate' | 'timeZone', label: string, hint?: string) => (
-    <Controller control={control} name={name} render={({ field, fieldState }) => (
-      <View style={name === 'startDate' || name === 'endDate' ? styles.cell : null}>
-        <TextField testID={`new-trip-${name}`} label={label} hint={hint} value={field.value} onChangeText={field.onChange} onBlur={field.onBlur} error={fieldState.error?.message} onSubmitEditing={submit} />
-      </View>
-    )} />
+    <Controller
+      control={control}
+      name={name}
+      render={({ field, fieldState }) => (
+        <View style={name === 'startDate' || name === 'endDate' ? styles.cell : null}>
+          <TextField
+            testID={`new-trip-${name}`}
+            label={label}
+            hint={hint}
+            value={field.value}
+            onChangeText={field.onChange}
+            onBlur={field.onBlur}
+            error={fieldState.error?.message}
+            onSubmitEditing={submit}
+          />
+        </View>
+      )}
+    />
   );
   return (
     <View style={styles.form} testID="new-trip-form">
@@ -85,13 +107,33 @@ export function NewTripForm({ onCreated }: { onCreated: (detail: TripDetail) => 
       </View>
       {text('timeZone', 'Home time zone', 'an IANA name such as Europe/London')}
       {presets.isPending || mine.isPending ? <Skeleton testID="new-trip-rigs-loading" height={96} /> : null}
-      <Controller control={control} name="rig" render={({ field, fieldState }) => (
-        <View style={styles.rig}>
-          <ChoiceChips testID="new-trip-rig" label="Start from a rig (My rigs first, then common rigs)" value={field.value} onChange={field.onChange} options={rigOptions} />
-          {fieldState.error ? <Text variant="caption" color="ember" role="alert">{fieldState.error.message}</Text> : null}
-        </View>
-      )} />
-      <Button testID="new-trip-submit" label="Create trip" busy={formState.isSubmitting} disabled={formState.isSubmitting} onPress={submit} />
+      <Controller
+        control={control}
+        name="rig"
+        render={({ field, fieldState }) => (
+          <View style={styles.rig}>
+            <ChoiceChips
+              testID="new-trip-rig"
+              label="Start from a rig (My rigs first, then common rigs)"
+              value={field.value}
+              onChange={field.onChange}
+              options={rigOptions}
+            />
+            {fieldState.error ? (
+              <Text variant="caption" color="ember" role="alert">
+                {fieldState.error.message}
+              </Text>
+            ) : null}
+          </View>
+        )}
+      />
+      <Button
+        testID="new-trip-submit"
+        label="Create trip"
+        busy={formState.isSubmitting}
+        disabled={formState.isSubmitting}
+        onPress={submit}
+      />
     </View>
   );
 }

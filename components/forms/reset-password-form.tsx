@@ -18,13 +18,20 @@ type ResetInput = z.infer<typeof resetSchema>;
 
 export function ResetPasswordForm({ token, onDone }: { token: string; onDone: () => void }) {
   const [formError, setFormError] = useState<string>();
-  const { control, handleSubmit, formState } = useForm<ResetInput>({ resolver: zodResolver(resetSchema), defaultValues: { newPassword: '', repeat: '' } });
+  const { control, handleSubmit, formState } = useForm<ResetInput>({
+    resolver: zodResolver(resetSchema),
+    defaultValues: { newPassword: '', repeat: '' },
+  });
   const submit = handleSubmit(async ({ newPassword }) => {
     setFormError(undefined);
     try {
       const { error } = await authClient.resetPassword({ newPassword, token });
       if (!error) return onDone();
-      setFormError(error.status === 400 ? 'This reset link has expired or was already used. Ask for a new one.' : describeAuthError(error));
+      setFormError(
+        error.status === 400
+          ? 'This reset link has expired or was already used. Ask for a new one.'
+          : describeAuthError(error),
+      );
     } catch {
       setFormError(describeAuthError({}));
     }

@@ -7,7 +7,12 @@ import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { FormTextField } from '@/components/forms/form-text-field';
 
-type Props = { onSubmit: (values: SignInInput) => Promise<void>; formError?: string; defaultEmail?: string; submitLabel?: string };
+type Props = {
+  onSubmit: (values: SignInInput) => Promise<void>;
+  formError?: string;
+  defaultEmail?: string;
+  submitLabel?: string;
+};
 
 export function SignInForm({ onSubmit, formError, defaultEmail = '', submitLabel }: Props) {
   const { control, handleSubmit, formState } = useForm<SignInInput>({

@@ -7,7 +7,12 @@ import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { FormTextField } from '@/components/forms/form-text-field';
 
-type Props = { onSubmit: (values: SignUpInput) => Promise<void>; formError?: string; defaultEmail?: string; submitLabel?: string };
+type Props = {
+  onSubmit: (values: SignUpInput) => Promise<void>;
+  formError?: string;
+  defaultEmail?: string;
+  submitLabel?: string;
+};
 
 export function SignUpForm({ onSubmit, formError, defaultEmail = '', submitLabel }: Props) {
   const { control, handleSubmit, formState } = useForm<SignUpInput>({
@@ -18,13 +23,7 @@ export function SignUpForm({ onSubmit, formError, defaultEmail = '', submitLabel
   return (
     <View style={styles.form}>
       {formError ? <Banner testID="sign-up-error" message={formError} /> : null}
-      <FormTextField
-        control={control}
-        name="name"
-        testID="sign-up-name"
-        label="Your name"
-        autoComplete="name"
-      />
+      <FormTextField control={control} name="name" testID="sign-up-name" label="Your name" autoComplete="name" />
       <FormTextField
         control={control}
         name="email"
@@ -44,7 +43,12 @@ export function SignUpForm({ onSubmit, formError, defaultEmail = '', submitLabel
         secureTextEntry
         onSubmitEditing={submit}
       />
-      <Button testID="sign-up-submit" label={submitLabel ?? 'Create account'} busy={formState.isSubmitting} onPress={submit} />
+      <Button
+        testID="sign-up-submit"
+        label={submitLabel ?? 'Create account'}
+        busy={formState.isSubmitting}
+        onPress={submit}
+      />
     </View>
   );
 }

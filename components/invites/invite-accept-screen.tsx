@@ -11,12 +11,18 @@ import { Skeleton } from '@/components/ui/skeleton';
 import { Text } from '@/components/ui/text';
 import { authClient, useSession } from '@/stores/auth-client';
 import { ApiError } from '@/stores/queries/api-client';
-import { useInviteAcceptMutation, useInvitePreviewQuery, type AcceptResult, type InviteKind } from '@/stores/queries/invites';
+import {
+  useInviteAcceptMutation,
+  useInvitePreviewQuery,
+  type AcceptResult,
+  type InviteKind,
+} from '@/stores/queries/invites';
 import { showToast } from '@/stores/toast-store';
 import { INVALID_COPY, STATUS_COPY, whatFor } from './invite-copy';
 import { InviteAuthPanel } from './invite-auth-panel';
 
-const destination = (result: AcceptResult): Href => (result.kind === 'trip' ? `/trips/${result.tripId}` : `/clubs/${result.clubId}`);
+const destination = (result: AcceptResult): Href =>
+  result.kind === 'trip' ? `/trips/${result.tripId}` : `/clubs/${result.clubId}`;
 
 function Refusal({ title, body, testID }: { title: string; body: string; testID: string }) {
   return (
@@ -92,13 +98,24 @@ export function InviteAcceptScreen({ kind, token }: { kind: InviteKind; token: s
             ) : wrongAccount || refusal?.code === 'invite_wrong_account' ? (
               <View style={styles.gap} testID="invite-wrong-account">
                 <Text>
-                  You are signed in as {signedInEmail}, but this invite is for {invite.email}. Sign out, then sign in or create an account with
-                  the invited address.
+                  You are signed in as {signedInEmail}, but this invite is for {invite.email}. Sign out, then sign in or
+                  create an account with the invited address.
                 </Text>
-                <Button testID="invite-sign-out" label="Sign out" tone="secondary" busy={signingOut} onPress={() => void signOut()} />
+                <Button
+                  testID="invite-sign-out"
+                  label="Sign out"
+                  tone="secondary"
+                  busy={signingOut}
+                  onPress={() => void signOut()}
+                />
               </View>
             ) : (
-              <Button testID="invite-join" label={joinLabel} busy={accept.isPending || !!joined} onPress={() => void join()} />
+              <Button
+                testID="invite-join"
+                label={joinLabel}
+                busy={accept.isPending || !!joined}
+                onPress={() => void join()}
+              />
             )}
           </>
         )}

@@ -71,9 +71,21 @@ export function InviteAuthPanel({ email, joinLabel, onSignedIn }: Props) {
         }}
       />
       {mode === 'sign-up' ? (
-        <SignUpForm key="up" onSubmit={signUp} formError={formError} defaultEmail={email} submitLabel={`Create account and ${joinLabel.toLowerCase()}`} />
+        <SignUpForm
+          key="up"
+          onSubmit={signUp}
+          formError={formError}
+          defaultEmail={email}
+          submitLabel={`Create account and ${joinLabel.toLowerCase()}`}
+        />
       ) : (
-        <SignInForm key="in" onSubmit={signIn} formError={formError} defaultEmail={email} submitLabel={`Sign in and ${joinLabel.toLowerCase()}`} />
+        <SignInForm
+          key="in"
+          onSubmit={signIn}
+          formError={formError}
+          defaultEmail={email}
+          submitLabel={`Sign in and ${joinLabel.toLowerCase()}`}
+        />
       )}
     </View>
   );

@@ -9,4 +9,6 @@ export function LoadingScreen() {
   );
 }
 
-const styles = StyleSheet.create({ root: { flex: 1, alignItems: 'center', justifyContent: 'center', backgroundColor: colors.dune } });
+const styles = StyleSheet.create({
+  root: { flex: 1, alignItems: 'center', justifyContent: 'center', backgroundColor: colors.dune },
+});

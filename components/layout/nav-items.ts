@@ -13,7 +13,13 @@ export const NAV_ITEMS: NavItem[] = [
   { href: '/', label: 'Trips', testID: 'nav-trips', match: (path) => path === '/' || path.startsWith('/trips') },
   { href: '/clubs', label: 'Clubs', testID: 'nav-clubs', match: (path) => path.startsWith('/clubs') },
   { href: '/account', label: 'Account', testID: 'nav-account', match: (path) => path.startsWith('/account') },
-  { href: '/outbox', label: 'Outbox', testID: 'nav-outbox', match: (path) => path.startsWith('/outbox'), devOnly: true },
+  {
+    href: '/outbox',
+    label: 'Outbox',
+    testID: 'nav-outbox',
+    match: (path) => path.startsWith('/outbox'),
+    devOnly: true,
+  },
 ];
 
 /**

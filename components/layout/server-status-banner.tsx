@@ -16,7 +16,10 @@ export function ServerStatusBanner() {
   if (!health.isError) return null;
   return (
     <View style={styles.wrap}>
-      <Banner testID="server-down-banner" message="Can't reach the Trailtally server. Your changes will not be saved until it is back." />
+      <Banner
+        testID="server-down-banner"
+        message="Can't reach the Trailtally server. Your changes will not be saved until it is back."
+      />
     </View>
   );
 }

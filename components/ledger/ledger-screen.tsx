@@ -19,14 +19,26 @@ import { downloadFile } from './download-file';
 type Col = { title: string; width: number; get: (r: LedgerRow) => string; tone?: (r: LedgerRow) => 'ember' | 'ink' };
 const wh = (v: number) => (Math.abs(v) < 0.5 ? '·' : String(Math.round(v)));
 
-type RowProps = { cells: { text: string; width: number; tone?: 'ember' | 'ink' }[]; header?: boolean; testID?: string; table?: boolean };
+type RowProps = {
+  cells: { text: string; width: number; tone?: 'ember' | 'ink' }[];
+  header?: boolean;
+  testID?: string;
+  table?: boolean;
+};
 
 /** One table row; `table` gives it table roles, which only hold where rows are the table's direct children. */
 function Row({ cells, header, testID, table = false }: RowProps) {
   return (
     <View style={[styles.row, header ? styles.headerRow : null]} testID={testID} role={table ? 'row' : undefined}>
       {cells.map((c, i) => (
-        <Text key={i} variant={header ? 'caption' : 'body'} color={c.tone ?? 'ink'} role={table ? (header ? 'columnheader' : 'cell') : undefined} style={[styles.cell, { width: c.width }, i > 1 ? styles.num : null]} numberOfLines={header ? 2 : 1}>
+        <Text
+          key={i}
+          variant={header ? 'caption' : 'body'}
+          color={c.tone ?? 'ink'}
+          role={table ? (header ? 'columnheader' : 'cell') : undefined}
+          style={[styles.cell, { width: c.width }, i > 1 ? styles.num : null]}
+          numberOfLines={header ? 2 : 1}
+        >
           {c.text}
         </Text>
       ))}
@@ -41,20 +53,53 @@ export function LedgerScreen({ detail }: { detail: TripDetail }) {
   const names = detail.stops.map((s) => s.stop.name);
   const cols: Col[] = [
     { title: 'Time', width: 150, get: (r) => localMoment(r.local) },
-    { title: 'Where', width: 170, get: (r) => (r.where.kind === 'stop' ? (names[r.where.stopIndex] ?? '') : `Drive ${r.where.driveIndex + 1}`) },
-    { title: 'Charge %', width: 80, get: (r) => String(Math.round(r.socPct)), tone: (r) => (r.socPct < (view.state === 'ready' ? view.result.headline.reservePct : 0) ? 'ember' : 'ink') },
+    {
+      title: 'Where',
+      width: 170,
+      get: (r) => (r.where.kind === 'stop' ? (names[r.where.stopIndex] ?? '') : `Drive ${r.where.driveIndex + 1}`),
+    },
+    {
+      title: 'Charge %',
+      width: 80,
+      get: (r) => String(Math.round(r.socPct)),
+      tone: (r) => (r.socPct < (view.state === 'ready' ? view.result.headline.reservePct : 0) ? 'ember' : 'ink'),
+    },
     { title: 'Solar Wh', width: 80, get: (r) => wh(r.solarUsedWh) },
     { title: 'Use Wh', width: 80, get: (r) => wh(r.acLoadWh + r.dcLoadWh) },
     { title: 'Hookup Wh', width: 90, get: (r) => wh(r.hookupWh) },
     { title: 'Vehicle Wh', width: 90, get: (r) => wh(r.vehicleWh) },
     { title: 'Gen. Wh', width: 80, get: (r) => wh(r.generatorWh) },
-    { title: 'Short Wh', width: 80, get: (r) => wh(r.energyShortWh), tone: (r) => (r.energyShortWh > 0 ? 'ember' : 'ink') },
+    {
+      title: 'Short Wh',
+      width: 80,
+      get: (r) => wh(r.energyShortWh),
+      tone: (r) => (r.energyShortWh > 0 ? 'ember' : 'ink'),
+    },
   ];
   const tableWidth = cols.reduce((s, c) => s + c.width, 0) + space.md * 2;
 
-  if (view.state === 'loading') return <TabScroll testID="ledger-screen-loading"><Skeleton testID="ledger-loading" height={400} /></TabScroll>;
-  if (view.state === 'error') return <TabScroll testID="ledger-screen-error"><QueryError testID="ledger-error" error={view.error} onRetry={view.retry} /></TabScroll>;
-  if (view.state === 'empty') return <TabScroll testID="ledger-screen"><EmptyState testID="ledger-empty" title="No ledger yet" body={`${view.reason} Add stops on the Route tab and appliances on Loads.`} /></TabScroll>;
+  if (view.state === 'loading')
+    return (
+      <TabScroll testID="ledger-screen-loading">
+        <Skeleton testID="ledger-loading" height={400} />
+      </TabScroll>
+    );
+  if (view.state === 'error')
+    return (
+      <TabScroll testID="ledger-screen-error">
+        <QueryError testID="ledger-error" error={view.error} onRetry={view.retry} />
+      </TabScroll>
+    );
+  if (view.state === 'empty')
+    return (
+      <TabScroll testID="ledger-screen">
+        <EmptyState
+          testID="ledger-empty"
+          title="No ledger yet"
+          body={`${view.reason} Add stops on the Route tab and appliances on Loads.`}
+        />
+      </TabScroll>
+    );
 
   const { result } = view;
   const rows = filterLedger(result.ledger, { stopIndex: stop === 'all' ? null : Number(stop), shortOnly });
@@ -68,11 +113,22 @@ export function LedgerScreen({ detail }: { detail: TripDetail }) {
           <Text variant="title" role="heading" aria-level={2}>
             Day sheets
           </Text>
-          <Button testID="days-csv" tone="secondary" label="Download days (CSV)" onPress={() => downloadFile(`${slug}-days.csv`, daysCsv(result.days))} />
+          <Button
+            testID="days-csv"
+            tone="secondary"
+            label="Download days (CSV)"
+            onPress={() => downloadFile(`${slug}-days.csv`, daysCsv(result.days))}
+          />
         </View>
         <ScrollView horizontal focusable accessibilityLabel="Day sheets table, scrolls sideways">
           <View role="table" aria-label="Day sheets">
-            <Row table header cells={['Day', 'Stops', 'Harvest Wh', 'Use Wh', 'Net Wh', 'Generator h', 'Lowest %', 'Short Wh'].map((t, i) => ({ text: t, width: i === 0 ? 110 : i === 1 ? 200 : 90 }))} />
+            <Row
+              table
+              header
+              cells={['Day', 'Stops', 'Harvest Wh', 'Use Wh', 'Net Wh', 'Generator h', 'Lowest %', 'Short Wh'].map(
+                (t, i) => ({ text: t, width: i === 0 ? 110 : i === 1 ? 200 : 90 }),
+              )}
+            />
             {result.days.map((d) => (
               <Row
                 table
@@ -85,7 +141,11 @@ export function LedgerScreen({ detail }: { detail: TripDetail }) {
                   { text: wh(d.useWh), width: 90 },
                   { text: String(Math.round(d.netWh)), width: 90, tone: d.netWh < 0 ? 'ember' : 'ink' },
                   { text: d.generatorHours.toFixed(1), width: 90 },
-                  { text: String(Math.round(d.lowestSocPct)), width: 90, tone: d.lowestSocPct < result.headline.reservePct ? 'ember' : 'ink' },
+                  {
+                    text: String(Math.round(d.lowestSocPct)),
+                    width: 90,
+                    tone: d.lowestSocPct < result.headline.reservePct ? 'ember' : 'ink',
+                  },
                   { text: wh(d.energyShortWh), width: 90, tone: d.energyShortWh > 0 ? 'ember' : 'ink' },
                 ]}
               />
@@ -98,10 +158,30 @@ export function LedgerScreen({ detail }: { detail: TripDetail }) {
           <Text variant="title" role="heading" aria-level={2}>
             Hour by hour
           </Text>
-          <Button testID="ledger-csv" tone="secondary" label="Download hours (CSV)" onPress={() => downloadFile(`${slug}-ledger.csv`, ledgerCsv(rows, names))} />
+          <Button
+            testID="ledger-csv"
+            tone="secondary"
+            label="Download hours (CSV)"
+            onPress={() => downloadFile(`${slug}-ledger.csv`, ledgerCsv(rows, names))}
+          />
         </View>
-        <ChoiceChips testID="ledger-stop" label="Show" value={stop} onChange={setStop} options={[{ value: 'all', label: 'Whole trip' }, ...names.map((n, i) => ({ value: String(i), label: n }))]} />
-        <ChoiceChips testID="ledger-short" label="Hours" value={shortOnly ? 'short' : 'all'} onChange={(v) => setShortOnly(v === 'short')} options={[{ value: 'all', label: 'Every hour' }, { value: 'short', label: 'Only shortfalls' }]} />
+        <ChoiceChips
+          testID="ledger-stop"
+          label="Show"
+          value={stop}
+          onChange={setStop}
+          options={[{ value: 'all', label: 'Whole trip' }, ...names.map((n, i) => ({ value: String(i), label: n }))]}
+        />
+        <ChoiceChips
+          testID="ledger-short"
+          label="Hours"
+          value={shortOnly ? 'short' : 'all'}
+          onChange={(v) => setShortOnly(v === 'short')}
+          options={[
+            { value: 'all', label: 'Every hour' },
+            { value: 'short', label: 'Only shortfalls' },
+          ]}
+        />
         <Text variant="caption" color="inkSoft" testID="ledger-count">
           {rows.length} of {result.ledger.length} hours
         </Text>
@@ -121,8 +201,17 @@ export function LedgerScreen({ detail }: { detail: TripDetail }) {
               initialNumToRender={30}
               windowSize={7}
               getItemLayout={(_d, index) => ({ length: ROW_H, offset: HEADER_H + ROW_H * index, index })}
-              renderItem={({ item }) => <Row testID={`ledger-row-${item.index}`} cells={cols.map((c) => ({ text: c.get(item), width: c.width, tone: c.tone?.(item) }))} />}
-              ListEmptyComponent={<Text color="inkSoft" style={styles.emptyList}>No hours match these filters.</Text>}
+              renderItem={({ item }) => (
+                <Row
+                  testID={`ledger-row-${item.index}`}
+                  cells={cols.map((c) => ({ text: c.get(item), width: c.width, tone: c.tone?.(item) }))}
+                />
+              )}
+              ListEmptyComponent={
+                <Text color="inkSoft" style={styles.emptyList}>
+                  No hours match these filters.
+                </Text>
+              }
             />
           </View>
         </ScrollView>
@@ -135,9 +224,23 @@ const ROW_H = 41;
 const HEADER_H = 52;
 
 const styles = StyleSheet.create({
-  titleRow: { flexDirection: 'row', flexWrap: 'wrap', justifyContent: 'space-between', alignItems: 'center', gap: space.sm },
+  titleRow: {
+    flexDirection: 'row',
+    flexWrap: 'wrap',
+    justifyContent: 'space-between',
+    alignItems: 'center',
+    gap: space.sm,
+  },
   list: { height: 480 },
-  row: { flexDirection: 'row', minHeight: ROW_H, alignItems: 'center', borderBottomWidth: 1, borderBottomColor: colors.line, paddingHorizontal: space.md, backgroundColor: colors.card },
+  row: {
+    flexDirection: 'row',
+    minHeight: ROW_H,
+    alignItems: 'center',
+    borderBottomWidth: 1,
+    borderBottomColor: colors.line,
+    paddingHorizontal: space.md,
+    backgroundColor: colors.card,
+  },
   headerRow: { minHeight: HEADER_H, backgroundColor: colors.dune, borderBottomColor: colors.mist },
   cell: { paddingHorizontal: space.xs },
   num: { textAlign: 'right' },

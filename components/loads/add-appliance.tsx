@@ -7,7 +7,13 @@ import { APPLIANCE_LIBRARY } from '@/shared/engine/appliance-library';
 import type { ApplianceFields } from '@/shared/schemas/appliance';
 
 export const BY_HAND: ApplianceFields = {
-  name: '', circuit: 'dc', quantity: 1, runningW: 0, standbyW: 0, dutyCycle: 1, heatInputW: 0,
+  name: '',
+  circuit: 'dc',
+  quantity: 1,
+  runningW: 0,
+  standbyW: 0,
+  dutyCycle: 1,
+  heatInputW: 0,
   schedule: { kind: 'routine', windows: [{ days: { kind: 'all' }, startHour: 19, startMinute: 0, minutes: 60 }] },
 };
 
@@ -15,8 +21,15 @@ export function fromLibrary(key: string): ApplianceFields | null {
   const i = APPLIANCE_LIBRARY.find((item) => item.key === key);
   if (!i) return null;
   return {
-    name: i.name, circuit: i.circuit, quantity: 1, runningW: i.runningW, standbyW: i.standbyW, dutyCycle: i.dutyCycle, heatInputW: i.heatInputW,
-    schedule: i.schedule, ...(i.surgeW === undefined ? {} : { surgeW: i.surgeW }),
+    name: i.name,
+    circuit: i.circuit,
+    quantity: 1,
+    runningW: i.runningW,
+    standbyW: i.standbyW,
+    dutyCycle: i.dutyCycle,
+    heatInputW: i.heatInputW,
+    schedule: i.schedule,
+    ...(i.surgeW === undefined ? {} : { surgeW: i.surgeW }),
   };
 }
 
@@ -45,10 +58,19 @@ export function AddAppliance({ onPick }: { onPick: (fields: ApplianceFields) => 
             style={styles.item}
           />
         ))}
-        <Button testID="library-by-hand" tone="quiet" label="By hand…" onPress={() => onPick(BY_HAND)} style={styles.item} />
+        <Button
+          testID="library-by-hand"
+          tone="quiet"
+          label="By hand…"
+          onPress={() => onPick(BY_HAND)}
+          style={styles.item}
+        />
       </View>
     </Card>
   );
 }
 
-const styles = StyleSheet.create({ row: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm }, item: { paddingHorizontal: space.lg } });
+const styles = StyleSheet.create({
+  row: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
+  item: { paddingHorizontal: space.lg },
+});

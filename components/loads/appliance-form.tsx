@@ -17,7 +17,13 @@ import { ApiError, conflictCurrent } from '@/stores/queries/api-client';
 import { useApplianceSaveMutation } from '@/stores/queries/appliances';
 import { showToast } from '@/stores/toast-store';
 
-type Props = { tripId: string; record: ApplianceRecord | null; initial: ApplianceFields; canEdit: boolean; onSaved: (r: ApplianceRecord) => void };
+type Props = {
+  tripId: string;
+  record: ApplianceRecord | null;
+  initial: ApplianceFields;
+  canEdit: boolean;
+  onSaved: (r: ApplianceRecord) => void;
+};
 
 const fieldsOf = (r: ApplianceRecord): ApplianceFields => {
   const { id: _id, ...fields } = r.appliance;
@@ -25,7 +31,13 @@ const fieldsOf = (r: ApplianceRecord): ApplianceFields => {
 };
 
 const LABELS: Partial<Record<keyof ApplianceFields, [string, string]>> = {
-  name: ['name', ''], circuit: ['circuit', ''], quantity: ['how many', ''], runningW: ['running', ' W'], standbyW: ['standby', ' W'], dutyCycle: ['duty cycle', ''], heatInputW: ['heat input', ' W'],
+  name: ['name', ''],
+  circuit: ['circuit', ''],
+  quantity: ['how many', ''],
+  runningW: ['running', ' W'],
+  standbyW: ['standby', ' W'],
+  dutyCycle: ['duty cycle', ''],
+  heatInputW: ['heat input', ' W'],
 };
 
 /** Their values for the fields where the two versions differ, e.g. "running 120 W". */
@@ -44,7 +56,11 @@ export function ApplianceForm({ tripId, record, initial, canEdit, onSaved }: Pro
   const save = useApplianceSaveMutation(tripId);
   const [formError, setFormError] = useState<string>();
   const [conflict, setConflict] = useState<ApplianceRecord | null>(null);
-  const { control, handleSubmit, reset, formState, getValues } = useForm<z.input<typeof applianceFieldsSchema>, unknown, ApplianceFields>({ resolver: zodResolver(applianceFieldsSchema), defaultValues: initial });
+  const { control, handleSubmit, reset, formState, getValues } = useForm<
+    z.input<typeof applianceFieldsSchema>,
+    unknown,
+    ApplianceFields
+  >({ resolver: zodResolver(applianceFieldsSchema), defaultValues: initial });
   const circuit = useWatch({ control, name: 'circuit' });
   // The version this form was opened on: a save names it, so a change made meanwhile by someone else gets a 409.
   const baseVersion = useRef(record?.version);
@@ -61,7 +77,12 @@ export function ApplianceForm({ tripId, record, initial, canEdit, onSaved }: Pro
     handleSubmit(async (values) => {
       setFormError(undefined);
       try {
-        const saved = await save.mutateAsync({ applianceId: record?.id ?? null, version, appliance: values, caretakerUserId: record?.caretakerUserId ?? null });
+        const saved = await save.mutateAsync({
+          applianceId: record?.id ?? null,
+          version,
+          appliance: values,
+          caretakerUserId: record?.caretakerUserId ?? null,
+        });
         setConflict(null);
         showToast(`${values.name} saved`);
         baseVersion.current = saved.version;
@@ -81,7 +102,16 @@ export function ApplianceForm({ tripId, record, initial, canEdit, onSaved }: Pro
       name={name}
       render={({ field, fieldState }) => (
         <View style={styles.cell}>
-          <NumberField testID={`appliance-${name}`} label={label} unit={unit} editable={canEdit} value={field.value} onChangeNumber={field.onChange} onBlur={field.onBlur} error={fieldState.error?.message} />
+          <NumberField
+            testID={`appliance-${name}`}
+            label={label}
+            unit={unit}
+            editable={canEdit}
+            value={field.value}
+            onChangeNumber={field.onChange}
+            onBlur={field.onBlur}
+            error={fieldState.error?.message}
+          />
         </View>
       )}
     />
@@ -94,14 +124,33 @@ export function ApplianceForm({ tripId, record, initial, canEdit, onSaved }: Pro
         control={control}
         name="name"
         render={({ field, fieldState }) => (
-          <TextField testID="appliance-name" label="Name" editable={canEdit} value={field.value} onChangeText={field.onChange} onBlur={field.onBlur} error={fieldState.error?.message} />
+          <TextField
+            testID="appliance-name"
+            label="Name"
+            editable={canEdit}
+            value={field.value}
+            onChangeText={field.onChange}
+            onBlur={field.onBlur}
+            error={fieldState.error?.message}
+          />
         )}
       />
       <Controller
         control={control}
         name="circuit"
         render={({ field }) => (
-          <ChoiceChips testID="appliance-circuit" label="Circuit" disabled={!canEdit} value={field.value} onChange={field.onChange} options={[{ value: 'ac', label: 'AC' }, { value: 'dc', label: 'DC' }, { value: 'fuel', label: 'Fuel' }]} />
+          <ChoiceChips
+            testID="appliance-circuit"
+            label="Circuit"
+            disabled={!canEdit}
+            value={field.value}
+            onChange={field.onChange}
+            options={[
+              { value: 'ac', label: 'AC' },
+              { value: 'dc', label: 'DC' },
+              { value: 'fuel', label: 'Fuel' },
+            ]}
+          />
         )}
       />
       <View style={styles.grid}>
@@ -145,7 +194,13 @@ export function ApplianceForm({ tripId, record, initial, canEdit, onSaved }: Pro
         />
       ) : null}
       {canEdit ? (
-        <Button testID="appliance-save" label={record ? 'Save appliance' : 'Add appliance'} busy={formState.isSubmitting} disabled={formState.isSubmitting} onPress={() => void send(baseVersion.current)()} />
+        <Button
+          testID="appliance-save"
+          label={record ? 'Save appliance' : 'Add appliance'}
+          busy={formState.isSubmitting}
+          disabled={formState.isSubmitting}
+          onPress={() => void send(baseVersion.current)()}
+        />
       ) : null}
     </View>
   );

@@ -5,12 +5,16 @@ import { HOURS, stripOf } from './routine-cells';
 export function campDayMinutes(schedule: Schedule): number | null {
   if (schedule.kind === 'always') return HOURS * 60;
   if (schedule.kind === 'thermostat') return null;
-  const minutes = schedule.windows.filter((w) => ['all', 'camp'].includes(stripOf(w.days) ?? '')).reduce((s, w) => s + w.minutes, 0);
+  const minutes = schedule.windows
+    .filter((w) => ['all', 'camp'].includes(stripOf(w.days) ?? ''))
+    .reduce((s, w) => s + w.minutes, 0);
   return Math.min(minutes, HOURS * 60);
 }
 
 /** Electrical energy a typical camp day, Wh (fuel appliances count only their fan and controls). */
-export function dailyEnergyWh(a: Pick<ApplianceFields, 'schedule' | 'runningW' | 'standbyW' | 'dutyCycle' | 'quantity'>): number | null {
+export function dailyEnergyWh(
+  a: Pick<ApplianceFields, 'schedule' | 'runningW' | 'standbyW' | 'dutyCycle' | 'quantity'>,
+): number | null {
   const minutes = campDayMinutes(a.schedule);
   if (minutes === null) return null;
   const on = (minutes / 60) * a.runningW * a.dutyCycle;

@@ -27,7 +27,15 @@ const CIRCUITS: { circuit: Circuit; title: string; note: string }[] = [
 
 type Editing = { kind: 'existing'; id: string } | { kind: 'new'; fields: ApplianceFields; key: number } | null;
 
-function ApplianceRow({ record, selected, onSelect }: { record: ApplianceRecord; selected: boolean; onSelect: () => void }) {
+function ApplianceRow({
+  record,
+  selected,
+  onSelect,
+}: {
+  record: ApplianceRecord;
+  selected: boolean;
+  onSelect: () => void;
+}) {
   const a = record.appliance;
   const wh = dailyEnergyWh(a);
   return (
@@ -47,7 +55,11 @@ function ApplianceRow({ record, selected, onSelect }: { record: ApplianceRecord;
         <Text variant="caption" color="inkSoft">
           {text(power(a.runningW))}
           {a.dutyCycle < 1 ? ` · ${Math.round(a.dutyCycle * 100)}% duty` : ''}
-          {a.schedule.kind === 'thermostat' ? ` · ${a.schedule.mode} by temperature` : a.schedule.kind === 'always' ? ' · all the time' : ''}
+          {a.schedule.kind === 'thermostat'
+            ? ` · ${a.schedule.mode} by temperature`
+            : a.schedule.kind === 'always'
+              ? ' · all the time'
+              : ''}
         </Text>
       </View>
       <View style={styles.energy}>
@@ -74,9 +86,19 @@ export function LoadsScreen({ detail }: { detail: TripDetail }) {
 
   const list = (
     <View style={styles.column}>
-      {!canEdit ? <Banner testID="loads-read-only" tone="info" message="You can view this trip's loads; only crew, planners and the owner can change them." /> : null}
+      {!canEdit ? (
+        <Banner
+          testID="loads-read-only"
+          tone="info"
+          message="You can view this trip's loads; only crew, planners and the owner can change them."
+        />
+      ) : null}
       {detail.appliances.length === 0 ? (
-        <EmptyState testID="loads-empty" title="No appliances yet" body="Add the lights, fridge, pump and whatever else runs off the battery; the budget needs them to say how long the charge lasts." />
+        <EmptyState
+          testID="loads-empty"
+          title="No appliances yet"
+          body="Add the lights, fridge, pump and whatever else runs off the battery; the budget needs them to say how long the charge lasts."
+        />
       ) : null}
       {CIRCUITS.map(({ circuit, title, note }) => {
         const items = detail.appliances.filter((a) => a.appliance.circuit === circuit);
@@ -96,7 +118,12 @@ export function LoadsScreen({ detail }: { detail: TripDetail }) {
               {note}
             </Text>
             {items.map((a) => (
-              <ApplianceRow key={a.id} record={a} selected={current?.id === a.id} onSelect={() => setEditing({ kind: 'existing', id: a.id })} />
+              <ApplianceRow
+                key={a.id}
+                record={a}
+                selected={current?.id === a.id}
+                onSelect={() => setEditing({ kind: 'existing', id: a.id })}
+              />
             ))}
           </Card>
         );
@@ -124,12 +151,27 @@ export function LoadsScreen({ detail }: { detail: TripDetail }) {
           key={current ? `form-${current.id}` : editing.kind === 'new' ? `new-${editing.key}` : 'form-none'}
           tripId={detail.trip.id}
           record={current ?? null}
-          initial={current ? (({ id: _id, ...rest }) => rest)(current.appliance) : editing.kind === 'new' ? editing.fields : BY_HAND}
+          initial={
+            current
+              ? (({ id: _id, ...rest }) => rest)(current.appliance)
+              : editing.kind === 'new'
+                ? editing.fields
+                : BY_HAND
+          }
           canEdit={canEdit}
           onSaved={(saved) => setEditing({ kind: 'existing', id: saved.id })}
         />
-        {current ? <ScheduleEditor key={`schedule-${current.id}`} detail={detail} record={current} canEdit={canEdit} /> : null}
-        {current && canEdit && !confirmRemove ? <Button testID="appliance-delete" tone="quiet" label="Remove appliance…" onPress={() => setConfirmRemove(true)} /> : null}
+        {current ? (
+          <ScheduleEditor key={`schedule-${current.id}`} detail={detail} record={current} canEdit={canEdit} />
+        ) : null}
+        {current && canEdit && !confirmRemove ? (
+          <Button
+            testID="appliance-delete"
+            tone="quiet"
+            label="Remove appliance…"
+            onPress={() => setConfirmRemove(true)}
+          />
+        ) : null}
         {current && canEdit && confirmRemove ? (
           <View style={styles.confirm}>
             <Text variant="label" color="ember">
@@ -147,7 +189,12 @@ export function LoadsScreen({ detail }: { detail: TripDetail }) {
                 setEditing(null);
               }}
             />
-            <Button testID="appliance-delete-cancel" tone="quiet" label="Keep it" onPress={() => setConfirmRemove(false)} />
+            <Button
+              testID="appliance-delete-cancel"
+              tone="quiet"
+              label="Keep it"
+              onPress={() => setConfirmRemove(false)}
+            />
           </View>
         ) : null}
       </Card>
@@ -162,8 +209,25 @@ export function LoadsScreen({ detail }: { detail: TripDetail }) {
 
 const styles = StyleSheet.create({
   column: { gap: space.xl },
-  groupHead: { flexDirection: 'row', alignItems: 'center', justifyContent: 'space-between', gap: space.sm, flexWrap: 'wrap' },
-  row: { flexDirection: 'row', alignItems: 'center', gap: space.md, minHeight: 56, paddingVertical: space.sm, paddingHorizontal: space.md, borderRadius: radii.md, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.white },
+  groupHead: {
+    flexDirection: 'row',
+    alignItems: 'center',
+    justifyContent: 'space-between',
+    gap: space.sm,
+    flexWrap: 'wrap',
+  },
+  row: {
+    flexDirection: 'row',
+    alignItems: 'center',
+    gap: space.md,
+    minHeight: 56,
+    paddingVertical: space.sm,
+    paddingHorizontal: space.md,
+    borderRadius: radii.md,
+    borderWidth: 1,
+    borderColor: colors.line,
+    backgroundColor: colors.white,
+  },
   rowSelected: { borderColor: colors.pine, backgroundColor: colors.pineSoft },
   rowText: { flex: 1, gap: 2 },
   energy: { alignItems: 'flex-end' },

@@ -80,7 +80,13 @@ export function toggleCell(windows: RoutineWindow[], key: StripKey, hour: number
 }
 
 /** A drag from one cell to another paints every cell between them with the first cell's new state. */
-export function paintRange(windows: RoutineWindow[], key: StripKey, from: number, to: number, on: boolean): RoutineWindow[] {
+export function paintRange(
+  windows: RoutineWindow[],
+  key: StripKey,
+  from: number,
+  to: number,
+  on: boolean,
+): RoutineWindow[] {
   const cells = cellsFor(windows, key);
   const [a, b] = from <= to ? [from, to] : [to, from];
   for (let h = a; h <= b; h++) cells[h] = on;
@@ -98,7 +104,9 @@ export function setMinutes(windows: RoutineWindow[], index: number, minutes: num
 
 /** Energy per day a routine uses, Wh, for a load drawing `watts` with a duty cycle, on the given strip. */
 export function dailyWh(windows: RoutineWindow[], key: StripKey, watts: number, dutyCycle: number): number {
-  const minutes = windows.filter((w) => stripOf(w.days) === key || stripOf(w.days) === 'all').reduce((s, w) => s + w.minutes, 0);
+  const minutes = windows
+    .filter((w) => stripOf(w.days) === key || stripOf(w.days) === 'all')
+    .reduce((s, w) => s + w.minutes, 0);
   return (Math.min(minutes, HOURS * 60) / 60) * watts * dutyCycle;
 }
 

@@ -6,7 +6,13 @@ import { Text } from '@/components/ui/text';
 import type { RoutineWindow } from '@/shared/schemas/common';
 import { cellsFor, HOURS, paintRange, toggleCell, type StripKey } from './routine-cells';
 
-type Props = { windows: RoutineWindow[]; strip: StripKey; disabled: boolean; onChange: (w: RoutineWindow[]) => void; testID: string };
+type Props = {
+  windows: RoutineWindow[];
+  strip: StripKey;
+  disabled: boolean;
+  onChange: (w: RoutineWindow[]) => void;
+  testID: string;
+};
 
 type PointerTarget = { releasePointerCapture?: (id: number) => void; hasPointerCapture?: (id: number) => boolean };
 type PointerEventLike = { nativeEvent: { pointerId?: number; target?: unknown; pointerType?: string } };
@@ -21,7 +27,9 @@ export function RoutineStrip({ windows, strip, disabled, onChange, testID }: Pro
   // Drag state lives in a ref: it changes on every pointer move and must not re-render the strip.
   const drag = useRef<{ from: number; on: boolean; moved: boolean; base: RoutineWindow[] } | null>(null);
   const perRow = wide ? 12 : 6;
-  const rows = Array.from({ length: HOURS / perRow }, (_, r) => Array.from({ length: perRow }, (_, c) => r * perRow + c));
+  const rows = Array.from({ length: HOURS / perRow }, (_, r) =>
+    Array.from({ length: perRow }, (_, c) => r * perRow + c),
+  );
 
   const start = (hour: number, e: PointerEventLike) => {
     if (disabled) return;
@@ -43,7 +51,14 @@ export function RoutineStrip({ windows, strip, disabled, onChange, testID }: Pro
   };
 
   return (
-    <View style={styles.grid} testID={testID} onPointerUp={end} onPointerLeave={end} role="group" aria-label="Hours of the day">
+    <View
+      style={styles.grid}
+      testID={testID}
+      onPointerUp={end}
+      onPointerLeave={end}
+      role="group"
+      aria-label="Hours of the day"
+    >
       {rows.map((row) => (
         <View key={row[0]} style={styles.row}>
           {row.map((hour) => {
@@ -80,7 +95,17 @@ const styles = StyleSheet.create({
   // touchAction none: a drag across the strip paints cells instead of scrolling the page.
   grid: { gap: space.xs, touchAction: 'none', userSelect: 'none' } as object,
   row: { flexDirection: 'row', gap: space.xs },
-  cell: { flex: 1, minWidth: 44, minHeight: 48, borderRadius: radii.sm, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.white, alignItems: 'center', justifyContent: 'center' },
+  cell: {
+    flex: 1,
+    minWidth: 44,
+    minHeight: 48,
+    borderRadius: radii.sm,
+    borderWidth: 1,
+    borderColor: colors.line,
+    backgroundColor: colors.white,
+    alignItems: 'center',
+    justifyContent: 'center',
+  },
   on: { backgroundColor: colors.pine, borderColor: colors.pine },
   disabled: { opacity: 0.6 },
 });

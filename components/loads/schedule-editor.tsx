@@ -51,7 +51,15 @@ export function ScheduleEditor({ detail, record, canEdit }: Props) {
   }
   const valid = scheduleSchema.safeParse(draft);
 
-  const input = dirty && valid.success ? toEngineInput({ ...detail, appliances: detail.appliances.map((a) => (a.id === record.id ? { ...a, appliance: { ...a.appliance, schedule: valid.data } } : a)) }) : null;
+  const input =
+    dirty && valid.success
+      ? toEngineInput({
+          ...detail,
+          appliances: detail.appliances.map((a) =>
+            a.id === record.id ? { ...a, appliance: { ...a.appliance, schedule: valid.data } } : a,
+          ),
+        })
+      : null;
   const preview = input ? simulateCached(input).result : null;
   const before = budget.data?.result?.headline.lowestSocPct;
 
@@ -69,7 +77,8 @@ export function ScheduleEditor({ detail, record, canEdit }: Props) {
     }
   };
 
-  const windows = draft.kind === 'routine' ? draft.windows : draft.kind === 'thermostat' ? (draft.activeWindows ?? []) : [];
+  const windows =
+    draft.kind === 'routine' ? draft.windows : draft.kind === 'thermostat' ? (draft.activeWindows ?? []) : [];
   const setWindows = (w: typeof windows) => {
     if (draft.kind === 'routine') setDraft({ ...draft, windows: w });
     else if (draft.kind === 'thermostat') setDraft({ ...draft, activeWindows: w.length > 0 ? w : undefined });
@@ -103,18 +112,31 @@ export function ScheduleEditor({ detail, record, canEdit }: Props) {
       />
       {draft.kind === 'thermostat' ? (
         <View style={styles.fields}>
-          <ChoiceChips testID="thermostat-mode" label="Mode" disabled={!canEdit} value={draft.mode} options={[{ value: 'heating', label: 'Heating' }, { value: 'cooling', label: 'Cooling' }]} onChange={(mode) => setDraft({ ...draft, mode })} />
+          <ChoiceChips
+            testID="thermostat-mode"
+            label="Mode"
+            disabled={!canEdit}
+            value={draft.mode}
+            options={[
+              { value: 'heating', label: 'Heating' },
+              { value: 'cooling', label: 'Cooling' },
+            ]}
+            onChange={(mode) => setDraft({ ...draft, mode })}
+          />
           <NumberField
             testID="thermostat-set-point"
             label={draft.mode === 'heating' ? 'Heat below' : 'Cool above'}
             unit={temperature(0, units).unit}
             editable={canEdit}
             value={Math.round(toDisplay(draft.setPointC, 'temperature', units).value)}
-            onChangeNumber={(v) => v !== null && setDraft({ ...draft, setPointC: fromDisplay(v, 'temperature', units) })}
+            onChangeNumber={(v) =>
+              v !== null && setDraft({ ...draft, setPointC: fromDisplay(v, 'temperature', units) })
+            }
             error={valid.success ? undefined : valid.error.issues.find((i) => i.path.includes('setPointC'))?.message}
           />
           <Text variant="caption" color="inkSoft">
-            Optionally limit it to the hours below (for example while someone is aboard); leave them empty to follow the temperature all day.
+            Optionally limit it to the hours below (for example while someone is aboard); leave them empty to follow the
+            temperature all day.
           </Text>
         </View>
       ) : null}
@@ -130,7 +152,13 @@ export function ScheduleEditor({ detail, record, canEdit }: Props) {
             })}
             onChange={setStrip}
           />
-          <RoutineStrip testID="routine-strip" windows={windows} strip={strip} disabled={!canEdit} onChange={setWindows} />
+          <RoutineStrip
+            testID="routine-strip"
+            windows={windows}
+            strip={strip}
+            disabled={!canEdit}
+            onChange={setWindows}
+          />
           {stripWindows.map(({ w, i }) => (
             <View key={`${i}-${w.startHour}`} style={styles.window}>
               <Text variant="label" style={styles.windowLabel}>
@@ -186,8 +214,16 @@ export function ScheduleEditor({ detail, record, canEdit }: Props) {
       ) : null}
       {canEdit ? (
         <View style={styles.actions}>
-          <Button testID="schedule-save" label="Save routine" busy={save.isPending} disabled={!dirty || !valid.success} onPress={() => void submit(base.version)} />
-          {dirty ? <Button testID="schedule-reset" label="Undo changes" tone="quiet" onPress={() => setDraft(base.schedule)} /> : null}
+          <Button
+            testID="schedule-save"
+            label="Save routine"
+            busy={save.isPending}
+            disabled={!dirty || !valid.success}
+            onPress={() => void submit(base.version)}
+          />
+          {dirty ? (
+            <Button testID="schedule-reset" label="Undo changes" tone="quiet" onPress={() => setDraft(base.schedule)} />
+          ) : null}
         </View>
       ) : null}
     </View>

@@ -25,7 +25,13 @@ export function MessageView({ message, onClose }: { message: OutboxMessage; onCl
         <View style={styles.links} testID="outbox-links">
           <Text variant="label">Links</Text>
           {message.links.map((url, i) => (
-            <Link key={url} href={target(url)} testID={`outbox-link-${i}`} accessibilityLabel={`Follow link ${i + 1}: ${url}`} style={styles.link}>
+            <Link
+              key={url}
+              href={target(url)}
+              testID={`outbox-link-${i}`}
+              accessibilityLabel={`Follow link ${i + 1}: ${url}`}
+              style={styles.link}
+            >
               <Text variant="label" color="lake" style={styles.url}>
                 {url}
               </Text>
@@ -42,7 +48,14 @@ export function MessageView({ message, onClose }: { message: OutboxMessage; onCl
 
 const styles = StyleSheet.create({
   close: { alignSelf: 'flex-start', paddingHorizontal: 0 },
-  links: { gap: space.xs, padding: space.md, borderRadius: radii.md, backgroundColor: colors.dune, borderWidth: 1, borderColor: colors.line },
+  links: {
+    gap: space.xs,
+    padding: space.md,
+    borderRadius: radii.md,
+    backgroundColor: colors.dune,
+    borderWidth: 1,
+    borderColor: colors.line,
+  },
   link: { paddingVertical: space.xs },
   url: { textDecorationLine: 'underline' },
   text: { fontFamily: fonts.regular },

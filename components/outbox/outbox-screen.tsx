@@ -51,13 +51,21 @@ export function OutboxScreen() {
   else if (outbox.isError)
     content =
       outbox.error instanceof ApiError && outbox.error.status === 404 ? (
-        <EmptyState testID="outbox-unavailable" title="The outbox exists only in development" body="This server sends real e-mail, so there is nothing to show here." />
+        <EmptyState
+          testID="outbox-unavailable"
+          title="The outbox exists only in development"
+          body="This server sends real e-mail, so there is nothing to show here."
+        />
       ) : (
         <QueryError testID="outbox-error" error={outbox.error} onRetry={() => void outbox.refetch()} />
       );
   else if (messages.length === 0)
     content = (
-      <EmptyState testID="outbox-empty" title="No e-mail yet" body="Invite someone from a trip's People tab or a club, or create an account: the messages appear here." />
+      <EmptyState
+        testID="outbox-empty"
+        title="No e-mail yet"
+        body="Invite someone from a trip's People tab or a club, or create an account: the messages appear here."
+      />
     );
   else {
     const list = (

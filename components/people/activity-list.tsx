@@ -11,8 +11,10 @@ const SHOWN = 20;
 export function ActivityList({ tripId }: { tripId: string }) {
   const activity = useActivityQuery(tripId);
   if (activity.isPending) return <Skeleton testID="activity-loading" height={96} />;
-  if (activity.isError) return <QueryError testID="activity-error" error={activity.error} onRetry={() => void activity.refetch()} />;
-  if (activity.data.entries.length === 0) return <Text color="inkSoft">Nothing has changed yet. Edits by anyone on the trip show up here.</Text>;
+  if (activity.isError)
+    return <QueryError testID="activity-error" error={activity.error} onRetry={() => void activity.refetch()} />;
+  if (activity.data.entries.length === 0)
+    return <Text color="inkSoft">Nothing has changed yet. Edits by anyone on the trip show up here.</Text>;
   return (
     <View testID="activity-list">
       {activity.data.entries.slice(0, SHOWN).map((entry) => (
@@ -29,4 +31,6 @@ export function ActivityList({ tripId }: { tripId: string }) {
   );
 }
 
-const styles = StyleSheet.create({ entry: { paddingVertical: space.xs, borderBottomWidth: 1, borderBottomColor: colors.line } });
+const styles = StyleSheet.create({
+  entry: { paddingVertical: space.xs, borderBottomWidth: 1, borderBottomColor: colors.line },
+});

@@ -20,7 +20,8 @@ type Props = {
  */
 export function ConfirmAction({ label, question, confirmLabel, onConfirm, busy, tone = 'danger', testID }: Props) {
   const [asking, setAsking] = useState(false);
-  if (!asking) return <Button testID={testID} label={label} tone="secondary" busy={busy} onPress={() => setAsking(true)} />;
+  if (!asking)
+    return <Button testID={testID} label={label} tone="secondary" busy={busy} onPress={() => setAsking(true)} />;
   return (
     <View style={styles.box} testID={`${testID}-confirm`} role="group" aria-label={question}>
       <Text variant="label">{question}</Text>
@@ -43,6 +44,14 @@ export function ConfirmAction({ label, question, confirmLabel, onConfirm, busy, 
 
 const styles = StyleSheet.create({
   // The question takes a whole row of its own so it wraps instead of running off a phone's edge.
-  box: { width: '100%', gap: space.sm, padding: space.md, borderRadius: radii.md, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.dune },
+  box: {
+    width: '100%',
+    gap: space.sm,
+    padding: space.md,
+    borderRadius: radii.md,
+    borderWidth: 1,
+    borderColor: colors.line,
+    backgroundColor: colors.dune,
+  },
   row: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
 });

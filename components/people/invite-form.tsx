@@ -24,7 +24,6 @@ const inviteFormSchema = z.object({
 });
 type InviteFormValues = z.infer<typeof inviteFormSchema>;
 
-
 const FIELDS = ['email', 'role', 'message'] as const;
 
 export function InviteForm({ tripId, myRole }: { tripId: string; myRole: Role }) {
@@ -39,7 +38,11 @@ export function InviteForm({ tripId, myRole }: { tripId: string; myRole: Role })
   const submit = handleSubmit(async (values) => {
     setFormError(undefined);
     try {
-      await create.mutateAsync({ email: values.email, role: values.role, ...(values.message ? { message: values.message } : {}) });
+      await create.mutateAsync({
+        email: values.email,
+        role: values.role,
+        ...(values.message ? { message: values.message } : {}),
+      });
       showToast(`Invite sent to ${values.email}.`);
       // Keep the chosen role for the next person; clear who and what.
       reset({ email: '', role: values.role, message: '' });
@@ -89,7 +92,13 @@ export function InviteForm({ tripId, myRole }: { tripId: string; myRole: Role })
         numberOfLines={3}
         style={styles.note}
       />
-      <Button testID="invite-submit" label="Send invite" busy={formState.isSubmitting} onPress={submit} style={styles.submit} />
+      <Button
+        testID="invite-submit"
+        label="Send invite"
+        busy={formState.isSubmitting}
+        onPress={submit}
+        style={styles.submit}
+      />
     </View>
   );
 }

@@ -54,7 +54,9 @@ export function MemberRow({ tripId, member, isMe, canManage }: Props) {
           <Button
             testID={`member-${id}-manage`}
             label={open ? 'Close' : 'Change'}
-            accessibilityLabel={open ? `Close the choices for ${member.name}` : `Change ${member.name}'s role or membership`}
+            accessibilityLabel={
+              open ? `Close the choices for ${member.name}` : `Change ${member.name}'s role or membership`
+            }
             tone="quiet"
             aria-expanded={open}
             onPress={() => setOpen((v) => !v)}
@@ -85,7 +87,12 @@ export function MemberRow({ tripId, member, isMe, canManage }: Props) {
               confirmLabel="Yes, hand over"
               tone="secondary"
               busy={handOver.isPending}
-              onConfirm={() => handOver.mutate(id, { onSuccess: () => showToast(`${member.name} now owns this trip.`), onError: failed })}
+              onConfirm={() =>
+                handOver.mutate(id, {
+                  onSuccess: () => showToast(`${member.name} now owns this trip.`),
+                  onError: failed,
+                })
+              }
             />
             <ConfirmAction
               testID={`member-${id}-remove`}
@@ -93,7 +100,9 @@ export function MemberRow({ tripId, member, isMe, canManage }: Props) {
               question={`Remove ${member.name}? They lose access to this trip at once.`}
               confirmLabel="Yes, remove"
               busy={remove.isPending}
-              onConfirm={() => remove.mutate(id, { onSuccess: () => showToast(`${member.name} was removed.`), onError: failed })}
+              onConfirm={() =>
+                remove.mutate(id, { onSuccess: () => showToast(`${member.name} was removed.`), onError: failed })
+              }
             />
           </View>
         </View>
@@ -107,7 +116,12 @@ const styles = StyleSheet.create({
   head: { flexDirection: 'row', alignItems: 'center', gap: space.sm, flexWrap: 'wrap' },
   text: { flex: 1, minWidth: 120 },
   toggle: { paddingHorizontal: space.md },
-  pill: { backgroundColor: colors.pineSoft, borderRadius: radii.pill, paddingHorizontal: space.md, paddingVertical: space.xs },
+  pill: {
+    backgroundColor: colors.pineSoft,
+    borderRadius: radii.pill,
+    paddingHorizontal: space.md,
+    paddingVertical: space.xs,
+  },
   panel: { gap: space.md, paddingBottom: space.sm },
   actions: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm, alignItems: 'flex-start' },
 });

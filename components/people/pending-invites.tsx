@@ -35,7 +35,12 @@ function InviteRow({ tripId, invite, canManage }: { tripId: string; invite: Pend
             accessibilityLabel={`Resend the invite to ${invite.email}`}
             tone="secondary"
             busy={resend.isPending}
-            onPress={() => resend.mutate(invite.id, { onSuccess: () => showToast(`A new link went to ${invite.email}.`), onError: failed })}
+            onPress={() =>
+              resend.mutate(invite.id, {
+                onSuccess: () => showToast(`A new link went to ${invite.email}.`),
+                onError: failed,
+              })
+            }
           />
           <ConfirmAction
             testID={`invite-${invite.id}-revoke`}
@@ -43,7 +48,9 @@ function InviteRow({ tripId, invite, canManage }: { tripId: string; invite: Pend
             question={`Revoke the invite to ${invite.email}? Its link stops working.`}
             confirmLabel="Yes, revoke"
             busy={revoke.isPending}
-            onConfirm={() => revoke.mutate(invite.id, { onSuccess: () => showToast('Invite revoked.'), onError: failed })}
+            onConfirm={() =>
+              revoke.mutate(invite.id, { onSuccess: () => showToast('Invite revoked.'), onError: failed })
+            }
           />
         </View>
       ) : null}
@@ -55,7 +62,8 @@ function InviteRow({ tripId, invite, canManage }: { tripId: string; invite: Pend
 export function PendingInvites({ tripId, canManage }: { tripId: string; canManage: boolean }) {
   const invites = useTripInvitesQuery(tripId, true);
   if (invites.isPending) return <Skeleton testID="invites-loading" height={64} />;
-  if (invites.isError) return <QueryError testID="invites-error" error={invites.error} onRetry={() => void invites.refetch()} />;
+  if (invites.isError)
+    return <QueryError testID="invites-error" error={invites.error} onRetry={() => void invites.refetch()} />;
   if (invites.data.invites.length === 0)
     return (
       <Text color="inkSoft" testID="invites-empty">

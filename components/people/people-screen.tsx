@@ -43,11 +43,15 @@ export function PeopleScreen({ detail }: { detail: TripDetail }) {
       <Card testID="members">
         <Heading>People on this trip</Heading>
         {members.isPending ? <Skeleton testID="members-loading" height={96} /> : null}
-        {members.isError ? <QueryError testID="members-error" error={members.error} onRetry={() => void members.refetch()} /> : null}
-        {members.data?.members.map((m) => <MemberRow key={m.userId} tripId={tripId} member={m} isMe={m.userId === me} canManage={canManage} />)}
+        {members.isError ? (
+          <QueryError testID="members-error" error={members.error} onRetry={() => void members.refetch()} />
+        ) : null}
+        {members.data?.members.map((m) => (
+          <MemberRow key={m.userId} tripId={tripId} member={m} isMe={m.userId === me} canManage={canManage} />
+        ))}
         <Text variant="caption" color="inkSoft">
-          {ROLE_LABEL.owner}: {ROLE_NOTE.owner}. {ROLE_LABEL.planner}: {ROLE_NOTE.planner}. {ROLE_LABEL.crew}: {ROLE_NOTE.crew}. {ROLE_LABEL.viewer}:{' '}
-          {ROLE_NOTE.viewer}.
+          {ROLE_LABEL.owner}: {ROLE_NOTE.owner}. {ROLE_LABEL.planner}: {ROLE_NOTE.planner}. {ROLE_LABEL.crew}:{' '}
+          {ROLE_NOTE.crew}. {ROLE_LABEL.viewer}: {ROLE_NOTE.viewer}.
         </Text>
       </Card>
       {canInvite ? (
@@ -58,7 +62,9 @@ export function PeopleScreen({ detail }: { detail: TripDetail }) {
         </Card>
       ) : (
         <Card testID="invite-readonly">
-          <Text color="inkSoft">As {ROLE_LABEL[myRole]} you can see who is on the trip; the owner or a planner invites new people.</Text>
+          <Text color="inkSoft">
+            As {ROLE_LABEL[myRole]} you can see who is on the trip; the owner or a planner invites new people.
+          </Text>
         </Card>
       )}
       {canInvite ? (
@@ -89,4 +95,3 @@ export function PeopleScreen({ detail }: { detail: TripDetail }) {
     </TabScroll>
   );
 }
-

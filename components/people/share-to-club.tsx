@@ -17,12 +17,15 @@ export function ShareToClub({ tripId }: { tripId: string }) {
   const share = useShareTripToClubMutation();
   const [picked, setPicked] = useState<string>();
   if (clubs.isPending) return <Skeleton testID="share-club-loading" height={48} />;
-  if (clubs.isError) return <QueryError testID="share-club-error" error={clubs.error} onRetry={() => void clubs.refetch()} />;
+  if (clubs.isError)
+    return <QueryError testID="share-club-error" error={clubs.error} onRetry={() => void clubs.refetch()} />;
   const mine = clubs.data.clubs.filter((club) => club.role === 'organiser');
   if (mine.length === 0)
     return (
       <View style={styles.wrap} testID="share-club-none">
-        <Text color="inkSoft">You organise no club yet. Create one, invite its households, then share this trip to it.</Text>
+        <Text color="inkSoft">
+          You organise no club yet. Create one, invite its households, then share this trip to it.
+        </Text>
         <Link href="/clubs" testID="share-club-go-clubs" accessibilityLabel="Go to Clubs">
           <Text variant="label" color="pine">
             Go to Clubs ›
@@ -34,7 +37,13 @@ export function ShareToClub({ tripId }: { tripId: string }) {
   const name = mine.find((club) => club.id === clubId)?.name ?? '';
   return (
     <View style={styles.wrap} testID="share-club">
-      <ChoiceChips testID="share-club-pick" label="Club" options={mine.map((club) => ({ value: club.id, label: club.name }))} value={clubId} onChange={setPicked} />
+      <ChoiceChips
+        testID="share-club-pick"
+        label="Club"
+        options={mine.map((club) => ({ value: club.id, label: club.name }))}
+        value={clubId}
+        onChange={setPicked}
+      />
       <Button
         testID="share-club-submit"
         label="Share to club"
@@ -46,7 +55,10 @@ export function ShareToClub({ tripId }: { tripId: string }) {
             { clubId, tripId },
             {
               onSuccess: () => showToast(`Shared to ${name}. Its members can view it and copy it onto their rig.`),
-              onError: (error) => showToast(error instanceof ApiError ? error.message : 'Sharing did not work. Please try again.', { tone: 'danger' }),
+              onError: (error) =>
+                showToast(error instanceof ApiError ? error.message : 'Sharing did not work. Please try again.', {
+                  tone: 'danger',
+                }),
             },
           )
         }

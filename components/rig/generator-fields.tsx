@@ -24,24 +24,67 @@ export function GeneratorFields({ control, setValue, disabled }: Props) {
   return (
     <>
       <View style={fieldStyles.grid}>
-        <Num control={control} disabled={disabled} name="generator.ratedW" label="Rating" unit="W" range={[0, 20_000]} testID="rig-generator-watts" />
+        <Num
+          control={control}
+          disabled={disabled}
+          name="generator.ratedW"
+          label="Rating"
+          unit="W"
+          range={[0, 20_000]}
+          testID="rig-generator-watts"
+        />
       </View>
-      <Controller control={control} name="generator.fuel" render={({ field }) => (
-        <ChoiceChips testID="rig-generator-fuel" label="Fuel" disabled={disabled} value={field.value ?? 'petrol'} onChange={field.onChange} options={[{ value: 'petrol', label: 'Petrol' }, { value: 'diesel', label: 'Diesel' }, { value: 'propane', label: 'Propane' }]} />
-      )} />
+      <Controller
+        control={control}
+        name="generator.fuel"
+        render={({ field }) => (
+          <ChoiceChips
+            testID="rig-generator-fuel"
+            label="Fuel"
+            disabled={disabled}
+            value={field.value ?? 'petrol'}
+            onChange={field.onChange}
+            options={[
+              { value: 'petrol', label: 'Petrol' },
+              { value: 'diesel', label: 'Diesel' },
+              { value: 'propane', label: 'Propane' },
+            ]}
+          />
+        )}
+      />
       <ChoiceChips
         testID="rig-generator-mode"
         label="Runs"
         disabled={disabled}
         value={kind}
-        onChange={(k) => setValue('generator.mode', generatorModeFor(k, mode, opened), { shouldDirty: true, shouldValidate: true })}
+        onChange={(k) =>
+          setValue('generator.mode', generatorModeFor(k, mode, opened), { shouldDirty: true, shouldValidate: true })
+        }
         options={kinds}
       />
       {kind === 'rule' ? (
         <>
           <View style={fieldStyles.grid}>
-            <Num control={control} disabled={disabled} name="generator.mode.startBelowSocPct" label="Start below" unit="%" range={[0, 100]} hint="state of charge that starts it" testID="rig-generator-start" />
-            <Num control={control} disabled={disabled} name="generator.mode.stopAboveSocPct" label="Stop above" unit="%" message="Stop at a higher charge than it starts at (0 to 100 %)." hint="state of charge that stops it" testID="rig-generator-stop" />
+            <Num
+              control={control}
+              disabled={disabled}
+              name="generator.mode.startBelowSocPct"
+              label="Start below"
+              unit="%"
+              range={[0, 100]}
+              hint="state of charge that starts it"
+              testID="rig-generator-start"
+            />
+            <Num
+              control={control}
+              disabled={disabled}
+              name="generator.mode.stopAboveSocPct"
+              label="Stop above"
+              unit="%"
+              message="Stop at a higher charge than it starts at (0 to 100 %)."
+              hint="state of charge that stops it"
+              testID="rig-generator-stop"
+            />
           </View>
           <Text variant="caption" color="inkSoft">
             It runs only inside the hours each stop allows a generator.
@@ -62,13 +105,46 @@ export function GeneratorFields({ control, setValue, disabled }: Props) {
         {fuelModel ? (
           <>
             <View style={fieldStyles.grid}>
-              <Num control={control} disabled={disabled} name="generator.fuelModel.idleFuelKwhPerH" label="Fuel at idle" unit="kWh/h" range={[0, 50]} hint="burned each hour with no load" testID="rig-generator-idle-fuel" />
-              <Num control={control} disabled={disabled} name="generator.fuelModel.fuelKwhPerKwhOut" label="Fuel per unit out" unit="kWh/kWh" range={[1, 20]} hint="extra fuel for each kWh it delivers" testID="rig-generator-fuel-slope" />
+              <Num
+                control={control}
+                disabled={disabled}
+                name="generator.fuelModel.idleFuelKwhPerH"
+                label="Fuel at idle"
+                unit="kWh/h"
+                range={[0, 50]}
+                hint="burned each hour with no load"
+                testID="rig-generator-idle-fuel"
+              />
+              <Num
+                control={control}
+                disabled={disabled}
+                name="generator.fuelModel.fuelKwhPerKwhOut"
+                label="Fuel per unit out"
+                unit="kWh/kWh"
+                range={[1, 20]}
+                hint="extra fuel for each kWh it delivers"
+                testID="rig-generator-fuel-slope"
+              />
             </View>
-            {disabled ? null :  <Button testID="rig-generator-fuel-model-off" tone="quiet" style={styles.start} label="Use the typical figure" onPress={() => setValue('generator.fuelModel', undefined, { shouldDirty: true })} />}
+            {disabled ? null : (
+              <Button
+                testID="rig-generator-fuel-model-off"
+                tone="quiet"
+                style={styles.start}
+                label="Use the typical figure"
+                onPress={() => setValue('generator.fuelModel', undefined, { shouldDirty: true })}
+              />
+            )}
           </>
         ) : disabled ? null : (
-          <Button testID="rig-generator-fuel-model-on" tone="secondary" style={styles.start} label="Enter my own figures" accessibilityLabel="Enter my generator's own fuel figures" onPress={() => setValue('generator.fuelModel', { ...FUEL_MODEL_START }, { shouldDirty: true })} />
+          <Button
+            testID="rig-generator-fuel-model-on"
+            tone="secondary"
+            style={styles.start}
+            label="Enter my own figures"
+            accessibilityLabel="Enter my generator's own fuel figures"
+            onPress={() => setValue('generator.fuelModel', { ...FUEL_MODEL_START }, { shouldDirty: true })}
+          />
         )}
       </Advanced>
     </>

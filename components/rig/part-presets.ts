@@ -21,8 +21,14 @@ export const INVERTER_PRESETS: { label: string; inverter: Inverter }[] = [
 ];
 
 export const GENERATOR_PRESETS: { label: string; generator: Generator }[] = [
-  { label: '2 kW petrol inverter generator', generator: { ratedW: 2000, fuel: 'petrol', mode: { kind: 'rule', startBelowSocPct: 40, stopAboveSocPct: 90 } } },
-  { label: '2.2 kW dual-fuel on propane', generator: { ratedW: 2200, fuel: 'propane', mode: { kind: 'rule', startBelowSocPct: 30, stopAboveSocPct: 85 } } },
+  {
+    label: '2 kW petrol inverter generator',
+    generator: { ratedW: 2000, fuel: 'petrol', mode: { kind: 'rule', startBelowSocPct: 40, stopAboveSocPct: 90 } },
+  },
+  {
+    label: '2.2 kW dual-fuel on propane',
+    generator: { ratedW: 2200, fuel: 'propane', mode: { kind: 'rule', startBelowSocPct: 30, stopAboveSocPct: 85 } },
+  },
 ];
 
 export const TANK_PRESETS: { label: string; propaneKg: number }[] = [

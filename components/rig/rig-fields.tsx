@@ -32,14 +32,28 @@ type NumProps = {
   message?: string;
 };
 
-export function Num({ control, name, label, unit, testID, disabled, hint, shown, range, optional = false, message }: NumProps) {
+export function Num({
+  control,
+  name,
+  label,
+  unit,
+  testID,
+  disabled,
+  hint,
+  shown,
+  range,
+  optional = false,
+  message,
+}: NumProps) {
   return (
     <Controller
       control={control}
       name={name}
       render={({ field, fieldState }) => {
         const stored = typeof field.value === 'number' ? field.value : undefined;
-        const error = fieldState.error ? (message ?? (range ? (shown?.range ?? plainRange(unit))(range[0], range[1]) : fieldState.error.message)) : undefined;
+        const error = fieldState.error
+          ? (message ?? (range ? (shown?.range ?? plainRange(unit))(range[0], range[1]) : fieldState.error.message))
+          : undefined;
         return (
           <View style={styles.cell}>
             <NumberField
@@ -49,7 +63,9 @@ export function Num({ control, name, label, unit, testID, disabled, hint, shown,
               hint={hint}
               editable={!disabled}
               value={stored === undefined || !shown ? stored : shown.show(stored)}
-              onChangeNumber={(v) => field.onChange(v === null ? (optional ? undefined : null) : shown ? shown.store(v) : v)}
+              onChangeNumber={(v) =>
+                field.onChange(v === null ? (optional ? undefined : null) : shown ? shown.store(v) : v)
+              }
               onBlur={field.onBlur}
               error={error}
             />
@@ -60,9 +76,20 @@ export function Num({ control, name, label, unit, testID, disabled, hint, shown,
   );
 }
 
-const plainRange = (unit: string | undefined) => (min: number, max: number) => `Enter a figure from ${min} to ${max}${unit ? ` ${unit}` : ''}.`;
+const plainRange = (unit: string | undefined) => (min: number, max: number) =>
+  `Enter a figure from ${min} to ${max}${unit ? ` ${unit}` : ''}.`;
 
-export function Section({ title, children, testID, right }: { title: string; children: ReactNode; testID: string; right?: ReactNode }) {
+export function Section({
+  title,
+  children,
+  testID,
+  right,
+}: {
+  title: string;
+  children: ReactNode;
+  testID: string;
+  right?: ReactNode;
+}) {
   return (
     <Card testID={testID}>
       <View style={styles.head}>
@@ -76,7 +103,17 @@ export function Section({ title, children, testID, right }: { title: string; chi
   );
 }
 
-export function Presets({ items, onPick, testID, disabled }: { items: { label: string }[]; onPick: (i: number) => void; testID: string; disabled: boolean }) {
+export function Presets({
+  items,
+  onPick,
+  testID,
+  disabled,
+}: {
+  items: { label: string }[];
+  onPick: (i: number) => void;
+  testID: string;
+  disabled: boolean;
+}) {
   if (disabled) return null;
   return (
     <View style={styles.presets}>
@@ -84,7 +121,14 @@ export function Presets({ items, onPick, testID, disabled }: { items: { label: s
         Common sizes:
       </Text>
       {items.map((item, i) => (
-        <Button key={item.label} testID={`${testID}-${i}`} tone="quiet" label={item.label} accessibilityLabel={`Use ${item.label}`} onPress={() => onPick(i)} />
+        <Button
+          key={item.label}
+          testID={`${testID}-${i}`}
+          tone="quiet"
+          label={item.label}
+          accessibilityLabel={`Use ${item.label}`}
+          onPress={() => onPick(i)}
+        />
       ))}
     </View>
   );
@@ -115,7 +159,13 @@ export const fieldStyles = StyleSheet.create({
 });
 
 const styles = StyleSheet.create({
-  head: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', justifyContent: 'space-between', gap: space.sm },
+  head: {
+    flexDirection: 'row',
+    flexWrap: 'wrap',
+    alignItems: 'center',
+    justifyContent: 'space-between',
+    gap: space.sm,
+  },
   // Basis 0 with a minimum width: equal columns that wrap to one per row on a phone.
   cell: { flexGrow: 1, flexBasis: 0, minWidth: 140 },
   presets: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.xs },

@@ -62,9 +62,20 @@ export type GeneratorModeKind = GeneratorModeInput['kind'];
  * The generator's mode when the person picks another kind. A rule keeps its thresholds if it had them; set hours
  * (from a budget fix) are not edited in the form, so going back to them restores the ones the rig was opened with.
  */
-export function generatorModeFor(kind: GeneratorModeKind, current: GeneratorModeInput | undefined, opened: GeneratorModeInput | undefined): GeneratorModeInput | undefined {
+export function generatorModeFor(
+  kind: GeneratorModeKind,
+  current: GeneratorModeInput | undefined,
+  opened: GeneratorModeInput | undefined,
+): GeneratorModeInput | undefined {
   if (kind === 'off') return { kind: 'off' };
-  if (kind === 'rule') return current?.kind === 'rule' ? { kind: 'rule', startBelowSocPct: current.startBelowSocPct ?? 40, stopAboveSocPct: current.stopAboveSocPct ?? 90 } : { kind: 'rule', startBelowSocPct: 40, stopAboveSocPct: 90 };
+  if (kind === 'rule')
+    return current?.kind === 'rule'
+      ? {
+          kind: 'rule',
+          startBelowSocPct: current.startBelowSocPct ?? 40,
+          stopAboveSocPct: current.stopAboveSocPct ?? 90,
+        }
+      : { kind: 'rule', startBelowSocPct: 40, stopAboveSocPct: 90 };
   return opened?.kind === 'routine' ? opened : current;
 }
 

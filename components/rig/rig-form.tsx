@@ -31,10 +31,16 @@ export function RigForm({ tripId, record, canEdit }: { tripId: string; record: R
   const save = useTripRigSaveMutation(tripId);
   const [formError, setFormError] = useState<string>();
   const [conflict, setConflict] = useState<RigRecord | null>(null);
-  const { control, handleSubmit, setValue, reset, formState } = useForm<RigInput, unknown, Rig>({ resolver: zodResolver(rigSchema), defaultValues: record.rig });
+  const { control, handleSubmit, setValue, reset, formState } = useForm<RigInput, unknown, Rig>({
+    resolver: zodResolver(rigSchema),
+    defaultValues: record.rig,
+  });
   const arrays = useFieldArray({ control, name: 'solarArrays' });
   const tanks = useFieldArray({ control, name: 'propaneTanks' });
-  const [chemistry, inverter, generator, controller, shoreCharger, vehicleCharger] = useWatch({ control, name: ['battery.chemistry', 'inverter', 'generator', 'controller', 'shoreCharger', 'vehicleCharger'] });
+  const [chemistry, inverter, generator, controller, shoreCharger, vehicleCharger] = useWatch({
+    control,
+    name: ['battery.chemistry', 'inverter', 'generator', 'controller', 'shoreCharger', 'vehicleCharger'],
+  });
   const off = !canEdit;
   // Saves name the version the form was opened on, so someone else's change meanwhile is caught (409).
   const baseVersion = useRef(record.version);
@@ -64,36 +70,126 @@ export function RigForm({ tripId, record, canEdit }: { tripId: string; record: R
     });
 
   const toggle = (label: string, on: boolean, testID: string, onChange: (on: boolean) => void) =>
-    canEdit ? <Button testID={testID} tone="quiet" label={on ? `Remove ${label}` : `Add ${label}`} onPress={() => onChange(!on)} /> : null;
+    canEdit ? (
+      <Button
+        testID={testID}
+        tone="quiet"
+        label={on ? `Remove ${label}` : `Add ${label}`}
+        onPress={() => onChange(!on)}
+      />
+    ) : null;
 
   return (
     <View style={styles.form} testID="rig-form">
       {formError ? <Banner testID="rig-form-error" message={formError} /> : null}
-      {Object.keys(formState.errors).length > 0 ? <Banner testID="rig-form-invalid" message="Some figures need a look: see the messages below." /> : null}
-      <Controller control={control} name="name" render={({ field, fieldState }) => (
-        <TextField testID="rig-name" label="Rig name" editable={canEdit} value={field.value} onChangeText={field.onChange} onBlur={field.onBlur} error={fieldState.error?.message} />
-      )} />
+      {Object.keys(formState.errors).length > 0 ? (
+        <Banner testID="rig-form-invalid" message="Some figures need a look: see the messages below." />
+      ) : null}
+      <Controller
+        control={control}
+        name="name"
+        render={({ field, fieldState }) => (
+          <TextField
+            testID="rig-name"
+            label="Rig name"
+            editable={canEdit}
+            value={field.value}
+            onChangeText={field.onChange}
+            onBlur={field.onBlur}
+            error={fieldState.error?.message}
+          />
+        )}
+      />
       <Section title="Battery bank" testID="rig-battery">
-        <Presets testID="preset-battery" disabled={off} items={BATTERY_PRESETS} onPick={(i) => {
-          const p = BATTERY_PRESETS[i]?.battery;
-          if (p?.chemistry) setValue('battery.chemistry', p.chemistry, { shouldDirty: true });
-          if (p?.capacityAh) setValue('battery.capacityAh', p.capacityAh, { shouldDirty: true });
-          if (p?.nominalV) setValue('battery.nominalV', p.nominalV, { shouldDirty: true });
-        }} />
-        <Controller control={control} name="battery.chemistry" render={({ field }) => (
-          <ChoiceChips testID="rig-chemistry" label="Chemistry" disabled={off} value={field.value} onChange={field.onChange} options={[{ value: 'lifepo4', label: 'LiFePO4' }, { value: 'agm', label: 'AGM' }, { value: 'flooded', label: 'Flooded lead-acid' }]} />
-        )} />
+        <Presets
+          testID="preset-battery"
+          disabled={off}
+          items={BATTERY_PRESETS}
+          onPick={(i) => {
+            const p = BATTERY_PRESETS[i]?.battery;
+            if (p?.chemistry) setValue('battery.chemistry', p.chemistry, { shouldDirty: true });
+            if (p?.capacityAh) setValue('battery.capacityAh', p.capacityAh, { shouldDirty: true });
+            if (p?.nominalV) setValue('battery.nominalV', p.nominalV, { shouldDirty: true });
+          }}
+        />
+        <Controller
+          control={control}
+          name="battery.chemistry"
+          render={({ field }) => (
+            <ChoiceChips
+              testID="rig-chemistry"
+              label="Chemistry"
+              disabled={off}
+              value={field.value}
+              onChange={field.onChange}
+              options={[
+                { value: 'lifepo4', label: 'LiFePO4' },
+                { value: 'agm', label: 'AGM' },
+                { value: 'flooded', label: 'Flooded lead-acid' },
+              ]}
+            />
+          )}
+        />
         <View style={styles.grid}>
-          <Num control={control} disabled={off} name="battery.capacityAh" label="Capacity" unit="Ah" range={[0, 10_000]} testID="rig-capacity" />
-          <Num control={control} disabled={off} name="battery.nominalV" label="Voltage" unit="V" range={[6, 60]} testID="rig-voltage" />
+          <Num
+            control={control}
+            disabled={off}
+            name="battery.capacityAh"
+            label="Capacity"
+            unit="Ah"
+            range={[0, 10_000]}
+            testID="rig-capacity"
+          />
+          <Num
+            control={control}
+            disabled={off}
+            name="battery.nominalV"
+            label="Voltage"
+            unit="V"
+            range={[6, 60]}
+            testID="rig-voltage"
+          />
         </View>
         <View style={styles.grid}>
-          <Num control={control} disabled={off} optional name="battery.reservePct" label="Reserve" unit="%" range={[0, 100]} hint="left empty, the chemistry's usual depth of discharge" testID="rig-reserve" />
-          <Num control={control} disabled={off} name="battery.initialSocPct" label="Charge at the start" unit="%" range={[0, 100]} hint="state of charge when the trip begins" testID="rig-initial-soc" />
+          <Num
+            control={control}
+            disabled={off}
+            optional
+            name="battery.reservePct"
+            label="Reserve"
+            unit="%"
+            range={[0, 100]}
+            hint="left empty, the chemistry's usual depth of discharge"
+            testID="rig-reserve"
+          />
+          <Num
+            control={control}
+            disabled={off}
+            name="battery.initialSocPct"
+            label="Charge at the start"
+            unit="%"
+            range={[0, 100]}
+            hint="state of charge when the trip begins"
+            testID="rig-initial-soc"
+          />
         </View>
-        <Controller control={control} name="battery.heatedSpace" render={({ field }) => (
-          <ChoiceChips testID="rig-heated" label="Where the battery sits" disabled={off} value={field.value ? 'inside' : 'outside'} onChange={(v) => field.onChange(v === 'inside')} options={[{ value: 'outside', label: 'Outside the heated space' }, { value: 'inside', label: 'Inside the heated space' }]} />
-        )} />
+        <Controller
+          control={control}
+          name="battery.heatedSpace"
+          render={({ field }) => (
+            <ChoiceChips
+              testID="rig-heated"
+              label="Where the battery sits"
+              disabled={off}
+              value={field.value ? 'inside' : 'outside'}
+              onChange={(v) => field.onChange(v === 'inside')}
+              options={[
+                { value: 'outside', label: 'Outside the heated space' },
+                { value: 'inside', label: 'Inside the heated space' },
+              ]}
+            />
+          )}
+        />
         <Text variant="caption" color="inkSoft">
           Inside, the battery is kept warm by the living space, so a cold night outside does not stop it charging.
         </Text>
@@ -102,41 +198,151 @@ export function RigForm({ tripId, record, canEdit }: { tripId: string; record: R
 
       <Section title="Solar" testID="rig-solar">
         {arrays.fields.map((f, i) => (
-          <SolarArrayFields key={f.id} control={control} setValue={setValue} index={i} units={units} disabled={off} onRemove={canEdit ? () => arrays.remove(i) : null} />
+          <SolarArrayFields
+            key={f.id}
+            control={control}
+            setValue={setValue}
+            index={i}
+            units={units}
+            disabled={off}
+            onRemove={canEdit ? () => arrays.remove(i) : null}
+          />
         ))}
-        <Presets testID="preset-solar" disabled={off} items={SOLAR_PRESETS.map((w) => ({ label: `+ ${w} W flat` }))} onPick={(i) => {
-          arrays.append(newSolarArray(SOLAR_PRESETS[i] ?? 200, arrays.fields.length));
-          if (!controller) setValue('controller', { kind: 'mppt', maxAmps: 30, efficiency: 0.97 }, { shouldDirty: true });
-        }} />
+        <Presets
+          testID="preset-solar"
+          disabled={off}
+          items={SOLAR_PRESETS.map((w) => ({ label: `+ ${w} W flat` }))}
+          onPick={(i) => {
+            arrays.append(newSolarArray(SOLAR_PRESETS[i] ?? 200, arrays.fields.length));
+            if (!controller)
+              setValue('controller', { kind: 'mppt', maxAmps: 30, efficiency: 0.97 }, { shouldDirty: true });
+          }}
+        />
         {controller ? (
           <>
-            <Controller control={control} name="controller.kind" render={({ field }) => (
-              <ChoiceChips testID="rig-controller-kind" label="Charge controller" disabled={off} value={field.value ?? 'mppt'} onChange={field.onChange} options={[{ value: 'mppt', label: 'MPPT' }, { value: 'pwm', label: 'PWM' }]} />
-            )} />
+            <Controller
+              control={control}
+              name="controller.kind"
+              render={({ field }) => (
+                <ChoiceChips
+                  testID="rig-controller-kind"
+                  label="Charge controller"
+                  disabled={off}
+                  value={field.value ?? 'mppt'}
+                  onChange={field.onChange}
+                  options={[
+                    { value: 'mppt', label: 'MPPT' },
+                    { value: 'pwm', label: 'PWM' },
+                  ]}
+                />
+              )}
+            />
             <View style={styles.grid}>
-              <Num control={control} disabled={off} name="controller.maxAmps" label="Controller rating" unit="A" range={[0, 500]} testID="rig-controller-amps" />
-              <Num control={control} disabled={off} name="controller.efficiency" label="Controller efficiency" shown={percentOfFraction} range={[0.5, 1]} hint="about 97 % for MPPT" testID="rig-controller-efficiency" />
+              <Num
+                control={control}
+                disabled={off}
+                name="controller.maxAmps"
+                label="Controller rating"
+                unit="A"
+                range={[0, 500]}
+                testID="rig-controller-amps"
+              />
+              <Num
+                control={control}
+                disabled={off}
+                name="controller.efficiency"
+                label="Controller efficiency"
+                shown={percentOfFraction}
+                range={[0.5, 1]}
+                hint="about 97 % for MPPT"
+                testID="rig-controller-efficiency"
+              />
             </View>
           </>
         ) : null}
-        {formState.errors.controller?.message ? <Text color="ember" variant="caption">{formState.errors.controller.message}</Text> : null}
+        {formState.errors.controller?.message ? (
+          <Text color="ember" variant="caption">
+            {formState.errors.controller.message}
+          </Text>
+        ) : null}
       </Section>
 
-      <Section title="Inverter" testID="rig-inverter" right={toggle('inverter', !!inverter, 'rig-inverter-toggle', (on) => setValue('inverter', on ? (INVERTER_PRESETS[1]?.inverter ?? null) : null, { shouldDirty: true }))}>
+      <Section
+        title="Inverter"
+        testID="rig-inverter"
+        right={toggle('inverter', !!inverter, 'rig-inverter-toggle', (on) =>
+          setValue('inverter', on ? (INVERTER_PRESETS[1]?.inverter ?? null) : null, { shouldDirty: true }),
+        )}
+      >
         {inverter ? (
           <>
-            <Presets testID="preset-inverter" disabled={off} items={INVERTER_PRESETS} onPick={(i) => setValue('inverter', INVERTER_PRESETS[i]?.inverter ?? null, { shouldDirty: true })} />
+            <Presets
+              testID="preset-inverter"
+              disabled={off}
+              items={INVERTER_PRESETS}
+              onPick={(i) => setValue('inverter', INVERTER_PRESETS[i]?.inverter ?? null, { shouldDirty: true })}
+            />
             <View style={styles.grid}>
-              <Num control={control} disabled={off} name="inverter.ratedW" label="Rating" unit="W" range={[0, 20_000]} testID="rig-inverter-watts" />
-              <Num control={control} disabled={off} optional name="inverter.surgeW" label="Surge (optional)" unit="W" range={[0, 60_000]} hint="for a few seconds, when motors start" testID="rig-inverter-surge" />
+              <Num
+                control={control}
+                disabled={off}
+                name="inverter.ratedW"
+                label="Rating"
+                unit="W"
+                range={[0, 20_000]}
+                testID="rig-inverter-watts"
+              />
+              <Num
+                control={control}
+                disabled={off}
+                optional
+                name="inverter.surgeW"
+                label="Surge (optional)"
+                unit="W"
+                range={[0, 60_000]}
+                hint="for a few seconds, when motors start"
+                testID="rig-inverter-surge"
+              />
             </View>
-            <Controller control={control} name="inverter.mode" render={({ field }) => (
-              <ChoiceChips testID="rig-inverter-mode" label="Switched on" disabled={off} value={field.value ?? 'on-demand'} onChange={field.onChange} options={[{ value: 'on-demand', label: 'Only when AC is used' }, { value: 'always', label: 'All the time' }]} />
-            )} />
+            <Controller
+              control={control}
+              name="inverter.mode"
+              render={({ field }) => (
+                <ChoiceChips
+                  testID="rig-inverter-mode"
+                  label="Switched on"
+                  disabled={off}
+                  value={field.value ?? 'on-demand'}
+                  onChange={field.onChange}
+                  options={[
+                    { value: 'on-demand', label: 'Only when AC is used' },
+                    { value: 'always', label: 'All the time' },
+                  ]}
+                />
+              )}
+            />
             <Advanced what="inverter losses" testID="rig-inverter-advanced">
               <View style={styles.grid}>
-                <Num control={control} disabled={off} name="inverter.efficiency" label="Efficiency" shown={percentOfFraction} range={[0.5, 1]} hint="share of battery power that comes out as AC" testID="rig-inverter-efficiency" />
-                <Num control={control} disabled={off} name="inverter.idleW" label="Idle draw" unit="W" range={[0, 200]} hint={inverter.mode === 'always' ? 'drawn every hour of the trip' : 'drawn in hours with AC load'} testID="rig-inverter-idle" />
+                <Num
+                  control={control}
+                  disabled={off}
+                  name="inverter.efficiency"
+                  label="Efficiency"
+                  shown={percentOfFraction}
+                  range={[0.5, 1]}
+                  hint="share of battery power that comes out as AC"
+                  testID="rig-inverter-efficiency"
+                />
+                <Num
+                  control={control}
+                  disabled={off}
+                  name="inverter.idleW"
+                  label="Idle draw"
+                  unit="W"
+                  range={[0, 200]}
+                  hint={inverter.mode === 'always' ? 'drawn every hour of the trip' : 'drawn in hours with AC load'}
+                  testID="rig-inverter-idle"
+                />
               </View>
             </Advanced>
           </>
@@ -148,30 +354,85 @@ export function RigForm({ tripId, record, canEdit }: { tripId: string; record: R
       <Section title="Chargers" testID="rig-chargers">
         {shoreCharger ? (
           <View style={styles.grid}>
-            <Num control={control} disabled={off} name="shoreCharger.amps" label="Shore charger" unit="A" range={[0, 500]} testID="rig-shore-amps" />
-            <Num control={control} disabled={off} name="shoreCharger.efficiency" label="Shore charger efficiency" shown={percentOfFraction} range={[0.5, 1]} hint="share of hookup power that reaches the battery" testID="rig-shore-efficiency" />
+            <Num
+              control={control}
+              disabled={off}
+              name="shoreCharger.amps"
+              label="Shore charger"
+              unit="A"
+              range={[0, 500]}
+              testID="rig-shore-amps"
+            />
+            <Num
+              control={control}
+              disabled={off}
+              name="shoreCharger.efficiency"
+              label="Shore charger efficiency"
+              shown={percentOfFraction}
+              range={[0.5, 1]}
+              hint="share of hookup power that reaches the battery"
+              testID="rig-shore-efficiency"
+            />
           </View>
         ) : null}
         {vehicleCharger ? (
           <>
-            <Controller control={control} name="vehicleCharger.kind" render={({ field }) => (
-              <ChoiceChips testID="rig-vehicle-kind" label="Vehicle charging" disabled={off} value={field.value ?? 'dc-dc'} onChange={field.onChange} options={[{ value: 'dc-dc', label: 'DC-DC charger' }, { value: 'alternator', label: 'Straight from the alternator' }]} />
-            )} />
+            <Controller
+              control={control}
+              name="vehicleCharger.kind"
+              render={({ field }) => (
+                <ChoiceChips
+                  testID="rig-vehicle-kind"
+                  label="Vehicle charging"
+                  disabled={off}
+                  value={field.value ?? 'dc-dc'}
+                  onChange={field.onChange}
+                  options={[
+                    { value: 'dc-dc', label: 'DC-DC charger' },
+                    { value: 'alternator', label: 'Straight from the alternator' },
+                  ]}
+                />
+              )}
+            />
             <View style={styles.grid}>
-              <Num control={control} disabled={off} name="vehicleCharger.amps" label="Vehicle charger" unit="A" range={[0, 300]} hint="while driving" testID="rig-vehicle-amps" />
+              <Num
+                control={control}
+                disabled={off}
+                name="vehicleCharger.amps"
+                label="Vehicle charger"
+                unit="A"
+                range={[0, 300]}
+                hint="while driving"
+                testID="rig-vehicle-amps"
+              />
             </View>
           </>
         ) : null}
         <View style={styles.presets}>
-          {toggle('shore charger', !!shoreCharger, 'rig-shore-toggle', (on) => setValue('shoreCharger', on ? { amps: 20, efficiency: 0.9 } : null, { shouldDirty: true }))}
-          {toggle('vehicle charger', !!vehicleCharger, 'rig-vehicle-toggle', (on) => setValue('vehicleCharger', on ? { kind: 'dc-dc', amps: 25 } : null, { shouldDirty: true }))}
+          {toggle('shore charger', !!shoreCharger, 'rig-shore-toggle', (on) =>
+            setValue('shoreCharger', on ? { amps: 20, efficiency: 0.9 } : null, { shouldDirty: true }),
+          )}
+          {toggle('vehicle charger', !!vehicleCharger, 'rig-vehicle-toggle', (on) =>
+            setValue('vehicleCharger', on ? { kind: 'dc-dc', amps: 25 } : null, { shouldDirty: true }),
+          )}
         </View>
       </Section>
 
-      <Section title="Generator" testID="rig-generator" right={toggle('generator', !!generator, 'rig-generator-toggle', (on) => setValue('generator', on ? (GENERATOR_PRESETS[0]?.generator ?? null) : null, { shouldDirty: true }))}>
+      <Section
+        title="Generator"
+        testID="rig-generator"
+        right={toggle('generator', !!generator, 'rig-generator-toggle', (on) =>
+          setValue('generator', on ? (GENERATOR_PRESETS[0]?.generator ?? null) : null, { shouldDirty: true }),
+        )}
+      >
         {generator ? (
           <>
-            <Presets testID="preset-generator" disabled={off} items={GENERATOR_PRESETS} onPick={(i) => setValue('generator', GENERATOR_PRESETS[i]?.generator ?? null, { shouldDirty: true })} />
+            <Presets
+              testID="preset-generator"
+              disabled={off}
+              items={GENERATOR_PRESETS}
+              onPick={(i) => setValue('generator', GENERATOR_PRESETS[i]?.generator ?? null, { shouldDirty: true })}
+            />
             {/* Keyed on the record so a reset (save, conflict) forgets set hours the new record does not have. */}
             <GeneratorFields key={record.version} control={control} setValue={setValue} disabled={off} />
           </>
@@ -184,29 +445,70 @@ export function RigForm({ tripId, record, canEdit }: { tripId: string; record: R
       <Section title="Propane" testID="rig-propane">
         {tanks.fields.map((f, i) => (
           <View key={f.id} style={[styles.grid, styles.item]} testID={`rig-tank-${i}-card`}>
-            <Controller control={control} name={`propaneTanks.${i}.name`} render={({ field, fieldState }) => (
-              <View style={styles.cell}>
-                <TextField testID={`rig-tank-${i}-name`} label={`Cylinder ${i + 1} name`} editable={canEdit} value={field.value ?? ''} onChangeText={field.onChange} onBlur={field.onBlur} error={fieldState.error ? 'Give the cylinder a name (up to 80 letters).' : undefined} />
-              </View>
-            )} />
-            <Controller control={control} name={`propaneTanks.${i}.propaneKg`} render={({ field, fieldState }) => (
-              <View style={styles.cell}>
-                <NumberField
-                  testID={`rig-tank-${i}`}
-                  label="Holds"
-                  unit={massUnit}
-                  editable={canEdit}
-                  value={field.value === undefined ? undefined : Math.round(toDisplay(field.value, 'mass', units).value * 10) / 10}
-                  onChangeNumber={(v) => field.onChange(v === null ? null : fromDisplay(v, 'mass', units))}
-                  error={fieldState.error ? `Enter how much propane it holds, in ${massUnit}.` : undefined}
-                />
-              </View>
-            )} />
-            <Num control={control} disabled={off} name={`propaneTanks.${i}.fillPct`} label="Full at the start" unit="%" range={[0, 100]} testID={`rig-tank-${i}-fill`} />
-            {canEdit ? <Button testID={`rig-tank-${i}-remove`} tone="quiet" style={styles.remove} label={`Remove cylinder ${i + 1}`} onPress={() => tanks.remove(i)} /> : null}
+            <Controller
+              control={control}
+              name={`propaneTanks.${i}.name`}
+              render={({ field, fieldState }) => (
+                <View style={styles.cell}>
+                  <TextField
+                    testID={`rig-tank-${i}-name`}
+                    label={`Cylinder ${i + 1} name`}
+                    editable={canEdit}
+                    value={field.value ?? ''}
+                    onChangeText={field.onChange}
+                    onBlur={field.onBlur}
+                    error={fieldState.error ? 'Give the cylinder a name (up to 80 letters).' : undefined}
+                  />
+                </View>
+              )}
+            />
+            <Controller
+              control={control}
+              name={`propaneTanks.${i}.propaneKg`}
+              render={({ field, fieldState }) => (
+                <View style={styles.cell}>
+                  <NumberField
+                    testID={`rig-tank-${i}`}
+                    label="Holds"
+                    unit={massUnit}
+                    editable={canEdit}
+                    value={
+                      field.value === undefined
+                        ? undefined
+                        : Math.round(toDisplay(field.value, 'mass', units).value * 10) / 10
+                    }
+                    onChangeNumber={(v) => field.onChange(v === null ? null : fromDisplay(v, 'mass', units))}
+                    error={fieldState.error ? `Enter how much propane it holds, in ${massUnit}.` : undefined}
+                  />
+                </View>
+              )}
+            />
+            <Num
+              control={control}
+              disabled={off}
+              name={`propaneTanks.${i}.fillPct`}
+              label="Full at the start"
+              unit="%"
+              range={[0, 100]}
+              testID={`rig-tank-${i}-fill`}
+            />
+            {canEdit ? (
+              <Button
+                testID={`rig-tank-${i}-remove`}
+                tone="quiet"
+                style={styles.remove}
+                label={`Remove cylinder ${i + 1}`}
+                onPress={() => tanks.remove(i)}
+              />
+            ) : null}
           </View>
         ))}
-        <Presets testID="preset-tank" disabled={off} items={TANK_PRESETS.map((t) => ({ label: `+ ${t.label}` }))} onPick={(i) => tanks.append({ name: 'Cylinder', propaneKg: TANK_PRESETS[i]?.propaneKg ?? 6, fillPct: 100 })} />
+        <Presets
+          testID="preset-tank"
+          disabled={off}
+          items={TANK_PRESETS.map((t) => ({ label: `+ ${t.label}` }))}
+          onPick={(i) => tanks.append({ name: 'Cylinder', propaneKg: TANK_PRESETS[i]?.propaneKg ?? 6, fillPct: 100 })}
+        />
         <Caution kind="propane" testID="caution-propane" />
       </Section>
       <Caution kind="cabling" testID="caution-cabling" />
@@ -224,14 +526,28 @@ export function RigForm({ tripId, record, canEdit }: { tripId: string; record: R
           }}
         />
       ) : null}
-      {canEdit ? <Button testID="rig-save" label="Save rig" busy={formState.isSubmitting} disabled={formState.isSubmitting} onPress={() => void send(baseVersion.current)()} /> : null}
+      {canEdit ? (
+        <Button
+          testID="rig-save"
+          label="Save rig"
+          busy={formState.isSubmitting}
+          disabled={formState.isSubmitting}
+          onPress={() => void send(baseVersion.current)()}
+        />
+      ) : null}
     </View>
   );
 }
 
 const styles = StyleSheet.create({
   form: { gap: space.xl },
-  head: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', justifyContent: 'space-between', gap: space.sm },
+  head: {
+    flexDirection: 'row',
+    flexWrap: 'wrap',
+    alignItems: 'center',
+    justifyContent: 'space-between',
+    gap: space.sm,
+  },
   grid: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'flex-start', gap: space.md },
   // Basis 0 with a minimum width: equal columns that wrap to one per row on a phone.
   cell: { flexGrow: 1, flexBasis: 0, minWidth: 140 },

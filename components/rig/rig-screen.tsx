@@ -20,7 +20,8 @@ function MyRigs({ detail }: { detail: TripDetail }) {
   const copy = useTripRigCopyToMineMutation(detail.trip.id);
   const replace = useTripRigReplaceMutation(detail.trip.id);
   const [name, setName] = useState(detail.rig.rig.name);
-  const fail = (error: unknown) => showToast(error instanceof ApiError ? error.message : 'That did not work.', { tone: 'danger' });
+  const fail = (error: unknown) =>
+    showToast(error instanceof ApiError ? error.message : 'That did not work.', { tone: 'danger' });
   return (
     <Card testID="my-rigs">
       <Text variant="title" role="heading" aria-level={2}>
@@ -29,7 +30,13 @@ function MyRigs({ detail }: { detail: TripDetail }) {
       <Text variant="caption" color="inkSoft">
         Keep this rig for other trips, or put one of yours on this trip (it replaces the rig above).
       </Text>
-      <TextField testID="rig-save-name" label="Save this rig as" value={name} onChangeText={setName} error={name.trim() ? undefined : 'Give it a name.'} />
+      <TextField
+        testID="rig-save-name"
+        label="Save this rig as"
+        value={name}
+        onChangeText={setName}
+        error={name.trim() ? undefined : 'Give it a name.'}
+      />
       <Button
         testID="rig-save-to-mine"
         tone="secondary"
@@ -51,7 +58,11 @@ function MyRigs({ detail }: { detail: TripDetail }) {
             label="Use on this trip"
             accessibilityLabel={`Use ${r.rig.name} on this trip`}
             busy={replace.isPending && replace.variables?.rigId === r.id}
-            onPress={() => replace.mutateAsync({ version: detail.rig.version, rigId: r.id }).then(() => showToast(`${r.rig.name} is now this trip's rig`), fail)}
+            onPress={() =>
+              replace
+                .mutateAsync({ version: detail.rig.version, rigId: r.id })
+                .then(() => showToast(`${r.rig.name} is now this trip's rig`), fail)
+            }
           />
         </View>
       ))}
@@ -63,7 +74,9 @@ export function RigScreen({ detail }: { detail: TripDetail }) {
   const canEdit = can(detail.trip.role, 'editTrip');
   return (
     <TabScroll testID="rig-screen">
-      {!canEdit ? <Banner testID="rig-read-only" tone="info" message="Only the trip owner or a planner can change the rig." /> : null}
+      {!canEdit ? (
+        <Banner testID="rig-read-only" tone="info" message="Only the trip owner or a planner can change the rig." />
+      ) : null}
       <Panes
         main={<RigForm key={detail.rig.id} tripId={detail.trip.id} record={detail.rig} canEdit={canEdit} />}
         side={canEdit ? <MyRigs detail={detail} /> : <View />}
@@ -73,4 +86,7 @@ export function RigScreen({ detail }: { detail: TripDetail }) {
   );
 }
 
-const styles = StyleSheet.create({ row: { flexDirection: 'row', alignItems: 'center', gap: space.sm, flexWrap: 'wrap' }, name: { flex: 1 } });
+const styles = StyleSheet.create({
+  row: { flexDirection: 'row', alignItems: 'center', gap: space.sm, flexWrap: 'wrap' },
+  name: { flex: 1 },
+});

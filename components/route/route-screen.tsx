@@ -20,12 +20,32 @@ import { useUnits } from '@/stores/units-store';
 import { StopForm } from './stop-form';
 import { SunPath } from './sun-path';
 
-const EXPOSURE: Record<string, string> = { open: 'open sky', 'light-cover': 'light tree cover', 'partial-shade': 'partial shade', 'deep-forest': 'deep forest' };
-const SKY: Record<string, string> = { clear: 'clear', hazy: 'hazy or smoke', 'broken-cloud': 'broken cloud', overcast: 'overcast' };
+const EXPOSURE: Record<string, string> = {
+  open: 'open sky',
+  'light-cover': 'light tree cover',
+  'partial-shade': 'partial shade',
+  'deep-forest': 'deep forest',
+};
+const SKY: Record<string, string> = {
+  clear: 'clear',
+  hazy: 'hazy or smoke',
+  'broken-cloud': 'broken cloud',
+  overcast: 'overcast',
+};
 
 type Editing = { kind: 'stop'; id: string } | { kind: 'new' } | null;
 
-function DriveRow({ tripId, record, index, canEdit }: { tripId: string; record: DriveRecord; index: number; canEdit: boolean }) {
+function DriveRow({
+  tripId,
+  record,
+  index,
+  canEdit,
+}: {
+  tripId: string;
+  record: DriveRecord;
+  index: number;
+  canEdit: boolean;
+}) {
   const save = useDriveSaveMutation(tripId);
   const [hours, setHours] = useState<number | null>(record.drive.hoursOnRoad);
   const dirty = hours !== record.drive.hoursOnRoad;
@@ -40,14 +60,27 @@ function DriveRow({ tripId, record, index, canEdit }: { tripId: string; record: 
   return (
     <View style={styles.drive} testID={`drive-${index}`}>
       <Text variant="label" color="lake">
-        Drive {index + 1}: {record.drive.hoursOnRoad} h on the road{record.drive.vehicleCharging ? ', charging from the vehicle' : ''}
+        Drive {index + 1}: {record.drive.hoursOnRoad} h on the road
+        {record.drive.vehicleCharging ? ', charging from the vehicle' : ''}
       </Text>
       {canEdit ? (
         <View style={styles.driveEdit}>
           <View style={styles.driveField}>
-            <NumberField testID={`drive-${index}-hours`} label="Hours on the road" value={hours} onChangeNumber={setHours} />
+            <NumberField
+              testID={`drive-${index}-hours`}
+              label="Hours on the road"
+              value={hours}
+              onChangeNumber={setHours}
+            />
           </View>
-          <Button testID={`drive-${index}-save`} tone="secondary" label="Save" disabled={!dirty || hours === null} busy={save.isPending} onPress={() => hours !== null && void send({ ...record.drive, hoursOnRoad: hours })} />
+          <Button
+            testID={`drive-${index}-save`}
+            tone="secondary"
+            label="Save"
+            disabled={!dirty || hours === null}
+            busy={save.isPending}
+            onPress={() => hours !== null && void send({ ...record.drive, hoursOnRoad: hours })}
+          />
           <Button
             testID={`drive-${index}-charging`}
             tone="quiet"
@@ -102,17 +135,44 @@ export function RouteScreen({ detail }: { detail: TripDetail }) {
           {localMoment(s.arriveAt)} → {localMoment(s.departAt)}
         </Text>
         <Text>
-          {s.exposure.kind === 'preset' ? EXPOSURE[s.exposure.preset] : 'custom horizon'} · {SKY[s.skyOutlook]} · {s.hookup ? `hookup ${s.hookup.amps} A ${s.hookup.volts} V` : 'no hookup'} ·{' '}
+          {s.exposure.kind === 'preset' ? EXPOSURE[s.exposure.preset] : 'custom horizon'} · {SKY[s.skyOutlook]} ·{' '}
+          {s.hookup ? `hookup ${s.hookup.amps} A ${s.hookup.volts} V` : 'no hookup'} ·{' '}
           {temperature(s.lowC, units).value}–{temperature(s.highC, units).value} {temperature(0, units).unit}
         </Text>
         {canEdit ? (
           <View style={styles.actions}>
-            <Button testID={`stop-${i}-edit`} tone="secondary" label="Edit" accessibilityLabel={`Edit ${s.name}`} onPress={() => setEditing({ kind: 'stop', id: record.id })} />
-            <Button testID={`stop-${i}-up`} tone="quiet" label="↑ Earlier" accessibilityLabel={`Move ${s.name} earlier`} disabled={i === 0 || reorder.isPending} onPress={() => void move(i, -1)} />
-            <Button testID={`stop-${i}-down`} tone="quiet" label="↓ Later" accessibilityLabel={`Move ${s.name} later`} disabled={i === detail.stops.length - 1 || reorder.isPending} onPress={() => void move(i, 1)} />
+            <Button
+              testID={`stop-${i}-edit`}
+              tone="secondary"
+              label="Edit"
+              accessibilityLabel={`Edit ${s.name}`}
+              onPress={() => setEditing({ kind: 'stop', id: record.id })}
+            />
+            <Button
+              testID={`stop-${i}-up`}
+              tone="quiet"
+              label="↑ Earlier"
+              accessibilityLabel={`Move ${s.name} earlier`}
+              disabled={i === 0 || reorder.isPending}
+              onPress={() => void move(i, -1)}
+            />
+            <Button
+              testID={`stop-${i}-down`}
+              tone="quiet"
+              label="↓ Later"
+              accessibilityLabel={`Move ${s.name} later`}
+              disabled={i === detail.stops.length - 1 || reorder.isPending}
+              onPress={() => void move(i, 1)}
+            />
           </View>
         ) : (
-          <Button testID={`stop-${i}-view`} tone="quiet" label="Sun path" accessibilityLabel={`Show the sun path at ${s.name}`} onPress={() => setEditing({ kind: 'stop', id: record.id })} />
+          <Button
+            testID={`stop-${i}-view`}
+            tone="quiet"
+            label="Sun path"
+            accessibilityLabel={`Show the sun path at ${s.name}`}
+            onPress={() => setEditing({ kind: 'stop', id: record.id })}
+          />
         )}
       </Card>
     );
@@ -120,16 +180,24 @@ export function RouteScreen({ detail }: { detail: TripDetail }) {
 
   const list = (
     <View style={styles.column}>
-      {!canEdit ? <Banner testID="route-read-only" tone="info" message="Only the trip owner or a planner can change the route." /> : null}
+      {!canEdit ? (
+        <Banner testID="route-read-only" tone="info" message="Only the trip owner or a planner can change the route." />
+      ) : null}
       {detail.stops.length === 0 ? (
-        <EmptyState testID="route-empty" title="No stops yet" body="Add the first place you will stay: its coordinates, dates and how open the sky is." />
+        <EmptyState
+          testID="route-empty"
+          title="No stops yet"
+          body="Add the first place you will stay: its coordinates, dates and how open the sky is."
+        />
       ) : null}
       {detail.stops.map((record, i) => {
         const drive = detail.drives[i];
         return (
           <View key={record.id} style={styles.column}>
             {stopCard(record, i)}
-            {drive && i < detail.stops.length - 1 ? <DriveRow tripId={detail.trip.id} record={drive} index={i} canEdit={canEdit} /> : null}
+            {drive && i < detail.stops.length - 1 ? (
+              <DriveRow tripId={detail.trip.id} record={drive} index={i} canEdit={canEdit} />
+            ) : null}
           </View>
         );
       })}
@@ -161,7 +229,9 @@ export function RouteScreen({ detail }: { detail: TripDetail }) {
         ) : (
           <Button testID="stop-close" tone="quiet" label="Close" onPress={() => setEditing(null)} />
         )}
-        {current && canEdit && !confirmRemove ? <Button testID="stop-delete" tone="quiet" label="Remove stop…" onPress={() => setConfirmRemove(true)} /> : null}
+        {current && canEdit && !confirmRemove ? (
+          <Button testID="stop-delete" tone="quiet" label="Remove stop…" onPress={() => setConfirmRemove(true)} />
+        ) : null}
         {current && canEdit && confirmRemove ? (
           <View style={styles.actions}>
             <Text variant="label" color="ember">
@@ -178,7 +248,9 @@ export function RouteScreen({ detail }: { detail: TripDetail }) {
                   showToast(`${current.stop.name} removed`);
                   setEditing(null);
                 } catch (error) {
-                  showToast(error instanceof ApiError ? error.message : 'The stop could not be removed.', { tone: 'danger' });
+                  showToast(error instanceof ApiError ? error.message : 'The stop could not be removed.', {
+                    tone: 'danger',
+                  });
                 }
                 setConfirmRemove(false);
               }}
@@ -189,7 +261,11 @@ export function RouteScreen({ detail }: { detail: TripDetail }) {
       </Card>
     );
 
-  return <TabScroll testID="route-screen">{wide ? <Panes main={list} side={editor} sideWidth={560} /> : editing ? editor : list}</TabScroll>;
+  return (
+    <TabScroll testID="route-screen">
+      {wide ? <Panes main={list} side={editor} sideWidth={560} /> : editing ? editor : list}
+    </TabScroll>
+  );
 }
 
 const styles = StyleSheet.create({
@@ -197,9 +273,25 @@ const styles = StyleSheet.create({
   selected: { borderColor: colors.pine, borderWidth: 2 },
   stopHead: { flexDirection: 'row', alignItems: 'center', gap: space.sm },
   stopName: { flex: 1 },
-  badge: { width: 32, height: 32, borderRadius: 16, backgroundColor: colors.lake, alignItems: 'center', justifyContent: 'center' },
+  badge: {
+    width: 32,
+    height: 32,
+    borderRadius: 16,
+    backgroundColor: colors.lake,
+    alignItems: 'center',
+    justifyContent: 'center',
+  },
   actions: { flexDirection: 'row', flexWrap: 'wrap', gap: space.xs },
-  drive: { marginLeft: space.xl, paddingLeft: space.lg, borderLeftWidth: 3, borderLeftColor: colors.lake, borderStyle: 'dashed', gap: space.sm, paddingVertical: space.sm, borderRadius: radii.sm },
+  drive: {
+    marginLeft: space.xl,
+    paddingLeft: space.lg,
+    borderLeftWidth: 3,
+    borderLeftColor: colors.lake,
+    borderStyle: 'dashed',
+    gap: space.sm,
+    paddingVertical: space.sm,
+    borderRadius: radii.sm,
+  },
   driveEdit: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'flex-end', gap: space.sm },
   driveField: { width: 160 },
 });

@@ -9,8 +9,14 @@ const LOCAL = 'yyyy-MM-dd HH:mm';
 
 export const stopFormSchema = z.object({
   name: z.string().trim().min(1, { error: 'Give the stop a name.' }).max(120),
-  lat: z.number({ error: 'Enter a latitude.' }).min(-90, { error: 'Latitude runs from −90 to 90.' }).max(90, { error: 'Latitude runs from −90 to 90.' }),
-  lon: z.number({ error: 'Enter a longitude.' }).min(-180, { error: 'Longitude runs from −180 to 180.' }).max(180, { error: 'Longitude runs from −180 to 180.' }),
+  lat: z
+    .number({ error: 'Enter a latitude.' })
+    .min(-90, { error: 'Latitude runs from −90 to 90.' })
+    .max(90, { error: 'Latitude runs from −90 to 90.' }),
+  lon: z
+    .number({ error: 'Enter a longitude.' })
+    .min(-180, { error: 'Longitude runs from −180 to 180.' })
+    .max(180, { error: 'Longitude runs from −180 to 180.' }),
   timeZone: z.string().min(1, { error: 'Choose a time zone.' }),
   arrive: z.string().regex(/^\d{4}-\d{2}-\d{2} \d{2}:\d{2}$/, { error: 'Use a date and time like 2027-09-12 15:00.' }),
   depart: z.string().regex(/^\d{4}-\d{2}-\d{2} \d{2}:\d{2}$/, { error: 'Use a date and time like 2027-09-14 10:00.' }),
@@ -31,29 +37,56 @@ export const stopFormSchema = z.object({
 });
 export type StopFormValues = z.infer<typeof stopFormSchema>;
 
-export function toFormValues(stop: Stop | null, notes: string, units: UnitSystem, fallbackZone: string): StopFormValues {
+export function toFormValues(
+  stop: Stop | null,
+  notes: string,
+  units: UnitSystem,
+  fallbackZone: string,
+): StopFormValues {
   const zone = stop?.timeZone ?? fallbackZone;
-  const local = (iso: string | undefined, fallback: string) => (iso ? DateTime.fromISO(iso, { setZone: true }).setZone(zone).toFormat(LOCAL) : fallback);
+  const local = (iso: string | undefined, fallback: string) =>
+    iso ? DateTime.fromISO(iso, { setZone: true }).setZone(zone).toFormat(LOCAL) : fallback;
   const exposure = stop?.exposure ?? { kind: 'preset' as const, preset: 'open' as const };
   const t = (c: number) => Math.round(toDisplay(c, 'temperature', units).value);
   return {
-    name: stop?.name ?? '', lat: stop?.lat ?? 0, lon: stop?.lon ?? 0, timeZone: zone,
-    arrive: local(stop?.arriveAt, ''), depart: local(stop?.departAt, ''),
-    exposureKind: exposure.kind, preset: exposure.kind === 'preset' ? exposure.preset : 'open',
+    name: stop?.name ?? '',
+    lat: stop?.lat ?? 0,
+    lon: stop?.lon ?? 0,
+    timeZone: zone,
+    arrive: local(stop?.arriveAt, ''),
+    depart: local(stop?.departAt, ''),
+    exposureKind: exposure.kind,
+    preset: exposure.kind === 'preset' ? exposure.preset : 'open',
     horizon: exposure.kind === 'custom' ? exposure.horizonDeg.join(', ') : '0, 0, 0, 0, 0, 0, 0, 0',
     canopyPct: exposure.kind === 'custom' ? Math.round(exposure.canopyTransmittance * 100) : 0,
     skyOutlook: stop?.skyOutlook ?? 'clear',
-    hookupOn: !!stop?.hookup, amps: stop?.hookup?.amps ?? 16, volts: stop?.hookup?.volts ?? 230,
-    generatorOn: stop ? stop.generatorHours !== null : true, generatorStart: stop?.generatorHours?.startHour ?? 8, generatorEnd: stop?.generatorHours?.endHour ?? 20,
-    low: t(stop?.lowC ?? 8), high: t(stop?.highC ?? 18), notes,
+    hookupOn: !!stop?.hookup,
+    amps: stop?.hookup?.amps ?? 16,
+    volts: stop?.hookup?.volts ?? 230,
+    generatorOn: stop ? stop.generatorHours !== null : true,
+    generatorStart: stop?.generatorHours?.startHour ?? 8,
+    generatorEnd: stop?.generatorHours?.endHour ?? 20,
+    low: t(stop?.lowC ?? 8),
+    high: t(stop?.highC ?? 18),
+    notes,
   };
 }
 
-export type StopFromForm = { ok: true; stop: StopInput } | { ok: false; errors: Partial<Record<keyof StopFormValues, string>> };
+export type StopFromForm =
+  { ok: true; stop: StopInput } | { ok: false; errors: Partial<Record<keyof StopFormValues, string>> };
 
 const FIELD_OF: Record<string, keyof StopFormValues> = {
-  name: 'name', lat: 'lat', lon: 'lon', timeZone: 'timeZone', arriveAt: 'arrive', departAt: 'depart', exposure: 'horizon',
-  highC: 'high', lowC: 'low', hookup: 'amps', generatorHours: 'generatorStart',
+  name: 'name',
+  lat: 'lat',
+  lon: 'lon',
+  timeZone: 'timeZone',
+  arriveAt: 'arrive',
+  departAt: 'depart',
+  exposure: 'horizon',
+  highC: 'high',
+  lowC: 'low',
+  hookup: 'amps',
+  generatorHours: 'generatorStart',
 };
 
 /** Builds the API's stop from the form and runs the shared schema on it; its messages land on the right fields. */
@@ -67,16 +100,32 @@ export function fromFormValues(v: StopFormValues, units: UnitSystem): StopFromFo
   const arriveAt = iso(v.arrive);
   const departAt = iso(v.depart);
   const errors: Partial<Record<keyof StopFormValues, string>> = {};
-  if (!arriveAt) errors.arrive = 'That date and time does not exist in this time zone (check the date, or a clock change).';
-  if (!departAt) errors.depart = 'That date and time does not exist in this time zone (check the date, or a clock change).';
-  const horizonDeg = v.horizon.split(/[\s,;]+/).filter(Boolean).map(Number);
-  if (v.exposureKind === 'custom' && (horizonDeg.length < 4 || horizonDeg.length > 36 || horizonDeg.some((h) => !Number.isFinite(h) || h < 0 || h > 90))) {
+  if (!arriveAt)
+    errors.arrive = 'That date and time does not exist in this time zone (check the date, or a clock change).';
+  if (!departAt)
+    errors.depart = 'That date and time does not exist in this time zone (check the date, or a clock change).';
+  const horizonDeg = v.horizon
+    .split(/[\s,;]+/)
+    .filter(Boolean)
+    .map(Number);
+  if (
+    v.exposureKind === 'custom' &&
+    (horizonDeg.length < 4 || horizonDeg.length > 36 || horizonDeg.some((h) => !Number.isFinite(h) || h < 0 || h > 90))
+  ) {
     errors.horizon = 'List 4 to 36 angles from 0 to 90°, clockwise from north (for example 8 or 16 of them).';
   }
   if (!arriveAt || !departAt || errors.horizon) return { ok: false, errors };
   const stop: StopInput = {
-    name: v.name.trim(), lat: v.lat, lon: v.lon, timeZone: v.timeZone, arriveAt, departAt,
-    exposure: v.exposureKind === 'preset' ? { kind: 'preset', preset: v.preset as SitePreset } : { kind: 'custom', horizonDeg, canopyTransmittance: v.canopyPct / 100 },
+    name: v.name.trim(),
+    lat: v.lat,
+    lon: v.lon,
+    timeZone: v.timeZone,
+    arriveAt,
+    departAt,
+    exposure:
+      v.exposureKind === 'preset'
+        ? { kind: 'preset', preset: v.preset as SitePreset }
+        : { kind: 'custom', horizonDeg, canopyTransmittance: v.canopyPct / 100 },
     skyOutlook: v.skyOutlook as SkyOutlook,
     hookup: v.hookupOn ? { amps: v.amps, volts: v.volts } : null,
     generatorHours: v.generatorOn ? { startHour: v.generatorStart, endHour: v.generatorEnd } : null,
@@ -87,7 +136,13 @@ export function fromFormValues(v: StopFormValues, units: UnitSystem): StopFromFo
   if (parsed.success) return { ok: true, stop };
   for (const issue of parsed.error.issues) {
     const field = FIELD_OF[String(issue.path[0])];
-    if (field && !errors[field]) errors[field] = issue.path[0] === 'departAt' ? 'The stop must be left after it is reached.' : issue.path[0] === 'highC' ? 'The high must be at or above the low.' : issue.message;
+    if (field && !errors[field])
+      errors[field] =
+        issue.path[0] === 'departAt'
+          ? 'The stop must be left after it is reached.'
+          : issue.path[0] === 'highC'
+            ? 'The high must be at or above the low.'
+            : issue.message;
   }
   return { ok: false, errors };
 }

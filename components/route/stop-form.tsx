@@ -22,7 +22,19 @@ import { ZonePicker } from './zone-picker';
 type Props = { tripId: string; record: StopRecord | null; fallbackZone: string; onDone: () => void };
 type NumName = 'lat' | 'lon' | 'amps' | 'volts' | 'generatorStart' | 'generatorEnd' | 'low' | 'high' | 'canopyPct';
 
-function Num({ control, name, label, unit, testID }: { control: Control<StopFormValues>; name: NumName; label: string; unit?: string; testID: string }) {
+function Num({
+  control,
+  name,
+  label,
+  unit,
+  testID,
+}: {
+  control: Control<StopFormValues>;
+  name: NumName;
+  label: string;
+  unit?: string;
+  testID: string;
+}) {
   // Numbers always sit in a row of two.
   return (
     <Controller
@@ -30,21 +42,51 @@ function Num({ control, name, label, unit, testID }: { control: Control<StopForm
       name={name}
       render={({ field, fieldState }) => (
         <View style={styles.cell}>
-          <NumberField testID={testID} label={label} unit={unit} value={field.value} onChangeNumber={field.onChange} onBlur={field.onBlur} error={fieldState.error?.message} />
+          <NumberField
+            testID={testID}
+            label={label}
+            unit={unit}
+            value={field.value}
+            onChangeNumber={field.onChange}
+            onBlur={field.onBlur}
+            error={fieldState.error?.message}
+          />
         </View>
       )}
     />
   );
 }
 
-function Txt({ control, name, label, hint, testID, inRow = false }: { control: Control<StopFormValues>; name: 'name' | 'timeZone' | 'arrive' | 'depart' | 'horizon' | 'notes'; label: string; hint?: string; testID: string; inRow?: boolean }) {
+function Txt({
+  control,
+  name,
+  label,
+  hint,
+  testID,
+  inRow = false,
+}: {
+  control: Control<StopFormValues>;
+  name: 'name' | 'timeZone' | 'arrive' | 'depart' | 'horizon' | 'notes';
+  label: string;
+  hint?: string;
+  testID: string;
+  inRow?: boolean;
+}) {
   return (
     <Controller
       control={control}
       name={name}
       render={({ field, fieldState }) => (
         <View style={inRow ? styles.cell : null}>
-          <TextField testID={testID} label={label} hint={hint} value={field.value} onChangeText={field.onChange} onBlur={field.onBlur} error={fieldState.error?.message} />
+          <TextField
+            testID={testID}
+            label={label}
+            hint={hint}
+            value={field.value}
+            onChangeText={field.onChange}
+            onBlur={field.onBlur}
+            error={fieldState.error?.message}
+          />
         </View>
       )}
     />
@@ -62,7 +104,10 @@ export function StopForm({ tripId, record, fallbackZone, onDone }: Props) {
     resolver: zodResolver(stopFormSchema),
     defaultValues: toFormValues(record?.stop ?? null, record?.notes ?? '', units, fallbackZone),
   });
-  const [exposureKind, hookupOn, generatorOn, timeZone] = useWatch({ control, name: ['exposureKind', 'hookupOn', 'generatorOn', 'timeZone'] });
+  const [exposureKind, hookupOn, generatorOn, timeZone] = useWatch({
+    control,
+    name: ['exposureKind', 'hookupOn', 'generatorOn', 'timeZone'],
+  });
   const tUnit = temperature(0, units).unit;
   // Saves name the version the form was opened on, so someone else's change meanwhile is caught (409).
   const baseVersion = useRef(record?.version);
@@ -90,7 +135,8 @@ export function StopForm({ tripId, record, fallbackZone, onDone }: Props) {
       setFormError(undefined);
       const built = fromFormValues(values, units);
       if (!built.ok) {
-        for (const [field, message] of Object.entries(built.errors)) setError(field as keyof StopFormValues, { message });
+        for (const [field, message] of Object.entries(built.errors))
+          setError(field as keyof StopFormValues, { message });
         return;
       }
       try {
@@ -116,9 +162,20 @@ export function StopForm({ tripId, record, fallbackZone, onDone }: Props) {
         <Num control={control} name="lon" label="Longitude" unit="°" testID="stop-lon" />
       </View>
       <View style={styles.zone}>
-        <Txt control={control} name="timeZone" label="Time zone" hint="an IANA name such as Europe/London" testID="stop-time-zone" />
+        <Txt
+          control={control}
+          name="timeZone"
+          label="Time zone"
+          hint="an IANA name such as Europe/London"
+          testID="stop-time-zone"
+        />
         <View style={styles.zoneButtons}>
-          <Button testID="stop-zone-from-coordinates" tone="secondary" label="From coordinates" onPress={() => void zoneFromCoordinates()} />
+          <Button
+            testID="stop-zone-from-coordinates"
+            tone="secondary"
+            label="From coordinates"
+            onPress={() => void zoneFromCoordinates()}
+          />
           <Button
             testID="stop-zone-list-toggle"
             tone="secondary"
@@ -141,41 +198,120 @@ export function StopForm({ tripId, record, fallbackZone, onDone }: Props) {
         />
       ) : null}
       <View style={styles.grid}>
-        <Txt control={control} name="arrive" inRow label="Arrive (local)" hint="YYYY-MM-DD HH:MM" testID="stop-arrive" />
+        <Txt
+          control={control}
+          name="arrive"
+          inRow
+          label="Arrive (local)"
+          hint="YYYY-MM-DD HH:MM"
+          testID="stop-arrive"
+        />
         <Txt control={control} name="depart" inRow label="Leave (local)" hint="YYYY-MM-DD HH:MM" testID="stop-depart" />
       </View>
-      <Controller control={control} name="exposureKind" render={({ field }) => (
-        <ChoiceChips testID="stop-exposure-kind" label="Site exposure" value={field.value} onChange={field.onChange} options={[{ value: 'preset', label: 'A usual site' }, { value: 'custom', label: 'Custom horizon' }]} />
-      )} />
+      <Controller
+        control={control}
+        name="exposureKind"
+        render={({ field }) => (
+          <ChoiceChips
+            testID="stop-exposure-kind"
+            label="Site exposure"
+            value={field.value}
+            onChange={field.onChange}
+            options={[
+              { value: 'preset', label: 'A usual site' },
+              { value: 'custom', label: 'Custom horizon' },
+            ]}
+          />
+        )}
+      />
       {exposureKind === 'preset' ? (
-        <Controller control={control} name="preset" render={({ field }) => (
-          <ChoiceChips testID="stop-preset" label="Cover" value={field.value} onChange={field.onChange} options={[
-            { value: 'open', label: 'Open sky' }, { value: 'light-cover', label: 'Light tree cover' }, { value: 'partial-shade', label: 'Partial shade' }, { value: 'deep-forest', label: 'Deep forest' },
-          ]} />
-        )} />
+        <Controller
+          control={control}
+          name="preset"
+          render={({ field }) => (
+            <ChoiceChips
+              testID="stop-preset"
+              label="Cover"
+              value={field.value}
+              onChange={field.onChange}
+              options={[
+                { value: 'open', label: 'Open sky' },
+                { value: 'light-cover', label: 'Light tree cover' },
+                { value: 'partial-shade', label: 'Partial shade' },
+                { value: 'deep-forest', label: 'Deep forest' },
+              ]}
+            />
+          )}
+        />
       ) : (
         <View style={styles.grid}>
-          <Txt control={control} name="horizon" inRow label="Horizon angles (°)" hint="clockwise from north, e.g. 5, 10, 25, 30, 20, 10, 25, 35" testID="stop-horizon" />
+          <Txt
+            control={control}
+            name="horizon"
+            inRow
+            label="Horizon angles (°)"
+            hint="clockwise from north, e.g. 5, 10, 25, 30, 20, 10, 25, 35"
+            testID="stop-horizon"
+          />
           <Num control={control} name="canopyPct" label="Light through the cover" unit="%" testID="stop-canopy" />
         </View>
       )}
-      <Controller control={control} name="skyOutlook" render={({ field }) => (
-        <ChoiceChips testID="stop-sky" label="Sky outlook" value={field.value} onChange={field.onChange} options={[
-          { value: 'clear', label: 'Clear' }, { value: 'hazy', label: 'Hazy or smoke' }, { value: 'broken-cloud', label: 'Broken cloud' }, { value: 'overcast', label: 'Overcast' },
-        ]} />
-      )} />
-      <Controller control={control} name="hookupOn" render={({ field }) => (
-        <ChoiceChips testID="stop-hookup" label="Hookup" value={field.value ? 'yes' : 'no'} onChange={(v) => field.onChange(v === 'yes')} options={[{ value: 'no', label: 'None' }, { value: 'yes', label: 'Shore power' }]} />
-      )} />
+      <Controller
+        control={control}
+        name="skyOutlook"
+        render={({ field }) => (
+          <ChoiceChips
+            testID="stop-sky"
+            label="Sky outlook"
+            value={field.value}
+            onChange={field.onChange}
+            options={[
+              { value: 'clear', label: 'Clear' },
+              { value: 'hazy', label: 'Hazy or smoke' },
+              { value: 'broken-cloud', label: 'Broken cloud' },
+              { value: 'overcast', label: 'Overcast' },
+            ]}
+          />
+        )}
+      />
+      <Controller
+        control={control}
+        name="hookupOn"
+        render={({ field }) => (
+          <ChoiceChips
+            testID="stop-hookup"
+            label="Hookup"
+            value={field.value ? 'yes' : 'no'}
+            onChange={(v) => field.onChange(v === 'yes')}
+            options={[
+              { value: 'no', label: 'None' },
+              { value: 'yes', label: 'Shore power' },
+            ]}
+          />
+        )}
+      />
       {hookupOn ? (
         <View style={styles.grid}>
           <Num control={control} name="amps" label="Amps" unit="A" testID="stop-amps" />
           <Num control={control} name="volts" label="Volts" unit="V" testID="stop-volts" />
         </View>
       ) : null}
-      <Controller control={control} name="generatorOn" render={({ field }) => (
-        <ChoiceChips testID="stop-generator" label="Generator allowed" value={field.value ? 'yes' : 'no'} onChange={(v) => field.onChange(v === 'yes')} options={[{ value: 'no', label: 'No' }, { value: 'yes', label: 'Yes, between' }]} />
-      )} />
+      <Controller
+        control={control}
+        name="generatorOn"
+        render={({ field }) => (
+          <ChoiceChips
+            testID="stop-generator"
+            label="Generator allowed"
+            value={field.value ? 'yes' : 'no'}
+            onChange={(v) => field.onChange(v === 'yes')}
+            options={[
+              { value: 'no', label: 'No' },
+              { value: 'yes', label: 'Yes, between' },
+            ]}
+          />
+        )}
+      />
       {generatorOn ? (
         <>
           <View style={styles.grid}>
@@ -205,7 +341,13 @@ export function StopForm({ tripId, record, fallbackZone, onDone }: Props) {
         />
       ) : null}
       <View style={styles.actions}>
-        <Button testID="stop-save" label={record ? 'Save stop' : 'Add stop'} busy={formState.isSubmitting} disabled={formState.isSubmitting} onPress={() => void send(baseVersion.current)()} />
+        <Button
+          testID="stop-save"
+          label={record ? 'Save stop' : 'Add stop'}
+          busy={formState.isSubmitting}
+          disabled={formState.isSubmitting}
+          onPress={() => void send(baseVersion.current)()}
+        />
         <Button testID="stop-cancel" label="Cancel" tone="quiet" onPress={onDone} />
       </View>
     </View>

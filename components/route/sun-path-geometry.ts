@@ -14,7 +14,12 @@ export function polar(altitudeDeg: number, azimuthDeg: number, cx: number, cy: n
 }
 
 /** The obstruction as a closed outline: each compass sector drawn at its elevation. */
-export function horizonOutline(exposure: SiteExposure, cx: number, cy: number, radius: number): { points: Pt[]; canopyTransmittance: number } {
+export function horizonOutline(
+  exposure: SiteExposure,
+  cx: number,
+  cy: number,
+  radius: number,
+): { points: Pt[]; canopyTransmittance: number } {
   const e = resolveExposure(exposure);
   const n = e.horizonDeg.length;
   const width = 360 / n;
@@ -29,7 +34,15 @@ export function horizonOutline(exposure: SiteExposure, cx: number, cy: number, r
 export type SunTrack = { label: string; points: Pt[]; hours: { hour: number; at: Pt }[] };
 
 /** The sun above the horizon through one local day, every ten minutes, with a mark on each whole hour. */
-export function sunTrack(dateIso: string, zone: string, lat: number, lon: number, cx: number, cy: number, radius: number): SunTrack {
+export function sunTrack(
+  dateIso: string,
+  zone: string,
+  lat: number,
+  lon: number,
+  cx: number,
+  cy: number,
+  radius: number,
+): SunTrack {
   const day = DateTime.fromISO(dateIso, { zone }).startOf('day');
   const points: Pt[] = [];
   const hours: { hour: number; at: Pt }[] = [];
@@ -45,4 +58,5 @@ export function sunTrack(dateIso: string, zone: string, lat: number, lon: number
 }
 
 export const pathOf = (points: Pt[], close = false): string =>
-  points.map((p, i) => `${i === 0 ? 'M' : 'L'}${p.x.toFixed(1)},${p.y.toFixed(1)}`).join(' ') + (close && points.length > 0 ? ' Z' : '');
+  points.map((p, i) => `${i === 0 ? 'M' : 'L'}${p.x.toFixed(1)},${p.y.toFixed(1)}`).join(' ') +
+  (close && points.length > 0 ? ' Z' : '');

@@ -24,24 +24,56 @@ export function SunPath({ stop, testID }: { stop: Stop; testID: string }) {
   const shaded = tracks.some((t) => t.points.length > 0) && horizon.canopyTransmittance < 1;
   return (
     <View style={styles.wrap} testID={testID}>
-      <Svg width={SIZE} height={SIZE} viewBox={`0 0 ${SIZE} ${SIZE}`} accessibilityLabel={`Sun path at ${stop.name}`} role="img">
+      <Svg
+        width={SIZE}
+        height={SIZE}
+        viewBox={`0 0 ${SIZE} ${SIZE}`}
+        accessibilityLabel={`Sun path at ${stop.name}`}
+        role="img"
+      >
         <Circle cx={C} cy={C} r={R} fill={colors.white} stroke={colors.line} strokeWidth={1} />
         {[30, 60].map((alt) => (
-          <Circle key={alt} cx={C} cy={C} r={(R * (90 - alt)) / 90} fill="none" stroke={colors.line} strokeDasharray="3 4" />
+          <Circle
+            key={alt}
+            cx={C}
+            cy={C}
+            r={(R * (90 - alt)) / 90}
+            fill="none"
+            stroke={colors.line}
+            strokeDasharray="3 4"
+          />
         ))}
         <Line x1={C} y1={C - R} x2={C} y2={C + R} stroke={colors.line} />
         <Line x1={C - R} y1={C} x2={C + R} y2={C} stroke={colors.line} />
-        <Path d={`${outer} ${pathOf(horizon.points, true)}`} fill={colors.pine} fillOpacity={shade} fillRule="evenodd" />
+        <Path
+          d={`${outer} ${pathOf(horizon.points, true)}`}
+          fill={colors.pine}
+          fillOpacity={shade}
+          fillRule="evenodd"
+        />
         {tracks.map((t, i) => (
           <G key={t.label}>
-            <Path d={pathOf(t.points)} stroke={colors.sunlit} strokeWidth={i === 0 ? 3 : 2} strokeDasharray={i === 0 ? undefined : '6 4'} fill="none" />
+            <Path
+              d={pathOf(t.points)}
+              stroke={colors.sunlit}
+              strokeWidth={i === 0 ? 3 : 2}
+              strokeDasharray={i === 0 ? undefined : '6 4'}
+              fill="none"
+            />
             {t.hours.map((h) => (
               <Circle key={h.hour} cx={h.at.x} cy={h.at.y} r={2.5} fill={colors.ink} />
             ))}
             {t.hours
               .filter((h) => h.hour === 12)
               .map((h) => (
-                <SvgText key="noon" x={h.at.x + 5} y={h.at.y - 5} fontSize={11} fontFamily={fonts.semiBold} fill={colors.ink}>
+                <SvgText
+                  key="noon"
+                  x={h.at.x + 5}
+                  y={h.at.y - 5}
+                  fontSize={11}
+                  fontFamily={fonts.semiBold}
+                  fill={colors.ink}
+                >
                   12:00
                 </SvgText>
               ))}
@@ -50,7 +82,15 @@ export function SunPath({ stop, testID }: { stop: Stop; testID: string }) {
         {(['N', 'E', 'S', 'W'] as const).map((d, i) => {
           const p = polar(-8, i * 90, C, C, R + 14);
           return (
-            <SvgText key={d} x={p.x} y={p.y + 4} fontSize={12} fontFamily={fonts.bold} fill={colors.inkSoft} textAnchor="middle">
+            <SvgText
+              key={d}
+              x={p.x}
+              y={p.y + 4}
+              fontSize={12}
+              fontFamily={fonts.bold}
+              fill={colors.inkSoft}
+              textAnchor="middle"
+            >
               {d}
             </SvgText>
           );
@@ -58,10 +98,14 @@ export function SunPath({ stop, testID }: { stop: Stop; testID: string }) {
       </Svg>
       <Text variant="caption" color="inkSoft" style={styles.caption}>
         Yellow: the sun on {tracks.map((t) => t.label).join(' (solid) and ')}
-        {tracks.length > 1 ? ' (dashed)' : ''}; dots mark each hour. Green: trees and terrain{shaded ? ' — where the track crosses it, the panels are shaded' : ''}.
+        {tracks.length > 1 ? ' (dashed)' : ''}; dots mark each hour. Green: trees and terrain
+        {shaded ? ' — where the track crosses it, the panels are shaded' : ''}.
       </Text>
     </View>
   );
 }
 
-const styles = StyleSheet.create({ wrap: { alignItems: 'center', gap: space.xs }, caption: { textAlign: 'center', maxWidth: 320 } });
+const styles = StyleSheet.create({
+  wrap: { alignItems: 'center', gap: space.xs },
+  caption: { textAlign: 'center', maxWidth: 320 },
+});

@@ -9,7 +9,12 @@ export function allZones(): string[] {
   return zones.includes('UTC') ? zones : [...zones, 'UTC'];
 }
 
-const words = (s: string) => s.toLowerCase().replace(/[_/-]+/g, ' ').split(/\s+/).filter(Boolean);
+const words = (s: string) =>
+  s
+    .toLowerCase()
+    .replace(/[_/-]+/g, ' ')
+    .split(/\s+/)
+    .filter(Boolean);
 
 /** The zone's place, as shown: "America/Argentina/Buenos_Aires" reads "Buenos Aires". */
 export function placeOf(zone: string): string {

@@ -62,7 +62,11 @@ export function ZonePicker({ value, onPick, onClose, testID }: Props) {
         })}
       </View>
       <Text variant="caption" color="inkSoft" testID={`${testID}-count`} accessibilityLiveRegion="polite">
-        {matches.zones.length === 0 ? 'No zone matches; try a larger city nearby.' : matches.more > 0 ? `${matches.more} more match: keep typing to narrow the list.` : `${matches.zones.length} ${matches.zones.length === 1 ? 'match' : 'matches'}.`}
+        {matches.zones.length === 0
+          ? 'No zone matches; try a larger city nearby.'
+          : matches.more > 0
+            ? `${matches.more} more match: keep typing to narrow the list.`
+            : `${matches.zones.length} ${matches.zones.length === 1 ? 'match' : 'matches'}.`}
       </Text>
       <Button testID={`${testID}-close`} tone="quiet" style={styles.close} label="Close the list" onPress={onClose} />
     </View>
@@ -70,7 +74,14 @@ export function ZonePicker({ value, onPick, onClose, testID }: Props) {
 }
 
 const styles = StyleSheet.create({
-  box: { gap: space.sm, padding: space.md, borderRadius: radii.md, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.card },
+  box: {
+    gap: space.sm,
+    padding: space.md,
+    borderRadius: radii.md,
+    borderWidth: 1,
+    borderColor: colors.line,
+    backgroundColor: colors.card,
+  },
   list: { gap: space.xs },
   option: {
     minHeight: 52,

@@ -17,10 +17,18 @@ export function BasedOnBanner({ detail }: { detail: TripDetail }) {
   if (!basedOn) return null;
   return (
     <View style={[styles.wrap, wide ? styles.wrapWide : null]}>
-      <View style={[styles.banner, basedOn.routeChanged ? styles.changed : null]} testID="based-on-banner" role="status">
+      <View
+        style={[styles.banner, basedOn.routeChanged ? styles.changed : null]}
+        testID="based-on-banner"
+        role="status"
+      >
         <Text variant="label">
           Based on the club's plan{' '}
-          <Link href={{ pathname: '/trips/[tripId]', params: { tripId: basedOn.tripId } }} testID="based-on-open" accessibilityLabel={`Open the club's plan ${basedOn.name}`}>
+          <Link
+            href={{ pathname: '/trips/[tripId]', params: { tripId: basedOn.tripId } }}
+            testID="based-on-open"
+            accessibilityLabel={`Open the club's plan ${basedOn.name}`}
+          >
             <Text variant="label" color="pine" style={styles.link}>
               {basedOn.name}
             </Text>
@@ -28,7 +36,9 @@ export function BasedOnBanner({ detail }: { detail: TripDetail }) {
         </Text>
         {basedOn.routeChanged ? (
           <View style={styles.row} testID="based-on-changed">
-            <Text style={styles.grow}>The club's plan changed its stops since you copied it. Compare the Route tabs and adjust yours if needed.</Text>
+            <Text style={styles.grow}>
+              The club's plan changed its stops since you copied it. Compare the Route tabs and adjust yours if needed.
+            </Text>
             <Button
               testID="based-on-seen"
               label="Got it"
@@ -37,7 +47,10 @@ export function BasedOnBanner({ detail }: { detail: TripDetail }) {
               busy={seen.isPending}
               onPress={() =>
                 seen.mutate(undefined, {
-                  onError: (e) => showToast(e instanceof ApiError ? e.message : 'That did not work. Please try again.', { tone: 'danger' }),
+                  onError: (e) =>
+                    showToast(e instanceof ApiError ? e.message : 'That did not work. Please try again.', {
+                      tone: 'danger',
+                    }),
                 })
               }
             />
@@ -51,7 +64,14 @@ export function BasedOnBanner({ detail }: { detail: TripDetail }) {
 const styles = StyleSheet.create({
   wrap: { paddingHorizontal: space.lg, paddingTop: space.md },
   wrapWide: { paddingHorizontal: space.xxl },
-  banner: { gap: space.sm, padding: space.md, borderRadius: radii.md, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.pineSoft },
+  banner: {
+    gap: space.sm,
+    padding: space.md,
+    borderRadius: radii.md,
+    borderWidth: 1,
+    borderColor: colors.line,
+    backgroundColor: colors.pineSoft,
+  },
   changed: { borderColor: colors.sunlit, backgroundColor: colors.card },
   row: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.md },
   grow: { flex: 1, minWidth: 200 },

@@ -7,7 +7,11 @@ import { colors, space } from '@/components/theme/tokens';
 export function TabScroll({ children, testID }: { children: ReactNode; testID: string }) {
   const wide = useIsWide();
   return (
-    <ScrollView testID={testID} style={styles.scroll} contentContainerStyle={[styles.content, wide ? styles.contentWide : null]}>
+    <ScrollView
+      testID={testID}
+      style={styles.scroll}
+      contentContainerStyle={[styles.content, wide ? styles.contentWide : null]}
+    >
       <View style={styles.inner}>{children}</View>
     </ScrollView>
   );

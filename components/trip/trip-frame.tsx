@@ -42,7 +42,12 @@ export function TripFrame({ tripId, children }: { tripId: string; children: Reac
       <View style={[styles.header, wide ? styles.headerWide : null]}>
         {!wide ? (
           <Link href="/" asChild>
-            <Pressable testID="back-to-trips" accessibilityRole="link" accessibilityLabel="Back to trips" style={styles.back}>
+            <Pressable
+              testID="back-to-trips"
+              accessibilityRole="link"
+              accessibilityLabel="Back to trips"
+              style={styles.back}
+            >
               <Text variant="label" color="pine">
                 ‹ Trips
               </Text>
@@ -55,7 +60,13 @@ export function TripFrame({ tripId, children }: { tripId: string; children: Reac
           <QueryError testID="trip-error" error={trip.error} onRetry={() => void trip.refetch()} />
         ) : (
           <View style={styles.titleRow}>
-            <Text variant={wide ? 'display' : 'title'} role="heading" aria-level={1} numberOfLines={2} style={styles.title}>
+            <Text
+              variant={wide ? 'display' : 'title'}
+              role="heading"
+              aria-level={1}
+              numberOfLines={2}
+              style={styles.title}
+            >
               {trip.data.trip.name}
             </Text>
             <Text color="inkSoft" variant="caption">
@@ -63,7 +74,13 @@ export function TripFrame({ tripId, children }: { tripId: string; children: Reac
             </Text>
           </View>
         )}
-        <ScrollView horizontal showsHorizontalScrollIndicator={false} contentContainerStyle={styles.tabs} role="navigation" aria-label="Trip sections">
+        <ScrollView
+          horizontal
+          showsHorizontalScrollIndicator={false}
+          contentContainerStyle={styles.tabs}
+          role="navigation"
+          aria-label="Trip sections"
+        >
           {tabs}
         </ScrollView>
       </View>
@@ -74,13 +91,28 @@ export function TripFrame({ tripId, children }: { tripId: string; children: Reac
 
 const styles = StyleSheet.create({
   root: { flex: 1, backgroundColor: colors.dune },
-  header: { paddingHorizontal: space.lg, paddingTop: space.md, gap: space.sm, borderBottomWidth: 1, borderBottomColor: colors.line, backgroundColor: colors.dune },
+  header: {
+    paddingHorizontal: space.lg,
+    paddingTop: space.md,
+    gap: space.sm,
+    borderBottomWidth: 1,
+    borderBottomColor: colors.line,
+    backgroundColor: colors.dune,
+  },
   headerWide: { paddingHorizontal: space.xxl, paddingTop: space.xl },
   back: { alignSelf: 'flex-start', minHeight: 44, justifyContent: 'center' },
   titleRow: { gap: space.xs },
   title: { flexShrink: 1 },
   tabs: { gap: space.xs, paddingBottom: space.md },
-  tab: { minHeight: 44, paddingHorizontal: space.lg, justifyContent: 'center', borderRadius: radii.pill, backgroundColor: colors.card, borderWidth: 1, borderColor: colors.line },
+  tab: {
+    minHeight: 44,
+    paddingHorizontal: space.lg,
+    justifyContent: 'center',
+    borderRadius: radii.pill,
+    backgroundColor: colors.card,
+    borderWidth: 1,
+    borderColor: colors.line,
+  },
   tabActive: { backgroundColor: colors.pine, borderColor: colors.pine },
   body: { flex: 1 },
 });

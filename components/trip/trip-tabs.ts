@@ -17,5 +17,8 @@ export function tabHref(tripId: string, tab: TripTab): string {
 export function activeTab(pathname: string, tripId: string): TripTab {
   const rest = pathname.split(`/trips/${tripId}`)[1] ?? '';
   const segment = rest.replace(/^\//, '').split('/')[0] ?? '';
-  return TRIP_TABS.find((t) => t.segment === segment) ?? TRIP_TABS[0] ?? { segment: '', label: 'Budget', testID: 'tab-budget' };
+  return (
+    TRIP_TABS.find((t) => t.segment === segment) ??
+    TRIP_TABS[0] ?? { segment: '', label: 'Budget', testID: 'tab-budget' }
+  );
 }

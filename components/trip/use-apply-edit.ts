@@ -16,7 +16,13 @@ export function useApplyEdit(tripId: string) {
     try {
       for (const edit of edits) {
         if (edit.kind === 'rig') await rigSave.mutateAsync({ version: rigVersion, rig: edit.rig });
-        else await stopSave.mutateAsync({ stopId: edit.record.id, version: edit.record.version, stop: edit.stop, notes: edit.record.notes });
+        else
+          await stopSave.mutateAsync({
+            stopId: edit.record.id,
+            version: edit.record.version,
+            stop: edit.stop,
+            notes: edit.record.notes,
+          });
       }
       showToast(`Saved: ${edits.map((e) => e.summary).join(', ')}`);
       return true;

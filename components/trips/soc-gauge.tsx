@@ -3,11 +3,24 @@ import { colors, radii, space } from '@/components/theme/tokens';
 import { Text } from '@/components/ui/text';
 
 /** The trip's lowest charge as a small horizontal gauge with the reserve marked. */
-export function SocGauge({ lowestPct, reservePct, testID }: { lowestPct: number; reservePct: number | null; testID: string }) {
+export function SocGauge({
+  lowestPct,
+  reservePct,
+  testID,
+}: {
+  lowestPct: number;
+  reservePct: number | null;
+  testID: string;
+}) {
   const below = reservePct !== null && lowestPct < reservePct;
   const pct = Math.max(0, Math.min(100, lowestPct));
   return (
-    <View style={styles.wrap} testID={testID} accessible accessibilityLabel={`Lowest charge ${Math.round(lowestPct)}%${reservePct !== null ? `, reserve ${Math.round(reservePct)}%` : ''}`}>
+    <View
+      style={styles.wrap}
+      testID={testID}
+      accessible
+      accessibilityLabel={`Lowest charge ${Math.round(lowestPct)}%${reservePct !== null ? `, reserve ${Math.round(reservePct)}%` : ''}`}
+    >
       <View style={styles.labels}>
         <Text variant="caption" color="inkSoft">
           Lowest charge

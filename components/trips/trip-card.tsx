@@ -19,7 +19,12 @@ export function TripCard({ trip, canDelete, onDuplicate, onDelete, busy }: Props
   return (
     <Card testID={`trip-card-${trip.id}`}>
       <Link href={{ pathname: '/trips/[tripId]', params: { tripId: trip.id } }} asChild>
-        <Pressable testID={`trip-open-${trip.id}`} accessibilityRole="link" accessibilityLabel={`${trip.name}, ${dates}, ${nights} nights`} style={styles.press}>
+        <Pressable
+          testID={`trip-open-${trip.id}`}
+          accessibilityRole="link"
+          accessibilityLabel={`${trip.name}, ${dates}, ${nights} nights`}
+          style={styles.press}
+        >
           <Text variant="title">{trip.name}</Text>
           <Text color="inkSoft">
             {dates} · {nights} {nights === 1 ? 'night' : 'nights'}
@@ -31,7 +36,11 @@ export function TripCard({ trip, canDelete, onDuplicate, onDelete, busy }: Props
       </Link>
       <View style={styles.meta}>
         {trip.lowestSocPct !== null && trip.lowestSocPct !== undefined ? (
-          <SocGauge testID={`trip-gauge-${trip.id}`} lowestPct={trip.lowestSocPct} reservePct={trip.reservePct ?? null} />
+          <SocGauge
+            testID={`trip-gauge-${trip.id}`}
+            lowestPct={trip.lowestSocPct}
+            reservePct={trip.reservePct ?? null}
+          />
         ) : (
           <Text variant="caption" color="inkSoft" style={styles.noBudget}>
             No budget yet
@@ -51,12 +60,32 @@ export function TripCard({ trip, canDelete, onDuplicate, onDelete, busy }: Props
             Delete “{trip.name}” for everyone on it?
           </Text>
           <Button testID={`trip-delete-confirm-${trip.id}`} tone="danger" label="Delete" onPress={onDelete} />
-          <Button testID={`trip-delete-cancel-${trip.id}`} tone="quiet" label="Keep it" onPress={() => setConfirming(false)} />
+          <Button
+            testID={`trip-delete-cancel-${trip.id}`}
+            tone="quiet"
+            label="Keep it"
+            onPress={() => setConfirming(false)}
+          />
         </View>
       ) : (
         <View style={styles.actions}>
-          <Button testID={`trip-duplicate-${trip.id}`} tone="quiet" label="Duplicate" accessibilityLabel={`Duplicate ${trip.name}`} busy={busy} onPress={onDuplicate} />
-          {canDelete ? <Button testID={`trip-delete-${trip.id}`} tone="quiet" label="Delete…" accessibilityLabel={`Delete ${trip.name}`} onPress={() => setConfirming(true)} /> : null}
+          <Button
+            testID={`trip-duplicate-${trip.id}`}
+            tone="quiet"
+            label="Duplicate"
+            accessibilityLabel={`Duplicate ${trip.name}`}
+            busy={busy}
+            onPress={onDuplicate}
+          />
+          {canDelete ? (
+            <Button
+              testID={`trip-delete-${trip.id}`}
+              tone="quiet"
+              label="Delete…"
+              accessibilityLabel={`Delete ${trip.name}`}
+              onPress={() => setConfirming(true)}
+            />
+          ) : null}
         </View>
       )}
     </Card>
@@ -67,7 +96,12 @@ const styles = StyleSheet.create({
   press: { borderRadius: radii.md, gap: space.xs },
   meta: { flexDirection: 'row', alignItems: 'center', gap: space.lg, marginTop: space.sm, flexWrap: 'wrap' },
   noBudget: { flex: 1 },
-  flags: { borderRadius: radii.pill, paddingHorizontal: space.md, paddingVertical: space.xs, backgroundColor: colors.pineSoft },
+  flags: {
+    borderRadius: radii.pill,
+    paddingHorizontal: space.md,
+    paddingVertical: space.xs,
+    backgroundColor: colors.pineSoft,
+  },
   flagsOn: { backgroundColor: colors.emberSoft },
   actions: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.xs },
   confirmText: { flexBasis: '100%' },

@@ -27,14 +27,25 @@ export function TripList({ trips }: { trips: TripSummary[] }) {
             onDuplicate={async () => {
               try {
                 const copy = await duplicate.mutateAsync(trip.id);
-                showToast(`Copied to “${copy.trip.name}”`, { action: { label: 'Open', run: () => router.push(`/trips/${copy.trip.id}`) } });
+                showToast(`Copied to “${copy.trip.name}”`, {
+                  action: { label: 'Open', run: () => router.push(`/trips/${copy.trip.id}`) },
+                });
               } catch (error) {
-                showToast(error instanceof ApiError ? error.message : 'The trip could not be copied.', { tone: 'danger' });
+                showToast(error instanceof ApiError ? error.message : 'The trip could not be copied.', {
+                  tone: 'danger',
+                });
               }
             }}
             onDelete={() => {
-              scheduleDelete(trip.id, () => remove.mutateAsync(trip.id), () => showToast(`“${trip.name}” could not be deleted.`, { tone: 'danger' }));
-              showToast(`“${trip.name}” deleted`, { tone: 'info', action: { label: 'Undo', run: () => undoDelete(trip.id) } });
+              scheduleDelete(
+                trip.id,
+                () => remove.mutateAsync(trip.id),
+                () => showToast(`“${trip.name}” could not be deleted.`, { tone: 'danger' }),
+              );
+              showToast(`“${trip.name}” deleted`, {
+                tone: 'info',
+                action: { label: 'Undo', run: () => undoDelete(trip.id) },
+              });
             }}
           />
         </View>

@@ -3,7 +3,14 @@ import { colors, radii, space } from '@/components/theme/tokens';
 import { Text } from './text';
 
 type Option<T extends string> = { value: T; label: string };
-type Props<T extends string> = { label: string; options: Option<T>[]; value: T; onChange: (v: T) => void; disabled?: boolean; testID: string };
+type Props<T extends string> = {
+  label: string;
+  options: Option<T>[];
+  value: T;
+  onChange: (v: T) => void;
+  disabled?: boolean;
+  testID: string;
+};
 
 /** A single choice shown as a row of large chips (a radio group for screen readers). */
 export function ChoiceChips<T extends string>({ label, options, value, onChange, disabled, testID }: Props<T>) {
@@ -38,7 +45,15 @@ export function ChoiceChips<T extends string>({ label, options, value, onChange,
 const styles = StyleSheet.create({
   wrap: { gap: space.xs },
   row: { flexDirection: 'row', flexWrap: 'wrap', gap: space.xs },
-  chip: { minHeight: 44, paddingHorizontal: space.lg, justifyContent: 'center', borderRadius: radii.pill, borderWidth: 1, borderColor: colors.line, backgroundColor: colors.card },
+  chip: {
+    minHeight: 44,
+    paddingHorizontal: space.lg,
+    justifyContent: 'center',
+    borderRadius: radii.pill,
+    borderWidth: 1,
+    borderColor: colors.line,
+    backgroundColor: colors.card,
+  },
   on: { backgroundColor: colors.pine, borderColor: colors.pine },
   disabled: { opacity: 0.55 },
 });

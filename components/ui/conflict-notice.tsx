@@ -3,7 +3,15 @@ import { colors, radii, space } from '@/components/theme/tokens';
 import { Button } from './button';
 import { Text } from './text';
 
-type Props = { what: string; theirVersion: number; theirs?: string[]; onKeepMine: () => void; onTakeTheirs: () => void; busy?: boolean; testID: string };
+type Props = {
+  what: string;
+  theirVersion: number;
+  theirs?: string[];
+  onKeepMine: () => void;
+  onTakeTheirs: () => void;
+  busy?: boolean;
+  testID: string;
+};
 
 /** Shown when a save met a newer version on the server: the user decides whose change stands. */
 export function ConflictNotice({ what, theirVersion, theirs = [], onKeepMine, onTakeTheirs, busy, testID }: Props) {
@@ -17,16 +25,31 @@ export function ConflictNotice({ what, theirVersion, theirs = [], onKeepMine, on
           Their version: {theirs.join(' · ')}
         </Text>
       ) : null}
-      <Text variant="caption">Keep yours to save over their change, or take theirs to drop your edits and see what they saved.</Text>
+      <Text variant="caption">
+        Keep yours to save over their change, or take theirs to drop your edits and see what they saved.
+      </Text>
       <View style={styles.row}>
         <Button testID={`${testID}-keep-mine`} label="Keep mine" busy={busy} onPress={onKeepMine} />
-        <Button testID={`${testID}-take-theirs`} label="Take theirs" tone="secondary" disabled={busy} onPress={onTakeTheirs} />
+        <Button
+          testID={`${testID}-take-theirs`}
+          label="Take theirs"
+          tone="secondary"
+          disabled={busy}
+          onPress={onTakeTheirs}
+        />
       </View>
     </View>
   );
 }
 
 const styles = StyleSheet.create({
-  box: { borderWidth: 2, borderColor: colors.ember, backgroundColor: colors.emberSoft, borderRadius: radii.md, padding: space.lg, gap: space.sm },
+  box: {
+    borderWidth: 2,
+    borderColor: colors.ember,
+    backgroundColor: colors.emberSoft,
+    borderRadius: radii.md,
+    padding: space.lg,
+    gap: space.sm,
+  },
   row: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
 });

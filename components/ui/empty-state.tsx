@@ -4,7 +4,17 @@ import { space } from '@/components/theme/tokens';
 import { Card } from './card';
 import { Text } from './text';
 
-export function EmptyState({ title, body, action, testID }: { title: string; body: string; action?: ReactNode; testID: string }) {
+export function EmptyState({
+  title,
+  body,
+  action,
+  testID,
+}: {
+  title: string;
+  body: string;
+  action?: ReactNode;
+  testID: string;
+}) {
   return (
     <Card testID={testID} style={styles.card}>
       <Text variant="title">{title}</Text>

@@ -8,7 +8,12 @@ type Props = { label: string; figure: FigureValue; note?: string; color?: ColorN
 /** A headline number: big value, small unit, a label above and an optional note below. */
 export function Figure({ label, figure, note, color = 'ink', testID }: Props) {
   return (
-    <View style={styles.wrap} testID={testID} accessible accessibilityLabel={`${label}: ${figure.value} ${figure.unit}${note ? `, ${note}` : ''}`}>
+    <View
+      style={styles.wrap}
+      testID={testID}
+      accessible
+      accessibilityLabel={`${label}: ${figure.value} ${figure.unit}${note ? `, ${note}` : ''}`}
+    >
       <Text variant="caption" color="inkSoft">
         {label}
       </Text>

@@ -1,7 +1,11 @@
 import { useState } from 'react';
 import { TextField, type TextFieldProps } from './text-field';
 
-type Props = Omit<TextFieldProps, 'value' | 'onChangeText'> & { value: number | null | undefined; onChangeNumber: (v: number | null) => void; unit?: string };
+type Props = Omit<TextFieldProps, 'value' | 'onChangeText'> & {
+  value: number | null | undefined;
+  onChangeNumber: (v: number | null) => void;
+  unit?: string;
+};
 
 /**
  * A number typed as text: the field keeps exactly what the person typed (a half-typed "1." stays), while the
@@ -9,7 +13,12 @@ type Props = Omit<TextFieldProps, 'value' | 'onChangeText'> & { value: number | 
  */
 export function NumberField({ value, onChangeNumber, unit, label, ...rest }: Props) {
   const [text, setText] = useState(value === null || value === undefined ? '' : String(value));
-  const shown = Number(text) === value || (text === '' && (value === null || value === undefined)) ? text : value === null || value === undefined ? '' : String(value);
+  const shown =
+    Number(text) === value || (text === '' && (value === null || value === undefined))
+      ? text
+      : value === null || value === undefined
+        ? ''
+        : String(value);
   return (
     <TextField
       {...rest}

@@ -31,6 +31,12 @@ const styles = StyleSheet.create({
   scroll: { flex: 1, backgroundColor: colors.dune },
   content: { padding: space.lg, paddingBottom: space.xxxl },
   inner: { width: '100%', maxWidth: 1100, alignSelf: 'center', gap: space.xl },
-  header: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'flex-end', justifyContent: 'space-between', gap: space.md },
+  header: {
+    flexDirection: 'row',
+    flexWrap: 'wrap',
+    alignItems: 'flex-end',
+    justifyContent: 'space-between',
+    gap: space.md,
+  },
   headerText: { flexShrink: 1, gap: space.xs },
 });

@@ -7,24 +7,52 @@ import { applianceRecord, applianceToColumns, scheduleToColumns, scheduleWindows
 import type { VersionedWrite } from './stops';
 
 export function findAppliance(db: DbExecutor, tripId: string, applianceId: string): ApplianceRecord | undefined {
-  const row = db.select().from(appliances).where(and(eq(appliances.tripId, tripId), eq(appliances.id, applianceId))).get();
+  const row = db
+    .select()
+    .from(appliances)
+    .where(and(eq(appliances.tripId, tripId), eq(appliances.id, applianceId)))
+    .get();
   if (!row) return undefined;
-  const windows = db.select().from(routineWindows).where(eq(routineWindows.applianceId, row.id)).orderBy(asc(routineWindows.position)).all();
+  const windows = db
+    .select()
+    .from(routineWindows)
+    .where(eq(routineWindows.applianceId, row.id))
+    .orderBy(asc(routineWindows.position))
+    .all();
   return applianceRecord(row, windows);
 }
 
 function writeWindows(db: DbExecutor, applianceId: string, schedule: Schedule): void {
   db.delete(routineWindows).where(eq(routineWindows.applianceId, applianceId)).run();
   scheduleWindows(schedule).forEach((window, position) =>
-    db.insert(routineWindows).values({ applianceId, position, ...window }).run(),
+    db
+      .insert(routineWindows)
+      .values({ applianceId, position, ...window })
+      .run(),
   );
 }
 
-export function insertAppliance(db: DbExecutor, tripId: string, fields: ApplianceFields, caretakerUserId: string | null): ApplianceRecord {
+export function insertAppliance(
+  db: DbExecutor,
+  tripId: string,
+  fields: ApplianceFields,
+  caretakerUserId: string | null,
+): ApplianceRecord {
   const id = crypto.randomUUID();
-  const last = db.select({ position: max(appliances.position) }).from(appliances).where(eq(appliances.tripId, tripId)).get();
+  const last = db
+    .select({ position: max(appliances.position) })
+    .from(appliances)
+    .where(eq(appliances.tripId, tripId))
+    .get();
   db.insert(appliances)
-    .values({ id, tripId, position: (last?.position ?? -1) + 1, ...applianceToColumns(fields), caretakerUserId, version: 1 })
+    .values({
+      id,
+      tripId,
+      position: (last?.position ?? -1) + 1,
+      ...applianceToColumns(fields),
+      caretakerUserId,
+      version: 1,
+    })
     .run();
   writeWindows(db, id, fields.schedule);
   return findAppliance(db, tripId, id) as ApplianceRecord;
@@ -44,7 +72,10 @@ export function updateAppliance(
   const columns =
     'schedule' in change
       ? scheduleToColumns(change.schedule)
-      : { ...applianceToColumns(change.fields), caretakerUserId: change.caretakerUserId === undefined ? current.caretakerUserId : change.caretakerUserId };
+      : {
+          ...applianceToColumns(change.fields),
+          caretakerUserId: change.caretakerUserId === undefined ? current.caretakerUserId : change.caretakerUserId,
+        };
   db.update(appliances)
     .set({ ...columns, version: version + 1 })
     .where(and(eq(appliances.id, applianceId), eq(appliances.version, version)))
@@ -54,5 +85,10 @@ export function updateAppliance(
 }
 
 export function deleteAppliance(db: DbExecutor, tripId: string, applianceId: string): boolean {
-  return db.delete(appliances).where(and(eq(appliances.tripId, tripId), eq(appliances.id, applianceId))).run().changes > 0;
+  return (
+    db
+      .delete(appliances)
+      .where(and(eq(appliances.tripId, tripId), eq(appliances.id, applianceId)))
+      .run().changes > 0
+  );
 }

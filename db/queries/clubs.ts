@@ -20,7 +20,11 @@ export function listClubsForUser(db: DbExecutor, userId: string) {
     .where(eq(clubMembers.userId, userId))
     .orderBy(asc(clubs.name))
     .all()
-    .map((club) => ({ ...club, memberCount: countMembers(db, club.id), sharedTripCount: listClubTrips(db, club.id).length }));
+    .map((club) => ({
+      ...club,
+      memberCount: countMembers(db, club.id),
+      sharedTripCount: listClubTrips(db, club.id).length,
+    }));
 }
 
 function countMembers(db: DbExecutor, clubId: string): number {
@@ -41,14 +45,27 @@ export function listPendingClubInvites(db: DbExecutor, clubId: string, now: Date
   return db
     .select()
     .from(clubInvites)
-    .where(and(eq(clubInvites.clubId, clubId), isNull(clubInvites.acceptedAt), isNull(clubInvites.revokedAt), gt(clubInvites.expiresAt, now)))
+    .where(
+      and(
+        eq(clubInvites.clubId, clubId),
+        isNull(clubInvites.acceptedAt),
+        isNull(clubInvites.revokedAt),
+        gt(clubInvites.expiresAt, now),
+      ),
+    )
     .orderBy(asc(clubInvites.email))
     .all();
 }
 
 export function listClubTrips(db: DbExecutor, clubId: string) {
   return db
-    .select({ tripId: trips.id, name: trips.name, startDate: trips.startDate, endDate: trips.endDate, sharedByName: user.name })
+    .select({
+      tripId: trips.id,
+      name: trips.name,
+      startDate: trips.startDate,
+      endDate: trips.endDate,
+      sharedByName: user.name,
+    })
     .from(clubTrips)
     .innerJoin(trips, eq(trips.id, clubTrips.tripId))
     .leftJoin(user, eq(user.id, clubTrips.sharedBy))
@@ -59,7 +76,13 @@ export function listClubTrips(db: DbExecutor, clubId: string) {
 
 /** Households that copied a trip: a count only, never who or what. */
 export function countCopies(db: DbExecutor, sourceTripId: string): number {
-  return db.select({ n: countDistinct(tripCopies.userId) }).from(tripCopies).where(eq(tripCopies.sourceTripId, sourceTripId)).get()?.n ?? 0;
+  return (
+    db
+      .select({ n: countDistinct(tripCopies.userId) })
+      .from(tripCopies)
+      .where(eq(tripCopies.sourceTripId, sourceTripId))
+      .get()?.n ?? 0
+  );
 }
 
 export function findMyCopy(db: DbExecutor, sourceTripId: string, userId: string): string | null {

@@ -85,7 +85,8 @@ export function stopFromRow(row: StopRow): Stop {
     exposure: row.exposure,
     skyOutlook: row.skyOutlook,
     ...(row.linkeTurbidity === null ? {} : { linkeTurbidity: row.linkeTurbidity }),
-    hookup: row.hookupAmps !== null && row.hookupVolts !== null ? { amps: row.hookupAmps, volts: row.hookupVolts } : null,
+    hookup:
+      row.hookupAmps !== null && row.hookupVolts !== null ? { amps: row.hookupAmps, volts: row.hookupVolts } : null,
     generatorHours:
       row.generatorStartHour !== null && row.generatorEndHour !== null
         ? { startHour: row.generatorStartHour, endHour: row.generatorEndHour }
@@ -95,10 +96,22 @@ export function stopFromRow(row: StopRow): Stop {
   };
 }
 
-export const stopRecord = (row: StopRow): StopRecord => ({ id: row.id, version: row.version, notes: row.notes, stop: stopFromRow(row) });
+export const stopRecord = (row: StopRow): StopRecord => ({
+  id: row.id,
+  version: row.version,
+  notes: row.notes,
+  stop: stopFromRow(row),
+});
 
-export const driveFromRow = (row: DriveRow): Drive => ({ hoursOnRoad: row.hoursOnRoad, vehicleCharging: row.vehicleCharging });
-export const driveRecord = (row: DriveRow): DriveRecord => ({ id: row.id, version: row.version, drive: driveFromRow(row) });
+export const driveFromRow = (row: DriveRow): Drive => ({
+  hoursOnRoad: row.hoursOnRoad,
+  vehicleCharging: row.vehicleCharging,
+});
+export const driveRecord = (row: DriveRow): DriveRecord => ({
+  id: row.id,
+  version: row.version,
+  drive: driveFromRow(row),
+});
 
 export function applianceToColumns(fields: ApplianceFields) {
   const { schedule } = fields;

@@ -23,9 +23,20 @@ export function addMember(db: DbExecutor, tripId: string, userId: string, role: 
 }
 
 export function setMemberRole(db: DbExecutor, tripId: string, userId: string, role: Role): boolean {
-  return db.update(memberships).set({ role }).where(and(eq(memberships.tripId, tripId), eq(memberships.userId, userId))).run().changes > 0;
+  return (
+    db
+      .update(memberships)
+      .set({ role })
+      .where(and(eq(memberships.tripId, tripId), eq(memberships.userId, userId)))
+      .run().changes > 0
+  );
 }
 
 export function removeMember(db: DbExecutor, tripId: string, userId: string): boolean {
-  return db.delete(memberships).where(and(eq(memberships.tripId, tripId), eq(memberships.userId, userId))).run().changes > 0;
+  return (
+    db
+      .delete(memberships)
+      .where(and(eq(memberships.tripId, tripId), eq(memberships.userId, userId)))
+      .run().changes > 0
+  );
 }

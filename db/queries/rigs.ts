@@ -7,14 +7,29 @@ import type { VersionedWrite } from './stops';
 
 /** "My rigs": the user's saved rigs, not the copies trips run on. */
 export function listSavedRigs(db: DbExecutor, ownerId: string): RigRow[] {
-  return db.select().from(rigs).where(and(eq(rigs.ownerId, ownerId), isNull(rigs.tripId))).orderBy(asc(rigs.name)).all();
+  return db
+    .select()
+    .from(rigs)
+    .where(and(eq(rigs.ownerId, ownerId), isNull(rigs.tripId)))
+    .orderBy(asc(rigs.name))
+    .all();
 }
 
 export function findSavedRig(db: DbExecutor, ownerId: string, rigId: string): RigRow | undefined {
-  return db.select().from(rigs).where(and(eq(rigs.id, rigId), eq(rigs.ownerId, ownerId), isNull(rigs.tripId))).get();
+  return db
+    .select()
+    .from(rigs)
+    .where(and(eq(rigs.id, rigId), eq(rigs.ownerId, ownerId), isNull(rigs.tripId)))
+    .get();
 }
 
-export function updateRigRow(db: DbExecutor, current: RigRow | undefined, version: number, rig: Rig, now: Date): VersionedWrite<RigRow> {
+export function updateRigRow(
+  db: DbExecutor,
+  current: RigRow | undefined,
+  version: number,
+  rig: Rig,
+  now: Date,
+): VersionedWrite<RigRow> {
   if (!current) return { status: 'missing' };
   if (current.version !== version) return { status: 'conflict', current };
   const row = db
@@ -27,5 +42,10 @@ export function updateRigRow(db: DbExecutor, current: RigRow | undefined, versio
 }
 
 export function deleteSavedRig(db: DbExecutor, ownerId: string, rigId: string): boolean {
-  return db.delete(rigs).where(and(eq(rigs.id, rigId), eq(rigs.ownerId, ownerId), isNull(rigs.tripId))).run().changes > 0;
+  return (
+    db
+      .delete(rigs)
+      .where(and(eq(rigs.id, rigId), eq(rigs.ownerId, ownerId), isNull(rigs.tripId)))
+      .run().changes > 0
+  );
 }

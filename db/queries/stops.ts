@@ -14,14 +14,25 @@ export function listStopRows(db: DbExecutor, tripId: string): StopRow[] {
 }
 
 export function findStopRow(db: DbExecutor, tripId: string, stopId: string): StopRow | undefined {
-  return db.select().from(stops).where(and(eq(stops.tripId, tripId), eq(stops.id, stopId))).get();
+  return db
+    .select()
+    .from(stops)
+    .where(and(eq(stops.tripId, tripId), eq(stops.id, stopId)))
+    .get();
 }
 
 export function insertStop(db: DbExecutor, tripId: string, stop: Stop, notes: string): StopRow {
   const id = crypto.randomUUID();
   // Park it past the end; resequence puts it in time order.
   db.insert(stops)
-    .values({ id, tripId, position: 10_000 + listStopRows(db, tripId).length, ...stopToColumns(stop), notes, version: 1 })
+    .values({
+      id,
+      tripId,
+      position: 10_000 + listStopRows(db, tripId).length,
+      ...stopToColumns(stop),
+      notes,
+      version: 1,
+    })
     .run();
   resequenceStops(db, tripId);
   return findStopRow(db, tripId, id) as StopRow;
@@ -29,7 +40,14 @@ export function insertStop(db: DbExecutor, tripId: string, stop: Stop, notes: st
 
 export type VersionedWrite<T> = { status: 'ok'; row: T } | { status: 'conflict'; current: T } | { status: 'missing' };
 
-export function updateStop(db: DbExecutor, tripId: string, stopId: string, version: number, stop: Stop, notes?: string): VersionedWrite<StopRow> {
+export function updateStop(
+  db: DbExecutor,
+  tripId: string,
+  stopId: string,
+  version: number,
+  stop: Stop,
+  notes?: string,
+): VersionedWrite<StopRow> {
   const current = findStopRow(db, tripId, stopId);
   if (!current) return { status: 'missing' };
   if (current.version !== version) return { status: 'conflict', current };
@@ -42,7 +60,10 @@ export function updateStop(db: DbExecutor, tripId: string, stopId: string, versi
 }
 
 export function deleteStop(db: DbExecutor, tripId: string, stopId: string): boolean {
-  const result = db.delete(stops).where(and(eq(stops.tripId, tripId), eq(stops.id, stopId))).run();
+  const result = db
+    .delete(stops)
+    .where(and(eq(stops.tripId, tripId), eq(stops.id, stopId)))
+    .run();
   if (result.changes === 0) return false;
   resequenceStops(db, tripId);
   return true;
@@ -50,7 +71,13 @@ export function deleteStop(db: DbExecutor, tripId: string, stopId: string): bool
 
 /** Writes positions 0…n−1 in the given order, in two passes so the unique index never clashes. */
 function writePositions(db: DbExecutor, ordered: StopRow[]): void {
-  ordered.forEach((row, i) => db.update(stops).set({ position: -1 - i }).where(eq(stops.id, row.id)).run());
+  ordered.forEach((row, i) =>
+    db
+      .update(stops)
+      .set({ position: -1 - i })
+      .where(eq(stops.id, row.id))
+      .run(),
+  );
   ordered.forEach((row, i) => db.update(stops).set({ position: i }).where(eq(stops.id, row.id)).run());
 }
 
@@ -66,7 +93,12 @@ function gapHours(from: StopRow, to: StopRow): number {
 }
 
 function syncDrives(db: DbExecutor, tripId: string, ordered: StopRow[]): void {
-  const existing: DriveRow[] = db.select().from(drives).where(eq(drives.tripId, tripId)).orderBy(asc(drives.position)).all();
+  const existing: DriveRow[] = db
+    .select()
+    .from(drives)
+    .where(eq(drives.tripId, tripId))
+    .orderBy(asc(drives.position))
+    .all();
   const wanted = Math.max(0, ordered.length - 1);
   for (const extra of existing.slice(wanted)) db.delete(drives).where(eq(drives.id, extra.id)).run();
   for (let i = 0; i < wanted; i += 1) {
@@ -77,11 +109,21 @@ function syncDrives(db: DbExecutor, tripId: string, ordered: StopRow[]): void {
     const drive = existing[i];
     if (!drive) {
       db.insert(drives)
-        .values({ id: crypto.randomUUID(), tripId, position: i, hoursOnRoad: Math.min(DEFAULT_DRIVE_HOURS, gap), vehicleCharging: true, version: 1 })
+        .values({
+          id: crypto.randomUUID(),
+          tripId,
+          position: i,
+          hoursOnRoad: Math.min(DEFAULT_DRIVE_HOURS, gap),
+          vehicleCharging: true,
+          version: 1,
+        })
         .run();
     } else if (drive.hoursOnRoad > gap) {
       // A drive cannot last longer than the time between leaving one stop and reaching the next.
-      db.update(drives).set({ hoursOnRoad: gap, version: drive.version + 1 }).where(eq(drives.id, drive.id)).run();
+      db.update(drives)
+        .set({ hoursOnRoad: gap, version: drive.version + 1 })
+        .where(eq(drives.id, drive.id))
+        .run();
     }
   }
 }
@@ -94,7 +136,11 @@ function syncDrives(db: DbExecutor, tripId: string, ordered: StopRow[]): void {
 export function reorderStops(db: DbExecutor, tripId: string, stopIds: string[]): 'ok' | 'mismatch' {
   const current = listStopRows(db, tripId);
   const byId = new Map(current.map((row) => [row.id, row]));
-  if (stopIds.length !== current.length || new Set(stopIds).size !== stopIds.length || !stopIds.every((id) => byId.has(id))) {
+  if (
+    stopIds.length !== current.length ||
+    new Set(stopIds).size !== stopIds.length ||
+    !stopIds.every((id) => byId.has(id))
+  ) {
     return 'mismatch';
   }
   const gaps = current.slice(1).map((row, i) => {
@@ -111,7 +157,10 @@ export function reorderStops(db: DbExecutor, tripId: string, stopIds: string[]):
     return { ...row, arriveAt, departAt };
   });
   for (const row of reordered) {
-    db.update(stops).set({ arriveAt: row.arriveAt, departAt: row.departAt, version: row.version + 1 }).where(eq(stops.id, row.id)).run();
+    db.update(stops)
+      .set({ arriveAt: row.arriveAt, departAt: row.departAt, version: row.version + 1 })
+      .where(eq(stops.id, row.id))
+      .run();
   }
   writePositions(db, reordered);
   syncDrives(db, tripId, reordered);
@@ -119,5 +168,11 @@ export function reorderStops(db: DbExecutor, tripId: string, stopIds: string[]):
 }
 
 function toZonedIso(epochMs: number, zone: string): string {
-  return DateTime.fromMillis(epochMs, { zone }).toISO({ suppressMilliseconds: true, suppressSeconds: true, includeOffset: true }) ?? new Date(epochMs).toISOString();
+  return (
+    DateTime.fromMillis(epochMs, { zone }).toISO({
+      suppressMilliseconds: true,
+      suppressSeconds: true,
+      includeOffset: true,
+    }) ?? new Date(epochMs).toISOString()
+  );
 }

@@ -62,7 +62,12 @@ export function loadTripDetail(db: DbExecutor, tripId: string, role: Role): Trip
   if (!trip || !rig) return undefined;
   const stopRows = db.select().from(stops).where(eq(stops.tripId, tripId)).orderBy(asc(stops.position)).all();
   const driveRows = db.select().from(drives).where(eq(drives.tripId, tripId)).orderBy(asc(drives.position)).all();
-  const applianceRows = db.select().from(appliances).where(eq(appliances.tripId, tripId)).orderBy(asc(appliances.position)).all();
+  const applianceRows = db
+    .select()
+    .from(appliances)
+    .where(eq(appliances.tripId, tripId))
+    .orderBy(asc(appliances.position))
+    .all();
   const windowRows = db
     .select({ window: routineWindows })
     .from(routineWindows)
@@ -73,22 +78,46 @@ export function loadTripDetail(db: DbExecutor, tripId: string, role: Role): Trip
   const copyOf = db.select().from(tripCopies).where(eq(tripCopies.copyTripId, tripId)).get();
   const source = copyOf ? findTrip(db, copyOf.sourceTripId) : undefined;
   return {
-    basedOn: copyOf && source ? { tripId: source.id, name: source.name, routeChanged: source.routeRevision > copyOf.sourceRouteRevision } : null,
+    basedOn:
+      copyOf && source
+        ? { tripId: source.id, name: source.name, routeChanged: source.routeRevision > copyOf.sourceRouteRevision }
+        : null,
     trip: { ...toTripSummary(trip), notes: trip.notes, ownerId: trip.ownerId, role },
     rig: rigRecord(rig),
     stops: stopRows.map(stopRecord),
     drives: driveRows.map(driveRecord),
-    appliances: applianceRows.map((row) => applianceRecord(row, windowRows.filter((w) => w.applianceId === row.id))),
+    appliances: applianceRows.map((row) =>
+      applianceRecord(
+        row,
+        windowRows.filter((w) => w.applianceId === row.id),
+      ),
+    ),
   };
 }
 
-export type NewTrip = { ownerId: string; name: string; startDate: string; endDate: string; timeZone: string; notes?: string };
+export type NewTrip = {
+  ownerId: string;
+  name: string;
+  startDate: string;
+  endDate: string;
+  timeZone: string;
+  notes?: string;
+};
 
 /** Inserts the trip row and makes its creator the owner member. */
 export function insertTrip(db: DbExecutor, trip: NewTrip, now: Date, id: string = crypto.randomUUID()): TripRow {
   const row = db
     .insert(trips)
-    .values({ id, ...trip, notes: trip.notes ?? '', createdAt: now, updatedAt: now, version: 1, revision: 1, routeRevision: 1 })
+    .values({
+      id,
+      ...trip,
+      notes: trip.notes ?? '',
+      createdAt: now,
+      updatedAt: now,
+      version: 1,
+      revision: 1,
+      routeRevision: 1,
+    })
     .returning()
     .get();
   db.insert(memberships).values({ tripId: id, userId: trip.ownerId, role: 'owner', createdAt: now }).run();
@@ -104,7 +133,12 @@ export function insertRig(db: DbExecutor, owner: { ownerId: string; tripId: stri
 }
 
 /** Marks the trip changed so cached budgets and ETags are renewed. */
-export function touchTrip(db: DbExecutor, tripId: string, now: Date, { bumpVersion = false, routeChanged = false } = {}): void {
+export function touchTrip(
+  db: DbExecutor,
+  tripId: string,
+  now: Date,
+  { bumpVersion = false, routeChanged = false } = {},
+): void {
   db.update(trips)
     .set({
       revision: sql`${trips.revision} + 1`,
@@ -116,13 +150,22 @@ export function touchTrip(db: DbExecutor, tripId: string, now: Date, { bumpVersi
     .run();
 }
 
-export function logActivity(db: DbExecutor, entry: { tripId: string; userId: string | null; summary: string; at: Date }): void {
+export function logActivity(
+  db: DbExecutor,
+  entry: { tripId: string; userId: string | null; summary: string; at: Date },
+): void {
   db.insert(activity).values(entry).run();
 }
 
 export function listActivity(db: DbExecutor, tripId: string, limit = 100) {
   return db
-    .select({ id: activity.id, at: activity.at, userId: activity.userId, userName: user.name, summary: activity.summary })
+    .select({
+      id: activity.id,
+      at: activity.at,
+      userId: activity.userId,
+      userName: user.name,
+      summary: activity.summary,
+    })
     .from(activity)
     .leftJoin(user, eq(user.id, activity.userId))
     .where(eq(activity.tripId, tripId))

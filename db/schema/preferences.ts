@@ -5,5 +5,7 @@ export const preferences = sqliteTable('preferences', {
   userId: text('user_id')
     .primaryKey()
     .references(() => user.id, { onDelete: 'cascade' }),
-  units: text('units', { enum: ['metric', 'us'] }).notNull().default('metric'),
+  units: text('units', { enum: ['metric', 'us'] })
+    .notNull()
+    .default('metric'),
 });

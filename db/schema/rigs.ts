@@ -1,5 +1,13 @@
 import { index, integer, real, sqliteTable, text } from 'drizzle-orm/sqlite-core';
-import type { Controller, Generator, Inverter, PropaneTank, ShoreCharger, SolarArray, VehicleCharger } from '@/shared/schemas/rig';
+import type {
+  Controller,
+  Generator,
+  Inverter,
+  PropaneTank,
+  ShoreCharger,
+  SolarArray,
+  VehicleCharger,
+} from '@/shared/schemas/rig';
 import { user } from './auth';
 import { trips } from './trips';
 

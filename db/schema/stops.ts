@@ -31,7 +31,10 @@ export const stops = sqliteTable(
     notes: text('notes').notNull().default(''),
     version: integer('version').notNull().default(1),
   },
-  (table) => [index('stops_trip_idx').on(table.tripId), uniqueIndex('stops_trip_position_idx').on(table.tripId, table.position)],
+  (table) => [
+    index('stops_trip_idx').on(table.tripId),
+    uniqueIndex('stops_trip_position_idx').on(table.tripId, table.position),
+  ],
 );
 
 export type StopRow = typeof stops.$inferSelect;

@@ -19,7 +19,15 @@ function compose({ to, subject, lines, action, footer }: Letter): MailMessage {
   return { to, subject, text, html };
 }
 
-export function tripInviteMail(input: { to: string; inviterName: string; tripName: string; role: string; message?: string; url: string; expiresOn: string }): MailMessage {
+export function tripInviteMail(input: {
+  to: string;
+  inviterName: string;
+  tripName: string;
+  role: string;
+  message?: string;
+  url: string;
+  expiresOn: string;
+}): MailMessage {
   return compose({
     to: input.to,
     subject: `${input.inviterName} invited you to plan "${input.tripName}" on Trailtally`,
@@ -33,7 +41,14 @@ export function tripInviteMail(input: { to: string; inviterName: string; tripNam
   });
 }
 
-export function clubInviteMail(input: { to: string; name?: string; inviterName: string; clubName: string; url: string; expiresOn: string }): MailMessage {
+export function clubInviteMail(input: {
+  to: string;
+  name?: string;
+  inviterName: string;
+  clubName: string;
+  url: string;
+  expiresOn: string;
+}): MailMessage {
   return compose({
     to: input.to,
     subject: `Join ${input.clubName} on Trailtally`,

@@ -2,7 +2,11 @@ import { Router } from 'express';
 import type { Db, DbExecutor } from '@/db/client';
 import { deleteAppliance, findAppliance, insertAppliance, updateAppliance } from '@/db/queries/appliances';
 import { findMembership, logActivity, touchTrip } from '@/db/queries/trips';
-import { createApplianceRequestSchema, updateApplianceRequestSchema, updateScheduleRequestSchema } from '@/shared/schemas/api';
+import {
+  createApplianceRequestSchema,
+  updateApplianceRequestSchema,
+  updateScheduleRequestSchema,
+} from '@/shared/schemas/api';
 import { notFound, unprocessable } from '../errors';
 import { idParam, requirePermission, tripAccess } from '../middleware/trip-access';
 import { unwrapWrite } from './write-result';
@@ -50,7 +54,11 @@ export function appliancesRouter({ db, now }: { db: Db; now: () => Date }): Rout
     const applianceId = idParam.parse(req.params.applianceId);
     const { version, schedule } = updateScheduleRequestSchema.parse(req.body);
     const record = db.transaction((tx) => {
-      const updated = unwrapWrite(updateAppliance(tx, tripId, applianceId, version, { schedule }), (row) => row, 'appliance');
+      const updated = unwrapWrite(
+        updateAppliance(tx, tripId, applianceId, version, { schedule }),
+        (row) => row,
+        'appliance',
+      );
       touchTrip(tx, tripId, now());
       logActivity(tx, { tripId, userId, summary: `changed when ${updated.appliance.name} runs`, at: now() });
       return updated;

@@ -1,12 +1,26 @@
 import { and, eq } from 'drizzle-orm';
 import { Router } from 'express';
 import type { Db } from '@/db/client';
-import { countCopies, findClubRole, findMyCopy, listClubMembers, listClubsForUser, listClubTrips, listPendingClubInvites } from '@/db/queries/clubs';
+import {
+  countCopies,
+  findClubRole,
+  findMyCopy,
+  listClubMembers,
+  listClubsForUser,
+  listClubTrips,
+  listPendingClubInvites,
+} from '@/db/queries/clubs';
 import { findMembership } from '@/db/queries/trips';
 import { user } from '@/db/schema/auth';
 import { clubInvites, clubMembers, clubs, clubTrips } from '@/db/schema/clubs';
 import { can } from '@/shared/schemas/roles';
-import { clubInviteRequestSchema, createClubRequestSchema, shareTripRequestSchema, type ClubDetail, type ClubInviteReport } from '@/shared/schemas/sharing';
+import {
+  clubInviteRequestSchema,
+  createClubRequestSchema,
+  shareTripRequestSchema,
+  type ClubDetail,
+  type ClubInviteReport,
+} from '@/shared/schemas/sharing';
 import { parseRecipients } from '../address-list';
 import { HttpError, notFound } from '../errors';
 import { INVITE_LIFETIME_MS, isoDay, newInviteToken } from '../invite-tokens';
@@ -28,7 +42,8 @@ function clubRoleOrThrow(db: Db, clubId: string, userId: string) {
 }
 
 function organiserOrThrow(db: Db, clubId: string, userId: string): void {
-  if (clubRoleOrThrow(db, clubId, userId) !== 'organiser') throw new HttpError(403, 'forbidden', 'Only the club organiser can do that.');
+  if (clubRoleOrThrow(db, clubId, userId) !== 'organiser')
+    throw new HttpError(403, 'forbidden', 'Only the club organiser can do that.');
 }
 
 export function clubsRouter({ db, now, mailer, publicUrl }: Deps): Router {
@@ -62,9 +77,18 @@ export function clubsRouter({ db, now, mailer, publicUrl }: Deps): Router {
       members,
       pendingInvites:
         role === 'organiser'
-          ? listPendingClubInvites(db, clubId, now()).map((invite) => ({ id: invite.id, email: invite.email, name: invite.name, expiresAt: invite.expiresAt.toISOString() }))
+          ? listPendingClubInvites(db, clubId, now()).map((invite) => ({
+              id: invite.id,
+              email: invite.email,
+              name: invite.name,
+              expiresAt: invite.expiresAt.toISOString(),
+            }))
           : [],
-      trips: trips.map((trip) => ({ ...trip, copies: countCopies(db, trip.tripId), myCopyTripId: findMyCopy(db, trip.tripId, me.id) })),
+      trips: trips.map((trip) => ({
+        ...trip,
+        copies: countCopies(db, trip.tripId),
+        myCopyTripId: findMyCopy(db, trip.tripId, me.id),
+      })),
     };
     res.json(detail);
   });
@@ -77,7 +101,13 @@ export function clubsRouter({ db, now, mailer, publicUrl }: Deps): Router {
     if (!club) throw notFound('That club was not found.');
     const { recipients, rejected } = parseRecipients(clubInviteRequestSchema.parse(req.body));
     const memberEmails = new Set(
-      db.select({ email: user.email }).from(clubMembers).innerJoin(user, eq(user.id, clubMembers.userId)).where(eq(clubMembers.clubId, clubId)).all().map((row) => row.email.toLowerCase()),
+      db
+        .select({ email: user.email })
+        .from(clubMembers)
+        .innerJoin(user, eq(user.id, clubMembers.userId))
+        .where(eq(clubMembers.clubId, clubId))
+        .all()
+        .map((row) => row.email.toLowerCase()),
     );
     const fresh = recipients.filter((recipient) => !memberEmails.has(recipient.email));
     const at = now();
@@ -85,8 +115,26 @@ export function clubsRouter({ db, now, mailer, publicUrl }: Deps): Router {
     const letters = db.transaction((tx) =>
       fresh.map((recipient) => {
         const { token, hash } = newInviteToken();
-        tx.insert(clubInvites).values({ id: crypto.randomUUID(), clubId, email: recipient.email, name: recipient.name, tokenHash: hash, invitedBy: me.id, createdAt: at, expiresAt }).run();
-        return clubInviteMail({ to: recipient.email, ...(recipient.name ? { name: recipient.name } : {}), inviterName: me.name, clubName: club.name, url: `${publicUrl}/club-invites/${token}`, expiresOn: isoDay(expiresAt) });
+        tx.insert(clubInvites)
+          .values({
+            id: crypto.randomUUID(),
+            clubId,
+            email: recipient.email,
+            name: recipient.name,
+            tokenHash: hash,
+            invitedBy: me.id,
+            createdAt: at,
+            expiresAt,
+          })
+          .run();
+        return clubInviteMail({
+          to: recipient.email,
+          ...(recipient.name ? { name: recipient.name } : {}),
+          inviterName: me.name,
+          clubName: club.name,
+          url: `${publicUrl}/club-invites/${token}`,
+          expiresOn: isoDay(expiresAt),
+        });
       }),
     );
     const sent: ClubInviteReport['sent'] = [];
@@ -125,7 +173,8 @@ export function clubsRouter({ db, now, mailer, publicUrl }: Deps): Router {
     const { tripId } = shareTripRequestSchema.parse(req.body);
     const membership = findMembership(db, tripId, me.id);
     if (!membership) throw notFound('That trip was not found.');
-    if (!can(membership.role, 'editTrip')) throw new HttpError(403, 'forbidden', 'Only the trip’s owner or a planner can share it to a club.');
+    if (!can(membership.role, 'editTrip'))
+      throw new HttpError(403, 'forbidden', 'Only the trip’s owner or a planner can share it to a club.');
     db.insert(clubTrips).values({ clubId, tripId, sharedBy: me.id, sharedAt: now() }).onConflictDoNothing().run();
     res.status(201).json({ trips: listClubTrips(db, clubId) });
   });
@@ -134,7 +183,9 @@ export function clubsRouter({ db, now, mailer, publicUrl }: Deps): Router {
     const me = currentUser(res);
     const clubId = idParam.parse(req.params.clubId);
     organiserOrThrow(db, clubId, me.id);
-    db.delete(clubTrips).where(and(eq(clubTrips.clubId, clubId), eq(clubTrips.tripId, idParam.parse(req.params.tripId)))).run();
+    db.delete(clubTrips)
+      .where(and(eq(clubTrips.clubId, clubId), eq(clubTrips.tripId, idParam.parse(req.params.tripId))))
+      .run();
     res.status(204).end();
   });
 

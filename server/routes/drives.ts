@@ -18,7 +18,11 @@ export function drivesRouter({ db, now }: { db: Db; now: () => Date }): Router {
     const driveId = idParam.parse(req.params.driveId);
     const { version, drive } = updateDriveRequestSchema.parse(req.body);
     const record = db.transaction((tx) => {
-      const current = tx.select().from(drives).where(and(eq(drives.tripId, tripId), eq(drives.id, driveId))).get();
+      const current = tx
+        .select()
+        .from(drives)
+        .where(and(eq(drives.tripId, tripId), eq(drives.id, driveId)))
+        .get();
       if (!current) throw notFound('That drive was not found.');
       if (current.version !== version) throw conflict(driveRecord(current));
       const stopRows = listStopRows(tx, tripId);
@@ -26,7 +30,10 @@ export function drivesRouter({ db, now }: { db: Db; now: () => Date }): Router {
       const to = stopRows[current.position + 1];
       const gapH = from && to ? (Date.parse(to.arriveAt) - Date.parse(from.departAt)) / 3_600_000 : 0;
       if (drive.hoursOnRoad > gapH + 1e-9) {
-        throw unprocessable('drive.hoursOnRoad', `The drive cannot last longer than the ${gapH.toFixed(1)} h between leaving ${from?.name ?? 'the stop'} and reaching ${to?.name ?? 'the next'}.`);
+        throw unprocessable(
+          'drive.hoursOnRoad',
+          `The drive cannot last longer than the ${gapH.toFixed(1)} h between leaving ${from?.name ?? 'the stop'} and reaching ${to?.name ?? 'the next'}.`,
+        );
       }
       const row = tx
         .update(drives)

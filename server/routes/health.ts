@@ -11,7 +11,9 @@ export function healthRouter({ db, version }: Pick<AppDeps, 'db'> & { version: s
     } catch {
       database = 'unavailable';
     }
-    res.status(database === 'ok' ? 200 : 503).json({ status: database === 'ok' ? 'ok' : 'degraded', version, database });
+    res
+      .status(database === 'ok' ? 200 : 503)
+      .json({ status: database === 'ok' ? 'ok' : 'degraded', version, database });
   });
   return router;
 }

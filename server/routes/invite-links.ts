@@ -10,7 +10,14 @@ import { ROLE_RANK } from '@/shared/schemas/roles';
 import type { InvitePreview } from '@/shared/schemas/sharing';
 import type { Auth } from '../auth';
 import { HttpError } from '../errors';
-import { assertUsable, hashInviteToken, invalidInvite, inviteStatus, maskEmail, parseInviteToken } from '../invite-tokens';
+import {
+  assertUsable,
+  hashInviteToken,
+  invalidInvite,
+  inviteStatus,
+  maskEmail,
+  parseInviteToken,
+} from '../invite-tokens';
 import { currentUser, requireSession } from '../middleware/require-session';
 
 /**
@@ -25,7 +32,9 @@ export function inviteLinksRouter({ db, now, auth }: { db: Db; now: () => Date; 
     const invite = findInviteByHash(db, hashInviteToken(parseInviteToken(req.params.token)));
     const trip = invite ? findTrip(db, invite.tripId) : undefined;
     if (!invite || !trip) throw invalidInvite();
-    const inviter = invite.invitedBy ? db.select({ name: user.name }).from(user).where(eq(user.id, invite.invitedBy)).get() : undefined;
+    const inviter = invite.invitedBy
+      ? db.select({ name: user.name }).from(user).where(eq(user.id, invite.invitedBy)).get()
+      : undefined;
     const preview: InvitePreview = {
       kind: 'trip',
       name: trip.name,
@@ -46,11 +55,16 @@ export function inviteLinksRouter({ db, now, auth }: { db: Db; now: () => Date; 
       if (!invite) throw invalidInvite();
       assertUsable(invite, now());
       if (invite.email.toLowerCase() !== me.email.toLowerCase()) {
-        throw new HttpError(403, 'invite_wrong_account', `This invite was sent to ${maskEmail(invite.email)}. Sign in with that address to join.`);
+        throw new HttpError(
+          403,
+          'invite_wrong_account',
+          `This invite was sent to ${maskEmail(invite.email)}. Sign in with that address to join.`,
+        );
       }
       const existing = findMembership(tx, invite.tripId, me.id);
       // Joining never lowers a role someone already has.
-      if (!existing || ROLE_RANK[existing.role] < ROLE_RANK[invite.role]) addMember(tx, invite.tripId, me.id, invite.role, now());
+      if (!existing || ROLE_RANK[existing.role] < ROLE_RANK[invite.role])
+        addMember(tx, invite.tripId, me.id, invite.role, now());
       tx.update(tripInvites).set({ acceptedAt: now(), acceptedBy: me.id }).where(eq(tripInvites.id, invite.id)).run();
       touchTrip(tx, invite.tripId, now());
       logActivity(tx, { tripId: invite.tripId, userId: me.id, summary: `joined as ${invite.role}`, at: now() });

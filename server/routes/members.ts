@@ -21,7 +21,8 @@ export function membersRouter({ db, now }: { db: Db; now: () => Date }): Router 
   router.post('/hand-over', requirePermission('manageMembers'), (req, res) => {
     const { tripId, userId } = tripAccess(res);
     const { userId: target } = handOverRequestSchema.parse(req.body);
-    if (target === userId) throw new HttpError(422, 'unprocessable', 'You already own this trip.', { userId: ['Choose another member.'] });
+    if (target === userId)
+      throw new HttpError(422, 'unprocessable', 'You already own this trip.', { userId: ['Choose another member.'] });
     db.transaction((tx) => {
       if (!findMembership(tx, tripId, target)) throw notFound('That member was not found.');
       setMemberRole(tx, tripId, target, 'owner');
@@ -39,7 +40,12 @@ export function membersRouter({ db, now }: { db: Db; now: () => Date }): Router 
     const { role } = updateMemberRoleRequestSchema.parse(req.body);
     // Ownership moves only by an explicit hand-over, never by editing a role.
     if (role === 'owner' || target === findTrip(db, tripId)?.ownerId) {
-      throw new HttpError(422, 'unprocessable', "The owner's role cannot be changed here; hand over ownership instead.", { role: ['Not allowed.'] });
+      throw new HttpError(
+        422,
+        'unprocessable',
+        "The owner's role cannot be changed here; hand over ownership instead.",
+        { role: ['Not allowed.'] },
+      );
     }
     db.transaction((tx) => {
       if (!setMemberRole(tx, tripId, target, role)) throw notFound('That member was not found.');

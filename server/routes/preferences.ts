@@ -11,14 +11,21 @@ export function preferencesRouter({ db }: { db: Db }): Router {
   const router = Router();
 
   router.get('/', (_req, res) => {
-    const row = db.select().from(preferences).where(eq(preferences.userId, currentUser(res).id)).get();
+    const row = db
+      .select()
+      .from(preferences)
+      .where(eq(preferences.userId, currentUser(res).id))
+      .get();
     res.json({ units: row?.units ?? 'metric' });
   });
 
   router.put('/', (req, res) => {
     const userId = currentUser(res).id;
     const { units } = preferencesSchema.parse(req.body);
-    db.insert(preferences).values({ userId, units }).onConflictDoUpdate({ target: preferences.userId, set: { units } }).run();
+    db.insert(preferences)
+      .values({ userId, units })
+      .onConflictDoUpdate({ target: preferences.userId, set: { units } })
+      .run();
     res.json({ units });
   });
 

@@ -37,7 +37,8 @@ export function rigsRouter({ db, now }: { db: Db; now: () => Date }): Router {
   });
 
   router.delete('/:rigId', (req, res) => {
-    if (!deleteSavedRig(db, currentUser(res).id, idParam.parse(req.params.rigId))) throw notFound('That rig was not found.');
+    if (!deleteSavedRig(db, currentUser(res).id, idParam.parse(req.params.rigId)))
+      throw notFound('That rig was not found.');
     res.status(204).end();
   });
 

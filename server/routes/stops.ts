@@ -46,7 +46,14 @@ export function stopsRouter({ db, now }: Deps): Router {
       if (!trip) throw notFound('That trip was not found.');
       if (trip.version !== tripVersion) throw conflict(loadTripDetail(tx, tripId, role));
       const outcome = reorderStops(tx, tripId, stopIds);
-      if (outcome === 'mismatch') throw new HttpError(409, 'conflict', 'The stops changed since you opened the route; reload and try again.', undefined, { current: loadTripDetail(tx, tripId, role) });
+      if (outcome === 'mismatch')
+        throw new HttpError(
+          409,
+          'conflict',
+          'The stops changed since you opened the route; reload and try again.',
+          undefined,
+          { current: loadTripDetail(tx, tripId, role) },
+        );
       const breach = listStopRows(tx, tripId)
         .map((row) => checkStopFits(trip, stopFromRow(row), []))
         .find((found) => found !== null);

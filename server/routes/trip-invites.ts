@@ -23,14 +23,16 @@ export function tripInvitesRouter({ db, now, mailer, publicUrl }: Deps): Router 
   const router = Router({ mergeParams: true });
 
   router.get('/', requirePermission('editTrip'), (_req, res) => {
-    const invites: PendingInvite[] = listPendingTripInvites(db, tripAccess(res).tripId, now()).map(({ invite, invitedByName }) => ({
-      id: invite.id,
-      email: invite.email,
-      role: invite.role,
-      invitedByName,
-      createdAt: invite.createdAt.toISOString(),
-      expiresAt: invite.expiresAt.toISOString(),
-    }));
+    const invites: PendingInvite[] = listPendingTripInvites(db, tripAccess(res).tripId, now()).map(
+      ({ invite, invitedByName }) => ({
+        id: invite.id,
+        email: invite.email,
+        role: invite.role,
+        invitedByName,
+        createdAt: invite.createdAt.toISOString(),
+        expiresAt: invite.expiresAt.toISOString(),
+      }),
+    );
     res.json({ invites });
   });
 
@@ -75,7 +77,9 @@ export function tripInvitesRouter({ db, now, mailer, publicUrl }: Deps): Router 
         expiresOn: isoDay(invite.expiresAt),
       }),
     );
-    res.status(201).json({ invite: { id: invite.id, email, role: invite.role, expiresAt: invite.expiresAt.toISOString() } });
+    res
+      .status(201)
+      .json({ invite: { id: invite.id, email, role: invite.role, expiresAt: invite.expiresAt.toISOString() } });
   });
 
   router.post('/:inviteId/resend', requirePermission('manageMembers'), async (req, res) => {
@@ -90,7 +94,14 @@ export function tripInvitesRouter({ db, now, mailer, publicUrl }: Deps): Router 
     db.update(tripInvites).set({ tokenHash: hash, expiresAt }).where(eq(tripInvites.id, invite.id)).run();
     logActivity(db, { tripId, userId, summary: `sent the invite to ${invite.email} again`, at: now() });
     await mailer.send(
-      tripInviteMail({ to: invite.email, inviterName: currentUser(res).name, tripName: trip.name, role: invite.role, url: inviteLink(publicUrl, token), expiresOn: isoDay(expiresAt) }),
+      tripInviteMail({
+        to: invite.email,
+        inviterName: currentUser(res).name,
+        tripName: trip.name,
+        role: invite.role,
+        url: inviteLink(publicUrl, token),
+        expiresOn: isoDay(expiresAt),
+      }),
     );
     res.json({ invite: { id: invite.id, email: invite.email, role: invite.role, expiresAt: expiresAt.toISOString() } });
   });

@@ -41,7 +41,11 @@ export function tripItemsRouter(deps: TripItemsDeps): Router {
   });
 
   router.get('/activity', (_req, res) => {
-    const entries = listActivity(deps.db, tripAccess(res).tripId).map((entry) => ({ ...entry, id: String(entry.id), at: entry.at.toISOString() }));
+    const entries = listActivity(deps.db, tripAccess(res).tripId).map((entry) => ({
+      ...entry,
+      id: String(entry.id),
+      at: entry.at.toISOString(),
+    }));
     res.json({ entries });
   });
 

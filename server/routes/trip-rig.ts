@@ -30,7 +30,11 @@ export function tripRigRouter({ db, now }: { db: Db; now: () => Date }): Router 
     const record = db.transaction((tx) => {
       const saved = findSavedRig(tx, userId, rigId);
       if (!saved) throw unprocessable('rigId', 'That rig is not among your saved rigs.');
-      const updated = unwrapWrite(updateRigRow(tx, findTripRig(tx, tripId), version, rigFromRow(saved), now()), rigRecord, 'rig');
+      const updated = unwrapWrite(
+        updateRigRow(tx, findTripRig(tx, tripId), version, rigFromRow(saved), now()),
+        rigRecord,
+        'rig',
+      );
       touchTrip(tx, tripId, now());
       logActivity(tx, { tripId, userId, summary: `switched the trip to the rig ${saved.name}`, at: now() });
       return updated;

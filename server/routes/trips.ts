@@ -8,7 +8,17 @@ import { checkTripDatesCoverStops } from '@/shared/trip-rules';
 import { findSavedRig } from '@/db/queries/rigs';
 import { rigFromRow } from '@/db/queries/mappers';
 import { listStopRows } from '@/db/queries/stops';
-import { findTrip, findTripRig, insertRig, insertTrip, listTripsForMember, loadTripDetail, logActivity, toTripSummary, touchTrip } from '@/db/queries/trips';
+import {
+  findTrip,
+  findTripRig,
+  insertRig,
+  insertTrip,
+  listTripsForMember,
+  loadTripDetail,
+  logActivity,
+  toTripSummary,
+  touchTrip,
+} from '@/db/queries/trips';
 import { trips } from '@/db/schema/trips';
 import { eq } from 'drizzle-orm';
 import { conflict, notFound, unprocessable } from '../errors';
@@ -53,7 +63,18 @@ export function tripsRouter(deps: TripItemsDeps): Router {
     }
     const at = now();
     const tripId = db.transaction((tx) => {
-      const trip = insertTrip(tx, { ownerId: user.id, name: body.name, startDate: body.startDate, endDate: body.endDate, timeZone: body.timeZone, notes: body.notes }, at);
+      const trip = insertTrip(
+        tx,
+        {
+          ownerId: user.id,
+          name: body.name,
+          startDate: body.startDate,
+          endDate: body.endDate,
+          timeZone: body.timeZone,
+          notes: body.notes,
+        },
+        at,
+      );
       insertRig(tx, { ownerId: user.id, tripId: trip.id }, rig, at);
       logActivity(tx, { tripId: trip.id, userId: user.id, summary: `created the trip "${trip.name}"`, at });
       return trip.id;
@@ -79,7 +100,11 @@ export function tripsRouter(deps: TripItemsDeps): Router {
       const current = findTrip(tx, tripId);
       if (!current) throw notFound('That trip was not found.');
       if (current.version !== version) throw conflict(loadTripDetail(tx, tripId, role)?.trip);
-      const next = { startDate: changes.startDate ?? current.startDate, endDate: changes.endDate ?? current.endDate, timeZone: changes.timeZone ?? current.timeZone };
+      const next = {
+        startDate: changes.startDate ?? current.startDate,
+        endDate: changes.endDate ?? current.endDate,
+        timeZone: changes.timeZone ?? current.timeZone,
+      };
       const breach = checkTripDatesCoverStops(next, listStopRows(tx, tripId));
       if (breach) throw unprocessable(breach.field, breach.message);
       tx.update(trips).set(changes).where(eq(trips.id, tripId)).run();
@@ -114,7 +139,15 @@ export function tripsRouter(deps: TripItemsDeps): Router {
     const at = now();
     const copyId = db.transaction((tx) => {
       const id = duplicateTrip(tx, tripId, userId, at, { name: name ?? source.name, rig: rigFromRow(saved) });
-      tx.insert(tripCopies).values({ copyTripId: id, sourceTripId: tripId, userId, sourceRouteRevision: source.routeRevision, copiedAt: at }).run();
+      tx.insert(tripCopies)
+        .values({
+          copyTripId: id,
+          sourceTripId: tripId,
+          userId,
+          sourceRouteRevision: source.routeRevision,
+          copiedAt: at,
+        })
+        .run();
       return id;
     });
     res.status(201).json(loadTripDetail(db, copyId, 'owner'));
@@ -126,11 +159,13 @@ export function tripsRouter(deps: TripItemsDeps): Router {
     const link = db.select().from(tripCopies).where(eq(tripCopies.copyTripId, tripId)).get();
     const source = link ? findTrip(db, link.sourceTripId) : undefined;
     if (!link || !source) throw notFound('This trip is not a copy of another.');
-    db.update(tripCopies).set({ sourceRouteRevision: source.routeRevision }).where(eq(tripCopies.copyTripId, tripId)).run();
+    db.update(tripCopies)
+      .set({ sourceRouteRevision: source.routeRevision })
+      .where(eq(tripCopies.copyTripId, tripId))
+      .run();
     res.json(loadTripDetail(db, tripId, role));
   });
 
   trip.use(tripItemsRouter(deps));
   return router;
 }
-

@@ -20,9 +20,36 @@ export type ChemistryPreset = {
 // Common practice (CHECK-VALUES §7, confidence S): round trip LiFePO4 92–98 %, lead-acid 78–85 %; usable depth
 // lead-acid ≈ 50 %, LiFePO4 80–100 %; Peukert AGM 1.05–1.15, flooded 1.2–1.6, lithium ≈ 1.05.
 export const CHEMISTRY: Readonly<Record<Chemistry, ChemistryPreset>> = {
-  lifepo4: { chargeEfficiency: 0.98, dischargeEfficiency: 0.98, recommendedDodPct: 80, maxChargeC: 0.5, taperStartSoc: 0.95, peukertK: 1.05, chargeVoltageRatio: 1.06, lithium: true },
-  agm: { chargeEfficiency: 0.9, dischargeEfficiency: 0.93, recommendedDodPct: 50, maxChargeC: 0.2, taperStartSoc: 0.8, peukertK: 1.1, chargeVoltageRatio: 1.1, lithium: false },
-  flooded: { chargeEfficiency: 0.88, dischargeEfficiency: 0.92, recommendedDodPct: 50, maxChargeC: 0.15, taperStartSoc: 0.75, peukertK: 1.25, chargeVoltageRatio: 1.1, lithium: false },
+  lifepo4: {
+    chargeEfficiency: 0.98,
+    dischargeEfficiency: 0.98,
+    recommendedDodPct: 80,
+    maxChargeC: 0.5,
+    taperStartSoc: 0.95,
+    peukertK: 1.05,
+    chargeVoltageRatio: 1.06,
+    lithium: true,
+  },
+  agm: {
+    chargeEfficiency: 0.9,
+    dischargeEfficiency: 0.93,
+    recommendedDodPct: 50,
+    maxChargeC: 0.2,
+    taperStartSoc: 0.8,
+    peukertK: 1.1,
+    chargeVoltageRatio: 1.1,
+    lithium: false,
+  },
+  flooded: {
+    chargeEfficiency: 0.88,
+    dischargeEfficiency: 0.92,
+    recommendedDodPct: 50,
+    maxChargeC: 0.15,
+    taperStartSoc: 0.75,
+    peukertK: 1.25,
+    chargeVoltageRatio: 1.1,
+    lithium: false,
+  },
 };
 
 /** Peukert run time, h, for capacity C (Ah) rated at H hours, exponent k, current I (A). */

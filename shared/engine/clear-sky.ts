@@ -19,7 +19,13 @@ export function pressureRatio(elevationM: number): number {
   return Math.pow(1 - 2.25577e-5 * elevationM, 5.25588);
 }
 
-export type IneichenInput = { zenithDeg: number; airMassAbsolute: number; linkeTurbidity: number; elevationM: number; dniExtra?: number };
+export type IneichenInput = {
+  zenithDeg: number;
+  airMassAbsolute: number;
+  linkeTurbidity: number;
+  elevationM: number;
+  dniExtra?: number;
+};
 export type Irradiance = { ghi: number; dni: number; dhi: number };
 
 /** Ineichen–Perez clear sky; dniExtra defaults to the model's own I0 = 1364 W/m². */

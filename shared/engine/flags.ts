@@ -89,7 +89,10 @@ function shortfallFlags(ctx: FlagContext): Flag[] {
   const flags: Flag[] = [];
   let i = 0;
   while (i < p.n) {
-    if ((l.socPct[i] ?? 100) >= reservePct - 1e-9 && (l.energyShortWh[i] ?? 0) === 0) { i++; continue; }
+    if ((l.socPct[i] ?? 100) >= reservePct - 1e-9 && (l.energyShortWh[i] ?? 0) === 0) {
+      i++;
+      continue;
+    }
     const start = i;
     let low = i;
     let shortWh = 0;
@@ -101,14 +104,27 @@ function shortfallFlags(ctx: FlagContext): Flag[] {
     const deficitWh = ((reservePct - (l.socPct[low] ?? 0)) / 100) * capacityWh + shortWh;
     const where = whereAt(p, low);
     const stopIndex = where.kind === 'stop' ? where.stopIndex : where.driveIndex;
-    const fixes = [generatorFix(ctx, stopIndex, deficitWh), hookupFix(ctx, stopIndex, deficitWh), moveLoadFix(ctx, stopIndex), batteryFix(ctx, deficitWh)]
-      .filter((f): f is Fix => f !== null);
+    const fixes = [
+      generatorFix(ctx, stopIndex, deficitWh),
+      hookupFix(ctx, stopIndex, deficitWh),
+      moveLoadFix(ctx, stopIndex),
+      batteryFix(ctx, deficitWh),
+    ].filter((f): f is Fix => f !== null);
     const kind = shortWh > 0 ? 'energy-short' : 'below-reserve';
-    const what = shortWh > 0 ? `runs the battery empty, ${kwh(shortWh)} short,` : `falls ${kwh(deficitWh)} below the ${reservePct} % reserve`;
+    const what =
+      shortWh > 0
+        ? `runs the battery empty, ${kwh(shortWh)} short,`
+        : `falls ${kwh(deficitWh)} below the ${reservePct} % reserve`;
     flags.push({
-      id: `${kind}-${start}`, kind, severity: 'danger', atUtc: utcIso(p, low), atLocal: localIso(p, low), where,
+      id: `${kind}-${start}`,
+      kind,
+      severity: 'danger',
+      atUtc: utcIso(p, low),
+      atLocal: localIso(p, low),
+      where,
       cause: `${capitalise(whereText(p, where))} ${what} by ${localShort(p, low)} (lowest ${(l.socPct[low] ?? 0).toFixed(0)} %)`,
-      size: { value: Math.round(deficitWh), unit: 'Wh' }, fixes,
+      size: { value: Math.round(deficitWh), unit: 'Wh' },
+      fixes,
     });
   }
   return flags;
@@ -135,11 +151,20 @@ function overloadFlags(ctx: FlagContext): Flag[] {
     const names = overlappingAc(p, i);
     const ratedW = Math.ceil(Math.max(running, (running + (p.acSurgeExtraW[i] ?? 0)) / 2) / 500) * 500;
     flags.push({
-      id: `inverter-overload-${i}`, kind: 'inverter-overload', severity: 'warning', atUtc: utcIso(p, i), atLocal: localIso(p, i), where,
+      id: `inverter-overload-${i}`,
+      kind: 'inverter-overload',
+      severity: 'warning',
+      atUtc: utcIso(p, i),
+      atLocal: localIso(p, i),
+      where,
       cause: `At ${whereText(p, where)} around ${localShort(p, i)} the AC loads scheduled together (${names.join(', ')}) can ask ${Math.round(running)} W of a ${inv.ratedW} W inverter`,
       size: { value: Math.round(running), unit: 'W' },
       fixes: [
-        { kind: 'stagger-appliances', text: `do not run ${names.join(' and ')} in the same minutes`, params: { applianceIds: overlappingAcIds(p, i) } },
+        {
+          kind: 'stagger-appliances',
+          text: `do not run ${names.join(' and ')} in the same minutes`,
+          params: { applianceIds: overlappingAcIds(p, i) },
+        },
         { kind: 'larger-inverter', text: `an inverter of at least ${ratedW} W`, params: { ratedW } },
       ],
     });
@@ -148,8 +173,15 @@ function overloadFlags(ctx: FlagContext): Flag[] {
 }
 
 function runningAc(p: Prepared, i: number): Appliance[] {
-  const step = { minuteOfDay: p.minuteOfDay[i] ?? 0, dayIndex: p.dayIndex[i] ?? 0, dayType: p.travelDay[i] ? 'travel' as const : 'camp' as const, durationMin: (p.stepH[i] ?? 1) * 60 };
-  return p.input.appliances.filter((a) => a.circuit === 'ac' && onShare(a, step, prevDayType(p, i), p.ambientC[i] ?? 15) > 0);
+  const step = {
+    minuteOfDay: p.minuteOfDay[i] ?? 0,
+    dayIndex: p.dayIndex[i] ?? 0,
+    dayType: p.travelDay[i] ? ('travel' as const) : ('camp' as const),
+    durationMin: (p.stepH[i] ?? 1) * 60,
+  };
+  return p.input.appliances.filter(
+    (a) => a.circuit === 'ac' && onShare(a, step, prevDayType(p, i), p.ambientC[i] ?? 15) > 0,
+  );
 }
 function overlappingAc(p: Prepared, i: number): string[] {
   return runningAc(p, i).map((a) => a.name.toLowerCase());
@@ -169,10 +201,21 @@ function coldFlags(ctx: FlagContext): Flag[] {
     for (let j = 0; j < p.n; j++) if (l.coldBlocked[j] && p.where[j] === p.where[i]) hours += p.stepH[j] ?? 1;
     const where = whereAt(p, i);
     flags.push({
-      id: `cold-charge-blocked-${i}`, kind: 'cold-charge-blocked', severity: 'warning', atUtc: utcIso(p, i), atLocal: localIso(p, i), where,
+      id: `cold-charge-blocked-${i}`,
+      kind: 'cold-charge-blocked',
+      severity: 'warning',
+      atUtc: utcIso(p, i),
+      atLocal: localIso(p, i),
+      where,
       cause: `Below 0 °C at ${whereText(p, where)} the lithium battery must not charge; charging is held off for ${hours.toFixed(0)} h`,
       size: { value: hours, unit: 'h' },
-      fixes: [{ kind: 'keep-battery-warm', text: 'keep the battery inside the heated space (or use a self-heating battery)', params: { heatedSpace: true } }],
+      fixes: [
+        {
+          kind: 'keep-battery-warm',
+          text: 'keep the battery inside the heated space (or use a self-heating battery)',
+          params: { heatedSpace: true },
+        },
+      ],
     });
   }
   return flags;
@@ -190,12 +233,21 @@ function propaneFlags(ctx: FlagContext): Flag[] {
   const startKg = p.input.rig.propaneTanks.reduce((s, t) => s + (t.propaneKg * t.fillPct) / 100, 0);
   const extraKg = Math.ceil((burned - startKg) * 10) / 10;
   const where = whereAt(p, outAt);
-  return [{
-    id: `propane-out-${outAt}`, kind: 'propane-out', severity: 'danger', atUtc: utcIso(p, outAt), atLocal: localIso(p, outAt), where,
-    cause: `Propane runs out at ${whereText(p, where)} by ${localShort(p, outAt)}; the plan burns ${burned.toFixed(1)} kg against ${startKg.toFixed(1)} kg aboard`,
-    size: { value: extraKg, unit: 'kg' },
-    fixes: [{ kind: 'add-propane', text: `${extraKg} kg more propane (a refill or another cylinder)`, params: { extraKg } }],
-  }];
+  return [
+    {
+      id: `propane-out-${outAt}`,
+      kind: 'propane-out',
+      severity: 'danger',
+      atUtc: utcIso(p, outAt),
+      atLocal: localIso(p, outAt),
+      where,
+      cause: `Propane runs out at ${whereText(p, where)} by ${localShort(p, outAt)}; the plan burns ${burned.toFixed(1)} kg against ${startKg.toFixed(1)} kg aboard`,
+      size: { value: extraKg, unit: 'kg' },
+      fixes: [
+        { kind: 'add-propane', text: `${extraKg} kg more propane (a refill or another cylinder)`, params: { extraKg } },
+      ],
+    },
+  ];
 }
 
 function cablingFlags(ctx: FlagContext): Flag[] {
@@ -205,12 +257,25 @@ function cablingFlags(ctx: FlagContext): Flag[] {
   const amps = dcCurrentA(inv.ratedW / inv.efficiency, p.input.rig.battery.nominalV);
   if (amps < HIGH_CURRENT_A) return [];
   const where = whereAt(p, 0);
-  return [{
-    id: 'high-dc-current', kind: 'high-dc-current', severity: 'info', atUtc: utcIso(p, 0), atLocal: localIso(p, 0), where,
-    cause: `At full output the ${inv.ratedW} W inverter draws about ${Math.round(amps)} A from the ${p.input.rig.battery.nominalV} V bank`,
-    size: { value: Math.round(amps), unit: 'A' },
-    fixes: [{ kind: 'check-cabling', text: `size cables and fuse for ${Math.round(amps)} A by the applicable code and have a qualified installer check them`, params: { currentA: Math.round(amps), minFuseA: Math.ceil(amps * 1.25) } }],
-  }];
+  return [
+    {
+      id: 'high-dc-current',
+      kind: 'high-dc-current',
+      severity: 'info',
+      atUtc: utcIso(p, 0),
+      atLocal: localIso(p, 0),
+      where,
+      cause: `At full output the ${inv.ratedW} W inverter draws about ${Math.round(amps)} A from the ${p.input.rig.battery.nominalV} V bank`,
+      size: { value: Math.round(amps), unit: 'A' },
+      fixes: [
+        {
+          kind: 'check-cabling',
+          text: `size cables and fuse for ${Math.round(amps)} A by the applicable code and have a qualified installer check them`,
+          params: { currentA: Math.round(amps), minFuseA: Math.ceil(amps * 1.25) },
+        },
+      ],
+    },
+  ];
 }
 
 export function buildFlags(ctx: FlagContext): Flag[] {

@@ -1,7 +1,13 @@
 // Public API of the budget engine. Pure: no I/O, no React, no Node built-ins.
 export { simulateTrip, simulateParsed } from './simulate';
 export { findHeadroom, findHeadroomParsed } from './headroom';
-export { APPLIANCE_LIBRARY, libraryItem, applianceFromLibrary, type LibraryItem, type LibraryBasis } from './appliance-library';
+export {
+  APPLIANCE_LIBRARY,
+  libraryItem,
+  applianceFromLibrary,
+  type LibraryItem,
+  type LibraryBasis,
+} from './appliance-library';
 export { DEMO_TRIPS, highlandLoop, desertSpringLoop } from './demo-trips';
 export type * from './result-types';
 export type { HeadroomResult, HeadroomLever } from './headroom';

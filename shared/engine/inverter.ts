@@ -14,6 +14,11 @@ export function dcCurrentA(powerW: number, busV: number): number {
 export type OverloadCheck = { running: boolean; surge: boolean };
 
 /** Running watts above the rating, or a start-up surge (with the rest running) above the surge rating. */
-export function checkOverload(runningW: number, largestSurgeExtraW: number, ratedW: number, surgeW: number): OverloadCheck {
+export function checkOverload(
+  runningW: number,
+  largestSurgeExtraW: number,
+  ratedW: number,
+  surgeW: number,
+): OverloadCheck {
   return { running: runningW > ratedW, surge: runningW + largestSurgeExtraW > surgeW };
 }

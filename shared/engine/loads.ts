@@ -4,7 +4,12 @@ import type { DayType } from '../schemas/common';
 import type { Appliance } from '../schemas/appliance';
 import { windowsShare, type LocalStep } from './routines';
 
-export function thermostatDuty(mode: 'cooling' | 'heating', ambientC: number, setPointC: number, fullDutyDeltaC: number): number {
+export function thermostatDuty(
+  mode: 'cooling' | 'heating',
+  ambientC: number,
+  setPointC: number,
+  fullDutyDeltaC: number,
+): number {
   const excess = mode === 'cooling' ? ambientC - setPointC : setPointC - ambientC;
   return Math.min(1, Math.max(0, excess / fullDutyDeltaC));
 }

@@ -14,7 +14,13 @@ import { resolveExposure, type ResolvedExposure } from './site-exposure';
 import { sunPositionInto } from './sun-position';
 import { ambientC as ambientCurve } from './temperature-curve';
 import {
-  buildGrid, buildSegments, fillOffsets, HOUR_MS as HOUR_MS_IMPORTED, localDayNumber as dayNumberOf, localMinuteOfDay as minuteOfDayOf, type Segment,
+  buildGrid,
+  buildSegments,
+  fillOffsets,
+  HOUR_MS as HOUR_MS_IMPORTED,
+  localDayNumber as dayNumberOf,
+  localMinuteOfDay as minuteOfDayOf,
+  type Segment,
 } from './time-grid';
 
 // Module-local copies of imported bindings used once per step: once compiled to CommonJS (as the benchmark and
@@ -142,7 +148,13 @@ function clearSkyGhi(stop: Stop | undefined, altDeg: number, cz: number, dniExtr
   if (altDeg <= 0) return 0;
   if (stop?.linkeTurbidity === undefined) return cz > 0 ? 1098 * cz * Math.exp(-0.059 / cz) : 0; // haurwitzGhi
   const am = kastenYoungAirMass(zen) * pressureRatio(stop.elevationM);
-  return ineichenPerez({ zenithDeg: zen, airMassAbsolute: am, linkeTurbidity: stop.linkeTurbidity, elevationM: stop.elevationM, dniExtra }).ghi;
+  return ineichenPerez({
+    zenithDeg: zen,
+    airMassAbsolute: am,
+    linkeTurbidity: stop.linkeTurbidity,
+    elevationM: stop.elevationM,
+    dniExtra,
+  }).ghi;
 }
 
 /** dayOfYearUtc and extraterrestrialW with the year's start and the last day remembered: one Date per year, not per step. */
@@ -296,7 +308,8 @@ function fillLoads(p: Prepared): void {
   const stopWh = new Float64Array(appliances.length * stopsCount);
   p.applianceStopWh = stopWh;
   let known: { time: Slots; typed: Slots } | null = null;
-  const slots = (): { time: Slots; typed: Slots } => (known ??= { time: stepSlots(p, false), typed: stepSlots(p, true) });
+  const slots = (): { time: Slots; typed: Slots } =>
+    (known ??= { time: stepSlots(p, false), typed: stepSlots(p, true) });
   const share = new Float64Array(n);
   const { stepH, where, acWh, dcWh, heatWh, acRunningW, acSurgeExtraW, acStandbyOn } = p;
   // Steps of one stop are consecutive: per-stop totals add each stop's run of steps in time order.
@@ -356,7 +369,9 @@ function fillLoads(p: Prepared): void {
 
 function inHourWindow(hourOfDay: number, startHour: number, endHour: number): boolean {
   if (startHour === endHour) return false;
-  return startHour < endHour ? hourOfDay >= startHour && hourOfDay < endHour : hourOfDay >= startHour || hourOfDay < endHour;
+  return startHour < endHour
+    ? hourOfDay >= startHour && hourOfDay < endHour
+    : hourOfDay >= startHour || hourOfDay < endHour;
 }
 
 function fillGenerator(p: Prepared, stops: readonly Stop[]): void {
@@ -377,7 +392,11 @@ function fillGenerator(p: Prepared, stops: readonly Stop[]): void {
       const hourOfDay = (qMin / 60) % 24;
       if (hours && inHourWindow(hourOfDay, hours.startHour, hours.endHour)) allowed |= 1 << q;
       if (routineWindows && step) {
-        const qStep: LocalStep = { ...step, minuteOfDay: (step.minuteOfDay + (q * dtMin) / QUARTERS) % 1440, durationMin: dtMin / QUARTERS };
+        const qStep: LocalStep = {
+          ...step,
+          minuteOfDay: (step.minuteOfDay + (q * dtMin) / QUARTERS) % 1440,
+          durationMin: dtMin / QUARTERS,
+        };
         if (windowsShare(routineWindows, qStep, prev) >= 0.5) routine |= 1 << q;
       }
     }
@@ -403,10 +422,38 @@ function allocate(input: EngineInput, n: number): Prepared {
   const i16 = (): Int16Array => view((b, o, len) => new Int16Array(b, o, len), 2, n);
   const u8 = (): Uint8Array => view((b, o, len) => new Uint8Array(b, o, len), 1, n);
   return {
-    input, n, startMs: f(), stepH: f(), offsetMin: f(), onRoadShare: f(), minuteOfDay: f(), ambientC: f(), lat: f(), lon: f(), sunAltMid: f(),
-    alt: f(n * SAMPLES), az: f(n * SAMPLES), ghiClear: f(n * SAMPLES), cosZ: f(n * SAMPLES), dniExtra: f(), hookupW: f(), acWh: f(), dcWh: f(), heatWh: f(),
-    acRunningW: f(), acSurgeExtraW: f(), dayIndex: i32(), where: i16(), stopOf: i16(), travelDay: u8(), genAllowed: u8(), genRoutine: u8(),
-    acStandbyOn: u8(), travelByDay: new Uint8Array(1), exposures: [], openExposure: resolveExposure({ kind: 'preset', preset: 'open' }),
+    input,
+    n,
+    startMs: f(),
+    stepH: f(),
+    offsetMin: f(),
+    onRoadShare: f(),
+    minuteOfDay: f(),
+    ambientC: f(),
+    lat: f(),
+    lon: f(),
+    sunAltMid: f(),
+    alt: f(n * SAMPLES),
+    az: f(n * SAMPLES),
+    ghiClear: f(n * SAMPLES),
+    cosZ: f(n * SAMPLES),
+    dniExtra: f(),
+    hookupW: f(),
+    acWh: f(),
+    dcWh: f(),
+    heatWh: f(),
+    acRunningW: f(),
+    acSurgeExtraW: f(),
+    dayIndex: i32(),
+    where: i16(),
+    stopOf: i16(),
+    travelDay: u8(),
+    genAllowed: u8(),
+    genRoutine: u8(),
+    acStandbyOn: u8(),
+    travelByDay: new Uint8Array(1),
+    exposures: [],
+    openExposure: resolveExposure({ kind: 'preset', preset: 'open' }),
     applianceStopWh: new Float64Array(0),
   };
 }

@@ -83,12 +83,21 @@ export type Headline = {
 };
 
 export type FixKind =
-  | 'add-generator-hours' | 'add-hookup-night' | 'move-appliance-to-drive' | 'add-battery' | 'add-solar'
-  | 'stagger-appliances' | 'larger-inverter' | 'add-propane' | 'keep-battery-warm' | 'check-cabling';
+  | 'add-generator-hours'
+  | 'add-hookup-night'
+  | 'move-appliance-to-drive'
+  | 'add-battery'
+  | 'add-solar'
+  | 'stagger-appliances'
+  | 'larger-inverter'
+  | 'add-propane'
+  | 'keep-battery-warm'
+  | 'check-cabling';
 
 export type Fix = { kind: FixKind; text: string; params: Record<string, number | string | boolean | string[]> };
 
-export type FlagKind = 'below-reserve' | 'energy-short' | 'inverter-overload' | 'cold-charge-blocked' | 'propane-out' | 'high-dc-current';
+export type FlagKind =
+  'below-reserve' | 'energy-short' | 'inverter-overload' | 'cold-charge-blocked' | 'propane-out' | 'high-dc-current';
 
 export type Flag = {
   id: string;

@@ -21,7 +21,13 @@ export function capacityWhOf(input: EngineInput): number {
 }
 
 export function plannedScenario(p: Prepared, solar: SolarSeries): Scenario {
-  return { solarW: solar.availableW, solarScale: 1, capacityWh: capacityWhOf(p.input), hookupW: p.hookupW, generator: generatorPlanFor(p) };
+  return {
+    solarW: solar.availableW,
+    solarScale: 1,
+    capacityWh: capacityWhOf(p.input),
+    hookupW: p.hookupW,
+    generator: generatorPlanFor(p),
+  };
 }
 
 function ledgerRows(p: Prepared, l: LedgerColumns, solar: SolarSeries): LedgerRow[] {
@@ -30,20 +36,56 @@ function ledgerRows(p: Prepared, l: LedgerColumns, solar: SolarSeries): LedgerRo
   const { stepH, sunAltMid, ambientC, startMs, offsetMin } = p;
   const poa = solar.poaWm2;
   const {
-    solarAvailableWh, solarUsedWh, solarWastedWh, acLoadWh, dcLoadWh, inverterLossWh, chargerLossWh, batteryLossWh, hookupWh,
-    vehicleWh, generatorWh, generatorH, generatorFuel, propaneBurnedKg, batteryFlowWh, storedWh, socPct, energyShortWh, propaneLeftKg,
+    solarAvailableWh,
+    solarUsedWh,
+    solarWastedWh,
+    acLoadWh,
+    dcLoadWh,
+    inverterLossWh,
+    chargerLossWh,
+    batteryLossWh,
+    hookupWh,
+    vehicleWh,
+    generatorWh,
+    generatorH,
+    generatorFuel,
+    propaneBurnedKg,
+    batteryFlowWh,
+    storedWh,
+    socPct,
+    energyShortWh,
+    propaneLeftKg,
   } = l;
   for (let i = 0; i < p.n; i++) {
     const t = startMs[i] ?? 0;
     rows[i] = {
-      index: i, utc: utcIsoString(t), local: localLabel(t, offsetMin[i] ?? 0), where: whereAt(p, i), stepH: stepH[i] ?? 1,
-      sunAltitudeDeg: sunAltMid[i] ?? 0, irradianceWm2: poa[i] ?? 0, ambientC: ambientC[i] ?? 0,
-      solarAvailableWh: solarAvailableWh[i] ?? 0, solarUsedWh: solarUsedWh[i] ?? 0, solarWastedWh: solarWastedWh[i] ?? 0,
-      acLoadWh: acLoadWh[i] ?? 0, dcLoadWh: dcLoadWh[i] ?? 0, inverterLossWh: inverterLossWh[i] ?? 0,
-      chargerLossWh: chargerLossWh[i] ?? 0, batteryLossWh: batteryLossWh[i] ?? 0, hookupWh: hookupWh[i] ?? 0,
-      vehicleWh: vehicleWh[i] ?? 0, generatorWh: generatorWh[i] ?? 0, generatorH: generatorH[i] ?? 0,
-      generatorFuel: generatorFuel[i] ?? 0, propaneBurnedKg: propaneBurnedKg[i] ?? 0, batteryFlowWh: batteryFlowWh[i] ?? 0,
-      storedWh: storedWh[i] ?? 0, socPct: socPct[i] ?? 0, energyShortWh: energyShortWh[i] ?? 0, propaneLeftKg: propaneLeftKg[i] ?? 0,
+      index: i,
+      utc: utcIsoString(t),
+      local: localLabel(t, offsetMin[i] ?? 0),
+      where: whereAt(p, i),
+      stepH: stepH[i] ?? 1,
+      sunAltitudeDeg: sunAltMid[i] ?? 0,
+      irradianceWm2: poa[i] ?? 0,
+      ambientC: ambientC[i] ?? 0,
+      solarAvailableWh: solarAvailableWh[i] ?? 0,
+      solarUsedWh: solarUsedWh[i] ?? 0,
+      solarWastedWh: solarWastedWh[i] ?? 0,
+      acLoadWh: acLoadWh[i] ?? 0,
+      dcLoadWh: dcLoadWh[i] ?? 0,
+      inverterLossWh: inverterLossWh[i] ?? 0,
+      chargerLossWh: chargerLossWh[i] ?? 0,
+      batteryLossWh: batteryLossWh[i] ?? 0,
+      hookupWh: hookupWh[i] ?? 0,
+      vehicleWh: vehicleWh[i] ?? 0,
+      generatorWh: generatorWh[i] ?? 0,
+      generatorH: generatorH[i] ?? 0,
+      generatorFuel: generatorFuel[i] ?? 0,
+      propaneBurnedKg: propaneBurnedKg[i] ?? 0,
+      batteryFlowWh: batteryFlowWh[i] ?? 0,
+      storedWh: storedWh[i] ?? 0,
+      socPct: socPct[i] ?? 0,
+      energyShortWh: energyShortWh[i] ?? 0,
+      propaneLeftKg: propaneLeftKg[i] ?? 0,
     };
   }
   return rows;
@@ -51,9 +93,23 @@ function ledgerRows(p: Prepared, l: LedgerColumns, solar: SolarSeries): LedgerRo
 
 function emptyDay(p: Prepared, i: number): DaySheet {
   return {
-    dayIndex: p.dayIndex[i] ?? 0, date: localLabel(p.startMs[i] ?? 0, p.offsetMin[i] ?? 0).slice(0, 10), stopIndexes: [], travel: p.travelDay[i] === 1,
-    harvestWh: 0, solarAvailableWh: 0, useWh: 0, netWh: 0, hookupWh: 0, vehicleWh: 0, generatorWh: 0, generatorHours: 0, generatorFuel: 0,
-    propaneUsedKg: 0, lowestSocPct: 100, endSocPct: 0, energyShortWh: 0,
+    dayIndex: p.dayIndex[i] ?? 0,
+    date: localLabel(p.startMs[i] ?? 0, p.offsetMin[i] ?? 0).slice(0, 10),
+    stopIndexes: [],
+    travel: p.travelDay[i] === 1,
+    harvestWh: 0,
+    solarAvailableWh: 0,
+    useWh: 0,
+    netWh: 0,
+    hookupWh: 0,
+    vehicleWh: 0,
+    generatorWh: 0,
+    generatorHours: 0,
+    generatorFuel: 0,
+    propaneUsedKg: 0,
+    lowestSocPct: 100,
+    endSocPct: 0,
+    energyShortWh: 0,
   };
 }
 
@@ -107,13 +163,23 @@ function headline(p: Prepared, l: LedgerColumns, r: WalkResult): Headline {
   // A lowest at the very start (nothing ever drew the battery down) is reported at the first step.
   const low = r.lowestIndex;
   return {
-    capacityWh, reservePct, lowestSocPct: r.lowestSocPct, lowestAtUtc: utcIso(p, low), lowestAtLocal: localIso(p, low), lowestWhere: whereAt(p, low),
+    capacityWh,
+    reservePct,
+    lowestSocPct: r.lowestSocPct,
+    lowestAtUtc: utcIso(p, low),
+    lowestAtLocal: localIso(p, low),
+    lowestWhere: whereAt(p, low),
     energyShortWh: r.energyShortWh,
     daysOfAutonomy: dailyDraw > 0 ? (capacityWh * (1 - reservePct / 100)) / dailyDraw : Number.POSITIVE_INFINITY,
     solarFraction: sources > 0 ? solarUsedWh / sources : 0,
-    solarUsedWh, solarWastedWh: sum(l.solarWastedWh), hookupWh, vehicleWh, generatorHours: r.generatorHours,
+    solarUsedWh,
+    solarWastedWh: sum(l.solarWastedWh),
+    hookupWh,
+    vehicleWh,
+    generatorHours: r.generatorHours,
     generatorFuel: gen ? { fuel: gen.fuel, amount: sum(l.generatorFuel), unit: fuelUnit(gen.fuel) } : null,
-    propaneStartKg, propaneLeftKg: l.propaneLeftKg[p.n - 1] ?? propaneStartKg,
+    propaneStartKg,
+    propaneLeftKg: l.propaneLeftKg[p.n - 1] ?? propaneStartKg,
   };
 }
 
@@ -144,4 +210,3 @@ export function simulateParsed(input: EngineInput): SimulationResult {
 export function simulateTrip(input: EngineInputDraft): SimulationResult {
   return simulateParsed(engineInputSchema.parse(input));
 }
-

@@ -51,7 +51,7 @@ export function horizonAt(horizonDeg: readonly number[], azimuthDeg: number): nu
   const n = horizonDeg.length;
   if (n === 0) return 0;
   const width = 360 / n;
-  const idx = Math.floor((((azimuthDeg + width / 2) % 360) + 360) % 360 / width) % n;
+  const idx = Math.floor(((((azimuthDeg + width / 2) % 360) + 360) % 360) / width) % n;
   return horizonDeg[idx] ?? 0;
 }
 

@@ -23,7 +23,16 @@ export type SolarSeries = {
   poaWm2: Float64Array;
 };
 
-type ArrayConst = { ratedW: number; tilted: boolean; iso: number; ground: number; noct: number; gamma: number; derate: number; convert: number };
+type ArrayConst = {
+  ratedW: number;
+  tilted: boolean;
+  iso: number;
+  ground: number;
+  noct: number;
+  gamma: number;
+  derate: number;
+  convert: number;
+};
 
 type Geometry = {
   m: number;
@@ -48,8 +57,14 @@ function arrayConstants(p: Prepared): { arrays: ArrayConst[]; capW: number } {
     const tilt = a.mounting === 'flat' ? 0 : a.tiltDeg;
     const convert = !ctrl ? 0 : ctrl.kind === 'mppt' ? ctrl.efficiency : pwmFactor(chargeV, a.vmpV);
     return {
-      ratedW: a.ratedW, tilted: tilt > 0, iso: (1 + Math.cos(tilt * RAD)) / 2, ground: (1 - Math.cos(tilt * RAD)) / 2,
-      noct: effectiveNoctC(a.noctC, a.fit), gamma: a.gammaPctPerC / 100, derate: a.derate, convert,
+      ratedW: a.ratedW,
+      tilted: tilt > 0,
+      iso: (1 + Math.cos(tilt * RAD)) / 2,
+      ground: (1 - Math.cos(tilt * RAD)) / 2,
+      noct: effectiveNoctC(a.noctC, a.fit),
+      gamma: a.gammaPctPerC / 100,
+      derate: a.derate,
+      convert,
     };
   });
   return { arrays, capW: ctrl ? controllerLimitW(ctrl, chargeV) : 0 };
@@ -64,14 +79,23 @@ function geometry(p: Prepared): Geometry {
   // One buffer for the per-sample columns; cos of the zenith comes from the precomputation (same numbers).
   const buf = new ArrayBuffer(8 * (ns + p.n + 2 * ns * m));
   const g: Geometry = {
-    m, arrays, capW, cosZ: p.cosZ, beamF: new Float64Array(buf, 0, ns), diffF: new Float64Array(buf, 8 * ns, p.n),
-    cosInc: new Float64Array(buf, 8 * (ns + p.n), ns * m), rb: new Float64Array(buf, 8 * (ns + p.n + ns * m), ns * m), planned: null,
+    m,
+    arrays,
+    capW,
+    cosZ: p.cosZ,
+    beamF: new Float64Array(buf, 0, ns),
+    diffF: new Float64Array(buf, 8 * ns, p.n),
+    cosInc: new Float64Array(buf, 8 * (ns + p.n), ns * m),
+    rb: new Float64Array(buf, 8 * (ns + p.n + ns * m), ns * m),
+    planned: null,
   };
   // cosIncidence (transposition.ts) term for term, with the panel's and the sun's sines and cosines taken once.
-  const panels = p.input.rig.solarArrays.map((a, j) => {
-    const b = (a.mounting === 'tilted' ? a.tiltDeg : 0) * RAD;
-    return { j, cosB: Math.cos(b), sinB: Math.sin(b), azimuthDeg: a.azimuthDeg };
-  }).filter((panel) => arrays[panel.j]?.tilted);
+  const panels = p.input.rig.solarArrays
+    .map((a, j) => {
+      const b = (a.mounting === 'tilted' ? a.tiltDeg : 0) * RAD;
+      return { j, cosB: Math.cos(b), sinB: Math.sin(b), azimuthDeg: a.azimuthDeg };
+    })
+    .filter((panel) => arrays[panel.j]?.tilted);
   const stopDiffuse = p.exposures.map((e) => diffuseFactor(e));
   // Above the highest obstruction the beam is never blocked, so beamFactor's sector look-up is only needed below it.
   const stopTop = p.exposures.map((e) => Math.max(...e.horizonDeg));
@@ -144,7 +168,12 @@ export function solarSeries(p: Prepared, skyShift: number): SolarSeries {
       // Erbs split (decomposition.ts, the diffuse fraction written out), then the site's shading of beam and diffuse.
       const kt = Math.min(2, ghiSky / (dniExtra * Math.max(cz, MIN_COS_ZENITH)));
       const low = 90 - (alts[k] ?? 0) > MAX_ZENITH_DEG;
-      const diffuseShare = kt <= 0.22 ? 1 - 0.09 * kt : kt <= 0.8 ? 0.9511 - 0.1604 * kt + 4.388 * kt ** 2 - 16.638 * kt ** 3 + 12.336 * kt ** 4 : 0.165;
+      const diffuseShare =
+        kt <= 0.22
+          ? 1 - 0.09 * kt
+          : kt <= 0.8
+            ? 0.9511 - 0.1604 * kt + 4.388 * kt ** 2 - 16.638 * kt ** 3 + 12.336 * kt ** 4
+            : 0.165;
       const dhiSky = low ? ghiSky : diffuseShare * ghiSky;
       const dniSky = low ? 0 : Math.max(0, (ghiSky - dhiSky) / cz);
       const dni = dniSky * (beamF[k] ?? 1);

@@ -74,7 +74,11 @@ export function sunPositionInto(utcMs: number, lat: number, lon: number, out: Fl
   const M = RAD * (357.52911 + t * (35999.05029 - t * 1537e-7));
   const sinM = Math.sin(M);
   const cosM = Math.cos(M);
-  const C = RAD * ((1.914602 - t * (0.004817 + t * 14e-6)) * sinM + (0.019993 - 101e-6 * t) * 2 * sinM * cosM + 289e-6 * sinM * (3 - 4 * sinM * sinM));
+  const C =
+    RAD *
+    ((1.914602 - t * (0.004817 + t * 14e-6)) * sinM +
+      (0.019993 - 101e-6 * t) * 2 * sinM * cosM +
+      289e-6 * sinM * (3 - 4 * sinM * sinM));
   const Om = RAD * (125.04 - 1934.136 * t);
   const L = L0 + C - RAD * (0.00569 + 0.00478 * Math.sin(Om));
   const e = RAD * (23.439291 - t * (0.0130042 + t * (16e-8 - t * 504e-9))) + RAD * 0.00256 * Math.cos(Om);
@@ -89,11 +93,15 @@ export function sunPositionInto(utcMs: number, lat: number, lon: number, out: Fl
 
 /** Cooper (1969) declination, degrees, for day of year n (Duffie & Beckman eq. 1.6.1a). */
 export function cooperDeclinationDeg(dayOfYear: number): number {
-  return 23.45 * Math.sin((360 * (284 + dayOfYear) / 365) * RAD);
+  return 23.45 * Math.sin(((360 * (284 + dayOfYear)) / 365) * RAD);
 }
 
 /** Sun zenith and azimuth (from north) from latitude, declination and solar hour angle (negative mornings). */
-export function sunFromHourAngle(latDeg: number, declDeg: number, hourAngleDeg: number): { zenithDeg: number; azimuthDeg: number } {
+export function sunFromHourAngle(
+  latDeg: number,
+  declDeg: number,
+  hourAngleDeg: number,
+): { zenithDeg: number; azimuthDeg: number } {
   const phi = latDeg * RAD;
   const d = declDeg * RAD;
   const w = hourAngleDeg * RAD;

@@ -23,7 +23,13 @@ export function buildSegments(trip: Trip): Segment[] {
     if (next && drive) {
       const nextMs = Date.parse(next.arriveAt);
       // Time on the road sits at the start of the gap; any rest is a roadside pause.
-      segs.push({ kind: 'drive', index: i, startMs: endMs, endMs: nextMs, roadEndMs: endMs + drive.hoursOnRoad * HOUR_MS });
+      segs.push({
+        kind: 'drive',
+        index: i,
+        startMs: endMs,
+        endMs: nextMs,
+        roadEndMs: endMs + drive.hoursOnRoad * HOUR_MS,
+      });
     }
   });
   return segs;
@@ -62,7 +68,15 @@ function formatterFor(zoneName: string): Intl.DateTimeFormat | null {
   if (dtf === undefined) {
     try {
       dtf = new Intl.DateTimeFormat('en-US', {
-        hour12: false, timeZone: zoneName, year: 'numeric', month: '2-digit', day: '2-digit', hour: '2-digit', minute: '2-digit', second: '2-digit', era: 'short',
+        hour12: false,
+        timeZone: zoneName,
+        year: 'numeric',
+        month: '2-digit',
+        day: '2-digit',
+        hour: '2-digit',
+        minute: '2-digit',
+        second: '2-digit',
+        era: 'short',
       });
     } catch {
       dtf = null;

@@ -18,7 +18,13 @@ export function groundReflected(ghi: number, reflectance: number, tiltDeg: numbe
 }
 
 export type HayDaviesInput = {
-  dhi: number; dni: number; dniExtra: number; zenithDeg: number; sunAzDeg: number; tiltDeg: number; surfaceAzDeg: number;
+  dhi: number;
+  dni: number;
+  dniExtra: number;
+  zenithDeg: number;
+  sunAzDeg: number;
+  tiltDeg: number;
+  surfaceAzDeg: number;
 };
 
 export function hayDaviesSkyDiffuse(i: HayDaviesInput): number {

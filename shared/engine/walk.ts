@@ -10,16 +10,41 @@ import { QUARTERS, type Prepared } from './prepare';
 import { vehicleChargeW } from './vehicle-charging';
 
 export const LEDGER_COLUMNS = [
-  'solarAvailableWh', 'solarUsedWh', 'solarWastedWh', 'acLoadWh', 'dcLoadWh', 'inverterLossWh', 'chargerLossWh',
-  'batteryLossWh', 'hookupWh', 'vehicleWh', 'generatorWh', 'generatorH', 'generatorFuel', 'propaneBurnedKg',
-  'batteryFlowWh', 'storedWh', 'socPct', 'energyShortWh', 'propaneLeftKg', 'coldBlocked',
+  'solarAvailableWh',
+  'solarUsedWh',
+  'solarWastedWh',
+  'acLoadWh',
+  'dcLoadWh',
+  'inverterLossWh',
+  'chargerLossWh',
+  'batteryLossWh',
+  'hookupWh',
+  'vehicleWh',
+  'generatorWh',
+  'generatorH',
+  'generatorFuel',
+  'propaneBurnedKg',
+  'batteryFlowWh',
+  'storedWh',
+  'socPct',
+  'energyShortWh',
+  'propaneLeftKg',
+  'coldBlocked',
 ] as const;
 export type LedgerColumn = (typeof LEDGER_COLUMNS)[number];
 export type LedgerColumns = Record<LedgerColumn, Float64Array>;
 
 export type GeneratorPlan =
   | { kind: 'none' }
-  | { kind: 'rule'; startBelow: number; stopAbove: number; ratedW: number; model: FuelModel; propane: boolean; fuelKind: 'propane' | 'petrol' | 'diesel' }
+  | {
+      kind: 'rule';
+      startBelow: number;
+      stopAbove: number;
+      ratedW: number;
+      model: FuelModel;
+      propane: boolean;
+      fuelKind: 'propane' | 'petrol' | 'diesel';
+    }
   | { kind: 'routine'; ratedW: number; model: FuelModel; propane: boolean; fuelKind: 'propane' | 'petrol' | 'diesel' };
 
 export type Scenario = {
@@ -53,17 +78,44 @@ export function newLedger(n: number): LedgerColumns {
   let k = 0;
   const col = (): Float64Array => new Float64Array(buf, 8 * n * k++, n);
   return {
-    solarAvailableWh: col(), solarUsedWh: col(), solarWastedWh: col(), acLoadWh: col(), dcLoadWh: col(), inverterLossWh: col(),
-    chargerLossWh: col(), batteryLossWh: col(), hookupWh: col(), vehicleWh: col(), generatorWh: col(), generatorH: col(),
-    generatorFuel: col(), propaneBurnedKg: col(), batteryFlowWh: col(), storedWh: col(), socPct: col(), energyShortWh: col(),
-    propaneLeftKg: col(), coldBlocked: col(),
+    solarAvailableWh: col(),
+    solarUsedWh: col(),
+    solarWastedWh: col(),
+    acLoadWh: col(),
+    dcLoadWh: col(),
+    inverterLossWh: col(),
+    chargerLossWh: col(),
+    batteryLossWh: col(),
+    hookupWh: col(),
+    vehicleWh: col(),
+    generatorWh: col(),
+    generatorH: col(),
+    generatorFuel: col(),
+    propaneBurnedKg: col(),
+    batteryFlowWh: col(),
+    storedWh: col(),
+    socPct: col(),
+    energyShortWh: col(),
+    propaneLeftKg: col(),
+    coldBlocked: col(),
   };
 }
 
 /** Mutable per-step flows, reused across steps to keep the loop free of allocations. */
 type Flow = {
-  solarUsed: number; vehicle: number; hookup: number; generator: number; acLoad: number; dcLoad: number;
-  invLoss: number; chgLoss: number; batLoss: number; short: number; flow: number; fuel: number; cold: number;
+  solarUsed: number;
+  vehicle: number;
+  hookup: number;
+  generator: number;
+  acLoad: number;
+  dcLoad: number;
+  invLoss: number;
+  chgLoss: number;
+  batLoss: number;
+  short: number;
+  flow: number;
+  fuel: number;
+  cold: number;
 };
 
 function zeroFlow(f: Flow): void {
@@ -75,15 +127,37 @@ function zeroFlow(f: Flow): void {
 type Acceptance = { dtH: number; rate: number; taperGain: number; tail: number };
 
 type Ctx = {
-  p: Prepared; chem: ChemistryPreset; cap: number; chargeV: number; nominalV: number; capacityAh: number;
-  invEff: number; invIdle: number; invAlways: boolean; hasInverter: boolean;
-  chgAmps: number; chgEff: number; vehW: number; heated: boolean; gen: GeneratorPlan;
+  p: Prepared;
+  chem: ChemistryPreset;
+  cap: number;
+  chargeV: number;
+  nominalV: number;
+  capacityAh: number;
+  invEff: number;
+  invIdle: number;
+  invAlways: boolean;
+  hasInverter: boolean;
+  chgAmps: number;
+  chgEff: number;
+  vehW: number;
+  heated: boolean;
+  gen: GeneratorPlan;
   // Constants of the helpers the step inlines (peukertFactor, acceptanceLimitShare, chargerDcW, generatorFuel),
   // each computed by the same expression the helper uses, so the arithmetic per step is unchanged.
-  i20: number; peukertExp: number; taperStart: number; chgCapW: number; genCapW: number; fuelPerKwh: number;
-  idleFuelKwhPerH: number; fuelKwhPerKwhOut: number; full: Acceptance; quarter: Acceptance; other: Acceptance;
+  i20: number;
+  peukertExp: number;
+  taperStart: number;
+  chgCapW: number;
+  genCapW: number;
+  fuelPerKwh: number;
+  idleFuelKwhPerH: number;
+  fuelKwhPerKwhOut: number;
+  full: Acceptance;
+  quarter: Acceptance;
+  other: Acceptance;
   /** The last Peukert current and factor: a step's quarters draw the same current, so the power is taken once. */
-  lastCurrentA: number; lastPeukert: number;
+  lastCurrentA: number;
+  lastPeukert: number;
 };
 
 function acceptance(chem: ChemistryPreset, dtH: number): Acceptance {
@@ -101,7 +175,16 @@ function acceptanceFor(c: Ctx, dtH: number): Acceptance {
 }
 
 /** One step of dtH hours with the generator on or off; returns the new stored energy, books flows into f. */
-function step(c: Ctx, i: number, dtH: number, stored: number, genOn: boolean, solarW: number, hookW: number, f: Flow): number {
+function step(
+  c: Ctx,
+  i: number,
+  dtH: number,
+  stored: number,
+  genOn: boolean,
+  solarW: number,
+  hookW: number,
+  f: Flow,
+): number {
   const p = c.p;
   const stepH = p.stepH[i] ?? 1;
   const acW = (p.acWh[i] ?? 0) / stepH;
@@ -122,10 +205,18 @@ function step(c: Ctx, i: number, dtH: number, stored: number, genOn: boolean, so
   const chgMax = c.chgAmps > 0 ? Math.max(0, Math.min(c.chgCapW, (hookSpare + genSpare) * c.chgEff)) : 0;
   const vehW = c.vehW * (p.onRoadShare[i] ?? 0);
   let demand = dcW + invDc;
-  const solarToLoad = Math.min(solarW, demand); demand -= solarToLoad;
-  const vehToLoad = Math.min(vehW, demand); demand -= vehToLoad;
-  const chgToLoad = Math.min(chgMax, demand); demand -= chgToLoad;
-  let solarToBat = 0, vehToBat = 0, chgToBat = 0, batLoss = 0, short = unserved * dtH, flow = 0;
+  const solarToLoad = Math.min(solarW, demand);
+  demand -= solarToLoad;
+  const vehToLoad = Math.min(vehW, demand);
+  demand -= vehToLoad;
+  const chgToLoad = Math.min(chgMax, demand);
+  demand -= chgToLoad;
+  let solarToBat = 0,
+    vehToBat = 0,
+    chgToBat = 0,
+    batLoss = 0,
+    short = unserved * dtH,
+    flow = 0;
   let next = stored;
   if (demand > 0) {
     const need = demand * dtH;
@@ -140,8 +231,17 @@ function step(c: Ctx, i: number, dtH: number, stored: number, genOn: boolean, so
       peukert = c.lastPeukert;
     }
     const removal = (need / c.chem.dischargeEfficiency) * peukert;
-    if (removal <= stored) { next = stored - removal; batLoss = removal - need; flow = -need; }
-    else { const delivered = need * (stored / removal); short += need - delivered; batLoss = stored - delivered; flow = -delivered; next = 0; }
+    if (removal <= stored) {
+      next = stored - removal;
+      batLoss = removal - need;
+      flow = -need;
+    } else {
+      const delivered = need * (stored / removal);
+      short += need - delivered;
+      batLoss = stored - delivered;
+      flow = -delivered;
+      next = 0;
+    }
   } else {
     const soc = stored / c.cap;
     // chargeBlockedByCold and acceptanceLimitShare in battery.ts
@@ -149,12 +249,17 @@ function step(c: Ctx, i: number, dtH: number, stored: number, genOn: boolean, so
     let share = 0;
     if (!cold) {
       const acc = acceptanceFor(c, dtH);
-      share = soc < c.taperStart ? Math.max(0, Math.min(acc.rate, c.taperStart - soc + acc.taperGain)) : Math.max(0, (1 - soc) * acc.tail);
+      share =
+        soc < c.taperStart
+          ? Math.max(0, Math.min(acc.rate, c.taperStart - soc + acc.taperGain))
+          : Math.max(0, (1 - soc) * acc.tail);
     }
     const limitIn = cold ? 0 : (share * c.cap) / c.chem.chargeEfficiency;
     let room = limitIn;
-    solarToBat = Math.min((solarW - solarToLoad) * dtH, room); room -= solarToBat;
-    vehToBat = Math.min((vehW - vehToLoad) * dtH, room); room -= vehToBat;
+    solarToBat = Math.min((solarW - solarToLoad) * dtH, room);
+    room -= solarToBat;
+    vehToBat = Math.min((vehW - vehToLoad) * dtH, room);
+    room -= vehToBat;
     chgToBat = Math.min((chgMax - chgToLoad) * dtH, room);
     flow = solarToBat + vehToBat + chgToBat;
     batLoss = flow * (1 - c.chem.chargeEfficiency);
@@ -177,7 +282,8 @@ function step(c: Ctx, i: number, dtH: number, stored: number, genOn: boolean, so
   f.short += short;
   f.flow += flow;
   // generatorFuel in generator.ts
-  if (genOn && c.gen.kind !== 'none') f.fuel += (c.idleFuelKwhPerH * dtH + c.fuelKwhPerKwhOut * (genOut / 1000)) / c.fuelPerKwh;
+  if (genOn && c.gen.kind !== 'none')
+    f.fuel += (c.idleFuelKwhPerH * dtH + c.fuelKwhPerKwhOut * (genOut / 1000)) / c.fuelPerKwh;
   return next;
 }
 
@@ -189,23 +295,50 @@ function context(p: Prepared, s: Scenario): Ctx {
   const chgAmps = rig.shoreCharger?.amps ?? 0;
   const gen = s.generator;
   return {
-    p, chem, cap: s.capacityWh, chargeV, nominalV: rig.battery.nominalV,
-    capacityAh, invEff: rig.inverter?.efficiency ?? 1, invIdle: rig.inverter?.idleW ?? 0,
-    invAlways: rig.inverter?.mode === 'always', hasInverter: rig.inverter !== null,
-    chgAmps, chgEff: rig.shoreCharger?.efficiency ?? 1,
-    vehW: rig.vehicleCharger ? vehicleChargeW(rig.vehicleCharger.kind, rig.vehicleCharger.amps, rig.battery.nominalV * chem.chargeVoltageRatio) : 0,
-    heated: rig.battery.heatedSpace, gen,
-    i20: capacityAh / 20, peukertExp: chem.peukertK - 1, taperStart: chem.taperStartSoc, chgCapW: chgAmps * chargeV,
+    p,
+    chem,
+    cap: s.capacityWh,
+    chargeV,
+    nominalV: rig.battery.nominalV,
+    capacityAh,
+    invEff: rig.inverter?.efficiency ?? 1,
+    invIdle: rig.inverter?.idleW ?? 0,
+    invAlways: rig.inverter?.mode === 'always',
+    hasInverter: rig.inverter !== null,
+    chgAmps,
+    chgEff: rig.shoreCharger?.efficiency ?? 1,
+    vehW: rig.vehicleCharger
+      ? vehicleChargeW(rig.vehicleCharger.kind, rig.vehicleCharger.amps, rig.battery.nominalV * chem.chargeVoltageRatio)
+      : 0,
+    heated: rig.battery.heatedSpace,
+    gen,
+    i20: capacityAh / 20,
+    peukertExp: chem.peukertK - 1,
+    taperStart: chem.taperStartSoc,
+    chgCapW: chgAmps * chargeV,
     genCapW: gen.kind !== 'none' ? gen.ratedW * CONTINUOUS_SHARE : 0,
     fuelPerKwh: gen.kind !== 'none' ? kwhPerFuelUnit(gen.fuelKind) : 1,
     idleFuelKwhPerH: gen.kind !== 'none' ? gen.model.idleFuelKwhPerH : 0,
     fuelKwhPerKwhOut: gen.kind !== 'none' ? gen.model.fuelKwhPerKwhOut : 0,
-    full: acceptance(chem, 1), quarter: acceptance(chem, 1 / QUARTERS), other: acceptance(chem, Number.NaN),
-    lastCurrentA: Number.NaN, lastPeukert: 1,
+    full: acceptance(chem, 1),
+    quarter: acceptance(chem, 1 / QUARTERS),
+    other: acceptance(chem, Number.NaN),
+    lastCurrentA: Number.NaN,
+    lastPeukert: 1,
   };
 }
 
-function writeLedger(l: LedgerColumns, i: number, f: Flow, solarAvailWh: number, genH: number, propaneKg: number, stored: number, cap: number, propaneLeft: number): void {
+function writeLedger(
+  l: LedgerColumns,
+  i: number,
+  f: Flow,
+  solarAvailWh: number,
+  genH: number,
+  propaneKg: number,
+  stored: number,
+  cap: number,
+  propaneLeft: number,
+): void {
   l.solarAvailableWh[i] = solarAvailWh;
   l.solarUsedWh[i] = f.solarUsed;
   l.solarWastedWh[i] = Math.max(0, solarAvailWh - f.solarUsed);
@@ -231,7 +364,21 @@ function writeLedger(l: LedgerColumns, i: number, f: Flow, solarAvailWh: number,
 export function walk(p: Prepared, s: Scenario, ledger: LedgerColumns | null): WalkResult {
   const c = context(p, s);
   const rig = p.input.rig;
-  const f: Flow = { solarUsed: 0, vehicle: 0, hookup: 0, generator: 0, acLoad: 0, dcLoad: 0, invLoss: 0, chgLoss: 0, batLoss: 0, short: 0, flow: 0, fuel: 0, cold: 0 };
+  const f: Flow = {
+    solarUsed: 0,
+    vehicle: 0,
+    hookup: 0,
+    generator: 0,
+    acLoad: 0,
+    dcLoad: 0,
+    invLoss: 0,
+    chgLoss: 0,
+    batLoss: 0,
+    short: 0,
+    flow: 0,
+    fuel: 0,
+    cold: 0,
+  };
   const socPct = new Float64Array(p.n);
   let stored = (rig.battery.initialSocPct / 100) * c.cap;
   let propane = rig.propaneTanks.reduce((sum, t) => sum + (t.propaneKg * t.fillPct) / 100, 0);
@@ -259,10 +406,16 @@ export function walk(p: Prepared, s: Scenario, ledger: LedgerColumns | null): Wa
         genRunning = decideGenerator(c.gen, allowed, genRunning, stored / c.cap);
         if (genRunning) genH += q;
         stored = step(c, i, q, stored, genRunning, solarW, hookW, f);
-        if (stored / c.cap < lowest) { lowest = stored / c.cap; lowestIndex = i; }
+        if (stored / c.cap < lowest) {
+          lowest = stored / c.cap;
+          lowestIndex = i;
+        }
       }
     }
-    if (stored / c.cap < lowest) { lowest = stored / c.cap; lowestIndex = i; }
+    if (stored / c.cap < lowest) {
+      lowest = stored / c.cap;
+      lowestIndex = i;
+    }
     const heatKg = (p.heatWh[i] ?? 0) / 1000 / propaneKwhPerKg; // propaneKgFromHeatWh in fuel.ts
     const genKg = c.gen.kind !== 'none' && c.gen.propane ? f.fuel : 0;
     propane = Math.max(0, propane - heatKg - genKg);

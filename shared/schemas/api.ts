@@ -75,14 +75,14 @@ export const createTripRequestSchema = tripFieldsSchema
     ]),
   })
   .strict()
-  .refine((t) => t.endDate >= t.startDate, { message: 'The trip must end on or after its first day.', path: ['endDate'] });
+  .refine((t) => t.endDate >= t.startDate, {
+    message: 'The trip must end on or after its first day.',
+    path: ['endDate'],
+  });
 export type CreateTripRequest = z.input<typeof createTripRequestSchema>;
 
 // No defaults here: a field left out of an update stays as it is.
-export const updateTripRequestSchema = tripFieldsSchema
-  .partial()
-  .extend({ version: versionSchema })
-  .strict();
+export const updateTripRequestSchema = tripFieldsSchema.partial().extend({ version: versionSchema }).strict();
 export type UpdateTripRequest = z.input<typeof updateTripRequestSchema>;
 
 export const createRigRequestSchema = z.object({ rig: rigSchema }).strict();
@@ -95,7 +95,9 @@ export const createStopRequestSchema = z.object({ stop: stopSchema, notes: z.str
 export const updateStopRequestSchema = z
   .object({ version: versionSchema, stop: stopSchema, notes: z.string().max(4000).optional() })
   .strict();
-export const reorderStopsRequestSchema = z.object({ tripVersion: versionSchema, stopIds: z.array(idSchema).min(1).max(60) }).strict();
+export const reorderStopsRequestSchema = z
+  .object({ tripVersion: versionSchema, stopIds: z.array(idSchema).min(1).max(60) })
+  .strict();
 
 export const updateDriveRequestSchema = z.object({ version: versionSchema, drive: driveSchema }).strict();
 
@@ -104,7 +106,11 @@ export const createApplianceRequestSchema = z
   .strict();
 /** caretakerUserId left out: kept as it is; null clears it. */
 export const updateApplianceRequestSchema = z
-  .object({ version: versionSchema, appliance: applianceFieldsSchema, caretakerUserId: z.string().nullable().optional() })
+  .object({
+    version: versionSchema,
+    appliance: applianceFieldsSchema,
+    caretakerUserId: z.string().nullable().optional(),
+  })
   .strict();
 export const updateScheduleRequestSchema = z.object({ version: versionSchema, schedule: scheduleSchema }).strict();
 

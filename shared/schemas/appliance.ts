@@ -22,18 +22,18 @@ export const scheduleSchema = z.discriminatedUnion('kind', [
 export type Schedule = z.infer<typeof scheduleSchema>;
 
 const applianceShape = {
-    name: z.string().min(1).max(80),
-    /** ac: through the inverter or hookup; dc: straight off the battery; fuel: burns propane, runningW is its fan/controls on DC. */
-    circuit: circuitSchema,
-    quantity: z.number().int().min(1).max(50).default(1),
-    runningW: z.number().min(0).max(10_000),
-    standbyW: z.number().min(0).max(500).default(0),
-    /** Share of the scheduled time the appliance actually draws running watts (a fridge compressor cycles). */
-    dutyCycle: fractionSchema.default(1),
-    surgeW: z.number().min(0).max(30_000).optional(),
-    /** fuel circuit only: propane heat input while running, W (HHV). */
-    heatInputW: z.number().min(0).max(40_000).default(0),
-    schedule: scheduleSchema,
+  name: z.string().min(1).max(80),
+  /** ac: through the inverter or hookup; dc: straight off the battery; fuel: burns propane, runningW is its fan/controls on DC. */
+  circuit: circuitSchema,
+  quantity: z.number().int().min(1).max(50).default(1),
+  runningW: z.number().min(0).max(10_000),
+  standbyW: z.number().min(0).max(500).default(0),
+  /** Share of the scheduled time the appliance actually draws running watts (a fridge compressor cycles). */
+  dutyCycle: fractionSchema.default(1),
+  surgeW: z.number().min(0).max(30_000).optional(),
+  /** fuel circuit only: propane heat input while running, W (HHV). */
+  heatInputW: z.number().min(0).max(40_000).default(0),
+  schedule: scheduleSchema,
 };
 
 const heatInputOnlyForFuel = {
@@ -42,7 +42,9 @@ const heatInputOnlyForFuel = {
 };
 
 /** An appliance's fields without its id (the server assigns ids; forms edit these). */
-export const applianceFieldsSchema = z.object(applianceShape).refine(heatInputOnlyForFuel.check, heatInputOnlyForFuel.params);
+export const applianceFieldsSchema = z
+  .object(applianceShape)
+  .refine(heatInputOnlyForFuel.check, heatInputOnlyForFuel.params);
 export type ApplianceFields = z.infer<typeof applianceFieldsSchema>;
 
 export const applianceSchema = z

@@ -25,7 +25,9 @@ function isValidZone(zone: string): boolean {
   return valid;
 }
 
-export const timeZoneSchema = z.string().refine(isValidZone, { message: 'Use an IANA time zone such as Europe/London' });
+export const timeZoneSchema = z
+  .string()
+  .refine(isValidZone, { message: 'Use an IANA time zone such as Europe/London' });
 
 export const localHourSchema = z.number().int().min(0).max(24);
 

@@ -15,7 +15,8 @@ export const engineInputSchema = z
   .superRefine((input, ctx) => {
     const seen = new Set<string>();
     input.appliances.forEach((a, i) => {
-      if (seen.has(a.id)) ctx.addIssue({ code: 'custom', path: ['appliances', i, 'id'], message: `Duplicate appliance id ${a.id}` });
+      if (seen.has(a.id))
+        ctx.addIssue({ code: 'custom', path: ['appliances', i, 'id'], message: `Duplicate appliance id ${a.id}` });
       seen.add(a.id);
     });
   });

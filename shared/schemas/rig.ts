@@ -33,7 +33,10 @@ export const solarArraySchema = z
     vmpV: z.number().positive().max(200).default(18),
     derate: fractionSchema.default(0.86),
   })
-  .refine((a) => a.mounting === 'tilted' || a.tiltDeg === 0, { message: 'A flat array has tiltDeg 0', path: ['tiltDeg'] });
+  .refine((a) => a.mounting === 'tilted' || a.tiltDeg === 0, {
+    message: 'A flat array has tiltDeg 0',
+    path: ['tiltDeg'],
+  });
 export type SolarArray = z.infer<typeof solarArraySchema>;
 
 export const controllerSchema = z.object({
@@ -69,7 +72,11 @@ export const fuelKindSchema = z.enum(['propane', 'petrol', 'diesel']);
 export type FuelKind = z.infer<typeof fuelKindSchema>;
 
 export const generatorModeSchema = z.discriminatedUnion('kind', [
-  z.object({ kind: z.literal('rule'), startBelowSocPct: percentSchema.default(40), stopAboveSocPct: percentSchema.default(90) }),
+  z.object({
+    kind: z.literal('rule'),
+    startBelowSocPct: percentSchema.default(40),
+    stopAboveSocPct: percentSchema.default(90),
+  }),
   z.object({ kind: z.literal('routine'), windows: z.array(routineWindowSchema).min(1) }),
   z.object({ kind: z.literal('off') }),
 ]);
@@ -114,6 +121,9 @@ export const rigSchema = z
     generator: generatorSchema.nullable().default(null),
     propaneTanks: z.array(propaneTankSchema).max(8).default([]),
   })
-  .refine((r) => r.solarArrays.length === 0 || r.controller !== null, { message: 'Solar arrays need a charge controller', path: ['controller'] });
+  .refine((r) => r.solarArrays.length === 0 || r.controller !== null, {
+    message: 'Solar arrays need a charge controller',
+    path: ['controller'],
+  });
 export type Rig = z.infer<typeof rigSchema>;
 export type RigInput = z.input<typeof rigSchema>;

@@ -93,7 +93,9 @@ export const clubSharedTripSchema = z.object({
 export const clubDetailSchema = z.object({
   club: clubSummarySchema,
   members: z.array(z.object({ userId: z.string(), name: z.string(), role: z.enum(['organiser', 'member']) })),
-  pendingInvites: z.array(z.object({ id: z.string(), email: z.string(), name: z.string().nullable(), expiresAt: z.string() })),
+  pendingInvites: z.array(
+    z.object({ id: z.string(), email: z.string(), name: z.string().nullable(), expiresAt: z.string() }),
+  ),
   trips: z.array(clubSharedTripSchema),
 });
 export type ClubDetail = z.infer<typeof clubDetailSchema>;

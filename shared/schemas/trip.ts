@@ -51,7 +51,10 @@ export const stopSchema = z
     highC: z.number().min(-50).max(60),
   })
   .refine((s) => s.highC >= s.lowC, { message: 'highC must be at or above lowC', path: ['highC'] })
-  .refine((s) => Date.parse(s.departAt) > Date.parse(s.arriveAt), { message: 'departAt must be after arriveAt', path: ['departAt'] });
+  .refine((s) => Date.parse(s.departAt) > Date.parse(s.arriveAt), {
+    message: 'departAt must be after arriveAt',
+    path: ['departAt'],
+  });
 export type Stop = z.infer<typeof stopSchema>;
 export type StopInput = z.input<typeof stopSchema>;
 
@@ -72,23 +75,37 @@ export const tripSchema = z
   })
   .superRefine((trip, ctx) => {
     if (trip.drives.length !== trip.stops.length - 1) {
-      ctx.addIssue({ code: 'custom', path: ['drives'], message: `Expected ${trip.stops.length - 1} drives (one between each pair of stops)` });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['drives'],
+        message: `Expected ${trip.stops.length - 1} drives (one between each pair of stops)`,
+      });
     }
     trip.stops.forEach((stop, i) => {
       const next = trip.stops[i + 1];
       if (!next) return;
       const gapH = (Date.parse(next.arriveAt) - Date.parse(stop.departAt)) / 3_600_000;
-      if (gapH < 0) ctx.addIssue({ code: 'custom', path: ['stops', i + 1, 'arriveAt'], message: 'Arrives before the previous stop is left' });
+      if (gapH < 0)
+        ctx.addIssue({
+          code: 'custom',
+          path: ['stops', i + 1, 'arriveAt'],
+          message: 'Arrives before the previous stop is left',
+        });
       const drive = trip.drives[i];
       if (drive && drive.hoursOnRoad > gapH + 1e-9) {
-        ctx.addIssue({ code: 'custom', path: ['drives', i, 'hoursOnRoad'], message: `Longer than the ${gapH.toFixed(1)} h between the stops` });
+        ctx.addIssue({
+          code: 'custom',
+          path: ['drives', i, 'hoursOnRoad'],
+          message: `Longer than the ${gapH.toFixed(1)} h between the stops`,
+        });
       }
     });
     const first = trip.stops[0];
     const last = trip.stops[trip.stops.length - 1];
     if (first && last) {
       const days = (Date.parse(last.departAt) - Date.parse(first.arriveAt)) / 86_400_000;
-      if (days > MAX_TRIP_DAYS) ctx.addIssue({ code: 'custom', path: ['stops'], message: `A trip may last at most ${MAX_TRIP_DAYS} days` });
+      if (days > MAX_TRIP_DAYS)
+        ctx.addIssue({ code: 'custom', path: ['stops'], message: `A trip may last at most ${MAX_TRIP_DAYS} days` });
     }
   });
 export type Trip = z.infer<typeof tripSchema>;

@@ -28,7 +28,8 @@ function readError(status: number, body: unknown): ApiError {
   const error = (body as ErrorShape | undefined)?.error;
   const code = typeof error?.code === 'string' ? error.code : 'http_error';
   const message = typeof error?.message === 'string' ? error.message : `The server answered ${status}.`;
-  const fields = error?.fields && typeof error.fields === 'object' ? (error.fields as Record<string, string[]>) : undefined;
+  const fields =
+    error?.fields && typeof error.fields === 'object' ? (error.fields as Record<string, string[]>) : undefined;
   return new ApiError(status, code, message, fields, body);
 }
 
@@ -40,7 +41,11 @@ export async function apiFetch<T>(path: string, init: RequestInit & { json?: unk
     response = await fetch(`${API_BASE_URL}${path}`, {
       credentials: 'include',
       ...rest,
-      headers: { Accept: 'application/json', ...(json !== undefined ? { 'Content-Type': 'application/json' } : {}), ...headers },
+      headers: {
+        Accept: 'application/json',
+        ...(json !== undefined ? { 'Content-Type': 'application/json' } : {}),
+        ...headers,
+      },
       body: json !== undefined ? JSON.stringify(json) : rest.body,
     });
   } catch {

@@ -6,14 +6,22 @@ import { invalidateTrip } from './trips';
 
 const base = (tripId: string) => `/api/trips/${encodeURIComponent(tripId)}/appliances`;
 
-export type ApplianceSave = { applianceId: string | null; version?: number; appliance: ApplianceFields; caretakerUserId: string | null };
+export type ApplianceSave = {
+  applianceId: string | null;
+  version?: number;
+  appliance: ApplianceFields;
+  caretakerUserId: string | null;
+};
 
 export function useApplianceSaveMutation(tripId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: ({ applianceId, version, appliance, caretakerUserId }: ApplianceSave) =>
       applianceId
-        ? apiFetch<ApplianceRecord>(`${base(tripId)}/${encodeURIComponent(applianceId)}`, { method: 'PATCH', json: { version, appliance, caretakerUserId } })
+        ? apiFetch<ApplianceRecord>(`${base(tripId)}/${encodeURIComponent(applianceId)}`, {
+            method: 'PATCH',
+            json: { version, appliance, caretakerUserId },
+          })
         : apiFetch<ApplianceRecord>(base(tripId), { method: 'POST', json: { appliance, caretakerUserId } }),
     onSuccess: () => invalidateTrip(queryClient, tripId),
   });
@@ -22,7 +30,8 @@ export function useApplianceSaveMutation(tripId: string) {
 export function useApplianceDeleteMutation(tripId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (applianceId: string) => apiFetch<void>(`${base(tripId)}/${encodeURIComponent(applianceId)}`, { method: 'DELETE' }),
+    mutationFn: (applianceId: string) =>
+      apiFetch<void>(`${base(tripId)}/${encodeURIComponent(applianceId)}`, { method: 'DELETE' }),
     onSuccess: () => invalidateTrip(queryClient, tripId),
   });
 }
@@ -31,7 +40,10 @@ export function useScheduleSaveMutation(tripId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: ({ applianceId, version, schedule }: { applianceId: string; version: number; schedule: Schedule }) =>
-      apiFetch<ApplianceRecord>(`${base(tripId)}/${encodeURIComponent(applianceId)}/schedule`, { method: 'PUT', json: { version, schedule } }),
+      apiFetch<ApplianceRecord>(`${base(tripId)}/${encodeURIComponent(applianceId)}/schedule`, {
+        method: 'PUT',
+        json: { version, schedule },
+      }),
     onSuccess: () => invalidateTrip(queryClient, tripId),
   });
 }

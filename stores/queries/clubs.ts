@@ -16,11 +16,19 @@ export type ClubInviteResult = ClubInviteReport & { alreadyMembers: number };
 const clubPath = (clubId: string) => `/api/clubs/${encodeURIComponent(clubId)}`;
 
 export function useClubsQuery() {
-  return useQuery({ queryKey: clubKeys.list(), queryFn: () => apiFetch<{ clubs: ClubSummary[] }>('/api/clubs'), staleTime: STALE.SECONDS.THIRTY });
+  return useQuery({
+    queryKey: clubKeys.list(),
+    queryFn: () => apiFetch<{ clubs: ClubSummary[] }>('/api/clubs'),
+    staleTime: STALE.SECONDS.THIRTY,
+  });
 }
 
 export function useClubQuery(clubId: string) {
-  return useQuery({ queryKey: clubKeys.detail(clubId), queryFn: () => apiFetch<ClubDetail>(clubPath(clubId)), staleTime: STALE.SECONDS.THIRTY });
+  return useQuery({
+    queryKey: clubKeys.detail(clubId),
+    queryFn: () => apiFetch<ClubDetail>(clubPath(clubId)),
+    staleTime: STALE.SECONDS.THIRTY,
+  });
 }
 
 export function useClubCreateMutation() {
@@ -34,7 +42,8 @@ export function useClubCreateMutation() {
 export function useClubInviteMutation(clubId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (body: ClubInviteRequest) => apiFetch<ClubInviteResult>(`${clubPath(clubId)}/invites`, { method: 'POST', json: body }),
+    mutationFn: (body: ClubInviteRequest) =>
+      apiFetch<ClubInviteResult>(`${clubPath(clubId)}/invites`, { method: 'POST', json: body }),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: clubKeys.detail(clubId) }),
   });
 }
@@ -42,7 +51,8 @@ export function useClubInviteMutation(clubId: string) {
 export function useClubInviteRevokeMutation(clubId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (inviteId: string) => apiFetch<void>(`${clubPath(clubId)}/invites/${encodeURIComponent(inviteId)}`, { method: 'DELETE' }),
+    mutationFn: (inviteId: string) =>
+      apiFetch<void>(`${clubPath(clubId)}/invites/${encodeURIComponent(inviteId)}`, { method: 'DELETE' }),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: clubKeys.detail(clubId) }),
   });
 }
@@ -59,7 +69,8 @@ export function useShareTripToClubMutation() {
 export function useUnshareTripMutation(clubId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (tripId: string) => apiFetch<void>(`${clubPath(clubId)}/trips/${encodeURIComponent(tripId)}`, { method: 'DELETE' }),
+    mutationFn: (tripId: string) =>
+      apiFetch<void>(`${clubPath(clubId)}/trips/${encodeURIComponent(tripId)}`, { method: 'DELETE' }),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: clubKeys.root }),
   });
 }
@@ -72,7 +83,10 @@ export function useCopyOntoRigMutation() {
       apiFetch<TripDetail>(`/api/trips/${encodeURIComponent(tripId)}/copy`, { method: 'POST', json: body }),
     onSuccess: (detail) => {
       queryClient.setQueryData(tripKeys.detail(detail.trip.id), detail);
-      return Promise.all([queryClient.invalidateQueries({ queryKey: tripKeys.list() }), queryClient.invalidateQueries({ queryKey: clubKeys.root })]);
+      return Promise.all([
+        queryClient.invalidateQueries({ queryKey: tripKeys.list() }),
+        queryClient.invalidateQueries({ queryKey: clubKeys.root }),
+      ]);
     },
   });
 }

@@ -29,7 +29,8 @@ export function useInviteAcceptMutation(kind: InviteKind, token: string) {
   return useMutation({
     mutationFn: async (): Promise<AcceptResult> => {
       const path = `${basePath[kind]}/${encodeURIComponent(token)}/accept`;
-      if (kind === 'trip') return { kind, tripId: (await apiFetch<{ tripId: string }>(path, { method: 'POST' })).tripId };
+      if (kind === 'trip')
+        return { kind, tripId: (await apiFetch<{ tripId: string }>(path, { method: 'POST' })).tripId };
       return { kind, clubId: (await apiFetch<{ clubId: string }>(path, { method: 'POST' })).clubId };
     },
     onSuccess: () =>

@@ -17,7 +17,11 @@ const membersPath = (tripId: string) => `/api/trips/${encodeURIComponent(tripId)
 const invitesPath = (tripId: string) => `/api/trips/${encodeURIComponent(tripId)}/invites`;
 
 export function useTripMembersQuery(tripId: string) {
-  return useQuery({ queryKey: memberKeys.members(tripId), queryFn: () => apiFetch<MembersResponse>(membersPath(tripId)), staleTime: STALE.SECONDS.THIRTY });
+  return useQuery({
+    queryKey: memberKeys.members(tripId),
+    queryFn: () => apiFetch<MembersResponse>(membersPath(tripId)),
+    staleTime: STALE.SECONDS.THIRTY,
+  });
 }
 
 /** Only the owner and planners may list pending invites; everyone else never asks. */
@@ -44,7 +48,10 @@ export function useMemberRoleMutation(tripId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: ({ userId, role }: { userId: string; role: Exclude<Role, 'owner'> }) =>
-      apiFetch<MembersResponse>(`${membersPath(tripId)}/${encodeURIComponent(userId)}`, { method: 'PATCH', json: { role } }),
+      apiFetch<MembersResponse>(`${membersPath(tripId)}/${encodeURIComponent(userId)}`, {
+        method: 'PATCH',
+        json: { role },
+      }),
     onSuccess: (data) => afterMembersChange(queryClient, tripId, data.members),
   });
 }
@@ -52,7 +59,8 @@ export function useMemberRoleMutation(tripId: string) {
 export function useMemberRemoveMutation(tripId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (userId: string) => apiFetch<void>(`${membersPath(tripId)}/${encodeURIComponent(userId)}`, { method: 'DELETE' }),
+    mutationFn: (userId: string) =>
+      apiFetch<void>(`${membersPath(tripId)}/${encodeURIComponent(userId)}`, { method: 'DELETE' }),
     onSuccess: () => afterMembersChange(queryClient, tripId),
   });
 }
@@ -60,7 +68,8 @@ export function useMemberRemoveMutation(tripId: string) {
 export function useHandOverMutation(tripId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (userId: string) => apiFetch<MembersResponse>(`${membersPath(tripId)}/hand-over`, { method: 'POST', json: { userId } }),
+    mutationFn: (userId: string) =>
+      apiFetch<MembersResponse>(`${membersPath(tripId)}/hand-over`, { method: 'POST', json: { userId } }),
     onSuccess: (data) => afterMembersChange(queryClient, tripId, data.members),
   });
 }
@@ -76,7 +85,8 @@ export function useInviteCreateMutation(tripId: string) {
 export function useInviteResendMutation(tripId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (inviteId: string) => apiFetch<unknown>(`${invitesPath(tripId)}/${encodeURIComponent(inviteId)}/resend`, { method: 'POST' }),
+    mutationFn: (inviteId: string) =>
+      apiFetch<unknown>(`${invitesPath(tripId)}/${encodeURIComponent(inviteId)}/resend`, { method: 'POST' }),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: memberKeys.invites(tripId) }),
   });
 }
@@ -84,7 +94,8 @@ export function useInviteResendMutation(tripId: string) {
 export function useInviteRevokeMutation(tripId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (inviteId: string) => apiFetch<void>(`${invitesPath(tripId)}/${encodeURIComponent(inviteId)}`, { method: 'DELETE' }),
+    mutationFn: (inviteId: string) =>
+      apiFetch<void>(`${invitesPath(tripId)}/${encodeURIComponent(inviteId)}`, { method: 'DELETE' }),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: memberKeys.invites(tripId) }),
   });
 }

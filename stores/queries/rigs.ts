@@ -14,12 +14,20 @@ export const rigKeys = {
 };
 
 export function useMyRigsQuery() {
-  return useQuery({ queryKey: rigKeys.mine(), queryFn: () => apiFetch<{ rigs: RigRecord[] }>('/api/rigs'), staleTime: STALE.MINUTES.ONE });
+  return useQuery({
+    queryKey: rigKeys.mine(),
+    queryFn: () => apiFetch<{ rigs: RigRecord[] }>('/api/rigs'),
+    staleTime: STALE.MINUTES.ONE,
+  });
 }
 
 export function useRigPresetsQuery() {
   // Presets ship with the server and do not change while the app runs.
-  return useQuery({ queryKey: rigKeys.presets(), queryFn: () => apiFetch<{ presets: RigPreset[] }>('/api/rig-presets'), staleTime: STALE.MINUTES.FIVE });
+  return useQuery({
+    queryKey: rigKeys.presets(),
+    queryFn: () => apiFetch<{ presets: RigPreset[] }>('/api/rig-presets'),
+    staleTime: STALE.MINUTES.FIVE,
+  });
 }
 
 const tripRig = (tripId: string) => `/api/trips/${encodeURIComponent(tripId)}/rig`;
@@ -27,7 +35,8 @@ const tripRig = (tripId: string) => `/api/trips/${encodeURIComponent(tripId)}/ri
 export function useTripRigSaveMutation(tripId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (body: { version: number; rig: RigInput }) => apiFetch<RigRecord>(tripRig(tripId), { method: 'PUT', json: body }),
+    mutationFn: (body: { version: number; rig: RigInput }) =>
+      apiFetch<RigRecord>(tripRig(tripId), { method: 'PUT', json: body }),
     onSuccess: () => invalidateTrip(queryClient, tripId),
   });
 }
@@ -35,7 +44,8 @@ export function useTripRigSaveMutation(tripId: string) {
 export function useTripRigCopyToMineMutation(tripId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (name: string) => apiFetch<{ rig: RigRecord }>(`${tripRig(tripId)}/save`, { method: 'POST', json: { name } }),
+    mutationFn: (name: string) =>
+      apiFetch<{ rig: RigRecord }>(`${tripRig(tripId)}/save`, { method: 'POST', json: { name } }),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: rigKeys.mine() }),
   });
 }
@@ -43,7 +53,8 @@ export function useTripRigCopyToMineMutation(tripId: string) {
 export function useTripRigReplaceMutation(tripId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (body: { version: number; rigId: string }) => apiFetch<RigRecord>(`${tripRig(tripId)}/replace`, { method: 'POST', json: body }),
+    mutationFn: (body: { version: number; rigId: string }) =>
+      apiFetch<RigRecord>(`${tripRig(tripId)}/replace`, { method: 'POST', json: body }),
     onSuccess: () => invalidateTrip(queryClient, tripId),
   });
 }

@@ -14,7 +14,10 @@ export function useStopSaveMutation(tripId: string) {
   return useMutation({
     mutationFn: ({ stopId, version, stop, notes }: StopSave) =>
       stopId
-        ? apiFetch<StopRecord>(`${base(tripId)}/stops/${encodeURIComponent(stopId)}`, { method: 'PATCH', json: { version, stop, notes } })
+        ? apiFetch<StopRecord>(`${base(tripId)}/stops/${encodeURIComponent(stopId)}`, {
+            method: 'PATCH',
+            json: { version, stop, notes },
+          })
         : apiFetch<StopRecord>(`${base(tripId)}/stops`, { method: 'POST', json: { stop, notes } }),
     onSuccess: () => invalidateTrip(queryClient, tripId),
   });
@@ -23,7 +26,8 @@ export function useStopSaveMutation(tripId: string) {
 export function useStopDeleteMutation(tripId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (stopId: string) => apiFetch<void>(`${base(tripId)}/stops/${encodeURIComponent(stopId)}`, { method: 'DELETE' }),
+    mutationFn: (stopId: string) =>
+      apiFetch<void>(`${base(tripId)}/stops/${encodeURIComponent(stopId)}`, { method: 'DELETE' }),
     onSuccess: () => invalidateTrip(queryClient, tripId),
   });
 }
@@ -41,7 +45,10 @@ export function useDriveSaveMutation(tripId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: ({ driveId, version, drive }: { driveId: string; version: number; drive: Drive }) =>
-      apiFetch<DriveRecord>(`${base(tripId)}/drives/${encodeURIComponent(driveId)}`, { method: 'PATCH', json: { version, drive } }),
+      apiFetch<DriveRecord>(`${base(tripId)}/drives/${encodeURIComponent(driveId)}`, {
+        method: 'PATCH',
+        json: { version, drive },
+      }),
     onSuccess: () => invalidateTrip(queryClient, tripId),
   });
 }

@@ -43,11 +43,14 @@ describe('flag fixes as edits', () => {
   const fixes = result.flags.flatMap((f) => f.fixes);
   const first = (kind: Fix['kind']) => fixes.find((f) => f.kind === kind);
 
-  it.each(['add-battery', 'add-hookup-night', 'add-generator-hours', 'larger-inverter'] as const)('when the fix is %s, then it becomes an edit', (kind) => {
-    const fix = first(kind);
-    expect(fix).toBeDefined();
-    if (fix) expect(editForFix(detail, fix, result.days)).not.toBeNull();
-  });
+  it.each(['add-battery', 'add-hookup-night', 'add-generator-hours', 'larger-inverter'] as const)(
+    'when the fix is %s, then it becomes an edit',
+    (kind) => {
+      const fix = first(kind);
+      expect(fix).toBeDefined();
+      if (fix) expect(editForFix(detail, fix, result.days)).not.toBeNull();
+    },
+  );
 
   it('when advice cannot be an edit (stagger, cabling), then no edit is offered', () => {
     for (const kind of ['stagger-appliances', 'check-cabling', 'move-appliance-to-drive'] as const) {
@@ -65,10 +68,11 @@ describe('flag fixes as edits', () => {
     expect(after.flags.map((f) => f.id)).not.toContain(flag?.id);
   });
 
-  it('when a generator fix names a stop, then the routine runs on that stop\'s days inside its hours', () => {
+  it("when a generator fix names a stop, then the routine runs on that stop's days inside its hours", () => {
     const fix = first('add-generator-hours');
     const edit = fix ? editForFix(detail, fix, result.days) : null;
-    if (edit?.kind !== 'rig' || edit.rig.generator?.mode?.kind !== 'routine') throw new Error('expected a generator routine');
+    if (edit?.kind !== 'rig' || edit.rig.generator?.mode?.kind !== 'routine')
+      throw new Error('expected a generator routine');
     const w = edit.rig.generator.mode.windows[0];
     expect(w?.days?.kind).toBe('trip-days');
     expect(w?.startHour).toBeGreaterThanOrEqual(Number(fix?.params.startHour));

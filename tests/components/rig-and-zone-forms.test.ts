@@ -1,5 +1,13 @@
 import { describe, expect, it } from 'vitest';
-import { FUEL_MODEL_START, generatorModeFor, newSolarArray, panelTemperature, percentOfFraction, perDegree, withMounting } from '@/components/rig/rig-form-values';
+import {
+  FUEL_MODEL_START,
+  generatorModeFor,
+  newSolarArray,
+  panelTemperature,
+  percentOfFraction,
+  perDegree,
+  withMounting,
+} from '@/components/rig/rig-form-values';
 import { allZones, filterZones, placeOf } from '@/components/route/zone-filter';
 import { fuelModelSchema, rigSchema, solarArraySchema } from '@/shared/schemas/rig';
 
@@ -38,7 +46,14 @@ describe('rig form figures', () => {
   it('when an array is added, then every field starts from the schema default', () => {
     const array = newSolarArray(200, 1);
     expect(array).toEqual(solarArraySchema.parse({ name: 'Array 2', ratedW: 200 }));
-    expect(array).toMatchObject({ fit: 'flush', noctC: 45, gammaPctPerC: -0.4, vmpV: 18, derate: 0.86, azimuthDeg: 180 });
+    expect(array).toMatchObject({
+      fit: 'flush',
+      noctC: 45,
+      gammaPctPerC: -0.4,
+      vmpV: 18,
+      derate: 0.86,
+      azimuthDeg: 180,
+    });
   });
 
   it('when an array is laid flat, then its tilt becomes 0 so the schema accepts it; tilted again, it starts at 30°', () => {
@@ -55,7 +70,11 @@ describe('rig form figures', () => {
     const routine = { kind: 'routine' as const, windows: [{ startHour: 9, minutes: 120 }] };
     expect(generatorModeFor('off', rule, undefined)).toEqual({ kind: 'off' });
     expect(generatorModeFor('rule', rule, undefined)).toEqual(rule);
-    expect(generatorModeFor('rule', { kind: 'off' }, undefined)).toEqual({ kind: 'rule', startBelowSocPct: 40, stopAboveSocPct: 90 });
+    expect(generatorModeFor('rule', { kind: 'off' }, undefined)).toEqual({
+      kind: 'rule',
+      startBelowSocPct: 40,
+      stopAboveSocPct: 90,
+    });
     expect(generatorModeFor('routine', { kind: 'off' }, routine)).toEqual(routine);
   });
 
@@ -63,14 +82,34 @@ describe('rig form figures', () => {
     const rig = rigSchema.parse({
       name: 'Full rig',
       battery: { chemistry: 'lifepo4', capacityAh: 200, nominalV: 12.8, heatedSpace: true, initialSocPct: 80 },
-      solarArrays: [{ ...withMounting(newSolarArray(400, 0), 'tilted'), azimuthDeg: 200, fit: 'racked', noctC: panelTemperature('us').store(111.2), derate: percentOfFraction.store(80) }],
+      solarArrays: [
+        {
+          ...withMounting(newSolarArray(400, 0), 'tilted'),
+          azimuthDeg: 200,
+          fit: 'racked',
+          noctC: panelTemperature('us').store(111.2),
+          derate: percentOfFraction.store(80),
+        },
+      ],
       controller: { kind: 'pwm', maxAmps: 30, efficiency: 0.95 },
       inverter: { ratedW: 2000, efficiency: 0.88, idleW: 14, mode: 'always' },
       shoreCharger: { amps: 20, efficiency: 0.85 },
       vehicleCharger: { kind: 'alternator', amps: 40 },
-      generator: { ratedW: 2200, fuel: 'diesel', mode: { kind: 'rule', startBelowSocPct: 35, stopAboveSocPct: 85 }, fuelModel: { ...FUEL_MODEL_START } },
+      generator: {
+        ratedW: 2200,
+        fuel: 'diesel',
+        mode: { kind: 'rule', startBelowSocPct: 35, stopAboveSocPct: 85 },
+        fuelModel: { ...FUEL_MODEL_START },
+      },
     });
-    expect(rig.solarArrays[0]).toMatchObject({ mounting: 'tilted', tiltDeg: 30, azimuthDeg: 200, fit: 'racked', noctC: 44, derate: 0.8 });
+    expect(rig.solarArrays[0]).toMatchObject({
+      mounting: 'tilted',
+      tiltDeg: 30,
+      azimuthDeg: 200,
+      fit: 'racked',
+      noctC: 44,
+      derate: 0.8,
+    });
     expect(rig.inverter).toEqual({ ratedW: 2000, efficiency: 0.88, idleW: 14, mode: 'always' });
     expect(rig.generator?.fuelModel).toEqual(FUEL_MODEL_START);
     expect(fuelModelSchema.safeParse(FUEL_MODEL_START).success).toBe(true);
@@ -79,7 +118,8 @@ describe('rig form figures', () => {
 
   it('when the generator would stop below where it starts, then the message lands on the stop field', () => {
     const result = rigSchema.safeParse({
-      name: 'R', battery: { chemistry: 'agm', capacityAh: 100, nominalV: 12 },
+      name: 'R',
+      battery: { chemistry: 'agm', capacityAh: 100, nominalV: 12 },
       generator: { ratedW: 2000, mode: { kind: 'rule', startBelowSocPct: 60, stopAboveSocPct: 50 } },
     });
     expect(result.success).toBe(false);
@@ -88,7 +128,15 @@ describe('rig form figures', () => {
 });
 
 describe('time zone search', () => {
-  const zones = ['America/Argentina/Buenos_Aires', 'America/New_York', 'America/Denver', 'Europe/London', 'Europe/Londonderry', 'Pacific/Auckland', 'UTC'];
+  const zones = [
+    'America/Argentina/Buenos_Aires',
+    'America/New_York',
+    'America/Denver',
+    'Europe/London',
+    'Europe/Londonderry',
+    'Pacific/Auckland',
+    'UTC',
+  ];
 
   it.each([
     ['new york', 'America/New_York'],
@@ -109,7 +157,10 @@ describe('time zone search', () => {
   });
 
   it('when more zones match than are shown, then the count of the rest is given', () => {
-    expect(filterZones(zones, 'america', 2)).toEqual({ zones: ['America/Argentina/Buenos_Aires', 'America/Denver'], more: 1 });
+    expect(filterZones(zones, 'america', 2)).toEqual({
+      zones: ['America/Argentina/Buenos_Aires', 'America/Denver'],
+      more: 1,
+    });
     expect(filterZones(zones, '', 3).more).toBe(4);
   });
 

@@ -1,12 +1,26 @@
 import { describe, expect, it } from 'vitest';
 import {
-  cellsFor, dailyWh, formatWindow, hoursOfWindow, paintRange, runsOf, setMinutes, toggleCell, windowsFromCells, type Cells,
+  cellsFor,
+  dailyWh,
+  formatWindow,
+  hoursOfWindow,
+  paintRange,
+  runsOf,
+  setMinutes,
+  toggleCell,
+  windowsFromCells,
+  type Cells,
 } from '@/components/loads/routine-cells';
 import type { RoutineWindow } from '@/shared/schemas/common';
 
 const all = { kind: 'all' } as const;
 const camp = { kind: 'day-type', dayType: 'camp' } as const;
-const win = (startHour: number, minutes: number, startMinute = 0, days: RoutineWindow['days'] = all): RoutineWindow => ({ days, startHour, startMinute, minutes });
+const win = (
+  startHour: number,
+  minutes: number,
+  startMinute = 0,
+  days: RoutineWindow['days'] = all,
+): RoutineWindow => ({ days, startHour, startMinute, minutes });
 const lit = (...hours: number[]): Cells => Array.from({ length: 24 }, (_, h) => hours.includes(h));
 
 describe('hoursOfWindow', () => {
@@ -26,7 +40,14 @@ describe('runsOf', () => {
   it.each([
     ['nothing lit', lit(), []],
     ['one run', lit(7, 8, 9), [[7, 3]]],
-    ['two runs', lit(7, 19, 20), [[7, 1], [19, 2]]],
+    [
+      'two runs',
+      lit(7, 19, 20),
+      [
+        [7, 1],
+        [19, 2],
+      ],
+    ],
     ['a run across midnight is one run', lit(22, 23, 0, 1), [[22, 4]]],
     ['every hour', lit(...Array.from({ length: 24 }, (_, h) => h)), [[0, 24]]],
   ])('when %s, then the runs are found', (_name, cells, runs) => {

@@ -11,8 +11,16 @@ export function demoDetail(key: keyof typeof DEMO_TRIPS, role: TripDetail['trip'
   const last = input.trip.stops[input.trip.stops.length - 1];
   return {
     trip: {
-      id: key, name: input.trip.name, startDate: (first?.arriveAt ?? '').slice(0, 10), endDate: (last?.departAt ?? '').slice(0, 10),
-      timeZone: first?.timeZone ?? 'UTC', version: 1, updatedAt: '2027-01-01T00:00:00Z', notes: '', ownerId: 'u1', role,
+      id: key,
+      name: input.trip.name,
+      startDate: (first?.arriveAt ?? '').slice(0, 10),
+      endDate: (last?.departAt ?? '').slice(0, 10),
+      timeZone: first?.timeZone ?? 'UTC',
+      version: 1,
+      updatedAt: '2027-01-01T00:00:00Z',
+      notes: '',
+      ownerId: 'u1',
+      role,
     },
     rig: { id: `${key}-rig`, version: 1, rig: rigSchema.parse(input.rig) },
     stops: input.trip.stops.map((s, i) => ({ id: `${key}-s${i}`, version: 1, notes: '', stop: stopSchema.parse(s) })),

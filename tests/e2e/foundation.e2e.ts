@@ -57,7 +57,10 @@ describe.each(Object.entries(VIEWPORTS))('at %s width', (name, viewport) => {
       [...document.fonts].filter((face) => face.status === 'loaded').map((face) => face.family.replace(/"/g, '')),
     );
     expect(loadedFaces).toEqual(expect.arrayContaining(['Nunito_400Regular', 'Nunito_800ExtraBold']));
-    const titleFont = await page.locator('[role="heading"]').first().evaluate((el) => getComputedStyle(el).fontFamily);
+    const titleFont = await page
+      .locator('[role="heading"]')
+      .first()
+      .evaluate((el) => getComputedStyle(el).fontFamily);
     expect(titleFont).toContain('Nunito');
 
     await page.locator('[data-testid^="trip-open-"]').filter({ hasText: 'Highland loop' }).click();

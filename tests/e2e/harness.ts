@@ -29,7 +29,15 @@ export async function startServer(): Promise<RunningServer> {
   const port = await freePort();
   const dbPath = path.join(dir, 'e2e.db');
   const child: ChildProcess = spawn(path.resolve('node_modules/.bin/tsx'), ['server/index.ts'], {
-    env: { ...process.env, PORT: String(port), PUBLIC_URL: `http://127.0.0.1:${port}`, HOST: '127.0.0.1', DATABASE_PATH: dbPath, LOG_LEVEL: 'warn', NODE_ENV: 'development' },
+    env: {
+      ...process.env,
+      PORT: String(port),
+      PUBLIC_URL: `http://127.0.0.1:${port}`,
+      HOST: '127.0.0.1',
+      DATABASE_PATH: dbPath,
+      LOG_LEVEL: 'warn',
+      NODE_ENV: 'development',
+    },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
   let output = '';
@@ -63,7 +71,15 @@ export async function startServer(): Promise<RunningServer> {
 export async function launchBrowser(): Promise<Browser> {
   return chromium.launch({
     executablePath: process.env.CHROME_PATH ?? '/usr/bin/chromium',
-    args: ['--no-sandbox', '--disable-gpu', '--disable-quic', '--no-first-run', '--disable-background-networking', '--disable-component-update', '--disable-sync'],
+    args: [
+      '--no-sandbox',
+      '--disable-gpu',
+      '--disable-quic',
+      '--no-first-run',
+      '--disable-background-networking',
+      '--disable-component-update',
+      '--disable-sync',
+    ],
   });
 }
 
@@ -84,7 +100,12 @@ export async function screenshot(page: Page, name: string): Promise<void> {
 export async function screenshotTall(page: Page, name: string): Promise<void> {
   const viewport = page.viewportSize();
   const height = await page.evaluate(() =>
-    Math.max(window.innerHeight, ...[...document.querySelectorAll('*')].map((el) => (el.scrollHeight > el.clientHeight + 4 ? el.scrollHeight + el.getBoundingClientRect().top : 0))),
+    Math.max(
+      window.innerHeight,
+      ...[...document.querySelectorAll('*')].map((el) =>
+        el.scrollHeight > el.clientHeight + 4 ? el.scrollHeight + el.getBoundingClientRect().top : 0,
+      ),
+    ),
   );
   if (viewport) await page.setViewportSize({ width: viewport.width, height: Math.min(6000, Math.ceil(height) + 120) });
   await page.waitForTimeout(300);
@@ -126,7 +147,13 @@ export async function seriousA11yViolations(page: Page): Promise<string[]> {
   const result = await new AxeBuilder({ page }).analyze();
   return result.violations
     .filter((v) => v.impact === 'serious' || v.impact === 'critical')
-    .map((v) => `${v.id} (${v.impact}): ${v.nodes.slice(0, 3).map((n) => n.target.join(' ')).join(' | ')}`);
+    .map(
+      (v) =>
+        `${v.id} (${v.impact}): ${v.nodes
+          .slice(0, 3)
+          .map((n) => n.target.join(' '))
+          .join(' | ')}`,
+    );
 }
 
 export type Suite = { server: RunningServer; browser: Browser };

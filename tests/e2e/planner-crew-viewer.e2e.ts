@@ -15,7 +15,11 @@ let tripId = '';
 
 const suite = useServerAndBrowser();
 
-async function addStop(page: Page, index: number, s: { name: string; lat: string; lon: string; arrive: string; depart: string; forest?: boolean }) {
+async function addStop(
+  page: Page,
+  index: number,
+  s: { name: string; lat: string; lon: string; arrive: string; depart: string; forest?: boolean },
+) {
   await page.click(byTestId('stop-add'));
   await page.waitForSelector(byTestId('stop-form'));
   await page.fill(byTestId('stop-name'), s.name);
@@ -36,7 +40,7 @@ async function lowestCharge(page: Page): Promise<number> {
 }
 
 describe('a trip leader at 1440 px', () => {
-  it('when they build a trip from scratch and apply a flag\'s fix, then the flag goes', async () => {
+  it("when they build a trip from scratch and apply a flag's fix, then the flag goes", async () => {
     const page = await suite.browser.newPage({ viewport: VIEWPORTS.desktop });
     const errors = trackPageErrors(page);
     await page.goto(suite.server.url);
@@ -71,9 +75,28 @@ describe('a trip leader at 1440 px', () => {
     expect(await page.inputValue(byTestId('stop-name'))).toBe('Birch hollow');
     await page.click(byTestId('stop-cancel'));
 
-    await addStop(page, 0, { name: 'Birch hollow', lat: '57.0', lon: '-4.0', arrive: '2027-10-04 14:00', depart: '2027-10-06 10:00' });
-    await addStop(page, 1, { name: 'Deep glen', lat: '57.1', lon: '-4.2', arrive: '2027-10-06 13:00', depart: '2027-10-08 10:00', forest: true });
-    await addStop(page, 2, { name: 'Shore field', lat: '57.3', lon: '-4.5', arrive: '2027-10-08 13:00', depart: '2027-10-10 10:00' });
+    await addStop(page, 0, {
+      name: 'Birch hollow',
+      lat: '57.0',
+      lon: '-4.0',
+      arrive: '2027-10-04 14:00',
+      depart: '2027-10-06 10:00',
+    });
+    await addStop(page, 1, {
+      name: 'Deep glen',
+      lat: '57.1',
+      lon: '-4.2',
+      arrive: '2027-10-06 13:00',
+      depart: '2027-10-08 10:00',
+      forest: true,
+    });
+    await addStop(page, 2, {
+      name: 'Shore field',
+      lat: '57.3',
+      lon: '-4.5',
+      arrive: '2027-10-08 13:00',
+      depart: '2027-10-10 10:00',
+    });
     await page.waitForSelector(byTestId('drive-1'));
     await page.click(byTestId('stop-1-edit'));
     await page.waitForSelector(byTestId('sun-path'));
@@ -88,7 +111,8 @@ describe('a trip leader at 1440 px', () => {
       await page.waitForSelector(byTestId('schedule-editor'));
     }
     const loads = await page.textContent(byTestId('loads-screen'));
-    for (const name of ['12 V compressor fridge', 'LED lights', 'Laptop', 'TV', 'Water pump']) expect(loads).toContain(name);
+    for (const name of ['12 V compressor fridge', 'LED lights', 'Laptop', 'TV', 'Water pump'])
+      expect(loads).toContain(name);
     await screenshot(page, 'leader-loads-desktop');
 
     await page.click(byTestId('tab-budget'));
@@ -105,7 +129,9 @@ describe('a trip leader at 1440 px', () => {
       await flag.getByRole('button', { name: /more battery/ }).click();
       await expect.poll(() => page.locator(byTestId(flagId)).count(), { timeout: 15_000 }).toBe(0);
       if (round === 0) {
-        await expect.poll(async () => Number((await page.textContent(byTestId('figure-short-value')))?.replace(/\D/g, ''))).toBeLessThan(shortBefore);
+        await expect
+          .poll(async () => Number((await page.textContent(byTestId('figure-short-value')))?.replace(/\D/g, '')))
+          .toBeLessThan(shortBefore);
       }
     }
     await expect.poll(() => shortfalls.count()).toBe(0);
@@ -115,7 +141,7 @@ describe('a trip leader at 1440 px', () => {
     await page.close();
   });
 
-  it('when they set an advanced rig figure and pick a stop\'s zone from the list, then both are there after a reload', async () => {
+  it("when they set an advanced rig figure and pick a stop's zone from the list, then both are there after a reload", async () => {
     const page = await suite.browser.newPage({ viewport: VIEWPORTS.desktop });
     const errors = trackPageErrors(page);
     await signIn(page, suite.server.url, LEADER.email, LEADER.password);
@@ -153,7 +179,10 @@ describe('members of the trip', () => {
   beforeAll(() => {
     // There is no invitation flow yet: memberships are written straight into the server's database.
     const db = openDatabase(suite.server.dbPath);
-    for (const [email, role] of [[DEMO_CREW.email, 'crew'], [DEMO_VIEWER.email, 'viewer']] as const) {
+    for (const [email, role] of [
+      [DEMO_CREW.email, 'crew'],
+      [DEMO_VIEWER.email, 'viewer'],
+    ] as const) {
       const row = db.select({ id: user.id }).from(user).where(eq(user.email, email)).get();
       if (!row) throw new Error(`no seeded user ${email}`);
       addMember(db, tripId, row.id, role, new Date());
@@ -180,7 +209,8 @@ describe('members of the trip', () => {
     await page.mouse.down();
     await page.mouse.move(to.x + to.width / 2, to.y + to.height / 2, { steps: 8 });
     await page.mouse.up();
-    for (const hour of [8, 9, 10, 11]) expect(await page.getAttribute(byTestId(`routine-strip-cell-${hour}`), 'aria-checked')).toBe('true');
+    for (const hour of [8, 9, 10, 11])
+      expect(await page.getAttribute(byTestId(`routine-strip-cell-${hour}`), 'aria-checked')).toBe('true');
     await page.click(byTestId('routine-strip-cell-13'));
     expect(await page.getAttribute(byTestId('routine-strip-cell-13'), 'aria-checked')).toBe('true');
     expect(await page.getAttribute(byTestId('routine-strip-cell-12'), 'aria-checked')).toBe('false');
@@ -218,7 +248,17 @@ describe('members of the trip', () => {
     expect(await page.locator(byTestId('rig-save')).count()).toBe(0);
     await screenshot(page, 'viewer-rig-phone');
     // The server refuses a viewer's write even if a screen were to offer one.
-    const status = await page.evaluate(async (id) => (await fetch(`/api/trips/${id}`, { method: 'PATCH', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify({ version: 1, name: 'Hijack' }) })).status, tripId);
+    const status = await page.evaluate(
+      async (id) =>
+        (
+          await fetch(`/api/trips/${id}`, {
+            method: 'PATCH',
+            headers: { 'Content-Type': 'application/json' },
+            body: JSON.stringify({ version: 1, name: 'Hijack' }),
+          })
+        ).status,
+      tripId,
+    );
     expect(status).toBe(403);
     await page.close();
   });
@@ -245,7 +285,9 @@ describe('two people editing at once', () => {
     await second.fill(byTestId('appliance-runningW'), '80');
     await second.click(byTestId('appliance-save'));
     await second.waitForSelector(byTestId('appliance-conflict'));
-    expect(await second.textContent(byTestId('appliance-conflict'))).toContain('changed by someone else since you opened it');
+    expect(await second.textContent(byTestId('appliance-conflict'))).toContain(
+      'changed by someone else since you opened it',
+    );
     // What they typed is still in the form while they decide.
     expect(await second.inputValue(byTestId('appliance-runningW'))).toBe('80');
     expect(await second.textContent(byTestId('appliance-conflict-theirs'))).toContain('running 120 W');
@@ -268,7 +310,11 @@ describe('the trips list', () => {
     const id = ((await original.first().getAttribute('data-testid')) ?? '').replace('trip-card-', '');
     await page.click(byTestId(`trip-duplicate-${id}`));
     await expect.poll(() => page.locator('[data-testid^="trip-open-"]').count()).toBe(2);
-    const ids = (await page.locator('[data-testid^="trip-card-"]').evaluateAll((els) => els.map((el) => el.getAttribute('data-testid') ?? ''))).map((t) => t.replace('trip-card-', ''));
+    const ids = (
+      await page
+        .locator('[data-testid^="trip-card-"]')
+        .evaluateAll((els) => els.map((el) => el.getAttribute('data-testid') ?? ''))
+    ).map((t) => t.replace('trip-card-', ''));
     const copyId = ids.find((other) => other !== id) ?? '';
     expect(copyId).not.toBe('');
 

@@ -4,30 +4,83 @@ import fs from 'node:fs';
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { DEMO_ACCOUNT } from '@/db/seed';
-import { byTestId, openTrip, screenshotTall, seriousA11yViolations, signIn, trackPageErrors, useServerAndBrowser, VIEWPORTS } from './harness';
+import {
+  byTestId,
+  openTrip,
+  screenshotTall,
+  seriousA11yViolations,
+  signIn,
+  trackPageErrors,
+  useServerAndBrowser,
+  VIEWPORTS,
+} from './harness';
 
 const suite = useServerAndBrowser();
 
 type Check = { name: string; open: (page: Page, tripPath: string) => Promise<void> };
 
-const tab = (testID: string, ready: string, extra?: (page: Page) => Promise<void>): Check['open'] => async (page, tripPath) => {
-  await page.goto(`${suite.server.url}${tripPath}`);
-  await page.waitForSelector(byTestId('trip-frame'));
-  await page.click(byTestId(testID));
-  await page.waitForSelector(byTestId(ready));
-  await extra?.(page);
-};
+const tab =
+  (testID: string, ready: string, extra?: (page: Page) => Promise<void>): Check['open'] =>
+  async (page, tripPath) => {
+    await page.goto(`${suite.server.url}${tripPath}`);
+    await page.waitForSelector(byTestId('trip-frame'));
+    await page.click(byTestId(testID));
+    await page.waitForSelector(byTestId(ready));
+    await extra?.(page);
+  };
 
 const CHECKS: Check[] = [
-  { name: 'trips', open: async (page) => { await page.goto(suite.server.url); await page.waitForSelector(byTestId('trip-list')); } },
-  { name: 'new-trip', open: async (page) => { await page.click(byTestId('new-trip')); await page.waitForSelector(byTestId('new-trip-rig-preset:van-small')); } },
-  { name: 'account', open: async (page) => { await page.goto(`${suite.server.url}/account`); await page.waitForSelector(byTestId('units-card')); } },
-  { name: 'budget', open: tab('tab-budget', 'budget-screen', async (page) => { await page.waitForSelector(`${byTestId('soc-chart')} canvas`); }) },
-  { name: 'budget-what-if', open: tab('tab-budget', 'budget-screen', async (page) => { await page.click(byTestId('what-if-extraBattery')); await page.waitForSelector(byTestId('what-if-banner')); await page.waitForSelector(`${byTestId('soc-chart')} canvas`); }) },
+  {
+    name: 'trips',
+    open: async (page) => {
+      await page.goto(suite.server.url);
+      await page.waitForSelector(byTestId('trip-list'));
+    },
+  },
+  {
+    name: 'new-trip',
+    open: async (page) => {
+      await page.click(byTestId('new-trip'));
+      await page.waitForSelector(byTestId('new-trip-rig-preset:van-small'));
+    },
+  },
+  {
+    name: 'account',
+    open: async (page) => {
+      await page.goto(`${suite.server.url}/account`);
+      await page.waitForSelector(byTestId('units-card'));
+    },
+  },
+  {
+    name: 'budget',
+    open: tab('tab-budget', 'budget-screen', async (page) => {
+      await page.waitForSelector(`${byTestId('soc-chart')} canvas`);
+    }),
+  },
+  {
+    name: 'budget-what-if',
+    open: tab('tab-budget', 'budget-screen', async (page) => {
+      await page.click(byTestId('what-if-extraBattery'));
+      await page.waitForSelector(byTestId('what-if-banner'));
+      await page.waitForSelector(`${byTestId('soc-chart')} canvas`);
+    }),
+  },
   { name: 'route', open: tab('tab-route', 'route-screen') },
-  { name: 'route-stop', open: tab('tab-route', 'route-screen', async (page) => { await page.click(byTestId('stop-1-edit')); await page.waitForSelector(byTestId('sun-path')); }) },
+  {
+    name: 'route-stop',
+    open: tab('tab-route', 'route-screen', async (page) => {
+      await page.click(byTestId('stop-1-edit'));
+      await page.waitForSelector(byTestId('sun-path'));
+    }),
+  },
   { name: 'loads', open: tab('tab-loads', 'loads-screen') },
-  { name: 'loads-routine', open: tab('tab-loads', 'loads-screen', async (page) => { await page.locator('[data-testid^="appliance-"]').filter({ hasText: 'Hair dryer' }).first().click(); await page.waitForSelector(byTestId('routine-strip')); }) },
+  {
+    name: 'loads-routine',
+    open: tab('tab-loads', 'loads-screen', async (page) => {
+      await page.locator('[data-testid^="appliance-"]').filter({ hasText: 'Hair dryer' }).first().click();
+      await page.waitForSelector(byTestId('routine-strip'));
+    }),
+  },
   { name: 'rig', open: tab('tab-rig', 'rig-form') },
   { name: 'people', open: tab('tab-people', 'members') },
   { name: 'ledger', open: tab('tab-ledger', 'ledger-list') },

@@ -4,7 +4,16 @@
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { DEMO_ACCOUNT, DEMO_CREW } from '@/db/seed';
-import { byTestId, openTrip, screenshot, seriousA11yViolations, signIn, trackPageErrors, useServerAndBrowser, VIEWPORTS } from './harness';
+import {
+  byTestId,
+  openTrip,
+  screenshot,
+  seriousA11yViolations,
+  signIn,
+  trackPageErrors,
+  useServerAndBrowser,
+  VIEWPORTS,
+} from './harness';
 
 const suite = useServerAndBrowser();
 
@@ -40,7 +49,12 @@ async function invite(page: Page, email: string, role: 'crew' | 'viewer' | 'plan
 async function openInviteMailTo(page: Page, email: string): Promise<void> {
   await page.goto(`${suite.server.url}/outbox`);
   await page.waitForSelector(byTestId('outbox-list'));
-  await page.locator('[data-testid^="outbox-message-"]').filter({ hasText: email }).filter({ hasText: 'invited you' }).first().click();
+  await page
+    .locator('[data-testid^="outbox-message-"]')
+    .filter({ hasText: email })
+    .filter({ hasText: 'invited you' })
+    .first()
+    .click();
   await page.waitForSelector(byTestId('outbox-reader'));
 }
 
@@ -186,7 +200,10 @@ describe.each(Object.entries(VIEWPORTS))('clubs at %s width', (name, viewport) =
     await page.waitForSelector(byTestId('club-invite-form'));
 
     if (name === 'phone') {
-      await page.fill(byTestId('club-invite-addresses'), `Kirsty Bell <kirsty-${name}@example.test>\nangus-${name}@example.test, not an address`);
+      await page.fill(
+        byTestId('club-invite-addresses'),
+        `Kirsty Bell <kirsty-${name}@example.test>\nangus-${name}@example.test, not an address`,
+      );
     } else {
       // On a laptop the organiser picks the club's CSV export (name,email per row) instead of pasting.
       const csv = `name,email\nKirsty Bell,kirsty-${name}@example.test\nAngus Reid,angus-${name}@example.test\nNo Address,not an address\n`;
@@ -199,10 +216,14 @@ describe.each(Object.entries(VIEWPORTS))('clubs at %s width', (name, viewport) =
     await page.waitForSelector(byTestId('club-invite-report'));
     expect(await page.textContent(byTestId('club-invite-sent'))).toMatch(/^2 invites sent/);
     // Pasted, the bad address is on line 2; in the CSV it is the fourth line (after the header).
-    expect(await page.textContent(byTestId('club-invite-rejected-0'))).toMatch(name === 'phone' ? /Line 2: “not an address”/ : /Line 4: .*not an address/);
+    expect(await page.textContent(byTestId('club-invite-rejected-0'))).toMatch(
+      name === 'phone' ? /Line 2: “not an address”/ : /Line 4: .*not an address/,
+    );
     // Only the refused row stays in the box, ready to fix.
     expect(await page.inputValue(byTestId('club-invite-addresses'))).toContain('not an address');
-    await expect.poll(() => page.textContent(byTestId('club-pending-invites'))).toContain(`kirsty-${name}@example.test`);
+    await expect
+      .poll(() => page.textContent(byTestId('club-pending-invites')))
+      .toContain(`kirsty-${name}@example.test`);
 
     // Share the trip from its People tab; the club page then lists it with its copy count.
     await page.goto(suite.server.url);
@@ -210,9 +231,15 @@ describe.each(Object.entries(VIEWPORTS))('clubs at %s width', (name, viewport) =
     await openPeople(page);
     await page.locator(byTestId('share-club-pick')).getByText(`Glen Rally Club ${name}`).click();
     await page.click(byTestId('share-club-submit'));
-    await page.locator(byTestId('toast')).filter({ hasText: `Shared to Glen Rally Club ${name}` }).waitFor();
+    await page
+      .locator(byTestId('toast'))
+      .filter({ hasText: `Shared to Glen Rally Club ${name}` })
+      .waitFor();
     await page.click(byTestId('nav-clubs'));
-    await page.locator('[data-testid^="club-card-"]').filter({ hasText: `Glen Rally Club ${name}` }).click();
+    await page
+      .locator('[data-testid^="club-card-"]')
+      .filter({ hasText: `Glen Rally Club ${name}` })
+      .click();
     await page.waitForSelector(byTestId('club-trips'));
     expect(await page.textContent(byTestId('club-trips'))).toContain('No household has copied it yet');
     await screenshot(page, `sharing-club-${name}`);
@@ -260,7 +287,10 @@ describe('copy onto my rig', () => {
 
     await page.goto(`${suite.server.url}${clubPath}`);
     await page.click(byTestId(`club-trip-${tripId}-copy`));
-    await page.locator(byTestId(`copy-${tripId}-rig`)).getByText('Our caravan').click();
+    await page
+      .locator(byTestId(`copy-${tripId}-rig`))
+      .getByText('Our caravan')
+      .click();
     await page.click(byTestId(`copy-${tripId}-submit`));
     await page.waitForSelector(byTestId('based-on-banner'));
     const copyId = /\/trips\/([^/]+)/.exec(new URL(page.url()).pathname)?.[1];
@@ -273,11 +303,23 @@ describe('copy onto my rig', () => {
 
     // The organiser renames the first stop of the club's plan (setup through the API; the Route tab is tested elsewhere).
     const status = await page.evaluate(async (id) => {
-      const detail = (await (await fetch(`/api/trips/${id}`)).json()) as { stops: { id: string; version: number; notes: string; stop: { name: string } }[] };
+      const detail = (await (await fetch(`/api/trips/${id}`)).json()) as {
+        stops: { id: string; version: number; notes: string; stop: { name: string } }[];
+      };
       const first = detail.stops[0];
       if (!first) return 0;
-      const body = { version: first.version, notes: first.notes, stop: { ...first.stop, name: `${first.stop.name} (new pitch)` } };
-      return (await fetch(`/api/trips/${id}/stops/${first.id}`, { method: 'PATCH', headers: { 'Content-Type': 'application/json' }, body: JSON.stringify(body) })).status;
+      const body = {
+        version: first.version,
+        notes: first.notes,
+        stop: { ...first.stop, name: `${first.stop.name} (new pitch)` },
+      };
+      return (
+        await fetch(`/api/trips/${id}/stops/${first.id}`, {
+          method: 'PATCH',
+          headers: { 'Content-Type': 'application/json' },
+          body: JSON.stringify(body),
+        })
+      ).status;
     }, tripId);
     expect(status).toBe(200);
 
@@ -323,7 +365,12 @@ describe('account e-mails', () => {
     await page.waitForSelector(byTestId('forgot-sent'));
 
     await page.goto(`${suite.server.url}/outbox`);
-    await page.locator('[data-testid^="outbox-message-"]').filter({ hasText: email }).filter({ hasText: 'password' }).first().click();
+    await page
+      .locator('[data-testid^="outbox-message-"]')
+      .filter({ hasText: email })
+      .filter({ hasText: 'password' })
+      .first()
+      .click();
     await page.click(byTestId('outbox-link-0'));
     await page.waitForSelector(byTestId('reset-password'));
     await page.fill(byTestId('reset-password'), 'second-password-2');

@@ -17,7 +17,9 @@ export type TestContext = {
 };
 
 /** A real app on a fresh temporary SQLite file with the real migrations. */
-export function createTestApp(options: { authAttemptsPerMinute?: number; now?: () => Date; mailer?: Mailer } = {}): TestContext {
+export function createTestApp(
+  options: { authAttemptsPerMinute?: number; now?: () => Date; mailer?: Mailer } = {},
+): TestContext {
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'trailtally-test-'));
   const db = openDatabase(path.join(dir, 'test.db'));
   runMigrations(db);

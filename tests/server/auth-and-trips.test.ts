@@ -46,7 +46,11 @@ describe('accounts', () => {
   it('when the password is right, then sign-in sets a session cookie that opens the API', async () => {
     const { email } = await signUpAgent(ctx.app);
     const agent = request.agent(ctx.app);
-    await agent.post('/api/auth/sign-in/email').set('Origin', ORIGIN).send({ email, password: 'correct-horse-battery' }).expect(200);
+    await agent
+      .post('/api/auth/sign-in/email')
+      .set('Origin', ORIGIN)
+      .send({ email, password: 'correct-horse-battery' })
+      .expect(200);
     await agent.get('/api/trips').expect(200);
   });
 });
@@ -87,7 +91,10 @@ describe('sign-in rate limit', () => {
     const limited = createTestApp({ authAttemptsPerMinute: 3 });
     try {
       const attempt = () =>
-        request(limited.app).post('/api/auth/sign-in/email').set('Origin', ORIGIN).send({ email: 'x@example.test', password: 'wrong-password' });
+        request(limited.app)
+          .post('/api/auth/sign-in/email')
+          .set('Origin', ORIGIN)
+          .send({ email: 'x@example.test', password: 'wrong-password' });
       for (let i = 0; i < 3; i += 1) expect((await attempt()).status).toBe(401);
       const refused = await attempt();
       expect(refused.status).toBe(429);

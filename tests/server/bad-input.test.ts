@@ -9,9 +9,23 @@ import * as api from '@/shared/schemas/api';
 import * as sharing from '@/shared/schemas/sharing';
 import { preferencesSchema } from '@/server/routes/preferences';
 import { createTestApp, signUpAgent, type TestContext } from '../factories/test-app';
-import { addAppliance, addStop, createTrip, getDetail, grant, LIGHTS, stopOnNextFreeDay } from '../factories/trip-factory';
+import {
+  addAppliance,
+  addStop,
+  createTrip,
+  getDetail,
+  grant,
+  LIGHTS,
+  stopOnNextFreeDay,
+} from '../factories/trip-factory';
 
-type Route = { name: string; method: 'post' | 'patch' | 'put'; path: () => string; schema: z.ZodType; valid: () => Record<string, unknown> };
+type Route = {
+  name: string;
+  method: 'post' | 'patch' | 'put';
+  path: () => string;
+  schema: z.ZodType;
+  valid: () => Record<string, unknown>;
+};
 
 let ctx: TestContext;
 let agent: Agent;
@@ -23,10 +37,13 @@ let snapshot: Awaited<ReturnType<typeof getDetail>>;
 function databaseFingerprint(): string {
   const sqlite = ctx.db.$client;
   const tables = sqlite
-    .prepare("select name from sqlite_master where type = 'table' and name not like 'sqlite_%' and name not like '__drizzle%' and name not in ('session', 'verification') order by name")
+    .prepare(
+      "select name from sqlite_master where type = 'table' and name not like 'sqlite_%' and name not like '__drizzle%' and name not in ('session', 'verification') order by name",
+    )
     .all() as { name: string }[];
   const hash = crypto.createHash('sha256');
-  for (const { name } of tables) hash.update(name + JSON.stringify(sqlite.prepare(`select * from "${name}" order by rowid`).all()));
+  for (const { name } of tables)
+    hash.update(name + JSON.stringify(sqlite.prepare(`select * from "${name}" order by rowid`).all()));
   return hash.digest('hex');
 }
 
@@ -36,10 +53,28 @@ const ROUTES: Route[] = [
     method: 'post',
     path: () => '/api/trips',
     schema: api.createTripRequestSchema,
-    valid: () => ({ name: 'T', startDate: '2027-06-01', endDate: '2027-06-05', timeZone: 'Europe/London', rigSource: { kind: 'preset', presetId: 'van-small' } }),
+    valid: () => ({
+      name: 'T',
+      startDate: '2027-06-01',
+      endDate: '2027-06-05',
+      timeZone: 'Europe/London',
+      rigSource: { kind: 'preset', presetId: 'van-small' },
+    }),
   },
-  { name: 'PATCH /trips/:id', method: 'patch', path: () => `/api/trips/${tripId}`, schema: api.updateTripRequestSchema, valid: () => ({ version: snapshot.trip.version, name: 'Renamed' }) },
-  { name: 'POST stops', method: 'post', path: () => `/api/trips/${tripId}/stops`, schema: api.createStopRequestSchema, valid: () => ({ stop: stopOnNextFreeDay() }) },
+  {
+    name: 'PATCH /trips/:id',
+    method: 'patch',
+    path: () => `/api/trips/${tripId}`,
+    schema: api.updateTripRequestSchema,
+    valid: () => ({ version: snapshot.trip.version, name: 'Renamed' }),
+  },
+  {
+    name: 'POST stops',
+    method: 'post',
+    path: () => `/api/trips/${tripId}/stops`,
+    schema: api.createStopRequestSchema,
+    valid: () => ({ stop: stopOnNextFreeDay() }),
+  },
   {
     name: 'PATCH stop',
     method: 'patch',
@@ -47,9 +82,27 @@ const ROUTES: Route[] = [
     schema: api.updateStopRequestSchema,
     valid: () => ({ version: snapshot.stops[0]?.version, stop: snapshot.stops[0]?.stop }),
   },
-  { name: 'POST reorder', method: 'post', path: () => `/api/trips/${tripId}/stops/reorder`, schema: api.reorderStopsRequestSchema, valid: () => ({ tripVersion: snapshot.trip.version, stopIds: snapshot.stops.map((s) => s.id) }) },
-  { name: 'PATCH drive', method: 'patch', path: () => `/api/trips/${tripId}/drives/${ids.drive}`, schema: api.updateDriveRequestSchema, valid: () => ({ version: 1, drive: { hoursOnRoad: 1, vehicleCharging: true } }) },
-  { name: 'POST appliance', method: 'post', path: () => `/api/trips/${tripId}/appliances`, schema: api.createApplianceRequestSchema, valid: () => ({ appliance: LIGHTS }) },
+  {
+    name: 'POST reorder',
+    method: 'post',
+    path: () => `/api/trips/${tripId}/stops/reorder`,
+    schema: api.reorderStopsRequestSchema,
+    valid: () => ({ tripVersion: snapshot.trip.version, stopIds: snapshot.stops.map((s) => s.id) }),
+  },
+  {
+    name: 'PATCH drive',
+    method: 'patch',
+    path: () => `/api/trips/${tripId}/drives/${ids.drive}`,
+    schema: api.updateDriveRequestSchema,
+    valid: () => ({ version: 1, drive: { hoursOnRoad: 1, vehicleCharging: true } }),
+  },
+  {
+    name: 'POST appliance',
+    method: 'post',
+    path: () => `/api/trips/${tripId}/appliances`,
+    schema: api.createApplianceRequestSchema,
+    valid: () => ({ appliance: LIGHTS }),
+  },
   {
     name: 'PATCH appliance',
     method: 'patch',
@@ -57,20 +110,104 @@ const ROUTES: Route[] = [
     schema: api.updateApplianceRequestSchema,
     valid: () => ({ version: 1, appliance: LIGHTS, caretakerUserId: null }),
   },
-  { name: 'PUT schedule', method: 'put', path: () => `/api/trips/${tripId}/appliances/${ids.appliance}/schedule`, schema: api.updateScheduleRequestSchema, valid: () => ({ version: 1, schedule: { kind: 'always' } }) },
-  { name: 'PUT trip rig', method: 'put', path: () => `/api/trips/${tripId}/rig`, schema: api.updateRigRequestSchema, valid: () => ({ version: snapshot.rig.version, rig: snapshot.rig.rig }) },
-  { name: 'POST rig/save', method: 'post', path: () => `/api/trips/${tripId}/rig/save`, schema: api.saveTripRigRequestSchema, valid: () => ({ name: 'Saved' }) },
-  { name: 'POST rig/replace', method: 'post', path: () => `/api/trips/${tripId}/rig/replace`, schema: api.replaceTripRigRequestSchema, valid: () => ({ version: snapshot.rig.version, rigId: ids.savedRig }) },
-  { name: 'PATCH member', method: 'patch', path: () => `/api/trips/${tripId}/members/${ids.member}`, schema: api.updateMemberRoleRequestSchema, valid: () => ({ role: 'crew' }) },
-  { name: 'POST /rigs', method: 'post', path: () => '/api/rigs', schema: api.createRigRequestSchema, valid: () => ({ rig: snapshot.rig.rig }) },
-  { name: 'PUT /rigs/:id', method: 'put', path: () => `/api/rigs/${ids.savedRig}`, schema: api.updateRigRequestSchema, valid: () => ({ version: 1, rig: snapshot.rig.rig }) },
-  { name: 'POST invite', method: 'post', path: () => `/api/trips/${tripId}/invites`, schema: sharing.createInviteRequestSchema, valid: () => ({ email: 'new@example.test', role: 'crew' }) },
-  { name: 'POST hand-over', method: 'post', path: () => `/api/trips/${tripId}/members/hand-over`, schema: sharing.handOverRequestSchema, valid: () => ({ userId: ids.member }) },
-  { name: 'POST copy', method: 'post', path: () => `/api/trips/${tripId}/copy`, schema: sharing.copyTripRequestSchema, valid: () => ({ rigId: ids.savedRig }) },
-  { name: 'POST /clubs', method: 'post', path: () => '/api/clubs', schema: sharing.createClubRequestSchema, valid: () => ({ name: 'Club' }) },
-  { name: 'POST club invites', method: 'post', path: () => `/api/clubs/${ids.club}/invites`, schema: sharing.clubInviteRequestSchema, valid: () => ({ addresses: 'a@example.test' }) },
-  { name: 'POST club trips', method: 'post', path: () => `/api/clubs/${ids.club}/trips`, schema: sharing.shareTripRequestSchema, valid: () => ({ tripId }) },
-  { name: 'PUT /me/preferences', method: 'put', path: () => '/api/me/preferences', schema: preferencesSchema, valid: () => ({ units: 'us' }) },
+  {
+    name: 'PUT schedule',
+    method: 'put',
+    path: () => `/api/trips/${tripId}/appliances/${ids.appliance}/schedule`,
+    schema: api.updateScheduleRequestSchema,
+    valid: () => ({ version: 1, schedule: { kind: 'always' } }),
+  },
+  {
+    name: 'PUT trip rig',
+    method: 'put',
+    path: () => `/api/trips/${tripId}/rig`,
+    schema: api.updateRigRequestSchema,
+    valid: () => ({ version: snapshot.rig.version, rig: snapshot.rig.rig }),
+  },
+  {
+    name: 'POST rig/save',
+    method: 'post',
+    path: () => `/api/trips/${tripId}/rig/save`,
+    schema: api.saveTripRigRequestSchema,
+    valid: () => ({ name: 'Saved' }),
+  },
+  {
+    name: 'POST rig/replace',
+    method: 'post',
+    path: () => `/api/trips/${tripId}/rig/replace`,
+    schema: api.replaceTripRigRequestSchema,
+    valid: () => ({ version: snapshot.rig.version, rigId: ids.savedRig }),
+  },
+  {
+    name: 'PATCH member',
+    method: 'patch',
+    path: () => `/api/trips/${tripId}/members/${ids.member}`,
+    schema: api.updateMemberRoleRequestSchema,
+    valid: () => ({ role: 'crew' }),
+  },
+  {
+    name: 'POST /rigs',
+    method: 'post',
+    path: () => '/api/rigs',
+    schema: api.createRigRequestSchema,
+    valid: () => ({ rig: snapshot.rig.rig }),
+  },
+  {
+    name: 'PUT /rigs/:id',
+    method: 'put',
+    path: () => `/api/rigs/${ids.savedRig}`,
+    schema: api.updateRigRequestSchema,
+    valid: () => ({ version: 1, rig: snapshot.rig.rig }),
+  },
+  {
+    name: 'POST invite',
+    method: 'post',
+    path: () => `/api/trips/${tripId}/invites`,
+    schema: sharing.createInviteRequestSchema,
+    valid: () => ({ email: 'new@example.test', role: 'crew' }),
+  },
+  {
+    name: 'POST hand-over',
+    method: 'post',
+    path: () => `/api/trips/${tripId}/members/hand-over`,
+    schema: sharing.handOverRequestSchema,
+    valid: () => ({ userId: ids.member }),
+  },
+  {
+    name: 'POST copy',
+    method: 'post',
+    path: () => `/api/trips/${tripId}/copy`,
+    schema: sharing.copyTripRequestSchema,
+    valid: () => ({ rigId: ids.savedRig }),
+  },
+  {
+    name: 'POST /clubs',
+    method: 'post',
+    path: () => '/api/clubs',
+    schema: sharing.createClubRequestSchema,
+    valid: () => ({ name: 'Club' }),
+  },
+  {
+    name: 'POST club invites',
+    method: 'post',
+    path: () => `/api/clubs/${ids.club}/invites`,
+    schema: sharing.clubInviteRequestSchema,
+    valid: () => ({ addresses: 'a@example.test' }),
+  },
+  {
+    name: 'POST club trips',
+    method: 'post',
+    path: () => `/api/clubs/${ids.club}/trips`,
+    schema: sharing.shareTripRequestSchema,
+    valid: () => ({ tripId }),
+  },
+  {
+    name: 'PUT /me/preferences',
+    method: 'put',
+    path: () => '/api/me/preferences',
+    schema: preferencesSchema,
+    valid: () => ({ units: 'us' }),
+  },
 ];
 
 const badValue = fc.oneof(
@@ -109,13 +246,24 @@ function malformedBodies(route: Route) {
   const valid = route.valid();
   const paths = leafPaths(valid);
   const mutated = fc
-    .tuple(fc.constantFrom(...paths), fc.oneof(badValue.map((value) => ({ kind: 'set' as const, value })), fc.constant({ kind: 'delete' as const })))
+    .tuple(
+      fc.constantFrom(...paths),
+      fc.oneof(
+        badValue.map((value) => ({ kind: 'set' as const, value })),
+        fc.constant({ kind: 'delete' as const }),
+      ),
+    )
     .map(([path, change]) => mutate(valid, path, change));
-  const unknownField = fc.string({ minLength: 1, maxLength: 12 }).filter((key) => !(key in valid)).map((key) => ({ ...valid, [key]: 1 }));
-  return fc
-    .oneof(mutated, unknownField, fc.anything({ maxDepth: 2 }))
-    // Keep only bodies the shared schema refuses: those must never change anything.
-    .filter((body) => !route.schema.safeParse(body).success);
+  const unknownField = fc
+    .string({ minLength: 1, maxLength: 12 })
+    .filter((key) => !(key in valid))
+    .map((key) => ({ ...valid, [key]: 1 }));
+  return (
+    fc
+      .oneof(mutated, unknownField, fc.anything({ maxDepth: 2 }))
+      // Keep only bodies the shared schema refuses: those must never change anything.
+      .filter((body) => !route.schema.safeParse(body).success)
+  );
 }
 
 beforeAll(async () => {
@@ -132,7 +280,14 @@ beforeAll(async () => {
   snapshot = await getDetail(agent, tripId);
   const saved = await agent.post('/api/rigs').send({ rig: snapshot.rig.rig });
   const club = await agent.post('/api/clubs').send({ name: 'Fuzz club' });
-  ids = { stop: stop.id, drive: snapshot.drives[0]?.id ?? '', appliance: appliance.id, member: member.userId, savedRig: saved.body.id, club: club.body.club.id };
+  ids = {
+    stop: stop.id,
+    drive: snapshot.drives[0]?.id ?? '',
+    appliance: appliance.id,
+    member: member.userId,
+    savedRig: saved.body.id,
+    club: club.body.club.id,
+  };
 });
 afterAll(() => ctx.close());
 

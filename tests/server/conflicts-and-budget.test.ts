@@ -1,7 +1,15 @@
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import type { ApplianceRecord } from '@/shared/schemas/api';
 import { createTestApp, signUpAgent, type TestContext } from '../factories/test-app';
-import { addAppliance, addStop, createTrip, getDetail, grant, LIGHTS, stopOnNextFreeDay } from '../factories/trip-factory';
+import {
+  addAppliance,
+  addStop,
+  createTrip,
+  getDetail,
+  grant,
+  LIGHTS,
+  stopOnNextFreeDay,
+} from '../factories/trip-factory';
 
 let ctx: TestContext;
 beforeEach(() => {
@@ -19,9 +27,20 @@ describe('conflict-safe edits', () => {
     const path = `/api/trips/${trip.id}/appliances/${created.id}`;
     const before = (await parent.agent.get(`/api/trips/${trip.id}/activity`)).body.entries.length;
 
-    const laptop = { version: created.version, appliance: { ...LIGHTS, name: 'Lights (parent)', runningW: 12 }, caretakerUserId: null };
-    const phone = { version: created.version, appliance: { ...LIGHTS, name: 'Lights (child)', runningW: 30 }, caretakerUserId: null };
-    const [first, second] = await Promise.all([parent.agent.patch(path).send(laptop), child.agent.patch(path).send(phone)]);
+    const laptop = {
+      version: created.version,
+      appliance: { ...LIGHTS, name: 'Lights (parent)', runningW: 12 },
+      caretakerUserId: null,
+    };
+    const phone = {
+      version: created.version,
+      appliance: { ...LIGHTS, name: 'Lights (child)', runningW: 30 },
+      caretakerUserId: null,
+    };
+    const [first, second] = await Promise.all([
+      parent.agent.patch(path).send(laptop),
+      child.agent.patch(path).send(phone),
+    ]);
 
     const statuses = [first.status, second.status].sort();
     expect(statuses).toEqual([200, 409]);
@@ -51,13 +70,27 @@ describe('conflict-safe edits', () => {
 
 describe('semantic checks answer 422 with the field', () => {
   it.each([
-    ['departure before arrival', { arriveAt: '2027-06-10T14:00+01:00', departAt: '2027-06-10T09:00+01:00' }, 'stop.departAt'],
-    ['a stop before the trip starts', { arriveAt: '2027-05-20T14:00+01:00', departAt: '2027-05-21T10:00+01:00' }, 'stop.arriveAt'],
-    ['a stop after the trip ends', { arriveAt: '2027-07-31T14:00+01:00', departAt: '2027-08-02T10:00+01:00' }, 'stop.departAt'],
+    [
+      'departure before arrival',
+      { arriveAt: '2027-06-10T14:00+01:00', departAt: '2027-06-10T09:00+01:00' },
+      'stop.departAt',
+    ],
+    [
+      'a stop before the trip starts',
+      { arriveAt: '2027-05-20T14:00+01:00', departAt: '2027-05-21T10:00+01:00' },
+      'stop.arriveAt',
+    ],
+    [
+      'a stop after the trip ends',
+      { arriveAt: '2027-07-31T14:00+01:00', departAt: '2027-08-02T10:00+01:00' },
+      'stop.departAt',
+    ],
   ])('when a stop has %s, then 422 names the field', async (_label, times, field) => {
     const { agent } = await signUpAgent(ctx.app);
     const { trip } = await createTrip(agent);
-    const response = await agent.post(`/api/trips/${trip.id}/stops`).send({ stop: { ...stopOnNextFreeDay(), ...times } });
+    const response = await agent
+      .post(`/api/trips/${trip.id}/stops`)
+      .send({ stop: { ...stopOnNextFreeDay(), ...times } });
     expect(response.status).toBe(422);
     expect(Object.keys(response.body.error.fields)).toContain(field);
   });
@@ -77,9 +110,21 @@ describe('stops and drives', () => {
   it('when stops are added out of order, then they are kept in time order with one drive per gap', async () => {
     const { agent } = await signUpAgent(ctx.app);
     const { trip } = await createTrip(agent);
-    const late = { ...stopOnNextFreeDay('Late'), arriveAt: '2027-06-20T14:00+01:00', departAt: '2027-06-22T10:00+01:00' };
-    const early = { ...stopOnNextFreeDay('Early'), arriveAt: '2027-06-10T14:00+01:00', departAt: '2027-06-12T10:00+01:00' };
-    const middle = { ...stopOnNextFreeDay('Middle'), arriveAt: '2027-06-15T14:00+01:00', departAt: '2027-06-16T10:00+01:00' };
+    const late = {
+      ...stopOnNextFreeDay('Late'),
+      arriveAt: '2027-06-20T14:00+01:00',
+      departAt: '2027-06-22T10:00+01:00',
+    };
+    const early = {
+      ...stopOnNextFreeDay('Early'),
+      arriveAt: '2027-06-10T14:00+01:00',
+      departAt: '2027-06-12T10:00+01:00',
+    };
+    const middle = {
+      ...stopOnNextFreeDay('Middle'),
+      arriveAt: '2027-06-15T14:00+01:00',
+      departAt: '2027-06-16T10:00+01:00',
+    };
     for (const stop of [late, early, middle]) await addStop(agent, trip.id, stop);
     const detail = await getDetail(agent, trip.id);
     expect(detail.stops.map((s) => s.stop.name)).toEqual([early.name, middle.name, late.name]);
@@ -95,7 +140,9 @@ describe('stops and drives', () => {
     await addStop(agent, trip.id, b);
     const before = await getDetail(agent, trip.id);
     const reversed = before.stops.map((s) => s.id).reverse();
-    const response = await agent.post(`/api/trips/${trip.id}/stops/reorder`).send({ tripVersion: before.trip.version, stopIds: reversed });
+    const response = await agent
+      .post(`/api/trips/${trip.id}/stops/reorder`)
+      .send({ tripVersion: before.trip.version, stopIds: reversed });
     expect(response.status).toBe(200);
     const [first, second] = response.body.stops;
     expect(first.stop.name).toBe(b.name);
@@ -142,10 +189,17 @@ describe('the seeded demo trips', () => {
     await seedDemo(ctx.db, ctx.app.locals.auth, new Date('2026-11-20T10:00:00Z'));
     const request = (await import('supertest')).default;
     const agent = request.agent(ctx.app);
-    await agent.post('/api/auth/sign-in/email').set('Origin', 'http://localhost:8080').send({ email: DEMO_ACCOUNT.email, password: DEMO_ACCOUNT.password }).expect(200);
+    await agent
+      .post('/api/auth/sign-in/email')
+      .set('Origin', 'http://localhost:8080')
+      .send({ email: DEMO_ACCOUNT.email, password: DEMO_ACCOUNT.password })
+      .expect(200);
     const { trips } = (await agent.get('/api/trips').expect(200)).body as { trips: { id: string; name: string }[] };
     expect(trips.map((t) => t.name).sort()).toEqual(['Desert spring loop', 'Highland loop']);
-    for (const [name, draft] of [['Highland loop', DEMO_TRIPS.highlandLoop], ['Desert spring loop', DEMO_TRIPS.desertSpringLoop]] as const) {
+    for (const [name, draft] of [
+      ['Highland loop', DEMO_TRIPS.highlandLoop],
+      ['Desert spring loop', DEMO_TRIPS.desertSpringLoop],
+    ] as const) {
       const trip = trips.find((t) => t.name === name);
       const budget = (await agent.get(`/api/trips/${trip?.id}/budget`).expect(200)).body;
       const direct = simulateTrip(draft);
@@ -160,7 +214,14 @@ describe('partial updates', () => {
   it('when only the name is sent, then the notes and dates stay as they were', async () => {
     const { agent } = await signUpAgent(ctx.app);
     const { trip } = await createTrip(agent, { notes: 'Book the rally field early' });
-    const renamed = (await agent.patch(`/api/trips/${trip.id}`).send({ version: trip.version, name: 'Renamed' }).expect(200)).body;
-    expect(renamed.trip).toMatchObject({ name: 'Renamed', notes: 'Book the rally field early', startDate: trip.startDate, endDate: trip.endDate });
+    const renamed = (
+      await agent.patch(`/api/trips/${trip.id}`).send({ version: trip.version, name: 'Renamed' }).expect(200)
+    ).body;
+    expect(renamed.trip).toMatchObject({
+      name: 'Renamed',
+      notes: 'Book the rally field early',
+      startDate: trip.startDate,
+      endDate: trip.endDate,
+    });
   });
 });

@@ -3,7 +3,15 @@
 import request, { type Agent } from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createTestApp, signUpAgent, type TestContext } from '../factories/test-app';
-import { addAppliance, addStop, createTrip, getDetail, grant, LIGHTS, stopOnNextFreeDay } from '../factories/trip-factory';
+import {
+  addAppliance,
+  addStop,
+  createTrip,
+  getDetail,
+  grant,
+  LIGHTS,
+  stopOnNextFreeDay,
+} from '../factories/trip-factory';
 
 const ACTORS = ['owner', 'planner', 'crew', 'viewer', 'stranger', 'anonymous'] as const;
 type Actor = (typeof ACTORS)[number];
@@ -30,10 +38,22 @@ const base = () => `/api/trips/${world.tripId}`;
 const ROWS: Row[] = [
   { name: 'GET trip', prepare: async () => ({ method: 'get', path: base() }), expected: needs('read') },
   { name: 'GET budget', prepare: async () => ({ method: 'get', path: `${base()}/budget` }), expected: needs('read') },
-  { name: 'GET activity', prepare: async () => ({ method: 'get', path: `${base()}/activity` }), expected: needs('read') },
+  {
+    name: 'GET activity',
+    prepare: async () => ({ method: 'get', path: `${base()}/activity` }),
+    expected: needs('read'),
+  },
   { name: 'GET members', prepare: async () => ({ method: 'get', path: `${base()}/members` }), expected: needs('read') },
-  { name: 'POST duplicate', prepare: async () => ({ method: 'post', path: `${base()}/duplicate` }), expected: needs('read', 201) },
-  { name: 'POST rig/save', prepare: async () => ({ method: 'post', path: `${base()}/rig/save`, body: { name: 'Kept rig' } }), expected: needs('read', 201) },
+  {
+    name: 'POST duplicate',
+    prepare: async () => ({ method: 'post', path: `${base()}/duplicate` }),
+    expected: needs('read', 201),
+  },
+  {
+    name: 'POST rig/save',
+    prepare: async () => ({ method: 'post', path: `${base()}/rig/save`, body: { name: 'Kept rig' } }),
+    expected: needs('read', 201),
+  },
   {
     name: 'PATCH trip',
     prepare: async () => {
@@ -47,18 +67,27 @@ const ROWS: Row[] = [
     prepare: async () => {
       // A fresh trip per cell, with the same members, so one success does not spoil the next cell.
       const { trip } = await createTrip(owner(), { name: 'Doomed' });
-      for (const role of ['planner', 'crew', 'viewer'] as const) grant(world.ctx.db, trip.id, world.callers[role].userId, role);
+      for (const role of ['planner', 'crew', 'viewer'] as const)
+        grant(world.ctx.db, trip.id, world.callers[role].userId, role);
       return { method: 'delete', path: `/api/trips/${trip.id}` };
     },
     expected: needs('owner', 204),
   },
-  { name: 'POST stop', prepare: async () => ({ method: 'post', path: `${base()}/stops`, body: { stop: stopOnNextFreeDay() } }), expected: needs('trip', 201) },
+  {
+    name: 'POST stop',
+    prepare: async () => ({ method: 'post', path: `${base()}/stops`, body: { stop: stopOnNextFreeDay() } }),
+    expected: needs('trip', 201),
+  },
   {
     name: 'PATCH stop',
     prepare: async () => {
       const stop = (await getDetail(owner(), world.tripId)).stops[0];
       if (!stop) throw new Error('no stop');
-      return { method: 'patch', path: `${base()}/stops/${stop.id}`, body: { version: stop.version, stop: { ...stop.stop, highC: stop.stop.highC + 0.5 } } };
+      return {
+        method: 'patch',
+        path: `${base()}/stops/${stop.id}`,
+        body: { version: stop.version, stop: { ...stop.stop, highC: stop.stop.highC + 0.5 } },
+      };
     },
     expected: needs('trip'),
   },
@@ -74,7 +103,11 @@ const ROWS: Row[] = [
     name: 'POST stops/reorder',
     prepare: async () => {
       const detail = await getDetail(owner(), world.tripId);
-      return { method: 'post', path: `${base()}/stops/reorder`, body: { tripVersion: detail.trip.version, stopIds: detail.stops.map((s) => s.id) } };
+      return {
+        method: 'post',
+        path: `${base()}/stops/reorder`,
+        body: { tripVersion: detail.trip.version, stopIds: detail.stops.map((s) => s.id) },
+      };
     },
     expected: needs('trip'),
   },
@@ -83,7 +116,11 @@ const ROWS: Row[] = [
     prepare: async () => {
       const drive = (await getDetail(owner(), world.tripId)).drives[0];
       if (!drive) throw new Error('no drive');
-      return { method: 'patch', path: `${base()}/drives/${drive.id}`, body: { version: drive.version, drive: { hoursOnRoad: 1, vehicleCharging: !drive.drive.vehicleCharging } } };
+      return {
+        method: 'patch',
+        path: `${base()}/drives/${drive.id}`,
+        body: { version: drive.version, drive: { hoursOnRoad: 1, vehicleCharging: !drive.drive.vehicleCharging } },
+      };
     },
     expected: needs('trip'),
   },
@@ -91,7 +128,11 @@ const ROWS: Row[] = [
     name: 'PUT rig',
     prepare: async () => {
       const { rig } = await getDetail(owner(), world.tripId);
-      return { method: 'put', path: `${base()}/rig`, body: { version: rig.version, rig: { ...rig.rig, name: `Rig ${Date.now()}` } } };
+      return {
+        method: 'put',
+        path: `${base()}/rig`,
+        body: { version: rig.version, rig: { ...rig.rig, name: `Rig ${Date.now()}` } },
+      };
     },
     expected: needs('trip'),
   },
@@ -106,14 +147,22 @@ const ROWS: Row[] = [
     },
     expected: needs('trip'),
   },
-  { name: 'POST appliance', prepare: async () => ({ method: 'post', path: `${base()}/appliances`, body: { appliance: LIGHTS } }), expected: needs('loads', 201) },
+  {
+    name: 'POST appliance',
+    prepare: async () => ({ method: 'post', path: `${base()}/appliances`, body: { appliance: LIGHTS } }),
+    expected: needs('loads', 201),
+  },
   {
     name: 'PATCH appliance',
     prepare: async () => {
       const item = (await getDetail(owner(), world.tripId)).appliances[0];
       if (!item) throw new Error('no appliance');
       const { id: _id, ...fields } = item.appliance;
-      return { method: 'patch', path: `${base()}/appliances/${item.id}`, body: { version: item.version, appliance: { ...fields, runningW: fields.runningW + 1 }, caretakerUserId: null } };
+      return {
+        method: 'patch',
+        path: `${base()}/appliances/${item.id}`,
+        body: { version: item.version, appliance: { ...fields, runningW: fields.runningW + 1 }, caretakerUserId: null },
+      };
     },
     expected: needs('loads'),
   },
@@ -122,7 +171,11 @@ const ROWS: Row[] = [
     prepare: async () => {
       const item = (await getDetail(owner(), world.tripId)).appliances[0];
       if (!item) throw new Error('no appliance');
-      return { method: 'put', path: `${base()}/appliances/${item.id}/schedule`, body: { version: item.version, schedule: { kind: 'always' } } };
+      return {
+        method: 'put',
+        path: `${base()}/appliances/${item.id}/schedule`,
+        body: { version: item.version, schedule: { kind: 'always' } },
+      };
     },
     expected: needs('loads'),
   },
@@ -146,13 +199,19 @@ const ROWS: Row[] = [
   { name: 'GET invites', prepare: async () => ({ method: 'get', path: `${base()}/invites` }), expected: needs('trip') },
   {
     name: 'POST invite (as viewer)',
-    prepare: async () => ({ method: 'post', path: `${base()}/invites`, body: { email: `guest-${crypto.randomUUID()}@example.test`, role: 'viewer' } }),
+    prepare: async () => ({
+      method: 'post',
+      path: `${base()}/invites`,
+      body: { email: `guest-${crypto.randomUUID()}@example.test`, role: 'viewer' },
+    }),
     expected: needs('trip', 201),
   },
   {
     name: 'POST invite resend',
     prepare: async () => {
-      const created = await owner().post(`${base()}/invites`).send({ email: `resend-${crypto.randomUUID()}@example.test`, role: 'crew' });
+      const created = await owner()
+        .post(`${base()}/invites`)
+        .send({ email: `resend-${crypto.randomUUID()}@example.test`, role: 'crew' });
       return { method: 'post', path: `${base()}/invites/${created.body.invite.id}/resend` };
     },
     expected: needs('owner'),
@@ -160,7 +219,9 @@ const ROWS: Row[] = [
   {
     name: 'DELETE invite',
     prepare: async () => {
-      const created = await owner().post(`${base()}/invites`).send({ email: `revoke-${crypto.randomUUID()}@example.test`, role: 'crew' });
+      const created = await owner()
+        .post(`${base()}/invites`)
+        .send({ email: `revoke-${crypto.randomUUID()}@example.test`, role: 'crew' });
       return { method: 'delete', path: `${base()}/invites/${created.body.invite.id}` };
     },
     expected: needs('owner', 204),
@@ -213,6 +274,9 @@ describe.each(ROWS)('$name', (row) => {
       actor,
       status: row.expected[actor],
     });
-    if (response.status >= 400) expect(response.body.error).toEqual(expect.objectContaining({ code: expect.any(String), message: expect.any(String) }));
+    if (response.status >= 400)
+      expect(response.body.error).toEqual(
+        expect.objectContaining({ code: expect.any(String), message: expect.any(String) }),
+      );
   });
 });

@@ -81,8 +81,16 @@ describe('fast paths against the calls they replace', () => {
       const input = engineInputSchema.parse(draft);
       const p = prepare(input);
       for (let i = 0; i < p.n; i++) {
-        const step = { minuteOfDay: p.minuteOfDay[i] ?? 0, dayIndex: p.dayIndex[i] ?? 0, dayType: p.travelDay[i] ? 'travel' as const : 'camp' as const, durationMin: (p.stepH[i] ?? 1) * 60 };
-        let ac = 0, dc = 0, heat = 0, running = 0;
+        const step = {
+          minuteOfDay: p.minuteOfDay[i] ?? 0,
+          dayIndex: p.dayIndex[i] ?? 0,
+          dayType: p.travelDay[i] ? ('travel' as const) : ('camp' as const),
+          durationMin: (p.stepH[i] ?? 1) * 60,
+        };
+        let ac = 0,
+          dc = 0,
+          heat = 0,
+          running = 0;
         for (const a of input.appliances) {
           const share = onShare(a, step, prevDayType(p, i), p.ambientC[i] ?? 15);
           const e = applianceStep(a, share, p.stepH[i] ?? 1);
@@ -94,7 +102,12 @@ describe('fast paths against the calls they replace', () => {
             heat += e.heatWh;
           }
         }
-        expect([p.acWh[i], p.dcWh[i], p.heatWh[i], p.acRunningW[i]], `step ${i} of ${input.trip.name}`).toEqual([ac, dc, heat, running]);
+        expect([p.acWh[i], p.dcWh[i], p.heatWh[i], p.acRunningW[i]], `step ${i} of ${input.trip.name}`).toEqual([
+          ac,
+          dc,
+          heat,
+          running,
+        ]);
         steps++;
       }
     }

@@ -6,7 +6,15 @@ import { findHeadroom, simulateTrip } from '@/shared/engine';
 import type { EngineInputDraft } from '@/shared/schemas';
 
 export type GoldenSummary = {
-  sha256: { result: string; ledger: string; days: string; headline: string; flags: string; band: string; headroom: string };
+  sha256: {
+    result: string;
+    ledger: string;
+    days: string;
+    headline: string;
+    flags: string;
+    band: string;
+    headroom: string;
+  };
   ledgerLength: number;
   ledgerSpots: unknown[];
   firstDay: unknown;
@@ -32,8 +40,12 @@ export function goldenSummary(input: EngineInputDraft): GoldenSummary {
   const h = findHeadroom(input);
   return {
     sha256: {
-      result: sha256(JSON.stringify(r)), ledger: sha256(JSON.stringify(r.ledger)), days: sha256(JSON.stringify(r.days)),
-      headline: sha256(JSON.stringify(r.headline)), flags: sha256(JSON.stringify(r.flags)), band: sha256(JSON.stringify(r.band)),
+      result: sha256(JSON.stringify(r)),
+      ledger: sha256(JSON.stringify(r.ledger)),
+      days: sha256(JSON.stringify(r.days)),
+      headline: sha256(JSON.stringify(r.headline)),
+      flags: sha256(JSON.stringify(r.flags)),
+      band: sha256(JSON.stringify(r.band)),
       headroom: sha256(JSON.stringify(h)),
     },
     ledgerLength: r.ledger.length,

@@ -31,7 +31,10 @@ describe('golden results', () => {
   it('when the battery is a hundredth of an amp-hour larger, then the stored result no longer matches', () => {
     const input = GOLDEN_CASES['demo-highland-loop'];
     if (!input) throw new Error('missing case');
-    const nudged = { ...input, rig: { ...input.rig, battery: { ...input.rig.battery, capacityAh: input.rig.battery.capacityAh + 0.01 } } };
+    const nudged = {
+      ...input,
+      rig: { ...input.rig, battery: { ...input.rig.battery, capacityAh: input.rig.battery.capacityAh + 0.01 } },
+    };
     const got = goldenSummary(nudged);
     const want = fixture('demo-highland-loop');
     expect(got.sha256.ledger).not.toBe(want.sha256.ledger);

@@ -40,24 +40,53 @@ function build(t: Arb): EngineInputDraft {
   const next = new Date(Date.parse(mid) + 3 * 3_600_000).toISOString();
   const depart = new Date(Date.parse(next) + t.days * 86_400_000).toISOString();
   const appliances: ApplianceInput[] = t.appliances.map((a, i) => ({
-    id: `a${i}`, name: `Load ${i}`, circuit: a.circuit, runningW: a.runningW, dutyCycle: a.dutyCycle,
+    id: `a${i}`,
+    name: `Load ${i}`,
+    circuit: a.circuit,
+    runningW: a.runningW,
+    dutyCycle: a.dutyCycle,
     schedule: { kind: 'routine', windows: [{ days: { kind: 'all' }, startHour: a.startHour, minutes: a.minutes }] },
   }));
   const stop = (name: string, arriveAt: string, departAt: string, hookup: boolean) => ({
-    name, lat: t.lat, lon: t.lon, timeZone: 'UTC', arriveAt, departAt, exposure: { kind: 'preset' as const, preset: t.exposure },
-    skyOutlook: t.sky, lowC: t.lowC, highC: t.lowC + 10, hookup: hookup ? { amps: 10, volts: 230 } : null,
+    name,
+    lat: t.lat,
+    lon: t.lon,
+    timeZone: 'UTC',
+    arriveAt,
+    departAt,
+    exposure: { kind: 'preset' as const, preset: t.exposure },
+    skyOutlook: t.sky,
+    lowC: t.lowC,
+    highC: t.lowC + 10,
+    hookup: hookup ? { amps: 10, volts: 230 } : null,
   });
   return {
-    trip: { name: 'Random', stops: [stop('A', arrive, mid, false), stop('B', next, depart, t.hookup)], drives: [{ hoursOnRoad: 2 }] },
+    trip: {
+      name: 'Random',
+      stops: [stop('A', arrive, mid, false), stop('B', next, depart, t.hookup)],
+      drives: [{ hoursOnRoad: 2 }],
+    },
     rig: {
       name: 'Random rig',
       battery: { chemistry: t.chemistry, capacityAh: t.capacityAh, nominalV: 12.8, initialSocPct: t.initialSocPct },
-      solarArrays: t.solarW > 0 ? [{ ratedW: t.solarW, mounting: t.tilted ? 'tilted' : 'flat', tiltDeg: t.tilted ? 30 : 0, azimuthDeg: t.lat >= 0 ? 180 : 0 }] : [],
+      solarArrays:
+        t.solarW > 0
+          ? [
+              {
+                ratedW: t.solarW,
+                mounting: t.tilted ? 'tilted' : 'flat',
+                tiltDeg: t.tilted ? 30 : 0,
+                azimuthDeg: t.lat >= 0 ? 180 : 0,
+              },
+            ]
+          : [],
       controller: t.solarW > 0 ? { kind: 'mppt', maxAmps: 60 } : null,
       inverter: { ratedW: 2000, efficiency: 0.9, idleW: 10 },
       shoreCharger: { amps: 20 },
       vehicleCharger: { kind: 'dc-dc', amps: 20 },
-      generator: t.generator ? { ratedW: 2000, fuel: 'petrol', mode: { kind: 'rule', startBelowSocPct: 40, stopAboveSocPct: 90 } } : null,
+      generator: t.generator
+        ? { ratedW: 2000, fuel: 'petrol', mode: { kind: 'rule', startBelowSocPct: 40, stopAboveSocPct: 90 } }
+        : null,
     },
     appliances,
     options: { skyBand: false },
@@ -72,57 +101,84 @@ const noGenerator = tripArb.map((t) => ({ ...t, generator: false }));
 
 describe('engine invariants', () => {
   it('when any trip is walked, then each hour’s energy balance closes within 0.1 %', () => {
-    fc.assert(fc.property(tripArb, (t) => {
-      const input = build(t);
-      const r = simulateTrip(input);
-      let prev = r.headline.capacityWh * (t.initialSocPct / 100);
-      for (const row of r.ledger) {
-        const inflow = row.solarUsedWh + row.vehicleWh + row.hookupWh + row.generatorWh + row.energyShortWh;
-        const outflow = row.acLoadWh + row.dcLoadWh + row.inverterLossWh + row.chargerLossWh + row.batteryLossWh + (row.storedWh - prev);
-        expect(Math.abs(inflow - outflow)).toBeLessThanOrEqual(1e-3 * Math.max(inflow, Math.abs(outflow), 1));
-        prev = row.storedWh;
-      }
-    }), { numRuns: RUNS });
+    fc.assert(
+      fc.property(tripArb, (t) => {
+        const input = build(t);
+        const r = simulateTrip(input);
+        let prev = r.headline.capacityWh * (t.initialSocPct / 100);
+        for (const row of r.ledger) {
+          const inflow = row.solarUsedWh + row.vehicleWh + row.hookupWh + row.generatorWh + row.energyShortWh;
+          const outflow =
+            row.acLoadWh +
+            row.dcLoadWh +
+            row.inverterLossWh +
+            row.chargerLossWh +
+            row.batteryLossWh +
+            (row.storedWh - prev);
+          expect(Math.abs(inflow - outflow)).toBeLessThanOrEqual(1e-3 * Math.max(inflow, Math.abs(outflow), 1));
+          prev = row.storedWh;
+        }
+      }),
+      { numRuns: RUNS },
+    );
   });
 
   it('when any trip is walked, then the state of charge stays within 0–100 % and nothing is NaN', () => {
-    fc.assert(fc.property(tripArb, (t) => {
-      const r = simulateTrip(build(t));
-      for (const row of r.ledger) {
-        expect(row.socPct).toBeGreaterThanOrEqual(0);
-        expect(row.socPct).toBeLessThanOrEqual(100 + 1e-9);
-        expect(Number.isFinite(row.storedWh + row.solarAvailableWh + row.acLoadWh)).toBe(true);
-      }
-    }), { numRuns: RUNS });
+    fc.assert(
+      fc.property(tripArb, (t) => {
+        const r = simulateTrip(build(t));
+        for (const row of r.ledger) {
+          expect(row.socPct).toBeGreaterThanOrEqual(0);
+          expect(row.socPct).toBeLessThanOrEqual(100 + 1e-9);
+          expect(Number.isFinite(row.storedWh + row.solarAvailableWh + row.acLoadWh)).toBe(true);
+        }
+      }),
+      { numRuns: RUNS },
+    );
   });
 
   it('when the battery grows, then the lowest charge never falls (no rule-driven generator)', () => {
-    fc.assert(fc.property(noGenerator, fc.integer({ min: 1, max: 400 }), (t, extra) => {
-      const base = simulateTrip(build(t)).headline.lowestSocPct;
-      const bigger = simulateTrip(withBattery(build(t), t.capacityAh + extra)).headline.lowestSocPct;
-      expect(bigger).toBeGreaterThanOrEqual(base - 1e-9);
-    }), { numRuns: RUNS });
+    fc.assert(
+      fc.property(noGenerator, fc.integer({ min: 1, max: 400 }), (t, extra) => {
+        const base = simulateTrip(build(t)).headline.lowestSocPct;
+        const bigger = simulateTrip(withBattery(build(t), t.capacityAh + extra)).headline.lowestSocPct;
+        expect(bigger).toBeGreaterThanOrEqual(base - 1e-9);
+      }),
+      { numRuns: RUNS },
+    );
   });
 
   it('when the solar array grows, then the lowest charge never falls (no rule-driven generator)', () => {
-    fc.assert(fc.property(noGenerator, fc.integer({ min: 1, max: 1000 }), (t, extra) => {
-      const base = simulateTrip(build(t)).headline.lowestSocPct;
-      const more = simulateTrip(build({ ...t, solarW: t.solarW + extra })).headline.lowestSocPct;
-      expect(more).toBeGreaterThanOrEqual(base - 1e-9);
-    }), { numRuns: RUNS });
+    fc.assert(
+      fc.property(noGenerator, fc.integer({ min: 1, max: 1000 }), (t, extra) => {
+        const base = simulateTrip(build(t)).headline.lowestSocPct;
+        const more = simulateTrip(build({ ...t, solarW: t.solarW + extra })).headline.lowestSocPct;
+        expect(more).toBeGreaterThanOrEqual(base - 1e-9);
+      }),
+      { numRuns: RUNS },
+    );
   });
 
   it('when a load is removed, then the lowest charge never falls (no rule-driven generator)', () => {
-    fc.assert(fc.property(noGenerator.filter((t) => t.appliances.length > 0), (t) => {
-      const base = simulateTrip(build(t)).headline.lowestSocPct;
-      const fewer = simulateTrip(build({ ...t, appliances: t.appliances.slice(1) })).headline.lowestSocPct;
-      expect(fewer).toBeGreaterThanOrEqual(base - 1e-9);
-    }), { numRuns: RUNS });
+    fc.assert(
+      fc.property(
+        noGenerator.filter((t) => t.appliances.length > 0),
+        (t) => {
+          const base = simulateTrip(build(t)).headline.lowestSocPct;
+          const fewer = simulateTrip(build({ ...t, appliances: t.appliances.slice(1) })).headline.lowestSocPct;
+          expect(fewer).toBeGreaterThanOrEqual(base - 1e-9);
+        },
+      ),
+      { numRuns: RUNS },
+    );
   });
 
   it('when the same input is simulated twice, then the output is identical', () => {
-    fc.assert(fc.property(tripArb, (t) => {
-      expect(JSON.stringify(simulateTrip(build(t)))).toBe(JSON.stringify(simulateTrip(build(t))));
-    }), { numRuns: 20 });
+    fc.assert(
+      fc.property(tripArb, (t) => {
+        expect(JSON.stringify(simulateTrip(build(t)))).toBe(JSON.stringify(simulateTrip(build(t))));
+      }),
+      { numRuns: 20 },
+    );
   });
 });

@@ -34,7 +34,10 @@ describe('engine input schemas', () => {
   });
 
   it('when a negative battery capacity is given, then simulateTrip throws a field-level error instead of a number', () => {
-    const bad = { ...highlandLoop, rig: { ...highlandLoop.rig, battery: { chemistry: 'lifepo4', capacityAh: -5, nominalV: 12.8 } } };
+    const bad = {
+      ...highlandLoop,
+      rig: { ...highlandLoop.rig, battery: { chemistry: 'lifepo4', capacityAh: -5, nominalV: 12.8 } },
+    };
     expect(() => simulateTrip(bad as typeof highlandLoop)).toThrow(/capacityAh/);
   });
 

@@ -13,7 +13,9 @@ describe('closed-form cases', () => {
   });
 
   it('when an AC load runs through the inverter, then the drain also divides by the inverter efficiency', () => {
-    const r = simulateTrip(simpleTrip({ capacityAh: 200, inverter: true, appliances: [constantLoad('load', 'ac', 45)] }));
+    const r = simulateTrip(
+      simpleTrip({ capacityAh: 200, inverter: true, appliances: [constantLoad('load', 'ac', 45)] }),
+    );
     const expectedWh = (45 * 24) / 0.9 / CHEMISTRY.lifepo4.dischargeEfficiency;
     expect(200 * 12.8 - (r.ledger.at(-1)?.storedWh ?? 0)).toBeCloseTo(expectedWh, 6);
   });
@@ -36,13 +38,19 @@ describe('rules of thumb (common practice)', () => {
     expect(available).toBeLessThan(7000);
   });
 
-  it.each(['clear', 'broken-cloud', 'overcast'] as const)('when the sky is %s, then deep forest harvests about 5 % of an open site (3.5–6.5 %)', (sky) => {
-    const day = (exposure: 'open' | 'deep-forest'): number =>
-      simulateTrip(simpleTrip({ solarW: 1000, capacityAh: 2000, initialSocPct: 10, exposure, sky })).ledger.reduce((s, row) => s + row.solarAvailableWh, 0);
-    const share = day('deep-forest') / day('open');
-    expect(share).toBeGreaterThan(0.035);
-    expect(share).toBeLessThan(0.065);
-  });
+  it.each(['clear', 'broken-cloud', 'overcast'] as const)(
+    'when the sky is %s, then deep forest harvests about 5 % of an open site (3.5–6.5 %)',
+    (sky) => {
+      const day = (exposure: 'open' | 'deep-forest'): number =>
+        simulateTrip(simpleTrip({ solarW: 1000, capacityAh: 2000, initialSocPct: 10, exposure, sky })).ledger.reduce(
+          (s, row) => s + row.solarAvailableWh,
+          0,
+        );
+      const share = day('deep-forest') / day('open');
+      expect(share).toBeGreaterThan(0.035);
+      expect(share).toBeLessThan(0.065);
+    },
+  );
 
   it('when the sky worsens level by level, then the day harvest falls', () => {
     const day = (sky: 'clear' | 'hazy' | 'broken-cloud' | 'overcast'): number =>
@@ -54,7 +62,24 @@ describe('rules of thumb (common practice)', () => {
 });
 
 describe('time zones and daylight saving', () => {
-  const autumn = (zone: string) => simpleTrip({ zone, arrive: '2027-10-30T12:00+01:00', depart: '2027-11-01T12:00Z', appliances: [{ id: 'lamp', name: 'Lamp', circuit: 'dc', runningW: 60, schedule: { kind: 'routine', windows: [{ days: { kind: 'all' }, startHour: 1, startMinute: 0, minutes: 60 }] } }] });
+  const autumn = (zone: string) =>
+    simpleTrip({
+      zone,
+      arrive: '2027-10-30T12:00+01:00',
+      depart: '2027-11-01T12:00Z',
+      appliances: [
+        {
+          id: 'lamp',
+          name: 'Lamp',
+          circuit: 'dc',
+          runningW: 60,
+          schedule: {
+            kind: 'routine',
+            windows: [{ days: { kind: 'all' }, startHour: 1, startMinute: 0, minutes: 60 }],
+          },
+        },
+      ],
+    });
 
   it('when the clocks go back inside a trip, then no hour is dropped or doubled in UTC', () => {
     const r = simulateTrip(autumn('Europe/London'));
@@ -78,7 +103,16 @@ describe('demo trips', () => {
   const desert = simulateTrip(desertSpringLoop);
 
   it('when the Highland loop is simulated, then every day has a sheet and the band brackets the plan', () => {
-    expect(highland.days.map((d) => d.date)).toEqual(['2027-09-12', '2027-09-13', '2027-09-14', '2027-09-15', '2027-09-16', '2027-09-17', '2027-09-18', '2027-09-19']);
+    expect(highland.days.map((d) => d.date)).toEqual([
+      '2027-09-12',
+      '2027-09-13',
+      '2027-09-14',
+      '2027-09-15',
+      '2027-09-16',
+      '2027-09-17',
+      '2027-09-18',
+      '2027-09-19',
+    ]);
     expect(highland.band?.better.lowestSocPct).toBeGreaterThanOrEqual(highland.headline.lowestSocPct);
     expect(highland.band?.worse.lowestSocPct).toBeLessThanOrEqual(highland.headline.lowestSocPct);
   });
@@ -141,7 +175,10 @@ describe('headroom finder', () => {
     const battery = r.levers.find((l) => l.lever === 'battery');
     expect(battery?.status).toBe('found');
     expect(battery?.resultingLowestSocPct).toBeGreaterThanOrEqual(20);
-    const less = simulateTrip({ ...input, rig: { ...input.rig, battery: { ...input.rig.battery, capacityAh: 50 + (battery?.amount ?? 0) - 10 } } });
+    const less = simulateTrip({
+      ...input,
+      rig: { ...input.rig, battery: { ...input.rig.battery, capacityAh: 50 + (battery?.amount ?? 0) - 10 } },
+    });
     expect(less.headline.lowestSocPct).toBeLessThan(20);
     expect(r.levers.find((l) => l.lever === 'solar')?.status).toBe('not-applicable');
   });
@@ -155,7 +192,11 @@ describe('other flags', () => {
   });
 
   it('when a 3 kW heater burns through the propane, then the run-out is flagged with the extra kilograms', () => {
-    const input = simpleTrip({ appliances: [{ id: 'heat', name: 'Heater', circuit: 'fuel', runningW: 0, heatInputW: 3000, schedule: { kind: 'always' } }] });
+    const input = simpleTrip({
+      appliances: [
+        { id: 'heat', name: 'Heater', circuit: 'fuel', runningW: 0, heatInputW: 3000, schedule: { kind: 'always' } },
+      ],
+    });
     const r = simulateTrip({ ...input, rig: { ...input.rig, propaneTanks: [{ propaneKg: 2 }] } });
     const flag = r.flags.find((f) => f.kind === 'propane-out');
     expect(flag?.fixes[0]?.params.extraKg).toBeCloseTo((3 * 24) / 14.07 - 2, 0);

@@ -6,9 +6,27 @@
 import { DateTime } from 'luxon';
 import { describe, expect, it } from 'vitest';
 import {
-  ambientC, beamFactor, CHEMISTRY, controllerLimitW, controllerOutputW, dayOfYearUtc, diffuseFactor, effectiveNoctC, erbs,
-  extraterrestrialW, haurwitzGhi, ineichenPerez, kastenYoungAirMass, noctCellTempC, planeOfArray, pressureRatio, pvDcPowerW,
-  resolveExposure, shiftSky, SKY_CLEARNESS, sunPosition,
+  ambientC,
+  beamFactor,
+  CHEMISTRY,
+  controllerLimitW,
+  controllerOutputW,
+  dayOfYearUtc,
+  diffuseFactor,
+  effectiveNoctC,
+  erbs,
+  extraterrestrialW,
+  haurwitzGhi,
+  ineichenPerez,
+  kastenYoungAirMass,
+  noctCellTempC,
+  planeOfArray,
+  pressureRatio,
+  pvDcPowerW,
+  resolveExposure,
+  shiftSky,
+  SKY_CLEARNESS,
+  sunPosition,
 } from '@/shared/engine';
 import { prepare } from '@/shared/engine/prepare';
 import { solarSeries } from '@/shared/engine/solar';
@@ -18,7 +36,14 @@ const HOUR_MS = 3_600_000;
 const SIMPSON = [1 / 6, 4 / 6, 1 / 6];
 
 /** Controller output at one instant through the model functions, for the stop the rig is at. */
-function chainW(input: EngineInput, stopIndex: number, utcMs: number, dayOfYear: number, ambient: number, skyShift: number): { watts: number; poaFirst: number } {
+function chainW(
+  input: EngineInput,
+  stopIndex: number,
+  utcMs: number,
+  dayOfYear: number,
+  ambient: number,
+  skyShift: number,
+): { watts: number; poaFirst: number } {
   const stop = input.trip.stops[stopIndex];
   if (!stop) throw new Error('no stop');
   const { rig, options } = input;
@@ -27,9 +52,16 @@ function chainW(input: EngineInput, stopIndex: number, utcMs: number, dayOfYear:
   const dniExtra = extraterrestrialW(dayOfYear, options.solarConstantWm2);
   let ghiClear = 0;
   if (sun.altitudeDeg > 0) {
-    ghiClear = stop.linkeTurbidity === undefined
-      ? haurwitzGhi(zenith)
-      : ineichenPerez({ zenithDeg: zenith, airMassAbsolute: kastenYoungAirMass(zenith) * pressureRatio(stop.elevationM), linkeTurbidity: stop.linkeTurbidity, elevationM: stop.elevationM, dniExtra }).ghi;
+    ghiClear =
+      stop.linkeTurbidity === undefined
+        ? haurwitzGhi(zenith)
+        : ineichenPerez({
+            zenithDeg: zenith,
+            airMassAbsolute: kastenYoungAirMass(zenith) * pressureRatio(stop.elevationM),
+            linkeTurbidity: stop.linkeTurbidity,
+            elevationM: stop.elevationM,
+            dniExtra,
+          }).ghi;
   }
   const ghiSky = ghiClear * SKY_CLEARNESS[shiftSky(stop.skyOutlook, skyShift)];
   const split = erbs(ghiSky, zenith, dniExtra);
@@ -44,9 +76,21 @@ function chainW(input: EngineInput, stopIndex: number, utcMs: number, dayOfYear:
   let poaFirst = 0;
   rig.solarArrays.forEach((a, j) => {
     const tilt = a.mounting === 'tilted' ? a.tiltDeg : 0;
-    const poa = ghi > 0 || dni > 0
-      ? planeOfArray({ ghi, dni, dhi, dniExtra, zenithDeg: zenith, sunAzDeg: sun.azimuthDeg, tiltDeg: tilt, surfaceAzDeg: a.azimuthDeg, reflectance: options.groundReflectance, model: options.transposition })
-      : 0;
+    const poa =
+      ghi > 0 || dni > 0
+        ? planeOfArray({
+            ghi,
+            dni,
+            dhi,
+            dniExtra,
+            zenithDeg: zenith,
+            sunAzDeg: sun.azimuthDeg,
+            tiltDeg: tilt,
+            surfaceAzDeg: a.azimuthDeg,
+            reflectance: options.groundReflectance,
+            model: options.transposition,
+          })
+        : 0;
     if (j === 0) poaFirst = poa;
     const cell = noctCellTempC(ambient, poa, effectiveNoctC(a.noctC, a.fit));
     watts += controllerOutputW(ctrl, pvDcPowerW(a.ratedW, poa, cell, a.gammaPctPerC / 100, a.derate), chargeV, a.vmpV);
@@ -61,22 +105,64 @@ function closeTo(actual: number, expected: number): boolean {
 type Case = { name: string; draft: EngineInputDraft; shifts: number[] };
 
 const stop = (o: Record<string, unknown>): EngineInputDraft['trip']['stops'][number] => ({
-  name: 'Site', lat: 44.5, lon: -110.6, timeZone: 'America/Denver', arriveAt: '2027-06-20T06:00Z', departAt: '2027-06-22T06:00Z', lowC: 6, highC: 28, ...o,
+  name: 'Site',
+  lat: 44.5,
+  lon: -110.6,
+  timeZone: 'America/Denver',
+  arriveAt: '2027-06-20T06:00Z',
+  departAt: '2027-06-22T06:00Z',
+  lowC: 6,
+  highC: 28,
+  ...o,
 });
 
-const rigOf = (o: Record<string, unknown>): EngineInputDraft['rig'] => ({ name: 'Rig', battery: { chemistry: 'lifepo4', capacityAh: 300, nominalV: 12.8 }, ...o });
+const rigOf = (o: Record<string, unknown>): EngineInputDraft['rig'] => ({
+  name: 'Rig',
+  battery: { chemistry: 'lifepo4', capacityAh: 300, nominalV: 12.8 },
+  ...o,
+});
 
 const CASES: Case[] = [
   {
     name: 'flat array, MPPT, open site, Hay–Davies, clear, Haurwitz',
-    draft: { trip: { name: 'T', stops: [stop({ skyOutlook: 'clear' })], drives: [] }, rig: rigOf({ solarArrays: [{ ratedW: 600, mounting: 'flat', fit: 'flush' }], controller: { kind: 'mppt', maxAmps: 80 } }), options: { transposition: 'hay-davies' } },
+    draft: {
+      trip: { name: 'T', stops: [stop({ skyOutlook: 'clear' })], drives: [] },
+      rig: rigOf({
+        solarArrays: [{ ratedW: 600, mounting: 'flat', fit: 'flush' }],
+        controller: { kind: 'mppt', maxAmps: 80 },
+      }),
+      options: { transposition: 'hay-davies' },
+    },
     shifts: [0, 1],
   },
   {
     name: 'tilted and flat arrays, PWM, custom horizon with canopy, isotropic, hazy, Ineichen–Perez',
     draft: {
-      trip: { name: 'T', stops: [stop({ lat: -33.9, lon: 18.4, timeZone: 'Africa/Johannesburg', arriveAt: '2027-03-10T02:00Z', departAt: '2027-03-12T02:00Z', elevationM: 900, linkeTurbidity: 3.5, skyOutlook: 'hazy', exposure: { kind: 'custom', horizonDeg: [5, 10, 30, 45, 20, 10, 15, 25], canopyTransmittance: 0.3 } })], drives: [] },
-      rig: rigOf({ battery: { chemistry: 'agm', capacityAh: 200, nominalV: 12 }, solarArrays: [{ ratedW: 200, mounting: 'tilted', tiltDeg: 35, azimuthDeg: 20, fit: 'racked', vmpV: 19 }, { ratedW: 150, mounting: 'flat', fit: 'flush', vmpV: 17.5 }], controller: { kind: 'pwm', maxAmps: 40 } }),
+      trip: {
+        name: 'T',
+        stops: [
+          stop({
+            lat: -33.9,
+            lon: 18.4,
+            timeZone: 'Africa/Johannesburg',
+            arriveAt: '2027-03-10T02:00Z',
+            departAt: '2027-03-12T02:00Z',
+            elevationM: 900,
+            linkeTurbidity: 3.5,
+            skyOutlook: 'hazy',
+            exposure: { kind: 'custom', horizonDeg: [5, 10, 30, 45, 20, 10, 15, 25], canopyTransmittance: 0.3 },
+          }),
+        ],
+        drives: [],
+      },
+      rig: rigOf({
+        battery: { chemistry: 'agm', capacityAh: 200, nominalV: 12 },
+        solarArrays: [
+          { ratedW: 200, mounting: 'tilted', tiltDeg: 35, azimuthDeg: 20, fit: 'racked', vmpV: 19 },
+          { ratedW: 150, mounting: 'flat', fit: 'flush', vmpV: 17.5 },
+        ],
+        controller: { kind: 'pwm', maxAmps: 40 },
+      }),
       options: { transposition: 'isotropic', groundReflectance: 0.3 },
     },
     shifts: [0, -1],
@@ -84,8 +170,25 @@ const CASES: Case[] = [
   {
     name: 'tilted array, MPPT capped by its current, partial-shade preset, Hay–Davies, broken cloud',
     draft: {
-      trip: { name: 'T', stops: [stop({ lat: 51.2, lon: 7.1, timeZone: 'Europe/Berlin', arriveAt: '2027-07-01T03:00Z', departAt: '2027-07-03T03:00Z', skyOutlook: 'broken-cloud', exposure: { kind: 'preset', preset: 'partial-shade' } })], drives: [] },
-      rig: rigOf({ solarArrays: [{ ratedW: 900, mounting: 'tilted', tiltDeg: 50, azimuthDeg: 200, fit: 'racked' }], controller: { kind: 'mppt', maxAmps: 12 } }),
+      trip: {
+        name: 'T',
+        stops: [
+          stop({
+            lat: 51.2,
+            lon: 7.1,
+            timeZone: 'Europe/Berlin',
+            arriveAt: '2027-07-01T03:00Z',
+            departAt: '2027-07-03T03:00Z',
+            skyOutlook: 'broken-cloud',
+            exposure: { kind: 'preset', preset: 'partial-shade' },
+          }),
+        ],
+        drives: [],
+      },
+      rig: rigOf({
+        solarArrays: [{ ratedW: 900, mounting: 'tilted', tiltDeg: 50, azimuthDeg: 200, fit: 'racked' }],
+        controller: { kind: 'mppt', maxAmps: 12 },
+      }),
       options: { transposition: 'hay-davies' },
     },
     shifts: [0, -1, 1],

@@ -7,7 +7,11 @@ import { describe, expect, it } from 'vitest';
 function runWithTz(tz: string): { machineOffsetMin: number; rest: string } {
   const cli = resolve(__dirname, '../../node_modules/tsx/dist/cli.mjs');
   const script = resolve(__dirname, 'tz-run.ts');
-  const r = spawnSync(process.execPath, [cli, script], { env: { ...process.env, TZ: tz }, encoding: 'utf8', maxBuffer: 64 * 1024 * 1024 });
+  const r = spawnSync(process.execPath, [cli, script], {
+    env: { ...process.env, TZ: tz },
+    encoding: 'utf8',
+    maxBuffer: 64 * 1024 * 1024,
+  });
   if (r.status !== 0) throw new Error(r.stderr);
   const parsed = JSON.parse(r.stdout) as { machineOffsetMin: number; results: unknown; headroom: unknown };
   return { machineOffsetMin: parsed.machineOffsetMin, rest: JSON.stringify([parsed.results, parsed.headroom]) };

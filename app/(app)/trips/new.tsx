@@ -7,7 +7,11 @@ import { showToast } from '@/stores/toast-store';
 export default function NewTripRoute() {
   const router = useRouter();
   return (
-    <Screen testID="new-trip-screen" title="New trip" subtitle="Name it, give its dates and pick the rig it runs on. Stops and appliances come next.">
+    <Screen
+      testID="new-trip-screen"
+      title="New trip"
+      subtitle="Name it, give its dates and pick the rig it runs on. Stops and appliances come next."
+    >
       <Card>
         <NewTripForm
           onCreated={(detail) => {
