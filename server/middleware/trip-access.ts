@@ -23,7 +23,7 @@ declare global {
 export const idParam = z.string().min(1).max(64);
 
 /** A member's role; a trip shared to one of the user's clubs reads as viewer. */
-function resolveAccess(db: Db, tripId: string, userId: string): { role: Role; viaClub: boolean } | undefined {
+export function resolveAccess(db: Db, tripId: string, userId: string): { role: Role; viaClub: boolean } | undefined {
   const membership = findMembership(db, tripId, userId);
   if (membership) return { role: membership.role, viaClub: false };
   return sharedToUserClub(db, tripId, userId) ? { role: 'viewer', viaClub: true } : undefined;

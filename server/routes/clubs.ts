@@ -13,7 +13,7 @@ import {
   listPendingClubInvites,
   setClubInvitesMailFailed,
 } from '@/db/queries/clubs';
-import { findMembership, logActivity } from '@/db/queries/trips';
+import { logActivity } from '@/db/queries/trips';
 import { clubInvites, clubMembers, clubs, clubTrips } from '@/db/schema/clubs';
 import { can } from '@/shared/schemas/roles';
 import {
@@ -31,7 +31,7 @@ import { INVITE_LIFETIME_MS, isoDay, newInviteToken } from '../invite-tokens';
 import { MailSendError, type Mailer } from '../mail/mailer';
 import { clubInviteMail } from '../mail/templates';
 import { currentUser } from '../middleware/require-session';
-import { idParam } from '../middleware/trip-access';
+import { idParam, resolveAccess } from '../middleware/trip-access';
 
 type Deps = { db: Db; now: () => Date; mailer: Mailer; publicUrl: string; invitesPerHour: number };
 
@@ -245,11 +245,11 @@ export function clubsRouter({ db, now, mailer, publicUrl, invitesPerHour: perHou
     const clubId = idParam.parse(req.params.clubId);
     organiserOrThrow(db, clubId, me.id);
     const { tripId } = shareTripRequestSchema.parse(req.body);
-    const membership = findMembership(db, tripId, me.id);
-    if (!membership) throw notFound('That trip was not found.');
+    const access = resolveAccess(db, tripId, me.id);
+    if (!access) throw notFound('That trip was not found.');
     // Sharing widens who reads the trip, so it is the owner's call alone (as inviting a planner is);
     // the owner also sees every share on the People tab and can withdraw it.
-    if (!can(membership.role, 'manageMembers'))
+    if (!can(access.role, 'manageMembers'))
       throw new HttpError(403, 'forbidden', 'Only the trip’s owner can share it to a club.');
     const club = db.select({ name: clubs.name }).from(clubs).where(eq(clubs.id, clubId)).get();
     db.transaction((tx) => {
