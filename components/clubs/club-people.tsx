@@ -2,6 +2,7 @@ import { StyleSheet, View } from 'react-native';
 import { NotSentNote } from '@/components/invites/not-sent-note';
 import { ConfirmAction } from '@/components/people/confirm-action';
 import { Button } from '@/components/ui/button';
+import { rowStyles } from '@/components/theme/rows';
 import { colors, radii, space } from '@/components/theme/tokens';
 import { Text } from '@/components/ui/text';
 import type { ClubDetail } from '@/shared/schemas/sharing';
@@ -44,7 +45,7 @@ export function ClubPendingInvites({ detail }: { detail: ClubDetail }) {
   return (
     <View testID="club-pending-invites">
       {detail.pendingInvites.map((invite) => (
-        <View key={invite.id} style={styles.invite} testID={`club-invite-${invite.id}`}>
+        <View key={invite.id} style={rowStyles.wrapping} testID={`club-invite-${invite.id}`}>
           <View style={styles.name}>
             <Text variant="label">{invite.name ?? invite.email}</Text>
             <Text variant="caption" color="inkSoft">
@@ -88,15 +89,6 @@ export function ClubPendingInvites({ detail }: { detail: ClubDetail }) {
 const styles = StyleSheet.create({
   row: {
     flexDirection: 'row',
-    alignItems: 'center',
-    gap: space.sm,
-    paddingVertical: space.sm,
-    borderBottomWidth: 1,
-    borderBottomColor: colors.line,
-  },
-  invite: {
-    flexDirection: 'row',
-    flexWrap: 'wrap',
     alignItems: 'center',
     gap: space.sm,
     paddingVertical: space.sm,

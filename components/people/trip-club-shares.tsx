@@ -1,5 +1,6 @@
 import { StyleSheet, View } from 'react-native';
-import { colors, space } from '@/components/theme/tokens';
+import { rowStyles } from '@/components/theme/rows';
+import { space } from '@/components/theme/tokens';
 import { QueryError } from '@/components/ui/query-error';
 import { Skeleton } from '@/components/ui/skeleton';
 import { Text } from '@/components/ui/text';
@@ -16,8 +17,8 @@ function ShareRow({ tripId, share, canWithdraw }: { tripId: string; share: TripS
   const withdraw = useTripShareWithdrawMutation(tripId);
   const households = `${share.memberCount} ${share.memberCount === 1 ? 'household' : 'households'}`;
   return (
-    <View style={styles.row} testID={`trip-share-${share.clubId}`}>
-      <View style={styles.text}>
+    <View style={rowStyles.wrapping} testID={`trip-share-${share.clubId}`}>
+      <View style={rowStyles.text}>
         <Text variant="label">{share.clubName}</Text>
         <Text variant="caption" color="inkSoft">
           {households} can read it · shared{share.sharedByName ? ` by ${share.sharedByName}` : ''} on{' '}
@@ -80,16 +81,4 @@ export function TripClubShares({ tripId, isOwner }: { tripId: string; isOwner: b
   );
 }
 
-const styles = StyleSheet.create({
-  wrap: { gap: space.lg },
-  row: {
-    flexDirection: 'row',
-    flexWrap: 'wrap',
-    alignItems: 'center',
-    gap: space.sm,
-    paddingVertical: space.sm,
-    borderBottomWidth: 1,
-    borderBottomColor: colors.line,
-  },
-  text: { flex: 1, minWidth: 160 },
-});
+const styles = StyleSheet.create({ wrap: { gap: space.lg } });

@@ -41,20 +41,21 @@ export function listClubMembers(db: DbExecutor, clubId: string) {
     .all();
 }
 
-/** Invites still waiting for an answer: not used, not withdrawn, not expired (optionally only to some addresses). */
+/** An invite of the club still waiting for an answer: not used, not withdrawn, not expired. */
+const waitingIn = (clubId: string, now: Date) =>
+  and(
+    eq(clubInvites.clubId, clubId),
+    isNull(clubInvites.acceptedAt),
+    isNull(clubInvites.revokedAt),
+    gt(clubInvites.expiresAt, now),
+  );
+
+/** The club's waiting invites (optionally only those to some addresses). */
 export function listPendingClubInvites(db: DbExecutor, clubId: string, now: Date, emails?: string[]) {
   return db
     .select()
     .from(clubInvites)
-    .where(
-      and(
-        eq(clubInvites.clubId, clubId),
-        isNull(clubInvites.acceptedAt),
-        isNull(clubInvites.revokedAt),
-        gt(clubInvites.expiresAt, now),
-        emails ? inArray(clubInvites.email, emails) : undefined,
-      ),
-    )
+    .where(and(waitingIn(clubId, now), emails ? inArray(clubInvites.email, emails) : undefined))
     .orderBy(asc(clubInvites.email))
     .all();
 }
@@ -76,15 +77,7 @@ export function findPendingClubInvite(db: DbExecutor, clubId: string, inviteId: 
   return db
     .select()
     .from(clubInvites)
-    .where(
-      and(
-        eq(clubInvites.clubId, clubId),
-        eq(clubInvites.id, inviteId),
-        isNull(clubInvites.acceptedAt),
-        isNull(clubInvites.revokedAt),
-        gt(clubInvites.expiresAt, now),
-      ),
-    )
+    .where(and(waitingIn(clubId, now), eq(clubInvites.id, inviteId)))
     .get();
 }
 

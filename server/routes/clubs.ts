@@ -50,6 +50,22 @@ function organiserOrThrow(db: Db, clubId: string, userId: string): void {
 export function clubsRouter({ db, now, mailer, publicUrl, invitesPerHour: perHour }: Deps): Router {
   const router = Router();
 
+  const letter = (
+    to: { email: string; name: string | null },
+    inviterName: string,
+    clubName: string,
+    token: string,
+    expiresAt: Date,
+  ) =>
+    clubInviteMail({
+      to: to.email,
+      ...(to.name ? { name: to.name } : {}),
+      inviterName,
+      clubName,
+      url: `${publicUrl}/club-invites/${token}`,
+      expiresOn: isoDay(expiresAt),
+    });
+
   router.get('/', (_req, res) => {
     res.json({ clubs: listClubsForUser(db, currentUser(res).id) });
   });
@@ -157,15 +173,7 @@ export function clubsRouter({ db, now, mailer, publicUrl, invitesPerHour: perHou
             expiresAt,
           })
           .run();
-        const message = clubInviteMail({
-          to: recipient.email,
-          ...(recipient.name ? { name: recipient.name } : {}),
-          inviterName: me.name,
-          clubName: club.name,
-          url: `${publicUrl}/club-invites/${token}`,
-          expiresOn: isoDay(expiresAt),
-        });
-        return { item: { id, recipient }, message };
+        return { item: { id, recipient }, message: letter(recipient, me.name, club.name, token, expiresAt) };
       });
     });
     const delivery = await deliverAll(mailer, letters);
@@ -209,16 +217,7 @@ export function clubsRouter({ db, now, mailer, publicUrl, invitesPerHour: perHou
       tx.update(clubInvites).set({ tokenHash: hash, expiresAt }).where(eq(clubInvites.id, invite.id)).run();
     });
     try {
-      await mailer.send(
-        clubInviteMail({
-          to: invite.email,
-          ...(invite.name ? { name: invite.name } : {}),
-          inviterName: me.name,
-          clubName: club.name,
-          url: `${publicUrl}/club-invites/${token}`,
-          expiresOn: isoDay(expiresAt),
-        }),
-      );
+      await mailer.send(letter(invite, me.name, club.name, token, expiresAt));
     } catch (error) {
       setClubInvitesMailFailed(db, [invite.id], now());
       throw mailFailed(error, `The invite to ${invite.email} was not sent.`);
