@@ -13,8 +13,11 @@ import { ShareToClub } from './share-to-club';
 
 const day = (iso: string) => new Date(iso).toLocaleDateString('en-GB', { day: 'numeric', month: 'short' });
 
-function ShareRow({ tripId, share, canWithdraw }: { tripId: string; share: TripShare; canWithdraw: boolean }) {
-  const withdraw = useTripShareWithdrawMutation(tripId);
+type Withdraw = ReturnType<typeof useTripShareWithdrawMutation>;
+
+// The withdraw mutation lives in the list, not the row: the row unmounts when the share is gone,
+// and a mutation's own callbacks (the toast) only run while its component is mounted.
+function ShareRow({ share, withdraw }: { share: TripShare; withdraw?: Withdraw }) {
   const households = `${share.memberCount} ${share.memberCount === 1 ? 'household' : 'households'}`;
   return (
     <View style={rowStyles.wrapping} testID={`trip-share-${share.clubId}`}>
@@ -25,13 +28,13 @@ function ShareRow({ tripId, share, canWithdraw }: { tripId: string; share: TripS
           {day(share.sharedAt)}
         </Text>
       </View>
-      {canWithdraw ? (
+      {withdraw ? (
         <ConfirmAction
           testID={`trip-share-${share.clubId}-withdraw`}
           label="Withdraw"
           question={`Stop sharing with ${share.clubName}? Its members lose access at once; copies they made stay theirs.`}
           confirmLabel="Yes, withdraw"
-          busy={withdraw.isPending}
+          busy={withdraw.isPending && withdraw.variables === share.clubId}
           onConfirm={() =>
             withdraw.mutate(share.clubId, {
               onSuccess: () => showToast(`${share.clubName} no longer sees this trip.`),
@@ -53,6 +56,7 @@ function ShareRow({ tripId, share, canWithdraw }: { tripId: string; share: TripS
  */
 export function TripClubShares({ tripId, isOwner }: { tripId: string; isOwner: boolean }) {
   const shares = useTripSharesQuery(tripId, true);
+  const withdraw = useTripShareWithdrawMutation(tripId);
   if (shares.isPending) return <Skeleton testID="trip-shares-loading" height={64} />;
   if (shares.isError)
     return <QueryError testID="trip-shares-error" error={shares.error} onRetry={() => void shares.refetch()} />;
@@ -66,7 +70,7 @@ export function TripClubShares({ tripId, isOwner }: { tripId: string; isOwner: b
       ) : (
         <View testID="trip-shares">
           {list.map((share) => (
-            <ShareRow key={share.clubId} tripId={tripId} share={share} canWithdraw={isOwner} />
+            <ShareRow key={share.clubId} share={share} {...(isOwner ? { withdraw } : {})} />
           ))}
         </View>
       )}
