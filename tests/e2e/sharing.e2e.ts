@@ -183,7 +183,7 @@ describe('sharing a trip by e-mail', () => {
 });
 
 describe.each(Object.entries(VIEWPORTS))('clubs at %s width', (name, viewport) => {
-  it('when the organiser creates a club and invites households with one bad address (pasted on a phone, a CSV file on a laptop), then the good ones are sent and the bad one is reported by line', async () => {
+  it('when the organiser creates a club and invites households with one bad address (pasted on a phone, a CSV file on a laptop), then the good ones are sent, the bad one is reported by line, and the trip’s People tab lists the club share until the owner withdraws it', async () => {
     const page = await freshPage(viewport);
     const errors = trackPageErrors(page);
     await signIn(page, suite.server.url, DEMO_ACCOUNT.email, DEMO_ACCOUNT.password);
