@@ -24,6 +24,7 @@ import { clubInviteLinksRouter } from './routes/club-invite-links';
 import { clubsRouter } from './routes/clubs';
 import { outboxRouter } from './routes/outbox';
 import { createBudgetService } from './budget-service';
+import { INVITES_PER_HOUR } from '../shared/schemas/sharing';
 import { webStatic } from './web-static';
 import packageJson from '../package.json';
 
@@ -37,6 +38,8 @@ export type AppConfig = {
   requireEmailVerification?: boolean;
   /** Hides development-only routes (the Outbox). */
   production?: boolean;
+  /** Invite e-mails one person may send per hour (trip and club together); tests lower it. */
+  invitesPerHour?: number;
 };
 
 export type AppDeps = {
@@ -105,13 +108,14 @@ export function createApp(deps: AppDeps): TrailtallyApp {
   app.use('/api/health', healthRouter({ db, version: packageJson.version }));
   const budgets = createBudgetService(db, (err, tripId) => deps.logger?.error({ err, tripId }, 'budget failed'));
   const signedIn = requireSession(auth);
-  app.use(
-    '/api/trips',
-    signedIn,
-    tripsRouter({ db, now: deps.now, budgets, mailer: deps.mailer, publicUrl: config.publicUrl }),
-  );
+  const invites = {
+    mailer: deps.mailer,
+    publicUrl: config.publicUrl,
+    invitesPerHour: config.invitesPerHour ?? INVITES_PER_HOUR,
+  };
+  app.use('/api/trips', signedIn, tripsRouter({ db, now: deps.now, budgets, ...invites }));
   app.use('/api/invites', inviteLinksRouter({ db, now: deps.now, auth }));
-  app.use('/api/clubs', signedIn, clubsRouter({ db, now: deps.now, mailer: deps.mailer, publicUrl: config.publicUrl }));
+  app.use('/api/clubs', signedIn, clubsRouter({ db, now: deps.now, ...invites }));
   app.use('/api/club-invites', clubInviteLinksRouter({ db, now: deps.now, auth }));
   if (deps.outbox && !config.production) app.use('/api/dev/outbox', outboxRouter(deps.outbox));
   app.use('/api/rigs', signedIn, rigsRouter({ db, now: deps.now }));

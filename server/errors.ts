@@ -14,6 +14,7 @@ export type ErrorCode =
   | 'invite_used'
   | 'invite_revoked'
   | 'invite_wrong_account'
+  | 'mail_failed'
   | 'internal';
 
 export type ErrorBody = {

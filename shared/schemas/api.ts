@@ -32,7 +32,13 @@ export const applianceRecordSchema = z.object({
 });
 export type ApplianceRecord = z.infer<typeof applianceRecordSchema>;
 
-export const memberSchema = z.object({ userId: z.string(), name: z.string(), email: z.string(), role: roleSchema });
+/** `email` is left out for readers who see the trip only through a club: they get names, not addresses. */
+export const memberSchema = z.object({
+  userId: z.string(),
+  name: z.string(),
+  email: z.string().optional(),
+  role: roleSchema,
+});
 export type Member = z.infer<typeof memberSchema>;
 
 export const tripDetailSchema = z.object({

@@ -18,7 +18,7 @@ export type TestContext = {
 
 /** A real app on a fresh temporary SQLite file with the real migrations. */
 export function createTestApp(
-  options: { authAttemptsPerMinute?: number; now?: () => Date; mailer?: Mailer } = {},
+  options: { authAttemptsPerMinute?: number; now?: () => Date; mailer?: Mailer; invitesPerHour?: number } = {},
 ): TestContext {
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'trailtally-test-'));
   const db = openDatabase(path.join(dir, 'test.db'));
@@ -32,6 +32,7 @@ export function createTestApp(
       authSecret: 'test-secret-that-is-long-enough-for-better-auth-0123456789',
       publicUrl: 'http://localhost:8080',
       authRateLimit: { windowMs: 60_000, limit: options.authAttemptsPerMinute ?? 1000 },
+      ...(options.invitesPerHour !== undefined ? { invitesPerHour: options.invitesPerHour } : {}),
     },
   });
   return {
