@@ -1,6 +1,11 @@
 import { z } from 'zod';
+import { nameText } from './text';
 
 export const PASSWORD_MIN_LENGTH = 8;
+export const USER_NAME_MAX_LENGTH = 80;
+
+/** A person's name as others see it on trips and clubs. */
+export const userNameSchema = nameText(USER_NAME_MAX_LENGTH, { empty: 'Enter your name.' });
 
 export const signInSchema = z.object({
   email: z.email({ error: 'Enter an e-mail address like name@example.com.' }),
@@ -9,7 +14,7 @@ export const signInSchema = z.object({
 export type SignInInput = z.infer<typeof signInSchema>;
 
 export const signUpSchema = z.object({
-  name: z.string().trim().min(1, { error: 'Enter your name.' }).max(80, { error: 'Use at most 80 characters.' }),
+  name: userNameSchema,
   email: z.email({ error: 'Enter an e-mail address like name@example.com.' }),
   password: z
     .string()

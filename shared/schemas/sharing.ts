@@ -1,5 +1,6 @@
 // Contracts for sharing: trip invites, clubs, and copies of a club's trip onto a member's rig.
 import { z } from 'zod';
+import { nameText } from './text';
 
 export const inviteRoleSchema = z.enum(['planner', 'crew', 'viewer'], {
   error: 'Invite as planner, crew or viewer; ownership is handed over separately.',
@@ -41,9 +42,7 @@ export type InvitePreview = z.infer<typeof invitePreviewSchema>;
 
 export const handOverRequestSchema = z.object({ userId: z.string().min(1).max(64) }).strict();
 
-export const createClubRequestSchema = z
-  .object({ name: z.string().trim().min(1, { error: 'Give the club a name.' }).max(120) })
-  .strict();
+export const createClubRequestSchema = z.object({ name: nameText(120, { empty: 'Give the club a name.' }) }).strict();
 
 /** Many households at once: pasted addresses ("Name <a@b>", commas or new lines) and/or a CSV of names and e-mails. */
 export const clubInviteRequestSchema = z
@@ -67,7 +66,7 @@ export type ClubInviteReport = z.infer<typeof clubInviteReportSchema>;
 export const shareTripRequestSchema = z.object({ tripId: z.string().min(1).max(64) }).strict();
 
 export const copyTripRequestSchema = z
-  .object({ rigId: z.string().min(1).max(64), name: z.string().trim().min(1).max(120).optional() })
+  .object({ rigId: z.string().min(1).max(64), name: nameText(120, { empty: 'Give the trip a name.' }).optional() })
   .strict();
 
 export const clubSummarySchema = z.object({
