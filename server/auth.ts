@@ -2,6 +2,8 @@ import { betterAuth } from 'better-auth';
 import { drizzleAdapter } from 'better-auth/adapters/drizzle';
 import type { Db } from '../db/client';
 import { account, session, user, verification } from '../db/schema/auth';
+import { PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH } from '@/shared/schemas/account';
+import { authRules } from './auth-rules';
 import type { Mailer } from './mail/mailer';
 import { resetPasswordMail, verifyEmailMail } from './mail/templates';
 
@@ -27,11 +29,13 @@ export function createAuth(db: Db, config: AuthConfig) {
     }),
     emailAndPassword: {
       enabled: true,
-      minPasswordLength: 8,
-      maxPasswordLength: 128,
+      minPasswordLength: PASSWORD_MIN_LENGTH,
+      maxPasswordLength: PASSWORD_MAX_LENGTH,
       autoSignIn: !config.requireEmailVerification,
       requireEmailVerification: config.requireEmailVerification,
       resetPasswordTokenExpiresIn: 60 * 60,
+      // A reset ends every session: whoever held the account before the reset is signed out.
+      revokeSessionsOnPasswordReset: true,
       sendResetPassword: async ({ user: who, url }) => {
         await config.mailer.send(resetPasswordMail({ to: who.email, name: who.name, url }));
       },
@@ -45,6 +49,7 @@ export function createAuth(db: Db, config: AuthConfig) {
     },
     // Requests are limited by express-rate-limit in front of this handler, one policy for all.
     rateLimit: { enabled: false },
+    hooks: { before: authRules },
     telemetry: { enabled: false },
   });
 }

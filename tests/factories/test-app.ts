@@ -47,6 +47,9 @@ export function createTestApp(
 
 let counter = 0;
 
+/** The password every test user signs up with. */
+export const TEST_PASSWORD = 'correct-horse-battery';
+
 /** Signs up a new user through the real auth routes; the agent then carries the session cookie. */
 export async function signUpAgent(app: TrailtallyApp, name = 'Test Traveller', chosenEmail?: string) {
   counter += 1;
@@ -55,7 +58,7 @@ export async function signUpAgent(app: TrailtallyApp, name = 'Test Traveller', c
   const response = await agent
     .post('/api/auth/sign-up/email')
     .set('Origin', 'http://localhost:8080')
-    .send({ name, email, password: 'correct-horse-battery' });
+    .send({ name, email, password: TEST_PASSWORD });
   if (response.status !== 200) throw new Error(`sign-up failed: ${response.status} ${response.text}`);
   return { agent, email, userId: (response.body as { user: { id: string } }).user.id };
 }
