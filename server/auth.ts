@@ -6,6 +6,7 @@ import { PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH } from '@/shared/schemas/accou
 import { authRules } from './auth-rules';
 import type { Mailer } from './mail/mailer';
 import { resetPasswordMail, verifyEmailMail } from './mail/templates';
+import { originRefusalAdvice } from './trusted-origins';
 
 export type AuthConfig = {
   secret: string;
@@ -23,6 +24,9 @@ export function createAuth(db: Db, config: AuthConfig) {
     basePath: '/api/auth',
     secret: config.secret,
     trustedOrigins: config.trustedOrigins,
+    // better-auth skips its origin check when it guesses it runs under a test runner; the check is part of
+    // what the tests prove, so it is always on.
+    advanced: { disableOriginCheck: false },
     database: drizzleAdapter(db, {
       provider: 'sqlite',
       schema: { user, session, account, verification },
@@ -50,6 +54,7 @@ export function createAuth(db: Db, config: AuthConfig) {
     // Requests are limited by express-rate-limit in front of this handler, one policy for all.
     rateLimit: { enabled: false },
     hooks: { before: authRules },
+    plugins: [originRefusalAdvice(config.baseUrl)],
     telemetry: { enabled: false },
   });
 }

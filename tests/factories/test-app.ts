@@ -4,8 +4,10 @@ import path from 'node:path';
 import request from 'supertest';
 import { openDatabase, type Db } from '@/db/client';
 import { runMigrations } from '@/db/migrate';
-import { createApp, type TrailtallyApp } from '@/server/app';
+import { createApp, type AppConfig, type TrailtallyApp } from '@/server/app';
 import type { Mailer } from '@/server/mail/mailer';
+import type { AuthLimits } from '@/server/middleware/auth-guards';
+import type { TrustProxy } from '@/server/trust-proxy';
 import { createMemoryMailer } from './memory-mailer';
 
 export type TestContext = {
@@ -18,7 +20,14 @@ export type TestContext = {
 
 /** A real app on a fresh temporary SQLite file with the real migrations. */
 export function createTestApp(
-  options: { authAttemptsPerMinute?: number; now?: () => Date; mailer?: Mailer } = {},
+  options: {
+    authLimits?: Partial<AuthLimits>;
+    trustProxy?: TrustProxy;
+    now?: () => Date;
+    mailer?: Mailer;
+    /** Any other app setting (production mode, another PUBLIC_URL…). */
+    config?: Partial<AppConfig>;
+  } = {},
 ): TestContext {
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'trailtally-test-'));
   const db = openDatabase(path.join(dir, 'test.db'));
@@ -31,7 +40,16 @@ export function createTestApp(
     config: {
       authSecret: 'test-secret-that-is-long-enough-for-better-auth-0123456789',
       publicUrl: 'http://localhost:8080',
-      authRateLimit: { windowMs: 60_000, limit: options.authAttemptsPerMinute ?? 1000 },
+      // High limits unless a test asks for low ones: tests sign many users up and in from one address.
+      authLimits: {
+        windowMs: 60_000,
+        failedSignInsPerAccount: 1000,
+        failedSignInsPerClient: 1000,
+        accountActionsPerClient: 1000,
+        ...options.authLimits,
+      },
+      ...(options.trustProxy === undefined ? {} : { trustProxy: options.trustProxy }),
+      ...options.config,
     },
   });
   return {
