@@ -3,7 +3,6 @@ import compression from 'compression';
 import cors from 'cors';
 import express from 'express';
 import type { Express } from 'express';
-import { rateLimit } from 'express-rate-limit';
 import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
 import type { Logger } from 'pino';
@@ -13,6 +12,7 @@ import type { Auth } from './auth';
 import { HttpError } from './errors';
 import type { CapturedMail } from './mail/local-smtp';
 import type { Mailer } from './mail/mailer';
+import { authGuards, DEFAULT_AUTH_LIMITS, type AuthLimits } from './middleware/auth-guards';
 import { errorHandler } from './middleware/error-handler';
 import { requireSession } from './middleware/require-session';
 import { healthRouter } from './routes/health';
@@ -25,6 +25,8 @@ import { clubsRouter } from './routes/clubs';
 import { outboxRouter } from './routes/outbox';
 import { createBudgetService } from './budget-service';
 import { INVITES_PER_HOUR } from '../shared/schemas/sharing';
+import type { TrustProxy } from './trust-proxy';
+import { trustedOrigins } from './trusted-origins';
 import { webStatic } from './web-static';
 import packageJson from '../package.json';
 
@@ -34,7 +36,10 @@ export type AppConfig = {
   /** Extra origins allowed to call the API with cookies (the Expo dev server in `npm run dev`). */
   devWebOrigin?: string;
   webDir?: string;
-  authRateLimit?: { windowMs: number; limit: number };
+  /** Attempt limits on the auth routes; tests lower or raise them. */
+  authLimits?: Partial<AuthLimits>;
+  /** Proxies whose X-Forwarded-For is believed (TRUST_PROXY); none when left out. */
+  trustProxy?: TrustProxy;
   requireEmailVerification?: boolean;
   /** Hides development-only routes (the Outbox). */
   production?: boolean;
@@ -59,11 +64,10 @@ const JSON_BODY_LIMIT = '100kb';
 /** Builds the whole HTTP app without listening, so tests can drive it through supertest. */
 export function createApp(deps: AppDeps): TrailtallyApp {
   const { db, config } = deps;
-  const trustedOrigins = [config.publicUrl, ...(config.devWebOrigin ? [config.devWebOrigin] : [])];
   const auth = createAuth(db, {
     secret: config.authSecret,
     baseUrl: config.publicUrl,
-    trustedOrigins,
+    trustedOrigins: trustedOrigins(config),
     mailer: deps.mailer,
     requireEmailVerification: config.requireEmailVerification ?? false,
   });
@@ -71,7 +75,7 @@ export function createApp(deps: AppDeps): TrailtallyApp {
   const app = express() as TrailtallyApp;
   app.locals.auth = auth;
   app.disable('x-powered-by');
-  app.set('trust proxy', 'loopback');
+  app.set('trust proxy', config.trustProxy ?? false);
 
   if (deps.logger)
     app.use(pinoHttp({ logger: deps.logger, autoLogging: { ignore: (req) => !req.url?.startsWith('/api') } }));
@@ -90,18 +94,8 @@ export function createApp(deps: AppDeps): TrailtallyApp {
   app.use(compression());
   if (config.devWebOrigin) app.use('/api', cors({ origin: config.devWebOrigin, credentials: true }));
 
-  const authLimit = config.authRateLimit ?? { windowMs: 15 * 60 * 1000, limit: 100 };
-  app.use(
-    '/api/auth',
-    rateLimit({
-      ...authLimit,
-      standardHeaders: 'draft-8',
-      legacyHeaders: false,
-      handler: (_req, _res, next) =>
-        next(new HttpError(429, 'rate_limited', 'Too many attempts. Please wait a few minutes and try again.')),
-    }),
-  );
-  // better-auth reads the raw body itself: its handler must come before express.json().
+  app.use('/api/auth', authGuards({ ...DEFAULT_AUTH_LIMITS, ...config.authLimits }));
+  // better-auth reads the body itself (here the text authGuards read): its handler comes before express.json().
   app.all('/api/auth/*splat', toNodeHandler(auth));
 
   app.use(express.json({ limit: JSON_BODY_LIMIT }));

@@ -2,6 +2,7 @@ import crypto from 'node:crypto';
 import fs from 'node:fs';
 import path from 'node:path';
 import { z } from 'zod';
+import { trustProxySchema } from './trust-proxy';
 
 // The only place that reads process.env: everything else receives a checked Env.
 const envSchema = z.object({
@@ -21,6 +22,8 @@ const envSchema = z.object({
   SMTP_FAKE_PORT: z.coerce.number().int().min(0).max(65535).default(0),
   /** Whether sign-in waits until the e-mail address is verified. Default: on in production, off otherwise. */
   REQUIRE_EMAIL_VERIFICATION: z.enum(['true', 'false']).optional(),
+  /** The reverse proxies whose X-Forwarded-For is believed (see server/trust-proxy.ts). Unset: none. */
+  TRUST_PROXY: trustProxySchema,
 });
 
 export type Env = Omit<z.infer<typeof envSchema>, 'REQUIRE_EMAIL_VERIFICATION'> & {

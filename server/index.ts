@@ -35,6 +35,7 @@ export async function main(): Promise<void> {
       webDir: env.WEB_DIR,
       requireEmailVerification: env.REQUIRE_EMAIL_VERIFICATION,
       production: env.NODE_ENV === 'production',
+      trustProxy: env.TRUST_PROXY,
     },
   });
 

@@ -34,7 +34,7 @@ export default function AccountScreen() {
       </Card>
       <UnitsCard />
       {session.data ? <NameCard name={session.data.user.name} /> : null}
-      <PasswordCard />
+      <PasswordCard owner={session.data?.user} />
       {error ? <Banner testID="sign-out-error" message={error} /> : null}
       <Button testID="sign-out" label="Sign out" tone="secondary" busy={busy} onPress={signOut} />
     </Screen>

@@ -1,5 +1,6 @@
 // Rig contract: the power system a trip runs on.
 import { z } from 'zod';
+import { nameText } from './text';
 import { fractionSchema, percentSchema, positiveSchema, routineWindowSchema } from './common';
 
 export const chemistrySchema = z.enum(['lifepo4', 'agm', 'flooded']);
@@ -19,7 +20,7 @@ export type Battery = z.infer<typeof batterySchema>;
 
 export const solarArraySchema = z
   .object({
-    name: z.string().min(1).max(80).default('Roof array'),
+    name: nameText(80, { empty: 'Give the array a name.' }).default('Roof array'),
     ratedW: positiveSchema.max(20_000),
     mounting: z.enum(['flat', 'tilted']).default('flat'),
     tiltDeg: z.number().min(0).max(90).default(0),
@@ -103,7 +104,7 @@ export const generatorSchema = z
 export type Generator = z.infer<typeof generatorSchema>;
 
 export const propaneTankSchema = z.object({
-  name: z.string().min(1).max(80).default('Cylinder'),
+  name: nameText(80, { empty: 'Give the tank a name.' }).default('Cylinder'),
   propaneKg: positiveSchema.max(500),
   fillPct: percentSchema.default(100),
 });
@@ -111,7 +112,7 @@ export type PropaneTank = z.infer<typeof propaneTankSchema>;
 
 export const rigSchema = z
   .object({
-    name: z.string().min(1).max(120),
+    name: nameText(120, { empty: 'Give the rig a name.' }),
     battery: batterySchema,
     solarArrays: z.array(solarArraySchema).max(8).default([]),
     controller: controllerSchema.nullable().default(null),

@@ -1,5 +1,6 @@
 // Contracts for sharing: trip invites, clubs, and copies of a club's trip onto a member's rig.
 import { z } from 'zod';
+import { nameText } from './text';
 
 export const inviteRoleSchema = z.enum(['planner', 'crew', 'viewer'], {
   error: 'Invite as planner, crew or viewer; ownership is handed over separately.',
@@ -45,9 +46,7 @@ export type InvitePreview = z.infer<typeof invitePreviewSchema>;
 
 export const handOverRequestSchema = z.object({ userId: z.string().min(1).max(64) }).strict();
 
-export const createClubRequestSchema = z
-  .object({ name: z.string().trim().min(1, { error: 'Give the club a name.' }).max(120) })
-  .strict();
+export const createClubRequestSchema = z.object({ name: nameText(120, { empty: 'Give the club a name.' }) }).strict();
 
 /** Addresses one club-invite request may carry: a large club's mailing in a couple of batches, never a mass mailing. */
 export const MAX_CLUB_INVITES_PER_REQUEST = 200;
@@ -84,7 +83,7 @@ export type ClubInviteReport = z.infer<typeof clubInviteReportSchema>;
 export const shareTripRequestSchema = z.object({ tripId: z.string().min(1).max(64) }).strict();
 
 export const copyTripRequestSchema = z
-  .object({ rigId: z.string().min(1).max(64), name: z.string().trim().min(1).max(120).optional() })
+  .object({ rigId: z.string().min(1).max(64), name: nameText(120, { empty: 'Give the trip a name.' }).optional() })
   .strict();
 
 export const clubSummarySchema = z.object({

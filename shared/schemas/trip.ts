@@ -1,5 +1,6 @@
 // Trip contract: stops (where the rig stays) and drives (the moves between them).
 import { z } from 'zod';
+import { nameText } from './text';
 import { isoInstantSchema, localHourSchema, nonNegativeSchema, fractionSchema, timeZoneSchema } from './common';
 
 export const sitePresetSchema = z.enum(['open', 'light-cover', 'partial-shade', 'deep-forest']);
@@ -33,7 +34,7 @@ export type GeneratorHours = z.infer<typeof generatorHoursSchema>;
 
 export const stopSchema = z
   .object({
-    name: z.string().min(1).max(120),
+    name: nameText(120, { empty: 'Give the stop a name.' }),
     lat: z.number().min(-90).max(90),
     lon: z.number().min(-180).max(180),
     elevationM: z.number().min(-500).max(6000).default(0),
@@ -68,7 +69,7 @@ export const MAX_TRIP_DAYS = 120;
 
 export const tripSchema = z
   .object({
-    name: z.string().min(1).max(120),
+    name: nameText(120, { empty: 'Give the trip a name.' }),
     stops: z.array(stopSchema).min(1).max(60),
     /** drives[i] goes from stops[i] to stops[i + 1]. */
     drives: z.array(driveSchema).default([]),

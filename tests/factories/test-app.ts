@@ -4,8 +4,10 @@ import path from 'node:path';
 import request from 'supertest';
 import { openDatabase, type Db } from '@/db/client';
 import { runMigrations } from '@/db/migrate';
-import { createApp, type TrailtallyApp } from '@/server/app';
+import { createApp, type AppConfig, type TrailtallyApp } from '@/server/app';
 import type { Mailer } from '@/server/mail/mailer';
+import type { AuthLimits } from '@/server/middleware/auth-guards';
+import type { TrustProxy } from '@/server/trust-proxy';
 import { createMemoryMailer } from './memory-mailer';
 
 export type TestContext = {
@@ -18,7 +20,15 @@ export type TestContext = {
 
 /** A real app on a fresh temporary SQLite file with the real migrations. */
 export function createTestApp(
-  options: { authAttemptsPerMinute?: number; now?: () => Date; mailer?: Mailer; invitesPerHour?: number } = {},
+  options: {
+    authLimits?: Partial<AuthLimits>;
+    trustProxy?: TrustProxy;
+    now?: () => Date;
+    mailer?: Mailer;
+    /** Any other app setting (production mode, another PUBLIC_URL…). */
+    config?: Partial<AppConfig>;
+    invitesPerHour?: number;
+  } = {},
 ): TestContext {
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'trailtally-test-'));
   const db = openDatabase(path.join(dir, 'test.db'));
@@ -31,8 +41,17 @@ export function createTestApp(
     config: {
       authSecret: 'test-secret-that-is-long-enough-for-better-auth-0123456789',
       publicUrl: 'http://localhost:8080',
-      authRateLimit: { windowMs: 60_000, limit: options.authAttemptsPerMinute ?? 1000 },
       ...(options.invitesPerHour !== undefined ? { invitesPerHour: options.invitesPerHour } : {}),
+      // High limits unless a test asks for low ones: tests sign many users up and in from one address.
+      authLimits: {
+        windowMs: 60_000,
+        failedSignInsPerAccount: 1000,
+        failedSignInsPerClient: 1000,
+        accountActionsPerClient: 1000,
+        ...options.authLimits,
+      },
+      ...(options.trustProxy === undefined ? {} : { trustProxy: options.trustProxy }),
+      ...options.config,
     },
   });
   return {
@@ -48,6 +67,9 @@ export function createTestApp(
 
 let counter = 0;
 
+/** The password every test user signs up with. */
+export const TEST_PASSWORD = 'correct-horse-battery';
+
 /** Signs up a new user through the real auth routes; the agent then carries the session cookie. */
 export async function signUpAgent(app: TrailtallyApp, name = 'Test Traveller', chosenEmail?: string) {
   counter += 1;
@@ -56,7 +78,7 @@ export async function signUpAgent(app: TrailtallyApp, name = 'Test Traveller', c
   const response = await agent
     .post('/api/auth/sign-up/email')
     .set('Origin', 'http://localhost:8080')
-    .send({ name, email, password: 'correct-horse-battery' });
+    .send({ name, email, password: TEST_PASSWORD });
   if (response.status !== 200) throw new Error(`sign-up failed: ${response.status} ${response.text}`);
   return { agent, email, userId: (response.body as { user: { id: string } }).user.id };
 }
