@@ -1,15 +1,17 @@
-import fs from 'node:fs';
 import path from 'node:path';
 import Database from 'better-sqlite3';
+import { ensureOwnFolder, ensurePrivateFile } from './private-files';
 
 /**
  * Copies a live database with SQLite's online backup API, which is safe while the server is
  * writing (a plain file copy of a WAL database can miss committed pages).
  */
 export async function backupDatabase(sourcePath: string, backupDir: string, now = new Date()): Promise<string> {
-  fs.mkdirSync(backupDir, { recursive: true });
+  ensureOwnFolder(backupDir);
   const stamp = now.toISOString().replace(/[:.]/g, '-');
   const target = path.join(backupDir, `trailtally-${stamp}.db`);
+  // Created owner-only before SQLite writes a page into it: a backup holds every session and password hash.
+  ensurePrivateFile(target);
   const sqlite = new Database(sourcePath, { readonly: true, fileMustExist: true });
   try {
     await sqlite.backup(target);

@@ -11,6 +11,7 @@ import type { Db } from '../db/client';
 import { createAuth } from './auth';
 import type { Auth } from './auth';
 import { HttpError } from './errors';
+import { httpLogSerializers } from './logger';
 import type { CapturedMail } from './mail/local-smtp';
 import type { Mailer } from './mail/mailer';
 import { errorHandler } from './middleware/error-handler';
@@ -71,7 +72,13 @@ export function createApp(deps: AppDeps): TrailtallyApp {
   app.set('trust proxy', 'loopback');
 
   if (deps.logger)
-    app.use(pinoHttp({ logger: deps.logger, autoLogging: { ignore: (req) => !req.url?.startsWith('/api') } }));
+    app.use(
+      pinoHttp({
+        logger: deps.logger,
+        serializers: httpLogSerializers,
+        autoLogging: { ignore: (req) => !req.url?.startsWith('/api') },
+      }),
+    );
   app.use(
     helmet({
       contentSecurityPolicy: {

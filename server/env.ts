@@ -2,6 +2,7 @@ import crypto from 'node:crypto';
 import fs from 'node:fs';
 import path from 'node:path';
 import { z } from 'zod';
+import { OWNER_ONLY_FILE, ensurePrivateFolder, tightenIfPresent } from '../db/private-files';
 
 // The only place that reads process.env: everything else receives a checked Env.
 const envSchema = z.object({
@@ -55,9 +56,12 @@ export function loadEnv(source: NodeJS.ProcessEnv = process.env): Env {
  */
 function readOrCreateSecret(dataDir: string): string {
   const file = path.join(dataDir, 'auth-secret');
-  if (fs.existsSync(file)) return fs.readFileSync(file, 'utf8').trim();
-  fs.mkdirSync(dataDir, { recursive: true });
+  if (fs.existsSync(file)) {
+    tightenIfPresent(file);
+    return fs.readFileSync(file, 'utf8').trim();
+  }
+  ensurePrivateFolder(dataDir);
   const secret = crypto.randomBytes(48).toString('base64url');
-  fs.writeFileSync(file, `${secret}\n`, { mode: 0o600 });
+  fs.writeFileSync(file, `${secret}\n`, { mode: OWNER_ONLY_FILE, flag: 'wx' });
   return secret;
 }

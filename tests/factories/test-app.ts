@@ -1,6 +1,7 @@
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
+import type { Logger } from 'pino';
 import request from 'supertest';
 import { openDatabase, type Db } from '@/db/client';
 import { runMigrations } from '@/db/migrate';
@@ -18,7 +19,7 @@ export type TestContext = {
 
 /** A real app on a fresh temporary SQLite file with the real migrations. */
 export function createTestApp(
-  options: { authAttemptsPerMinute?: number; now?: () => Date; mailer?: Mailer } = {},
+  options: { authAttemptsPerMinute?: number; now?: () => Date; mailer?: Mailer; logger?: Logger } = {},
 ): TestContext {
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'trailtally-test-'));
   const db = openDatabase(path.join(dir, 'test.db'));
@@ -28,6 +29,7 @@ export function createTestApp(
     db,
     mailer: options.mailer ?? mailer,
     now: options.now ?? (() => new Date('2026-11-20T10:00:00Z')),
+    ...(options.logger ? { logger: options.logger } : {}),
     config: {
       authSecret: 'test-secret-that-is-long-enough-for-better-auth-0123456789',
       publicUrl: 'http://localhost:8080',
