@@ -15,6 +15,7 @@ import { httpLogSerializers } from './logger';
 import type { CapturedMail } from './mail/local-smtp';
 import type { Mailer } from './mail/mailer';
 import { errorHandler } from './middleware/error-handler';
+import { loopbackOnly } from './middleware/loopback-only';
 import { requireSession } from './middleware/require-session';
 import { healthRouter } from './routes/health';
 import { preferencesRouter } from './routes/preferences';
@@ -120,7 +121,8 @@ export function createApp(deps: AppDeps): TrailtallyApp {
   app.use('/api/invites', inviteLinksRouter({ db, now: deps.now, auth }));
   app.use('/api/clubs', signedIn, clubsRouter({ db, now: deps.now, mailer: deps.mailer, publicUrl: config.publicUrl }));
   app.use('/api/club-invites', clubInviteLinksRouter({ db, now: deps.now, auth }));
-  if (deps.outbox && !config.production) app.use('/api/dev/outbox', outboxRouter(deps.outbox));
+  // The Outbox shows every password-reset link: only someone at this machine may read it.
+  if (deps.outbox && !config.production) app.use('/api/dev/outbox', loopbackOnly(), outboxRouter(deps.outbox));
   app.use('/api/rigs', signedIn, rigsRouter({ db, now: deps.now }));
   app.use('/api/rig-presets', signedIn, rigPresetsRouter());
   app.use('/api/me/preferences', signedIn, preferencesRouter({ db }));
@@ -128,6 +130,7 @@ export function createApp(deps: AppDeps): TrailtallyApp {
     next(new HttpError(404, 'not_found', `No API route for ${req.method} ${req.baseUrl}${req.path}.`)),
   );
 
+  app.use('/outbox', loopbackOnly());
   const web = config.webDir ? webStatic(config.webDir) : undefined;
   if (web) app.use(web);
 

@@ -8,7 +8,8 @@ import { OWNER_ONLY_FILE, ensurePrivateFolder, tightenIfPresent } from '../db/pr
 const envSchema = z.object({
   NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
   PORT: z.coerce.number().int().min(0).max(65535).default(8080),
-  HOST: z.string().default('0.0.0.0'),
+  /** Unset: every interface in production, loopback only otherwise (a development server is not for the network). */
+  HOST: z.string().min(1).optional(),
   DATABASE_PATH: z.string().min(1).default('./data/trailtally.db'),
   PUBLIC_URL: z.url().optional(),
   BETTER_AUTH_SECRET: z.string().min(32, 'BETTER_AUTH_SECRET must be at least 32 characters').optional(),
@@ -24,7 +25,8 @@ const envSchema = z.object({
   REQUIRE_EMAIL_VERIFICATION: z.enum(['true', 'false']).optional(),
 });
 
-export type Env = Omit<z.infer<typeof envSchema>, 'REQUIRE_EMAIL_VERIFICATION'> & {
+export type Env = Omit<z.infer<typeof envSchema>, 'REQUIRE_EMAIL_VERIFICATION' | 'HOST'> & {
+  HOST: string;
   REQUIRE_EMAIL_VERIFICATION: boolean;
   DATA_DIR: string;
   PUBLIC_URL: string;
@@ -41,6 +43,7 @@ export function loadEnv(source: NodeJS.ProcessEnv = process.env): Env {
   const dataDir = path.dirname(path.resolve(env.DATABASE_PATH));
   return {
     ...env,
+    HOST: env.HOST ?? (env.NODE_ENV === 'production' ? '0.0.0.0' : '127.0.0.1'),
     REQUIRE_EMAIL_VERIFICATION: env.REQUIRE_EMAIL_VERIFICATION
       ? env.REQUIRE_EMAIL_VERIFICATION === 'true'
       : env.NODE_ENV === 'production',

@@ -5,7 +5,7 @@ import type { Logger } from 'pino';
 import request from 'supertest';
 import { openDatabase, type Db } from '@/db/client';
 import { runMigrations } from '@/db/migrate';
-import { createApp, type TrailtallyApp } from '@/server/app';
+import { createApp, type AppDeps, type TrailtallyApp } from '@/server/app';
 import type { Mailer } from '@/server/mail/mailer';
 import { createMemoryMailer } from './memory-mailer';
 
@@ -19,7 +19,15 @@ export type TestContext = {
 
 /** A real app on a fresh temporary SQLite file with the real migrations. */
 export function createTestApp(
-  options: { authAttemptsPerMinute?: number; now?: () => Date; mailer?: Mailer; logger?: Logger } = {},
+  options: {
+    authAttemptsPerMinute?: number;
+    now?: () => Date;
+    mailer?: Mailer;
+    logger?: Logger;
+    outbox?: AppDeps['outbox'];
+    /** A folder with an index.html, to serve as the web app. */
+    webDir?: string;
+  } = {},
 ): TestContext {
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'trailtally-test-'));
   const db = openDatabase(path.join(dir, 'test.db'));
@@ -30,9 +38,11 @@ export function createTestApp(
     mailer: options.mailer ?? mailer,
     now: options.now ?? (() => new Date('2026-11-20T10:00:00Z')),
     ...(options.logger ? { logger: options.logger } : {}),
+    ...(options.outbox ? { outbox: options.outbox } : {}),
     config: {
       authSecret: 'test-secret-that-is-long-enough-for-better-auth-0123456789',
       publicUrl: 'http://localhost:8080',
+      ...(options.webDir ? { webDir: options.webDir } : {}),
       authRateLimit: { windowMs: 60_000, limit: options.authAttemptsPerMinute ?? 1000 },
     },
   });
