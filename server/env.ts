@@ -31,6 +31,8 @@ export type Env = Omit<z.infer<typeof envSchema>, 'REQUIRE_EMAIL_VERIFICATION' |
   DATA_DIR: string;
   PUBLIC_URL: string;
   BETTER_AUTH_SECRET: string;
+  /** The generated secret's file in the data folder; undefined when BETTER_AUTH_SECRET is configured. */
+  AUTH_SECRET_FILE: string | undefined;
 };
 
 export function loadEnv(source: NodeJS.ProcessEnv = process.env): Env {
@@ -50,6 +52,7 @@ export function loadEnv(source: NodeJS.ProcessEnv = process.env): Env {
     DATA_DIR: dataDir,
     PUBLIC_URL: env.PUBLIC_URL ?? `http://localhost:${env.PORT}`,
     BETTER_AUTH_SECRET: env.BETTER_AUTH_SECRET ?? readOrCreateSecret(dataDir),
+    AUTH_SECRET_FILE: env.BETTER_AUTH_SECRET ? undefined : secretFileIn(dataDir),
   };
 }
 
@@ -57,8 +60,10 @@ export function loadEnv(source: NodeJS.ProcessEnv = process.env): Env {
  * Without a configured secret, generate one the first time and keep it beside the database, so
  * sessions survive restarts. The file is readable by its owner only and never printed.
  */
+const secretFileIn = (dataDir: string) => path.join(dataDir, 'auth-secret');
+
 function readOrCreateSecret(dataDir: string): string {
-  const file = path.join(dataDir, 'auth-secret');
+  const file = secretFileIn(dataDir);
   if (fs.existsSync(file)) {
     tightenIfPresent(file);
     return fs.readFileSync(file, 'utf8').trim();

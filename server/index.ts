@@ -1,4 +1,5 @@
 import { openDatabase } from '../db/client';
+import { claimDatabase } from '../db/holder';
 import { runMigrations } from '../db/migrate';
 import { demoSignInText, isDatabaseEmpty, seedDemo } from '../db/seed';
 import { createApp } from './app';
@@ -12,6 +13,8 @@ export async function main(): Promise<void> {
   const env = loadEnv();
   const logger = createLogger(env.LOG_LEVEL);
   const db = openDatabase(env.DATABASE_PATH);
+  // Says that this process holds the database, so `npm run db:restore` refuses until it stops.
+  process.on('exit', claimDatabase(env.DATABASE_PATH));
   runMigrations(db);
 
   // Without a provider configured, mail goes to a local SMTP fake that the Outbox shows.

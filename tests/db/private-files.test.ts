@@ -44,7 +44,7 @@ describe.skipIf(process.platform === 'win32')('owner-only data files', () => {
     const db = openDatabase(dbPath);
     db.$client.exec('CREATE TABLE note (body TEXT); INSERT INTO note VALUES (1);');
     const backups = path.join(root, 'data', 'backups');
-    const target = await backupDatabase(dbPath, backups);
+    const { database: target } = await backupDatabase(dbPath, backups);
     db.$client.close();
     expect(modeOf(backups)).toBe(0o700);
     expect(modeOf(target)).toBe(0o600);
