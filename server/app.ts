@@ -17,6 +17,7 @@ import type { Mailer } from './mail/mailer';
 import { errorHandler } from './middleware/error-handler';
 import { loopbackOnly } from './middleware/loopback-only';
 import { requireSession } from './middleware/require-session';
+import { requireTrustedOrigin } from './middleware/require-trusted-origin';
 import { healthRouter } from './routes/health';
 import { preferencesRouter } from './routes/preferences';
 import { rigPresetsRouter, rigsRouter } from './routes/rigs';
@@ -26,6 +27,7 @@ import { clubInviteLinksRouter } from './routes/club-invite-links';
 import { clubsRouter } from './routes/clubs';
 import { outboxRouter } from './routes/outbox';
 import { createBudgetService } from './budget-service';
+import { trustedOrigins } from './trusted-origins';
 import { webStatic } from './web-static';
 import packageJson from '../package.json';
 
@@ -58,11 +60,11 @@ const JSON_BODY_LIMIT = '100kb';
 /** Builds the whole HTTP app without listening, so tests can drive it through supertest. */
 export function createApp(deps: AppDeps): TrailtallyApp {
   const { db, config } = deps;
-  const trustedOrigins = [config.publicUrl, ...(config.devWebOrigin ? [config.devWebOrigin] : [])];
+  const origins = trustedOrigins(config);
   const auth = createAuth(db, {
     secret: config.authSecret,
     baseUrl: config.publicUrl,
-    trustedOrigins,
+    trustedOrigins: origins,
     mailer: deps.mailer,
     requireEmailVerification: config.requireEmailVerification ?? false,
   });
@@ -94,6 +96,7 @@ export function createApp(deps: AppDeps): TrailtallyApp {
   );
   app.use(compression());
   if (config.devWebOrigin) app.use('/api', cors({ origin: config.devWebOrigin, credentials: true }));
+  app.use('/api', requireTrustedOrigin(origins, config.publicUrl));
 
   const authLimit = config.authRateLimit ?? { windowMs: 15 * 60 * 1000, limit: 100 };
   app.use(

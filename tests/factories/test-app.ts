@@ -9,6 +9,9 @@ import { createApp, type AppDeps, type TrailtallyApp } from '@/server/app';
 import type { Mailer } from '@/server/mail/mailer';
 import { createMemoryMailer } from './memory-mailer';
 
+/** The test app's public URL: requests that change data carry it as their Origin. */
+export const TEST_ORIGIN = 'http://localhost:8080';
+
 export type TestContext = {
   app: TrailtallyApp;
   db: Db;
@@ -41,7 +44,7 @@ export function createTestApp(
     ...(options.outbox ? { outbox: options.outbox } : {}),
     config: {
       authSecret: 'test-secret-that-is-long-enough-for-better-auth-0123456789',
-      publicUrl: 'http://localhost:8080',
+      publicUrl: TEST_ORIGIN,
       ...(options.webDir ? { webDir: options.webDir } : {}),
       authRateLimit: { windowMs: 60_000, limit: options.authAttemptsPerMinute ?? 1000 },
     },
@@ -63,10 +66,11 @@ let counter = 0;
 export async function signUpAgent(app: TrailtallyApp, name = 'Test Traveller', chosenEmail?: string) {
   counter += 1;
   const email = chosenEmail ?? `traveller${counter}-${Date.now()}@example.test`;
-  const agent = request.agent(app);
+  // Every change the API accepts must say it comes from the app's own page, as a browser's would.
+  const agent = request.agent(app).set('Origin', TEST_ORIGIN);
   const response = await agent
     .post('/api/auth/sign-up/email')
-    .set('Origin', 'http://localhost:8080')
+    .set('Origin', TEST_ORIGIN)
     .send({ name, email, password: 'correct-horse-battery' });
   if (response.status !== 200) throw new Error(`sign-up failed: ${response.status} ${response.text}`);
   return { agent, email, userId: (response.body as { user: { id: string } }).user.id };
