@@ -55,8 +55,8 @@ describe('changes must come from the app’s own pages', () => {
   it.each(['put', 'patch', 'delete'] as const)(
     'when a %s arrives from another origin, then it is refused',
     async (method) => {
-      const response = await request(ctx.app)
-        [method](`/api/trips/${tripId}`)
+      const client = request(ctx.app);
+      const response = await client[method](`/api/trips/${tripId}`)
         .set('Cookie', cookie)
         .set('Origin', 'https://evil.example')
         .send({});
