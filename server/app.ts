@@ -10,11 +10,14 @@ import type { Db } from '../db/client';
 import { createAuth } from './auth';
 import type { Auth } from './auth';
 import { HttpError } from './errors';
+import { httpLogSerializers } from './logger';
 import type { CapturedMail } from './mail/local-smtp';
 import type { Mailer } from './mail/mailer';
 import { authGuards, DEFAULT_AUTH_LIMITS, type AuthLimits } from './middleware/auth-guards';
 import { errorHandler } from './middleware/error-handler';
+import { loopbackOnly } from './middleware/loopback-only';
 import { requireSession } from './middleware/require-session';
+import { requireTrustedOrigin } from './middleware/require-trusted-origin';
 import { healthRouter } from './routes/health';
 import { preferencesRouter } from './routes/preferences';
 import { rigPresetsRouter, rigsRouter } from './routes/rigs';
@@ -64,10 +67,11 @@ const JSON_BODY_LIMIT = '100kb';
 /** Builds the whole HTTP app without listening, so tests can drive it through supertest. */
 export function createApp(deps: AppDeps): TrailtallyApp {
   const { db, config } = deps;
+  const origins = trustedOrigins(config);
   const auth = createAuth(db, {
     secret: config.authSecret,
     baseUrl: config.publicUrl,
-    trustedOrigins: trustedOrigins(config),
+    trustedOrigins: origins,
     mailer: deps.mailer,
     requireEmailVerification: config.requireEmailVerification ?? false,
   });
@@ -78,7 +82,13 @@ export function createApp(deps: AppDeps): TrailtallyApp {
   app.set('trust proxy', config.trustProxy ?? false);
 
   if (deps.logger)
-    app.use(pinoHttp({ logger: deps.logger, autoLogging: { ignore: (req) => !req.url?.startsWith('/api') } }));
+    app.use(
+      pinoHttp({
+        logger: deps.logger,
+        serializers: httpLogSerializers,
+        autoLogging: { ignore: (req) => !req.url?.startsWith('/api') },
+      }),
+    );
   app.use(
     helmet({
       contentSecurityPolicy: {
@@ -93,6 +103,7 @@ export function createApp(deps: AppDeps): TrailtallyApp {
   );
   app.use(compression());
   if (config.devWebOrigin) app.use('/api', cors({ origin: config.devWebOrigin, credentials: true }));
+  app.use('/api', requireTrustedOrigin(origins, config.publicUrl));
 
   app.use('/api/auth', authGuards({ ...DEFAULT_AUTH_LIMITS, ...config.authLimits }));
   // better-auth reads the body itself (here the text authGuards read): its handler comes before express.json().
@@ -111,7 +122,8 @@ export function createApp(deps: AppDeps): TrailtallyApp {
   app.use('/api/invites', inviteLinksRouter({ db, now: deps.now, auth }));
   app.use('/api/clubs', signedIn, clubsRouter({ db, now: deps.now, ...invites }));
   app.use('/api/club-invites', clubInviteLinksRouter({ db, now: deps.now, auth }));
-  if (deps.outbox && !config.production) app.use('/api/dev/outbox', outboxRouter(deps.outbox));
+  // The Outbox shows every password-reset link: only someone at this machine may read it.
+  if (deps.outbox && !config.production) app.use('/api/dev/outbox', loopbackOnly(), outboxRouter(deps.outbox));
   app.use('/api/rigs', signedIn, rigsRouter({ db, now: deps.now }));
   app.use('/api/rig-presets', signedIn, rigPresetsRouter());
   app.use('/api/me/preferences', signedIn, preferencesRouter({ db }));
@@ -119,6 +131,7 @@ export function createApp(deps: AppDeps): TrailtallyApp {
     next(new HttpError(404, 'not_found', `No API route for ${req.method} ${req.baseUrl}${req.path}.`)),
   );
 
+  app.use('/outbox', loopbackOnly());
   const web = config.webDir ? webStatic(config.webDir) : undefined;
   if (web) app.use(web);
 

@@ -4,6 +4,7 @@ export type ErrorCode =
   | 'validation_failed'
   | 'unauthorized'
   | 'forbidden'
+  | 'forbidden_origin'
   | 'not_found'
   | 'conflict'
   | 'unprocessable'

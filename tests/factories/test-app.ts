@@ -1,14 +1,18 @@
 import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
+import type { Logger } from 'pino';
 import request from 'supertest';
 import { openDatabase, type Db } from '@/db/client';
 import { runMigrations } from '@/db/migrate';
-import { createApp, type AppConfig, type TrailtallyApp } from '@/server/app';
+import { createApp, type AppConfig, type AppDeps, type TrailtallyApp } from '@/server/app';
 import type { Mailer } from '@/server/mail/mailer';
 import type { AuthLimits } from '@/server/middleware/auth-guards';
 import type { TrustProxy } from '@/server/trust-proxy';
 import { createMemoryMailer } from './memory-mailer';
+
+/** The test app's public URL: requests that change data carry it as their Origin. */
+export const TEST_ORIGIN = 'http://localhost:8080';
 
 export type TestContext = {
   app: TrailtallyApp;
@@ -28,6 +32,10 @@ export function createTestApp(
     /** Any other app setting (production mode, another PUBLIC_URL…). */
     config?: Partial<AppConfig>;
     invitesPerHour?: number;
+    logger?: Logger;
+    outbox?: AppDeps['outbox'];
+    /** A folder with an index.html, to serve as the web app. */
+    webDir?: string;
   } = {},
 ): TestContext {
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'trailtally-test-'));
@@ -38,9 +46,12 @@ export function createTestApp(
     db,
     mailer: options.mailer ?? mailer,
     now: options.now ?? (() => new Date('2026-11-20T10:00:00Z')),
+    ...(options.logger ? { logger: options.logger } : {}),
+    ...(options.outbox ? { outbox: options.outbox } : {}),
     config: {
       authSecret: 'test-secret-that-is-long-enough-for-better-auth-0123456789',
-      publicUrl: 'http://localhost:8080',
+      publicUrl: TEST_ORIGIN,
+      ...(options.webDir ? { webDir: options.webDir } : {}),
       ...(options.invitesPerHour !== undefined ? { invitesPerHour: options.invitesPerHour } : {}),
       // High limits unless a test asks for low ones: tests sign many users up and in from one address.
       authLimits: {
@@ -74,11 +85,9 @@ export const TEST_PASSWORD = 'correct-horse-battery';
 export async function signUpAgent(app: TrailtallyApp, name = 'Test Traveller', chosenEmail?: string) {
   counter += 1;
   const email = chosenEmail ?? `traveller${counter}-${Date.now()}@example.test`;
-  const agent = request.agent(app);
-  const response = await agent
-    .post('/api/auth/sign-up/email')
-    .set('Origin', 'http://localhost:8080')
-    .send({ name, email, password: TEST_PASSWORD });
+  // Every change the API accepts must say it comes from the app's own page, as a browser's would.
+  const agent = request.agent(app).set('Origin', TEST_ORIGIN);
+  const response = await agent.post('/api/auth/sign-up/email').send({ name, email, password: TEST_PASSWORD });
   if (response.status !== 200) throw new Error(`sign-up failed: ${response.status} ${response.text}`);
   return { agent, email, userId: (response.body as { user: { id: string } }).user.id };
 }

@@ -3,7 +3,7 @@
 import request, { type Agent } from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createClub, joinClubByInvite } from '../factories/club-factory';
-import { createTestApp, signUpAgent, type TestContext } from '../factories/test-app';
+import { createTestApp, signUpAgent, TEST_ORIGIN, type TestContext } from '../factories/test-app';
 import {
   addAppliance,
   addStop,
@@ -327,7 +327,8 @@ afterAll(() => world?.ctx.close());
 describe.each(ROWS)('$name', (row) => {
   it.each(ACTORS)('when called by %s, then the status is as the role rules say', async (actor) => {
     const cell = await row.prepare(world, actor);
-    const client = actor === 'anonymous' ? request(world.ctx.app) : world.callers[actor].agent;
+    const client =
+      actor === 'anonymous' ? request.agent(world.ctx.app).set('Origin', TEST_ORIGIN) : world.callers[actor].agent;
     const pending = client[cell.method](cell.path);
     const response = await (cell.body ? pending.send(cell.body) : pending);
     expect({ actor, status: response.status, body: response.status >= 400 ? response.body : undefined }).toMatchObject({
