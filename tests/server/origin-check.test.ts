@@ -105,10 +105,9 @@ describe('trustedOrigins', () => {
     expect(trustedOrigins({ publicUrl: 'https://trips.example.org/app/' })).toEqual(['https://trips.example.org']);
   });
   it('when a dev web origin is set, then it is trusted too', () => {
-    expect(trustedOrigins({ publicUrl: 'http://localhost:8080', devWebOrigin: 'http://localhost:8081' })).toEqual([
-      'http://localhost:8080',
-      'http://localhost:8081',
-    ]);
+    expect(
+      trustedOrigins({ publicUrl: 'http://localhost:8080', devWebOrigin: 'http://localhost:8081', production: true }),
+    ).toEqual(['http://localhost:8080', 'http://localhost:8081']);
   });
 });
 
