@@ -114,12 +114,7 @@ export function smallestByAmpacity(unit: SizeUnit, at: Installation, currentA: n
 }
 
 export type RunProblem =
-  | 'ampacity'
-  | 'drop'
-  | 'no-protection-fits'
-  | 'protection-missing'
-  | 'protection-too-small'
-  | 'protection-too-large';
+  'ampacity' | 'drop' | 'no-protection-fits' | 'protection-missing' | 'protection-too-small' | 'protection-too-large';
 
 export type RunNote = 'time-delay' | 'array-protection-optional';
 

@@ -82,7 +82,9 @@ export function runCurrent(run: DcRun, rig: CableRig, allRuns: readonly DcRun[])
       return known(impA * ARRAY_IRRADIANCE_FACTOR, vmpV);
     }
     case 'dc-dc-charger':
-      return rig.vehicleCharger ? known(rig.vehicleCharger.amps, nominalV) : { known: false, missing: 'vehicle-charger' };
+      return rig.vehicleCharger
+        ? known(rig.vehicleCharger.amps, nominalV)
+        : { known: false, missing: 'vehicle-charger' };
     case 'dc-load':
       return loadCurrent(run.loadW, run.surgeW, nominalV);
     case 'battery-distribution': {

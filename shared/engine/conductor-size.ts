@@ -1,13 +1,7 @@
 // Conductor sizes in either family (AWG or mm²): area, the AWG row of the tables a size is rated by, the
 // equivalence between families, and stepping through the sizes on sale. Areas: NFPA 70 Ch. 9 Table 8 for AWG;
 // IEC 60228 nominal areas for metric sizes.
-import {
-  AWG_SIZES,
-  METRIC_SIZES_MM2,
-  type AwgSize,
-  type ConductorSize,
-  type MetricSize,
-} from '../schemas/dc-wiring';
+import { AWG_SIZES, METRIC_SIZES_MM2, type AwgSize, type ConductorSize, type MetricSize } from '../schemas/dc-wiring';
 import { CIRCULAR_MILS, CMIL_PER_MM2 } from './conductor-tables';
 
 export type SizeUnit = ConductorSize['unit'];

@@ -186,7 +186,12 @@ const ABYC_E11: Readonly<Record<InsulationRatingC, PerAwg>> = {
 };
 
 /** Share of its rating a conductor keeps in an engine space (50 °C air), by insulation rating. */
-export const ENGINE_SPACE_FACTOR: Readonly<Record<InsulationRatingC, number>> = { 60: 0.58, 75: 0.75, 90: 0.82, 105: 0.86 };
+export const ENGINE_SPACE_FACTOR: Readonly<Record<InsulationRatingC, number>> = {
+  60: 0.58,
+  75: 0.75,
+  90: 0.82,
+  105: 0.86,
+};
 
 /** The table's ampacity for a conductor, before any engine-space correction, A. */
 export function tableAmpacityA(basis: CableBasis, awg: AwgSize, insulationC: InsulationRatingC): number {
@@ -203,6 +208,6 @@ export const SMALL_CONDUCTOR_MAX_PROTECTION_A: Readonly<Partial<Record<AwgSize, 
 
 /** Fuse and breaker ratings on sale, A, smallest first. */
 export const STANDARD_PROTECTION_A = [
-  1, 2, 3, 5, 7.5, 10, 15, 20, 25, 30, 35, 40, 45, 50, 60, 70, 80, 90, 100, 110, 125, 150, 175, 200, 225, 250, 300,
-  350, 400, 450, 500, 600, 700, 800, 1000,
+  1, 2, 3, 5, 7.5, 10, 15, 20, 25, 30, 35, 40, 45, 50, 60, 70, 80, 90, 100, 110, 125, 150, 175, 200, 225, 250, 300, 350,
+  400, 450, 500, 600, 700, 800, 1000,
 ] as const;

@@ -38,7 +38,9 @@ export const RUN_NAMES: Readonly<Record<DcRunKind, string>> = {
 };
 
 function runName(kind: DcRunKind, rig: CableRig): string {
-  return kind === 'dc-dc-charger' && rig.vehicleCharger?.kind === 'alternator' ? 'Alternator to battery' : RUN_NAMES[kind];
+  return kind === 'dc-dc-charger' && rig.vehicleCharger?.kind === 'alternator'
+    ? 'Alternator to battery'
+    : RUN_NAMES[kind];
 }
 
 /** A DC load as the rig's loads list has it, for a suggested circuit. */

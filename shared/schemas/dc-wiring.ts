@@ -69,7 +69,8 @@ export const dcRunSchema = z
     path: ['loadW'],
   })
   .refine((r) => loadOnly.has(r.kind) || (r.loadW === undefined && r.surgeW === undefined), {
-    message: 'Only load circuits and the distribution point take load watts; other runs take their current from the rig',
+    message:
+      'Only load circuits and the distribution point take load watts; other runs take their current from the rig',
     path: ['loadW'],
   });
 export type DcRun = z.infer<typeof dcRunSchema>;
