@@ -2,7 +2,8 @@
 // trailers and vans (common practice, rough: the inverter, controller and chargers sit beside the bank; the
 // roof array is a few metres away; a load circuit crosses the vehicle), each sized and fused by the check itself.
 // They are a starting point to measure and correct, not a survey of the vehicle.
-import type { CableBasis, DcRun, DcRunKind } from '../schemas/dc-wiring';
+import type { Appliance } from '../schemas/appliance';
+import { MAX_LOAD_W, MAX_SURGE_W, type CableBasis, type DcRun, type DcRunKind } from '../schemas/dc-wiring';
 import type { CableRig } from './cable-current';
 import { runCurrent } from './cable-current';
 import { DROP_LIMIT_PCT, installationOf, protectionForA, smallestPassing } from './cable-check';
@@ -69,7 +70,13 @@ export function newRun(
     engineSpace: false,
     critical: CRITICAL_BY_DEFAULT[kind],
     protection: { kind: 'none' },
-    ...(load ? { loadW: load.runningW, ...(load.surgeW ? { surgeW: load.surgeW } : {}) } : {}),
+    // Held inside the schema's bounds, so a suggestion is always a run the API will store.
+    ...(load
+      ? {
+          loadW: Math.min(load.runningW, MAX_LOAD_W),
+          ...(load.surgeW ? { surgeW: Math.min(load.surgeW, MAX_SURGE_W) } : {}),
+        }
+      : {}),
   };
   const current = runCurrent(draft, rig, [...others, draft]);
   if (!current.known) return draft;
@@ -108,4 +115,16 @@ export function suggestedDcRuns(
   // The distribution point feeds every load circuit, so it is sized once they are known.
   if (loads.length > 0) add('battery-distribution');
   return runs;
+}
+
+/** The DC side of a trip's appliances: DC loads, and the fans and controls of fuel-burning ones. */
+export function dcLoadsFromAppliances(appliances: readonly Appliance[]): DcLoad[] {
+  return appliances
+    .filter((a) => (a.circuit === 'dc' || a.circuit === 'fuel') && a.runningW > 0)
+    .map((a) => {
+      const runningW = a.runningW * a.quantity;
+      // One unit starting while the others run.
+      const surgeW = a.surgeW ? a.surgeW + a.runningW * (a.quantity - 1) : undefined;
+      return { name: a.name, runningW, ...(surgeW ? { surgeW } : {}) };
+    });
 }

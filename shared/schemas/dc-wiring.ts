@@ -44,6 +44,10 @@ export const MAX_DC_RUNS = 24;
 /** One-way length bounds, m: shorter than 10 cm is a bus bar, longer than 60 m is no vehicle's run. */
 export const DC_RUN_LENGTH_M = { min: 0.1, max: 60 } as const;
 
+/** A load circuit's watts, running and at start-up: the appliance bounds. */
+export const MAX_LOAD_W = 10_000;
+export const MAX_SURGE_W = 30_000;
+
 const loadOnly = new Set<DcRunKind>(['dc-load', 'battery-distribution']);
 
 export const dcRunSchema = z
@@ -60,9 +64,9 @@ export const dcRunSchema = z
     critical: z.boolean().default(true),
     protection: protectionSchema.default({ kind: 'none' }),
     /** A DC load circuit's running watts; for the distribution point, the watts it feeds (else the load runs' sum). */
-    loadW: z.number().min(0).max(10_000).optional(),
+    loadW: z.number().min(0).max(MAX_LOAD_W).optional(),
     /** Start-up watts of the circuit's largest motor, for a moment. */
-    surgeW: z.number().min(0).max(30_000).optional(),
+    surgeW: z.number().min(0).max(MAX_SURGE_W).optional(),
   })
   .refine((r) => r.kind !== 'dc-load' || r.loadW !== undefined, {
     message: 'A DC load circuit needs the watts it carries',
