@@ -33,7 +33,9 @@ describe('sizes and lengths in the user’s units', () => {
 
 describe('the form’s live check', () => {
   it('when the rig has no runs, then suggestions in the user’s family come from its parts and loads', () => {
-    const loads = dcLoadsFromAppliances(DEMO_TRIPS.highlandLoop.appliances.map((a) => applianceSchema.parse(a)));
+    const loads = dcLoadsFromAppliances(
+      (DEMO_TRIPS.highlandLoop.appliances ?? []).map((a) => applianceSchema.parse(a)),
+    );
     const check = checkForm({ ...highland, dcWiring: { basis: 'abyc-e11', runs: [] } }, 'us', loads);
     expect(check.ready && check.suggested).toBe(true);
     if (!check.ready) return;
