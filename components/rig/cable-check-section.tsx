@@ -11,6 +11,7 @@ import { Caution } from '@/components/ui/cautions';
 import { ChoiceChips } from '@/components/ui/choice-chips';
 import { Figure } from '@/components/ui/figure';
 import { Text } from '@/components/ui/text';
+import type { ConductorVerdict } from '@/shared/engine/cable-check';
 import type { CableRig } from '@/shared/engine/cable-current';
 import { newRun, RUN_NAMES, type DcLoad } from '@/shared/engine/dc-run-defaults';
 import type { CheckedRun } from '@/shared/engine/dc-wiring-check';
@@ -23,6 +24,7 @@ import {
   BASIS_NOTES,
   checkForm,
   DROP_LIMIT_TEXT,
+  KIND_SHORT,
   lengthText,
   runVerdict,
   sizeWithEquivalent,
@@ -57,6 +59,14 @@ function rigHas(kind: DcRunKind, rig: CableRig): boolean {
 
 function protectionText(run: DcRun): string {
   return run.protection.kind === 'none' ? 'no fuse' : `${run.protection.kind} ${ampsText(run.protection.amps)}`;
+}
+
+/** The fuse ratings that suit the run: from 125 % of its current (on sale) up to what the conductor may have. */
+function fuseRange(c: ConductorVerdict): { value: string; unit: string } {
+  if (c.protectionA === null) return { value: '—', unit: '' };
+  if (!c.protectionFits) return { value: `≥ ${c.protectionA}`, unit: 'A' };
+  const max = Math.floor(c.maxProtectionA);
+  return { value: max > c.protectionA ? `${c.protectionA}–${max}` : String(c.protectionA), unit: 'A' };
 }
 
 function split(text: string): { value: string; unit: string } {
@@ -97,26 +107,35 @@ function RunSummary({
       </Text>
       {check.known ? (
         <View style={styles.figures}>
-          <Figure label="Must carry" figure={split(ampsText(check.current.continuousA))} testID={`${testID}-current`} />
+          <Figure
+            label="Must carry"
+            figure={split(ampsText(check.current.continuousA))}
+            style={styles.figure}
+            testID={`${testID}-current`}
+          />
           <Figure
             label="Voltage drop"
-            figure={{ value: String(Math.round(check.conductor.dropPct * 10) / 10), unit: '%' }}
+            figure={{ value: check.conductor.dropPct.toFixed(1), unit: '%' }}
             note={`limit ${check.dropLimitPct} %`}
             color={check.conductor.dropOk ? 'ink' : 'ember'}
+            style={styles.figure}
             testID={`${testID}-drop`}
           />
           <Figure
             label="Cable good for"
             figure={split(ampsText(check.conductor.ampacityA))}
             color={check.conductor.carries ? 'ink' : 'ember'}
+            style={styles.figure}
             testID={`${testID}-ampacity`}
           />
           <Figure
-            label="Fuse to fit"
-            figure={
-              check.conductor.protectionA ? split(ampsText(check.conductor.protectionA)) : { value: '—', unit: '' }
+            label="Fuse between"
+            figure={fuseRange(check.conductor)}
+            note={
+              check.conductor.protectionFits ? '125 % of the current, up to the cable' : 'more than the cable may have'
             }
-            note="125 % of the current, on sale"
+            color={check.conductor.protectionFits ? 'ink' : 'ember'}
+            style={styles.fuseFigure}
             testID={`${testID}-fuse`}
           />
         </View>
@@ -266,28 +285,29 @@ export function CableCheckSection({ control, setValue, units, disabled, dcLoads 
         })}
       </View>
       {!disabled && check.ready && runs.fields.length < MAX_DC_RUNS ? (
-        <View style={styles.addRow}>
-          <Text variant="caption" color="inkSoft">
-            Add a run:
-          </Text>
-          {DC_RUN_KINDS.filter((k) => rigHas(k, check.rig)).map((kind) => (
-            <Button
-              key={kind}
-              testID={`cable-add-${kind}`}
-              tone="quiet"
-              label={`+ ${RUN_NAMES[kind]}`}
-              accessibilityLabel={`Add a run: ${RUN_NAMES[kind]}`}
-              onPress={() => {
-                add(
-                  kind,
-                  check.rig,
-                  check.basis,
-                  entered.flatMap((c) => (c ? [c.run] : [])),
-                );
-                setOpenId(null);
-              }}
-            />
-          ))}
+        <View style={styles.addWrap}>
+          <Text variant="label">Add a run</Text>
+          <View style={styles.addRow}>
+            {DC_RUN_KINDS.filter((k) => rigHas(k, check.rig)).map((kind) => (
+              <Button
+                key={kind}
+                testID={`cable-add-${kind}`}
+                tone="secondary"
+                style={styles.addButton}
+                label={`+ ${KIND_SHORT[kind]}`}
+                accessibilityLabel={`Add a run: ${RUN_NAMES[kind]}`}
+                onPress={() => {
+                  add(
+                    kind,
+                    check.rig,
+                    check.basis,
+                    entered.flatMap((c) => (c ? [c.run] : [])),
+                  );
+                  setOpenId(null);
+                }}
+              />
+            ))}
+          </View>
         </View>
       ) : null}
       <Caution kind="cabling" testID="caution-cabling" />
@@ -322,5 +342,10 @@ const styles = StyleSheet.create({
   figures: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md },
   lines: { gap: space.xs },
   actions: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
-  addRow: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.xs },
+  // Two figures to a phone row, four to a wide one.
+  figure: { minWidth: 96, flexBasis: 96 },
+  fuseFigure: { minWidth: 130, flexBasis: 130 },
+  addWrap: { gap: space.sm },
+  addRow: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
+  addButton: { paddingHorizontal: space.lg, minHeight: 44 },
 });

@@ -8,7 +8,6 @@ import { ChoiceChips } from '@/components/ui/choice-chips';
 import { Text } from '@/components/ui/text';
 import { TextField } from '@/components/ui/text-field';
 import { inFamily, stepSize } from '@/shared/engine/conductor-size';
-import { RUN_NAMES } from '@/shared/engine/dc-run-defaults';
 import {
   DC_RUN_KINDS,
   DC_RUN_LENGTH_M,
@@ -20,7 +19,7 @@ import {
 } from '@/shared/schemas/dc-wiring';
 import type { RigInput } from '@/shared/schemas/rig';
 import type { UnitSystem } from '@/shared/units';
-import { equivalentText, runLength, sizeText } from './dc-run-values';
+import { equivalentText, KIND_SHORT, runLength, sizeText } from './dc-run-values';
 import { fieldStyles, Num, type RigControl } from './rig-fields';
 
 type Props = {
@@ -33,7 +32,7 @@ type Props = {
 
 // The form's type allows a missing size while the rig is typed in; a stored run always has one.
 const FALLBACK_SIZE: ConductorSize = { unit: 'mm2', mm2: 2.5 };
-const KIND_OPTIONS = DC_RUN_KINDS.map((k) => ({ value: k, label: RUN_NAMES[k] }));
+const KIND_OPTIONS = DC_RUN_KINDS.map((k) => ({ value: k, label: KIND_SHORT[k] }));
 const TAKES_LOAD = new Set<DcRunKind>(['dc-load', 'battery-distribution']);
 
 /** Thinner and thicker buttons around the size, with the other family's equivalent beneath. */
@@ -249,12 +248,15 @@ export function DcRunEditor({ control, setValue, index, units, disabled }: Props
             value={field.value === false ? 'other' : 'critical'}
             onChange={(v) => field.onChange(v === 'critical')}
             options={[
-              { value: 'critical', label: '3 % (charging, inverter, pumps)' },
-              { value: 'other', label: '10 % (lights, small loads)' },
+              { value: 'critical', label: '3 %, critical' },
+              { value: 'other', label: '10 %, other' },
             ]}
           />
         )}
       />
+      <Text variant="caption" color="inkSoft">
+        Critical: charging, the inverter, pumps and electronics. Other: lights and small loads.
+      </Text>
       <ChoiceChips
         testID={`${id}-protection`}
         label="Protection"
@@ -302,7 +304,7 @@ const styles = StyleSheet.create({
     flexDirection: 'row',
     alignItems: 'baseline',
     gap: space.xs,
-    minWidth: 96,
+    minWidth: 88,
     justifyContent: 'center',
     paddingVertical: space.xs,
     borderRadius: radii.md,

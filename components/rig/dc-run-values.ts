@@ -17,6 +17,7 @@ import {
   type CableBasis,
   type ConductorSize,
   type DcRun,
+  type DcRunKind,
 } from '@/shared/schemas/dc-wiring';
 import {
   batterySchema,
@@ -208,6 +209,16 @@ export function runVerdict(checked: CheckedRun, basis: CableBasis, units: UnitSy
     lines,
   };
 }
+
+/** Short names for a run's kind, for chips and buttons that must fit a phone's width. */
+export const KIND_SHORT: Record<DcRunKind, string> = {
+  'battery-inverter': 'Inverter',
+  'battery-distribution': 'Distribution point',
+  'controller-battery': 'Controller to battery',
+  'array-controller': 'Array to controller',
+  'dc-dc-charger': 'DC-DC charger',
+  'dc-load': 'Load circuit',
+};
 
 export const BASIS_NOTES: Record<CableBasis, string> = {
   'abyc-e11':
