@@ -234,13 +234,7 @@ export function CableCheckSection({ control, setValue, units, disabled, dcLoads 
               testID="cable-use-suggested"
               tone="secondary"
               label="Start from these runs"
-              onPress={() =>
-                setValue(
-                  'dcWiring.runs',
-                  check.suggestions.map((c) => c.run),
-                  { shouldDirty: true },
-                )
-              }
+              onPress={() => runs.replace(check.suggestions.map((c) => c.run))}
             />
           ) : null}
         </View>

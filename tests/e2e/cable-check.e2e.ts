@@ -138,6 +138,39 @@ describe('the cable check on the Rig tab', () => {
     await context.close();
   });
 
+  it('when a new trip’s rig has no runs, then runs are suggested from its parts and can be taken up and saved', async () => {
+    const context = await suite.browser.newContext({ viewport: VIEWPORTS.phone });
+    const page = await context.newPage();
+    const errors = trackPageErrors(page);
+    await signIn(page, suite.server.url, DEMO_ACCOUNT.email, DEMO_ACCOUNT.password);
+    await page.click(byTestId('new-trip'));
+    await page.waitForSelector(byTestId('new-trip-rig-preset:van-small'));
+    await page.fill(byTestId('new-trip-name'), 'Cable weekend');
+    await page.fill(byTestId('new-trip-startDate'), '2027-10-04');
+    await page.fill(byTestId('new-trip-endDate'), '2027-10-06');
+    await page.fill(byTestId('new-trip-timeZone'), 'Europe/London');
+    await page.click(byTestId('new-trip-rig-preset:van-small'));
+    await page.click(byTestId('new-trip-submit'));
+    await page.waitForSelector(byTestId('route-screen'));
+    await page.click(byTestId('tab-rig'));
+    await page.waitForSelector(byTestId('cable-suggested'));
+    expect(await page.textContent(byTestId('dc-suggested-0'))).toContain('Battery to inverter');
+    expect(await page.locator(byTestId('dc-run-0')).count()).toBe(0);
+    await expectNothingCutOff(page);
+    await shootAt(page, 'cable-suggested', 'cable-check-suggested-phone');
+
+    await page.click(byTestId('cable-use-suggested'));
+    await page.waitForSelector(byTestId('dc-run-0-headline'));
+    await page.click(byTestId('rig-save'));
+    await expect.poll(() => page.textContent(byTestId('toast'))).toContain('Rig saved');
+    await page.reload();
+    await page.waitForSelector(byTestId('dc-run-0-headline'));
+    expect(await page.locator(byTestId('cable-suggested')).count()).toBe(0);
+    expect(await page.textContent(byTestId('dc-run-0'))).toContain('mm²');
+    expect(errors).toEqual([]);
+    await context.close();
+  });
+
   it('when a viewer opens it, then the verdicts are there and nothing can be edited', async () => {
     const context = await suite.browser.newContext({ viewport: VIEWPORTS.phone });
     const page = await context.newPage();
