@@ -116,7 +116,7 @@ export function ampsText(a: number): string {
   return `${a < 10 ? round(a, 1) : Math.round(a)} A`;
 }
 
-export const pctText = (p: number): string => `${p < 10 ? round(p, 1) : Math.round(p)} %`;
+export const pctText = (p: number): string => `${p.toFixed(1)} %`;
 
 const MISSING: Record<MissingPart, string> = {
   inverter: 'This rig has no inverter, so this run carries nothing yet: add the inverter above or remove the run.',
@@ -153,9 +153,11 @@ function problemLine(problem: RunProblem, run: DcRun, c: Extract<RunCheck, { kno
     case 'ampacity':
       return `Too thin for the current: it must carry ${ampsText(current.continuousA)}, and ${sizeText(run.size)} is good for ${ampsText(conductor.ampacityA)} here.`;
     case 'drop':
-      return `${conductor.carries ? `It carries the current (good for ${ampsText(conductor.ampacityA)}), but it` : 'It also'} loses ${pctText(conductor.dropPct)} of the voltage over ${lengthText(run.lengthM, units)} each way; the limit for this run is ${pctText(c.dropLimitPct)}.`;
+      return `${conductor.carries ? `It carries the current (good for ${ampsText(conductor.ampacityA)}), but it` : 'It also'} loses ${pctText(conductor.dropPct)} of the voltage over ${lengthText(run.lengthM, units)} each way; the limit for this run is ${c.dropLimitPct} %.`;
     case 'no-protection-fits':
-      return `No fuse on sale fits: it needs at least ${ampsText(need)} (125 % of ${ampsText(current.continuousA)}), and this cable may be protected by no more than ${ampsText(conductor.maxProtectionA)}.`;
+      return conductor.protectionA === null
+        ? `No fuse on sale is large enough for 125 % of ${ampsText(current.continuousA)}.`
+        : `No fuse on sale fits: the smallest at or above 125 % of ${ampsText(current.continuousA)} (${ampsText(need)}) is ${ampsText(conductor.protectionA)}, more than this cable may be protected by (${ampsText(conductor.maxProtectionA)}).`;
     case 'protection-missing':
       return conductor.protectionA
         ? `No fuse or breaker: fit one of ${ampsText(conductor.protectionA)} as close to the battery as it will go.`
@@ -190,7 +192,7 @@ export function runVerdict(checked: CheckedRun, basis: CableBasis, units: UnitSy
   if (check.passes) {
     const protection = run.protection.kind === 'none' ? null : run.protection;
     lines.push(
-      `Passes: it carries ${ampsText(check.current.continuousA)} (good for ${ampsText(check.conductor.ampacityA)}) and loses ${pctText(check.conductor.dropPct)} of the voltage (limit ${pctText(check.dropLimitPct)})${protection ? `; the ${ampsText(protection.amps)} ${protection.kind} protects it` : ''}.`,
+      `Passes: it carries ${ampsText(check.current.continuousA)} (good for ${ampsText(check.conductor.ampacityA)}) and loses ${pctText(check.conductor.dropPct)} of the voltage (limit ${check.dropLimitPct} %)${protection ? `; the ${ampsText(protection.amps)} ${protection.kind} protects it` : ''}.`,
     );
   } else {
     for (const p of check.problems) lines.push(problemLine(p, run, check, units));

@@ -110,4 +110,14 @@ describe('plain verdicts', () => {
     expect(verdict.headline).toContain('too thin for the current');
     expect(verdict.lines.some((l) => l.startsWith('No single conductor up to 4/0 AWG passes here'))).toBe(true);
   });
+
+  it('when a conductor carries the current but the fuse on sale is over its limit, then the verdict names both figures', () => {
+    // 6 AWG at 105 °C on NFPA 70 is read at 90 °C: 75 A. 125 % of 60 A is 75 A, and the next rating on sale is 80 A.
+    const rig = { ...desert, dcWiring: { ...desert.dcWiring, basis: 'nfpa70' as const } };
+    const { found, basis } = checkOf(rig, 'Controller to battery');
+    const verdict = runVerdict(found, basis, 'us');
+    expect(verdict.lines[0]).toBe(
+      'No fuse on sale fits: the smallest at or above 125 % of 60 A (75 A) is 80 A, more than this cable may be protected by (75 A).',
+    );
+  });
 });

@@ -2,6 +2,7 @@
 // schema (400 naming the field), held to the rig's version and roles like any other rig edit.
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { rigs } from '@/db/schema/rigs';
+import { suggestedDcRuns } from '@/shared/engine/dc-run-defaults';
 import type { RigRecord } from '@/shared/schemas/api';
 import { MAX_DC_RUNS, type DcRun, type DcWiring } from '@/shared/schemas/dc-wiring';
 import { createTestApp, signUpAgent, type TestContext } from '../factories/test-app';
@@ -93,12 +94,10 @@ describe('DC runs on the rig', () => {
   it('when a DC load circuit has no watts, then the answer names loadW', async () => {
     const { owner, detail, path } = await tripWithRig();
     const { loadW: _loadW, ...noWatts } = FRIDGE_RUN;
-    const response = await owner.agent
-      .put(path)
-      .send({
-        version: detail.rig.version,
-        rig: { ...detail.rig.rig, dcWiring: { basis: 'abyc-e11', runs: [noWatts] } },
-      });
+    const response = await owner.agent.put(path).send({
+      version: detail.rig.version,
+      rig: { ...detail.rig.rig, dcWiring: { basis: 'abyc-e11', runs: [noWatts] } },
+    });
     expect(response.status).toBe(422);
     expect(response.body.error.fields).toHaveProperty(['rig.dcWiring.runs.0.loadW']);
   });
@@ -138,6 +137,17 @@ describe('DC runs on the rig', () => {
     const put = await owner.agent.put(`/api/rigs/${mine.id}`).send({ version: mine.version, rig: edited });
     expect(put.status).toBe(200);
     expect((put.body as RigRecord).rig.dcWiring.runs).toEqual([INVERTER_RUN]);
+  });
+
+  it('when the runs the check suggests for a preset rig are saved as they come, then the API stores them', async () => {
+    const { owner, detail, path } = await tripWithRig();
+    const runs = suggestedDcRuns(detail.rig.rig, 'abyc-e11', 'mm2', [{ name: 'Fridge', runningW: 60, surgeW: 180 }]);
+    expect(runs.length).toBeGreaterThan(3);
+    const response = await owner.agent
+      .put(path)
+      .send({ version: detail.rig.version, rig: { ...detail.rig.rig, dcWiring: { basis: 'abyc-e11', runs } } });
+    expect(response.status).toBe(200);
+    expect((response.body as RigRecord).rig.dcWiring.runs).toEqual(runs);
   });
 
   it('when a rig was stored before runs existed (no column value), then it reads as no runs', async () => {
