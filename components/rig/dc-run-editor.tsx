@@ -1,6 +1,6 @@
 // The fields of one DC run in the rig form: what it connects, its length, conductor, insulation, copper, place,
 // drop limit and protection, and for load circuits the watts they carry.
-import { Controller, useWatch, type UseFormSetValue } from 'react-hook-form';
+import { Controller, useWatch, type FieldPathByValue, type UseFormSetValue } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 import { colors, radii, space } from '@/components/theme/tokens';
 import { Button } from '@/components/ui/button';
@@ -91,6 +91,48 @@ function SizeStepper({
         ]}
       />
     </View>
+  );
+}
+
+type Choice = { value: string; label: string };
+
+/** A yes/no field of the run shown as two named chips; `unset` is what the form shows before a value is set. */
+function TwoWayChips({
+  control,
+  name,
+  label,
+  testID,
+  disabled,
+  yes,
+  no,
+  unset,
+  yesFirst = false,
+}: {
+  control: RigControl;
+  name: FieldPathByValue<RigInput, boolean | undefined>;
+  label: string;
+  testID: string;
+  disabled: boolean;
+  yes: Choice;
+  no: Choice;
+  unset: boolean;
+  yesFirst?: boolean;
+}) {
+  return (
+    <Controller
+      control={control}
+      name={name}
+      render={({ field }) => (
+        <ChoiceChips
+          testID={testID}
+          label={label}
+          disabled={disabled}
+          value={(typeof field.value === 'boolean' ? field.value : unset) ? yes.value : no.value}
+          onChange={(v) => field.onChange(v === yes.value)}
+          options={yesFirst ? [yes, no] : [no, yes]}
+        />
+      )}
+    />
   );
 }
 
@@ -203,56 +245,36 @@ export function DcRunEditor({ control, setValue, index, units, disabled }: Props
           />
         )}
       />
-      <Controller
+      <TwoWayChips
         control={control}
         name={`${base}.tinned`}
-        render={({ field }) => (
-          <ChoiceChips
-            testID={`${id}-copper`}
-            label="Copper"
-            disabled={disabled}
-            value={field.value ? 'tinned' : 'bare'}
-            onChange={(v) => field.onChange(v === 'tinned')}
-            options={[
-              { value: 'bare', label: 'Bare' },
-              { value: 'tinned', label: 'Tinned' },
-            ]}
-          />
-        )}
+        testID={`${id}-copper`}
+        label="Copper"
+        disabled={disabled}
+        no={{ value: 'bare', label: 'Bare' }}
+        yes={{ value: 'tinned', label: 'Tinned' }}
+        unset={false}
       />
-      <Controller
+      <TwoWayChips
         control={control}
         name={`${base}.engineSpace`}
-        render={({ field }) => (
-          <ChoiceChips
-            testID={`${id}-place`}
-            label="Runs through"
-            disabled={disabled}
-            value={field.value ? 'engine' : 'outside'}
-            onChange={(v) => field.onChange(v === 'engine')}
-            options={[
-              { value: 'outside', label: 'Living or storage space' },
-              { value: 'engine', label: 'An engine space' },
-            ]}
-          />
-        )}
+        testID={`${id}-place`}
+        label="Runs through"
+        disabled={disabled}
+        no={{ value: 'outside', label: 'Living or storage space' }}
+        yes={{ value: 'engine', label: 'An engine space' }}
+        unset={false}
       />
-      <Controller
+      <TwoWayChips
         control={control}
         name={`${base}.critical`}
-        render={({ field }) => (
-          <ChoiceChips
-            testID={`${id}-critical`}
-            label="Voltage drop allowed"
-            disabled={disabled}
-            value={field.value === false ? 'other' : 'critical'}
-            onChange={(v) => field.onChange(v === 'critical')}
-            options={[
-              { value: 'critical', label: '3 %, critical' },
-              { value: 'other', label: '10 %, other' },
-            ]}
-          />
-        )}
+        testID={`${id}-critical`}
+        label="Voltage drop allowed"
+        disabled={disabled}
+        yes={{ value: 'critical', label: '3 %, critical' }}
+        no={{ value: 'other', label: '10 %, other' }}
+        unset
+        yesFirst
       />
       <Text variant="caption" color="inkSoft">
         Critical: charging, the inverter, pumps and electronics. Other: lights and small loads.
