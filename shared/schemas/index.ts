@@ -5,3 +5,4 @@ export * from './appliance';
 export * from './options';
 export * from './engine-input';
 export * from './text';
+export * from './dc-wiring';

@@ -2,6 +2,7 @@
 import { z } from 'zod';
 import { nameText } from './text';
 import { fractionSchema, percentSchema, positiveSchema, routineWindowSchema } from './common';
+import { dcWiringSchema, emptyDcWiring } from './dc-wiring';
 
 export const chemistrySchema = z.enum(['lifepo4', 'agm', 'flooded']);
 export type Chemistry = z.infer<typeof chemistrySchema>;
@@ -121,6 +122,8 @@ export const rigSchema = z
     vehicleCharger: vehicleChargerSchema.nullable().default(null),
     generator: generatorSchema.nullable().default(null),
     propaneTanks: z.array(propaneTankSchema).max(8).default([]),
+    /** The DC runs for the cable check; none stored, the check suggests runs from the rig's parts. */
+    dcWiring: dcWiringSchema.default(emptyDcWiring),
   })
   .refine((r) => r.solarArrays.length === 0 || r.controller !== null, {
     message: 'Solar arrays need a charge controller',
