@@ -13,5 +13,8 @@ if (!fs.existsSync(chromium)) {
   process.exit(1);
 }
 ensureWebBuild();
-const result = spawnSync('npx', ['vitest', 'run', '--config', 'vitest.e2e.config.mts'], { stdio: 'inherit' });
+// Extra arguments (a file, -t "name") go to vitest, so one browser test can be run alone.
+const result = spawnSync('npx', ['vitest', 'run', '--config', 'vitest.e2e.config.mts', ...process.argv.slice(2)], {
+  stdio: 'inherit',
+});
 process.exit(result.status ?? 1);
