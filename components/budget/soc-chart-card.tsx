@@ -21,13 +21,20 @@ type Mark = 'fill' | 'dashed' | 'ring' | 'pin';
 function Legend({ color, label, mark = 'fill' }: { color: string; label: string; mark?: Mark }) {
   return (
     <View style={styles.legendItem}>
-      <View
-        style={[
-          styles.swatch,
-          { backgroundColor: mark === 'fill' ? color : 'transparent', borderColor: color },
-          mark === 'dashed' ? styles.dashed : mark === 'ring' ? styles.ring : mark === 'pin' ? styles.pin : null,
-        ]}
-      />
+      {mark === 'pin' ? (
+        // The chart marks a flag with a small downward triangle.
+        <Text variant="caption" color="ember" style={styles.pin}>
+          ▼
+        </Text>
+      ) : (
+        <View
+          style={[
+            styles.swatch,
+            { backgroundColor: mark === 'fill' ? color : 'transparent', borderColor: color },
+            mark === 'dashed' ? styles.dashed : mark === 'ring' ? styles.ring : null,
+          ]}
+        />
+      )}
       <Text variant="caption" color="inkSoft">
         {label}
       </Text>
@@ -175,18 +182,7 @@ const styles = StyleSheet.create({
   swatch: { width: 16, height: 10, borderRadius: 3, borderWidth: 2 },
   dashed: { borderStyle: 'dashed', height: 0, borderWidth: 1.5 },
   ring: { width: 12, height: 12, borderRadius: 6, borderWidth: 2.5 },
-  pin: {
-    width: 0,
-    height: 0,
-    borderRadius: 0,
-    borderWidth: 0,
-    borderLeftWidth: 5,
-    borderRightWidth: 5,
-    borderTopWidth: 8,
-    borderLeftColor: 'transparent',
-    borderRightColor: 'transparent',
-    borderTopColor: colors.ember,
-  },
+  pin: { fontSize: 10, lineHeight: 12 },
   chips: { paddingRight: space.xs },
   chipRow: { flexDirection: 'row', gap: space.xs },
   chip: {

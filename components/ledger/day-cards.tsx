@@ -63,5 +63,5 @@ const styles = StyleSheet.create({
   },
   grid: { flexDirection: 'row', flexWrap: 'wrap', rowGap: space.sm, marginTop: space.sm },
   figure: { width: '33.33%', gap: 0 },
-  number: { fontSize: 20, lineHeight: 24, fontFamily: fonts.extraBold },
+  number: { fontSize: 18, lineHeight: 22, fontFamily: fonts.extraBold },
 });

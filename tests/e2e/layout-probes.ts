@@ -59,10 +59,10 @@ export async function horizontalOverflow(page: Page): Promise<string[]> {
  */
 export async function overlappingText(page: Page): Promise<string[]> {
   return page.evaluate(() => {
-    type Box = { left: number; top: number; right: number; bottom: number; text: string };
+    type Box = { left: number; top: number; right: number; bottom: number; text: string; owner: Element; node: Node };
     const clip = (el: Element, r: DOMRect) => {
       let box = { left: r.left, top: r.top, right: r.right, bottom: r.bottom };
-      for (let p = el.parentElement; p; p = p.parentElement) {
+      for (let p: Element | null = el; p; p = p.parentElement) {
         const s = getComputedStyle(p);
         if (s.overflowX === 'visible' && s.overflowY === 'visible') continue;
         const c = p.getBoundingClientRect();
@@ -74,6 +74,18 @@ export async function overlappingText(page: Page): Promise<string[]> {
         };
       }
       return box;
+    };
+    // Something opaque drawn over the text (a scroll row's edge fade, a sticky header) hides it: text there is
+    // not on screen, so it cannot overprint anything.
+    const opaque = (el: Element) => {
+      const bg = getComputedStyle(el).backgroundColor;
+      return bg !== 'transparent' && !/rgba\(.*, 0\)$/.test(bg);
+    };
+    const hiddenAt = (owner: Element, x: number, y: number) => {
+      const top = document.elementFromPoint(x, y);
+      if (!top || owner.contains(top) || top.contains(owner)) return false;
+      for (let p: Element | null = top; p && !p.contains(owner); p = p.parentElement) if (opaque(p)) return true;
+      return false;
     };
     const boxes: Box[] = [];
     const walker = document.createTreeWalker(document.body, NodeFilter.SHOW_TEXT);
@@ -89,7 +101,7 @@ export async function overlappingText(page: Page): Promise<string[]> {
       for (const r of range.getClientRects()) {
         if (r.width < 1 || r.height < 1) continue;
         const b = clip(parent, r);
-        if (b.right - b.left > 1 && b.bottom - b.top > 1) boxes.push({ ...b, text });
+        if (b.right - b.left > 1 && b.bottom - b.top > 1) boxes.push({ ...b, text, owner: parent, node });
       }
     }
     const problems: string[] = [];
@@ -100,10 +112,17 @@ export async function overlappingText(page: Page): Promise<string[]> {
       if (!a) continue;
       for (let j = i + 1; j < boxes.length; j++) {
         const b = boxes[j];
-        if (!b) continue;
+        // One text node can give more than one box (a line and its ellipsis): those are not two labels.
+        if (!b || b.node === a.node) continue;
         const w = Math.min(a.right, b.right) - Math.max(a.left, b.left);
         const h = Math.min(a.bottom, b.bottom) - Math.max(a.top, b.top);
-        if (w > slack && h > slack) problems.push(`“${a.text.slice(0, 30)}” overlaps “${b.text.slice(0, 30)}”`);
+        if (w <= slack || h <= slack) continue;
+        const x = (Math.max(a.left, b.left) + Math.min(a.right, b.right)) / 2;
+        const y = (Math.max(a.top, b.top) + Math.min(a.bottom, b.bottom)) / 2;
+        if (hiddenAt(a.owner, x, y) || hiddenAt(b.owner, x, y)) continue;
+        const at = (r: Box) =>
+          `${Math.round(r.left)},${Math.round(r.top)}–${Math.round(r.right)},${Math.round(r.bottom)}`;
+        problems.push(`“${a.text.slice(0, 30)}” at ${at(a)} overlaps “${b.text.slice(0, 30)}” at ${at(b)}`);
       }
       if (problems.length > 5) break;
     }

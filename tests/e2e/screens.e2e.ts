@@ -171,7 +171,8 @@ describe('every screen', () => {
         for (const v of await seriousA11yViolations(page)) violations.push(`${name}: ${v}`);
       }
     }
-    expect(problems).toEqual([]);
+    // Joined so a failure lists every problem, not the first few.
+    expect(problems.join('\n')).toBe('');
     expect(violations).toEqual([]);
     expect(errors).toEqual([]);
 
