@@ -205,6 +205,33 @@ describe('every screen', () => {
     await page.click(byTestId('soc-range-all'));
     await expect.poll(() => page.locator(byTestId('soc-chart')).getAttribute('data-to')).toBe(hours.last);
 
+    // A routine window's start and length are set apart, and the window is said in words. Saving shows a toast that
+    // covers no button.
+    await CHECKS.find((c) => c.name === 'loads-routine')?.open(page, paths);
+    const words = () => page.textContent(byTestId('window-0-words'));
+    await expect.poll(words).toBe('07:30–07:40, 10 min, camp days');
+    await page.fill(byTestId('window-minutes-0'), '15');
+    await expect.poll(words).toBe('07:30–07:45, 15 min, camp days');
+    await page.fill(byTestId('window-start-0'), '07:45');
+    await expect.poll(words).toBe('07:45–08:00, 15 min, camp days');
+    await expect.poll(() => page.textContent(byTestId('routine-preview-words'))).toContain('07:45–08:00, 15 min');
+    await page.click(byTestId('schedule-save'));
+    await page.waitForSelector(byTestId('toast'));
+    const covered = await page.evaluate(() => {
+      const toast = document.querySelector('[data-testid="toast"]')?.getBoundingClientRect();
+      if (!toast) return ['no toast'];
+      return [...document.querySelectorAll('[role="button"], button, a')]
+        .filter((el) => !el.closest('[data-testid="toast"]'))
+        .filter((el) => {
+          const r = el.getBoundingClientRect();
+          return (
+            r.width > 0 && r.left < toast.right && r.right > toast.left && r.top < toast.bottom && r.bottom > toast.top
+          );
+        })
+        .map((el) => el.getAttribute('aria-label') ?? el.textContent ?? '');
+    });
+    expect(covered).toEqual([]);
+
     // The hourly ledger downloads as CSV with a header row.
     await page.click(byTestId('tab-ledger'));
     await page.click(byTestId('ledger-short-short'));
