@@ -1,5 +1,6 @@
 // The routine editor's time logic: one-hour cells on a 24-hour strip <-> the routine windows the engine reads.
 // Pure and free of React so every rule (midnight wrap, short windows, day types) is unit tested.
+import { snapMinute } from '@/components/ui/time-of-day-field.types';
 import type { DaySelector, RoutineWindow } from '@/shared/schemas/common';
 
 export const HOURS = 24;
@@ -119,8 +120,7 @@ export function setLength(windows: RoutineWindow[], index: number, minutes: numb
 
 /** A new start for one window, on the five-minute step; its length stays as it is. */
 export function setStart(windows: RoutineWindow[], index: number, hour: number, minute: number): RoutineWindow[] {
-  const step = START_STEP_MINUTES;
-  const startMinute = Math.max(0, Math.min(60 - step, Math.round(minute / step) * step));
+  const startMinute = snapMinute(minute, START_STEP_MINUTES);
   const startHour = Math.max(0, Math.min(HOURS - 1, Math.round(hour)));
   return windows.map((w, i) => (i === index ? { ...w, startHour, startMinute } : w));
 }

@@ -33,7 +33,10 @@ type Props = {
 // Steps of a fade drawn with plain views, so it works the same on every platform.
 const FADE = [0.25, 0.5, 0.75, 0.92];
 const EDGE = 2;
-const ARROW = 40;
+const FADE_STEP = space.xs + 2;
+const ARROW_WIDTH = 36;
+// Room an edge's arrow and fade take: a revealed item is kept clear of it.
+const ARROW = ARROW_WIDTH + FADE.length * FADE_STEP + space.xs;
 
 /**
  * A row that scrolls sideways and says so: where more content lies past an edge, that edge fades out and shows an
@@ -136,8 +139,8 @@ const styles = StyleSheet.create({
   edge: { position: 'absolute', top: 0, bottom: 0, flexDirection: 'row', alignItems: 'stretch' },
   left: { left: 0 },
   right: { right: 0 },
-  fade: { width: space.xs + 2 },
-  arrow: { width: 36, alignItems: 'center', justifyContent: 'center' },
+  fade: { width: FADE_STEP },
+  arrow: { width: ARROW_WIDTH, alignItems: 'center', justifyContent: 'center' },
   disc: {
     width: 28,
     height: 28,

@@ -14,6 +14,10 @@ const pad = (n: number) => String(n).padStart(2, '0');
 
 export const formatClock = (hour: number, minute: number) => `${pad(hour)}:${pad(minute)}`;
 
+/** A minute rounded to the step, kept inside the hour. */
+export const snapMinute = (minute: number, stepMinutes: number) =>
+  Math.max(0, Math.min(60 - stepMinutes, Math.round(minute / stepMinutes) * stepMinutes));
+
 /** "07:35" → [7, 35], snapped to the step; null for anything that is not a time of day. */
 export function parseClock(text: string, stepMinutes = 5): [number, number] | null {
   const match = /^(\d{1,2}):(\d{2})/.exec(text.trim());
@@ -21,6 +25,5 @@ export function parseClock(text: string, stepMinutes = 5): [number, number] | nu
   const hour = Number(match[1]);
   const minute = Number(match[2]);
   if (hour > 23 || minute > 59) return null;
-  const snapped = Math.min(60 - stepMinutes, Math.round(minute / stepMinutes) * stepMinutes);
-  return [hour, snapped];
+  return [hour, snapMinute(minute, stepMinutes)];
 }

@@ -15,6 +15,7 @@ import {
   windowsFromCells,
   type Cells,
 } from '@/components/loads/routine-cells';
+import { parseClock } from '@/components/ui/time-of-day-field.types';
 import type { RoutineWindow } from '@/shared/schemas/common';
 
 const all = { kind: 'all' } as const;
@@ -180,5 +181,19 @@ describe('dailyWh and formatWindow', () => {
     [win(22, 180), '22:00–01:00'],
   ])('when a window is shown, then it reads as a time range', (w, label) => {
     expect(formatWindow(w)).toBe(label);
+  });
+});
+
+describe('parseClock', () => {
+  it.each([
+    ['07:30', [7, 30]],
+    ['07:33', [7, 35]],
+    ['23:58', [23, 55]],
+    ['7:05', [7, 5]],
+    ['', null],
+    ['25:00', null],
+    ['07:', null],
+  ])('when the time field holds “%s”, then it reads as %j', (text, expected) => {
+    expect(parseClock(text)).toEqual(expected);
   });
 });
