@@ -58,7 +58,7 @@ export function TripFrame({ tripId, children }: { tripId: string; children: Reac
                 accessibilityLabel="Back to trips"
                 style={styles.back}
               >
-                <Text variant="title" color="pine">
+                <Text variant="title" color="pine" style={styles.backMark}>
                   ‹
                 </Text>
               </Pressable>
@@ -122,6 +122,7 @@ const styles = StyleSheet.create({
   headerWide: { paddingHorizontal: space.xxl, paddingTop: space.xl, gap: space.sm },
   titleLine: { flexDirection: 'row', alignItems: 'center', gap: space.xs },
   back: { minHeight: 44, minWidth: 40, alignItems: 'center', justifyContent: 'center' },
+  backMark: { fontSize: 34, lineHeight: 38 },
   titleRow: { flex: 1, minWidth: 0 },
   title: { flexShrink: 1 },
   titlePhone: { fontSize: 17, lineHeight: 22 },
