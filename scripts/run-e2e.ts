@@ -26,6 +26,7 @@ function ensureBrowser(): string {
 
 const browser = ensureBrowser();
 ensureWebBuild();
+// Extra arguments (a file, -t "name") go to vitest, so one browser test can be run alone.
 const result = spawnSync('npx', ['vitest', 'run', '--config', 'vitest.e2e.config.mts', ...process.argv.slice(2)], {
   stdio: 'inherit',
   env: { ...process.env, CHROME_PATH: browser },

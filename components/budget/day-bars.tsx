@@ -8,6 +8,9 @@ import type { DaySheet } from '@/shared/engine/result-types';
 
 const BAR_HEIGHT = 120;
 
+/** Values under the bars are kWh to one decimal: short enough for eight days side by side on a phone. */
+const kwh = (wh: number) => (wh / 1000).toLocaleString('en-GB', { minimumFractionDigits: 1, maximumFractionDigits: 1 });
+
 /** Harvest against use per day, drawn with plain views so it shows before the chart library loads. */
 export function DayBars({ days }: { days: DaySheet[] }) {
   const max = Math.max(1, ...days.flatMap((d) => [d.harvestWh + d.hookupWh + d.vehicleWh + d.generatorWh, d.useWh]));
@@ -53,12 +56,18 @@ export function DayBars({ days }: { days: DaySheet[] }) {
               <Text variant="caption" color={d.energyShortWh > 0 ? 'ember' : 'inkSoft'} numberOfLines={1}>
                 {d.date.slice(8)}
               </Text>
+              <Text variant="caption" color="ink" numberOfLines={1} testID={`day-bar-${d.dayIndex}-in`}>
+                {kwh(d.harvestWh + other)}
+              </Text>
+              <Text variant="caption" color="inkSoft" numberOfLines={1} testID={`day-bar-${d.dayIndex}-use`}>
+                {kwh(d.useWh)}
+              </Text>
             </View>
           );
         })}
       </View>
       <Text variant="caption" color="inkSoft">
-        Bars show watt-hours per local day; a day number in orange had an energy shortfall.
+        Under each day: kWh charged in (solar and other), then kWh used. A day number in orange had an energy shortfall.
       </Text>
     </Card>
   );

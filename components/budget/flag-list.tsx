@@ -44,7 +44,7 @@ export function FlagList({ flags, days, detail, canEdit, readOnlyReason, busyKey
           No flags: the plan stays above the reserve all trip.
         </Text>
       ) : null}
-      {flags.map((flag) => (
+      {flags.map((flag, n) => (
         <View
           key={flag.id}
           style={[
@@ -53,9 +53,17 @@ export function FlagList({ flags, days, detail, canEdit, readOnlyReason, busyKey
           ]}
           testID={`flag-${flag.id}`}
         >
-          <Text variant="label" color={flag.severity === 'danger' ? 'ember' : 'ink'}>
-            {FLAG_TITLE[flag.kind]} · {flag.size.value.toLocaleString('en-GB')} {flag.size.unit}
-          </Text>
+          <View style={styles.titleRow}>
+            {/* The same number marks the flag on the state-of-charge chart. */}
+            <View style={[styles.number, flag.severity === 'danger' ? styles.numberDanger : null]}>
+              <Text variant="caption" color={flag.severity === 'danger' ? 'white' : 'ink'}>
+                {n + 1}
+              </Text>
+            </View>
+            <Text variant="label" color={flag.severity === 'danger' ? 'ember' : 'ink'} style={styles.title}>
+              {FLAG_TITLE[flag.kind]} · {flag.size.value.toLocaleString('en-GB')} {flag.size.unit}
+            </Text>
+          </View>
           <Text variant="caption" color="inkSoft">
             {localMoment(flag.atLocal)} at {where(flag)}
           </Text>
@@ -101,4 +109,16 @@ const styles = StyleSheet.create({
   info: { borderLeftColor: colors.lake },
   fix: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.sm, justifyContent: 'space-between' },
   fixText: { flex: 1, minWidth: 160 },
+  titleRow: { flexDirection: 'row', alignItems: 'center', gap: space.sm },
+  title: { flex: 1 },
+  number: {
+    minWidth: 22,
+    height: 22,
+    borderRadius: 11,
+    paddingHorizontal: space.xs,
+    alignItems: 'center',
+    justifyContent: 'center',
+    backgroundColor: colors.sunlit,
+  },
+  numberDanger: { backgroundColor: colors.emberInk },
 });

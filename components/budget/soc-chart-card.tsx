@@ -1,29 +1,40 @@
 import { useState } from 'react';
-import { StyleSheet, View, useWindowDimensions } from 'react-native';
+import { Pressable, StyleSheet, View, useWindowDimensions } from 'react-native';
 import { energy, percent, text } from '@/components/format/units';
 import { localMoment } from '@/components/format/time';
 import { useIsWide } from '@/components/theme/breakpoints';
 import { colors, radii, space } from '@/components/theme/tokens';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
+import { SideScroll } from '@/components/ui/side-scroll';
 import { Text } from '@/components/ui/text';
+import { webData } from '@/components/ui/web-data';
 import type { SimulationResult } from '@/shared/engine/result-types';
 import type { StopRecord } from '@/shared/schemas/api';
 import { SocChartSurface } from './soc-chart';
-import { socSeries } from './soc-series';
+import { dayRange, socSeries, wholeTrip, type SocSeries } from './soc-series';
 
 type Props = { result: SimulationResult; stops: StopRecord[] };
 
-function Legend({ color, label, dashed }: { color: string; label: string; dashed?: boolean }) {
+type Mark = 'fill' | 'dashed' | 'ring' | 'pin';
+
+function Legend({ color, label, mark = 'fill' }: { color: string; label: string; mark?: Mark }) {
   return (
     <View style={styles.legendItem}>
-      <View
-        style={[
-          styles.swatch,
-          { backgroundColor: dashed ? 'transparent' : color, borderColor: color },
-          dashed ? styles.dashed : null,
-        ]}
-      />
+      {mark === 'pin' ? (
+        // The chart marks a flag with a small downward triangle.
+        <Text variant="caption" color="ember" style={styles.pin}>
+          ▼
+        </Text>
+      ) : (
+        <View
+          style={[
+            styles.swatch,
+            { backgroundColor: mark === 'fill' ? color : 'transparent', borderColor: color },
+            mark === 'dashed' ? styles.dashed : mark === 'ring' ? styles.ring : null,
+          ]}
+        />
+      )}
       <Text variant="caption" color="inkSoft">
         {label}
       </Text>
@@ -31,16 +42,60 @@ function Legend({ color, label, dashed }: { color: string; label: string; dashed
   );
 }
 
+/** Whole trip (the default) or one day at a time: a row of chips that scrolls sideways on a phone. */
+function RangeChips({
+  series,
+  day,
+  onChange,
+}: {
+  series: SocSeries;
+  day: number | null;
+  onChange: (d: number | null) => void;
+}) {
+  const options: { key: number | null; label: string; testID: string }[] = [
+    { key: null, label: 'Whole trip', testID: 'soc-range-all' },
+    ...series.days.map((d) => ({ key: d.dayIndex, label: d.label, testID: `soc-range-day-${d.dayIndex}` })),
+  ];
+  return (
+    <SideScroll testID="soc-range" what="More days" fadeColor={colors.card} contentContainerStyle={styles.chips}>
+      <View style={styles.chipRow} role="radiogroup" aria-label="Show on the chart">
+        {options.map((o) => {
+          const on = o.key === day;
+          return (
+            <Pressable
+              key={o.testID}
+              testID={o.testID}
+              role="radio"
+              aria-checked={on}
+              accessibilityLabel={o.key === null ? 'Show the whole trip' : `Show ${o.label} only`}
+              onPress={() => onChange(o.key)}
+              style={[styles.chip, on ? styles.chipOn : null]}
+            >
+              <Text variant="caption" color={on ? 'white' : 'ink'}>
+                {o.label}
+              </Text>
+            </Pressable>
+          );
+        })}
+      </View>
+    </SideScroll>
+  );
+}
+
 export function SocChartCard({ result, stops }: Props) {
   const wide = useIsWide();
   const { width } = useWindowDimensions();
   const [selected, setSelected] = useState<number | null>(null);
-  // About 70 px per day label; the chart is the window less the side navigation and the card's padding.
-  const chartWidth = wide ? Math.min(width - 240, 1320) - 560 : width - 80;
-  const series = socSeries(result, Math.floor(chartWidth / 70));
+  // The whole trip by default; a day chip zooms in (null: whole trip).
+  const [day, setDay] = useState<number | null>(null);
+  const series = socSeries(result);
+  const range = day === null || !series.days[day] ? wholeTrip(series) : dayRange(series, day);
   const row = selected === null ? undefined : result.ledger[selected];
-  const last = result.ledger.length - 1;
-  const step = (by: number) => setSelected((s) => Math.max(0, Math.min(last, (s ?? (by > 0 ? -1 : last + 1)) + by)));
+  const step = (by: number) =>
+    setSelected((s) => {
+      const from = s === null || s < range.from || s > range.to ? (by > 0 ? range.from - 1 : range.to + 1) : s;
+      return Math.max(range.from, Math.min(range.to, from + by));
+    });
   const height = wide ? 300 : Math.max(220, Math.min(280, width * 0.7));
   const stopName = (i: number) => stops[i]?.stop.name ?? `Stop ${i + 1}`;
 
@@ -52,16 +107,28 @@ export function SocChartCard({ result, stops }: Props) {
       <View style={styles.legend}>
         <Legend color={colors.pine} label="Planned sky" />
         <Legend color={colors.sunlit} label="Better to worse sky" />
-        <Legend color={colors.ember} label="Reserve" dashed />
-        <Legend color={colors.lake} label="Arrive at stop" dashed />
+        <Legend color={colors.ember} label="Reserve" mark="dashed" />
+        <Legend color={colors.lake} label="Arrive at stop" mark="dashed" />
+        <Legend color={colors.ember} label="Lowest point" mark="ring" />
+        {result.flags.length > 0 ? <Legend color={colors.ember} label="Flag (numbered as below)" mark="pin" /> : null}
       </View>
+      <RangeChips
+        series={series}
+        day={day}
+        onChange={(d) => {
+          setDay(d);
+          setSelected(null);
+        }}
+      />
       <View
         accessible
         accessibilityRole="image"
-        accessibilityLabel={`State of charge over the trip; lowest ${Math.round(result.headline.lowestSocPct)}% at ${localMoment(result.headline.lowestAtLocal)}; reserve ${Math.round(result.headline.reservePct)}%.`}
+        accessibilityLabel={`State of charge from ${localMoment(series.locals[range.from] ?? '')} to ${localMoment(series.locals[range.to] ?? '')}; lowest ${Math.round(result.headline.lowestSocPct)}% at ${localMoment(result.headline.lowestAtLocal)}; reserve ${Math.round(result.headline.reservePct)}%; ${result.flags.length} flags.`}
         testID="soc-chart"
+        // The drawn range, for the browser tests (canvas content has no DOM to inspect).
+        {...webData({ from: series.locals[range.from] ?? '', to: series.locals[range.to] ?? '' })}
       >
-        <SocChartSurface series={series} height={height} selected={selected} onSelect={setSelected} />
+        <SocChartSurface series={series} range={range} height={height} selected={selected} onSelect={setSelected} />
       </View>
       <View style={styles.stops}>
         {series.stops.map((s) => (
@@ -114,6 +181,20 @@ const styles = StyleSheet.create({
   legendItem: { flexDirection: 'row', alignItems: 'center', gap: space.xs },
   swatch: { width: 16, height: 10, borderRadius: 3, borderWidth: 2 },
   dashed: { borderStyle: 'dashed', height: 0, borderWidth: 1.5 },
+  ring: { width: 12, height: 12, borderRadius: 6, borderWidth: 2.5 },
+  pin: { fontSize: 10, lineHeight: 12 },
+  chips: { paddingRight: space.xs },
+  chipRow: { flexDirection: 'row', gap: space.xs },
+  chip: {
+    minHeight: 40,
+    paddingHorizontal: space.md,
+    justifyContent: 'center',
+    borderRadius: radii.pill,
+    borderWidth: 1,
+    borderColor: colors.line,
+    backgroundColor: colors.white,
+  },
+  chipOn: { backgroundColor: colors.pine, borderColor: colors.pine },
   stops: { flexDirection: 'row', flexWrap: 'wrap', columnGap: space.md },
   readout: { minHeight: 48, padding: space.md, borderRadius: radii.md, backgroundColor: colors.dune, gap: 2 },
   stepRow: { flexDirection: 'row', gap: space.sm },

@@ -1,7 +1,7 @@
 import { Link, usePathname } from 'expo-router';
 import type { ReactNode } from 'react';
 import { Pressable, StyleSheet, View } from 'react-native';
-import { useIsWide } from '@/components/theme/breakpoints';
+import { SIDE_NAV_WIDTH, useIsWide } from '@/components/theme/breakpoints';
 import { colors, radii, space } from '@/components/theme/tokens';
 import { Text } from '@/components/ui/text';
 import { BrandMark } from './brand-mark';
@@ -73,7 +73,7 @@ const styles = StyleSheet.create({
   wideRoot: { flex: 1, flexDirection: 'row', backgroundColor: colors.dune },
   narrowRoot: { flex: 1, backgroundColor: colors.dune },
   side: {
-    width: 240,
+    width: SIDE_NAV_WIDTH,
     paddingVertical: space.xl,
     paddingHorizontal: space.lg,
     gap: space.sm,
@@ -97,7 +97,8 @@ const styles = StyleSheet.create({
     borderTopColor: colors.line,
     backgroundColor: colors.card,
     paddingHorizontal: space.sm,
-    paddingVertical: space.xs,
+    paddingVertical: 2,
   },
-  tabLink: { flex: 1, minHeight: 52, alignItems: 'center', justifyContent: 'center', borderRadius: radii.md },
+  // 44 px: a thumb's target, and no more, so the bar leaves the screen to the content.
+  tabLink: { flex: 1, minHeight: 44, alignItems: 'center', justifyContent: 'center', borderRadius: radii.md },
 });

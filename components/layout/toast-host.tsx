@@ -1,5 +1,5 @@
 import { Pressable, StyleSheet, View } from 'react-native';
-import { useIsWide } from '@/components/theme/breakpoints';
+import { SIDE_NAV_WIDTH, useIsWide } from '@/components/theme/breakpoints';
 import { colors, radii, shadow, space } from '@/components/theme/tokens';
 import { Text } from '@/components/ui/text';
 import { dismissToast, useToastStore } from '@/stores/toast-store';
@@ -14,11 +14,11 @@ export function ToastHost() {
       {toasts.map((t) => (
         <View
           key={t.id}
-          style={[styles.toast, t.tone === 'danger' ? styles.danger : null]}
+          style={[styles.toast, wide ? styles.toastWide : null, t.tone === 'danger' ? styles.danger : null]}
           testID="toast"
           role="status"
         >
-          <Text variant="label" color="white" style={styles.message}>
+          <Text variant="label" color="white" style={wide ? styles.messageWide : styles.message}>
             {t.message}
           </Text>
           {t.action ? (
@@ -64,8 +64,15 @@ const styles = StyleSheet.create({
     gap: space.sm,
     zIndex: 10,
   },
-  // On a wide screen the corner keeps toasts off the chart and the flags.
-  hostWide: { left: 'auto', right: space.xl, bottom: space.xl, width: 420, alignItems: 'stretch' },
+  // On a wide screen toasts sit at the foot of the side navigation, whose links are all at its top, so they never
+  // cover a Save button, a chart or a flag in the panes.
+  hostWide: {
+    left: space.lg,
+    right: 'auto',
+    bottom: space.xl,
+    width: SIDE_NAV_WIDTH - 2 * space.lg,
+    alignItems: 'stretch',
+  },
   toast: {
     flexDirection: 'row',
     alignItems: 'center',
@@ -79,7 +86,10 @@ const styles = StyleSheet.create({
     paddingVertical: space.xs,
     ...shadow.card,
   },
+  // Too narrow for one line there: the message takes the whole width and the buttons wrap below it.
+  toastWide: { flexWrap: 'wrap', justifyContent: 'flex-end', paddingLeft: space.md },
   danger: { backgroundColor: colors.emberInk },
   message: { flex: 1, paddingVertical: space.sm },
+  messageWide: { width: '100%', paddingTop: space.sm },
   action: { minHeight: 44, minWidth: 44, paddingHorizontal: space.md, alignItems: 'center', justifyContent: 'center' },
 });

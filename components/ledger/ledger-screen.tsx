@@ -1,7 +1,8 @@
 import { useState } from 'react';
-import { FlatList, ScrollView, StyleSheet, View } from 'react-native';
+import { FlatList, StyleSheet, View } from 'react-native';
 import { useBudgetView } from '@/components/budget/use-budget-view';
 import { localDay, localMoment } from '@/components/format/time';
+import { useIsWide } from '@/components/theme/breakpoints';
 import { colors, space } from '@/components/theme/tokens';
 import { TabScroll } from '@/components/trip/tab-scroll';
 import { Button } from '@/components/ui/button';
@@ -9,10 +10,12 @@ import { Card } from '@/components/ui/card';
 import { ChoiceChips } from '@/components/ui/choice-chips';
 import { EmptyState } from '@/components/ui/empty-state';
 import { QueryError } from '@/components/ui/query-error';
+import { SideScroll } from '@/components/ui/side-scroll';
 import { Skeleton } from '@/components/ui/skeleton';
 import { Text } from '@/components/ui/text';
 import type { LedgerRow } from '@/shared/engine/result-types';
 import type { TripDetail } from '@/shared/schemas/api';
+import { DayCards } from './day-cards';
 import { daysCsv, filterLedger, ledgerCsv } from './ledger-csv';
 import { downloadFile } from './download-file';
 
@@ -48,6 +51,7 @@ function Row({ cells, header, testID, table = false }: RowProps) {
 
 export function LedgerScreen({ detail }: { detail: TripDetail }) {
   const view = useBudgetView(detail);
+  const wide = useIsWide();
   const [stop, setStop] = useState('all');
   const [shortOnly, setShortOnly] = useState(false);
   const names = detail.stops.map((s) => s.stop.name);
@@ -120,38 +124,47 @@ export function LedgerScreen({ detail }: { detail: TripDetail }) {
             onPress={() => downloadFile(`${slug}-days.csv`, daysCsv(result.days, names))}
           />
         </View>
-        <ScrollView horizontal focusable accessibilityLabel="Day sheets table, scrolls sideways">
-          <View role="table" aria-label="Day sheets">
-            <Row
-              table
-              header
-              cells={['Day', 'Stops', 'Harvest Wh', 'Use Wh', 'Net Wh', 'Generator h', 'Lowest %', 'Short Wh'].map(
-                (t, i) => ({ text: t, width: i === 0 ? 110 : i === 1 ? 200 : 90 }),
-              )}
-            />
-            {result.days.map((d) => (
+        {wide ? null : <DayCards days={result.days} names={names} reservePct={result.headline.reservePct} />}
+        {wide ? (
+          <SideScroll
+            testID="day-table-scroll"
+            what="More columns"
+            fadeColor={colors.card}
+            focusable
+            accessibilityLabel="Day sheets table, scrolls sideways"
+          >
+            <View role="table" aria-label="Day sheets">
               <Row
                 table
-                key={d.dayIndex}
-                testID={`day-row-${d.dayIndex}`}
-                cells={[
-                  { text: localDay(`${d.date}T12:00`), width: 110 },
-                  { text: d.travel ? 'travel day' : d.stopIndexes.map((i) => names[i] ?? '').join(', '), width: 200 },
-                  { text: wh(d.harvestWh), width: 90 },
-                  { text: wh(d.useWh), width: 90 },
-                  { text: String(Math.round(d.netWh)), width: 90, tone: d.netWh < 0 ? 'ember' : 'ink' },
-                  { text: d.generatorHours.toFixed(1), width: 90 },
-                  {
-                    text: String(Math.round(d.lowestSocPct)),
-                    width: 90,
-                    tone: d.lowestSocPct < result.headline.reservePct ? 'ember' : 'ink',
-                  },
-                  { text: wh(d.energyShortWh), width: 90, tone: d.energyShortWh > 0 ? 'ember' : 'ink' },
-                ]}
+                header
+                cells={['Day', 'Stops', 'Harvest Wh', 'Use Wh', 'Net Wh', 'Generator h', 'Lowest %', 'Short Wh'].map(
+                  (t, i) => ({ text: t, width: i === 0 ? 110 : i === 1 ? 200 : 90 }),
+                )}
               />
-            ))}
-          </View>
-        </ScrollView>
+              {result.days.map((d) => (
+                <Row
+                  table
+                  key={d.dayIndex}
+                  testID={`day-row-${d.dayIndex}`}
+                  cells={[
+                    { text: localDay(`${d.date}T12:00`), width: 110 },
+                    { text: d.travel ? 'travel day' : d.stopIndexes.map((i) => names[i] ?? '').join(', '), width: 200 },
+                    { text: wh(d.harvestWh), width: 90 },
+                    { text: wh(d.useWh), width: 90 },
+                    { text: String(Math.round(d.netWh)), width: 90, tone: d.netWh < 0 ? 'ember' : 'ink' },
+                    { text: d.generatorHours.toFixed(1), width: 90 },
+                    {
+                      text: String(Math.round(d.lowestSocPct)),
+                      width: 90,
+                      tone: d.lowestSocPct < result.headline.reservePct ? 'ember' : 'ink',
+                    },
+                    { text: wh(d.energyShortWh), width: 90, tone: d.energyShortWh > 0 ? 'ember' : 'ink' },
+                  ]}
+                />
+              ))}
+            </View>
+          </SideScroll>
+        ) : null}
       </Card>
       <Card testID="hourly-ledger">
         <View style={styles.titleRow}>
@@ -185,7 +198,13 @@ export function LedgerScreen({ detail }: { detail: TripDetail }) {
         <Text variant="caption" color="inkSoft" testID="ledger-count">
           {rows.length} of {result.ledger.length} hours
         </Text>
-        <ScrollView horizontal focusable accessibilityLabel="Hourly ledger, scrolls sideways">
+        <SideScroll
+          testID="ledger-scroll"
+          what="More columns"
+          fadeColor={colors.card}
+          focusable
+          accessibilityLabel="Hourly ledger, scrolls sideways"
+        >
           <View style={{ width: tableWidth }}>
             <FlatList
               testID="ledger-list"
@@ -214,7 +233,7 @@ export function LedgerScreen({ detail }: { detail: TripDetail }) {
               }
             />
           </View>
-        </ScrollView>
+        </SideScroll>
       </Card>
     </TabScroll>
   );

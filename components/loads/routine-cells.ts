@@ -1,5 +1,6 @@
 // The routine editor's time logic: one-hour cells on a 24-hour strip <-> the routine windows the engine reads.
 // Pure and free of React so every rule (midnight wrap, short windows, day types) is unit tested.
+import { snapMinute } from '@/components/ui/time-of-day-field.types';
 import type { DaySelector, RoutineWindow } from '@/shared/schemas/common';
 
 export const HOURS = 24;
@@ -25,6 +26,18 @@ export function hoursOfWindow(w: Pick<RoutineWindow, 'startHour' | 'startMinute'
   const hours: number[] = [];
   for (let h = Math.floor(start / 60); h * 60 < end; h++) hours.push(h % HOURS);
   return [...new Set(hours)];
+}
+
+/** Smallest comfortable width of an hour cell, px (a thumb; the cell is 48 px tall). */
+export const MIN_CELL_WIDTH = 42;
+
+/**
+ * How many hour cells go in one row of a strip `width` px wide: the most (of the ways 24 divides into rows) that
+ * keep every cell at least MIN_CELL_WIDTH wide. Six while the width is not known yet.
+ */
+export function cellsPerRow(width: number, gap: number): number {
+  if (width <= 0) return 6;
+  return [12, 8, 6, 4, 3].find((n) => (width - gap * (n - 1)) / n >= MIN_CELL_WIDTH) ?? 3;
 }
 
 export function cellsFor(windows: RoutineWindow[], key: StripKey): Cells {
@@ -93,13 +106,23 @@ export function paintRange(
   return withStrip(windows, key, cells);
 }
 
-/** Minutes a window runs, kept inside the hours it lights so the strip and the window agree. */
-export function setMinutes(windows: RoutineWindow[], index: number, minutes: number): RoutineWindow[] {
-  return windows.map((w, i) => {
-    if (i !== index) return w;
-    const span = hoursOfWindow({ ...w, startMinute: 0, minutes: w.minutes + (w.startMinute ?? 0) }).length * 60;
-    return { ...w, startMinute: 0, minutes: Math.max(1, Math.min(span, Math.round(minutes))) };
-  });
+/** A window's length may be anything from a minute to a whole day. */
+export const MAX_MINUTES = HOURS * 60;
+/** Start times move in five-minute steps. */
+export const START_STEP_MINUTES = 5;
+
+/** A new length for one window; its start stays where it is (the strip then lights the hours it now touches). */
+export function setLength(windows: RoutineWindow[], index: number, minutes: number): RoutineWindow[] {
+  return windows.map((w, i) =>
+    i === index ? { ...w, minutes: Math.max(1, Math.min(MAX_MINUTES, Math.round(minutes))) } : w,
+  );
+}
+
+/** A new start for one window, on the five-minute step; its length stays as it is. */
+export function setStart(windows: RoutineWindow[], index: number, hour: number, minute: number): RoutineWindow[] {
+  const startMinute = snapMinute(minute, START_STEP_MINUTES);
+  const startHour = Math.max(0, Math.min(HOURS - 1, Math.round(hour)));
+  return windows.map((w, i) => (i === index ? { ...w, startHour, startMinute } : w));
 }
 
 /** Energy per day a routine uses, Wh, for a load drawing `watts` with a duty cycle, on the given strip. */
@@ -108,6 +131,28 @@ export function dailyWh(windows: RoutineWindow[], key: StripKey, watts: number, 
     .filter((w) => stripOf(w.days) === key || stripOf(w.days) === 'all')
     .reduce((s, w) => s + w.minutes, 0);
   return (Math.min(minutes, HOURS * 60) / 60) * watts * dutyCycle;
+}
+
+/** "10 min", "1 h", "2 h 30 min". */
+export function formatLength(minutes: number): string {
+  const h = Math.floor(minutes / 60);
+  const m = minutes % 60;
+  if (h === 0) return `${m} min`;
+  return m === 0 ? `${h} h` : `${h} h ${m} min`;
+}
+
+const DAYS_IN_WORDS: Record<StripKey, string> = { all: 'every day', camp: 'camp days', travel: 'travel days' };
+
+function daysInWords(days: DaySelector | undefined): string {
+  const key = stripOf(days);
+  if (key) return DAYS_IN_WORDS[key];
+  const indexes = days?.kind === 'trip-days' ? days.dayIndexes : [];
+  return `trip day${indexes.length === 1 ? '' : 's'} ${indexes.map((d) => d + 1).join(', ')}`;
+}
+
+/** The window in words, as the editor's preview says it: "07:30–07:40, 10 min, every day". */
+export function describeWindow(w: RoutineWindow): string {
+  return `${formatWindow(w)}, ${formatLength(w.minutes)}, ${daysInWords(w.days)}`;
 }
 
 export function formatWindow(w: RoutineWindow): string {

@@ -1,10 +1,9 @@
-import { useRef } from 'react';
+import { useRef, useState } from 'react';
 import { Pressable, StyleSheet, View } from 'react-native';
-import { useIsWide } from '@/components/theme/breakpoints';
 import { colors, radii, space } from '@/components/theme/tokens';
 import { Text } from '@/components/ui/text';
 import type { RoutineWindow } from '@/shared/schemas/common';
-import { cellsFor, HOURS, paintRange, toggleCell, type StripKey } from './routine-cells';
+import { cellsFor, cellsPerRow, HOURS, paintRange, toggleCell, type StripKey } from './routine-cells';
 
 type Props = {
   windows: RoutineWindow[];
@@ -18,15 +17,16 @@ type PointerTarget = { releasePointerCapture?: (id: number) => void; hasPointerC
 type PointerEventLike = { nativeEvent: { pointerId?: number; target?: unknown; pointerType?: string } };
 
 /**
- * One day as 24 one-hour cells, each at least 44 px (a thumb). Tap or press Enter/Space on a cell to toggle it;
+ * One day as 24 one-hour cells, as many to a row as fit the width at about a thumb's size each (never wider than
+ * the card). Tap or press Enter/Space on a cell to toggle it;
  * press and drag across cells to paint them all with the first cell's new state.
  */
 export function RoutineStrip({ windows, strip, disabled, onChange, testID }: Props) {
-  const wide = useIsWide();
+  const [width, setWidth] = useState(0);
   const cells = cellsFor(windows, strip);
   // Drag state lives in a ref: it changes on every pointer move and must not re-render the strip.
   const drag = useRef<{ from: number; on: boolean; moved: boolean; base: RoutineWindow[] } | null>(null);
-  const perRow = wide ? 12 : 6;
+  const perRow = cellsPerRow(width, GAP);
   const rows = Array.from({ length: HOURS / perRow }, (_, r) =>
     Array.from({ length: perRow }, (_, c) => r * perRow + c),
   );
@@ -54,6 +54,7 @@ export function RoutineStrip({ windows, strip, disabled, onChange, testID }: Pro
     <View
       style={styles.grid}
       testID={testID}
+      onLayout={(e) => setWidth(e.nativeEvent.layout.width)}
       onPointerUp={end}
       onPointerLeave={end}
       role="group"
@@ -91,13 +92,15 @@ export function RoutineStrip({ windows, strip, disabled, onChange, testID }: Pro
   );
 }
 
+const GAP = space.xs;
+
 const styles = StyleSheet.create({
   // touchAction none: a drag across the strip paints cells instead of scrolling the page.
-  grid: { gap: space.xs, touchAction: 'none', userSelect: 'none' } as object,
-  row: { flexDirection: 'row', gap: space.xs },
+  grid: { gap: GAP, touchAction: 'none', userSelect: 'none' } as object,
+  row: { flexDirection: 'row', gap: GAP },
   cell: {
     flex: 1,
-    minWidth: 44,
+    minWidth: 0,
     minHeight: 48,
     borderRadius: radii.sm,
     borderWidth: 1,

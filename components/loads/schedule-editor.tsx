@@ -8,6 +8,7 @@ import { ChoiceChips } from '@/components/ui/choice-chips';
 import { ConflictNotice } from '@/components/ui/conflict-notice';
 import { NumberField } from '@/components/ui/number-field';
 import { Text } from '@/components/ui/text';
+import { TimeOfDayField } from '@/components/ui/time-of-day-field';
 import type { ApplianceRecord, TripDetail } from '@/shared/schemas/api';
 import { scheduleSchema, type Schedule } from '@/shared/schemas/appliance';
 import { toEngineInput } from '@/shared/trip-to-engine-input';
@@ -17,7 +18,7 @@ import { useScheduleSaveMutation } from '@/stores/queries/appliances';
 import { useBudgetQuery } from '@/stores/queries/budget';
 import { showToast } from '@/stores/toast-store';
 import { useUnits } from '@/stores/units-store';
-import { formatWindow, setMinutes, stripOf, type StripKey } from './routine-cells';
+import { describeWindow, setLength, setStart, stripOf, type StripKey } from './routine-cells';
 import { RoutineStrip } from './routine-strip';
 
 type Props = { detail: TripDetail; record: ApplianceRecord; canEdit: boolean };
@@ -159,19 +160,33 @@ export function ScheduleEditor({ detail, record, canEdit }: Props) {
             disabled={!canEdit}
             onChange={setWindows}
           />
-          {stripWindows.map(({ w, i }) => (
-            <View key={`${i}-${w.startHour}`} style={styles.window}>
-              <Text variant="label" style={styles.windowLabel}>
-                {formatWindow(w)}
+          {stripWindows.map(({ w, i }, k) => (
+            // Keyed by position: a key from the start time would remount the row, and lose focus, as it changes.
+            <View key={k} style={styles.window} testID={`window-${k}`}>
+              <Text variant="label" testID={`window-${k}-words`}>
+                {describeWindow(w)}
               </Text>
-              <View style={styles.minutes}>
-                <NumberField
-                  testID={`window-minutes-${w.startHour}`}
-                  label="Minutes"
-                  editable={canEdit}
-                  value={w.minutes}
-                  onChangeNumber={(v) => v !== null && v > 0 && setWindows(setMinutes(windows, i, v))}
-                />
+              <View style={styles.windowFields}>
+                <View style={styles.windowField}>
+                  <TimeOfDayField
+                    testID={`window-start-${k}`}
+                    label="Starts"
+                    editable={canEdit}
+                    hour={w.startHour}
+                    minute={w.startMinute ?? 0}
+                    onChange={(hour, minute) => setWindows(setStart(windows, i, hour, minute))}
+                  />
+                </View>
+                <View style={styles.windowField}>
+                  <NumberField
+                    testID={`window-minutes-${k}`}
+                    label="Lasts"
+                    unit="min"
+                    editable={canEdit}
+                    value={w.minutes}
+                    onChangeNumber={(v) => v !== null && v > 0 && setWindows(setLength(windows, i, v))}
+                  />
+                </View>
               </View>
             </View>
           ))}
@@ -189,6 +204,11 @@ export function ScheduleEditor({ detail, record, canEdit }: Props) {
       ) : null}
       {preview ? (
         <View style={styles.preview} testID="routine-preview">
+          {stripWindows.length > 0 ? (
+            <Text variant="caption" testID="routine-preview-words">
+              Runs {stripWindows.map(({ w }) => describeWindow(w)).join('; ')}.
+            </Text>
+          ) : null}
           <Text variant="label">
             Lowest charge with this routine: {text(percent(preview.headline.lowestSocPct))}
             {before !== undefined ? ` (saved plan: ${text(percent(before))})` : ''}
@@ -233,9 +253,9 @@ export function ScheduleEditor({ detail, record, canEdit }: Props) {
 const styles = StyleSheet.create({
   wrap: { gap: space.md },
   fields: { gap: space.md },
-  window: { flexDirection: 'row', alignItems: 'flex-end', gap: space.md },
-  windowLabel: { flex: 1, paddingBottom: space.md },
-  minutes: { width: 120 },
+  window: { gap: space.sm, padding: space.md, borderRadius: radii.md, borderWidth: 1, borderColor: colors.line },
+  windowFields: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md },
+  windowField: { flexGrow: 1, flexBasis: 130 },
   preview: { padding: space.md, borderRadius: radii.md, backgroundColor: colors.pineSoft, gap: 2 },
   actions: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
 });

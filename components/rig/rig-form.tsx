@@ -6,7 +6,7 @@ import { mass } from '@/components/format/units';
 import { colors, space } from '@/components/theme/tokens';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
-import { Caution } from '@/components/ui/cautions';
+import { CautionArea, type CautionKind } from '@/components/ui/cautions';
 import { ChoiceChips } from '@/components/ui/choice-chips';
 import { ConflictNotice } from '@/components/ui/conflict-notice';
 import { NumberField } from '@/components/ui/number-field';
@@ -47,9 +47,9 @@ export function RigForm({ tripId, record, canEdit, dcLoads = [] }: RigFormProps)
   });
   const arrays = useFieldArray({ control, name: 'solarArrays' });
   const tanks = useFieldArray({ control, name: 'propaneTanks' });
-  const [chemistry, inverter, generator, controller, shoreCharger, vehicleCharger] = useWatch({
+  const [inverter, generator, controller, shoreCharger, vehicleCharger] = useWatch({
     control,
-    name: ['battery.chemistry', 'inverter', 'generator', 'controller', 'shoreCharger', 'vehicleCharger'],
+    name: ['inverter', 'generator', 'controller', 'shoreCharger', 'vehicleCharger'],
   });
   const off = !canEdit;
   // Saves name the version the form was opened on, so someone else's change meanwhile is caught (409).
@@ -203,7 +203,6 @@ export function RigForm({ tripId, record, canEdit, dcLoads = [] }: RigFormProps)
         <Text variant="caption" color="inkSoft">
           Inside, the battery is kept warm by the living space, so a cold night outside does not stop it charging.
         </Text>
-        <Caution kind="lithiumCold" testID={chemistry === 'lifepo4' ? 'caution-lithium' : 'caution-lead-acid'} />
       </Section>
 
       <Section title="Solar" testID="rig-solar">
@@ -449,7 +448,6 @@ export function RigForm({ tripId, record, canEdit, dcLoads = [] }: RigFormProps)
         ) : (
           <Text color="inkSoft">No generator.</Text>
         )}
-        <Caution kind="generator" testID="caution-generator" />
       </Section>
 
       <Section title="Propane" testID="rig-propane">
@@ -519,9 +517,18 @@ export function RigForm({ tripId, record, canEdit, dcLoads = [] }: RigFormProps)
           items={TANK_PRESETS.map((t) => ({ label: `+ ${t.label}` }))}
           onPick={(i) => tanks.append({ name: 'Cylinder', propaneKg: TANK_PRESETS[i]?.propaneKg ?? 6, fillPct: 100 })}
         />
-        <Caution kind="propane" testID="caution-propane" />
       </Section>
       <CableCheckSection control={control} setValue={setValue} units={units} disabled={off} dcLoads={dcLoads} />
+      {/* One safety area for the whole rig, holding only the cautions that apply to it (the cabling caution sits in
+          the cable check, beside the runs it is about). */}
+      <CautionArea
+        testID="rig-cautions"
+        kinds={[
+          'lithiumCold',
+          ...(generator ? (['generator'] as CautionKind[]) : []),
+          ...(tanks.fields.length > 0 ? (['propane'] as CautionKind[]) : []),
+        ]}
+      />
       {conflict ? (
         <ConflictNotice
           testID="rig-conflict"

@@ -1,5 +1,5 @@
 import { StyleSheet, View } from 'react-native';
-import Svg, { Circle, G, Line, Path, Text as SvgText } from 'react-native-svg';
+import Svg, { Circle, G, Line, Path, Rect, Text as SvgText } from 'react-native-svg';
 import { colors, fonts, space } from '@/components/theme/tokens';
 import { Text } from '@/components/ui/text';
 import type { Stop } from '@/shared/schemas/trip';
@@ -18,8 +18,11 @@ export function SunPath({ stop, testID }: { stop: Stop; testID: string }) {
   const first = sunTrack(stop.arriveAt, stop.timeZone, stop.lat, stop.lon, C, C, R);
   const last = sunTrack(stop.departAt, stop.timeZone, stop.lat, stop.lon, C, C, R);
   const tracks = first.label === last.label ? [first] : [first, last];
-  // Darker green where less light gets through the obstruction.
-  const shade = 0.15 + 0.55 * (1 - horizon.canopyTransmittance);
+  // Darker green where less light gets through the obstruction, but never opaque: the sky's rings and the sun's
+  // track must show through even a deep forest.
+  const shade = 0.12 + 0.26 * (1 - horizon.canopyTransmittance);
+  // Noon is labelled once, on the first day's track (the days' tracks nearly coincide).
+  const noon = first.hours.find((h) => h.hour === 12);
   const outer = `M${C - R},${C} a${R},${R} 0 1,0 ${2 * R},0 a${R},${R} 0 1,0 ${-2 * R},0 Z`;
   const shaded = tracks.some((t) => t.points.length > 0) && horizon.canopyTransmittance < 1;
   return (
@@ -32,6 +35,13 @@ export function SunPath({ stop, testID }: { stop: Stop; testID: string }) {
         role="img"
       >
         <Circle cx={C} cy={C} r={R} fill={colors.white} stroke={colors.line} strokeWidth={1} />
+        <Path
+          d={`${outer} ${pathOf(horizon.points, true)}`}
+          fill={colors.pine}
+          fillOpacity={shade}
+          fillRule="evenodd"
+        />
+        <Path d={pathOf(horizon.points, true)} fill="none" stroke={colors.pine} strokeWidth={1.5} strokeOpacity={0.7} />
         {[30, 60].map((alt) => (
           <Circle
             key={alt}
@@ -45,12 +55,6 @@ export function SunPath({ stop, testID }: { stop: Stop; testID: string }) {
         ))}
         <Line x1={C} y1={C - R} x2={C} y2={C + R} stroke={colors.line} />
         <Line x1={C - R} y1={C} x2={C + R} y2={C} stroke={colors.line} />
-        <Path
-          d={`${outer} ${pathOf(horizon.points, true)}`}
-          fill={colors.pine}
-          fillOpacity={shade}
-          fillRule="evenodd"
-        />
         {tracks.map((t, i) => (
           <G key={t.label}>
             <Path
@@ -63,22 +67,25 @@ export function SunPath({ stop, testID }: { stop: Stop; testID: string }) {
             {t.hours.map((h) => (
               <Circle key={h.hour} cx={h.at.x} cy={h.at.y} r={2.5} fill={colors.ink} />
             ))}
-            {t.hours
-              .filter((h) => h.hour === 12)
-              .map((h) => (
-                <SvgText
-                  key="noon"
-                  x={h.at.x + 5}
-                  y={h.at.y - 5}
-                  fontSize={11}
-                  fontFamily={fonts.semiBold}
-                  fill={colors.ink}
-                >
-                  12:00
-                </SvgText>
-              ))}
           </G>
         ))}
+        {noon ? (
+          // A light backing keeps the label readable over the canopy and the rings.
+          <G>
+            <Rect
+              x={noon.at.x + 3}
+              y={noon.at.y - 17}
+              width={36}
+              height={15}
+              rx={4}
+              fill={colors.white}
+              opacity={0.85}
+            />
+            <SvgText x={noon.at.x + 6} y={noon.at.y - 6} fontSize={11} fontFamily={fonts.bold} fill={colors.ink}>
+              12:00
+            </SvgText>
+          </G>
+        ) : null}
         {(['N', 'E', 'S', 'W'] as const).map((d, i) => {
           const p = polar(-8, i * 90, C, C, R + 14);
           return (

@@ -1,8 +1,10 @@
 import { StyleSheet, View, type ViewProps } from 'react-native';
 import { colors, radii, shadow, space } from '@/components/theme/tokens';
+import { webData } from './web-data';
 
 export function Card({ style, ...rest }: ViewProps) {
-  return <View {...rest} style={[styles.card, style]} />;
+  // Marked so the layout checks can find every card and compare its content's width with its own.
+  return <View {...webData({ card: 'true' })} {...rest} style={[styles.card, style]} />;
 }
 
 const styles = StyleSheet.create({

@@ -1,16 +1,21 @@
 import { describe, expect, it } from 'vitest';
 import {
   cellsFor,
+  cellsPerRow,
   dailyWh,
+  describeWindow,
   formatWindow,
   hoursOfWindow,
+  MIN_CELL_WIDTH,
   paintRange,
   runsOf,
-  setMinutes,
+  setLength,
+  setStart,
   toggleCell,
   windowsFromCells,
   type Cells,
 } from '@/components/loads/routine-cells';
+import { parseClock } from '@/components/ui/time-of-day-field.types';
 import type { RoutineWindow } from '@/shared/schemas/common';
 
 const all = { kind: 'all' } as const;
@@ -92,10 +97,75 @@ describe('cells and windows', () => {
   it('when cells wrap past midnight, then one window crosses midnight', () => {
     expect(windowsFromCells(lit(23, 0), 'all', [])).toEqual([win(23, 120)]);
   });
+});
 
-  it('when minutes are set beyond the lit hours, then they are held to the hours', () => {
-    expect(setMinutes([win(7, 60)], 0, 90)).toEqual([win(7, 60)]);
-    expect(setMinutes([win(7, 10, 30)], 0, 25)).toEqual([win(7, 25)]);
+describe('start and length are independent', () => {
+  const hairDryer = win(7, 10, 30);
+
+  it('when the length changes, then the start stays', () => {
+    const [next] = setLength([hairDryer], 0, 15);
+    expect(next).toEqual(win(7, 15, 30));
+    expect(next && formatWindow(next)).toBe('07:30–07:45');
+  });
+
+  it('when the length grows past the hour, then the start stays and the strip lights the next hour too', () => {
+    const next = setLength([hairDryer], 0, 90);
+    expect(next).toEqual([win(7, 90, 30)]);
+    expect(cellsFor(next, 'all').flatMap((on, h) => (on ? [h] : []))).toEqual([7, 8]);
+  });
+
+  it('when the start minute changes, then the length stays', () => {
+    expect(setStart([hairDryer], 0, 7, 45)).toEqual([win(7, 10, 45)]);
+  });
+
+  it('when the start hour changes, then the minute and the length stay', () => {
+    expect(setStart([hairDryer], 0, 19, 30)).toEqual([win(19, 10, 30)]);
+  });
+
+  it('when a start minute off the five-minute step is given, then it is rounded to the step', () => {
+    expect(setStart([hairDryer], 0, 7, 33)).toEqual([win(7, 10, 35)]);
+    expect(setStart([hairDryer], 0, 7, 58)).toEqual([win(7, 10, 55)]);
+  });
+
+  it('when only one window of several is edited, then the others are untouched', () => {
+    const laptop = win(19, 180);
+    expect(setLength([laptop, hairDryer], 1, 20)).toEqual([laptop, win(7, 20, 30)]);
+    expect(setStart([laptop, hairDryer], 1, 6, 0)).toEqual([laptop, win(6, 10, 0)]);
+  });
+
+  it('when a length outside a minute to a day is given, then it is held to that span', () => {
+    expect(setLength([hairDryer], 0, 0)).toEqual([win(7, 1, 30)]);
+    expect(setLength([hairDryer], 0, 5000)).toEqual([win(7, 1440, 30)]);
+  });
+});
+
+describe('describeWindow', () => {
+  it.each([
+    [win(7, 10, 30), '07:30–07:40, 10 min, every day'],
+    [win(19, 180, 0, camp), '19:00–22:00, 3 h, camp days'],
+    [win(6, 90, 15, { kind: 'day-type', dayType: 'travel' }), '06:15–07:45, 1 h 30 min, travel days'],
+    [win(12, 30, 0, { kind: 'trip-days', dayIndexes: [0, 2] }), '12:00–12:30, 30 min, trip days 1, 3'],
+  ])('when a window is described, then it reads in words', (w, words) => {
+    expect(describeWindow(w)).toBe(words);
+  });
+});
+
+describe('cellsPerRow', () => {
+  it.each([
+    [280, 6],
+    [328, 6],
+    [470, 8],
+    [640, 12],
+  ])('when the strip is %i px wide, then %i cells go in a row', (width, n) => {
+    expect(cellsPerRow(width, 4)).toBe(n);
+  });
+
+  it('when any width from 140 to 1400 px is given, then every cell keeps its size and the row fits', () => {
+    for (let width = 140; width <= 1400; width += 7) {
+      const n = cellsPerRow(width, 4);
+      expect(24 % n).toBe(0);
+      expect((width - 4 * (n - 1)) / n).toBeGreaterThanOrEqual(MIN_CELL_WIDTH);
+    }
   });
 });
 
@@ -111,5 +181,19 @@ describe('dailyWh and formatWindow', () => {
     [win(22, 180), '22:00–01:00'],
   ])('when a window is shown, then it reads as a time range', (w, label) => {
     expect(formatWindow(w)).toBe(label);
+  });
+});
+
+describe('parseClock', () => {
+  it.each([
+    ['07:30', [7, 30]],
+    ['07:33', [7, 35]],
+    ['23:58', [23, 55]],
+    ['7:05', [7, 5]],
+    ['', null],
+    ['25:00', null],
+    ['07:', null],
+  ])('when the time field holds “%s”, then it reads as %j', (text, expected) => {
+    expect(parseClock(text)).toEqual(expected);
   });
 });
