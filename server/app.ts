@@ -23,7 +23,8 @@ import { inviteLinksRouter } from './routes/invite-links';
 import { clubInviteLinksRouter } from './routes/club-invite-links';
 import { clubsRouter } from './routes/clubs';
 import { outboxRouter } from './routes/outbox';
-import { createBudgetService } from './budget-service';
+import { createBudgetPool, type BudgetRunner } from './budget/budget-pool';
+import { createBudgetService, type BudgetService } from './budget/budget-service';
 import { webStatic } from './web-static';
 import packageJson from '../package.json';
 
@@ -37,6 +38,8 @@ export type AppConfig = {
   requireEmailVerification?: boolean;
   /** Hides development-only routes (the Outbox). */
   production?: boolean;
+  /** Budgets run in worker threads; one that computes longer than timeLimitMs answers "too large to compute". */
+  budget?: { timeLimitMs?: number; threads?: number };
 };
 
 export type AppDeps = {
@@ -47,9 +50,12 @@ export type AppDeps = {
   logger?: Logger;
   /** The local SMTP fake's captured mail, shown by the development Outbox. */
   outbox?: { messages: () => CapturedMail[] };
+  /** Runs budgets; by default a worker pool built from config.budget. */
+  budgetRunner?: BudgetRunner;
 };
 
-export type TrailtallyApp = Express & { locals: { auth: Auth } };
+/** `budgets.close()` stops the budget workers: call it when the app is done with. */
+export type TrailtallyApp = Express & { locals: { auth: Auth; budgets: BudgetService } };
 
 const JSON_BODY_LIMIT = '100kb';
 
@@ -103,7 +109,16 @@ export function createApp(deps: AppDeps): TrailtallyApp {
 
   app.use(express.json({ limit: JSON_BODY_LIMIT }));
   app.use('/api/health', healthRouter({ db, version: packageJson.version }));
-  const budgets = createBudgetService(db, (err, tripId) => deps.logger?.error({ err, tripId }, 'budget failed'));
+  const budgetRunner =
+    deps.budgetRunner ??
+    createBudgetPool({
+      ...(config.budget?.timeLimitMs ? { timeLimitMs: config.budget.timeLimitMs } : {}),
+      ...(config.budget?.threads ? { threads: config.budget.threads } : {}),
+    });
+  const budgets = createBudgetService(db, budgetRunner, (err, tripId) =>
+    deps.logger?.error({ err, tripId }, 'budget failed'),
+  );
+  app.locals.budgets = budgets;
   const signedIn = requireSession(auth);
   app.use(
     '/api/trips',

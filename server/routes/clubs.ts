@@ -3,6 +3,7 @@ import { Router } from 'express';
 import type { Db } from '@/db/client';
 import {
   countCopies,
+  countOrganisedClubs,
   findClubRole,
   findMyCopy,
   listClubMembers,
@@ -22,7 +23,8 @@ import {
   type ClubInviteReport,
 } from '@/shared/schemas/sharing';
 import { parseRecipients } from '../address-list';
-import { HttpError, notFound } from '../errors';
+import { LIMITS } from '@/shared/schemas/limits';
+import { HttpError, limitReached, notFound } from '../errors';
 import { INVITE_LIFETIME_MS, isoDay, newInviteToken } from '../invite-tokens';
 import type { Mailer } from '../mail/mailer';
 import { clubInviteMail } from '../mail/templates';
@@ -58,6 +60,8 @@ export function clubsRouter({ db, now, mailer, publicUrl }: Deps): Router {
     const { name } = createClubRequestSchema.parse(req.body);
     const id = crypto.randomUUID();
     db.transaction((tx) => {
+      if (countOrganisedClubs(tx, me.id) >= LIMITS.clubsPerUser)
+        throw limitReached('clubs', `You can organise at most ${LIMITS.clubsPerUser} clubs.`);
       tx.insert(clubs).values({ id, name, createdBy: me.id, createdAt: now() }).run();
       tx.insert(clubMembers).values({ clubId: id, userId: me.id, role: 'organiser', joinedAt: now() }).run();
     });

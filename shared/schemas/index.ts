@@ -4,3 +4,4 @@ export * from './rig';
 export * from './appliance';
 export * from './options';
 export * from './engine-input';
+export * from './limits';

@@ -39,6 +39,7 @@ export function createTestApp(
     db,
     mailer,
     close: () => {
+      void app.locals.budgets.close();
       db.$client.close();
       fs.rmSync(dir, { recursive: true, force: true });
     },
