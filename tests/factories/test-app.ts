@@ -4,7 +4,8 @@ import path from 'node:path';
 import request from 'supertest';
 import { openDatabase, type Db } from '@/db/client';
 import { runMigrations } from '@/db/migrate';
-import { createApp, type TrailtallyApp } from '@/server/app';
+import { createApp, type AppConfig, type TrailtallyApp } from '@/server/app';
+import type { BudgetRunner } from '@/server/budget/budget-pool';
 import type { Mailer } from '@/server/mail/mailer';
 import { createMemoryMailer } from './memory-mailer';
 
@@ -18,7 +19,13 @@ export type TestContext = {
 
 /** A real app on a fresh temporary SQLite file with the real migrations. */
 export function createTestApp(
-  options: { authAttemptsPerMinute?: number; now?: () => Date; mailer?: Mailer } = {},
+  options: {
+    authAttemptsPerMinute?: number;
+    now?: () => Date;
+    mailer?: Mailer;
+    budget?: AppConfig['budget'];
+    budgetRunner?: BudgetRunner;
+  } = {},
 ): TestContext {
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'trailtally-test-'));
   const db = openDatabase(path.join(dir, 'test.db'));
@@ -28,7 +35,9 @@ export function createTestApp(
     db,
     mailer: options.mailer ?? mailer,
     now: options.now ?? (() => new Date('2026-11-20T10:00:00Z')),
+    ...(options.budgetRunner ? { budgetRunner: options.budgetRunner } : {}),
     config: {
+      ...(options.budget ? { budget: options.budget } : {}),
       authSecret: 'test-secret-that-is-long-enough-for-better-auth-0123456789',
       publicUrl: 'http://localhost:8080',
       authRateLimit: { windowMs: 60_000, limit: options.authAttemptsPerMinute ?? 1000 },
