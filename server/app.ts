@@ -59,6 +59,13 @@ export type TrailtallyApp = Express & { locals: { auth: Auth; budgets: BudgetSer
 
 const JSON_BODY_LIMIT = '100kb';
 
+/** Budget workers open the database file themselves: a database only in this thread's memory cannot be shared. */
+function databaseFileOf(db: Db): string {
+  if (db.$client.memory)
+    throw new Error('Budgets are computed in worker threads that read the database file: open a file.');
+  return db.$client.name;
+}
+
 /** Builds the whole HTTP app without listening, so tests can drive it through supertest. */
 export function createApp(deps: AppDeps): TrailtallyApp {
   const { db, config } = deps;
@@ -112,6 +119,7 @@ export function createApp(deps: AppDeps): TrailtallyApp {
   const budgetRunner =
     deps.budgetRunner ??
     createBudgetPool({
+      databasePath: databaseFileOf(db),
       ...(config.budget?.timeLimitMs ? { timeLimitMs: config.budget.timeLimitMs } : {}),
       ...(config.budget?.threads ? { threads: config.budget.threads } : {}),
     });

@@ -2,8 +2,7 @@ import { availableParallelism } from 'node:os';
 import path from 'node:path';
 import { MessageChannel } from 'node:worker_threads';
 import { Piscina } from 'piscina';
-import type { EngineInputDraft } from '@/shared/schemas/engine-input';
-import type { BudgetOutcome } from './compute';
+import type { TripBudget } from './compute';
 
 /** The budget took longer than its time limit (or more memory than a worker has) and was stopped. */
 export class BudgetTooLargeError extends Error {
@@ -21,15 +20,18 @@ export class BudgetBusyError extends Error {
   }
 }
 
-/** Runs one budget off the event loop. */
+/** Runs one trip's budget off the event loop: reading the plan, simulating it and serialising the result. */
 export type BudgetRunner = {
-  run: (draft: EngineInputDraft) => Promise<BudgetOutcome>;
+  /** Undefined when the trip does not exist (any more). */
+  run: (tripId: string) => Promise<TripBudget | undefined>;
   /** Starts the workers now, so the first budget does not wait for them. */
   warmUp: () => void;
   close: () => Promise<void>;
 };
 
 export type BudgetPoolOptions = {
+  /** The SQLite file the workers read plans from (each opens its own read-only connection). */
+  databasePath: string;
   /** Longest a budget may compute, counted from when a worker starts on it; by default 5 s. */
   timeLimitMs?: number;
   /** Worker threads; by default one fewer than the cores (at least one, at most four), leaving one for requests. */
@@ -65,7 +67,7 @@ export function createBudgetPool(options: BudgetPoolOptions): BudgetRunner {
 
   return {
     warmUp: () => void open(),
-    async run(draft) {
+    async run(tripId) {
       const workers = open();
       if (workers.queueSize >= maxQueue) throw new BudgetBusyError();
       const { port1: startedHere, port2: startedThere } = new MessageChannel();
@@ -76,9 +78,9 @@ export function createBudgetPool(options: BudgetPoolOptions): BudgetRunner {
       });
       try {
         return (await workers.run(
-          { draft, started: startedThere },
+          { databasePath: options.databasePath, tripId, started: startedThere },
           { transferList: [startedThere], signal: abort.signal },
-        )) as BudgetOutcome;
+        )) as TripBudget | undefined;
       } catch (error) {
         // Aborting terminates the worker in the middle of the computation; piscina starts a fresh one.
         if (abort.signal.aborted) throw new BudgetTooLargeError();

@@ -3,15 +3,15 @@
 // registers tsx's loader for its own imports and then loads the TypeScript module that does the work.
 import { tsImport } from 'tsx/esm/api';
 
-const { computeBudget } = await tsImport('./compute.ts', import.meta.url);
+const { computeStoredBudget } = await tsImport('./compute.ts', import.meta.url);
 
 /**
- * One budget. `started` is told first, so the server's time limit counts the computation only, not the time the
+ * One trip's budget. `started` is told first, so the server's time limit counts the work only, not the time the
  * task waited in the queue or the worker took to start.
- * @param {{ draft: unknown; started: import('node:worker_threads').MessagePort }} task
+ * @param {{ databasePath: string; tripId: string; started: import('node:worker_threads').MessagePort }} task
  */
-export default function runBudget({ draft, started }) {
+export default function runBudget({ databasePath, tripId, started }) {
   started.postMessage('started');
   started.close();
-  return computeBudget(draft);
+  return computeStoredBudget(databasePath, tripId);
 }

@@ -4,21 +4,18 @@ import type { Server } from 'node:http';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { BudgetBusyError, BudgetTooLargeError, createBudgetPool, type BudgetRunner } from '@/server/budget/budget-pool';
-import { computeBudget, type BudgetOutcome } from '@/server/budget/compute';
-import type { EngineInputDraft } from '@/shared/schemas/engine-input';
-import { highlandLoop } from '@/shared/engine';
+import { computeTripBudget, type TripBudget } from '@/server/budget/compute';
 import { createLargestTrip } from '../factories/largest-trip';
-import { largestPlan } from '../factories/largest-plan';
 import { createTestApp, signUpAgent, type TestContext } from '../factories/test-app';
 import { addAppliance, addStop, createTrip } from '../factories/trip-factory';
 
 /** A runner the test controls: each budget waits until the test settles it. */
 function heldRunner() {
-  const waiting: { draft: EngineInputDraft; settle: (outcome: BudgetOutcome | Error) => void }[] = [];
+  const waiting: { tripId: string; settle: (budget: TripBudget | undefined | Error) => void }[] = [];
   const runner: BudgetRunner = {
-    run: (draft) =>
-      new Promise<BudgetOutcome>((resolve, reject) =>
-        waiting.push({ draft, settle: (outcome) => (outcome instanceof Error ? reject(outcome) : resolve(outcome)) }),
+    run: (tripId) =>
+      new Promise<TripBudget | undefined>((resolve, reject) =>
+        waiting.push({ tripId, settle: (budget) => (budget instanceof Error ? reject(budget) : resolve(budget)) }),
       ),
     warmUp: () => undefined,
     close: async () => undefined,
@@ -37,42 +34,23 @@ async function timed<T>(work: () => Promise<T>): Promise<{ value: T; ms: number 
   return { value, ms: performance.now() - started };
 }
 
-describe('budget workers', () => {
-  it('when a budget runs in a worker, then its answer is the one computed in this thread, as JSON', async () => {
-    const pool = createBudgetPool({ threads: 1 });
-    try {
-      const outcome = await pool.run(highlandLoop);
-      expect(outcome).toEqual(computeBudget(highlandLoop));
-      expect(outcome.kind).toBe('ok');
-    } finally {
-      await pool.close();
-    }
-  });
-
-  it('when a budget computes longer than its time limit, then the worker is stopped and the run says too large', async () => {
-    const pool = createBudgetPool({ threads: 1, timeLimitMs: 5 });
-    try {
-      await expect(pool.run(largestPlan())).rejects.toBeInstanceOf(BudgetTooLargeError);
-    } finally {
-      await pool.close();
-    }
-  });
-});
-
-describe('the server while the largest plan computes', () => {
+describe('budgets in worker threads', () => {
   let ctx: TestContext;
   let server: Server;
-  let tripId: string;
   let agent: Awaited<ReturnType<typeof signUpAgent>>['agent'];
+  let largestId: string;
+  let smallId: string;
 
   beforeAll(async () => {
     ctx = createTestApp();
     ({ agent } = await signUpAgent(ctx.app, 'Largest planner'));
-    tripId = (await createLargestTrip(agent)).trip.id;
+    largestId = (await createLargestTrip(agent)).trip.id;
+    smallId = (await createTrip(agent, { name: 'Small' })).trip.id;
+    await addStop(agent, smallId);
+    await addStop(agent, smallId);
+    await addAppliance(agent, smallId);
     // A small trip's budget first, so the worker has started and loaded the engine before anything is timed.
-    const small = await createTrip(agent, { name: 'Warm-up' });
-    await addStop(agent, small.trip.id);
-    expect((await agent.get(`/api/trips/${small.trip.id}/budget`)).status).toBe(200);
+    expect((await agent.get(`/api/trips/${smallId}/budget`)).status).toBe(200);
     server = ctx.app.listen(0, '127.0.0.1');
   }, 180_000);
   afterAll(() => {
@@ -80,22 +58,51 @@ describe('the server while the largest plan computes', () => {
     ctx?.close();
   });
 
-  it('when the largest plan budget is computing, then /api/health answers in under 50 ms', async () => {
+  it('when a budget runs in a worker, then its answer is the one computed in this thread', async () => {
+    const pool = createBudgetPool({ databasePath: ctx.db.$client.name, threads: 1 });
+    try {
+      const inWorker = await pool.run(smallId);
+      expect(inWorker).toEqual(computeTripBudget(ctx.db, smallId));
+      expect(inWorker?.outcome.kind).toBe('ok');
+      expect(await pool.run('no-such-trip')).toBeUndefined();
+    } finally {
+      await pool.close();
+    }
+  });
+
+  it('when a budget computes longer than its time limit, then the worker is stopped and the run says too large', async () => {
+    const pool = createBudgetPool({ databasePath: ctx.db.$client.name, threads: 1, timeLimitMs: 5 });
+    try {
+      await expect(pool.run(largestId)).rejects.toBeInstanceOf(BudgetTooLargeError);
+    } finally {
+      await pool.close();
+    }
+  });
+
+  it('when the largest plan budget is computing, then /api/health answers in under 50 ms and is never held up by it', async () => {
     let budgetDone = false;
-    const budget = agent.get(`/api/trips/${tripId}/budget`).then((response) => {
+    const sent = performance.now();
+    const budget = agent.get(`/api/trips/${largestId}/budget`).then((response) => {
       budgetDone = true;
       return response;
     });
-    // Give the budget request time to reach its worker.
-    await new Promise((resolve) => setTimeout(resolve, 30));
-    const health = await timed(() => request(server).get('/api/health'));
-    const stillComputing = !budgetDone;
+    // Ask for health again and again until the budget is answered; keep the checks made wholly while it computed.
+    const during: number[] = [];
+    while (!budgetDone) {
+      const check = await timed(() => request(server).get('/api/health'));
+      expect(check.value.status).toBe(200);
+      if (!budgetDone) during.push(check.ms);
+    }
     const answered = await budget;
-    expect(health.value.status).toBe(200);
-    expect(stillComputing).toBe(true);
-    expect(health.ms).toBeLessThan(50);
+    const budgetMs = performance.now() - sent;
     expect(answered.status).toBe(200);
     expect(answered.body.result.ledger.length).toBeGreaterThan(2800);
+    // On a shared machine a single check can be held up by other processes, so the typical (median) check is held
+    // to 50 ms; a computation on the event loop would instead hold one check for most of the budget's time.
+    const sorted = [...during].sort((x, y) => x - y);
+    expect(during.length).toBeGreaterThanOrEqual(10);
+    expect(sorted[Math.floor(sorted.length / 2)]).toBeLessThan(50);
+    expect(sorted[sorted.length - 1]).toBeLessThan(budgetMs / 2);
   });
 });
 
@@ -104,20 +111,20 @@ describe('the time limit through the API', () => {
     const ctx = createTestApp({ budget: { timeLimitMs: 1 } });
     try {
       const { agent } = await signUpAgent(ctx.app, 'Impatient planner');
-      const { trip } = await createLargestTrip(agent);
+      // Two months, three stops and a load: many milliseconds of work, against a limit of one.
+      const { trip } = await createTrip(agent);
+      for (let i = 0; i < 3; i++) await addStop(agent, trip.id);
+      await addAppliance(agent, trip.id);
       const response = await agent.get(`/api/trips/${trip.id}/budget`);
       expect(response.status).toBe(422);
       expect(response.body).toEqual({
-        error: {
-          code: 'budget_too_large',
-          message: expect.stringContaining('too large to compute'),
-        },
+        error: { code: 'budget_too_large', message: expect.stringContaining('too large to compute') },
       });
       expect((await agent.get('/api/health')).status).toBe(200);
     } finally {
       ctx.close();
     }
-  }, 180_000);
+  }, 60_000);
 });
 
 describe('the trips list and the budget cache', () => {
@@ -144,7 +151,7 @@ describe('the trips list and the budget cache', () => {
     expect(held.waiting).toHaveLength(1);
 
     const job = held.waiting.shift();
-    job?.settle(computeBudget(job.draft));
+    job?.settle(computeTripBudget(ctx.db, job.tripId));
     await new Promise((resolve) => setImmediate(resolve));
     const ready = await agent.get('/api/trips');
     expect(ready.body.trips[0]).toMatchObject({ budgetStatus: 'current', flagCount: expect.any(Number) });
@@ -158,7 +165,7 @@ describe('the trips list and the budget cache', () => {
     await addStop(agent, trip.id);
     await agent.get('/api/trips');
     const job = held.waiting.shift();
-    job?.settle(computeBudget(job.draft));
+    job?.settle(computeTripBudget(ctx.db, job.tripId));
     await new Promise((resolve) => setImmediate(resolve));
     const before = (await agent.get('/api/trips')).body.trips[0];
 
@@ -169,7 +176,7 @@ describe('the trips list and the budget cache', () => {
     expect(during).toMatchObject({ budgetStatus: 'computing', lowestSocPct: before.lowestSocPct });
     expect(held.waiting).toHaveLength(1);
     const next = held.waiting.shift();
-    next?.settle(computeBudget(next.draft));
+    next?.settle(computeTripBudget(ctx.db, next.tripId));
     const [a, b] = await budgets;
     expect(a.status).toBe(200);
     expect(b.body).toEqual(a.body);
