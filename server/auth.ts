@@ -2,6 +2,7 @@ import { betterAuth } from 'better-auth';
 import { drizzleAdapter } from 'better-auth/adapters/drizzle';
 import type { Db } from '../db/client';
 import { account, session, user, verification } from '../db/schema/auth';
+import { accountBodyRules } from './auth-body-rules';
 import type { Mailer } from './mail/mailer';
 import { resetPasswordMail, verifyEmailMail } from './mail/templates';
 
@@ -43,6 +44,7 @@ export function createAuth(db: Db, config: AuthConfig) {
         await config.mailer.send(verifyEmailMail({ to: who.email, name: who.name, url }));
       },
     },
+    hooks: { before: accountBodyRules },
     // Requests are limited by express-rate-limit in front of this handler, one policy for all.
     rateLimit: { enabled: false },
     telemetry: { enabled: false },
