@@ -43,19 +43,28 @@ export type DayType = z.infer<typeof dayTypeSchema>;
  * also holds them inside the trip's own dates.) A trip of LIMITS.tripDays days can touch one more local day when its
  * first night begins late, so the last index allowed is LIMITS.tripDays.
  */
+const LAST_DAY_INDEX = LIMITS.tripDays;
+const MOST_DAY_INDEXES = LIMITS.tripDays + 1;
+
+// Checked in one pass over the list rather than by a schema per number: the largest plan holds over a hundred
+// thousand day numbers, and element-by-element checking was a third of its budget's time.
 export const dayIndexesSchema = z
-  .array(
-    z
-      .number()
-      .int()
-      .min(0)
-      .max(LIMITS.tripDays, { error: `A trip has at most ${LIMITS.tripDays} days; use day numbers from 0.` }),
-  )
-  .min(1, { error: 'Choose at least one day.' })
-  .max(LIMITS.tripDays + 1, { error: `Name at most ${LIMITS.tripDays + 1} days, each once.` })
-  .refine((days) => new Set(days).size === days.length, {
-    error: 'Name each day once.',
+  .custom<number[]>((value) => Array.isArray(value), {
+    error: 'Give the days as a list of day numbers.',
     params: fieldRule(),
+  })
+  .superRefine((days, ctx) => {
+    if (!Array.isArray(days)) return;
+    const refuse = (message: string) => ctx.addIssue({ code: 'custom', message, params: fieldRule(MOST_DAY_INDEXES) });
+    if (days.length === 0) return refuse('Choose at least one day.');
+    if (days.length > MOST_DAY_INDEXES) return refuse(`Name at most ${MOST_DAY_INDEXES} days, each once.`);
+    const seen = new Uint8Array(MOST_DAY_INDEXES);
+    for (const day of days) {
+      if (typeof day !== 'number' || !Number.isInteger(day) || day < 0 || day > LAST_DAY_INDEX)
+        return refuse(`Use day numbers from 0 to ${LAST_DAY_INDEX} (a trip has at most ${LIMITS.tripDays} days).`);
+      if (seen[day] === 1) return refuse('Name each day once.');
+      seen[day] = 1;
+    }
   });
 
 /** Which trip days a routine window applies to. */
