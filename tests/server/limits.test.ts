@@ -77,28 +77,24 @@ describe('routine day lists', () => {
 });
 
 describe('trip length', () => {
-  it('when a trip runs from 0001-01-01 to 9999-12-31, then 400 names endDate and the limit', async () => {
-    const before = (await agent.get('/api/trips')).body.trips.length;
-    const response = await agent.post('/api/trips').send({
-      name: 'Forever',
-      startDate: '0001-01-01',
-      endDate: '9999-12-31',
+  const postTrip = (fields: { startDate: string; endDate: string; timeZone?: string }) =>
+    agent.post('/api/trips').send({
+      name: 'Long way round',
       timeZone: 'Europe/London',
       rigSource: { kind: 'preset', presetId: 'van-small' },
+      ...fields,
     });
+
+  it('when a trip runs from 0001-01-01 to 9999-12-31, then 400 names endDate and the limit', async () => {
+    const before = (await agent.get('/api/trips')).body.trips.length;
+    const response = await postTrip({ startDate: '0001-01-01', endDate: '9999-12-31' });
     expect(response.status).toBe(400);
     expect(response.body.error.fields.endDate).toEqual([`A trip lasts at most ${LIMITS.tripDays} days.`]);
     expect((await agent.get('/api/trips')).body.trips).toHaveLength(before);
   });
 
   it('when a trip lasts exactly the limit, then it is created; one day more is refused', async () => {
-    const longest = await agent.post('/api/trips').send({
-      name: 'Season',
-      startDate: '2027-06-01',
-      endDate: '2027-09-28',
-      timeZone: 'Europe/London',
-      rigSource: { kind: 'preset', presetId: 'van-small' },
-    });
+    const longest = await postTrip({ startDate: '2027-06-01', endDate: '2027-09-28' });
     expect(longest.status).toBe(201);
     const tooLong = await agent
       .patch(`/api/trips/${longest.body.trip.id}`)
@@ -109,12 +105,10 @@ describe('trip length', () => {
   });
 
   it('when a time zone name is thousands of characters long, then 400 names the field', async () => {
-    const response = await agent.post('/api/trips').send({
-      name: 'Zone',
+    const response = await postTrip({
       startDate: '2027-06-01',
       endDate: '2027-06-02',
       timeZone: 'Europe/'.repeat(2000),
-      rigSource: { kind: 'preset', presetId: 'van-small' },
     });
     expect(response.status).toBe(400);
     expect(response.body.error.fields).toHaveProperty('timeZone');
