@@ -35,6 +35,21 @@ const sharedForbidden = [
     message: 'shared/ imports nothing from the rest of the project.',
   },
 ];
+const dbForbidden = [
+  {
+    group: ['@/server', '@/server/*', '**/server', '**/server/*'],
+    message:
+      'db/ never imports server/: take what it needs as a parameter (command-line entry points live in scripts/).',
+  },
+  {
+    group: ['@/app/*', '@/components/*', '@/stores/*', '**/components/*', '**/stores/*'],
+    message: 'db/ holds no client code.',
+  },
+];
+const envOnlyThroughServerEnv = {
+  selector: "MemberExpression[object.name='process'][property.name='env']",
+  message: 'Read configuration through server/env.ts.',
+};
 const nodeBuiltins = [
   'fs',
   'path',
@@ -98,18 +113,29 @@ export default tseslint.config(
   },
   {
     files: ['server/**/*.ts', 'db/**/*.ts'],
+    rules: { 'no-restricted-syntax': ['error', envOnlyThroughServerEnv] },
+  },
+  {
+    files: ['db/**/*.ts'],
     rules: {
+      'no-restricted-imports': [
+        'error',
+        { patterns: [...dbForbidden, { group: ['../../*'], message: 'Use the @/ alias instead of ../../ chains.' }] },
+      ],
+      // import() and require() slip past no-restricted-imports.
       'no-restricted-syntax': [
         'error',
+        envOnlyThroughServerEnv,
+        { selector: 'ImportExpression[source.value=/(^|\\/)server(\\/|$)/]', message: dbForbidden[0].message },
         {
-          selector: "MemberExpression[object.name='process'][property.name='env']",
-          message: 'Read configuration through server/env.ts.',
+          selector: "CallExpression[callee.name='require'][arguments.0.value=/(^|\\/)server(\\/|$)/]",
+          message: dbForbidden[0].message,
         },
       ],
     },
   },
   {
-    files: ['server/env.ts', 'db/**/*.ts'],
+    files: ['server/env.ts'],
     rules: { 'no-restricted-syntax': 'off' },
   },
 );

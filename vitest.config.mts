@@ -11,6 +11,7 @@ export default defineConfig({
       'tests/server/**/*.test.ts',
       'tests/db/**/*.test.ts',
       'tests/components/**/*.test.ts',
+      'tests/scripts/**/*.test.ts',
     ],
     pool: 'forks',
     environment: 'node',

@@ -1,10 +1,10 @@
-import fs from 'node:fs';
 import path from 'node:path';
 import Database from 'better-sqlite3';
 import { drizzle } from 'drizzle-orm/better-sqlite3';
 import type { BetterSQLite3Database } from 'drizzle-orm/better-sqlite3';
 import type { BaseSQLiteDatabase } from 'drizzle-orm/sqlite-core';
 import type { RunResult } from 'better-sqlite3';
+import { ensurePrivateFile, ensurePrivateFolder, tightenIfPresent } from './private-files';
 import * as schema from './schema';
 
 export type Db = BetterSQLite3Database<typeof schema> & { $client: Database.Database };
@@ -12,9 +12,18 @@ export type Db = BetterSQLite3Database<typeof schema> & { $client: Database.Data
 /** The database or a transaction on it: what query functions take, so they compose inside transactions. */
 export type DbExecutor = BaseSQLiteDatabase<'sync', RunResult, typeof schema>;
 
+/** The files SQLite keeps beside a database in WAL mode while it is open. */
+export const WAL_COMPANIONS = ['-wal', '-shm'] as const;
+
 /** Opens (creating if needed) the SQLite file with the pragmas every connection needs. */
 export function openDatabase(filePath: string): Db {
-  if (filePath !== ':memory:') fs.mkdirSync(path.dirname(path.resolve(filePath)), { recursive: true });
+  if (filePath !== ':memory:') {
+    ensurePrivateFolder(path.dirname(path.resolve(filePath)));
+    // SQLite gives the -wal and -shm files it creates the database file's mode, so an owner-only database
+    // keeps its companions owner-only too; ones left by an older install are tightened here.
+    ensurePrivateFile(filePath);
+    for (const companion of WAL_COMPANIONS) tightenIfPresent(`${filePath}${companion}`);
+  }
   const sqlite = new Database(filePath);
   // WAL lets readers continue while a write is in flight; the busy timeout makes a second
   // writer wait instead of failing at once with SQLITE_BUSY.

@@ -8,15 +8,3 @@ const MIGRATIONS_FOLDER = path.resolve(__dirname, '..', 'drizzle');
 export function runMigrations(db: Db): void {
   migrate(db, { migrationsFolder: MIGRATIONS_FOLDER });
 }
-
-if (require.main === module) {
-  void (async () => {
-    const { loadEnv } = await import('../server/env');
-    const { openDatabase } = await import('./client');
-    const env = loadEnv();
-    const db = openDatabase(env.DATABASE_PATH);
-    runMigrations(db);
-    db.$client.close();
-    console.log(`Migrated ${env.DATABASE_PATH}`);
-  })();
-}

@@ -4,7 +4,6 @@ import { DEMO_TRIPS } from '@/shared/engine';
 import { applianceFieldsSchema } from '@/shared/schemas/appliance';
 import { engineInputSchema, type EngineInputDraft } from '@/shared/schemas/engine-input';
 import type { Role } from '@/shared/schemas/roles';
-import type { Auth } from '../server/auth';
 import type { Db } from './client';
 import { insertAppliance } from './queries/appliances';
 import { addMember } from './queries/members';
@@ -19,6 +18,15 @@ export const DEMO_PASSWORD = 'demo-trailtally';
 export const DEMO_ACCOUNT = { name: 'Demo Planner', email: 'demo@trailtally.test', password: DEMO_PASSWORD } as const;
 export const DEMO_CREW = { name: 'Demo Crew', email: 'crew@trailtally.test', password: DEMO_PASSWORD } as const;
 export const DEMO_VIEWER = { name: 'Demo Viewer', email: 'viewer@trailtally.test', password: DEMO_PASSWORD } as const;
+
+/** What seeding needs of the auth service: creating an account with a real password hash. */
+export type AccountCreator = {
+  api: {
+    signUpEmail: (request: {
+      body: { name: string; email: string; password: string };
+    }) => Promise<{ user: { id: string } }>;
+  };
+};
 
 export function isDatabaseEmpty(db: Db): boolean {
   const row = db.select({ users: count() }).from(user).get();
@@ -66,7 +74,7 @@ export function insertTripFromEngineInput(db: Db, ownerId: string, draft: Engine
  * Creates the demo accounts (through better-auth, so their password hashes are real) and the two
  * demo trips; on the Highland loop the crew account looks after the hair dryer and a viewer reads along.
  */
-export async function seedDemo(db: Db, auth: Auth, now: Date): Promise<void> {
+export async function seedDemo(db: Db, auth: AccountCreator, now: Date): Promise<void> {
   const planner = await auth.api.signUpEmail({ body: { ...DEMO_ACCOUNT } });
   const crew = await auth.api.signUpEmail({ body: { ...DEMO_CREW } });
   const viewer = await auth.api.signUpEmail({ body: { ...DEMO_VIEWER } });
@@ -92,32 +100,4 @@ export async function seedDemo(db: Db, auth: Auth, now: Date): Promise<void> {
 
 export function demoSignInText(): string {
   return `Demo accounts (password ${DEMO_PASSWORD}): ${DEMO_ACCOUNT.email} (planner and owner), ${DEMO_CREW.email} (crew), ${DEMO_VIEWER.email} (viewer)`;
-}
-
-if (require.main === module) {
-  void (async () => {
-    const { loadEnv } = await import('../server/env');
-    const { openDatabase } = await import('./client');
-    const { runMigrations } = await import('./migrate');
-    const { createAuth } = await import('../server/auth');
-    const env = loadEnv();
-    const db = openDatabase(env.DATABASE_PATH);
-    runMigrations(db);
-    if (!isDatabaseEmpty(db)) {
-      console.log('The database already has accounts; the demo data was not added.');
-    } else {
-      // The demo addresses are not real: their sign-up e-mails go nowhere.
-      const mailer = { send: async () => undefined };
-      const auth = createAuth(db, {
-        secret: env.BETTER_AUTH_SECRET,
-        baseUrl: env.PUBLIC_URL,
-        trustedOrigins: [env.PUBLIC_URL],
-        mailer,
-        requireEmailVerification: false,
-      });
-      await seedDemo(db, auth, new Date());
-      console.log(`Demo data added. ${demoSignInText()}`);
-    }
-    db.$client.close();
-  })();
 }

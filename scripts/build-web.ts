@@ -55,10 +55,15 @@ export function ensureWebBuild({ force = false } = {}): void {
       : 'Building the web app into dist/ (first start; about a minute) …',
   );
   copyCanvasKit();
+  // Metro keeps its transform cache in the system temp folder, keyed by each file's real path. Checkouts that share
+  // one node_modules (linked worktrees) share expo-router's route-context file, so one checkout's build would reuse
+  // another's cached pointer to its app/ folder and ship that checkout's screens. A cache per checkout prevents it.
+  const metroTemp = path.join(ROOT, '.expo', 'build-tmp');
+  fs.mkdirSync(metroTemp, { recursive: true });
   const result = spawnSync('npx', ['expo', 'export', '--platform', 'web', '--output-dir', 'dist'], {
     cwd: ROOT,
     stdio: 'inherit',
-    env: { ...process.env, CI: '1', EXPO_NO_TELEMETRY: '1' },
+    env: { ...process.env, CI: '1', EXPO_NO_TELEMETRY: '1', TMPDIR: metroTemp },
   });
   if (result.status !== 0) throw new Error('The web build failed; see the output above.');
   fs.writeFileSync(STAMP, `${fingerprint}\n`);

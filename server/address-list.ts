@@ -1,7 +1,8 @@
 import { parse } from 'csv-parse/sync';
 import { z } from 'zod';
 
-export type Recipient = { email: string; name: string | null };
+/** A good address and the line it came from (the first, when it appears twice). */
+export type Recipient = { email: string; name: string | null; line: number };
 export type Rejected = { line: number; value: string; reason: string };
 
 const email = z.email();
@@ -20,7 +21,7 @@ function check(
     return;
   }
   if (accepted.has(address)) return;
-  accepted.set(address, { email: address, name: name?.trim() || null });
+  accepted.set(address, { email: address, name: name?.trim() || null, line });
 }
 
 /** Pasted addresses: one per line or separated by commas or semicolons, optionally "Name <address>". */
@@ -64,10 +65,16 @@ export function parseCsvAddresses(text: string, accepted: Map<string, Recipient>
 export function parseRecipients(input: { addresses?: string; csv?: string }): {
   recipients: Recipient[];
   rejected: Rejected[];
+  /** Which fields the good addresses came from, so a refusal can name the field. */
+  sources: ('addresses' | 'csv')[];
 } {
   const accepted = new Map<string, Recipient>();
   const rejected: Rejected[] = [];
+  const sources: ('addresses' | 'csv')[] = [];
   if (input.addresses) parsePastedAddresses(input.addresses, accepted, rejected);
+  if (accepted.size > 0) sources.push('addresses');
+  const fromPaste = accepted.size;
   if (input.csv) parseCsvAddresses(input.csv, accepted, rejected);
-  return { recipients: [...accepted.values()], rejected };
+  if (accepted.size > fromPaste) sources.push('csv');
+  return { recipients: [...accepted.values()], rejected, sources };
 }

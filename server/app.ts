@@ -3,7 +3,6 @@ import compression from 'compression';
 import cors from 'cors';
 import express from 'express';
 import type { Express } from 'express';
-import { rateLimit } from 'express-rate-limit';
 import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
 import type { Logger } from 'pino';
@@ -11,10 +10,14 @@ import type { Db } from '../db/client';
 import { createAuth } from './auth';
 import type { Auth } from './auth';
 import { HttpError } from './errors';
+import { httpLogSerializers } from './logger';
 import type { CapturedMail } from './mail/local-smtp';
 import type { Mailer } from './mail/mailer';
+import { authGuards, DEFAULT_AUTH_LIMITS, type AuthLimits } from './middleware/auth-guards';
 import { errorHandler } from './middleware/error-handler';
+import { loopbackOnly } from './middleware/loopback-only';
 import { requireSession } from './middleware/require-session';
+import { requireTrustedOrigin } from './middleware/require-trusted-origin';
 import { healthRouter } from './routes/health';
 import { preferencesRouter } from './routes/preferences';
 import { rigPresetsRouter, rigsRouter } from './routes/rigs';
@@ -25,6 +28,9 @@ import { clubsRouter } from './routes/clubs';
 import { outboxRouter } from './routes/outbox';
 import { createBudgetPool, type BudgetRunner } from './budget/budget-pool';
 import { createBudgetService, type BudgetService } from './budget/budget-service';
+import { INVITES_PER_HOUR } from '../shared/schemas/sharing';
+import type { TrustProxy } from './trust-proxy';
+import { trustedOrigins } from './trusted-origins';
 import { webStatic } from './web-static';
 import packageJson from '../package.json';
 
@@ -34,12 +40,17 @@ export type AppConfig = {
   /** Extra origins allowed to call the API with cookies (the Expo dev server in `npm run dev`). */
   devWebOrigin?: string;
   webDir?: string;
-  authRateLimit?: { windowMs: number; limit: number };
+  /** Attempt limits on the auth routes; tests lower or raise them. */
+  authLimits?: Partial<AuthLimits>;
+  /** Proxies whose X-Forwarded-For is believed (TRUST_PROXY); none when left out. */
+  trustProxy?: TrustProxy;
   requireEmailVerification?: boolean;
   /** Hides development-only routes (the Outbox). */
   production?: boolean;
   /** Budgets run in worker threads; one that computes longer than timeLimitMs answers "too large to compute". */
   budget?: { timeLimitMs?: number; threads?: number };
+  /** Invite e-mails one person may send per hour (trip and club together); tests lower it. */
+  invitesPerHour?: number;
 };
 
 export type AppDeps = {
@@ -69,11 +80,11 @@ function databaseFileOf(db: Db): string {
 /** Builds the whole HTTP app without listening, so tests can drive it through supertest. */
 export function createApp(deps: AppDeps): TrailtallyApp {
   const { db, config } = deps;
-  const trustedOrigins = [config.publicUrl, ...(config.devWebOrigin ? [config.devWebOrigin] : [])];
+  const origins = trustedOrigins(config);
   const auth = createAuth(db, {
     secret: config.authSecret,
     baseUrl: config.publicUrl,
-    trustedOrigins,
+    trustedOrigins: origins,
     mailer: deps.mailer,
     requireEmailVerification: config.requireEmailVerification ?? false,
   });
@@ -81,10 +92,16 @@ export function createApp(deps: AppDeps): TrailtallyApp {
   const app = express() as TrailtallyApp;
   app.locals.auth = auth;
   app.disable('x-powered-by');
-  app.set('trust proxy', 'loopback');
+  app.set('trust proxy', config.trustProxy ?? false);
 
   if (deps.logger)
-    app.use(pinoHttp({ logger: deps.logger, autoLogging: { ignore: (req) => !req.url?.startsWith('/api') } }));
+    app.use(
+      pinoHttp({
+        logger: deps.logger,
+        serializers: httpLogSerializers,
+        autoLogging: { ignore: (req) => !req.url?.startsWith('/api') },
+      }),
+    );
   app.use(
     helmet({
       contentSecurityPolicy: {
@@ -99,19 +116,10 @@ export function createApp(deps: AppDeps): TrailtallyApp {
   );
   app.use(compression());
   if (config.devWebOrigin) app.use('/api', cors({ origin: config.devWebOrigin, credentials: true }));
+  app.use('/api', requireTrustedOrigin(origins, config.publicUrl));
 
-  const authLimit = config.authRateLimit ?? { windowMs: 15 * 60 * 1000, limit: 100 };
-  app.use(
-    '/api/auth',
-    rateLimit({
-      ...authLimit,
-      standardHeaders: 'draft-8',
-      legacyHeaders: false,
-      handler: (_req, _res, next) =>
-        next(new HttpError(429, 'rate_limited', 'Too many attempts. Please wait a few minutes and try again.')),
-    }),
-  );
-  // better-auth reads the raw body itself: its handler must come before express.json().
+  app.use('/api/auth', authGuards({ ...DEFAULT_AUTH_LIMITS, ...config.authLimits }));
+  // better-auth reads the body itself (here the text authGuards read): its handler comes before express.json().
   app.all('/api/auth/*splat', toNodeHandler(auth));
 
   app.use(express.json({ limit: JSON_BODY_LIMIT }));
@@ -128,15 +136,17 @@ export function createApp(deps: AppDeps): TrailtallyApp {
   );
   app.locals.budgets = budgets;
   const signedIn = requireSession(auth);
-  app.use(
-    '/api/trips',
-    signedIn,
-    tripsRouter({ db, now: deps.now, budgets, mailer: deps.mailer, publicUrl: config.publicUrl }),
-  );
+  const invites = {
+    mailer: deps.mailer,
+    publicUrl: config.publicUrl,
+    invitesPerHour: config.invitesPerHour ?? INVITES_PER_HOUR,
+  };
+  app.use('/api/trips', signedIn, tripsRouter({ db, now: deps.now, budgets, ...invites }));
   app.use('/api/invites', inviteLinksRouter({ db, now: deps.now, auth }));
-  app.use('/api/clubs', signedIn, clubsRouter({ db, now: deps.now, mailer: deps.mailer, publicUrl: config.publicUrl }));
+  app.use('/api/clubs', signedIn, clubsRouter({ db, now: deps.now, ...invites }));
   app.use('/api/club-invites', clubInviteLinksRouter({ db, now: deps.now, auth }));
-  if (deps.outbox && !config.production) app.use('/api/dev/outbox', outboxRouter(deps.outbox));
+  // The Outbox shows every password-reset link: only someone at this machine may read it.
+  if (deps.outbox && !config.production) app.use('/api/dev/outbox', loopbackOnly(), outboxRouter(deps.outbox));
   app.use('/api/rigs', signedIn, rigsRouter({ db, now: deps.now }));
   app.use('/api/rig-presets', signedIn, rigPresetsRouter());
   app.use('/api/me/preferences', signedIn, preferencesRouter({ db }));
@@ -144,6 +154,7 @@ export function createApp(deps: AppDeps): TrailtallyApp {
     next(new HttpError(404, 'not_found', `No API route for ${req.method} ${req.baseUrl}${req.path}.`)),
   );
 
+  app.use('/outbox', loopbackOnly());
   const web = config.webDir ? webStatic(config.webDir) : undefined;
   if (web) app.use(web);
 

@@ -2,12 +2,15 @@ import crypto from 'node:crypto';
 import fs from 'node:fs';
 import path from 'node:path';
 import { z } from 'zod';
+import { OWNER_ONLY_FILE, ensurePrivateFolder, tightenIfPresent } from '../db/private-files';
+import { trustProxySchema } from './trust-proxy';
 
 // The only place that reads process.env: everything else receives a checked Env.
 const envSchema = z.object({
   NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
   PORT: z.coerce.number().int().min(0).max(65535).default(8080),
-  HOST: z.string().default('0.0.0.0'),
+  /** Unset: every interface in production, loopback only otherwise (a development server is not for the network). */
+  HOST: z.string().min(1).optional(),
   DATABASE_PATH: z.string().min(1).default('./data/trailtally.db'),
   PUBLIC_URL: z.url().optional(),
   BETTER_AUTH_SECRET: z.string().min(32, 'BETTER_AUTH_SECRET must be at least 32 characters').optional(),
@@ -25,13 +28,18 @@ const envSchema = z.object({
   BUDGET_WORKERS: z.coerce.number().int().min(1).max(64).optional(),
   /** Whether sign-in waits until the e-mail address is verified. Default: on in production, off otherwise. */
   REQUIRE_EMAIL_VERIFICATION: z.enum(['true', 'false']).optional(),
+  /** The reverse proxies whose X-Forwarded-For is believed (see server/trust-proxy.ts). Unset: none. */
+  TRUST_PROXY: trustProxySchema,
 });
 
-export type Env = Omit<z.infer<typeof envSchema>, 'REQUIRE_EMAIL_VERIFICATION'> & {
+export type Env = Omit<z.infer<typeof envSchema>, 'REQUIRE_EMAIL_VERIFICATION' | 'HOST'> & {
+  HOST: string;
   REQUIRE_EMAIL_VERIFICATION: boolean;
   DATA_DIR: string;
   PUBLIC_URL: string;
   BETTER_AUTH_SECRET: string;
+  /** The generated secret's file in the data folder; undefined when BETTER_AUTH_SECRET is configured. */
+  AUTH_SECRET_FILE: string | undefined;
 };
 
 export function loadEnv(source: NodeJS.ProcessEnv = process.env): Env {
@@ -44,12 +52,14 @@ export function loadEnv(source: NodeJS.ProcessEnv = process.env): Env {
   const dataDir = path.dirname(path.resolve(env.DATABASE_PATH));
   return {
     ...env,
+    HOST: env.HOST ?? (env.NODE_ENV === 'production' ? '0.0.0.0' : '127.0.0.1'),
     REQUIRE_EMAIL_VERIFICATION: env.REQUIRE_EMAIL_VERIFICATION
       ? env.REQUIRE_EMAIL_VERIFICATION === 'true'
       : env.NODE_ENV === 'production',
     DATA_DIR: dataDir,
     PUBLIC_URL: env.PUBLIC_URL ?? `http://localhost:${env.PORT}`,
     BETTER_AUTH_SECRET: env.BETTER_AUTH_SECRET ?? readOrCreateSecret(dataDir),
+    AUTH_SECRET_FILE: env.BETTER_AUTH_SECRET ? undefined : secretFileIn(dataDir),
   };
 }
 
@@ -57,11 +67,16 @@ export function loadEnv(source: NodeJS.ProcessEnv = process.env): Env {
  * Without a configured secret, generate one the first time and keep it beside the database, so
  * sessions survive restarts. The file is readable by its owner only and never printed.
  */
+const secretFileIn = (dataDir: string) => path.join(dataDir, 'auth-secret');
+
 function readOrCreateSecret(dataDir: string): string {
-  const file = path.join(dataDir, 'auth-secret');
-  if (fs.existsSync(file)) return fs.readFileSync(file, 'utf8').trim();
-  fs.mkdirSync(dataDir, { recursive: true });
+  const file = secretFileIn(dataDir);
+  if (fs.existsSync(file)) {
+    tightenIfPresent(file);
+    return fs.readFileSync(file, 'utf8').trim();
+  }
+  ensurePrivateFolder(dataDir);
   const secret = crypto.randomBytes(48).toString('base64url');
-  fs.writeFileSync(file, `${secret}\n`, { mode: 0o600 });
+  fs.writeFileSync(file, `${secret}\n`, { mode: OWNER_ONLY_FILE, flag: 'wx' });
   return secret;
 }

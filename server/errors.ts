@@ -4,6 +4,7 @@ export type ErrorCode =
   | 'validation_failed'
   | 'unauthorized'
   | 'forbidden'
+  | 'forbidden_origin'
   | 'not_found'
   | 'conflict'
   | 'unprocessable'
@@ -17,6 +18,7 @@ export type ErrorCode =
   | 'invite_used'
   | 'invite_revoked'
   | 'invite_wrong_account'
+  | 'mail_failed'
   | 'internal';
 
 export type ErrorBody = {

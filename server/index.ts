@@ -1,17 +1,20 @@
-import pino from 'pino';
 import { openDatabase } from '../db/client';
+import { claimDatabase } from '../db/holder';
 import { runMigrations } from '../db/migrate';
 import { demoSignInText, isDatabaseEmpty, seedDemo } from '../db/seed';
 import { createApp } from './app';
 import { loadEnv } from './env';
+import { createLogger } from './logger';
 import { startLocalSmtp, type LocalSmtp } from './mail/local-smtp';
 import { createSmtpMailer } from './mail/mailer';
 
 /** Starts the server: migrate, seed demo data on a first start, listen, and close cleanly on signals. */
 export async function main(): Promise<void> {
   const env = loadEnv();
-  const logger = pino({ level: env.LOG_LEVEL });
+  const logger = createLogger(env.LOG_LEVEL);
   const db = openDatabase(env.DATABASE_PATH);
+  // Says that this process holds the database, so `npm run db:restore` refuses until it stops.
+  process.on('exit', claimDatabase(env.DATABASE_PATH));
   runMigrations(db);
 
   // Without a provider configured, mail goes to a local SMTP fake that the Outbox shows.
@@ -36,6 +39,7 @@ export async function main(): Promise<void> {
       requireEmailVerification: env.REQUIRE_EMAIL_VERIFICATION,
       production: env.NODE_ENV === 'production',
       budget: { timeLimitMs: env.BUDGET_TIME_LIMIT_MS, threads: env.BUDGET_WORKERS },
+      trustProxy: env.TRUST_PROXY,
     },
   });
   // Budget workers load the engine once at start, so the first budget asked for does not wait for them.

@@ -3,6 +3,7 @@ import { useState } from 'react';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { NameCard, PasswordCard, UnitsCard } from '@/components/forms/account-forms';
+import { OutboxLink } from '@/components/outbox/outbox-link';
 import { Banner } from '@/components/ui/banner';
 import { Screen } from '@/components/ui/screen';
 import { Text } from '@/components/ui/text';
@@ -34,7 +35,8 @@ export default function AccountScreen() {
       </Card>
       <UnitsCard />
       {session.data ? <NameCard name={session.data.user.name} /> : null}
-      <PasswordCard />
+      <PasswordCard owner={session.data?.user} />
+      <OutboxLink testID="account-outbox" />
       {error ? <Banner testID="sign-out-error" message={error} /> : null}
       <Button testID="sign-out" label="Sign out" tone="secondary" busy={busy} onPress={signOut} />
     </Screen>

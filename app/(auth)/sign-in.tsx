@@ -3,6 +3,7 @@ import { useState } from 'react';
 import { describeAuthError } from '@/components/forms/auth-error';
 import { SignInForm } from '@/components/forms/sign-in-form';
 import { AuthShell } from '@/components/layout/auth-shell';
+import { OutboxLink } from '@/components/outbox/outbox-link';
 import { Text } from '@/components/ui/text';
 import { authClient } from '@/stores/auth-client';
 import type { SignInInput } from '@/shared/schemas/account';
@@ -35,6 +36,7 @@ export default function SignInScreen() {
               Forgot your password?
             </Text>
           </Link>
+          <OutboxLink testID="sign-in-outbox" />
         </>
       }
     >

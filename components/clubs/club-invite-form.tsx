@@ -6,34 +6,87 @@ import { Button } from '@/components/ui/button';
 import { Text } from '@/components/ui/text';
 import { TextField } from '@/components/ui/text-field';
 import { ApiError } from '@/stores/queries/api-client';
+import { MAX_CLUB_INVITES_PER_REQUEST } from '@/shared/schemas/sharing';
 import { useClubInviteMutation, type ClubInviteResult } from '@/stores/queries/clubs';
 import { showToast } from '@/stores/toast-store';
 import { CsvFileButton } from './csv-file-button';
 
+type Line = { key: string; text: string };
+
+function LineList({
+  title,
+  lines,
+  tone,
+  testID,
+}: {
+  title: string;
+  lines: Line[];
+  tone: 'ember' | 'ink';
+  testID: string;
+}) {
+  if (lines.length === 0) return null;
+  return (
+    <View style={styles.lines} testID={testID}>
+      <Text variant="label" color={tone === 'ember' ? 'emberInk' : 'ink'}>
+        {title}
+      </Text>
+      {lines.map((line, i) => (
+        <Text key={line.key} variant="caption" testID={`${testID}-${i}`}>
+          {line.text}
+        </Text>
+      ))}
+    </View>
+  );
+}
+
+const at = (line: number) => (line > 0 ? `Line ${line}: ` : '');
+const count = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : many}`;
+
+/** What happened to every address: sent, not sent (retry from the list), left out on purpose, or not an address. */
 function Report({ report }: { report: ClubInviteResult }) {
+  const members = report.skipped.filter((row) => row.why === 'member').length;
+  const waiting = report.skipped.length - members;
   return (
     <View style={styles.report} testID="club-invite-report" role="status" aria-live="polite">
       <Text variant="label" color="pine" testID="club-invite-sent">
-        {report.sent.length} {report.sent.length === 1 ? 'invite' : 'invites'} sent
-        {report.alreadyMembers > 0 ? ` · ${report.alreadyMembers} already in the club` : ''}
+        {count(report.sent.length, 'invite', 'invites')} sent
+        {members > 0 ? ` · ${members} already in the club` : ''}
+        {waiting > 0 ? ` · ${waiting} already invited, not sent again` : ''}
       </Text>
+      <LineList
+        testID="club-invite-failed"
+        tone="ember"
+        title={`${count(report.failed.length, 'invite was', 'invites were')} saved but not sent — use Retry under “Waiting to join”:`}
+        lines={report.failed.map((row) => ({ key: row.email, text: `${row.email} — ${row.reason}` }))}
+      />
+      <LineList
+        testID="club-invite-skipped"
+        tone="ink"
+        title="Left out:"
+        lines={report.skipped.map((row) => ({ key: row.email, text: `${at(row.line)}${row.email} — ${row.reason}` }))}
+      />
+      <LineList
+        testID="club-invite-rejected"
+        tone="ember"
+        title={`${count(report.rejected.length, 'row was', 'rows were')} not sent:`}
+        lines={report.rejected.map((row, i) => ({
+          key: `${row.line}-${i}`,
+          text: `${at(row.line)}“${row.value}” — ${row.reason}`,
+        }))}
+      />
       {report.rejected.length > 0 ? (
-        <View style={styles.rejected} testID="club-invite-rejected">
-          <Text variant="label" color="ember">
-            {report.rejected.length} {report.rejected.length === 1 ? 'row was' : 'rows were'} not sent:
-          </Text>
-          {report.rejected.map((row, i) => (
-            <Text key={`${row.line}-${i}`} variant="caption" testID={`club-invite-rejected-${i}`}>
-              {row.line > 0 ? `Line ${row.line}: ` : ''}“{row.value}” — {row.reason}
-            </Text>
-          ))}
-          <Text variant="caption" color="inkSoft">
-            Fix those addresses and send them again; the others are on their way.
-          </Text>
-        </View>
+        <Text variant="caption" color="inkSoft">
+          Fix those addresses and send them again; the others are on their way.
+        </Text>
       ) : null}
     </View>
   );
+}
+
+/** A 502's body carries the report of what was saved and what was not. */
+function reportOf(error: ApiError): ClubInviteResult | undefined {
+  const report = (error.body as { report?: ClubInviteResult } | undefined)?.report;
+  return report && Array.isArray(report.sent) ? report : undefined;
 }
 
 /** Many households at once: paste addresses and/or choose a CSV of names and e-mails. */
@@ -55,17 +108,21 @@ export function ClubInviteForm({ clubId }: { clubId: string }) {
         ...(csv ? { csv: csv.text } : {}),
       });
       setReport(result);
-      showToast(`${result.sent.length} ${result.sent.length === 1 ? 'invite' : 'invites'} sent.`);
+      showToast(`${count(result.sent.length, 'invite', 'invites')} sent.`);
       // Keep only what failed in the box, so nothing typed is lost and the rest is not sent twice.
       setAddresses(result.rejected.map((row) => row.value).join('\n'));
       setCsv(undefined);
     } catch (error) {
-      const message =
-        error instanceof ApiError
-          ? (error.fields?.addresses?.[0] ?? error.message)
-          : 'That did not work. Please try again.';
-      if (error instanceof ApiError && error.fields?.addresses) setFieldError(message);
-      else setFormError(message);
+      if (!(error instanceof ApiError)) return setFormError('That did not work. Please try again.');
+      const saved = reportOf(error);
+      if (saved) {
+        // The mail server failed: the invites are saved and wait for Retry, so the box is cleared of them.
+        setReport(saved);
+        setAddresses(saved.rejected.map((row) => row.value).join('\n'));
+        setCsv(undefined);
+      }
+      if (error.fields?.addresses?.[0]) setFieldError(error.fields.addresses[0]);
+      else setFormError(error.fields?.csv?.[0] ?? error.message);
     }
   };
 
@@ -75,7 +132,7 @@ export function ClubInviteForm({ clubId }: { clubId: string }) {
       <TextField
         testID="club-invite-addresses"
         label="E-mail addresses"
-        hint="One per line or separated by commas; “Name <name@example.com>” works too."
+        hint={`One per line or separated by commas; “Name <name@example.com>” works too. Up to ${MAX_CLUB_INVITES_PER_REQUEST} at a time.`}
         multiline
         numberOfLines={6}
         autoCapitalize="none"
@@ -128,5 +185,5 @@ const styles = StyleSheet.create({
     borderColor: colors.line,
     backgroundColor: colors.dune,
   },
-  rejected: { gap: space.xs },
+  lines: { gap: space.xs },
 });

@@ -1,10 +1,13 @@
 import { StyleSheet, View } from 'react-native';
+import { NotSentNote } from '@/components/invites/not-sent-note';
 import { ConfirmAction } from '@/components/people/confirm-action';
+import { Button } from '@/components/ui/button';
+import { rowStyles } from '@/components/theme/rows';
 import { colors, radii, space } from '@/components/theme/tokens';
 import { Text } from '@/components/ui/text';
 import type { ClubDetail } from '@/shared/schemas/sharing';
 import { ApiError } from '@/stores/queries/api-client';
-import { useClubInviteRevokeMutation } from '@/stores/queries/clubs';
+import { useClubInviteResendMutation, useClubInviteRevokeMutation } from '@/stores/queries/clubs';
 import { showToast } from '@/stores/toast-store';
 
 export function ClubMembers({ detail }: { detail: ClubDetail }) {
@@ -28,8 +31,11 @@ export function ClubMembers({ detail }: { detail: ClubDetail }) {
 
 const day = (iso: string) => new Date(iso).toLocaleDateString('en-GB', { day: 'numeric', month: 'short' });
 
+const failed = (e: unknown) => showToast(e instanceof ApiError ? e.message : 'That did not work.', { tone: 'danger' });
+
 export function ClubPendingInvites({ detail }: { detail: ClubDetail }) {
   const revoke = useClubInviteRevokeMutation(detail.club.id);
+  const resend = useClubInviteResendMutation(detail.club.id);
   if (detail.pendingInvites.length === 0)
     return (
       <Text color="inkSoft" testID="club-invites-empty">
@@ -39,13 +45,28 @@ export function ClubPendingInvites({ detail }: { detail: ClubDetail }) {
   return (
     <View testID="club-pending-invites">
       {detail.pendingInvites.map((invite) => (
-        <View key={invite.id} style={styles.invite} testID={`club-invite-${invite.id}`}>
+        <View key={invite.id} style={rowStyles.wrapping} testID={`club-invite-${invite.id}`}>
           <View style={styles.name}>
             <Text variant="label">{invite.name ?? invite.email}</Text>
             <Text variant="caption" color="inkSoft">
               {invite.name ? `${invite.email} · ` : ''}link works until {day(invite.expiresAt)}
             </Text>
+            {invite.mailFailed ? <NotSentNote testID={`club-invite-${invite.id}-not-sent`} /> : null}
           </View>
+          {invite.mailFailed ? (
+            <Button
+              testID={`club-invite-${invite.id}-retry`}
+              label="Retry"
+              accessibilityLabel={`Retry: send the invite to ${invite.email}`}
+              busy={resend.isPending && resend.variables === invite.id}
+              onPress={() =>
+                resend.mutate(invite.id, {
+                  onSuccess: () => showToast(`The invite went to ${invite.email}.`),
+                  onError: failed,
+                })
+              }
+            />
+          ) : null}
           <ConfirmAction
             testID={`club-invite-${invite.id}-revoke`}
             label="Revoke"
@@ -55,7 +76,7 @@ export function ClubPendingInvites({ detail }: { detail: ClubDetail }) {
             onConfirm={() =>
               revoke.mutate(invite.id, {
                 onSuccess: () => showToast('Invite revoked.'),
-                onError: (e) => showToast(e instanceof ApiError ? e.message : 'That did not work.', { tone: 'danger' }),
+                onError: failed,
               })
             }
           />
@@ -68,15 +89,6 @@ export function ClubPendingInvites({ detail }: { detail: ClubDetail }) {
 const styles = StyleSheet.create({
   row: {
     flexDirection: 'row',
-    alignItems: 'center',
-    gap: space.sm,
-    paddingVertical: space.sm,
-    borderBottomWidth: 1,
-    borderBottomColor: colors.line,
-  },
-  invite: {
-    flexDirection: 'row',
-    flexWrap: 'wrap',
     alignItems: 'center',
     gap: space.sm,
     paddingVertical: space.sm,

@@ -10,12 +10,14 @@ import { Card } from '@/components/ui/card';
 import { ChoiceChips } from '@/components/ui/choice-chips';
 import { Text } from '@/components/ui/text';
 import { TextField } from '@/components/ui/text-field';
-import { signUpSchema } from '@/shared/schemas/account';
+import type { PasswordOwner } from '@/shared/password-strength';
+import { PASSWORD_HINT, signUpSchema } from '@/shared/schemas/account';
 import { authClient } from '@/stores/auth-client';
 import { usePreferencesMutation } from '@/stores/queries/preferences';
 import { showToast } from '@/stores/toast-store';
 import { useUnits } from '@/stores/units-store';
 import { describeAuthError } from './auth-error';
+import { passwordProblemOf, usePasswordRulePreload } from './password-rule';
 
 export function UnitsCard() {
   const units = useUnits();
@@ -103,14 +105,26 @@ export function NameCard({ name }: { name: string }) {
   );
 }
 
-export function PasswordCard() {
+export function PasswordCard({ owner }: { owner?: PasswordOwner }) {
   const [error, setError] = useState<string>();
-  const { control, handleSubmit, formState, reset } = useForm<z.infer<typeof passwordSchema>>({
+  const {
+    control,
+    handleSubmit,
+    formState,
+    reset,
+    setError: setFieldError,
+  } = useForm<z.infer<typeof passwordSchema>>({
     resolver: zodResolver(passwordSchema),
     defaultValues: { currentPassword: '', newPassword: '', confirm: '' },
   });
+  usePasswordRulePreload();
   const submit = handleSubmit(async (v) => {
     setError(undefined);
+    const problem = await passwordProblemOf(v.newPassword, owner ?? {});
+    if (problem) {
+      setFieldError('newPassword', { message: problem }, { shouldFocus: true });
+      return;
+    }
     const result = await authClient.changePassword({
       currentPassword: v.currentPassword,
       newPassword: v.newPassword,
@@ -131,6 +145,7 @@ export function PasswordCard() {
     name: 'currentPassword' | 'newPassword' | 'confirm',
     label: string,
     autoComplete: 'current-password' | 'new-password',
+    hint?: string,
   ) => (
     <Controller
       control={control}
@@ -141,6 +156,7 @@ export function PasswordCard() {
           label={label}
           secureTextEntry
           autoComplete={autoComplete}
+          hint={hint}
           value={f.value}
           onChangeText={f.onChange}
           onBlur={f.onBlur}
@@ -157,7 +173,7 @@ export function PasswordCard() {
       {error ? <Banner testID="password-error" message={error} /> : null}
       <View style={styles.fields}>
         {field('currentPassword', 'Current password', 'current-password')}
-        {field('newPassword', 'New password', 'new-password')}
+        {field('newPassword', 'New password', 'new-password', PASSWORD_HINT)}
         {field('confirm', 'New password again', 'new-password')}
       </View>
       <Button

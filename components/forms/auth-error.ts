@@ -1,6 +1,11 @@
 import { NETWORK_MESSAGE } from '@/stores/queries/api-client';
 
-type AuthFailure = { status?: number; code?: string; message?: string } | null | undefined;
+/**
+ * better-auth answers `{ code, message }`; the limits in front of it (body size, attempts) answer the app's
+ * `{ error: { code, message } }`. The auth client spreads either body into its error object.
+ */
+type AuthFailure =
+  { status?: number; code?: string; message?: string; error?: { code?: string; message?: string } } | null | undefined;
 
 /** Turns better-auth's error answers into sentences a person can act on. */
 export function describeAuthError(error: AuthFailure): string {
@@ -14,9 +19,22 @@ export function describeAuthError(error: AuthFailure): string {
       return 'An account with that e-mail already exists. Sign in instead, or use another e-mail.';
     case 'PASSWORD_TOO_SHORT':
       return 'That password is too short: use at least 8 characters.';
+    // The server's message says why (the password is the e-mail address, or common; the name holds a line break).
+    case 'PASSWORD_TOO_WEAK':
+    case 'INVALID_NAME':
+      return error.message || 'Please check the form and try again.';
+    // The server's message names the address the app answers at.
+    case 'INVALID_ORIGIN':
+    case 'MISSING_OR_NULL_ORIGIN':
+      return (
+        error.message ||
+        'This page was opened at an address the server does not accept. Open the address Trailtally was set up with.'
+      );
     default:
-      if (error.status === 429) return 'Too many attempts. Please wait a few minutes and try again.';
+      if (error.status === 429)
+        return error.error?.message ?? 'Too many attempts. Please wait a few minutes and try again.';
+      if (error.status === 413) return 'That was more than the server accepts. Please shorten what you typed.';
       if (error.status >= 500) return 'The server had a problem. Please try again in a moment.';
-      return error.message || 'That did not work. Please check the form and try again.';
+      return error.message || error.error?.message || 'That did not work. Please check the form and try again.';
   }
 }

@@ -8,7 +8,8 @@ import { space } from '@/components/theme/tokens';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { FormTextField } from '@/components/forms/form-text-field';
-import { PASSWORD_MIN_LENGTH, signUpSchema } from '@/shared/schemas/account';
+import { passwordProblemOf, usePasswordRulePreload } from '@/components/forms/password-rule';
+import { PASSWORD_HINT, signUpSchema } from '@/shared/schemas/account';
 import { authClient } from '@/stores/auth-client';
 
 const resetSchema = z
@@ -18,17 +19,24 @@ type ResetInput = z.infer<typeof resetSchema>;
 
 export function ResetPasswordForm({ token, onDone }: { token: string; onDone: () => void }) {
   const [formError, setFormError] = useState<string>();
-  const { control, handleSubmit, formState } = useForm<ResetInput>({
+  const { control, handleSubmit, formState, setError } = useForm<ResetInput>({
     resolver: zodResolver(resetSchema),
     defaultValues: { newPassword: '', repeat: '' },
   });
+  usePasswordRulePreload();
   const submit = handleSubmit(async ({ newPassword }) => {
     setFormError(undefined);
+    // The address is not known on this page; the server also refuses the account's own address.
+    const problem = await passwordProblemOf(newPassword, {});
+    if (problem) {
+      setError('newPassword', { message: problem }, { shouldFocus: true });
+      return;
+    }
     try {
       const { error } = await authClient.resetPassword({ newPassword, token });
       if (!error) return onDone();
       setFormError(
-        error.status === 400
+        error.code === 'INVALID_TOKEN'
           ? 'This reset link has expired or was already used. Ask for a new one.'
           : describeAuthError(error),
       );
@@ -44,7 +52,7 @@ export function ResetPasswordForm({ token, onDone }: { token: string; onDone: ()
         name="newPassword"
         testID="reset-password"
         label="New password"
-        hint={`At least ${PASSWORD_MIN_LENGTH} characters.`}
+        hint={PASSWORD_HINT}
         autoComplete="new-password"
         secureTextEntry
       />

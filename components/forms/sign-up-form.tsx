@@ -1,11 +1,12 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
-import { PASSWORD_MIN_LENGTH, signUpSchema, type SignUpInput } from '@/shared/schemas/account';
+import { PASSWORD_HINT, signUpSchema, type SignUpInput } from '@/shared/schemas/account';
 import { space } from '@/components/theme/tokens';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { FormTextField } from '@/components/forms/form-text-field';
+import { passwordProblemOf, usePasswordRulePreload } from '@/components/forms/password-rule';
 
 type Props = {
   onSubmit: (values: SignUpInput) => Promise<void>;
@@ -15,11 +16,16 @@ type Props = {
 };
 
 export function SignUpForm({ onSubmit, formError, defaultEmail = '', submitLabel }: Props) {
-  const { control, handleSubmit, formState } = useForm<SignUpInput>({
+  const { control, handleSubmit, formState, setError } = useForm<SignUpInput>({
     resolver: zodResolver(signUpSchema),
     defaultValues: { name: '', email: defaultEmail, password: '' },
   });
-  const submit = handleSubmit(onSubmit);
+  usePasswordRulePreload();
+  const submit = handleSubmit(async (values) => {
+    const problem = await passwordProblemOf(values.password, values);
+    if (problem) setError('password', { message: problem }, { shouldFocus: true });
+    else await onSubmit(values);
+  });
   return (
     <View style={styles.form}>
       {formError ? <Banner testID="sign-up-error" message={formError} /> : null}
@@ -38,7 +44,7 @@ export function SignUpForm({ onSubmit, formError, defaultEmail = '', submitLabel
         name="password"
         testID="sign-up-password"
         label="Password"
-        hint={`At least ${PASSWORD_MIN_LENGTH} characters.`}
+        hint={PASSWORD_HINT}
         autoComplete="new-password"
         secureTextEntry
         onSubmitEditing={submit}

@@ -5,7 +5,7 @@ import { useIsWide } from '@/components/theme/breakpoints';
 import { colors, radii, space } from '@/components/theme/tokens';
 import { Text } from '@/components/ui/text';
 import { BrandMark } from './brand-mark';
-import { useNavItems } from './nav-items';
+import { NAV_ITEMS } from './nav-items';
 import { ServerStatusBanner } from './server-status-banner';
 import { ToastHost } from './toast-host';
 import { useSyncUnitsFromServer } from '@/stores/queries/preferences';
@@ -15,7 +15,7 @@ export function AppShell({ children }: { children: ReactNode }) {
   useSyncUnitsFromServer();
   const wide = useIsWide();
   const pathname = usePathname();
-  const links = useNavItems().map((item) => {
+  const links = NAV_ITEMS.map((item) => {
     const active = item.match(pathname);
     return (
       <Link key={item.href} href={item.href} asChild>

@@ -1,3 +1,4 @@
+import { toCsv } from '@/shared/csv';
 import type { DaySheet, LedgerRow } from '@/shared/engine/result-types';
 
 export type LedgerFilter = { stopIndex: number | null; shortOnly: boolean };
@@ -10,11 +11,8 @@ export function filterLedger(rows: LedgerRow[], f: LedgerFilter): LedgerRow[] {
   );
 }
 
-const cell = (v: string | number): string => {
-  const s = typeof v === 'number' ? String(Math.round(v * 10) / 10) : v;
-  // Quote anything a spreadsheet could misread: separators, quotes, line breaks, or a leading formula sign.
-  return /[",\n\r]|^[=+\-@]/.test(s) ? `"${s.replace(/"/g, '""')}"` : s;
-};
+/** Figures to one decimal: the ledger's own precision is not meaningful beyond it. */
+const tenth = (value: number): number => Math.round(value * 10) / 10;
 
 /** The hourly ledger as CSV, in the engine's units (named in the header). */
 export function ledgerCsv(rows: LedgerRow[], stopNames: string[]): string {
@@ -32,12 +30,12 @@ export function ledgerCsv(rows: LedgerRow[], stopNames: string[]): string {
     'energy short Wh',
     'propane left kg',
   ];
-  const lines = rows.map((r) =>
-    [
-      r.local,
-      r.where.kind === 'stop'
-        ? (stopNames[r.where.stopIndex] ?? `stop ${r.where.stopIndex + 1}`)
-        : `drive ${r.where.driveIndex + 1}`,
+  const lines = rows.map((r) => [
+    r.local,
+    r.where.kind === 'stop'
+      ? (stopNames[r.where.stopIndex] ?? `stop ${r.where.stopIndex + 1}`)
+      : `drive ${r.where.driveIndex + 1}`,
+    ...[
       r.socPct,
       r.solarUsedWh,
       r.solarWastedWh,
@@ -48,17 +46,17 @@ export function ledgerCsv(rows: LedgerRow[], stopNames: string[]): string {
       r.generatorWh,
       r.energyShortWh,
       r.propaneLeftKg,
-    ]
-      .map(cell)
-      .join(','),
-  );
-  return [header.map(cell).join(','), ...lines].join('\r\n') + '\r\n';
+    ].map(tenth),
+  ]);
+  return toCsv([header, ...lines]);
 }
 
-export function daysCsv(days: DaySheet[]): string {
+/** One line per day of the trip with the stops it touches, in the engine's units (named in the header). */
+export function daysCsv(days: DaySheet[], stopNames: string[]): string {
   const header = [
     'date',
     'travel day',
+    'stops',
     'harvest Wh',
     'use Wh',
     'net Wh',
@@ -69,10 +67,11 @@ export function daysCsv(days: DaySheet[]): string {
     'end %',
     'energy short Wh',
   ];
-  const lines = days.map((d) =>
-    [
-      d.date,
-      d.travel ? 'yes' : 'no',
+  const lines = days.map((d) => [
+    d.date,
+    d.travel ? 'yes' : 'no',
+    d.stopIndexes.map((i) => stopNames[i] ?? `stop ${i + 1}`).join(', '),
+    ...[
       d.harvestWh,
       d.useWh,
       d.netWh,
@@ -82,9 +81,7 @@ export function daysCsv(days: DaySheet[]): string {
       d.lowestSocPct,
       d.endSocPct,
       d.energyShortWh,
-    ]
-      .map(cell)
-      .join(','),
-  );
-  return [header.join(','), ...lines].join('\r\n') + '\r\n';
+    ].map(tenth),
+  ]);
+  return toCsv([header, ...lines]);
 }

@@ -117,7 +117,7 @@ export function LedgerScreen({ detail }: { detail: TripDetail }) {
             testID="days-csv"
             tone="secondary"
             label="Download days (CSV)"
-            onPress={() => downloadFile(`${slug}-days.csv`, daysCsv(result.days))}
+            onPress={() => downloadFile(`${slug}-days.csv`, daysCsv(result.days, names))}
           />
         </View>
         <ScrollView horizontal focusable accessibilityLabel="Day sheets table, scrolls sideways">

@@ -48,6 +48,12 @@ export function InviteForm({ tripId, myRole }: { tripId: string; myRole: Role })
       reset({ email: '', role: values.role, message: '' });
     } catch (error) {
       if (!(error instanceof ApiError)) return setFormError('That did not work. Please try again.');
+      if (error.code === 'mail_failed') {
+        // The invite is saved and listed as not sent, with Retry beside it; the form is free for the next one.
+        setFormError(error.message);
+        reset({ email: '', role: values.role, message: '' });
+        return;
+      }
       const fieldErrors = FIELDS.filter((field) => error.fields?.[field]?.[0]);
       fieldErrors.forEach((field) => setError(field, { message: error.fields?.[field]?.[0] }));
       // "Already a member" is about the address, so it belongs beside it.

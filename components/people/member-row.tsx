@@ -41,9 +41,11 @@ export function MemberRow({ tripId, member, isMe, canManage }: Props) {
             {member.name}
             {isMe ? ' (you)' : ''}
           </Text>
-          <Text variant="caption" color="inkSoft">
-            {member.email}
-          </Text>
+          {member.email ? (
+            <Text variant="caption" color="inkSoft">
+              {member.email}
+            </Text>
+          ) : null}
         </View>
         <View style={styles.pill}>
           <Text variant="caption" color="pine" testID={`member-${id}-role`}>
@@ -97,7 +99,7 @@ export function MemberRow({ tripId, member, isMe, canManage }: Props) {
             <ConfirmAction
               testID={`member-${id}-remove`}
               label="Remove from trip"
-              question={`Remove ${member.name}? They lose access to this trip at once.`}
+              question={`Remove ${member.name}? They lose access to this trip at once, invites waiting for their address are withdrawn, and clubs they shared it to lose it too.`}
               confirmLabel="Yes, remove"
               busy={remove.isPending}
               onConfirm={() =>

@@ -9,6 +9,7 @@ import type { PendingInvite } from '@/shared/schemas/sharing';
 import { ApiError } from '@/stores/queries/api-client';
 import { useInviteResendMutation, useInviteRevokeMutation, useTripInvitesQuery } from '@/stores/queries/members';
 import { showToast } from '@/stores/toast-store';
+import { NotSentNote } from '@/components/invites/not-sent-note';
 import { ConfirmAction } from './confirm-action';
 
 const day = (iso: string) => new Date(iso).toLocaleDateString('en-GB', { day: 'numeric', month: 'short' });
@@ -20,38 +21,46 @@ function failed(error: unknown): void {
 function InviteRow({ tripId, invite, canManage }: { tripId: string; invite: PendingInvite; canManage: boolean }) {
   const resend = useInviteResendMutation(tripId);
   const revoke = useInviteRevokeMutation(tripId);
+  // The owner resends any invite; a planner can retry or resend the ones they sent.
+  const canResend = canManage || invite.sentByMe;
+  const again = invite.mailFailed ? 'Retry' : 'Resend';
   return (
     <View style={styles.row} testID={`invite-${invite.id}`}>
       <Text variant="label">{invite.email}</Text>
       <Text variant="caption" color="inkSoft">
-        {ROLE_LABEL[invite.role]} · sent {day(invite.createdAt)}
+        {ROLE_LABEL[invite.role]} · {invite.mailFailed ? 'saved' : 'sent'} {day(invite.createdAt)}
         {invite.invitedByName ? ` by ${invite.invitedByName}` : ''} · link works until {day(invite.expiresAt)}
       </Text>
-      {canManage ? (
+      {invite.mailFailed ? <NotSentNote testID={`invite-${invite.id}-not-sent`} /> : null}
+      {canResend || canManage ? (
         <View style={styles.actions}>
-          <Button
-            testID={`invite-${invite.id}-resend`}
-            label="Resend"
-            accessibilityLabel={`Resend the invite to ${invite.email}`}
-            tone="secondary"
-            busy={resend.isPending}
-            onPress={() =>
-              resend.mutate(invite.id, {
-                onSuccess: () => showToast(`A new link went to ${invite.email}.`),
-                onError: failed,
-              })
-            }
-          />
-          <ConfirmAction
-            testID={`invite-${invite.id}-revoke`}
-            label="Revoke"
-            question={`Revoke the invite to ${invite.email}? Its link stops working.`}
-            confirmLabel="Yes, revoke"
-            busy={revoke.isPending}
-            onConfirm={() =>
-              revoke.mutate(invite.id, { onSuccess: () => showToast('Invite revoked.'), onError: failed })
-            }
-          />
+          {canResend ? (
+            <Button
+              testID={`invite-${invite.id}-resend`}
+              label={again}
+              accessibilityLabel={`${again}: send the invite to ${invite.email}${invite.mailFailed ? '' : ' again'}`}
+              tone={invite.mailFailed ? 'primary' : 'secondary'}
+              busy={resend.isPending}
+              onPress={() =>
+                resend.mutate(invite.id, {
+                  onSuccess: () => showToast(`A new link went to ${invite.email}.`),
+                  onError: failed,
+                })
+              }
+            />
+          ) : null}
+          {canManage ? (
+            <ConfirmAction
+              testID={`invite-${invite.id}-revoke`}
+              label="Revoke"
+              question={`Revoke the invite to ${invite.email}? Its link stops working.`}
+              confirmLabel="Yes, revoke"
+              busy={revoke.isPending}
+              onConfirm={() =>
+                revoke.mutate(invite.id, { onSuccess: () => showToast('Invite revoked.'), onError: failed })
+              }
+            />
+          ) : null}
         </View>
       ) : null}
     </View>

@@ -12,7 +12,7 @@ import { ActivityList } from './activity-list';
 import { InviteForm } from './invite-form';
 import { MemberRow } from './member-row';
 import { PendingInvites } from './pending-invites';
-import { ShareToClub } from './share-to-club';
+import { TripClubShares } from './trip-club-shares';
 
 const ROLE_NOTE = {
   owner: 'everything, including members and deleting the trip',
@@ -79,8 +79,8 @@ export function PeopleScreen({ detail }: { detail: TripDetail }) {
     <>
       {canInvite ? (
         <Card testID="share-club-card">
-          <Heading>Share to a club</Heading>
-          <ShareToClub tripId={tripId} />
+          <Heading>Shared with clubs</Heading>
+          <TripClubShares tripId={tripId} isOwner={canManage} />
         </Card>
       ) : null}
       <Card testID="activity">

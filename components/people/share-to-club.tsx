@@ -11,15 +11,22 @@ import { ApiError } from '@/stores/queries/api-client';
 import { useClubsQuery, useShareTripToClubMutation } from '@/stores/queries/clubs';
 import { showToast } from '@/stores/toast-store';
 
-/** An organiser shares this trip to one of their clubs: every member may view it and copy it onto their rig. */
-export function ShareToClub({ tripId }: { tripId: string }) {
+/** The owner shares this trip to a club they organise: every member may view it and copy it onto their rig. */
+export function ShareToClub({ tripId, sharedClubIds }: { tripId: string; sharedClubIds: string[] }) {
   const clubs = useClubsQuery();
   const share = useShareTripToClubMutation();
   const [picked, setPicked] = useState<string>();
   if (clubs.isPending) return <Skeleton testID="share-club-loading" height={48} />;
   if (clubs.isError)
     return <QueryError testID="share-club-error" error={clubs.error} onRetry={() => void clubs.refetch()} />;
-  const mine = clubs.data.clubs.filter((club) => club.role === 'organiser');
+  const organised = clubs.data.clubs.filter((club) => club.role === 'organiser');
+  const mine = organised.filter((club) => !sharedClubIds.includes(club.id));
+  if (organised.length > 0 && mine.length === 0)
+    return (
+      <Text color="inkSoft" testID="share-club-all-done">
+        Shared with every club you organise.
+      </Text>
+    );
   if (mine.length === 0)
     return (
       <View style={styles.wrap} testID="share-club-none">
@@ -33,13 +40,13 @@ export function ShareToClub({ tripId }: { tripId: string }) {
         </Link>
       </View>
     );
-  const clubId = picked ?? mine[0]?.id ?? '';
+  const clubId = mine.find((club) => club.id === picked)?.id ?? mine[0]?.id ?? '';
   const name = mine.find((club) => club.id === clubId)?.name ?? '';
   return (
     <View style={styles.wrap} testID="share-club">
       <ChoiceChips
         testID="share-club-pick"
-        label="Club"
+        label="Share to a club"
         options={mine.map((club) => ({ value: club.id, label: club.name }))}
         value={clubId}
         onChange={setPicked}

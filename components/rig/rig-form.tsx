@@ -19,6 +19,8 @@ import { ApiError, conflictCurrent } from '@/stores/queries/api-client';
 import { useTripRigSaveMutation } from '@/stores/queries/rigs';
 import { showToast } from '@/stores/toast-store';
 import { useUnits } from '@/stores/units-store';
+import type { DcLoad } from '@/shared/engine/dc-run-defaults';
+import { CableCheckSection } from './cable-check-section';
 import { GeneratorFields } from './generator-fields';
 import { BATTERY_PRESETS, GENERATOR_PRESETS, INVERTER_PRESETS, SOLAR_PRESETS, TANK_PRESETS } from './part-presets';
 import { Advanced, Num, Presets, Section } from './rig-fields';
@@ -26,7 +28,15 @@ import { newSolarArray, percentOfFraction } from './rig-form-values';
 import { SolarArrayFields } from './solar-array-fields';
 
 /** The trip's rig in grouped sections; saved as one record with its version. */
-export function RigForm({ tripId, record, canEdit }: { tripId: string; record: RigRecord; canEdit: boolean }) {
+type RigFormProps = {
+  tripId: string;
+  record: RigRecord;
+  canEdit: boolean;
+  /** The trip's DC loads, from which the cable check suggests load circuits. */
+  dcLoads?: readonly DcLoad[];
+};
+
+export function RigForm({ tripId, record, canEdit, dcLoads = [] }: RigFormProps) {
   const units = useUnits();
   const save = useTripRigSaveMutation(tripId);
   const [formError, setFormError] = useState<string>();
@@ -511,7 +521,7 @@ export function RigForm({ tripId, record, canEdit }: { tripId: string; record: R
         />
         <Caution kind="propane" testID="caution-propane" />
       </Section>
-      <Caution kind="cabling" testID="caution-cabling" />
+      <CableCheckSection control={control} setValue={setValue} units={units} disabled={off} dcLoads={dcLoads} />
       {conflict ? (
         <ConflictNotice
           testID="rig-conflict"

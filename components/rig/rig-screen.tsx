@@ -8,6 +8,7 @@ import { Card } from '@/components/ui/card';
 import { Skeleton } from '@/components/ui/skeleton';
 import { Text } from '@/components/ui/text';
 import { TextField } from '@/components/ui/text-field';
+import { dcLoadsFromAppliances } from '@/shared/engine/dc-run-defaults';
 import type { TripDetail } from '@/shared/schemas/api';
 import { can } from '@/shared/schemas/roles';
 import { ApiError } from '@/stores/queries/api-client';
@@ -78,7 +79,15 @@ export function RigScreen({ detail }: { detail: TripDetail }) {
         <Banner testID="rig-read-only" tone="info" message="Only the trip owner or a planner can change the rig." />
       ) : null}
       <Panes
-        main={<RigForm key={detail.rig.id} tripId={detail.trip.id} record={detail.rig} canEdit={canEdit} />}
+        main={
+          <RigForm
+            key={detail.rig.id}
+            tripId={detail.trip.id}
+            record={detail.rig}
+            canEdit={canEdit}
+            dcLoads={dcLoadsFromAppliances(detail.appliances.map((a) => a.appliance))}
+          />
+        }
         side={canEdit ? <MyRigs detail={detail} /> : <View />}
         sideWidth={380}
       />

@@ -1,15 +1,23 @@
-import { StyleSheet, View } from 'react-native';
+import { StyleSheet, View, type StyleProp, type ViewStyle } from 'react-native';
 import type { Figure as FigureValue } from '@/components/format/units';
 import { space, type ColorName } from '@/components/theme/tokens';
 import { Text } from './text';
 
-type Props = { label: string; figure: FigureValue; note?: string; color?: ColorName; testID: string };
+type Props = {
+  label: string;
+  figure: FigureValue;
+  note?: string;
+  color?: ColorName;
+  testID: string;
+  /** Overrides the default column width, e.g. narrower figures that sit two to a phone row. */
+  style?: StyleProp<ViewStyle>;
+};
 
 /** A headline number: big value, small unit, a label above and an optional note below. */
-export function Figure({ label, figure, note, color = 'ink', testID }: Props) {
+export function Figure({ label, figure, note, color = 'ink', testID, style }: Props) {
   return (
     <View
-      style={styles.wrap}
+      style={[styles.wrap, style]}
       testID={testID}
       accessible
       accessibilityLabel={`${label}: ${figure.value} ${figure.unit}${note ? `, ${note}` : ''}`}

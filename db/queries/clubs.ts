@@ -1,4 +1,4 @@
-import { and, asc, count, countDistinct, eq, gt, isNull } from 'drizzle-orm';
+import { and, asc, count, countDistinct, eq, gt, inArray, isNull } from 'drizzle-orm';
 import type { DbExecutor } from '../client';
 import { user } from '../schema/auth';
 import { clubInvites, clubMembers, clubs, clubTrips, tripCopies } from '../schema/clubs';
@@ -52,20 +52,50 @@ export function listClubMembers(db: DbExecutor, clubId: string) {
     .all();
 }
 
-export function listPendingClubInvites(db: DbExecutor, clubId: string, now: Date) {
+/** An invite of the club still waiting for an answer: not used, not withdrawn, not expired. */
+const waitingIn = (clubId: string, now: Date) =>
+  and(
+    eq(clubInvites.clubId, clubId),
+    isNull(clubInvites.acceptedAt),
+    isNull(clubInvites.revokedAt),
+    gt(clubInvites.expiresAt, now),
+  );
+
+/** The club's waiting invites (optionally only those to some addresses). */
+export function listPendingClubInvites(db: DbExecutor, clubId: string, now: Date, emails?: string[]) {
   return db
     .select()
     .from(clubInvites)
-    .where(
-      and(
-        eq(clubInvites.clubId, clubId),
-        isNull(clubInvites.acceptedAt),
-        isNull(clubInvites.revokedAt),
-        gt(clubInvites.expiresAt, now),
-      ),
-    )
+    .where(and(waitingIn(clubId, now), emails ? inArray(clubInvites.email, emails) : undefined))
     .orderBy(asc(clubInvites.email))
     .all();
+}
+
+/** Lower-cased addresses of the club's members. */
+export function listClubMemberEmails(db: DbExecutor, clubId: string): Set<string> {
+  return new Set(
+    db
+      .select({ email: user.email })
+      .from(clubMembers)
+      .innerJoin(user, eq(user.id, clubMembers.userId))
+      .where(eq(clubMembers.clubId, clubId))
+      .all()
+      .map((row) => row.email.toLowerCase()),
+  );
+}
+
+export function findPendingClubInvite(db: DbExecutor, clubId: string, inviteId: string, now: Date) {
+  return db
+    .select()
+    .from(clubInvites)
+    .where(and(waitingIn(clubId, now), eq(clubInvites.id, inviteId)))
+    .get();
+}
+
+/** Marks club invites' e-mails as failed (`at`) or delivered (null). */
+export function setClubInvitesMailFailed(db: DbExecutor, inviteIds: string[], at: Date | null): void {
+  if (inviteIds.length === 0) return;
+  db.update(clubInvites).set({ mailFailedAt: at }).where(inArray(clubInvites.id, inviteIds)).run();
 }
 
 export function listClubTrips(db: DbExecutor, clubId: string) {
@@ -115,4 +145,38 @@ export function sharedToUserClub(db: DbExecutor, tripId: string, userId: string)
     .where(eq(clubTrips.tripId, tripId))
     .get();
   return row !== undefined;
+}
+
+/** Every club the trip is shared with, for its People tab. */
+export function listTripShares(db: DbExecutor, tripId: string) {
+  return db
+    .select({ clubId: clubs.id, clubName: clubs.name, sharedByName: user.name, sharedAt: clubTrips.sharedAt })
+    .from(clubTrips)
+    .innerJoin(clubs, eq(clubs.id, clubTrips.clubId))
+    .leftJoin(user, eq(user.id, clubTrips.sharedBy))
+    .where(eq(clubTrips.tripId, tripId))
+    .orderBy(asc(clubs.name))
+    .all()
+    .map((share) => ({
+      ...share,
+      sharedAt: share.sharedAt.toISOString(),
+      memberCount: countMembers(db, share.clubId),
+    }));
+}
+
+export function deleteTripShare(db: DbExecutor, tripId: string, clubId: string): boolean {
+  return (
+    db
+      .delete(clubTrips)
+      .where(and(eq(clubTrips.tripId, tripId), eq(clubTrips.clubId, clubId)))
+      .run().changes > 0
+  );
+}
+
+/** Ends the shares of this trip that `userId` made: they go when their maker leaves the trip. */
+export function endSharesMadeBy(db: DbExecutor, tripId: string, userId: string): number {
+  return db
+    .delete(clubTrips)
+    .where(and(eq(clubTrips.tripId, tripId), eq(clubTrips.sharedBy, userId)))
+    .run().changes;
 }

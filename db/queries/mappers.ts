@@ -3,6 +3,7 @@
 import type { ApplianceRecord, DriveRecord, RigRecord, StopRecord } from '@/shared/schemas/api';
 import type { ApplianceFields, Schedule } from '@/shared/schemas/appliance';
 import type { RoutineWindow } from '@/shared/schemas/common';
+import { emptyDcWiring } from '@/shared/schemas/dc-wiring';
 import type { Rig } from '@/shared/schemas/rig';
 import type { Drive, Stop } from '@/shared/schemas/trip';
 import { windowsOfSchedule } from '@/shared/trip-rules';
@@ -27,6 +28,7 @@ export function rigToColumns(rig: Rig) {
     vehicleCharger: rig.vehicleCharger,
     generator: rig.generator,
     propaneTanks: rig.propaneTanks,
+    dcWiring: rig.dcWiring,
   };
 }
 
@@ -48,6 +50,7 @@ export function rigFromRow(row: RigRow): Rig {
     vehicleCharger: row.vehicleCharger ?? null,
     generator: row.generator ?? null,
     propaneTanks: row.propaneTanks,
+    dcWiring: row.dcWiring ?? emptyDcWiring(),
   };
 }
 

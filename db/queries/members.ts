@@ -5,7 +5,8 @@ import type { DbExecutor } from '../client';
 import { user } from '../schema/auth';
 import { memberships } from '../schema/memberships';
 
-export function listMembers(db: DbExecutor, tripId: string): Member[] {
+/** Members with their addresses; what a reader through a club may see is decided by the route. */
+export function listMembers(db: DbExecutor, tripId: string): (Member & { email: string })[] {
   return db
     .select({ userId: user.id, name: user.name, email: user.email, role: memberships.role })
     .from(memberships)

@@ -152,12 +152,13 @@ export function touchTrip(
 
 export function logActivity(
   db: DbExecutor,
-  entry: { tripId: string; userId: string | null; summary: string; at: Date },
+  entry: { tripId: string; userId: string | null; summary: string; at: Date; audience?: 'everyone' | 'members' },
 ): void {
   db.insert(activity).values(entry).run();
 }
 
-export function listActivity(db: DbExecutor, tripId: string, limit = 100) {
+/** The newest lines first; `everyoneOnly` leaves out the lines meant for the trip's members alone. */
+export function listActivity(db: DbExecutor, tripId: string, { limit = 100, everyoneOnly = false } = {}) {
   return db
     .select({
       id: activity.id,
@@ -168,7 +169,7 @@ export function listActivity(db: DbExecutor, tripId: string, limit = 100) {
     })
     .from(activity)
     .leftJoin(user, eq(user.id, activity.userId))
-    .where(eq(activity.tripId, tripId))
+    .where(and(eq(activity.tripId, tripId), everyoneOnly ? eq(activity.audience, 'everyone') : undefined))
     .orderBy(desc(activity.at), desc(activity.id))
     .limit(limit)
     .all();

@@ -13,6 +13,13 @@ export const activity = sqliteTable(
     userId: text('user_id').references(() => user.id, { onDelete: 'set null' }),
     at: integer('at', { mode: 'timestamp_ms' }).notNull(),
     summary: text('summary').notNull(),
+    /**
+     * Who may read the line: 'members' marks lines about invites and club shares (they name e-mail
+     * addresses and clubs), which readers who see the trip only through a club never get.
+     */
+    audience: text('audience', { enum: ['everyone', 'members'] })
+      .notNull()
+      .default('everyone'),
   },
   (table) => [index('activity_trip_idx').on(table.tripId, table.at)],
 );

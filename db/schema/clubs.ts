@@ -40,6 +40,8 @@ export const clubInvites = sqliteTable(
     expiresAt: integer('expires_at', { mode: 'timestamp_ms' }).notNull(),
     acceptedAt: integer('accepted_at', { mode: 'timestamp_ms' }),
     revokedAt: integer('revoked_at', { mode: 'timestamp_ms' }),
+    /** Set when the e-mail could not be sent; cleared when a retry gets through. */
+    mailFailedAt: integer('mail_failed_at', { mode: 'timestamp_ms' }),
   },
   (table) => [index('club_invites_club_idx').on(table.clubId)],
 );

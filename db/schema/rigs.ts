@@ -1,4 +1,5 @@
 import { index, integer, real, sqliteTable, text } from 'drizzle-orm/sqlite-core';
+import type { DcWiring } from '@/shared/schemas/dc-wiring';
 import type {
   Controller,
   Generator,
@@ -38,6 +39,8 @@ export const rigs = sqliteTable(
     vehicleCharger: text('vehicle_charger', { mode: 'json' }).$type<VehicleCharger | null>(),
     generator: text('generator', { mode: 'json' }).$type<Generator | null>(),
     propaneTanks: text('propane_tanks', { mode: 'json' }).$type<PropaneTank[]>().notNull(),
+    // Null on rigs stored before DC runs existed: read as no runs on the rig's default basis.
+    dcWiring: text('dc_wiring', { mode: 'json' }).$type<DcWiring>(),
     version: integer('version').notNull().default(1),
     createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull(),
     updatedAt: integer('updated_at', { mode: 'timestamp_ms' }).notNull(),

@@ -7,7 +7,8 @@ import { can, type Permission, type Role } from '@/shared/schemas/roles';
 import { HttpError, notFound } from '../errors';
 import { currentUser } from './require-session';
 
-export type TripAccess = { tripId: string; role: Role; userId: string };
+/** `viaClub`: the caller is no member and reads the trip because it is shared to one of their clubs. */
+export type TripAccess = { tripId: string; role: Role; userId: string; viaClub: boolean };
 
 declare global {
   // eslint-disable-next-line @typescript-eslint/no-namespace
@@ -22,8 +23,10 @@ declare global {
 export const idParam = z.string().min(1).max(64);
 
 /** A member's role; a trip shared to one of the user's clubs reads as viewer. */
-export function accessRole(db: Db, tripId: string, userId: string): Role | undefined {
-  return findMembership(db, tripId, userId)?.role ?? (sharedToUserClub(db, tripId, userId) ? 'viewer' : undefined);
+export function resolveAccess(db: Db, tripId: string, userId: string): { role: Role; viaClub: boolean } | undefined {
+  const membership = findMembership(db, tripId, userId);
+  if (membership) return { role: membership.role, viaClub: false };
+  return sharedToUserClub(db, tripId, userId) ? { role: 'viewer', viaClub: true } : undefined;
 }
 
 /**
@@ -34,9 +37,9 @@ export function loadTripAccess(db: Db) {
   return (req: Request, res: Response, next: NextFunction) => {
     const user = currentUser(res);
     const tripId = idParam.safeParse(req.params.tripId);
-    const role = tripId.success ? accessRole(db, tripId.data, user.id) : undefined;
-    if (!tripId.success || !role) throw notFound('That trip was not found.');
-    res.locals.access = { tripId: tripId.data, role, userId: user.id };
+    const access = tripId.success ? resolveAccess(db, tripId.data, user.id) : undefined;
+    if (!tripId.success || !access) throw notFound('That trip was not found.');
+    res.locals.access = { tripId: tripId.data, userId: user.id, ...access };
     next();
   };
 }

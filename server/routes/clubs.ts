@@ -6,18 +6,21 @@ import {
   countOrganisedClubs,
   findClubRole,
   findMyCopy,
+  findPendingClubInvite,
+  listClubMemberEmails,
   listClubMembers,
   listClubsForUser,
   listClubTrips,
   listPendingClubInvites,
+  setClubInvitesMailFailed,
 } from '@/db/queries/clubs';
-import { findMembership } from '@/db/queries/trips';
-import { user } from '@/db/schema/auth';
+import { logActivity } from '@/db/queries/trips';
 import { clubInvites, clubMembers, clubs, clubTrips } from '@/db/schema/clubs';
 import { can } from '@/shared/schemas/roles';
 import {
   clubInviteRequestSchema,
   createClubRequestSchema,
+  MAX_CLUB_INVITES_PER_REQUEST,
   shareTripRequestSchema,
   type ClubDetail,
   type ClubInviteReport,
@@ -25,16 +28,14 @@ import {
 import { parseRecipients } from '../address-list';
 import { LIMITS } from '@/shared/schemas/limits';
 import { HttpError, limitReached, notFound } from '../errors';
+import { claimInviteMailings, deliverAll, mailFailed } from '../invite-mail';
 import { INVITE_LIFETIME_MS, isoDay, newInviteToken } from '../invite-tokens';
-import type { Mailer } from '../mail/mailer';
+import { MailSendError, type Mailer } from '../mail/mailer';
 import { clubInviteMail } from '../mail/templates';
 import { currentUser } from '../middleware/require-session';
-import { idParam } from '../middleware/trip-access';
+import { idParam, resolveAccess } from '../middleware/trip-access';
 
-type Deps = { db: Db; now: () => Date; mailer: Mailer; publicUrl: string };
-
-/** Mail goes out a few at a time: fast for a club of dozens, gentle on a provider's rate limits. */
-const SEND_CONCURRENCY = 4;
+type Deps = { db: Db; now: () => Date; mailer: Mailer; publicUrl: string; invitesPerHour: number };
 
 function clubRoleOrThrow(db: Db, clubId: string, userId: string) {
   const role = findClubRole(db, clubId, userId);
@@ -48,8 +49,24 @@ function organiserOrThrow(db: Db, clubId: string, userId: string): void {
     throw new HttpError(403, 'forbidden', 'Only the club organiser can do that.');
 }
 
-export function clubsRouter({ db, now, mailer, publicUrl }: Deps): Router {
+export function clubsRouter({ db, now, mailer, publicUrl, invitesPerHour: perHour }: Deps): Router {
   const router = Router();
+
+  const letter = (
+    to: { email: string; name: string | null },
+    inviterName: string,
+    clubName: string,
+    token: string,
+    expiresAt: Date,
+  ) =>
+    clubInviteMail({
+      to: to.email,
+      ...(to.name ? { name: to.name } : {}),
+      inviterName,
+      clubName,
+      url: `${publicUrl}/club-invites/${token}`,
+      expiresOn: isoDay(expiresAt),
+    });
 
   router.get('/', (_req, res) => {
     res.json({ clubs: listClubsForUser(db, currentUser(res).id) });
@@ -86,6 +103,7 @@ export function clubsRouter({ db, now, mailer, publicUrl }: Deps): Router {
               email: invite.email,
               name: invite.name,
               expiresAt: invite.expiresAt.toISOString(),
+              mailFailed: invite.mailFailedAt !== null,
             }))
           : [],
       trips: trips.map((trip) => ({
@@ -103,25 +121,53 @@ export function clubsRouter({ db, now, mailer, publicUrl }: Deps): Router {
     organiserOrThrow(db, clubId, me.id);
     const club = db.select().from(clubs).where(eq(clubs.id, clubId)).get();
     if (!club) throw notFound('That club was not found.');
-    const { recipients, rejected } = parseRecipients(clubInviteRequestSchema.parse(req.body));
-    const memberEmails = new Set(
-      db
-        .select({ email: user.email })
-        .from(clubMembers)
-        .innerJoin(user, eq(user.id, clubMembers.userId))
-        .where(eq(clubMembers.clubId, clubId))
-        .all()
-        .map((row) => row.email.toLowerCase()),
-    );
-    const fresh = recipients.filter((recipient) => !memberEmails.has(recipient.email));
+    const { recipients, rejected, sources } = parseRecipients(clubInviteRequestSchema.parse(req.body));
+    if (recipients.length > MAX_CLUB_INVITES_PER_REQUEST) {
+      const message = `At most ${MAX_CLUB_INVITES_PER_REQUEST} addresses per request; this one has ${recipients.length}. Send the rest in another batch.`;
+      throw new HttpError(
+        400,
+        'validation_failed',
+        message,
+        Object.fromEntries(sources.map((field) => [field, [message]])),
+      );
+    }
     const at = now();
+    // Nobody is mailed twice: members are already in, and a waiting invite keeps its link.
+    const memberEmails = listClubMemberEmails(db, clubId);
+    const pending = new Map(
+      listPendingClubInvites(
+        db,
+        clubId,
+        at,
+        recipients.map((r) => r.email),
+      ).map((invite) => [invite.email, invite]),
+    );
+    const skipped: ClubInviteReport['skipped'] = [];
+    const fresh = recipients.filter((recipient) => {
+      const waiting = pending.get(recipient.email);
+      if (memberEmails.has(recipient.email))
+        skipped.push({ line: recipient.line, email: recipient.email, why: 'member', reason: 'Already in the club.' });
+      else if (waiting)
+        skipped.push({
+          line: recipient.line,
+          email: recipient.email,
+          why: 'pending',
+          reason: waiting.mailFailedAt
+            ? 'An invite is waiting but its e-mail was not sent: use Retry under “Waiting to join”.'
+            : `Already invited; the link works until ${isoDay(waiting.expiresAt)}, so it was not sent again.`,
+        });
+      else return true;
+      return false;
+    });
     const expiresAt = new Date(at.getTime() + INVITE_LIFETIME_MS);
-    const letters = db.transaction((tx) =>
-      fresh.map((recipient) => {
+    const letters = db.transaction((tx) => {
+      if (fresh.length > 0) claimInviteMailings(tx, res, { userId: me.id, count: fresh.length, at, perHour });
+      return fresh.map((recipient) => {
         const { token, hash } = newInviteToken();
+        const id = crypto.randomUUID();
         tx.insert(clubInvites)
           .values({
-            id: crypto.randomUUID(),
+            id,
             clubId,
             email: recipient.email,
             name: recipient.name,
@@ -131,30 +177,57 @@ export function clubsRouter({ db, now, mailer, publicUrl }: Deps): Router {
             expiresAt,
           })
           .run();
-        return clubInviteMail({
-          to: recipient.email,
-          ...(recipient.name ? { name: recipient.name } : {}),
-          inviterName: me.name,
-          clubName: club.name,
-          url: `${publicUrl}/club-invites/${token}`,
-          expiresOn: isoDay(expiresAt),
-        });
-      }),
-    );
-    const sent: ClubInviteReport['sent'] = [];
-    for (let i = 0; i < letters.length; i += SEND_CONCURRENCY) {
-      const batch = letters.slice(i, i + SEND_CONCURRENCY);
-      const results = await Promise.allSettled(batch.map((letter) => mailer.send(letter)));
-      results.forEach((result, j) => {
-        const recipient = fresh[i + j];
-        if (!recipient) return;
-        if (result.status === 'fulfilled') sent.push({ email: recipient.email, name: recipient.name });
-        else rejected.push({ line: 0, value: recipient.email, reason: 'The mail server refused this address.' });
+        return { item: { id, recipient }, message: letter(recipient, me.name, club.name, token, expiresAt) };
       });
-    }
-    const alreadyMembers = recipients.length - fresh.length;
-    const report: ClubInviteReport & { alreadyMembers: number } = { sent, rejected, alreadyMembers };
+    });
+    const delivery = await deliverAll(mailer, letters);
+    setClubInvitesMailFailed(
+      db,
+      delivery.failed.map(({ item }) => item.id),
+      now(),
+    );
+    const report: ClubInviteReport = {
+      sent: delivery.sent.map(({ recipient }) => ({ email: recipient.email, name: recipient.name })),
+      rejected,
+      skipped,
+      failed: delivery.failed.map(({ item, reason }) => ({
+        email: item.recipient.email,
+        name: item.recipient.name,
+        reason,
+      })),
+    };
+    if (delivery.serverDown)
+      throw mailFailed(
+        new MailSendError('transport', delivery.failed[0]?.reason ?? 'The mail server could not be reached.'),
+        `${delivery.failed.length} of the invites are saved but their e-mails were not sent.`,
+        { report },
+      );
     res.status(201).json(report);
+  });
+
+  // Retry (or resend) one club invite: a fresh link for another week.
+  router.post('/:clubId/invites/:inviteId/resend', async (req, res) => {
+    const me = currentUser(res);
+    const clubId = idParam.parse(req.params.clubId);
+    organiserOrThrow(db, clubId, me.id);
+    const club = db.select().from(clubs).where(eq(clubs.id, clubId)).get();
+    const at = now();
+    const invite = findPendingClubInvite(db, clubId, idParam.parse(req.params.inviteId), at);
+    if (!club || !invite) throw notFound('That invite is no longer pending.');
+    const { token, hash } = newInviteToken();
+    const expiresAt = new Date(at.getTime() + INVITE_LIFETIME_MS);
+    db.transaction((tx) => {
+      claimInviteMailings(tx, res, { userId: me.id, count: 1, at, perHour });
+      tx.update(clubInvites).set({ tokenHash: hash, expiresAt }).where(eq(clubInvites.id, invite.id)).run();
+    });
+    try {
+      await mailer.send(letter(invite, me.name, club.name, token, expiresAt));
+    } catch (error) {
+      setClubInvitesMailFailed(db, [invite.id], now());
+      throw mailFailed(error, `The invite to ${invite.email} was not sent.`);
+    }
+    setClubInvitesMailFailed(db, [invite.id], null);
+    res.json({ invite: { id: invite.id, email: invite.email, expiresAt: expiresAt.toISOString(), mailFailed: false } });
   });
 
   router.delete('/:clubId/invites/:inviteId', (req, res) => {
@@ -175,11 +248,28 @@ export function clubsRouter({ db, now, mailer, publicUrl }: Deps): Router {
     const clubId = idParam.parse(req.params.clubId);
     organiserOrThrow(db, clubId, me.id);
     const { tripId } = shareTripRequestSchema.parse(req.body);
-    const membership = findMembership(db, tripId, me.id);
-    if (!membership) throw notFound('That trip was not found.');
-    if (!can(membership.role, 'editTrip'))
-      throw new HttpError(403, 'forbidden', 'Only the trip’s owner or a planner can share it to a club.');
-    db.insert(clubTrips).values({ clubId, tripId, sharedBy: me.id, sharedAt: now() }).onConflictDoNothing().run();
+    const access = resolveAccess(db, tripId, me.id);
+    if (!access) throw notFound('That trip was not found.');
+    // Sharing widens who reads the trip, so it is the owner's call alone (as inviting a planner is);
+    // the owner also sees every share on the People tab and can withdraw it.
+    if (!can(access.role, 'manageMembers'))
+      throw new HttpError(403, 'forbidden', 'Only the trip’s owner can share it to a club.');
+    const club = db.select({ name: clubs.name }).from(clubs).where(eq(clubs.id, clubId)).get();
+    db.transaction((tx) => {
+      const added = tx
+        .insert(clubTrips)
+        .values({ clubId, tripId, sharedBy: me.id, sharedAt: now() })
+        .onConflictDoNothing()
+        .run();
+      if (added.changes > 0)
+        logActivity(tx, {
+          tripId,
+          userId: me.id,
+          summary: `shared the trip with the club "${club?.name ?? ''}"`,
+          at: now(),
+          audience: 'members',
+        });
+    });
     res.status(201).json({ trips: listClubTrips(db, clubId) });
   });
 
@@ -187,9 +277,22 @@ export function clubsRouter({ db, now, mailer, publicUrl }: Deps): Router {
     const me = currentUser(res);
     const clubId = idParam.parse(req.params.clubId);
     organiserOrThrow(db, clubId, me.id);
-    db.delete(clubTrips)
-      .where(and(eq(clubTrips.clubId, clubId), eq(clubTrips.tripId, idParam.parse(req.params.tripId))))
-      .run();
+    const tripId = idParam.parse(req.params.tripId);
+    const club = db.select({ name: clubs.name }).from(clubs).where(eq(clubs.id, clubId)).get();
+    db.transaction((tx) => {
+      const removed = tx
+        .delete(clubTrips)
+        .where(and(eq(clubTrips.clubId, clubId), eq(clubTrips.tripId, tripId)))
+        .run();
+      if (removed.changes > 0)
+        logActivity(tx, {
+          tripId,
+          userId: me.id,
+          summary: `stopped sharing the trip with the club "${club?.name ?? ''}"`,
+          at: now(),
+          audience: 'members',
+        });
+    });
     res.status(204).end();
   });
 

@@ -1,5 +1,7 @@
 import { Router } from 'express';
 import type { Db } from '@/db/client';
+import { endSharesMadeBy } from '@/db/queries/clubs';
+import { revokePendingTripInvitesTo } from '@/db/queries/invites';
 import { listMembers, removeMember, setMemberRole } from '@/db/queries/members';
 import { findTrip, logActivity, touchTrip } from '@/db/queries/trips';
 import { updateMemberRoleRequestSchema } from '@/shared/schemas/api';
@@ -14,7 +16,10 @@ export function membersRouter({ db, now }: { db: Db; now: () => Date }): Router 
   const router = Router({ mergeParams: true });
 
   router.get('/', (_req, res) => {
-    res.json({ members: listMembers(db, tripAccess(res).tripId) });
+    const { tripId, viaClub } = tripAccess(res);
+    const members = listMembers(db, tripId);
+    // Someone who reads the trip through a club sees who plans it, not how to reach them.
+    res.json({ members: viaClub ? members.map(({ email: _email, ...member }) => member) : members });
   });
 
   // Hand the trip to another member: they become owner, the previous owner stays on as planner.
@@ -61,8 +66,13 @@ export function membersRouter({ db, now }: { db: Db; now: () => Date }): Router 
     if (target === findTrip(db, tripId)?.ownerId) {
       throw new HttpError(422, 'unprocessable', 'The owner cannot be removed; hand over ownership first.');
     }
+    const email = listMembers(db, tripId).find((member) => member.userId === target)?.email;
+    // Removal takes away every way back in: the membership, links already sent to their address,
+    // and the clubs they shared the trip to.
     db.transaction((tx) => {
-      if (!removeMember(tx, tripId, target)) throw notFound('That member was not found.');
+      if (!email || !removeMember(tx, tripId, target)) throw notFound('That member was not found.');
+      revokePendingTripInvitesTo(tx, tripId, email, now());
+      endSharesMadeBy(tx, tripId, target);
       touchTrip(tx, tripId, now());
       logActivity(tx, { tripId, userId, summary: 'removed a member', at: now() });
     });

@@ -12,10 +12,21 @@ import { membersRouter } from './members';
 import { stopsRouter } from './stops';
 import { tripRigRouter } from './trip-rig';
 import { tripInvitesRouter } from './trip-invites';
+import { tripSharesRouter } from './trip-shares';
 import type { Mailer } from '../mail/mailer';
 
 /** Everything under /api/trips/:tripId/… once the caller's role is known. */
-export type TripItemsDeps = { db: Db; now: () => Date; budgets: BudgetService; mailer: Mailer; publicUrl: string };
+export type TripItemsDeps = {
+  db: Db;
+  now: () => Date;
+  budgets: BudgetService;
+  mailer: Mailer;
+  publicUrl: string;
+  invitesPerHour: number;
+};
+
+/** Anything shaped like an e-mail address: never shown to someone who reads the trip through a club. */
+const EMAIL_LIKE = /[^\s@<>"]+@[^\s@<>"]+\.[^\s@<>"]+/;
 
 export function tripItemsRouter(deps: TripItemsDeps): Router {
   const router = Router({ mergeParams: true });
@@ -25,6 +36,7 @@ export function tripItemsRouter(deps: TripItemsDeps): Router {
   router.use('/rig', tripRigRouter(deps));
   router.use('/members', membersRouter(deps));
   router.use('/invites', tripInvitesRouter(deps));
+  router.use('/shares', tripSharesRouter(deps));
 
   router.get('/budget', async (req, res) => {
     let answer: BudgetAnswer | undefined;
@@ -60,11 +72,12 @@ export function tripItemsRouter(deps: TripItemsDeps): Router {
   });
 
   router.get('/activity', (_req, res) => {
-    const entries = listActivity(deps.db, tripAccess(res).tripId).map((entry) => ({
-      ...entry,
-      id: String(entry.id),
-      at: entry.at.toISOString(),
-    }));
+    const { tripId, viaClub } = tripAccess(res);
+    // A club reader gets the plan's history without the lines about invites and shares; a line
+    // holding an address (one written before lines had an audience) is left out as well.
+    const entries = listActivity(deps.db, tripId, { everyoneOnly: viaClub })
+      .filter((entry) => !viaClub || !EMAIL_LIKE.test(entry.summary))
+      .map((entry) => ({ ...entry, id: String(entry.id), at: entry.at.toISOString() }));
     res.json({ entries });
   });
 

@@ -2,6 +2,7 @@
 import type { ApplianceInput } from '../schemas/appliance';
 import type { EngineInputDraft } from '../schemas/engine-input';
 import { applianceFromLibrary } from './appliance-library';
+import { DESERT_DC_WIRING, HIGHLAND_DC_WIRING } from './demo-dc-wiring';
 
 const everyEvening = (startHour: number, minutes: number, startMinute = 0): ApplianceInput['schedule'] => ({
   kind: 'routine',
@@ -107,6 +108,7 @@ export const highlandLoop: EngineInputDraft = {
       { name: 'Cylinder A', propaneKg: 6 },
       { name: 'Cylinder B', propaneKg: 6 },
     ],
+    dcWiring: HIGHLAND_DC_WIRING,
   },
   appliances: caravanLoads,
   options: { assumedHookup: { amps: 16, volts: 230 } },
@@ -211,6 +213,7 @@ export const desertSpringLoop: EngineInputDraft = {
       { name: 'Front A', propaneKg: 9.07 },
       { name: 'Front B', propaneKg: 9.07 },
     ],
+    dcWiring: DESERT_DC_WIRING,
   },
   appliances: trailerLoads,
   options: { assumedHookup: { amps: 30, volts: 120 } },

@@ -1,6 +1,7 @@
 // The JSON contract between the API and the screens. Records are the engine's input schemas plus
 // the server-owned fields (id, version); requests reuse the same schemas so forms, API and engine agree.
 import { z } from 'zod';
+import { nameText } from './text';
 import { applianceFieldsSchema, applianceSchema, scheduleSchema } from './appliance';
 import { rigSchema } from './rig';
 import { roleSchema } from './roles';
@@ -33,7 +34,13 @@ export const applianceRecordSchema = z.object({
 });
 export type ApplianceRecord = z.infer<typeof applianceRecordSchema>;
 
-export const memberSchema = z.object({ userId: z.string(), name: z.string(), email: z.string(), role: roleSchema });
+/** `email` is left out for readers who see the trip only through a club: they get names, not addresses. */
+export const memberSchema = z.object({
+  userId: z.string(),
+  name: z.string(),
+  email: z.string().optional(),
+  role: roleSchema,
+});
 export type Member = z.infer<typeof memberSchema>;
 
 export const tripDetailSchema = z.object({
@@ -59,7 +66,7 @@ export type ActivityEntry = z.infer<typeof activityEntrySchema>;
 
 // ---- requests ----
 const tripFieldsSchema = z.object({
-  name: z.string().trim().min(1, { error: 'Give the trip a name.' }).max(120),
+  name: nameText(120, { empty: 'Give the trip a name.' }),
   startDate: isoDateSchema,
   endDate: isoDateSchema,
   timeZone: timeZoneSchema,
@@ -94,7 +101,7 @@ export type UpdateTripRequest = z.input<typeof updateTripRequestSchema>;
 export const createRigRequestSchema = z.object({ rig: rigSchema }).strict();
 export const updateRigRequestSchema = z.object({ version: versionSchema, rig: rigSchema }).strict();
 export const replaceTripRigRequestSchema = z.object({ version: versionSchema, rigId: idSchema }).strict();
-export const saveTripRigRequestSchema = z.object({ name: z.string().trim().min(1).max(120) }).strict();
+export const saveTripRigRequestSchema = z.object({ name: nameText(120, { empty: 'Give the rig a name.' }) }).strict();
 
 export const createStopRequestSchema = z.object({ stop: stopSchema, notes: z.string().max(4000).default('') }).strict();
 /** notes left out: kept as they are. */

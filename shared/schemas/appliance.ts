@@ -1,5 +1,6 @@
 // Appliance contract: a load with its watts and when it runs.
 import { z } from 'zod';
+import { nameText } from './text';
 import { fractionSchema, routineWindowsSchema } from './common';
 
 export const circuitSchema = z.enum(['ac', 'dc', 'fuel']);
@@ -22,7 +23,7 @@ export const scheduleSchema = z.discriminatedUnion('kind', [
 export type Schedule = z.infer<typeof scheduleSchema>;
 
 const applianceShape = {
-  name: z.string().min(1).max(80),
+  name: nameText(80, { empty: 'Give the appliance a name.' }),
   /** ac: through the inverter or hookup; dc: straight off the battery; fuel: burns propane, runningW is its fan/controls on DC. */
   circuit: circuitSchema,
   quantity: z.number().int().min(1).max(50).default(1),

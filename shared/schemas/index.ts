@@ -5,3 +5,5 @@ export * from './appliance';
 export * from './options';
 export * from './engine-input';
 export * from './limits';
+export * from './text';
+export * from './dc-wiring';

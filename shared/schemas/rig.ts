@@ -1,6 +1,8 @@
 // Rig contract: the power system a trip runs on.
 import { z } from 'zod';
+import { nameText } from './text';
 import { fractionSchema, percentSchema, positiveSchema, routineWindowsSchema } from './common';
+import { dcWiringSchema, emptyDcWiring } from './dc-wiring';
 import { LIMITS } from './limits';
 
 export const chemistrySchema = z.enum(['lifepo4', 'agm', 'flooded']);
@@ -20,7 +22,7 @@ export type Battery = z.infer<typeof batterySchema>;
 
 export const solarArraySchema = z
   .object({
-    name: z.string().min(1).max(80).default('Roof array'),
+    name: nameText(80, { empty: 'Give the array a name.' }).default('Roof array'),
     ratedW: positiveSchema.max(20_000),
     mounting: z.enum(['flat', 'tilted']).default('flat'),
     tiltDeg: z.number().min(0).max(90).default(0),
@@ -104,7 +106,7 @@ export const generatorSchema = z
 export type Generator = z.infer<typeof generatorSchema>;
 
 export const propaneTankSchema = z.object({
-  name: z.string().min(1).max(80).default('Cylinder'),
+  name: nameText(80, { empty: 'Give the tank a name.' }).default('Cylinder'),
   propaneKg: positiveSchema.max(500),
   fillPct: percentSchema.default(100),
 });
@@ -112,7 +114,7 @@ export type PropaneTank = z.infer<typeof propaneTankSchema>;
 
 export const rigSchema = z
   .object({
-    name: z.string().min(1).max(120),
+    name: nameText(120, { empty: 'Give the rig a name.' }),
     battery: batterySchema,
     solarArrays: z
       .array(solarArraySchema)
@@ -127,6 +129,8 @@ export const rigSchema = z
       .array(propaneTankSchema)
       .max(LIMITS.propaneTanksPerRig, { error: `A rig has at most ${LIMITS.propaneTanksPerRig} cylinders.` })
       .default([]),
+    /** The DC runs for the cable check; none stored, the check suggests runs from the rig's parts. */
+    dcWiring: dcWiringSchema.default(emptyDcWiring),
   })
   .refine((r) => r.solarArrays.length === 0 || r.controller !== null, {
     message: 'Solar arrays need a charge controller',

@@ -1,5 +1,6 @@
 // Trip contract: stops (where the rig stays) and drives (the moves between them).
 import { z } from 'zod';
+import { nameText } from './text';
 import { isoInstantSchema, localHourSchema, nonNegativeSchema, fractionSchema, timeZoneSchema } from './common';
 import { LIMITS, fieldRule } from './limits';
 
@@ -37,7 +38,7 @@ export type GeneratorHours = z.infer<typeof generatorHoursSchema>;
 
 export const stopSchema = z
   .object({
-    name: z.string().min(1).max(120),
+    name: nameText(120, { empty: 'Give the stop a name.' }),
     lat: z.number().min(-90).max(90),
     lon: z.number().min(-180).max(180),
     elevationM: z.number().min(-500).max(6000).default(0),
@@ -74,7 +75,7 @@ const MAX_TRIP_HOURS = MAX_TRIP_DAYS * 24 + 1;
 
 export const tripSchema = z
   .object({
-    name: z.string().min(1).max(120),
+    name: nameText(120, { empty: 'Give the trip a name.' }),
     stops: z
       .array(stopSchema)
       .min(1)

@@ -1,6 +1,6 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { TripDetail } from '@/shared/schemas/api';
-import type { ClubDetail, ClubInviteReport, ClubInviteRequest, ClubSummary } from '@/shared/schemas/sharing';
+import type { ClubDetail, ClubInviteReport, ClubInviteRequest, ClubSummary, TripShare } from '@/shared/schemas/sharing';
 import { apiFetch } from './api-client';
 import { STALE } from './stale';
 import { invalidateTrip, tripKeys } from './trips';
@@ -9,9 +9,11 @@ export const clubKeys = {
   root: ['clubs'] as const,
   list: () => [...clubKeys.root, 'list'] as const,
   detail: (clubId: string) => [...clubKeys.root, 'detail', clubId] as const,
+  /** Under the clubs root, so sharing or withdrawing from either side refreshes both. */
+  tripShares: (tripId: string) => [...clubKeys.root, 'trip-shares', tripId] as const,
 };
 
-export type ClubInviteResult = ClubInviteReport & { alreadyMembers: number };
+export type ClubInviteResult = ClubInviteReport;
 
 const clubPath = (clubId: string) => `/api/clubs/${encodeURIComponent(clubId)}`;
 
@@ -39,12 +41,23 @@ export function useClubCreateMutation() {
   });
 }
 
+// Invites are saved even when their e-mail fails (502): refresh the list whatever the answer.
 export function useClubInviteMutation(clubId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (body: ClubInviteRequest) =>
       apiFetch<ClubInviteResult>(`${clubPath(clubId)}/invites`, { method: 'POST', json: body }),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: clubKeys.detail(clubId) }),
+    onSettled: () => queryClient.invalidateQueries({ queryKey: clubKeys.detail(clubId) }),
+  });
+}
+
+/** Sends a club invite again with a fresh link: "Retry" when its e-mail did not go out. */
+export function useClubInviteResendMutation(clubId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (inviteId: string) =>
+      apiFetch<unknown>(`${clubPath(clubId)}/invites/${encodeURIComponent(inviteId)}/resend`, { method: 'POST' }),
+    onSettled: () => queryClient.invalidateQueries({ queryKey: clubKeys.detail(clubId) }),
   });
 }
 
@@ -72,6 +85,29 @@ export function useUnshareTripMutation(clubId: string) {
     mutationFn: (tripId: string) =>
       apiFetch<void>(`${clubPath(clubId)}/trips/${encodeURIComponent(tripId)}`, { method: 'DELETE' }),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: clubKeys.root }),
+  });
+}
+
+const sharesPath = (tripId: string) => `/api/trips/${encodeURIComponent(tripId)}/shares`;
+
+/** Every club the trip is shared with (owner and planners). */
+export function useTripSharesQuery(tripId: string, enabled: boolean) {
+  return useQuery({
+    queryKey: clubKeys.tripShares(tripId),
+    queryFn: () => apiFetch<{ shares: TripShare[] }>(sharesPath(tripId)),
+    staleTime: STALE.SECONDS.THIRTY,
+    enabled,
+  });
+}
+
+/** The owner withdraws the trip from a club, whoever shared it there. */
+export function useTripShareWithdrawMutation(tripId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (clubId: string) =>
+      apiFetch<void>(`${sharesPath(tripId)}/${encodeURIComponent(clubId)}`, { method: 'DELETE' }),
+    onSuccess: () =>
+      Promise.all([queryClient.invalidateQueries({ queryKey: clubKeys.root }), invalidateTrip(queryClient, tripId)]),
   });
 }
 

@@ -3,6 +3,7 @@ import type { Member } from '@/shared/schemas/api';
 import type { Role } from '@/shared/schemas/roles';
 import type { CreateInviteRequest, PendingInvite } from '@/shared/schemas/sharing';
 import { apiFetch } from './api-client';
+import { clubKeys } from './clubs';
 import { STALE } from './stale';
 import { invalidateTrip, tripKeys } from './trips';
 
@@ -40,6 +41,8 @@ async function afterMembersChange(queryClient: QueryClient, tripId: string, memb
   await Promise.all([
     queryClient.invalidateQueries({ queryKey: memberKeys.members(tripId) }),
     queryClient.invalidateQueries({ queryKey: memberKeys.invites(tripId) }),
+    // Removing someone also ends the club shares they made.
+    queryClient.invalidateQueries({ queryKey: clubKeys.tripShares(tripId) }),
     invalidateTrip(queryClient, tripId),
   ]);
 }
@@ -74,20 +77,22 @@ export function useHandOverMutation(tripId: string) {
   });
 }
 
+// An invite is saved even when its e-mail fails (502), so the lists refresh whatever the answer.
 export function useInviteCreateMutation(tripId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (body: CreateInviteRequest) => apiFetch<unknown>(invitesPath(tripId), { method: 'POST', json: body }),
-    onSuccess: () => afterMembersChange(queryClient, tripId),
+    onSettled: () => afterMembersChange(queryClient, tripId),
   });
 }
 
+/** "Resend", or "Retry" when the invite's e-mail did not go out. */
 export function useInviteResendMutation(tripId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (inviteId: string) =>
       apiFetch<unknown>(`${invitesPath(tripId)}/${encodeURIComponent(inviteId)}/resend`, { method: 'POST' }),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: memberKeys.invites(tripId) }),
+    onSettled: () => queryClient.invalidateQueries({ queryKey: memberKeys.invites(tripId) }),
   });
 }
 

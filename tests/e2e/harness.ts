@@ -5,6 +5,7 @@ import os from 'node:os';
 import path from 'node:path';
 import { chromium, type Browser, type Page } from 'playwright-core';
 import { afterAll, beforeAll } from 'vitest';
+import { browserPath } from '@/scripts/find-browser';
 
 export const SCREENSHOT_DIR = path.resolve(__dirname, '..', '..', 'test-results');
 
@@ -70,7 +71,7 @@ export async function startServer(): Promise<RunningServer> {
 
 export async function launchBrowser(): Promise<Browser> {
   return chromium.launch({
-    executablePath: process.env.CHROME_PATH ?? '/usr/bin/chromium',
+    executablePath: browserPath(),
     args: [
       '--no-sandbox',
       '--disable-gpu',

@@ -183,7 +183,7 @@ describe('sharing a trip by e-mail', () => {
 });
 
 describe.each(Object.entries(VIEWPORTS))('clubs at %s width', (name, viewport) => {
-  it('when the organiser creates a club and invites households with one bad address (pasted on a phone, a CSV file on a laptop), then the good ones are sent and the bad one is reported by line', async () => {
+  it('when the organiser creates a club and invites households with one bad address (pasted on a phone, a CSV file on a laptop), then the good ones are sent, the bad one is reported by line, and the trip’s People tab lists the club share until the owner withdraws it', async () => {
     const page = await freshPage(viewport);
     const errors = trackPageErrors(page);
     await signIn(page, suite.server.url, DEMO_ACCOUNT.email, DEMO_ACCOUNT.password);
@@ -235,12 +235,24 @@ describe.each(Object.entries(VIEWPORTS))('clubs at %s width', (name, viewport) =
       .locator(byTestId('toast'))
       .filter({ hasText: `Shared to Glen Rally Club ${name}` })
       .waitFor();
+    // The People tab lists the club among those the trip is shared with, and no longer offers it.
+    const shareRow = page
+      .locator('[data-testid^="trip-share-"]')
+      .filter({ hasText: `Glen Rally Club ${name}` })
+      .first();
+    await shareRow.waitFor();
+    expect(await shareRow.textContent()).toMatch(/1 household can read it · shared by .+ on /);
+    expect(await page.locator(byTestId('share-club-pick')).getByText(`Glen Rally Club ${name}`).count()).toBe(0);
+    await screenshot(page, `sharing-people-shares-${name}`);
+    await expectAccessible(page, `people with shares (${name})`);
+
     await page.click(byTestId('nav-clubs'));
     await page
       .locator('[data-testid^="club-card-"]')
       .filter({ hasText: `Glen Rally Club ${name}` })
       .click();
     await page.waitForSelector(byTestId('club-trips'));
+    const clubPath = new URL(page.url()).pathname;
     expect(await page.textContent(byTestId('club-trips'))).toContain('No household has copied it yet');
     await screenshot(page, `sharing-club-${name}`);
     await expectAccessible(page, `club (${name})`);
@@ -249,6 +261,22 @@ describe.each(Object.entries(VIEWPORTS))('clubs at %s width', (name, viewport) =
     await page.waitForSelector(byTestId('club-list'));
     await screenshot(page, `sharing-clubs-${name}`);
     await expectAccessible(page, `clubs (${name})`);
+
+    // The owner withdraws the share from the trip's People tab (after confirming); the club then has no trip.
+    await page.goto(suite.server.url);
+    await page.waitForSelector(byTestId('trips-screen'));
+    await openPeople(page);
+    const shareTestId = (await shareRow.getAttribute('data-testid')) ?? '';
+    await page.click(byTestId(`${shareTestId}-withdraw`));
+    await page.click(byTestId(`${shareTestId}-withdraw-yes`));
+    await page
+      .locator(byTestId('toast'))
+      .filter({ hasText: `Glen Rally Club ${name} no longer sees this trip` })
+      .waitFor();
+    await expect.poll(() => page.locator(byTestId(shareTestId)).count()).toBe(0);
+    await page.locator(byTestId('share-club-pick')).getByText(`Glen Rally Club ${name}`).waitFor();
+    await page.goto(`${suite.server.url}${clubPath}`);
+    await page.waitForSelector(byTestId('club-trips-empty'));
     expect(errors).toEqual([]);
     await page.context().close();
   });

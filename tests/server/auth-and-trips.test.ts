@@ -88,7 +88,7 @@ describe('GET /api/trips', () => {
 
 describe('sign-in rate limit', () => {
   it('when sign-in is tried too often, then 429 with the stable error body', async () => {
-    const limited = createTestApp({ authAttemptsPerMinute: 3 });
+    const limited = createTestApp({ authLimits: { failedSignInsPerClient: 3 } });
     try {
       const attempt = () =>
         request(limited.app)

@@ -108,7 +108,7 @@ describe('budgets in worker threads', () => {
 
 describe('the time limit through the API', () => {
   it('when a budget computes longer than the configured limit, then 422 budget_too_large with the error body', async () => {
-    const ctx = createTestApp({ budget: { timeLimitMs: 1 } });
+    const ctx = createTestApp({ config: { budget: { timeLimitMs: 1 } } });
     try {
       const { agent } = await signUpAgent(ctx.app, 'Impatient planner');
       // Two months, three stops and a load: many milliseconds of work, against a limit of one.

@@ -2,7 +2,8 @@
 // promise to a family sharing a plan, so it is checked exhaustively rather than by example.
 import request, { type Agent } from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { createTestApp, signUpAgent, type TestContext } from '../factories/test-app';
+import { createClub, joinClubByInvite } from '../factories/club-factory';
+import { createTestApp, signUpAgent, TEST_ORIGIN, type TestContext } from '../factories/test-app';
 import {
   addAppliance,
   addStop,
@@ -13,11 +14,21 @@ import {
   stopOnNextFreeDay,
 } from '../factories/trip-factory';
 
-const ACTORS = ['owner', 'planner', 'crew', 'viewer', 'stranger', 'anonymous'] as const;
+/**
+ * `clubReader`: no member, but in a club the owner shared the trip to. `removed`: a former planner (and
+ * former owner, who shared the trip to a club of their own) whom the owner removed.
+ */
+const ACTORS = ['owner', 'planner', 'crew', 'viewer', 'clubReader', 'removed', 'stranger', 'anonymous'] as const;
 type Actor = (typeof ACTORS)[number];
 type Caller = { agent: Agent; userId: string };
 type Cell = { method: 'get' | 'post' | 'patch' | 'put' | 'delete'; path: string; body?: object };
-type World = { ctx: TestContext; tripId: string; callers: Record<Exclude<Actor, 'anonymous'>, Caller> };
+type World = {
+  ctx: TestContext;
+  tripId: string;
+  /** The owner's club, which the trip is shared to and the club reader belongs to. */
+  clubId: string;
+  callers: Record<Exclude<Actor, 'anonymous'>, Caller>;
+};
 type Row = { name: string; prepare: (world: World, actor: Actor) => Promise<Cell>; expected: Record<Actor, number> };
 
 /** Expected statuses by how much a route needs: read, editLoads, editTrip or owner-only. */
@@ -26,6 +37,9 @@ const needs = (level: 'read' | 'loads' | 'trip' | 'owner', ok = 200): Record<Act
   planner: level === 'owner' ? 403 : ok,
   crew: level === 'read' || level === 'loads' ? ok : 403,
   viewer: level === 'read' ? ok : 403,
+  // Reading through a club is reading as a viewer.
+  clubReader: level === 'read' ? ok : 403,
+  removed: 404,
   stranger: 404,
   anonymous: 401,
 });
@@ -69,6 +83,7 @@ const ROWS: Row[] = [
       const { trip } = await createTrip(owner(), { name: 'Doomed' });
       for (const role of ['planner', 'crew', 'viewer'] as const)
         grant(world.ctx.db, trip.id, world.callers[role].userId, role);
+      await owner().post(`/api/clubs/${world.clubId}/trips`).send({ tripId: trip.id }).expect(201);
       return { method: 'delete', path: `/api/trips/${trip.id}` };
     },
     expected: needs('owner', 204),
@@ -237,6 +252,29 @@ const ROWS: Row[] = [
     expected: needs('read', 201),
   },
   {
+    name: 'GET shares (clubs the trip is shared with)',
+    prepare: async () => ({ method: 'get', path: `${base()}/shares` }),
+    expected: needs('trip'),
+  },
+  {
+    name: 'POST share to a club the caller organises',
+    prepare: async (w, actor) => {
+      const caller = actor === 'anonymous' ? w.callers.owner : w.callers[actor];
+      const clubId = await createClub(caller.agent, `${actor}'s club`);
+      return { method: 'post', path: `/api/clubs/${clubId}/trips`, body: { tripId: world.tripId } };
+    },
+    expected: needs('owner', 201),
+  },
+  {
+    name: 'DELETE share (withdraw from a club)',
+    prepare: async () => {
+      const clubId = await createClub(owner(), 'Short-lived club');
+      await owner().post(`/api/clubs/${clubId}/trips`).send({ tripId: world.tripId }).expect(201);
+      return { method: 'delete', path: `${base()}/shares/${clubId}` };
+    },
+    expected: needs('owner', 204),
+  },
+  {
     name: 'DELETE member',
     prepare: async (w) => {
       const extra = await signUpAgent(w.ctx.app, 'Extra');
@@ -247,17 +285,39 @@ const ROWS: Row[] = [
   },
 ];
 
+/**
+ * The removed actor took every road back in that the app offers: they held the trip as owner, shared it
+ * to their own club and handed it back, staying on as planner, before the owner removed them.
+ */
+async function removeAfterSharing(ctx: TestContext, tripId: string, ownerCaller: Caller, removed: Caller) {
+  grant(ctx.db, tripId, removed.userId, 'planner');
+  await ownerCaller.agent.post(`/api/trips/${tripId}/members/hand-over`).send({ userId: removed.userId }).expect(200);
+  const theirClub = await createClub(removed.agent, 'Their own club');
+  await removed.agent.post(`/api/clubs/${theirClub}/trips`).send({ tripId }).expect(201);
+  await removed.agent.post(`/api/trips/${tripId}/members/hand-over`).send({ userId: ownerCaller.userId }).expect(200);
+  await ownerCaller.agent.delete(`/api/trips/${tripId}/members/${removed.userId}`).expect(204);
+}
+
 beforeAll(async () => {
   const ctx = createTestApp();
-  const [ownerCaller, planner, crew, viewer, stranger] = await Promise.all(
-    ['Owner', 'Planner', 'Crew', 'Viewer', 'Stranger'].map((name) => signUpAgent(ctx.app, name)),
+  const [ownerCaller, planner, crew, viewer, removed, stranger] = await Promise.all(
+    ['Owner', 'Planner', 'Crew', 'Viewer', 'Removed', 'Stranger'].map((name) => signUpAgent(ctx.app, name)),
   );
-  if (!ownerCaller || !planner || !crew || !viewer || !stranger) throw new Error('sign-up failed');
+  if (!ownerCaller || !planner || !crew || !viewer || !removed || !stranger) throw new Error('sign-up failed');
   const { trip } = await createTrip(ownerCaller.agent);
   grant(ctx.db, trip.id, planner.userId, 'planner');
   grant(ctx.db, trip.id, crew.userId, 'crew');
   grant(ctx.db, trip.id, viewer.userId, 'viewer');
-  world = { ctx, tripId: trip.id, callers: { owner: ownerCaller, planner, crew, viewer, stranger } };
+  const clubId = await createClub(ownerCaller.agent, 'Matrix club');
+  await ownerCaller.agent.post(`/api/clubs/${clubId}/trips`).send({ tripId: trip.id }).expect(201);
+  const clubReader = await joinClubByInvite(ctx, ownerCaller.agent, clubId, 'Club Reader');
+  await removeAfterSharing(ctx, trip.id, ownerCaller, removed);
+  world = {
+    ctx,
+    tripId: trip.id,
+    clubId,
+    callers: { owner: ownerCaller, planner, crew, viewer, clubReader, removed, stranger },
+  };
   await addStop(ownerCaller.agent, trip.id);
   await addStop(ownerCaller.agent, trip.id);
   await addAppliance(ownerCaller.agent, trip.id);
@@ -267,7 +327,8 @@ afterAll(() => world?.ctx.close());
 describe.each(ROWS)('$name', (row) => {
   it.each(ACTORS)('when called by %s, then the status is as the role rules say', async (actor) => {
     const cell = await row.prepare(world, actor);
-    const client = actor === 'anonymous' ? request(world.ctx.app) : world.callers[actor].agent;
+    const client =
+      actor === 'anonymous' ? request.agent(world.ctx.app).set('Origin', TEST_ORIGIN) : world.callers[actor].agent;
     const pending = client[cell.method](cell.path);
     const response = await (cell.body ? pending.send(cell.body) : pending);
     expect({ actor, status: response.status, body: response.status >= 400 ? response.body : undefined }).toMatchObject({

@@ -3,7 +3,7 @@ import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { startLocalSmtp, type LocalSmtp } from '@/server/mail/local-smtp';
 import { createSmtpMailer } from '@/server/mail/mailer';
 import type { TripDetail } from '@/shared/schemas/api';
-import { createTestApp, signUpAgent, type TestContext } from '../factories/test-app';
+import { createTestApp, signUpAgent, TEST_ORIGIN, type TestContext } from '../factories/test-app';
 import { addAppliance, addStop, createTrip, getDetail, grant, stopOnNextFreeDay } from '../factories/trip-factory';
 
 const ORIGIN = 'http://localhost:8080';
@@ -150,7 +150,7 @@ describe('token misuse is refused and grants nothing', () => {
 
   it('when nobody is signed in, then accepting is 401', async () => {
     const { token } = await invited('anon@example.test');
-    expect((await request(ctx.app).post(`/api/invites/${token}/accept`)).status).toBe(401);
+    expect((await request(ctx.app).post(`/api/invites/${token}/accept`).set('Origin', TEST_ORIGIN)).status).toBe(401);
   });
 });
 

@@ -1,0 +1,1 @@
+ALTER TABLE `rigs` ADD `dc_wiring` text;

@@ -1,0 +1,105 @@
+import pino from 'pino';
+import request from 'supertest';
+import { afterEach, describe, expect, it } from 'vitest';
+import { createLogger, httpLogSerializers, REDACTED } from '@/server/logger';
+import { createTestApp, type TestContext } from '../factories/test-app';
+
+const ORIGIN = 'http://localhost:8080';
+const BEARER = 'Bearer not-for-the-log-8f3a';
+
+/** A pino destination that keeps every line, so a test can read what would have reached the log. */
+function memoryStream() {
+  const lines: string[] = [];
+  return { lines, stream: { write: (line: string) => void lines.push(line) } };
+}
+
+/** The session token's value from a sign-up's Set-Cookie header. */
+function sessionToken(setCookie: string[] | string | undefined): string {
+  const cookies = Array.isArray(setCookie) ? setCookie : [setCookie ?? ''];
+  const match = cookies.map((c) => /session_token=([^;]+)/.exec(c)).find(Boolean);
+  if (!match?.[1]) throw new Error(`no session cookie in ${cookies.join(' | ')}`);
+  return decodeURIComponent(match[1]);
+}
+
+let ctx: TestContext | undefined;
+afterEach(() => ctx?.close());
+
+describe('logs never carry credentials', () => {
+  it('when a signed-in request fails with a 5xx, then its log lines hold no cookie, set-cookie or authorization value', async () => {
+    const log = memoryStream();
+    let clockBroken = false;
+    ctx = createTestApp({
+      logger: createLogger('info', log.stream),
+      now: () => {
+        if (clockBroken) throw new Error('the clock failed');
+        return new Date('2026-11-20T10:00:00Z');
+      },
+    });
+    const signUp = await request(ctx.app)
+      .post('/api/auth/sign-up/email')
+      .set('Origin', ORIGIN)
+      .send({ name: 'Log Reader', email: 'log-reader@example.test', password: 'correct-horse-battery' })
+      .expect(200);
+    const token = sessionToken(signUp.headers['set-cookie']);
+    const cookie = `better-auth.session_token=${encodeURIComponent(token)}`;
+
+    clockBroken = true;
+    const failed = await request(ctx.app)
+      .post('/api/trips')
+      .set('Origin', ORIGIN)
+      .set('Cookie', cookie)
+      .set('Authorization', BEARER)
+      .send({
+        name: 'Glen weekend',
+        startDate: '2027-06-01',
+        endDate: '2027-06-03',
+        timeZone: 'Europe/London',
+        rigSource: { kind: 'preset', presetId: 'caravan-lithium' },
+      });
+    expect(failed.status).toBe(500);
+
+    const text = log.lines.join('');
+    const [tokenId = token] = token.split('.');
+    expect(text).not.toContain(tokenId);
+    expect(text).not.toContain('not-for-the-log');
+    const failures = log.lines.map((line) => JSON.parse(line) as Record<string, unknown>).filter((l) => l.level === 50);
+    expect(failures.length).toBeGreaterThan(0);
+    for (const line of failures) {
+      const req = line.req as { headers: Record<string, string> };
+      expect(req.headers.cookie).toBe(REDACTED);
+      expect(req.headers.authorization).toBe(REDACTED);
+    }
+    const signUpLine = log.lines.find((line) => line.includes('sign-up'));
+    expect(signUpLine).toContain(REDACTED);
+  });
+
+  it('when a logger was made without redaction, then the request serializers still censor the headers', async () => {
+    const log = memoryStream();
+    ctx = createTestApp({ logger: pino({ level: 'info' }, log.stream) });
+    await request(ctx.app).get('/api/health').set('Cookie', 'better-auth.session_token=abc123secret').expect(200);
+    const text = log.lines.join('');
+    expect(text).toContain('/api/health');
+    expect(text).not.toContain('abc123secret');
+  });
+
+  it('when anything logs an object with headers, then the logger censors them', () => {
+    const log = memoryStream();
+    createLogger('info', log.stream).info(
+      { headers: { cookie: 'c1', 'set-cookie': 's1' }, upstream: { headers: { authorization: 'a1' } } },
+      'x',
+    );
+    const line = JSON.parse(log.lines[0] ?? '{}') as {
+      headers: Record<string, string>;
+      upstream: { headers: Record<string, string> };
+    };
+    expect(line.headers).toEqual({ cookie: REDACTED, 'set-cookie': REDACTED });
+    expect(line.upstream.headers.authorization).toBe(REDACTED);
+  });
+
+  it('when headers are censored for a log, then the live request keeps them', () => {
+    const headers = { cookie: 'live', accept: 'json' };
+    const serialized = httpLogSerializers.req({ method: 'GET', headers });
+    expect(serialized.headers).toEqual({ cookie: REDACTED, accept: 'json' });
+    expect(headers.cookie).toBe('live');
+  });
+});
