@@ -35,6 +35,8 @@ const CHECKS: Check[] = [
     open: async (page) => {
       await page.goto(suite.server.url);
       await page.waitForSelector(byTestId('trip-list'));
+      // The list never waits for a budget: a card says it is being worked out, and the figures follow.
+      await page.waitForSelector('[data-testid^="trip-gauge-"]');
     },
   },
   {
