@@ -41,7 +41,12 @@ const IMAGE_URL_MAX = 2048;
 function checkImage(value: unknown): void {
   if (value === undefined || value === null) return;
   if (typeof value !== 'string' || value.length > IMAGE_URL_MAX)
-    refuse('INVALID_IMAGE', 'image', 'Picture', `Give the picture's address as text of at most ${IMAGE_URL_MAX} characters.`);
+    refuse(
+      'INVALID_IMAGE',
+      'image',
+      'Picture',
+      `Give the picture's address as text of at most ${IMAGE_URL_MAX} characters.`,
+    );
 }
 
 /**
