@@ -34,4 +34,14 @@ export function openDatabase(filePath: string): Db {
   return drizzle(sqlite, { schema });
 }
 
+/**
+ * A second, read-only connection to a database another connection keeps (a budget worker's): WAL lets it read
+ * while the server writes.
+ */
+export function openReadOnlyDatabase(filePath: string): Db {
+  const sqlite = new Database(filePath, { readonly: true, fileMustExist: true });
+  sqlite.pragma('busy_timeout = 5000');
+  return drizzle(sqlite, { schema });
+}
+
 export { schema };

@@ -1,13 +1,17 @@
 // Engine benchmark (tinybench): prints medians. Targets are reported, not asserted:
-// 30-day trip, 40 appliances, three sky scenarios < 2 ms; headroom on that trip < 50 ms; 7-day trip < 0.5 ms.
+// 30-day trip, 40 appliances, three sky scenarios < 2 ms; headroom on that trip < 50 ms; 7-day trip < 0.5 ms;
+// the budget of the largest plan the API accepts (what a budget worker does: validate, simulate, serialise) < 250 ms.
 import { cpus, loadavg } from 'node:os';
 import { Bench } from 'tinybench';
+import { computeBudget } from '../server/budget/compute';
 import { findHeadroom, simulateTrip } from '../shared/engine';
+import { largestPlan } from '../tests/factories/largest-plan';
 // The same trips are pinned by the golden test, so the figures measured here are for results known to be unchanged.
 import { benchTrip as trip } from '../tests/shared/golden-inputs';
 
 const month = trip(30, 40);
 const week = trip(7, 15);
+const largest = largestPlan();
 const bench = new Bench({ time: 2000, warmupTime: 500 });
 bench
   .add('simulateTrip: 30 days, 40 appliances, 3 sky scenarios', () => {
@@ -18,6 +22,10 @@ bench
   })
   .add('simulateTrip: 7 days, 15 appliances, 3 sky scenarios', () => {
     simulateTrip(week);
+  })
+  .add('budget of the largest plan the API accepts (LIMITS), as a worker computes it', () => {
+    const outcome = computeBudget(largest);
+    if (outcome.kind !== 'ok') throw new Error(`the largest plan did not compute: ${JSON.stringify(outcome)}`);
   });
 
 // Medians are wall time: on a shared machine they rise with the load, so the load is printed with them.
@@ -29,7 +37,7 @@ const load = (): string =>
 async function main(): Promise<void> {
   console.log(`${cpus().length} CPUs, load average before: ${load()}`);
   await bench.run();
-  const targets = [2, 50, 0.5];
+  const targets = [2, 50, 0.5, 250];
   bench.tasks.forEach((task, i) => {
     const r = task.result;
     const median = r && 'latency' in r ? r.latency.p50 : Number.NaN;

@@ -26,7 +26,8 @@ import { inviteLinksRouter } from './routes/invite-links';
 import { clubInviteLinksRouter } from './routes/club-invite-links';
 import { clubsRouter } from './routes/clubs';
 import { outboxRouter } from './routes/outbox';
-import { createBudgetService } from './budget-service';
+import { createBudgetPool, type BudgetRunner } from './budget/budget-pool';
+import { createBudgetService, type BudgetService } from './budget/budget-service';
 import { INVITES_PER_HOUR } from '../shared/schemas/sharing';
 import type { TrustProxy } from './trust-proxy';
 import { trustedOrigins } from './trusted-origins';
@@ -46,6 +47,8 @@ export type AppConfig = {
   requireEmailVerification?: boolean;
   /** Hides development-only routes (the Outbox). */
   production?: boolean;
+  /** Budgets run in worker threads; one that computes longer than timeLimitMs answers "too large to compute". */
+  budget?: { timeLimitMs?: number; threads?: number };
   /** Invite e-mails one person may send per hour (trip and club together); tests lower it. */
   invitesPerHour?: number;
 };
@@ -58,11 +61,21 @@ export type AppDeps = {
   logger?: Logger;
   /** The local SMTP fake's captured mail, shown by the development Outbox. */
   outbox?: { messages: () => CapturedMail[] };
+  /** Runs budgets; by default a worker pool built from config.budget. */
+  budgetRunner?: BudgetRunner;
 };
 
-export type TrailtallyApp = Express & { locals: { auth: Auth } };
+/** `budgets.close()` stops the budget workers: call it when the app is done with. */
+export type TrailtallyApp = Express & { locals: { auth: Auth; budgets: BudgetService } };
 
 const JSON_BODY_LIMIT = '100kb';
+
+/** Budget workers open the database file themselves: a database only in this thread's memory cannot be shared. */
+function databaseFileOf(db: Db): string {
+  if (db.$client.memory)
+    throw new Error('Budgets are computed in worker threads that read the database file: open a file.');
+  return db.$client.name;
+}
 
 /** Builds the whole HTTP app without listening, so tests can drive it through supertest. */
 export function createApp(deps: AppDeps): TrailtallyApp {
@@ -111,7 +124,17 @@ export function createApp(deps: AppDeps): TrailtallyApp {
 
   app.use(express.json({ limit: JSON_BODY_LIMIT }));
   app.use('/api/health', healthRouter({ db, version: packageJson.version }));
-  const budgets = createBudgetService(db, (err, tripId) => deps.logger?.error({ err, tripId }, 'budget failed'));
+  const budgetRunner =
+    deps.budgetRunner ??
+    createBudgetPool({
+      databasePath: databaseFileOf(db),
+      ...(config.budget?.timeLimitMs ? { timeLimitMs: config.budget.timeLimitMs } : {}),
+      ...(config.budget?.threads ? { threads: config.budget.threads } : {}),
+    });
+  const budgets = createBudgetService(db, budgetRunner, (err, tripId) =>
+    deps.logger?.error({ err, tripId }, 'budget failed'),
+  );
+  app.locals.budgets = budgets;
   const signedIn = requireSession(auth);
   const invites = {
     mailer: deps.mailer,

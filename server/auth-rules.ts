@@ -31,6 +31,24 @@ function checkPassword(value: unknown, field: string, owner: PasswordOwner): voi
 
 const text = (value: unknown) => (typeof value === 'string' ? value : undefined);
 
+/** Longest picture address taken: far past any real one, short of a body that fills the user row. */
+const IMAGE_URL_MAX = 2048;
+
+/**
+ * better-auth hands `image` to the database as it comes: a list there becomes thousands of SQL parameters and a
+ * failed request. It must be text (or null, to clear it).
+ */
+function checkImage(value: unknown): void {
+  if (value === undefined || value === null) return;
+  if (typeof value !== 'string' || value.length > IMAGE_URL_MAX)
+    refuse(
+      'INVALID_IMAGE',
+      'image',
+      'Picture',
+      `Give the picture's address as text of at most ${IMAGE_URL_MAX} characters.`,
+    );
+}
+
 /**
  * Rules better-auth does not have, run before its endpoints: the user's name is trimmed visible text of at
  * most 80 characters; a new password is not the e-mail address nor a common or guessable one; and a password
@@ -40,11 +58,13 @@ export const authRules = createAuthMiddleware(async (ctx) => {
   const body: Body = isRecord(ctx.body) ? ctx.body : {};
   switch (ctx.path) {
     case '/sign-up/email': {
+      checkImage(body.image);
       const name = checkedName(body.name);
       checkPassword(body.password, 'password', { email: text(body.email), name });
       return { context: { body: { ...body, name } } };
     }
     case '/update-user': {
+      checkImage(body.image);
       if (body.name === undefined) return;
       return { context: { body: { ...body, name: checkedName(body.name) } } };
     }

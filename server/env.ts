@@ -22,6 +22,10 @@ const envSchema = z.object({
   SMTP_URL: z.url().optional(),
   /** Port for the local SMTP fake; 0 picks a free one. */
   SMTP_FAKE_PORT: z.coerce.number().int().min(0).max(65535).default(0),
+  /** Longest one budget may compute before it is stopped and answered "too large to compute"; unset, 5 s. */
+  BUDGET_TIME_LIMIT_MS: z.coerce.number().int().min(100).max(600_000).optional(),
+  /** Worker threads that compute budgets; unset, one fewer than the cores (1 to 4). */
+  BUDGET_WORKERS: z.coerce.number().int().min(1).max(64).optional(),
   /** Whether sign-in waits until the e-mail address is verified. Default: on in production, off otherwise. */
   REQUIRE_EMAIL_VERIFICATION: z.enum(['true', 'false']).optional(),
   /** The reverse proxies whose X-Forwarded-For is believed (see server/trust-proxy.ts). Unset: none. */

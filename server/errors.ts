@@ -9,6 +9,9 @@ export type ErrorCode =
   | 'conflict'
   | 'unprocessable'
   | 'payload_too_large'
+  | 'limit_reached'
+  | 'budget_too_large'
+  | 'busy'
   | 'rate_limited'
   | 'invite_invalid'
   | 'invite_expired'
@@ -51,3 +54,7 @@ export const conflict = (current: unknown) =>
 
 export const unprocessable = (field: string, message: string) =>
   new HttpError(422, 'unprocessable', message, { [field]: [message] });
+
+/** One more would pass a documented maximum (LIMITS): 400, naming the field and the limit. */
+export const limitReached = (field: string, message: string) =>
+  new HttpError(400, 'limit_reached', message, { [field]: [message] });

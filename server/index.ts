@@ -38,9 +38,12 @@ export async function main(): Promise<void> {
       webDir: env.WEB_DIR,
       requireEmailVerification: env.REQUIRE_EMAIL_VERIFICATION,
       production: env.NODE_ENV === 'production',
+      budget: { timeLimitMs: env.BUDGET_TIME_LIMIT_MS, threads: env.BUDGET_WORKERS },
       trustProxy: env.TRUST_PROXY,
     },
   });
+  // Budget workers load the engine once at start, so the first budget asked for does not wait for them.
+  app.locals.budgets.warmUp();
 
   if (env.NODE_ENV !== 'production' && env.SEED_DEMO === 'auto' && isDatabaseEmpty(db)) {
     await seedDemo(db, app.locals.auth, new Date());
@@ -60,6 +63,7 @@ export async function main(): Promise<void> {
     console.log(`${signal} received, closing…`);
     server.close(() => {
       void localSmtp?.close();
+      void app.locals.budgets.close();
       db.$client.close();
       process.exit(0);
     });

@@ -1,5 +1,9 @@
 // Rules that tie a stop to its trip: checked by the API (422) and usable by forms before saving.
 import { DateTime } from 'luxon';
+import type { Schedule } from './schemas/appliance';
+import type { RoutineWindow } from './schemas/common';
+import { tripDayCount } from './schemas/limits';
+import type { GeneratorMode } from './schemas/rig';
 import type { Stop } from './schemas/trip';
 
 export type RuleBreach = { field: string; message: string };
@@ -44,4 +48,47 @@ export function checkTripDatesCoverStops(trip: TripDates, stops: Interval[]): Ru
       };
   }
   return null;
+}
+
+/** Windows that name trip days must name days of this trip: 0 is its first day, its last is one less than its length. */
+export function checkWindowDaysInTrip(
+  trip: Pick<TripDates, 'startDate' | 'endDate'>,
+  windows: readonly RoutineWindow[],
+  field: string,
+): RuleBreach | null {
+  const days = tripDayCount(trip.startDate, trip.endDate);
+  for (const [k, window] of windows.entries()) {
+    if (window.days.kind !== 'trip-days') continue;
+    const outside = window.days.dayIndexes.find((day) => day >= days);
+    if (outside !== undefined)
+      return {
+        field: `${field}.${k}.days.dayIndexes`,
+        message: `Day ${outside + 1} is past the trip's last day: this trip has ${days} ${days === 1 ? 'day' : 'days'} (numbered from 0).`,
+      };
+  }
+  return null;
+}
+
+/** The windows of an appliance's schedule (a routine's, or a thermostat's active windows). */
+export function windowsOfSchedule(schedule: Schedule): { windows: readonly RoutineWindow[]; key: string } {
+  if (schedule.kind === 'routine') return { windows: schedule.windows, key: 'windows' };
+  if (schedule.kind === 'thermostat') return { windows: schedule.activeWindows ?? [], key: 'activeWindows' };
+  return { windows: [], key: 'windows' };
+}
+
+export function checkScheduleInTrip(
+  trip: Pick<TripDates, 'startDate' | 'endDate'>,
+  schedule: Schedule,
+  field: string,
+): RuleBreach | null {
+  const { windows, key } = windowsOfSchedule(schedule);
+  return checkWindowDaysInTrip(trip, windows, `${field}.${key}`);
+}
+
+export function checkGeneratorInTrip(
+  trip: Pick<TripDates, 'startDate' | 'endDate'>,
+  mode: GeneratorMode | undefined,
+  field: string,
+): RuleBreach | null {
+  return mode?.kind === 'routine' ? checkWindowDaysInTrip(trip, mode.windows, `${field}.windows`) : null;
 }

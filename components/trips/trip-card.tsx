@@ -16,6 +16,7 @@ export function TripCard({ trip, canDelete, onDuplicate, onDelete, busy }: Props
   const nights = countNights(trip.startDate, trip.endDate);
   const dates = formatTripDates(trip.startDate, trip.endDate);
   const flags = trip.flagCount ?? null;
+  const computing = trip.budgetStatus === 'computing';
   return (
     <Card testID={`trip-card-${trip.id}`}>
       <Link href={{ pathname: '/trips/[tripId]', params: { tripId: trip.id } }} asChild>
@@ -42,10 +43,15 @@ export function TripCard({ trip, canDelete, onDuplicate, onDelete, busy }: Props
             reservePct={trip.reservePct ?? null}
           />
         ) : (
-          <Text variant="caption" color="inkSoft" style={styles.noBudget}>
-            No budget yet
+          <Text variant="caption" color="inkSoft" style={styles.noBudget} testID={`trip-no-budget-${trip.id}`}>
+            {computing ? 'Working out the budget…' : 'No budget yet'}
           </Text>
         )}
+        {computing && trip.lowestSocPct != null ? (
+          <Text variant="caption" color="inkSoft" testID={`trip-budget-updating-${trip.id}`}>
+            Updating…
+          </Text>
+        ) : null}
         {flags !== null ? (
           <View style={[styles.flags, flags > 0 ? styles.flagsOn : null]} testID={`trip-flags-${trip.id}`}>
             <Text variant="label" color={flags > 0 ? 'ember' : 'pine'}>

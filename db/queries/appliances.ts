@@ -1,4 +1,4 @@
-import { and, asc, eq, max } from 'drizzle-orm';
+import { and, asc, count, eq, max } from 'drizzle-orm';
 import type { ApplianceRecord } from '@/shared/schemas/api';
 import type { ApplianceFields, Schedule } from '@/shared/schemas/appliance';
 import type { DbExecutor } from '../client';
@@ -30,6 +30,10 @@ function writeWindows(db: DbExecutor, applianceId: string, schedule: Schedule): 
       .values({ applianceId, position, ...window })
       .run(),
   );
+}
+
+export function countAppliances(db: DbExecutor, tripId: string): number {
+  return db.select({ n: count() }).from(appliances).where(eq(appliances.tripId, tripId)).get()?.n ?? 0;
 }
 
 export function insertAppliance(

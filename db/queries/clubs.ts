@@ -27,6 +27,17 @@ export function listClubsForUser(db: DbExecutor, userId: string) {
     }));
 }
 
+/** Clubs the user organises (LIMITS.clubsPerUser bounds them). */
+export function countOrganisedClubs(db: DbExecutor, userId: string): number {
+  return (
+    db
+      .select({ n: count() })
+      .from(clubMembers)
+      .where(and(eq(clubMembers.userId, userId), eq(clubMembers.role, 'organiser')))
+      .get()?.n ?? 0
+  );
+}
+
 function countMembers(db: DbExecutor, clubId: string): number {
   return db.select({ n: count() }).from(clubMembers).where(eq(clubMembers.clubId, clubId)).get()?.n ?? 0;
 }

@@ -6,6 +6,7 @@ import type { RoutineWindow } from '@/shared/schemas/common';
 import { emptyDcWiring } from '@/shared/schemas/dc-wiring';
 import type { Rig } from '@/shared/schemas/rig';
 import type { Drive, Stop } from '@/shared/schemas/trip';
+import { windowsOfSchedule } from '@/shared/trip-rules';
 import type { ApplianceRow, RoutineWindowRow } from '../schema/appliances';
 import type { DriveRow } from '../schema/drives';
 import type { RigRow } from '../schema/rigs';
@@ -141,10 +142,8 @@ export function scheduleToColumns(schedule: Schedule) {
 }
 
 /** The windows a schedule stores as rows: a routine's windows, or a thermostat's active windows. */
-export function scheduleWindows(schedule: Schedule): RoutineWindow[] {
-  if (schedule.kind === 'routine') return schedule.windows;
-  if (schedule.kind === 'thermostat') return schedule.activeWindows ?? [];
-  return [];
+export function scheduleWindows(schedule: Schedule): readonly RoutineWindow[] {
+  return windowsOfSchedule(schedule).windows;
 }
 
 function windowFromRow(row: RoutineWindowRow): RoutineWindow {

@@ -1,5 +1,6 @@
 import type { NextFunction, Request, Response } from 'express';
 import { ZodError } from 'zod';
+import { isFieldRuleIssue } from '@/shared/schemas/limits';
 import { HttpError } from '../errors';
 
 type BodyParserError = Error & { type?: string; status?: number };
@@ -19,8 +20,8 @@ export function toHttpError(err: unknown): HttpError {
   if (err instanceof ZodError) {
     // Shape errors (types, ranges, missing fields) are 400; when every issue comes from a rule
     // between fields (departure after arrival, drives that fit between stops) the request was
-    // well-formed but makes no sense: 422.
-    const semantic = err.issues.every((issue) => issue.code === 'custom');
+    // well-formed but makes no sense: 422. Refinements marked as rules about one field (sizes, repeats) stay 400.
+    const semantic = err.issues.every((issue) => issue.code === 'custom' && !isFieldRuleIssue(issue));
     return semantic
       ? new HttpError(422, 'unprocessable', 'Some values do not fit together.', fieldsOf(err))
       : new HttpError(400, 'validation_failed', 'Some fields need attention.', fieldsOf(err));

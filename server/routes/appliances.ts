@@ -1,13 +1,22 @@
 import { Router } from 'express';
 import type { Db, DbExecutor } from '@/db/client';
-import { deleteAppliance, findAppliance, insertAppliance, updateAppliance } from '@/db/queries/appliances';
-import { findMembership, logActivity, touchTrip } from '@/db/queries/trips';
+import {
+  countAppliances,
+  deleteAppliance,
+  findAppliance,
+  insertAppliance,
+  updateAppliance,
+} from '@/db/queries/appliances';
+import { findMembership, findTrip, logActivity, touchTrip } from '@/db/queries/trips';
+import type { Schedule } from '@/shared/schemas/appliance';
+import { LIMITS } from '@/shared/schemas/limits';
+import { checkScheduleInTrip } from '@/shared/trip-rules';
 import {
   createApplianceRequestSchema,
   updateApplianceRequestSchema,
   updateScheduleRequestSchema,
 } from '@/shared/schemas/api';
-import { notFound, unprocessable } from '../errors';
+import { limitReached, notFound, unprocessable } from '../errors';
 import { idParam, requirePermission, tripAccess } from '../middleware/trip-access';
 import { unwrapWrite } from './write-result';
 
@@ -15,6 +24,14 @@ function assertCaretakerIsMember(db: DbExecutor, tripId: string, caretakerUserId
   if (caretakerUserId != null && !findMembership(db, tripId, caretakerUserId)) {
     throw unprocessable('caretakerUserId', 'The person looking after an appliance must be a member of the trip.');
   }
+}
+
+/** Trip days a routine names must be days of this trip. */
+function assertScheduleInTrip(db: DbExecutor, tripId: string, schedule: Schedule, field: string): void {
+  const trip = findTrip(db, tripId);
+  if (!trip) throw notFound('That trip was not found.');
+  const breach = checkScheduleInTrip(trip, schedule, field);
+  if (breach) throw unprocessable(breach.field, breach.message);
 }
 
 export function appliancesRouter({ db, now }: { db: Db; now: () => Date }): Router {
@@ -25,6 +42,12 @@ export function appliancesRouter({ db, now }: { db: Db; now: () => Date }): Rout
     const { tripId, userId } = tripAccess(res);
     const { appliance, caretakerUserId } = createApplianceRequestSchema.parse(req.body);
     const record = db.transaction((tx) => {
+      if (countAppliances(tx, tripId) >= LIMITS.appliancesPerTrip)
+        throw limitReached(
+          'appliances',
+          `A trip holds at most ${LIMITS.appliancesPerTrip} appliances. Remove one, or combine similar ones with a quantity.`,
+        );
+      assertScheduleInTrip(tx, tripId, appliance.schedule, 'appliance.schedule');
       assertCaretakerIsMember(tx, tripId, caretakerUserId);
       const created = insertAppliance(tx, tripId, appliance, caretakerUserId);
       touchTrip(tx, tripId, now());
@@ -39,6 +62,7 @@ export function appliancesRouter({ db, now }: { db: Db; now: () => Date }): Rout
     const applianceId = idParam.parse(req.params.applianceId);
     const { version, appliance, caretakerUserId } = updateApplianceRequestSchema.parse(req.body);
     const record = db.transaction((tx) => {
+      assertScheduleInTrip(tx, tripId, appliance.schedule, 'appliance.schedule');
       assertCaretakerIsMember(tx, tripId, caretakerUserId);
       const result = updateAppliance(tx, tripId, applianceId, version, { fields: appliance, caretakerUserId });
       const updated = unwrapWrite(result, (row) => row, 'appliance');
@@ -54,6 +78,7 @@ export function appliancesRouter({ db, now }: { db: Db; now: () => Date }): Rout
     const applianceId = idParam.parse(req.params.applianceId);
     const { version, schedule } = updateScheduleRequestSchema.parse(req.body);
     const record = db.transaction((tx) => {
+      assertScheduleInTrip(tx, tripId, schedule, 'schedule');
       const updated = unwrapWrite(
         updateAppliance(tx, tripId, applianceId, version, { schedule }),
         (row) => row,

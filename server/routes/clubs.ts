@@ -3,6 +3,7 @@ import { Router } from 'express';
 import type { Db } from '@/db/client';
 import {
   countCopies,
+  countOrganisedClubs,
   findClubRole,
   findMyCopy,
   findPendingClubInvite,
@@ -25,7 +26,8 @@ import {
   type ClubInviteReport,
 } from '@/shared/schemas/sharing';
 import { parseRecipients } from '../address-list';
-import { HttpError, notFound } from '../errors';
+import { LIMITS } from '@/shared/schemas/limits';
+import { HttpError, limitReached, notFound } from '../errors';
 import { claimInviteMailings, deliverAll, mailFailed } from '../invite-mail';
 import { INVITE_LIFETIME_MS, isoDay, newInviteToken } from '../invite-tokens';
 import { MailSendError, type Mailer } from '../mail/mailer';
@@ -75,6 +77,8 @@ export function clubsRouter({ db, now, mailer, publicUrl, invitesPerHour: perHou
     const { name } = createClubRequestSchema.parse(req.body);
     const id = crypto.randomUUID();
     db.transaction((tx) => {
+      if (countOrganisedClubs(tx, me.id) >= LIMITS.clubsPerUser)
+        throw limitReached('clubs', `You can organise at most ${LIMITS.clubsPerUser} clubs.`);
       tx.insert(clubs).values({ id, name, createdBy: me.id, createdAt: now() }).run();
       tx.insert(clubMembers).values({ clubId: id, userId: me.id, role: 'organiser', joinedAt: now() }).run();
     });

@@ -7,7 +7,8 @@ import { createStopRequestSchema, reorderStopsRequestSchema, updateStopRequestSc
 import type { Stop } from '@/shared/schemas/trip';
 import { checkStopFits } from '@/shared/trip-rules';
 import type { DbExecutor } from '@/db/client';
-import { conflict, HttpError, notFound, unprocessable } from '../errors';
+import { LIMITS } from '@/shared/schemas/limits';
+import { conflict, HttpError, limitReached, notFound, unprocessable } from '../errors';
 import { idParam, requirePermission, tripAccess } from '../middleware/trip-access';
 import { unwrapWrite } from './write-result';
 
@@ -29,6 +30,8 @@ export function stopsRouter({ db, now }: Deps): Router {
     const { tripId, userId } = tripAccess(res);
     const { stop, notes } = createStopRequestSchema.parse(req.body);
     const row = db.transaction((tx) => {
+      if (listStopRows(tx, tripId).length >= LIMITS.stopsPerTrip)
+        throw limitReached('stops', `A trip holds at most ${LIMITS.stopsPerTrip} stops. Remove one first.`);
       assertFits(tx, tripId, stop);
       const inserted = insertStop(tx, tripId, stop, notes);
       touchTrip(tx, tripId, now(), { routeChanged: true });

@@ -2,8 +2,9 @@ import { Router } from 'express';
 import type { Db } from '@/db/client';
 import { listActivity } from '@/db/queries/trips';
 import packageJson from '@/package.json';
-import type { BudgetService } from '../budget-service';
-import { notFound } from '../errors';
+import { BudgetBusyError } from '../budget/budget-pool';
+import type { BudgetAnswer, BudgetService } from '../budget/budget-service';
+import { HttpError, notFound } from '../errors';
 import { tripAccess } from '../middleware/trip-access';
 import { appliancesRouter } from './appliances';
 import { drivesRouter } from './drives';
@@ -37,9 +38,22 @@ export function tripItemsRouter(deps: TripItemsDeps): Router {
   router.use('/invites', tripInvitesRouter(deps));
   router.use('/shares', tripSharesRouter(deps));
 
-  router.get('/budget', (req, res) => {
-    const answer = deps.budgets.forTrip(tripAccess(res).tripId);
+  router.get('/budget', async (req, res) => {
+    let answer: BudgetAnswer | undefined;
+    try {
+      answer = await deps.budgets.forTrip(tripAccess(res).tripId);
+    } catch (error) {
+      if (!(error instanceof BudgetBusyError)) throw error;
+      res.setHeader('Retry-After', '5');
+      throw new HttpError(503, 'busy', 'Many budgets are being computed just now. Please try again in a few seconds.');
+    }
     if (!answer) throw notFound('That trip was not found.');
+    if (answer.kind === 'too-large')
+      throw new HttpError(
+        422,
+        'budget_too_large',
+        'This plan is too large to compute in time. Remove some stops, appliances or routine windows, then try again.',
+      );
     // The revision changes with every edit to the trip; the app version changes when the engine
     // may compute differently, so a browser never keeps a budget from an older release.
     const etag = `"budget-${packageJson.version}-${answer.revision}"`;
@@ -49,7 +63,12 @@ export function tripItemsRouter(deps: TripItemsDeps): Router {
       res.status(304).end();
       return;
     }
-    res.json({ version: answer.revision, result: answer.result, ...(answer.reason ? { reason: answer.reason } : {}) });
+    if (answer.kind === 'none') {
+      res.json({ version: answer.revision, result: null, reason: answer.reason });
+      return;
+    }
+    // The worker handed the result over as JSON already: it is sent as it is, never parsed or walked here.
+    res.type('json').send(`{"version":${answer.revision},"result":${answer.resultJson}}`);
   });
 
   router.get('/activity', (_req, res) => {

@@ -2,7 +2,8 @@ import { Router } from 'express';
 import type { Db } from '@/db/client';
 import { rigFromRow, rigRecord } from '@/db/queries/mappers';
 import { findSavedRig, updateRigRow } from '@/db/queries/rigs';
-import { findTripRig, insertRig, logActivity, touchTrip } from '@/db/queries/trips';
+import { findTrip, findTripRig, insertRig, logActivity, touchTrip } from '@/db/queries/trips';
+import { checkGeneratorInTrip } from '@/shared/trip-rules';
 import { replaceTripRigRequestSchema, saveTripRigRequestSchema, updateRigRequestSchema } from '@/shared/schemas/api';
 import { notFound, unprocessable } from '../errors';
 import { requirePermission, tripAccess } from '../middleware/trip-access';
@@ -15,6 +16,10 @@ export function tripRigRouter({ db, now }: { db: Db; now: () => Date }): Router 
     const { tripId, userId } = tripAccess(res);
     const { version, rig } = updateRigRequestSchema.parse(req.body);
     const record = db.transaction((tx) => {
+      const trip = findTrip(tx, tripId);
+      if (!trip) throw notFound('That trip was not found.');
+      const breach = checkGeneratorInTrip(trip, rig.generator?.mode, 'rig.generator.mode');
+      if (breach) throw unprocessable(breach.field, breach.message);
       const updated = unwrapWrite(updateRigRow(tx, findTripRig(tx, tripId), version, rig, now()), rigRecord, 'rig');
       touchTrip(tx, tripId, now());
       logActivity(tx, { tripId, userId, summary: `changed the rig ${rig.name}`, at: now() });

@@ -21,7 +21,8 @@ import {
 } from '@/db/queries/trips';
 import { trips } from '@/db/schema/trips';
 import { eq } from 'drizzle-orm';
-import { conflict, notFound, unprocessable } from '../errors';
+import { LIMITS, tripDayCount } from '@/shared/schemas/limits';
+import { conflict, limitReached, notFound, unprocessable } from '../errors';
 import { currentUser } from '../middleware/require-session';
 import { loadTripAccess, requirePermission, tripAccess } from '../middleware/trip-access';
 import { duplicateTrip } from '../trip-copy';
@@ -33,15 +34,17 @@ export function tripsRouter(deps: TripItemsDeps): Router {
 
   router.get('/', (_req, res) => {
     const user = currentUser(res);
+    // Cached figures only: a budget that is out of date is started in a worker, and the list says "computing".
     const list = listTripsForMember(db, user.id).map(({ trip, role }) => {
       const rig = findTripRig(db, trip.id);
-      const budget = budgets.forTrip(trip.id)?.result;
+      const { figures, status } = budgets.glance(trip.id, trip.revision);
       return toTripSummary(trip, {
         role,
         rigName: rig?.name ?? null,
-        lowestSocPct: budget ? budget.headline.lowestSocPct : null,
-        reservePct: budget ? budget.headline.reservePct : null,
-        flagCount: budget ? budget.flags.length : null,
+        lowestSocPct: figures?.lowestSocPct ?? null,
+        reservePct: figures?.reservePct ?? null,
+        flagCount: figures?.flagCount ?? null,
+        budgetStatus: status,
       });
     });
     res.json({ trips: list });
@@ -105,6 +108,8 @@ export function tripsRouter(deps: TripItemsDeps): Router {
         endDate: changes.endDate ?? current.endDate,
         timeZone: changes.timeZone ?? current.timeZone,
       };
+      if (next.endDate >= next.startDate && tripDayCount(next.startDate, next.endDate) > LIMITS.tripDays)
+        throw limitReached(changes.endDate ? 'endDate' : 'startDate', `A trip lasts at most ${LIMITS.tripDays} days.`);
       const breach = checkTripDatesCoverStops(next, listStopRows(tx, tripId));
       if (breach) throw unprocessable(breach.field, breach.message);
       tx.update(trips).set(changes).where(eq(trips.id, tripId)).run();

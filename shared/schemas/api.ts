@@ -9,6 +9,7 @@ import { driveSchema, stopSchema } from './trip';
 import { isoDateSchema, tripSummarySchema } from './trip-summary';
 import { timeZoneSchema } from './common';
 import { basedOnSchema } from './sharing';
+import { fieldRule, LIMITS, tripDayCount } from './limits';
 
 /** Every update names the version it was based on; a stale one gets 409 with the current record. */
 export const versionSchema = z.number().int().min(1);
@@ -85,6 +86,11 @@ export const createTripRequestSchema = tripFieldsSchema
   .refine((t) => t.endDate >= t.startDate, {
     message: 'The trip must end on or after its first day.',
     path: ['endDate'],
+  })
+  .refine((t) => t.endDate < t.startDate || tripDayCount(t.startDate, t.endDate) <= LIMITS.tripDays, {
+    message: `A trip lasts at most ${LIMITS.tripDays} days.`,
+    path: ['endDate'],
+    params: fieldRule(LIMITS.tripDays),
   });
 export type CreateTripRequest = z.input<typeof createTripRequestSchema>;
 
@@ -103,20 +109,20 @@ export const updateStopRequestSchema = z
   .object({ version: versionSchema, stop: stopSchema, notes: z.string().max(4000).optional() })
   .strict();
 export const reorderStopsRequestSchema = z
-  .object({ tripVersion: versionSchema, stopIds: z.array(idSchema).min(1).max(60) })
+  .object({ tripVersion: versionSchema, stopIds: z.array(idSchema).min(1).max(LIMITS.stopsPerTrip) })
   .strict();
 
 export const updateDriveRequestSchema = z.object({ version: versionSchema, drive: driveSchema }).strict();
 
 export const createApplianceRequestSchema = z
-  .object({ appliance: applianceFieldsSchema, caretakerUserId: z.string().nullable().default(null) })
+  .object({ appliance: applianceFieldsSchema, caretakerUserId: idSchema.nullable().default(null) })
   .strict();
 /** caretakerUserId left out: kept as it is; null clears it. */
 export const updateApplianceRequestSchema = z
   .object({
     version: versionSchema,
     appliance: applianceFieldsSchema,
-    caretakerUserId: z.string().nullable().optional(),
+    caretakerUserId: idSchema.nullable().optional(),
   })
   .strict();
 export const updateScheduleRequestSchema = z.object({ version: versionSchema, schedule: scheduleSchema }).strict();

@@ -1,14 +1,14 @@
 // Appliance contract: a load with its watts and when it runs.
 import { z } from 'zod';
 import { nameText } from './text';
-import { fractionSchema, routineWindowSchema } from './common';
+import { fractionSchema, routineWindowsSchema } from './common';
 
 export const circuitSchema = z.enum(['ac', 'dc', 'fuel']);
 export type Circuit = z.infer<typeof circuitSchema>;
 
 export const scheduleSchema = z.discriminatedUnion('kind', [
   z.object({ kind: z.literal('always') }),
-  z.object({ kind: z.literal('routine'), windows: z.array(routineWindowSchema).min(1).max(24) }),
+  z.object({ kind: z.literal('routine'), windows: routineWindowsSchema.min(1) }),
   z.object({
     kind: z.literal('thermostat'),
     /** cooling runs above the set point, heating below it. */
@@ -17,7 +17,7 @@ export const scheduleSchema = z.discriminatedUnion('kind', [
     /** Degrees past the set point at which the unit runs flat out. */
     fullDutyDeltaC: z.number().positive().max(40).default(12),
     /** When given, the thermostat is only active inside these windows (e.g. while someone is aboard). */
-    activeWindows: z.array(routineWindowSchema).max(24).optional(),
+    activeWindows: routineWindowsSchema.optional(),
   }),
 ]);
 export type Schedule = z.infer<typeof scheduleSchema>;

@@ -3,13 +3,17 @@ import { z } from 'zod';
 import { applianceSchema } from './appliance';
 import { optionsSchema } from './options';
 import { rigSchema } from './rig';
+import { LIMITS } from './limits';
 import { tripSchema } from './trip';
 
 export const engineInputSchema = z
   .object({
     trip: tripSchema,
     rig: rigSchema,
-    appliances: z.array(applianceSchema).max(200).default([]),
+    appliances: z
+      .array(applianceSchema)
+      .max(LIMITS.appliancesPerTrip, { error: `A trip has at most ${LIMITS.appliancesPerTrip} appliances.` })
+      .default([]),
     options: optionsSchema.default(optionsSchema.parse({})),
   })
   .superRefine((input, ctx) => {

@@ -4,5 +4,6 @@ export * from './rig';
 export * from './appliance';
 export * from './options';
 export * from './engine-input';
+export * from './limits';
 export * from './text';
 export * from './dc-wiring';

@@ -1,8 +1,9 @@
 // Rig contract: the power system a trip runs on.
 import { z } from 'zod';
 import { nameText } from './text';
-import { fractionSchema, percentSchema, positiveSchema, routineWindowSchema } from './common';
+import { fractionSchema, percentSchema, positiveSchema, routineWindowsSchema } from './common';
 import { dcWiringSchema, emptyDcWiring } from './dc-wiring';
+import { LIMITS } from './limits';
 
 export const chemistrySchema = z.enum(['lifepo4', 'agm', 'flooded']);
 export type Chemistry = z.infer<typeof chemistrySchema>;
@@ -79,7 +80,7 @@ export const generatorModeSchema = z.discriminatedUnion('kind', [
     startBelowSocPct: percentSchema.default(40),
     stopAboveSocPct: percentSchema.default(90),
   }),
-  z.object({ kind: z.literal('routine'), windows: z.array(routineWindowSchema).min(1) }),
+  z.object({ kind: z.literal('routine'), windows: routineWindowsSchema.min(1) }),
   z.object({ kind: z.literal('off') }),
 ]);
 export type GeneratorMode = z.infer<typeof generatorModeSchema>;
@@ -115,13 +116,19 @@ export const rigSchema = z
   .object({
     name: nameText(120, { empty: 'Give the rig a name.' }),
     battery: batterySchema,
-    solarArrays: z.array(solarArraySchema).max(8).default([]),
+    solarArrays: z
+      .array(solarArraySchema)
+      .max(LIMITS.solarArraysPerRig, { error: `A rig has at most ${LIMITS.solarArraysPerRig} solar arrays.` })
+      .default([]),
     controller: controllerSchema.nullable().default(null),
     inverter: inverterSchema.nullable().default(null),
     shoreCharger: shoreChargerSchema.nullable().default(null),
     vehicleCharger: vehicleChargerSchema.nullable().default(null),
     generator: generatorSchema.nullable().default(null),
-    propaneTanks: z.array(propaneTankSchema).max(8).default([]),
+    propaneTanks: z
+      .array(propaneTankSchema)
+      .max(LIMITS.propaneTanksPerRig, { error: `A rig has at most ${LIMITS.propaneTanksPerRig} cylinders.` })
+      .default([]),
     /** The DC runs for the cable check; none stored, the check suggests runs from the rig's parts. */
     dcWiring: dcWiringSchema.default(emptyDcWiring),
   })

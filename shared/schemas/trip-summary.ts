@@ -18,6 +18,11 @@ export const tripSummarySchema = z.object({
   lowestSocPct: z.number().nullable().optional(),
   reservePct: z.number().nullable().optional(),
   flagCount: z.number().int().nullable().optional(),
+  /**
+   * How current the budget figures are: `current`; `computing` (none yet, or the last ones, of an earlier version
+   * of the plan, while the new budget is computed); `unavailable` (no stops yet, or a plan too large to compute).
+   */
+  budgetStatus: z.enum(['current', 'computing', 'unavailable']).optional(),
 });
 
 export type TripSummary = z.infer<typeof tripSummarySchema>;

@@ -2,6 +2,7 @@
 import { z } from 'zod';
 import { nameText } from './text';
 import { isoInstantSchema, localHourSchema, nonNegativeSchema, fractionSchema, timeZoneSchema } from './common';
+import { LIMITS, fieldRule } from './limits';
 
 export const sitePresetSchema = z.enum(['open', 'light-cover', 'partial-shade', 'deep-forest']);
 export type SitePreset = z.infer<typeof sitePresetSchema>;
@@ -12,7 +13,10 @@ export type SkyOutlook = z.infer<typeof skyOutlookSchema>;
 /** Custom horizon: obstruction elevation per compass sector, sectors clockwise from north (e.g. 8 or 16). */
 export const customExposureSchema = z.object({
   kind: z.literal('custom'),
-  horizonDeg: z.array(z.number().min(0).max(90)).min(4).max(36),
+  horizonDeg: z
+    .array(z.number().min(0).max(90))
+    .min(4)
+    .max(LIMITS.horizonSectors, { error: `Use at most ${LIMITS.horizonSectors} compass sectors.` }),
   /** Share of beam light that passes through the obstruction (0 = solid, 1 = nothing there). */
   canopyTransmittance: fractionSchema.default(0),
   /** Share of the sky dome seen by a flat panel; computed from the horizon when left out. */
@@ -65,14 +69,22 @@ export const driveSchema = z.object({
 });
 export type Drive = z.infer<typeof driveSchema>;
 
-export const MAX_TRIP_DAYS = 120;
+export const MAX_TRIP_DAYS = LIMITS.tripDays;
+/** A trip of MAX_TRIP_DAYS calendar days spans one hour more when the clocks go back inside it. */
+const MAX_TRIP_HOURS = MAX_TRIP_DAYS * 24 + 1;
 
 export const tripSchema = z
   .object({
     name: nameText(120, { empty: 'Give the trip a name.' }),
-    stops: z.array(stopSchema).min(1).max(60),
+    stops: z
+      .array(stopSchema)
+      .min(1)
+      .max(LIMITS.stopsPerTrip, { error: `A trip has at most ${LIMITS.stopsPerTrip} stops.` }),
     /** drives[i] goes from stops[i] to stops[i + 1]. */
-    drives: z.array(driveSchema).default([]),
+    drives: z
+      .array(driveSchema)
+      .max(LIMITS.stopsPerTrip - 1)
+      .default([]),
   })
   .superRefine((trip, ctx) => {
     if (trip.drives.length !== trip.stops.length - 1) {
@@ -104,9 +116,14 @@ export const tripSchema = z
     const first = trip.stops[0];
     const last = trip.stops[trip.stops.length - 1];
     if (first && last) {
-      const days = (Date.parse(last.departAt) - Date.parse(first.arriveAt)) / 86_400_000;
-      if (days > MAX_TRIP_DAYS)
-        ctx.addIssue({ code: 'custom', path: ['stops'], message: `A trip may last at most ${MAX_TRIP_DAYS} days` });
+      const hours = (Date.parse(last.departAt) - Date.parse(first.arriveAt)) / 3_600_000;
+      if (hours > MAX_TRIP_HOURS)
+        ctx.addIssue({
+          code: 'custom',
+          path: ['stops'],
+          message: `A trip may last at most ${MAX_TRIP_DAYS} days`,
+          params: fieldRule(MAX_TRIP_DAYS),
+        });
     }
   });
 export type Trip = z.infer<typeof tripSchema>;

@@ -25,11 +25,16 @@ export async function invalidateTrip(queryClient: QueryClient, tripId: string): 
   ]);
 }
 
+/** While a card's budget is being computed, the list asks again this often until its figures arrive. */
+const COMPUTING_POLL_MS = 2_000;
+
 export function useTripsQuery() {
   return useQuery({
     queryKey: tripKeys.list(),
     queryFn: () => apiFetch<TripListResponse>('/api/trips'),
     staleTime: STALE.SECONDS.THIRTY,
+    refetchInterval: (query) =>
+      query.state.data?.trips.some((trip) => trip.budgetStatus === 'computing') ? COMPUTING_POLL_MS : false,
   });
 }
 

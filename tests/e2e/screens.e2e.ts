@@ -42,7 +42,14 @@ const chartDrawn = async (page: Page) => {
 };
 
 const CHECKS: Check[] = [
-  { name: 'trips', open: (page) => go(page, '/', 'trip-list') },
+  {
+    name: 'trips',
+    open: async (page) => {
+      await go(page, '/', 'trip-list');
+      // The list never waits for a budget: a card says it is being worked out, and the figures follow.
+      await page.waitForSelector('[data-testid^="trip-gauge-"]');
+    },
+  },
   { name: 'new-trip', open: (page) => go(page, '/trips/new', 'new-trip-rig-preset:van-small') },
   { name: 'clubs', open: (page) => go(page, '/clubs', 'club-list') },
   { name: 'club', open: (page, paths) => go(page, paths.club, 'club-trips-card') },

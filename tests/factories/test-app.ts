@@ -6,6 +6,7 @@ import request from 'supertest';
 import { openDatabase, type Db } from '@/db/client';
 import { runMigrations } from '@/db/migrate';
 import { createApp, type AppConfig, type AppDeps, type TrailtallyApp } from '@/server/app';
+import type { BudgetRunner } from '@/server/budget/budget-pool';
 import type { Mailer } from '@/server/mail/mailer';
 import type { AuthLimits } from '@/server/middleware/auth-guards';
 import type { TrustProxy } from '@/server/trust-proxy';
@@ -36,6 +37,8 @@ export function createTestApp(
     outbox?: AppDeps['outbox'];
     /** A folder with an index.html, to serve as the web app. */
     webDir?: string;
+    /** Runs budgets in place of the worker pool (a test that holds them, or one that must start no thread). */
+    budgetRunner?: BudgetRunner;
   } = {},
 ): TestContext {
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'trailtally-test-'));
@@ -46,6 +49,7 @@ export function createTestApp(
     db,
     mailer: options.mailer ?? mailer,
     now: options.now ?? (() => new Date('2026-11-20T10:00:00Z')),
+    ...(options.budgetRunner ? { budgetRunner: options.budgetRunner } : {}),
     ...(options.logger ? { logger: options.logger } : {}),
     ...(options.outbox ? { outbox: options.outbox } : {}),
     config: {
@@ -70,6 +74,7 @@ export function createTestApp(
     db,
     mailer,
     close: () => {
+      void app.locals.budgets.close();
       db.$client.close();
       fs.rmSync(dir, { recursive: true, force: true });
     },

@@ -1,14 +1,16 @@
-// Malformed bodies on every write route: whatever a client sends, the answer is a 4xx with the
-// stable error body, never a 500, and the database is exactly as it was.
+// Malformed bodies on every write route, the account routes included: whatever a client sends, the answer is
+// never a 5xx and never carries a stack trace; a refused write leaves the database exactly as it was (checked
+// after every request); our own routes answer 4xx with the stable error body. Over 5,000 bodies, deterministic.
 import crypto from 'node:crypto';
+import type { Server } from 'node:http';
 import fc from 'fast-check';
-import type { Agent } from 'supertest';
+import request, { type Agent } from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { z } from 'zod';
+import { z } from 'zod';
 import * as api from '@/shared/schemas/api';
 import * as sharing from '@/shared/schemas/sharing';
 import { preferencesSchema } from '@/server/routes/preferences';
-import { createTestApp, signUpAgent, type TestContext } from '../factories/test-app';
+import { createTestApp, TEST_ORIGIN, TEST_PASSWORD, type TestContext } from '../factories/test-app';
 import {
   addAppliance,
   addStop,
@@ -27,25 +29,37 @@ type Route = {
   valid: () => Record<string, unknown>;
 };
 
-let ctx: TestContext;
-let agent: Agent;
-let tripId: string;
-let ids: { stop: string; drive: string; appliance: string; member: string; savedRig: string; club: string };
-let snapshot: Awaited<ReturnType<typeof getDetail>>;
+const ORIGIN = TEST_ORIGIN;
+const PASSWORD = TEST_PASSWORD;
+/**
+ * Bodies per route with a JSON body, per route that takes none, per account route, and per account route that
+ * checks a password (each such check costs a deliberately slow hash).
+ */
+const RUNS = { body: 190, bodiless: 15, account: 150, passwordChecked: 40 };
+/** Several hundred requests per test on a shared machine. */
+const FUZZ_TIMEOUT_MS = 90_000;
 
-/** A hash of every row the app owns (auth sessions excluded: reading them may refresh them). */
-function databaseFingerprint(): string {
-  const sqlite = ctx.db.$client;
-  const tables = sqlite
-    .prepare(
-      "select name from sqlite_master where type = 'table' and name not like 'sqlite_%' and name not like '__drizzle%' and name not in ('session', 'verification') order by name",
-    )
-    .all() as { name: string }[];
-  const hash = crypto.createHash('sha256');
-  for (const { name } of tables)
-    hash.update(name + JSON.stringify(sqlite.prepare(`select * from "${name}" order by rowid`).all()));
-  return hash.digest('hex');
-}
+let ctx: TestContext;
+let server: Server;
+let agent: Agent;
+/** A second account, for the account routes that need a session (change-password, update-user). */
+let accountAgent: Agent;
+let ownerEmail: string;
+let sent = 0;
+let newAccounts = 0;
+/** The database as the last request left it, so each request hashes it once. */
+let lastFingerprint = '';
+let tripId: string;
+let ids: {
+  stop: string;
+  drive: string;
+  appliance: string;
+  member: string;
+  savedRig: string;
+  club: string;
+  invite: string;
+};
+let snapshot: Awaited<ReturnType<typeof getDetail>>;
 
 const ROUTES: Route[] = [
   {
@@ -210,17 +224,124 @@ const ROUTES: Route[] = [
   },
 ];
 
+/** Write routes that take no body: only text that is not JSON at all can be malformed there. */
+const BODILESS: { name: string; method: 'post' | 'delete'; path: () => string }[] = [
+  { name: 'POST duplicate', method: 'post', path: () => `/api/trips/${tripId}/duplicate` },
+  { name: 'POST based-on/seen', method: 'post', path: () => `/api/trips/${tripId}/based-on/seen` },
+  { name: 'POST invite resend', method: 'post', path: () => `/api/trips/${tripId}/invites/${ids.invite}/resend` },
+  { name: 'POST invite accept', method: 'post', path: () => `/api/invites/${'a'.repeat(43)}/accept` },
+  { name: 'POST club invite accept', method: 'post', path: () => `/api/club-invites/${'a'.repeat(43)}/accept` },
+  { name: 'DELETE trip', method: 'delete', path: () => `/api/trips/${tripId}` },
+  { name: 'DELETE stop', method: 'delete', path: () => `/api/trips/${tripId}/stops/${ids.stop}` },
+  { name: 'DELETE appliance', method: 'delete', path: () => `/api/trips/${tripId}/appliances/${ids.appliance}` },
+  { name: 'DELETE member', method: 'delete', path: () => `/api/trips/${tripId}/members/${ids.member}` },
+  { name: 'DELETE invite', method: 'delete', path: () => `/api/trips/${tripId}/invites/${ids.invite}` },
+  { name: 'DELETE /rigs/:id', method: 'delete', path: () => `/api/rigs/${ids.savedRig}` },
+  { name: 'DELETE club trip', method: 'delete', path: () => `/api/clubs/${ids.club}/trips/${tripId}` },
+  { name: 'DELETE trip share', method: 'delete', path: () => `/api/trips/${tripId}/shares/${ids.club}` },
+  {
+    name: 'POST club invite resend',
+    method: 'post',
+    path: () => `/api/clubs/${ids.club}/invites/${ids.invite}/resend`,
+  },
+];
+
+/**
+ * The account routes (better-auth's), with their bodies as the screens send them. `schema` is the body the product
+ * means to take, strict: a body it refuses is malformed. The library may still take some of those (an extra
+ * field, a long name); then the write happens and the check moves on from the new state.
+ */
+type AccountRoute = {
+  name: string;
+  path: string;
+  signedIn: boolean;
+  checksPassword: boolean;
+  schema: z.ZodType;
+  valid: () => Record<string, unknown>;
+};
+
+const newPassword = z.string().min(8).max(128);
+const ACCOUNT_ROUTES: AccountRoute[] = [
+  {
+    name: 'POST sign-up/email',
+    path: '/api/auth/sign-up/email',
+    signedIn: false,
+    checksPassword: false,
+    schema: z.object({ name: z.string().trim().min(1).max(80), email: z.email(), password: newPassword }).strict(),
+    valid: () => ({ name: 'New Traveller', email: `fuzz-new-${(newAccounts += 1)}@example.test`, password: PASSWORD }),
+  },
+  {
+    name: 'POST sign-in/email',
+    path: '/api/auth/sign-in/email',
+    signedIn: false,
+    checksPassword: true,
+    schema: z.object({ email: z.email(), password: z.string().min(1).max(128) }).strict(),
+    valid: () => ({ email: ownerEmail, password: PASSWORD }),
+  },
+  {
+    name: 'POST request-password-reset',
+    path: '/api/auth/request-password-reset',
+    signedIn: false,
+    checksPassword: false,
+    schema: z.object({ email: z.email(), redirectTo: z.string().max(200) }).strict(),
+    valid: () => ({ email: ownerEmail, redirectTo: `${ORIGIN}/reset-password` }),
+  },
+  {
+    name: 'POST reset-password',
+    path: '/api/auth/reset-password',
+    signedIn: false,
+    checksPassword: false,
+    schema: z.object({ newPassword, token: z.string().min(1).max(200) }).strict(),
+    valid: () => ({ newPassword: 'another-horse-battery', token: 'not-a-token-we-issued' }),
+  },
+  {
+    name: 'POST change-password',
+    path: '/api/auth/change-password',
+    signedIn: true,
+    checksPassword: true,
+    schema: z
+      .object({ currentPassword: z.string().min(1).max(128), newPassword, revokeOtherSessions: z.boolean() })
+      .strict(),
+    valid: () => ({ currentPassword: PASSWORD, newPassword: 'another-horse-battery', revokeOtherSessions: false }),
+  },
+  {
+    name: 'POST update-user',
+    path: '/api/auth/update-user',
+    signedIn: true,
+    checksPassword: false,
+    schema: z.object({ name: z.string().trim().min(1).max(80) }).strict(),
+    valid: () => ({ name: 'Renamed Traveller' }),
+  },
+];
+
 const badValue = fc.oneof(
   fc.string({ maxLength: 20 }),
-  fc.constantFrom('NaN', 'Infinity', '-Infinity', '1e309', '', ' ', '0x10', '<script>'),
+  fc.constantFrom('NaN', 'Infinity', '-Infinity', '1e309', '', ' ', '0x10', '<script>', '\u0000', '\ud800'),
   fc.integer({ min: -1_000_000, max: -1 }),
+  fc.integer({ min: 1_000_000, max: Number.MAX_SAFE_INTEGER }),
   fc.double(),
   fc.constant(null),
   fc.boolean(),
   fc.string({ minLength: 2_000, maxLength: 4_000 }),
   fc.array(fc.integer(), { maxLength: 3 }),
+  fc.array(fc.constant(0), { minLength: 500, maxLength: 2_000 }),
   fc.dictionary(fc.string({ maxLength: 5 }), fc.integer(), { maxKeys: 3 }),
 );
+
+/** Text that is not JSON: cut short, single-quoted, a bare word, stray bytes. */
+const notJson = fc
+  .oneof(
+    fc.constantFrom('{', '{"a":', '[1,', 'nul', '{"name":"x"', "{'a':1}", '\u0000', '{"a":1}}', '--', '{"a":01}'),
+    fc.string({ minLength: 1, maxLength: 40 }),
+  )
+  .filter((text) => {
+    try {
+      JSON.parse(text);
+      return false;
+    } catch {
+      return true;
+    }
+  });
 
 type Json = Record<string, unknown>;
 
@@ -242,8 +363,8 @@ function mutate(body: Json, path: string[], change: { kind: 'set'; value: unknow
   return copy;
 }
 
-function malformedBodies(route: Route) {
-  const valid = route.valid();
+/** Bodies as the text sent: a valid body with one part broken, an extra field, anything at all, or not JSON. */
+function malformedBodies(schema: z.ZodType, valid: Json): fc.Arbitrary<string> {
   const paths = leafPaths(valid);
   const mutated = fc
     .tuple(
@@ -258,53 +379,177 @@ function malformedBodies(route: Route) {
     .string({ minLength: 1, maxLength: 12 })
     .filter((key) => !(key in valid))
     .map((key) => ({ ...valid, [key]: 1 }));
-  return (
-    fc
-      .oneof(mutated, unknownField, fc.anything({ maxDepth: 2 }))
-      // Keep only bodies the shared schema refuses: those must never change anything.
-      .filter((body) => !route.schema.safeParse(body).success)
-  );
+  const json = fc
+    .oneof(mutated, unknownField, fc.anything({ maxDepth: 2 }))
+    // Keep only bodies the schema refuses.
+    .filter((body) => !schema.safeParse(body).success)
+    // JSON has no undefined: such a body goes out empty.
+    .map((body) => JSON.stringify(body) ?? '');
+  return fc.oneof({ weight: 9, arbitrary: json }, { weight: 1, arbitrary: notJson });
+}
+
+/** A hash of every row the app owns (sessions and verification tokens excluded: reading may refresh them). */
+function databaseFingerprint(): string {
+  const sqlite = ctx.db.$client;
+  const tables = sqlite
+    .prepare(
+      "select name from sqlite_master where type = 'table' and name not like 'sqlite_%' and name not like '__drizzle%' and name not in ('session', 'verification') order by name",
+    )
+    .all() as { name: string }[];
+  const hash = crypto.createHash('sha256');
+  for (const { name } of tables)
+    hash.update(name + JSON.stringify(sqlite.prepare(`select * from "${name}" order by rowid`).all()));
+  return hash.digest('hex');
+}
+
+const STACK_TRACE = /\n\s+at\s|node_modules|\.(ts|js|mjs):\d+/;
+
+/**
+ * Sends one malformed body and checks the answer: never 5xx, never a stack trace; refused, the database is as
+ * before. Returns the status, so a route's own expectations can be added.
+ */
+async function sendMalformed(
+  client: Agent | ReturnType<typeof request>,
+  method: 'post' | 'patch' | 'put' | 'delete',
+  path: string,
+  text: string,
+): Promise<{ status: number; body: unknown }> {
+  const response = await client[method](path).set('Content-Type', 'application/json').set('Origin', ORIGIN).send(text);
+  sent += 1;
+  const what = `${method.toUpperCase()} ${path} ${text.slice(0, 120)}`;
+  expect(response.status, what).toBeLessThan(500);
+  expect(response.text, what).not.toMatch(STACK_TRACE);
+  const after = databaseFingerprint();
+  if (response.status >= 400) expect(after, `${what} changed the database`).toBe(lastFingerprint);
+  // A body the library took (an account route) changed the database on purpose: compare the next with that.
+  lastFingerprint = after;
+  return { status: response.status, body: response.body };
+}
+
+async function signUp(name: string, email: string): Promise<Agent> {
+  // Every change must say it comes from the app's own page, as a browser's would.
+  const client = request.agent(server).set('Origin', ORIGIN);
+  const response = await client.post('/api/auth/sign-up/email').send({ name, email, password: PASSWORD });
+  if (response.status !== 200) throw new Error(`sign-up failed: ${response.status} ${response.text}`);
+  return client;
 }
 
 beforeAll(async () => {
   ctx = createTestApp();
-  const owner = await signUpAgent(ctx.app, 'Owner');
-  const member = await signUpAgent(ctx.app, 'Member');
-  agent = owner.agent;
+  server = ctx.app.listen(0, '127.0.0.1');
+  await new Promise((resolve) => server.once('listening', resolve));
+  ownerEmail = `fuzz-owner-${Date.now()}@example.test`;
+  agent = await signUp('Owner', ownerEmail);
+  const memberEmail = `fuzz-member-${Date.now()}@example.test`;
+  const member = await signUp('Member', memberEmail);
+  accountAgent = await signUp('Account holder', `fuzz-account-${Date.now()}@example.test`);
+  const memberId = (await member.get('/api/auth/get-session')).body.user.id as string;
   const { trip } = await createTrip(agent);
   tripId = trip.id;
-  grant(ctx.db, tripId, member.userId, 'viewer');
+  grant(ctx.db, tripId, memberId, 'viewer');
   const stop = await addStop(agent, tripId);
   await addStop(agent, tripId);
   const appliance = await addAppliance(agent, tripId);
   snapshot = await getDetail(agent, tripId);
   const saved = await agent.post('/api/rigs').send({ rig: snapshot.rig.rig });
   const club = await agent.post('/api/clubs').send({ name: 'Fuzz club' });
+  const invite = await agent.post(`/api/trips/${tripId}/invites`).send({ email: 'invitee@example.test', role: 'crew' });
   ids = {
     stop: stop.id,
     drive: snapshot.drives[0]?.id ?? '',
     appliance: appliance.id,
-    member: member.userId,
+    member: memberId,
     savedRig: saved.body.id,
     club: club.body.club.id,
+    invite: invite.body.invite?.id ?? invite.body.id,
   };
+  lastFingerprint = databaseFingerprint();
 });
-afterAll(() => ctx.close());
+afterAll(() => {
+  server?.close();
+  ctx?.close();
+});
 
 describe.each(ROUTES)('$name', (route) => {
-  it('when the body is malformed in any way, then the answer is 4xx with the error body and the database is unchanged', async () => {
+  it(
+    'when the body is malformed in any way, then 4xx with the error body, no trace, and the database unchanged',
+    async () => {
+      await fc.assert(
+        fc.asyncProperty(malformedBodies(route.schema, route.valid()), async (text) => {
+          const { status, body } = await sendMalformed(agent, route.method, route.path(), text);
+          expect(status, text.slice(0, 200)).toBeGreaterThanOrEqual(400);
+          expect((body as { error?: { code?: unknown } }).error?.code).toEqual(expect.any(String));
+        }),
+        { numRuns: RUNS.body, seed: 20261201 },
+      );
+    },
+    FUZZ_TIMEOUT_MS,
+  );
+});
+
+describe.each(BODILESS)('$name', (route) => {
+  it(
+    'when the body is not JSON at all, then 400 with the error body and the database unchanged',
+    async () => {
+      await fc.assert(
+        fc.asyncProperty(notJson, async (text) => {
+          const { status, body } = await sendMalformed(agent, route.method, route.path(), text);
+          expect(status).toBe(400);
+          expect((body as { error?: { code?: unknown } }).error?.code).toBe('bad_request');
+        }),
+        { numRuns: RUNS.bodiless, seed: 20261202 },
+      );
+    },
+    FUZZ_TIMEOUT_MS,
+  );
+});
+
+describe.each(ACCOUNT_ROUTES)('$name', (route) => {
+  it(
+    'when the body is malformed in any way, then no 5xx, no trace, and a refusal changes nothing',
+    async () => {
+      await fc.assert(
+        fc.asyncProperty(malformedBodies(route.schema, route.valid()), async (text) => {
+          // Signed-out routes go without cookies, so a sign-in that the library accepts does not change who is fuzzing.
+          await sendMalformed(route.signedIn ? accountAgent : request(server), 'post', route.path, text);
+        }),
+        { numRuns: route.checksPassword ? RUNS.passwordChecked : RUNS.account, seed: 20261203 },
+      );
+    },
+    FUZZ_TIMEOUT_MS,
+  );
+
+  it('when the body is well formed, then the route still works (the refusals above are about the bodies)', async () => {
+    const response = await (route.signedIn ? accountAgent : request(server))
+      .post(route.path)
+      .set('Origin', ORIGIN)
+      .send(route.valid());
+    // Neither the origin nor the session stands in the way: the fuzzing above reached the route's own checks.
+    expect([401, 403]).not.toContain(response.status);
+    expect(response.status).toBeLessThan(500);
+    expect(response.text).not.toMatch(STACK_TRACE);
+    lastFingerprint = databaseFingerprint();
+  });
+});
+
+describe('account bodies', () => {
+  it('when an account update gives the picture as a list instead of text, then 400 and nothing changes', async () => {
     const before = databaseFingerprint();
-    await fc.assert(
-      fc.asyncProperty(malformedBodies(route), async (body) => {
-        // JSON has no undefined: such a body goes out empty.
-        const text = JSON.stringify(body) ?? '';
-        const response = await agent[route.method](route.path()).set('Content-Type', 'application/json').send(text);
-        expect(response.status, text.slice(0, 200)).toBeGreaterThanOrEqual(400);
-        expect(response.status).toBeLessThan(500);
-        expect(response.body.error.code).toEqual(expect.any(String));
-      }),
-      { numRuns: 40, seed: 20261201 },
-    );
+    const response = await accountAgent
+      .post('/api/auth/update-user')
+      .set('Origin', ORIGIN)
+      .send({ image: new Array(2_000).fill(0) });
+    expect(response.status).toBe(400);
+    expect(databaseFingerprint()).toBe(before);
+  });
+
+  it('when an account update names the person with a list instead of text, then 400 and nothing changes', async () => {
+    const before = databaseFingerprint();
+    const response = await accountAgent
+      .post('/api/auth/update-user')
+      .set('Origin', ORIGIN)
+      .send({ name: new Array(2_000).fill(0) });
+    expect(response.status).toBe(400);
     expect(databaseFingerprint()).toBe(before);
   });
 });
@@ -319,5 +564,12 @@ describe('request limits', () => {
   it('when a path id is absurd, then 404, never 500', async () => {
     const response = await agent.get(`/api/trips/${'x'.repeat(500)}`);
     expect(response.status).toBe(404);
+  });
+});
+
+// Last in the file, so it counts every body the suites above sent.
+describe('the whole suite', () => {
+  it('when every route has been fuzzed, then over 5,000 malformed bodies were sent', () => {
+    expect(sent).toBeGreaterThanOrEqual(5_000);
   });
 });

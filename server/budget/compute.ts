@@ -1,0 +1,69 @@
+// What a budget worker runs: read the stored plan from the database, check it against the engine's contract,
+// simulate it, and hand back the answer already serialised, so the server's event loop never reads, walks or
+// serialises a large plan or result.
+import { openReadOnlyDatabase, type Db, type DbExecutor } from '@/db/client';
+import { findTrip, loadTripDetail } from '@/db/queries/trips';
+import { simulateParsed } from '@/shared/engine';
+import { engineInputSchema, type EngineInputDraft } from '@/shared/schemas/engine-input';
+import { toEngineInput } from '@/shared/trip-to-engine-input';
+
+/** The figures the trips list shows of a budget. */
+export type BudgetFigures = { lowestSocPct: number; reservePct: number; flagCount: number };
+
+export type BudgetOutcome =
+  | { kind: 'ok'; resultJson: string; figures: BudgetFigures }
+  /** Nothing to simulate yet, or a plan the engine refuses: the reason is shown in place of the budget. */
+  | { kind: 'none'; reason: string }
+  /** The engine failed: a fault to log, not the user's doing. */
+  | { kind: 'failed'; message: string };
+
+/** A trip's budget and the revision of the plan it was computed from. */
+export type TripBudget = { revision: number; outcome: BudgetOutcome };
+
+export function computeBudget(draft: EngineInputDraft | null): BudgetOutcome {
+  if (!draft) return { kind: 'none', reason: 'Add a stop to see the budget.' };
+  const parsed = engineInputSchema.safeParse(draft);
+  if (!parsed.success) {
+    const issue = parsed.error.issues[0];
+    return { kind: 'none', reason: `The plan cannot be simulated yet: ${issue?.path.join('.')} ${issue?.message}` };
+  }
+  try {
+    const result = simulateParsed(parsed.data);
+    const { lowestSocPct, reservePct } = result.headline;
+    return {
+      kind: 'ok',
+      resultJson: JSON.stringify(result),
+      figures: { lowestSocPct, reservePct, flagCount: result.flags.length },
+    };
+  } catch (error) {
+    // An engine fault is reported, not thrown: the pool keeps its worker and the server logs the message.
+    return { kind: 'failed', message: error instanceof Error ? `${error.name}: ${error.message}` : String(error) };
+  }
+}
+
+/** The budget of a stored trip, or undefined when there is no such trip. */
+export function computeTripBudget(db: DbExecutor, tripId: string): TripBudget | undefined {
+  // One read transaction: the plan and its revision come from the same moment, however busy the writers are.
+  const read = db.transaction(
+    (tx) => {
+      const trip = findTrip(tx, tripId);
+      const detail = trip ? loadTripDetail(tx, tripId, 'viewer') : undefined;
+      return trip && detail ? { revision: trip.revision, draft: toEngineInput(detail) } : undefined;
+    },
+    { behavior: 'deferred' },
+  );
+  return read && { revision: read.revision, outcome: computeBudget(read.draft) };
+}
+
+/** A worker's read-only connections, one per database file, opened on its first budget from that file. */
+const connections = new Map<string, Db>();
+
+/** What a worker thread runs for one task: the budget of a trip stored in the database at `databasePath`. */
+export function computeStoredBudget(databasePath: string, tripId: string): TripBudget | undefined {
+  let db = connections.get(databasePath);
+  if (!db) {
+    db = openReadOnlyDatabase(databasePath);
+    connections.set(databasePath, db);
+  }
+  return computeTripBudget(db, tripId);
+}

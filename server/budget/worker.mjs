@@ -1,0 +1,17 @@
+// Entry of a budget worker thread. Node cannot load TypeScript by itself, and a worker does not inherit the loader
+// of the thread that started it under every runner (tsx for `npm start`, vitest for the tests), so the worker
+// registers tsx's loader for its own imports and then loads the TypeScript module that does the work.
+import { tsImport } from 'tsx/esm/api';
+
+const { computeStoredBudget } = await tsImport('./compute.ts', import.meta.url);
+
+/**
+ * One trip's budget. `started` is told first, so the server's time limit counts the work only, not the time the
+ * task waited in the queue or the worker took to start.
+ * @param {{ databasePath: string; tripId: string; started: import('node:worker_threads').MessagePort }} task
+ */
+export default function runBudget({ databasePath, tripId, started }) {
+  started.postMessage('started');
+  started.close();
+  return computeStoredBudget(databasePath, tripId);
+}
