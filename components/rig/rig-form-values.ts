@@ -1,6 +1,7 @@
 // Pure pieces of the rig form: how stored figures are shown (fractions as percent, panel temperatures in the
 // user's units) and typed back, and the whole parts the form adds, so every field starts filled.
-import { solarArraySchema, type RigInput, type SolarArray } from '@/shared/schemas/rig';
+import { defaultFuelModel } from '@/shared/engine/generator';
+import { solarArraySchema, type FuelKind, type FuelModel, type RigInput, type SolarArray } from '@/shared/schemas/rig';
 import { fromDisplay, toDisplay, type UnitSystem } from '@/shared/units';
 
 const round = (v: number, digits: number) => Math.round(v * 10 ** digits) / 10 ** digits;
@@ -79,5 +80,11 @@ export function generatorModeFor(
   return opened?.kind === 'routine' ? opened : current;
 }
 
-/** Typical part-load figures to start the fuel model from: a small inverter generator burns about 4 units of fuel energy per unit of electricity (from memory, rough). */
-export const FUEL_MODEL_START = { idleFuelKwhPerH: 0.6, fuelKwhPerKwhOut: 4 } as const;
+/**
+ * The figures a person starts their own fuel model from: the engine's typical curve for the generator's size and fuel
+ * (rounded so the fields read cleanly), which they then replace with their unit's.
+ */
+export function fuelModelStart(ratedW: number | undefined, fuel: FuelKind | undefined): FuelModel {
+  const m = defaultFuelModel(ratedW && ratedW > 0 ? ratedW : 2000, fuel ?? 'petrol');
+  return { idleFuelKwhPerH: round(m.idleFuelKwhPerH, 2), fuelKwhPerKwhOut: round(m.fuelKwhPerKwhOut, 2) };
+}

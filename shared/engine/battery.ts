@@ -71,15 +71,27 @@ export function chargeBlockedByCold(lithium: boolean, heatedSpace: boolean, ambi
   return lithium && !heatedSpace && ambientC < 0;
 }
 
-/**
- * Most energy (stored terms, as a share of capacity) the battery can take in dtH hours from `soc`:
- * a constant current limit up to the taper point, then an exponential taper toward full. Written so that
- * soc + limit is nondecreasing in soc — a fuller battery never ends the step emptier.
- */
-export function acceptanceLimitShare(soc: number, dtH: number, p: ChemistryPreset): number {
+/** The charge-acceptance terms for one step length: they depend only on the chemistry and the step. */
+export type Acceptance = { rate: number; taperStartSoc: number; taperGain: number; tail: number };
+
+export function acceptanceFor(p: ChemistryPreset, dtH: number): Acceptance {
   const rate = p.maxChargeC * dtH * p.chargeEfficiency; // share of capacity per step at full current
   const k = p.maxChargeC / (1 - p.taperStartSoc); // taper time constant, 1/h
-  const taperGain = (1 - p.taperStartSoc) * (1 - Math.exp(-k * dtH));
-  if (soc < p.taperStartSoc) return Math.max(0, Math.min(rate, p.taperStartSoc - soc + taperGain));
-  return Math.max(0, (1 - soc) * (1 - Math.exp(-k * dtH)));
+  const tail = 1 - Math.exp(-k * dtH);
+  return { rate, taperStartSoc: p.taperStartSoc, taperGain: (1 - p.taperStartSoc) * tail, tail };
+}
+
+/**
+ * Most energy (stored terms, as a share of capacity) the battery can take in one step from `soc`: a constant
+ * current limit up to the taper point, then an exponential taper toward full. Written so that soc + limit is
+ * nondecreasing in soc — a fuller battery never ends the step emptier.
+ */
+export function acceptedShare(soc: number, a: Acceptance): number {
+  if (soc < a.taperStartSoc) return Math.max(0, Math.min(a.rate, a.taperStartSoc - soc + a.taperGain));
+  return Math.max(0, (1 - soc) * a.tail);
+}
+
+/** acceptedShare for a step of dtH hours. */
+export function acceptanceLimitShare(soc: number, dtH: number, p: ChemistryPreset): number {
+  return acceptedShare(soc, acceptanceFor(p, dtH));
 }

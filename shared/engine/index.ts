@@ -26,5 +26,5 @@ export { thermostatDuty, applianceStep } from './loads';
 export { ambientC } from './temperature-curve';
 export { hookupCapacityW, chargerDcW } from './hookup';
 export { vehicleChargeW } from './vehicle-charging';
-export { defaultFuelModel, generatorFuel, generatorEfficiency } from './generator';
+export { defaultFuelModel, generatorFuel, generatorEfficiency, FUEL_CURVES, CONTINUOUS_SHARE } from './generator';
 export * from './fuel';

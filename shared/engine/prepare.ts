@@ -5,30 +5,22 @@ import type { EngineInput } from '../schemas/engine-input';
 import type { Appliance } from '../schemas/appliance';
 import type { DayType } from '../schemas/common';
 import type { Stop } from '../schemas/trip';
-import { ineichenPerez, kastenYoungAirMass, pressureRatio } from './clear-sky';
+import { haurwitzGhi, ineichenPerez, kastenYoungAirMass, pressureRatio } from './clear-sky';
 import { extraterrestrialW } from './extraterrestrial';
-// Energy per step follows onShare, thermostatDuty and applianceStep in loads.ts, written out in fillShares and fillLoads.
-import type { LocalStep } from './routines';
-import { windowsShare } from './routines';
+import { applianceEnergyWh, applianceHeatWh, scheduledShare, thermostatDuty } from './loads';
+import { windowsShare, type LocalStep } from './routines';
 import { resolveExposure, type ResolvedExposure } from './site-exposure';
 import { sunPositionInto } from './sun-position';
-import { ambientC as ambientCurve } from './temperature-curve';
+import { ambientC } from './temperature-curve';
 import {
   buildGrid,
   buildSegments,
   fillOffsets,
-  HOUR_MS as HOUR_MS_IMPORTED,
-  localDayNumber as dayNumberOf,
-  localMinuteOfDay as minuteOfDayOf,
+  HOUR_MS,
+  localDayNumber,
+  localMinuteOfDay,
   type Segment,
 } from './time-grid';
-
-// Module-local copies of imported bindings used once per step: once compiled to CommonJS (as the benchmark and
-// the server run it) every use of an imported name is a property read through a getter.
-const HOUR_MS = HOUR_MS_IMPORTED;
-const localDayNumber = dayNumberOf;
-const localMinuteOfDay = minuteOfDayOf;
-const ambientC = ambientCurve;
 
 export const SAMPLES = 3; // start, middle, end of each step
 export const QUARTERS = 4; // generator sub-steps
@@ -142,11 +134,10 @@ function fillLocalTime(p: Prepared, stops: readonly Stop[]): void {
 
 const RAD = Math.PI / 180;
 
-/** cz: cos((90 − altDeg)°), as haurwitzGhi computes it, so Haurwitz is written out here with the same numbers. */
-function clearSkyGhi(stop: Stop | undefined, altDeg: number, cz: number, dniExtra: number): number {
+function clearSkyGhi(stop: Stop | undefined, altDeg: number, dniExtra: number): number {
   const zen = 90 - altDeg;
   if (altDeg <= 0) return 0;
-  if (stop?.linkeTurbidity === undefined) return cz > 0 ? 1098 * cz * Math.exp(-0.059 / cz) : 0; // haurwitzGhi
+  if (stop?.linkeTurbidity === undefined) return haurwitzGhi(zen);
   const am = kastenYoungAirMass(zen) * pressureRatio(stop.elevationM);
   return ineichenPerez({
     zenithDeg: zen,
@@ -212,7 +203,7 @@ function fillSun(p: Prepared, stops: readonly Stop[], solarConstant: number): vo
       p.az[k + s] = pos[2 * s + 1] ?? 0;
       const cz = alt > 0 ? Math.cos((90 - alt) * RAD) : 0;
       p.cosZ[k + s] = cz;
-      p.ghiClear[k + s] = clearSkyGhi(stop, alt, cz, dniExtra);
+      p.ghiClear[k + s] = clearSkyGhi(stop, alt, dniExtra);
     }
     prevEndMs = t + dt;
     prevLat = lat;
@@ -266,38 +257,28 @@ function stepSlots(p: Prepared, withDayTypes: boolean): Slots {
   return { slotOf, first };
 }
 
-/** Each step's scheduled share for one appliance (onShare in loads.ts, term for term) into `share`. */
+/** Each step's share switched on for one appliance (onShare in loads.ts, with routine shares worked out per slot). */
 function fillShares(p: Prepared, a: Appliance, slots: () => { time: Slots; typed: Slots }, share: Float64Array): void {
   const sched = a.schedule;
   const n = p.n;
-  if (sched.kind === 'always') {
-    share.fill(1, 0, n);
-    return;
-  }
-  const windows = sched.kind === 'routine' ? sched.windows : sched.activeWindows;
+  const windows = sched.kind === 'routine' ? sched.windows : sched.kind === 'thermostat' ? sched.activeWindows : null;
   if (!windows) share.fill(1, 0, n);
   else if (windows.some((w) => w.days.kind === 'trip-days')) {
-    for (let i = 0; i < n; i++) share[i] = windowsShare(windows, localStep(p, i), prevDayType(p, i));
+    for (let i = 0; i < n; i++) share[i] = scheduledShare(sched, localStep(p, i), prevDayType(p, i));
   } else {
     const all = slots();
     const { slotOf, first } = windows.some((w) => w.days.kind === 'day-type') ? all.typed : all.time;
     const slotShare = new Float64Array(first.length);
     for (let slot = 0; slot < first.length; slot++) {
       const at = first[slot] ?? 0;
-      slotShare[slot] = windowsShare(windows, localStep(p, at), prevDayType(p, at));
+      slotShare[slot] = scheduledShare(sched, localStep(p, at), prevDayType(p, at));
     }
     for (let i = 0; i < n; i++) share[i] = slotShare[slotOf[i] ?? 0] ?? 0;
   }
   if (sched.kind === 'thermostat') {
-    const amb = p.ambientC;
-    const cooling = sched.mode === 'cooling';
-    const { setPointC, fullDutyDeltaC } = sched;
-    for (let i = 0; i < n; i++) {
-      const a = amb[i] ?? 15;
-      // thermostatDuty in loads.ts, written out so the mode is decided once per appliance
-      const excess = cooling ? a - setPointC : setPointC - a;
-      share[i] = (share[i] ?? 0) * Math.min(1, Math.max(0, excess / fullDutyDeltaC));
-    }
+    const { mode, setPointC, fullDutyDeltaC } = sched;
+    for (let i = 0; i < n; i++)
+      share[i] = (share[i] ?? 0) * thermostatDuty(mode, p.ambientC[i] ?? 15, setPointC, fullDutyDeltaC);
   }
 }
 
@@ -322,29 +303,26 @@ function fillLoads(p: Prepared): void {
     else runs.push({ stop: w, from: i, to: i + 1 });
   }
   const energy = new Float64Array(n);
-  // Appliance by appliance over all steps: each step's totals still add the appliances in list order, and each
-  // appliance's per-stop total still adds the steps in time order, so every sum is the same as step by step.
+  // Appliance by appliance over all steps: each step's totals still add the appliances in list order.
   for (let j = 0; j < appliances.length; j++) {
     const a = appliances[j];
     if (!a) continue;
     const always = a.schedule.kind === 'always';
     if (!always) fillShares(p, a, slots, share);
-    const { quantity, runningW, standbyW, dutyCycle, heatInputW } = a;
     const isAc = a.circuit === 'ac';
     const total = isAc ? acWh : dcWh;
-    const heats = !isAc && heatInputW !== 0;
-    const runningTotalW = runningW * quantity;
-    const surgeExtra = (a.surgeW ?? runningW) - runningW;
+    const heats = !isAc && a.heatInputW !== 0;
+    const runningTotalW = a.runningW * a.quantity;
+    const surgeExtra = (a.surgeW ?? a.runningW) - a.runningW;
     // Off with no standby draw, a step adds exactly 0 to every total (which are never −0), so it is skipped.
-    const skipOff = !always && standbyW === 0;
+    const skipOff = !always && a.standbyW === 0;
     if (skipOff) energy.fill(0);
-    // One pass per appliance; the branches below are fixed for the whole pass.
     for (let i = 0; i < n; i++) {
       const sh = always ? 1 : (share[i] ?? 0);
       if (skipOff && sh === 0) continue;
-      const runShare = sh * dutyCycle;
+      const runShare = sh * a.dutyCycle;
       const dtH = stepH[i] ?? 1;
-      const e = quantity * (runningW * runShare + standbyW * (1 - runShare)) * dtH;
+      const e = applianceEnergyWh(a, runShare, dtH);
       energy[i] = e;
       total[i] = (total[i] ?? 0) + e;
       if (isAc) {
@@ -352,9 +330,9 @@ function fillLoads(p: Prepared): void {
           acRunningW[i] = (acRunningW[i] ?? 0) + runningTotalW;
           acSurgeExtraW[i] = Math.max(acSurgeExtraW[i] ?? 0, surgeExtra);
         }
-      } else if (heats) heatWh[i] = (heatWh[i] ?? 0) + quantity * heatInputW * runShare * dtH;
+      } else if (heats) heatWh[i] = (heatWh[i] ?? 0) + applianceHeatWh(a, runShare, dtH);
     }
-    if (isAc && standbyW > 0) acStandbyOn.fill(1, 0, n);
+    if (isAc && a.standbyW > 0) acStandbyOn.fill(1, 0, n);
     // Only routine loads are ever suggested for moving to a drive, so only theirs are totalled per stop.
     if (a.schedule.kind === 'routine') {
       const base = j * stopsCount;

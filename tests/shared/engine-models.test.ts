@@ -7,12 +7,10 @@ import {
   cooperDeclinationDeg,
   cosIncidence,
   dcCurrentA,
-  defaultFuelModel,
   DIESEL_KWH_PER_GAL,
   erbs,
   erbsDiffuseFraction,
   extraterrestrialW,
-  generatorEfficiency,
   groundReflected,
   haurwitzGhi,
   hayDaviesSkyDiffuse,
@@ -162,16 +160,6 @@ describe('fuel heating values (CHECK-VALUES §6)', () => {
   it('when petrol and diesel, then 35.25 and 40.26 kWh/gal (US EIA, C)', () => {
     expect(PETROL_KWH_PER_GAL).toBeCloseTo(35.25, 2);
     expect(DIESEL_KWH_PER_GAL).toBeCloseTo(40.26, 2);
-  });
-  it('when the default generator runs at rated load, then fuel-to-electric is 10–25 % (field measurement S; common practice 20–25 %)', () => {
-    const m = defaultFuelModel(2000);
-    const eff = generatorEfficiency(m, 2000);
-    expect(eff).toBeGreaterThan(0.1);
-    expect(eff).toBeLessThan(0.25);
-    // The measured unit: 0.0739 gal/h idle + 0.127 gal/kWh, at 1.2 kW → 0.2263 gal/h of petrol (S).
-    const galPerH =
-      (defaultFuelModel(1200).idleFuelKwhPerH + defaultFuelModel(1200).fuelKwhPerKwhOut * 1.2) / PETROL_KWH_PER_GAL;
-    expect(galPerH).toBeCloseTo(0.0739 + 0.127 * 1.2, 6);
   });
 });
 
