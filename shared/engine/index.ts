@@ -16,10 +16,19 @@ export { spencerFactor, extraterrestrialW } from './extraterrestrial';
 export { haurwitzGhi, ineichenPerez, kastenYoungAirMass, pressureRatio } from './clear-sky';
 export { SKY_CLEARNESS, SKY_ORDER, shiftSky } from './sky-outlook';
 export { erbs, erbsDiffuseFraction } from './decomposition';
-export { cosIncidence, isotropicSkyDiffuse, groundReflected, hayDaviesSkyDiffuse, planeOfArray } from './transposition';
+export {
+  cosIncidence,
+  isotropicSkyDiffuse,
+  groundReflected,
+  hayDaviesSkyDiffuse,
+  planeOfArray,
+  skyViewOfTilt,
+  groundViewOfTilt,
+} from './transposition';
 export { resolveExposure, beamFactor, diffuseFactor, horizonAt, skyViewFromHorizon } from './site-exposure';
 export { noctCellTempC, effectiveNoctC, pvDcPowerW, FLUSH_EXTRA_C } from './pv-module';
-export { controllerOutputW, controllerLimitW, pwmFactor } from './charge-controller';
+export { arrayOutput, controllerLimitW, moduleClassFor, pwmShareOfRated } from './charge-controller';
+export { currentAt, deSotoParams, maxPowerPoint, openCircuitV, MODULE_CLASSES } from './single-diode';
 export { CHEMISTRY, peukertRuntimeH, peukertFactor, acceptanceLimitShare, chargeBlockedByCold } from './battery';
 export { inverterDcDrawW, dcCurrentA, checkOverload } from './inverter';
 export { thermostatDuty, applianceStep } from './loads';

@@ -9,12 +9,22 @@ export function cosIncidence(zenithDeg: number, sunAzDeg: number, tiltDeg: numbe
   return Math.cos(z) * Math.cos(b) + Math.sin(z) * Math.sin(b) * Math.cos((sunAzDeg - surfaceAzDeg) * RAD);
 }
 
+/** Share of the sky dome a surface tilted tiltDeg sees (isotropic sky). */
+export function skyViewOfTilt(tiltDeg: number): number {
+  return (1 + Math.cos(tiltDeg * RAD)) / 2;
+}
+
+/** Share of the ground a surface tilted tiltDeg sees. */
+export function groundViewOfTilt(tiltDeg: number): number {
+  return (1 - Math.cos(tiltDeg * RAD)) / 2;
+}
+
 export function isotropicSkyDiffuse(dhi: number, tiltDeg: number): number {
-  return (dhi * (1 + Math.cos(tiltDeg * RAD))) / 2;
+  return dhi * skyViewOfTilt(tiltDeg);
 }
 
 export function groundReflected(ghi: number, reflectance: number, tiltDeg: number): number {
-  return (ghi * reflectance * (1 - Math.cos(tiltDeg * RAD))) / 2;
+  return ghi * reflectance * groundViewOfTilt(tiltDeg);
 }
 
 export type HayDaviesInput = {
@@ -27,12 +37,20 @@ export type HayDaviesInput = {
   surfaceAzDeg: number;
 };
 
+/** Hay & Davies' beam ratio: cos of incidence over cos of zenith, the latter floored near the horizon as pvlib does. */
+export function beamRatio(cosIncidenceClamped: number, cosZenith: number): number {
+  return cosIncidenceClamped / Math.max(cosZenith, 0.01745);
+}
+
+/** Hay–Davies sky diffuse from anisotropy index ai = DNI/DNI_extra, beam ratio rb and the tilt's sky view. */
+export function hayDaviesSky(dhi: number, ai: number, rb: number, skyView: number): number {
+  return Math.max(dhi * (1 - ai) * skyView, 0) + Math.max(dhi * ai * rb, 0);
+}
+
 export function hayDaviesSkyDiffuse(i: HayDaviesInput): number {
   const cosT = Math.max(cosIncidence(i.zenithDeg, i.sunAzDeg, i.tiltDeg, i.surfaceAzDeg), 0);
-  const rb = cosT / Math.max(Math.cos(i.zenithDeg * RAD), 0.01745); // floor near the horizon, as pvlib does
   const ai = i.dniExtra > 0 ? i.dni / i.dniExtra : 0;
-  const iso = Math.max(i.dhi * (1 - ai) * ((1 + Math.cos(i.tiltDeg * RAD)) / 2), 0);
-  return iso + Math.max(i.dhi * ai * rb, 0);
+  return hayDaviesSky(i.dhi, ai, beamRatio(cosT, Math.cos(i.zenithDeg * RAD)), skyViewOfTilt(i.tiltDeg));
 }
 
 export type PoaInput = HayDaviesInput & { ghi: number; reflectance: number; model: 'hay-davies' | 'isotropic' };

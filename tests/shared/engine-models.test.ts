@@ -28,8 +28,6 @@ import {
   sunPosition,
   KG_PER_LB,
   PROPANE_LB_PER_GAL,
-  controllerOutputW,
-  pwmFactor,
   skyViewFromHorizon,
   resolveExposure,
   beamFactor,
@@ -139,10 +137,6 @@ describe('PV module and controller', () => {
   });
   it('when 100 W at 900 W/m², 30 °C, γ −0.003/°C, then 88.65 W (pvlib test_pvwatts_dc_scalars, C)', () => {
     expect(pvDcPowerW(100, 900, 30, -0.003, 1)).toBeCloseTo(88.65, 9);
-  });
-  it('when a PWM controller charges at 13.6 V from an 18 V panel, then it keeps 13.6/18 of maximum power (arithmetic)', () => {
-    expect(pwmFactor(13.6, 18)).toBeCloseTo(0.7556, 4);
-    expect(controllerOutputW({ kind: 'pwm', efficiency: 1, maxAmps: 30 }, 100, 13.6, 18)).toBeCloseTo(75.56, 2);
   });
 });
 

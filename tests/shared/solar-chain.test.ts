@@ -10,7 +10,7 @@ import {
   beamFactor,
   CHEMISTRY,
   controllerLimitW,
-  controllerOutputW,
+  arrayOutput,
   dayOfYearUtc,
   diffuseFactor,
   effectiveNoctC,
@@ -22,7 +22,6 @@ import {
   noctCellTempC,
   planeOfArray,
   pressureRatio,
-  pvDcPowerW,
   resolveExposure,
   shiftSky,
   SKY_CLEARNESS,
@@ -93,7 +92,7 @@ function chainW(
         : 0;
     if (j === 0) poaFirst = poa;
     const cell = noctCellTempC(ambient, poa, effectiveNoctC(a.noctC, a.fit));
-    watts += controllerOutputW(ctrl, pvDcPowerW(a.ratedW, poa, cell, a.gammaPctPerC / 100, a.derate), chargeV, a.vmpV);
+    watts += arrayOutput(ctrl, a, chargeV)(poa, cell);
   });
   return { watts: Math.min(watts, controllerLimitW(ctrl, chargeV)), poaFirst };
 }
