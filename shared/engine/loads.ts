@@ -30,9 +30,14 @@ export function onShare(a: Appliance, step: LocalStep, prevDayType: DayType, amb
   return s.kind === 'thermostat' ? share * thermostatDuty(s.mode, ambientC, s.setPointC, s.fullDutyDeltaC) : share;
 }
 
-/** Electric energy in a step of durationH hours that runs for `runShare` of it, Wh. */
+/** Electric energy drawn at running watts in a step of durationH hours that runs for `runShare` of it, Wh. */
+export function applianceRunningWh(a: Appliance, runShare: number, durationH: number): number {
+  return a.quantity * a.runningW * runShare * durationH;
+}
+
+/** Electric energy in that step: running watts while it runs, standby watts the rest of the time, Wh. */
 export function applianceEnergyWh(a: Appliance, runShare: number, durationH: number): number {
-  return a.quantity * (a.runningW * runShare + a.standbyW * (1 - runShare)) * durationH;
+  return applianceRunningWh(a, runShare, durationH) + a.quantity * a.standbyW * (1 - runShare) * durationH;
 }
 
 /** Propane heat input burned in that step (fuel appliances), Wh. */

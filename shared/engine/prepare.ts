@@ -6,8 +6,10 @@ import type { Appliance } from '../schemas/appliance';
 import type { DayType } from '../schemas/common';
 import type { Stop } from '../schemas/trip';
 import { haurwitzGhi, ineichenPerez, kastenYoungAirMass, pressureRatio } from './clear-sky';
+import type { HeavyLoad } from './battery';
 import { extraterrestrialW } from './extraterrestrial';
-import { applianceEnergyWh, applianceHeatWh, scheduledShare, thermostatDuty } from './loads';
+import { inverterDcDrawW } from './inverter';
+import { applianceEnergyWh, applianceHeatWh, applianceRunningWh, scheduledShare, thermostatDuty } from './loads';
 import { windowsShare, type LocalStep } from './routines';
 import { resolveExposure, type ResolvedExposure } from './site-exposure';
 import { sunPositionInto } from './sun-position';
@@ -65,6 +67,8 @@ export type Prepared = {
   acStandbyOn: Uint8Array;
   /** Electric Wh of appliance a at stop w: index a × stops + w, for routine appliances (the loads a flag may suggest moving). */
   applianceStopWh: Float64Array;
+  /** Loads whose running current passes the bank's 20-hour current, with their running energy per step (Peukert). */
+  heavy: HeavyLoad[];
 };
 
 function segmentAt(segs: readonly Segment[], ms: number, hint: number): number {
@@ -303,6 +307,15 @@ function fillLoads(p: Prepared): void {
     else runs.push({ stop: w, from: i, to: i + 1 });
   }
   const energy = new Float64Array(n);
+  const battery = p.input.rig.battery;
+  const inverter = p.input.rig.inverter;
+  /** Battery current while the appliance runs, A; AC loads through the inverter (none without one: unserved). */
+  const runningCurrentA = (a: Appliance): number => {
+    const w = a.quantity * a.runningW;
+    if (a.circuit !== 'ac') return w / battery.nominalV;
+    return inverter ? inverterDcDrawW(w, inverter.efficiency, 0, true) / battery.nominalV : 0;
+  };
+  const i20 = battery.capacityAh / 20;
   // Appliance by appliance over all steps: each step's totals still add the appliances in list order.
   for (let j = 0; j < appliances.length; j++) {
     const a = appliances[j];
@@ -317,6 +330,9 @@ function fillLoads(p: Prepared): void {
     // Off with no standby draw, a step adds exactly 0 to every total (which are never −0), so it is skipped.
     const skipOff = !always && a.standbyW === 0;
     if (skipOff) energy.fill(0);
+    const currentA = runningCurrentA(a);
+    const running = currentA > i20 ? new Float64Array(n) : null;
+    if (running) p.heavy.push({ circuit: isAc ? 'ac' : 'dc', currentA, runningWh: running });
     for (let i = 0; i < n; i++) {
       const sh = always ? 1 : (share[i] ?? 0);
       if (skipOff && sh === 0) continue;
@@ -324,6 +340,7 @@ function fillLoads(p: Prepared): void {
       const dtH = stepH[i] ?? 1;
       const e = applianceEnergyWh(a, runShare, dtH);
       energy[i] = e;
+      if (running) running[i] = applianceRunningWh(a, runShare, dtH);
       total[i] = (total[i] ?? 0) + e;
       if (isAc) {
         if (sh > 0) {
@@ -433,6 +450,7 @@ function allocate(input: EngineInput, n: number): Prepared {
     exposures: [],
     openExposure: resolveExposure({ kind: 'preset', preset: 'open' }),
     applianceStopWh: new Float64Array(0),
+    heavy: [],
   };
 }
 

@@ -5,15 +5,7 @@
 // lives in the model files; this file only orders it. Rule-driven or routine generators step in quarter hours so a
 // mid-hour start is caught.
 import type { FuelModel } from '../schemas/rig';
-import {
-  acceptanceFor,
-  acceptedShare,
-  CHEMISTRY,
-  chargeBlockedByCold,
-  peukertFactor,
-  type Acceptance,
-  type ChemistryPreset,
-} from './battery';
+import { batteryModel, CHEMISTRY, chargeBlockedByCold, type BatteryModel, type ChemistryPreset } from './battery';
 import { CONTINUOUS_SHARE, defaultFuelModel, fuelUse } from './generator';
 import { chargerDcW } from './hookup';
 import { propaneKgFromHeatWh } from './fuel';
@@ -111,9 +103,8 @@ type Rig = {
   p: Prepared;
   s: Scenario;
   chem: ChemistryPreset;
+  battery: BatteryModel;
   capacityWh: number;
-  capacityAh: number;
-  nominalV: number;
   chargeV: number;
   hasInverter: boolean;
   inverterEfficiency: number;
@@ -127,9 +118,6 @@ type Rig = {
   genCapW: number;
   /** Fuel burned by the generator for a run of some hours delivering some Wh, in the fuel's unit. */
   fuelUse: (hours: number, outWh: number) => number;
-  /** Acceptance terms for whole hours and for generator quarters (any other step length is worked out as met). */
-  acceptHour: Acceptance;
-  acceptQuarter: Acceptance;
 };
 
 /**
@@ -220,9 +208,8 @@ function rigOf(p: Prepared, s: Scenario): Rig {
     p,
     s,
     chem,
+    battery: batteryModel(chem, s.capacityWh, rig.battery.nominalV, p),
     capacityWh: s.capacityWh,
-    capacityAh: s.capacityWh / rig.battery.nominalV,
-    nominalV: rig.battery.nominalV,
     chargeV,
     hasInverter: rig.inverter !== null,
     inverterEfficiency: rig.inverter?.efficiency ?? 1,
@@ -235,8 +222,6 @@ function rigOf(p: Prepared, s: Scenario): Rig {
     gen,
     genCapW: gen.kind !== 'none' ? gen.ratedW * CONTINUOUS_SHARE : 0,
     fuelUse: gen.kind !== 'none' ? fuelUse(gen.model, gen.fuelKind) : () => 0,
-    acceptHour: acceptanceFor(chem, 1),
-    acceptQuarter: acceptanceFor(chem, 1 / QUARTERS),
   };
 }
 
@@ -271,11 +256,10 @@ function coverDemand(r: Rig, i: number, solarW: number, f: Flows): void {
   f.demandW = demand;
 }
 
-/** Stage 3a: the battery gives what is left of the demand (Peukert), or runs short. Returns the stored energy. */
-function discharge(r: Rig, dtH: number, stored: number, f: Flows): number {
+/** Stage 3a: the battery gives what is left of the demand (Peukert on each load's running current), or runs short. Returns the stored energy. */
+function discharge(r: Rig, i: number, dtH: number, stored: number, f: Flows): number {
   const need = f.demandW * dtH;
-  const removal =
-    (need / r.chem.dischargeEfficiency) * peukertFactor(f.demandW / r.nominalV, r.capacityAh, r.chem.peukertK);
+  const removal = r.battery.removalWh(need, i, f.dcW, f.invDcW);
   if (removal <= stored) {
     f.batLoss += removal - need;
     f.flow -= need;
@@ -288,17 +272,10 @@ function discharge(r: Rig, dtH: number, stored: number, f: Flows): number {
   return 0;
 }
 
-function acceptance(r: Rig, dtH: number): Acceptance {
-  if (dtH === 1) return r.acceptHour;
-  return dtH === 1 / QUARTERS ? r.acceptQuarter : acceptanceFor(r.chem, dtH);
-}
-
 /** Stage 3b: what the sources have left charges the battery, up to what it accepts. Returns the stored energy. */
 function charge(r: Rig, i: number, dtH: number, stored: number, solarW: number, f: Flows): number {
   const cold = chargeBlockedByCold(r.chem.lithium, r.batteryHeated, r.p.ambientC[i] ?? 20);
-  const acceptWh = cold
-    ? 0
-    : (acceptedShare(stored / r.capacityWh, acceptance(r, dtH)) * r.capacityWh) / r.chem.chargeEfficiency;
+  const acceptWh = cold ? 0 : r.battery.acceptWh(stored, dtH);
   let room = acceptWh;
   f.solarToBatWh = Math.min((solarW - f.solarToLoadW) * dtH, room);
   room -= f.solarToBatWh;
@@ -340,7 +317,7 @@ function runStep(r: Rig, i: number, dtH: number, stored: number, genOn: boolean,
   serveAc(r, i, genOn, f);
   f.shortWh = r.hasInverter ? 0 : f.invAcW * dtH;
   coverDemand(r, i, solarW, f);
-  const next = f.demandW > 0 ? discharge(r, dtH, stored, f) : charge(r, i, dtH, stored, solarW, f);
+  const next = f.demandW > 0 ? discharge(r, i, dtH, stored, f) : charge(r, i, dtH, stored, solarW, f);
   book(r, dtH, genOn, f);
   return next;
 }
