@@ -22,11 +22,13 @@ export {
   groundReflected,
   hayDaviesSkyDiffuse,
   planeOfArray,
+  poaComponents,
   skyViewOfTilt,
   groundViewOfTilt,
 } from './transposition';
 export { resolveExposure, beamFactor, diffuseFactor, horizonAt, skyViewFromHorizon } from './site-exposure';
 export { noctCellTempC, effectiveNoctC, pvDcPowerW, FLUSH_EXTRA_C } from './pv-module';
+export { martinRuizIam, martinRuizDiffuse, MARTIN_RUIZ_AR } from './iam';
 export { arrayOutput, controllerLimitW, moduleClassFor, pwmShareOfRated } from './charge-controller';
 export { currentAt, deSotoParams, maxPowerPoint, openCircuitV, MODULE_CLASSES } from './single-diode';
 export { CHEMISTRY, peukertRuntimeH, peukertFactor, acceptanceLimitShare, chargeBlockedByCold } from './battery';

@@ -1,16 +1,25 @@
 // Solar available at the battery bus for every step of one sky scenario: clear sky × sky clearness, split by
 // Erbs, shaded by the site's exposure, transposed onto each array (Hay–Davies or isotropic, plus ground
-// reflection), through the module and controller models. The sky-independent geometry (incidence, beam ratio,
+// reflection), through the glass (Martin & Ruiz incidence losses: beam and circumsolar at the angle of incidence,
+// sky and ground diffuse by their integrals), the module and the controller models. The sky-independent geometry (incidence, beam ratio,
 // shading) is computed once per trip and reused by every scenario; the inner loop calls the models and allocates
 // nothing.
 import { CHEMISTRY } from './battery';
 import { arrayOutput, controllerLimitW, type ArrayOutput } from './charge-controller';
 import { erbsInto, type Split } from './decomposition';
+import { martinRuizDiffuse, martinRuizIam } from './iam';
 import { SAMPLES, type Prepared } from './prepare';
 import { effectiveNoctC, noctCellTempC } from './pv-module';
 import { beamFactor, diffuseFactor } from './site-exposure';
 import { shiftSky, SKY_CLEARNESS } from './sky-outlook';
-import { beamRatio, cosIncidence, groundViewOfTilt, hayDaviesSky, skyViewOfTilt } from './transposition';
+import {
+  beamRatio,
+  cosIncidence,
+  groundViewOfTilt,
+  hayDaviesCircumsolar,
+  hayDaviesIsotropic,
+  skyViewOfTilt,
+} from './transposition';
 
 const SIMPSON = [1 / 6, 4 / 6, 1 / 6] as const;
 
@@ -22,9 +31,11 @@ export type SolarSeries = {
 };
 
 type ArrayModel = {
-  tilted: boolean;
   skyView: number;
   groundView: number;
+  /** Incidence modifiers of sky and ground diffuse for the array's tilt. */
+  skyIam: number;
+  groundIam: number;
   noctC: number;
   output: ArrayOutput;
 };
@@ -35,8 +46,8 @@ type Geometry = {
   cosZ: Float64Array; // per sample
   beamF: Float64Array; // per sample
   diffF: Float64Array; // per step
-  cosInc: Float64Array; // per sample × array, clamped at 0 (tilted arrays only; flat arrays take GHI)
-  rb: Float64Array; // per sample × array, Hay–Davies beam ratio (tilted arrays only)
+  cosInc: Float64Array; // per sample × array, clamped at 0
+  rb: Float64Array; // per sample × array, Hay–Davies beam ratio
   capW: number;
   /** The planned sky's series, kept so the band can copy the steps whose sky the shift leaves unchanged. */
   planned: SolarSeries | null;
@@ -50,10 +61,12 @@ function arrayModels(p: Prepared): { arrays: ArrayModel[]; capW: number } {
   const ctrl = rig.controller;
   const arrays = rig.solarArrays.map((a) => {
     const tilt = a.mounting === 'flat' ? 0 : a.tiltDeg;
+    const iam = martinRuizDiffuse(tilt);
     return {
-      tilted: tilt > 0,
       skyView: skyViewOfTilt(tilt),
       groundView: groundViewOfTilt(tilt),
+      skyIam: iam.sky,
+      groundIam: iam.ground,
       noctC: effectiveNoctC(a.noctC, a.fit),
       output: ctrl ? arrayOutput(ctrl, a, chargeV) : () => 0,
     };
@@ -80,9 +93,11 @@ function geometry(p: Prepared): Geometry {
     rb: new Float64Array(buf, 8 * (ns + p.n + ns * m), ns * m),
     planned: null,
   };
-  const panels = p.input.rig.solarArrays
-    .map((a, j) => ({ j, tiltDeg: a.mounting === 'tilted' ? a.tiltDeg : 0, azimuthDeg: a.azimuthDeg }))
-    .filter((panel) => arrays[panel.j]?.tilted);
+  const panels = p.input.rig.solarArrays.map((a, j) => ({
+    j,
+    tiltDeg: a.mounting === 'tilted' ? a.tiltDeg : 0,
+    azimuthDeg: a.azimuthDeg,
+  }));
   const stopDiffuse = p.exposures.map((e) => diffuseFactor(e));
   // Above the highest obstruction the beam is never blocked, so beamFactor's sector look-up is only needed below it.
   const stopTop = p.exposures.map((e) => Math.max(...e.horizonDeg));
@@ -101,7 +116,6 @@ function geometry(p: Prepared): Geometry {
       if (alt <= 0) continue;
       const az = azs[k] ?? 180;
       beamF[k] = alt >= top ? 1 : beamFactor(exp, alt, az);
-      if (panels.length === 0) continue;
       for (const panel of panels) {
         const ci = Math.max(0, cosIncidence(90 - alt, az, panel.tiltDeg, panel.azimuthDeg));
         cosInc[k * m + panel.j] = ci;
@@ -156,18 +170,21 @@ export function solarSeries(p: Prepared, skyShift: number): SolarSeries {
       const dni = split.dni * (beamF[k] ?? 1);
       const dhi = split.dhi * diff;
       const ghi = dni * cz + dhi;
-      const ai = dni / dniExtra;
+      const ai = hayDavies ? dni / dniExtra : 0; // isotropic sky: no circumsolar share
       let sampleW = 0;
       for (let j = 0; j < m; j++) {
         const a = arrays[j];
         if (!a) continue;
-        let poa = ghi;
-        if (a.tilted) {
-          const sky = hayDavies ? hayDaviesSky(dhi, ai, rb[k * m + j] ?? 0, a.skyView) : dhi * a.skyView;
-          poa = dni * (cosInc[k * m + j] ?? 0) + sky + ghi * rho * a.groundView;
-        }
+        // Plane-of-array irradiance (for the cell temperature and the ledger) and what passes the glass (for power).
+        // A flat array is the tilt-0 case: it sees the GHI.
+        const ci = cosInc[k * m + j] ?? 0;
+        const beam = dni * ci + hayDaviesCircumsolar(dhi, ai, rb[k * m + j] ?? 0);
+        const isotropic = hayDaviesIsotropic(dhi, ai, a.skyView);
+        const ground = ghi * rho * a.groundView;
+        const poa = beam + isotropic + ground;
+        const effective = beam * martinRuizIam(ci) + isotropic * a.skyIam + ground * a.groundIam;
         if (j === 0) poaFirst += (SIMPSON[q] ?? 0) * poa;
-        sampleW += a.output(poa, noctCellTempC(ambient, poa, a.noctC));
+        sampleW += a.output(effective, noctCellTempC(ambient, poa, a.noctC));
       }
       watts += (SIMPSON[q] ?? 0) * Math.min(sampleW, capW);
     }

@@ -42,9 +42,19 @@ export function beamRatio(cosIncidenceClamped: number, cosZenith: number): numbe
   return cosIncidenceClamped / Math.max(cosZenith, 0.01745);
 }
 
+/** Hay–Davies' isotropic part: the share 1 − ai of the diffuse spread over the sky, ai = DNI/DNI_extra. */
+export function hayDaviesIsotropic(dhi: number, ai: number, skyView: number): number {
+  return Math.max(dhi * (1 - ai) * skyView, 0);
+}
+
+/** Hay–Davies' circumsolar part: the share ai of the diffuse arriving from the sun's direction, like beam. */
+export function hayDaviesCircumsolar(dhi: number, ai: number, rb: number): number {
+  return Math.max(dhi * ai * rb, 0);
+}
+
 /** Hay–Davies sky diffuse from anisotropy index ai = DNI/DNI_extra, beam ratio rb and the tilt's sky view. */
 export function hayDaviesSky(dhi: number, ai: number, rb: number, skyView: number): number {
-  return Math.max(dhi * (1 - ai) * skyView, 0) + Math.max(dhi * ai * rb, 0);
+  return hayDaviesIsotropic(dhi, ai, skyView) + hayDaviesCircumsolar(dhi, ai, rb);
 }
 
 export function hayDaviesSkyDiffuse(i: HayDaviesInput): number {
@@ -55,10 +65,23 @@ export function hayDaviesSkyDiffuse(i: HayDaviesInput): number {
 
 export type PoaInput = HayDaviesInput & { ghi: number; reflectance: number; model: 'hay-davies' | 'isotropic' };
 
-/** Total plane-of-array irradiance; a flat panel simply sees GHI. */
+/** Plane-of-array irradiance by where it comes from, W/m²: the beam, circumsolar and isotropic sky, the ground. */
+export type PoaComponents = { beam: number; circumsolar: number; isotropic: number; ground: number };
+
+export function poaComponents(i: PoaInput): PoaComponents {
+  const cosT = Math.max(cosIncidence(i.zenithDeg, i.sunAzDeg, i.tiltDeg, i.surfaceAzDeg), 0);
+  const view = skyViewOfTilt(i.tiltDeg);
+  const ai = i.model === 'hay-davies' && i.dniExtra > 0 ? i.dni / i.dniExtra : 0;
+  return {
+    beam: i.dni * cosT,
+    circumsolar: hayDaviesCircumsolar(i.dhi, ai, beamRatio(cosT, Math.cos(i.zenithDeg * RAD))),
+    isotropic: hayDaviesIsotropic(i.dhi, ai, view),
+    ground: groundReflected(i.ghi, i.reflectance, i.tiltDeg),
+  };
+}
+
+/** Total plane-of-array irradiance; a flat panel sees GHI. */
 export function planeOfArray(i: PoaInput): number {
-  if (i.tiltDeg === 0) return i.ghi;
-  const beam = i.dni * Math.max(cosIncidence(i.zenithDeg, i.sunAzDeg, i.tiltDeg, i.surfaceAzDeg), 0);
-  const sky = i.model === 'hay-davies' ? hayDaviesSkyDiffuse(i) : isotropicSkyDiffuse(i.dhi, i.tiltDeg);
-  return beam + sky + groundReflected(i.ghi, i.reflectance, i.tiltDeg);
+  const c = poaComponents(i);
+  return c.beam + c.circumsolar + c.isotropic + c.ground;
 }
