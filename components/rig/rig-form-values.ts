@@ -88,3 +88,13 @@ export function fuelModelStart(ratedW: number | undefined, fuel: FuelKind | unde
   const m = defaultFuelModel(ratedW && ratedW > 0 ? ratedW : 2000, fuel ?? 'petrol');
   return { idleFuelKwhPerH: round(m.idleFuelKwhPerH, 2), fuelKwhPerKwhOut: round(m.fuelKwhPerKwhOut, 2) };
 }
+
+/** The hours a newly scheduled inverter starts from: a usual waking day, which the person then sets. */
+export const INVERTER_HOURS_START = { startHour: 7, endHour: 23 } as const;
+
+/** What each way of keeping the inverter means for its idle draw, in plain words beside the choice. */
+export const INVERTER_MODE_NOTE: Record<'on-demand' | 'scheduled' | 'always', string> = {
+  'on-demand': 'Its idle draw counts only in hours when an AC appliance runs from the battery.',
+  scheduled: 'Its idle draw counts every day in these hours, and whenever an AC appliance runs outside them.',
+  always: 'Its idle draw counts every hour of the trip.',
+};

@@ -22,7 +22,7 @@ import { useUnits } from '@/stores/units-store';
 import { GeneratorFields } from './generator-fields';
 import { BATTERY_PRESETS, GENERATOR_PRESETS, INVERTER_PRESETS, SOLAR_PRESETS, TANK_PRESETS } from './part-presets';
 import { Advanced, Num, Presets, Section } from './rig-fields';
-import { newSolarArray, percentOfFraction } from './rig-form-values';
+import { INVERTER_HOURS_START, INVERTER_MODE_NOTE, newSolarArray, percentOfFraction } from './rig-form-values';
 import { SolarArrayFields } from './solar-array-fields';
 
 /** The trip's rig in grouped sections; saved as one record with its version. */
@@ -313,14 +313,46 @@ export function RigForm({ tripId, record, canEdit }: { tripId: string; record: R
                   label="Switched on"
                   disabled={off}
                   value={field.value ?? 'on-demand'}
-                  onChange={field.onChange}
+                  onChange={(mode) => {
+                    field.onChange(mode);
+                    if (mode === 'scheduled' && !inverter.onHours)
+                      setValue('inverter.onHours', { ...INVERTER_HOURS_START }, { shouldDirty: true });
+                  }}
                   options={[
                     { value: 'on-demand', label: 'Only when AC is used' },
+                    { value: 'scheduled', label: 'In set hours' },
                     { value: 'always', label: 'All the time' },
                   ]}
                 />
               )}
             />
+            {inverter.mode === 'scheduled' ? (
+              <View style={styles.grid}>
+                <Num
+                  control={control}
+                  disabled={off}
+                  name="inverter.onHours.startHour"
+                  label="On from"
+                  unit="h"
+                  range={[0, 24]}
+                  hint="local hour, 0–24"
+                  testID="rig-inverter-on-from"
+                />
+                <Num
+                  control={control}
+                  disabled={off}
+                  name="inverter.onHours.endHour"
+                  label="Off at"
+                  unit="h"
+                  range={[0, 24]}
+                  hint="an earlier hour runs past midnight"
+                  testID="rig-inverter-off-at"
+                />
+              </View>
+            ) : null}
+            <Text variant="caption" color="inkSoft">
+              {INVERTER_MODE_NOTE[inverter.mode ?? 'on-demand']}
+            </Text>
             <Advanced what="inverter losses" testID="rig-inverter-advanced">
               <View style={styles.grid}>
                 <Num
@@ -330,7 +362,7 @@ export function RigForm({ tripId, record, canEdit }: { tripId: string; record: R
                   label="Efficiency"
                   shown={percentOfFraction}
                   range={[0.5, 1]}
-                  hint="share of battery power that comes out as AC"
+                  hint="at its best load; light loads get less"
                   testID="rig-inverter-efficiency"
                 />
                 <Num
@@ -340,7 +372,7 @@ export function RigForm({ tripId, record, canEdit }: { tripId: string; record: R
                   label="Idle draw"
                   unit="W"
                   range={[0, 200]}
-                  hint={inverter.mode === 'always' ? 'drawn every hour of the trip' : 'drawn in hours with AC load'}
+                  hint="drawn whenever it is switched on"
                   testID="rig-inverter-idle"
                 />
               </View>

@@ -4,7 +4,7 @@ import { CHEMISTRY } from './battery';
 import { ceilHalf, hhmm, kwh, localIso, localShort, utcIso, whereAt, whereText } from './describe';
 import { CONTINUOUS_SHARE } from './generator';
 import { chargerDcW } from './hookup';
-import { dcCurrentA } from './inverter';
+import { dcCurrentA, inverterDcDrawW } from './inverter';
 import { onShare } from './loads';
 import { prevDayType, type Prepared } from './prepare';
 import type { Fix, Flag } from './result-types';
@@ -254,7 +254,7 @@ function cablingFlags(ctx: FlagContext): Flag[] {
   const { p } = ctx;
   const inv = p.input.rig.inverter;
   if (!inv) return [];
-  const amps = dcCurrentA(inv.ratedW / inv.efficiency, p.input.rig.battery.nominalV);
+  const amps = dcCurrentA(inverterDcDrawW(inv, inv.ratedW, 1), p.input.rig.battery.nominalV);
   if (amps < HIGH_CURRENT_A) return [];
   const where = whereAt(p, 0);
   return [

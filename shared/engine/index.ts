@@ -32,7 +32,7 @@ export { martinRuizIam, martinRuizDiffuse, MARTIN_RUIZ_AR } from './iam';
 export { arrayOutput, controllerLimitW, moduleClassFor, pwmShareOfRated } from './charge-controller';
 export { currentAt, deSotoParams, maxPowerPoint, openCircuitV, MODULE_CLASSES } from './single-diode';
 export { CHEMISTRY, peukertRuntimeH, peukertFactor, acceptanceLimitShare, chargeBlockedByCold } from './battery';
-export { inverterDcDrawW, dcCurrentA, checkOverload } from './inverter';
+export { inverterDcDrawW, dcCurrentA, checkOverload, pvwattsAcW, pvwattsDcW, PVWATTS_ETA_REF } from './inverter';
 export { thermostatDuty, applianceStep } from './loads';
 export { ambientC } from './temperature-curve';
 export { hookupCapacityW, chargerDcW } from './hookup';

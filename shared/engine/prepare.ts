@@ -3,7 +3,7 @@
 // sunset inside an hour are weighed properly), and the appliance loads. Scenarios (sky band, headroom) reuse it.
 import type { EngineInput } from '../schemas/engine-input';
 import type { Appliance } from '../schemas/appliance';
-import type { DayType } from '../schemas/common';
+import type { DayType, RoutineWindow } from '../schemas/common';
 import type { Stop } from '../schemas/trip';
 import { haurwitzGhi, ineichenPerez, kastenYoungAirMass, pressureRatio } from './clear-sky';
 import type { HeavyLoad } from './battery';
@@ -65,6 +65,8 @@ export type Prepared = {
   acRunningW: Float64Array;
   acSurgeExtraW: Float64Array;
   acStandbyOn: Uint8Array;
+  /** Share of the step inside the hours the inverter is kept on (scheduled inverters). */
+  inverterOnShare: Float64Array;
   /** Electric Wh of appliance a at stop w: index a × stops + w, for routine appliances (the loads a flag may suggest moving). */
   applianceStopWh: Float64Array;
   /** Loads whose running current passes the bank's 20-hour current, with their running energy per step (Peukert). */
@@ -313,7 +315,7 @@ function fillLoads(p: Prepared): void {
   const runningCurrentA = (a: Appliance): number => {
     const w = a.quantity * a.runningW;
     if (a.circuit !== 'ac') return w / battery.nominalV;
-    return inverter ? inverterDcDrawW(w, inverter.efficiency, 0, true) / battery.nominalV : 0;
+    return inverter ? inverterDcDrawW(inverter, w, 0) / battery.nominalV : 0;
   };
   const i20 = battery.capacityAh / 20;
   // Appliance by appliance over all steps: each step's totals still add the appliances in list order.
@@ -400,11 +402,27 @@ function fillGenerator(p: Prepared, stops: readonly Stop[]): void {
   }
 }
 
+/** The hours a scheduled inverter is kept on, as a routine window over every day. */
+function fillInverterHours(p: Prepared): void {
+  const inv = p.input.rig.inverter;
+  if (inv?.mode !== 'scheduled' || !inv.onHours) return;
+  const { startHour, endHour } = inv.onHours;
+  const hours = startHour === endHour ? 0 : (endHour - startHour + 24) % 24 || 24;
+  if (hours === 0) return;
+  const window: RoutineWindow = {
+    days: { kind: 'all' },
+    startHour: startHour % 24,
+    startMinute: 0,
+    minutes: hours * 60,
+  };
+  for (let i = 0; i < p.n; i++) p.inverterOnShare[i] = windowsShare([window], localStep(p, i), prevDayType(p, i));
+}
+
 function allocate(input: EngineInput, n: number): Prepared {
   // All step columns are views into one ArrayBuffer: one allocation instead of thirty. 8-byte columns first,
   // then 4-, 2- and 1-byte ones, so every view starts aligned. A column added below without counting it here
   // makes the view constructor throw at once.
-  const f64 = 16 + 4 * SAMPLES;
+  const f64 = 17 + 4 * SAMPLES;
   const buf = new ArrayBuffer(n * (8 * f64 + 4 * 1 + 2 * 2 + 1 * 4));
   let at = 0;
   const view = <T>(make: (b: ArrayBuffer, offset: number, length: number) => T, bytes: number, length: number): T => {
@@ -439,6 +457,7 @@ function allocate(input: EngineInput, n: number): Prepared {
     heatWh: f(),
     acRunningW: f(),
     acSurgeExtraW: f(),
+    inverterOnShare: f(),
     dayIndex: i32(),
     where: i16(),
     stopOf: i16(),
@@ -466,6 +485,7 @@ export function prepare(input: EngineInput): Prepared {
   fillSun(p, stops, input.options.solarConstantWm2);
   fillLoads(p);
   fillGenerator(p, stops);
+  fillInverterHours(p);
   for (let i = 0; i < p.n; i++) {
     const w = p.where[i] ?? -1;
     const h = w >= 0 ? stops[w]?.hookup : null;

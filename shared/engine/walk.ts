@@ -8,6 +8,7 @@ import type { FuelModel } from '../schemas/rig';
 import { batteryModel, CHEMISTRY, chargeBlockedByCold, type BatteryModel, type ChemistryPreset } from './battery';
 import { CONTINUOUS_SHARE, defaultFuelModel, fuelUse } from './generator';
 import { chargerDcW } from './hookup';
+import { inverterDraw } from './inverter';
 import { propaneKgFromHeatWh } from './fuel';
 import { QUARTERS, type Prepared } from './prepare';
 import { vehicleChargeW } from './vehicle-charging';
@@ -107,8 +108,8 @@ type Rig = {
   capacityWh: number;
   chargeV: number;
   hasInverter: boolean;
-  inverterEfficiency: number;
-  inverterIdleW: number;
+  /** DC the inverter draws for an AC output while on for a share of the step. */
+  inverterDraw: (acW: number, onShare: number) => number;
   inverterAlwaysOn: boolean;
   chargerAmps: number;
   chargerEfficiency: number;
@@ -212,8 +213,7 @@ function rigOf(p: Prepared, s: Scenario): Rig {
     capacityWh: s.capacityWh,
     chargeV,
     hasInverter: rig.inverter !== null,
-    inverterEfficiency: rig.inverter?.efficiency ?? 1,
-    inverterIdleW: rig.inverter?.idleW ?? 0,
+    inverterDraw: rig.inverter ? inverterDraw(rig.inverter) : () => 0,
     inverterAlwaysOn: rig.inverter?.mode === 'always',
     chargerAmps: rig.shoreCharger?.amps ?? 0,
     chargerEfficiency: rig.shoreCharger?.efficiency ?? 1,
@@ -225,7 +225,8 @@ function rigOf(p: Prepared, s: Scenario): Rig {
   };
 }
 
-/** Stage 1: the AC load goes to the hookup first, then a running generator, and the rest through the inverter. */
+/** Stage 1: the AC load goes to the hookup first, then a running generator, and the rest through the inverter
+ * (its part-load curve plus idle draw while on). */
 function serveAc(r: Rig, i: number, genOn: boolean, f: Flows): void {
   const p = r.p;
   const hookW = r.s.hookupW[i] ?? 0;
@@ -234,8 +235,9 @@ function serveAc(r: Rig, i: number, genOn: boolean, f: Flows): void {
   f.genAcW = Math.min(f.acW - f.hookAcW, genCapW);
   f.invAcW = f.acW - f.hookAcW - f.genAcW;
   f.hookSpareW = hookW - f.hookAcW;
-  const on = f.invAcW > 0 || r.inverterAlwaysOn || (p.acStandbyOn[i] ?? 0) > 0;
-  f.invDcW = r.hasInverter && on ? f.invAcW / r.inverterEfficiency + r.inverterIdleW : 0;
+  // On for the whole step when AC loads use it or it is always on; otherwise for its set hours, if any.
+  const onShare = f.invAcW > 0 || r.inverterAlwaysOn || (p.acStandbyOn[i] ?? 0) > 0 ? 1 : (p.inverterOnShare[i] ?? 0);
+  f.invDcW = r.inverterDraw(f.invAcW, onShare);
   // Without an inverter nothing can run AC loads off the battery: they go unserved.
   f.chargerW =
     r.chargerAmps > 0

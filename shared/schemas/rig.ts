@@ -1,6 +1,6 @@
 // Rig contract: the power system a trip runs on.
 import { z } from 'zod';
-import { fractionSchema, percentSchema, positiveSchema, routineWindowSchema } from './common';
+import { fractionSchema, localHourSchema, percentSchema, positiveSchema, routineWindowSchema } from './common';
 
 export const chemistrySchema = z.enum(['lifepo4', 'agm', 'flooded']);
 export type Chemistry = z.infer<typeof chemistrySchema>;
@@ -46,15 +46,29 @@ export const controllerSchema = z.object({
 });
 export type Controller = z.infer<typeof controllerSchema>;
 
-export const inverterSchema = z.object({
-  ratedW: positiveSchema.max(20_000),
-  surgeW: positiveSchema.max(60_000).optional(),
-  efficiency: z.number().min(0.5).max(1).default(0.9),
-  idleW: z.number().min(0).max(200).default(10),
-  /** on-demand: idle draw only in hours with AC load on the battery; always: on the whole trip. */
-  mode: z.enum(['on-demand', 'always']).default('on-demand'),
-});
+/** Local hours the inverter is kept on; endHour < startHour means the window crosses midnight. */
+export const inverterHoursSchema = z.object({ startHour: localHourSchema, endHour: localHourSchema });
+
+export const inverterSchema = z
+  .object({
+    ratedW: positiveSchema.max(20_000),
+    surgeW: positiveSchema.max(60_000).optional(),
+    /** Nominal (peak) efficiency; light loads get less, along the part-load curve. */
+    efficiency: z.number().min(0.5).max(1).default(0.9),
+    idleW: z.number().min(0).max(200).default(10),
+    /**
+     * on-demand: switched on only in hours with AC load on the battery; always: on the whole trip; scheduled: on in
+     * `onHours` every day (and whenever AC loads run).
+     */
+    mode: z.enum(['on-demand', 'always', 'scheduled']).default('on-demand'),
+    onHours: inverterHoursSchema.optional(),
+  })
+  .refine((inv) => inv.mode !== 'scheduled' || inv.onHours !== undefined, {
+    message: 'Give the hours the inverter is kept on',
+    path: ['onHours'],
+  });
 export type Inverter = z.infer<typeof inverterSchema>;
+export type InverterInput = z.input<typeof inverterSchema>;
 
 export const shoreChargerSchema = z.object({
   amps: positiveSchema.max(500),

@@ -1,6 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import {
   fuelModelStart,
+  INVERTER_HOURS_START,
+  INVERTER_MODE_NOTE,
   generatorModeFor,
   newSolarArray,
   panelTemperature,
@@ -130,6 +132,19 @@ describe('rig form figures', () => {
     });
     expect(result.success).toBe(false);
     expect(result.error?.issues[0]?.path).toEqual(['generator', 'mode', 'stopAboveSocPct']);
+  });
+
+  it('when the inverter is kept on in set hours but none are given, then the message lands on the hours', () => {
+    const rig = { name: 'R', battery: { chemistry: 'agm', capacityAh: 100, nominalV: 12 } } as const;
+    const without = rigSchema.safeParse({ ...rig, inverter: { ratedW: 2000, mode: 'scheduled' } });
+    expect(without.success).toBe(false);
+    expect(without.error?.issues[0]?.path).toEqual(['inverter', 'onHours']);
+    const withHours = rigSchema.safeParse({
+      ...rig,
+      inverter: { ratedW: 2000, mode: 'scheduled', onHours: { ...INVERTER_HOURS_START } },
+    });
+    expect(withHours.success).toBe(true);
+    expect(INVERTER_MODE_NOTE.scheduled).toMatch(/these hours/);
   });
 });
 

@@ -1,7 +1,7 @@
 // Peukert's law (Peukert 1897; CHECK-VALUES §7) applied to the current while each load runs, and a lead-acid
 // capacity rated at the 20-hour rate taken without a second discharge-efficiency cut.
 import { describe, expect, it } from 'vitest';
-import { CHEMISTRY, peukertFactor, peukertRuntimeH, simulateTrip } from '@/shared/engine';
+import { CHEMISTRY, peukertFactor, peukertRuntimeH, pvwattsDcW, simulateTrip } from '@/shared/engine';
 import type { ApplianceInput, EngineInputDraft } from '@/shared/schemas';
 import { simpleTrip } from './trip-builder';
 
@@ -38,7 +38,7 @@ describe('Peukert arithmetic (Peukert 1897; CHECK-VALUES §7, S/C)', () => {
     [0.2, 240, 1],
     [1, 1200, 0.25],
   ])(
-    'when a flooded 100 Ah, 12 V bank carries a steady %s C for %s h, then it loses capacity × time ÷ Peukert run time',
+    'when a flooded 100 Ah, 12 V bank carries a steady %s C (%s W) for %s h, then it loses capacity × time ÷ Peukert run time',
     (_c, watts, hours) => {
       const load: ApplianceInput = {
         id: 'l',
@@ -94,7 +94,7 @@ describe('Peukert on the current while each load runs', () => {
     const row = r.ledger[0];
     const dcWh = (row?.acLoadWh ?? 0) + (row?.inverterLossWh ?? 0);
     const removed = 2400 - (row?.storedWh ?? 0);
-    const runningA = 1300 / 0.9 / 12; // through a 90 % inverter: 120.4 A
+    const runningA = pvwattsDcW(1300, 2000, 0.9) / 12; // through the 2,000 W inverter's curve: about 121 A
     expect(removed / dcWh).toBeCloseTo(peukertFactor(runningA, 200, CHEMISTRY.flooded.peukertK), 6);
     expect(removed / dcWh).toBeGreaterThan(1.2 * peukertFactor(runningA / 3, 200, CHEMISTRY.flooded.peukertK));
   });
