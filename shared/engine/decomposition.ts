@@ -9,7 +9,8 @@ const COS_MAX_ZENITH = Math.cos(MAX_ZENITH_DEG * RAD);
 
 export function erbsDiffuseFraction(kt: number): number {
   if (kt <= 0.22) return 1 - 0.09 * kt;
-  if (kt <= 0.8) return 0.9511 - 0.1604 * kt + 4.388 * kt ** 2 - 16.638 * kt ** 3 + 12.336 * kt ** 4;
+  // 0.9511 − 0.1604 kt + 4.388 kt² − 16.638 kt³ + 12.336 kt⁴, in Horner's form
+  if (kt <= 0.8) return 0.9511 + kt * (-0.1604 + kt * (4.388 + kt * (-16.638 + kt * 12.336)));
   return 0.165;
 }
 
@@ -35,4 +36,9 @@ export function erbs(ghi: number, zenithDeg: number, dniExtra: number): Irradian
   const out: Split = { dni: 0, dhi: 0, kt: 0 };
   erbsInto(ghi, Math.cos(zenithDeg * RAD), dniExtra, out);
   return { ghi: ghi > 0 ? ghi : 0, dni: out.dni, dhi: out.dhi, kt: out.kt };
+}
+
+/** erbsInto for a loop over many samples. */
+export function erbsSplitter(): (ghi: number, cosZenith: number, dniExtra: number, out: Split) => void {
+  return (ghi, cosZenith, dniExtra, out) => erbsInto(ghi, cosZenith, dniExtra, out);
 }

@@ -29,3 +29,12 @@ export function martinRuizDiffuse(tiltDeg: number, aR = MARTIN_RUIZ_AR): { sky: 
   const ground = tiltDeg <= 0 ? 0 : diffuseIam(sinBeta + (beta - sinBeta) / (1 - Math.cos(beta)), aR);
   return { sky, ground };
 }
+
+/**
+ * What passes one surface's glass, for a loop over many samples: beam (and circumsolar) at the angle of incidence,
+ * sky and ground diffuse by the integrals for the surface's tilt.
+ */
+export function glassOf(tiltDeg: number): (beam: number, sky: number, ground: number, cosInc: number) => number {
+  const diffuse = martinRuizDiffuse(tiltDeg);
+  return (beam, sky, ground, cosInc) => beam * martinRuizIam(cosInc) + sky * diffuse.sky + ground * diffuse.ground;
+}

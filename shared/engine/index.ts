@@ -11,7 +11,7 @@ export {
 export { DEMO_TRIPS, highlandLoop, desertSpringLoop } from './demo-trips';
 export type * from './result-types';
 export type { HeadroomResult, HeadroomLever } from './headroom';
-export { sunPosition, cooperDeclinationDeg, sunFromHourAngle, dayOfYearUtc } from './sun-position';
+export { sunPosition, sunPositionWithTrue, cooperDeclinationDeg, sunFromHourAngle, dayOfYearUtc } from './sun-position';
 export { spencerFactor, extraterrestrialW } from './extraterrestrial';
 export { haurwitzGhi, ineichenPerez, kastenYoungAirMass, pressureRatio } from './clear-sky';
 export { SKY_CLEARNESS, SKY_ORDER, shiftSky } from './sky-outlook';

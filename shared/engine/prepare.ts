@@ -1,6 +1,7 @@
 // Precomputation shared by every scenario of one trip: the time grid, where each hour is, local time, ambient
-// temperature, sun geometry and clear-sky irradiance (three samples per hour, Simpson's rule, so sunrise and
-// sunset inside an hour are weighed properly), and the appliance loads. Scenarios (sky band, headroom) reuse it.
+// temperature, sun geometry and clear-sky irradiance, and the appliance loads. Scenarios (sky band, headroom) reuse
+// it. The sun is sampled at the start, middle and end of each lit step (Simpson's rule); in a step where it crosses
+// the horizon, every five minutes (composite Simpson), so a sunrise or sunset inside the hour is weighed properly.
 import type { EngineInput } from '../schemas/engine-input';
 import type { Appliance } from '../schemas/appliance';
 import type { DayType, RoutineWindow } from '../schemas/common';
@@ -24,8 +25,24 @@ import {
   type Segment,
 } from './time-grid';
 
-export const SAMPLES = 3; // start, middle, end of each step
 export const QUARTERS = 4; // generator sub-steps
+/** Composite Simpson panels in a step where the sun crosses the horizon: 2 × 6 intervals of five minutes. */
+const HORIZON_PANELS = 6;
+
+/** Sun samples of the trip, lit ones only: step i owns [start[i], start[i + 1]), each with its share of the step. */
+export type SunSamples = {
+  start: Int32Array;
+  /** Simpson weight: the samples of a fully lit step add up to 1. */
+  weight: Float64Array;
+  atMs: Float64Array;
+  /** Apparent (refraction-corrected) altitude and azimuth from north, degrees. */
+  altDeg: Float64Array;
+  azDeg: Float64Array;
+  /** Cosine of the apparent zenith (the beam's direction) and of the true zenith (for the decomposition). */
+  cosZ: Float64Array;
+  cosZTrue: Float64Array;
+  ghiClear: Float64Array;
+};
 
 export type Prepared = {
   input: EngineInput;
@@ -47,11 +64,7 @@ export type Prepared = {
   lat: Float64Array;
   lon: Float64Array;
   sunAltMid: Float64Array;
-  /** Per sample (n × SAMPLES): sun altitude, azimuth, clear-sky GHI, and cos of the zenith (0 with the sun down). */
-  alt: Float64Array;
-  az: Float64Array;
-  ghiClear: Float64Array;
-  cosZ: Float64Array;
+  sun: SunSamples;
   dniExtra: Float64Array;
   exposures: ResolvedExposure[];
   openExposure: ResolvedExposure;
@@ -173,13 +186,30 @@ function dniExtraAt(c: DayCache, utcMs: number, solarConstant: number): number {
   return c.dniExtra;
 }
 
+type SampleLists = { [K in Exclude<keyof SunSamples, 'start'>]: number[] };
+
 function fillSun(p: Prepared, stops: readonly Stop[], solarConstant: number): void {
-  const pos = new Float64Array(6); // start, middle, end: altitude and azimuth each
+  const pos = new Float64Array(9); // start, middle, end: apparent altitude, azimuth, true altitude each
+  const at = new Float64Array(3);
   const days: DayCache = { yearStartMs: Number.NaN, nextYearMs: Number.NaN, day: Number.NaN, dniExtra: 0 };
+  const start = new Int32Array(p.n + 1);
+  const lists: SampleLists = { weight: [], atMs: [], altDeg: [], azDeg: [], cosZ: [], cosZTrue: [], ghiClear: [] };
+  const add = (stop: Stop | undefined, ms: number, w: number, v: Float64Array, k: number, dniExtra: number) => {
+    const alt = v[k] ?? 0;
+    if (alt <= 0) return; // below the horizon: no light, no sample
+    lists.weight.push(w);
+    lists.atMs.push(ms);
+    lists.altDeg.push(alt);
+    lists.azDeg.push(v[k + 1] ?? 0);
+    lists.cosZ.push(Math.cos((90 - alt) * RAD));
+    lists.cosZTrue.push(Math.cos((90 - (v[k + 2] ?? 0)) * RAD));
+    lists.ghiClear.push(clearSkyGhi(stop, alt, dniExtra));
+  };
   let prevEndMs = Number.NaN;
   let prevLat = Number.NaN;
   let prevLon = Number.NaN;
   for (let i = 0; i < p.n; i++) {
+    start[i] = lists.weight.length;
     const t = p.startMs[i] ?? 0;
     const dt = (p.stepH[i] ?? 1) * HOUR_MS;
     const lat = p.lat[i] ?? 0;
@@ -187,34 +217,52 @@ function fillSun(p: Prepared, stops: readonly Stop[], solarConstant: number): vo
     const stop = stops[p.stopOf[i] ?? 0];
     const dniExtra = dniExtraAt(days, t, solarConstant);
     p.dniExtra[i] = dniExtra;
-    sunPositionInto(t + dt / 2, lat, lon, pos, 2);
-    const midAlt = pos[2] ?? 0;
-    p.sunAltMid[i] = midAlt;
-    const k = i * SAMPLES;
+    sunPositionInto(t + dt / 2, lat, lon, pos, 3);
+    p.sunAltMid[i] = pos[3] ?? 0;
     // The sun moves under 8° in half an hour: well below the horizon at mid-step, the whole step is dark.
-    if (midAlt < -8) {
-      for (let s = 0; s < SAMPLES; s++) p.alt[k + s] = -90;
+    if ((pos[3] ?? 0) < -8) {
       prevEndMs = Number.NaN;
       continue;
     }
     // The previous step's end is this step's start when the rig has not moved: reuse it.
-    if (prevEndMs === t && prevLat === lat && prevLon === lon) {
-      pos[0] = pos[4] ?? 0;
-      pos[1] = pos[5] ?? 0;
-    } else sunPositionInto(t, lat, lon, pos, 0);
-    sunPositionInto(t + dt, lat, lon, pos, 4);
-    for (let s = 0; s < SAMPLES; s++) {
-      const alt = pos[2 * s] ?? 0;
-      p.alt[k + s] = alt;
-      p.az[k + s] = pos[2 * s + 1] ?? 0;
-      const cz = alt > 0 ? Math.cos((90 - alt) * RAD) : 0;
-      p.cosZ[k + s] = cz;
-      p.ghiClear[k + s] = clearSkyGhi(stop, alt, dniExtra);
-    }
+    if (prevEndMs === t && prevLat === lat && prevLon === lon) pos.copyWithin(0, 6, 9);
+    else sunPositionInto(t, lat, lon, pos, 0);
+    sunPositionInto(t + dt, lat, lon, pos, 6);
     prevEndMs = t + dt;
     prevLat = lat;
     prevLon = lon;
+    const lit = [pos[0] ?? 0, pos[3] ?? 0, pos[6] ?? 0].filter((alt) => alt > 0).length;
+    if (lit === 3) {
+      add(stop, t, 1 / 6, pos, 0, dniExtra);
+      add(stop, t + dt / 2, 4 / 6, pos, 3, dniExtra);
+      add(stop, t + dt, 1 / 6, pos, 6, dniExtra);
+    } else if (lit > 0) {
+      // The sun crosses the horizon in this step: composite Simpson over 2 × HORIZON_PANELS intervals.
+      const intervals = 2 * HORIZON_PANELS;
+      for (let q = 0; q <= intervals; q++) {
+        const ms = t + (q * dt) / intervals;
+        const w = (q === 0 || q === intervals ? 1 : q % 2 === 1 ? 4 : 2) / (3 * intervals);
+        if (q === 0) add(stop, ms, w, pos, 0, dniExtra);
+        else if (q === HORIZON_PANELS) add(stop, ms, w, pos, 3, dniExtra);
+        else if (q === intervals) add(stop, ms, w, pos, 6, dniExtra);
+        else {
+          sunPositionInto(ms, lat, lon, at, 0);
+          add(stop, ms, w, at, 0, dniExtra);
+        }
+      }
+    }
   }
+  start[p.n] = lists.weight.length;
+  p.sun = {
+    start,
+    weight: Float64Array.from(lists.weight),
+    atMs: Float64Array.from(lists.atMs),
+    altDeg: Float64Array.from(lists.altDeg),
+    azDeg: Float64Array.from(lists.azDeg),
+    cosZ: Float64Array.from(lists.cosZ),
+    cosZTrue: Float64Array.from(lists.cosZTrue),
+    ghiClear: Float64Array.from(lists.ghiClear),
+  };
 }
 
 function localStep(p: Prepared, i: number): LocalStep {
@@ -422,7 +470,7 @@ function allocate(input: EngineInput, n: number): Prepared {
   // All step columns are views into one ArrayBuffer: one allocation instead of thirty. 8-byte columns first,
   // then 4-, 2- and 1-byte ones, so every view starts aligned. A column added below without counting it here
   // makes the view constructor throw at once.
-  const f64 = 17 + 4 * SAMPLES;
+  const f64 = 17;
   const buf = new ArrayBuffer(n * (8 * f64 + 4 * 1 + 2 * 2 + 1 * 4));
   let at = 0;
   const view = <T>(make: (b: ArrayBuffer, offset: number, length: number) => T, bytes: number, length: number): T => {
@@ -446,10 +494,6 @@ function allocate(input: EngineInput, n: number): Prepared {
     lat: f(),
     lon: f(),
     sunAltMid: f(),
-    alt: f(n * SAMPLES),
-    az: f(n * SAMPLES),
-    ghiClear: f(n * SAMPLES),
-    cosZ: f(n * SAMPLES),
     dniExtra: f(),
     hookupW: f(),
     acWh: f(),
@@ -470,6 +514,16 @@ function allocate(input: EngineInput, n: number): Prepared {
     openExposure: resolveExposure({ kind: 'preset', preset: 'open' }),
     applianceStopWh: new Float64Array(0),
     heavy: [],
+    sun: {
+      start: new Int32Array(n + 1),
+      weight: new Float64Array(0),
+      atMs: new Float64Array(0),
+      altDeg: new Float64Array(0),
+      azDeg: new Float64Array(0),
+      cosZ: new Float64Array(0),
+      cosZTrue: new Float64Array(0),
+      ghiClear: new Float64Array(0),
+    },
   };
 }
 

@@ -85,3 +85,24 @@ export function planeOfArray(i: PoaInput): number {
   const c = poaComponents(i);
   return c.beam + c.circumsolar + c.isotropic + c.ground;
 }
+
+/** One sample's irradiance on a surface: the beam with the circumsolar part, isotropic sky, ground, W/m². */
+export type SurfaceParts = { beam: number; sky: number; ground: number };
+
+/**
+ * The transposition of one fixed surface, for a loop over many samples: given the beam, diffuse and global
+ * irradiance, the anisotropy index (0 for the isotropic model), the cosine of incidence and the beam ratio, it
+ * fills `into`. Hay–Davies with ai = DNI/DNI_extra; isotropic with ai = 0.
+ */
+export function surfaceTransposer(
+  tiltDeg: number,
+  reflectance: number,
+): (dni: number, dhi: number, ghi: number, ai: number, cosInc: number, rb: number, into: SurfaceParts) => void {
+  const skyView = skyViewOfTilt(tiltDeg);
+  const groundView = groundViewOfTilt(tiltDeg);
+  return (dni, dhi, ghi, ai, cosInc, rb, into) => {
+    into.beam = dni * cosInc + hayDaviesCircumsolar(dhi, ai, rb);
+    into.sky = hayDaviesIsotropic(dhi, ai, skyView);
+    into.ground = ghi * reflectance * groundView;
+  };
+}

@@ -18,7 +18,7 @@ function lcg(seed: number): () => number {
 describe('fast paths against the calls they replace', () => {
   it('when the sun is placed without allocating, then altitude and azimuth equal suncalc bit for bit', () => {
     const rnd = lcg(7);
-    const out = new Float64Array(2);
+    const out = new Float64Array(3);
     let mismatches = 0;
     for (let i = 0; i < 20_000; i++) {
       // 1900–2100, fractional milliseconds included (Date truncates them; the fast path must too).

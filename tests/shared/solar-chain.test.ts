@@ -1,7 +1,8 @@
 // The solar loop in solar.ts folds the models together for speed (geometry shared by the sky scenarios, the Erbs
 // fraction written out, transposition and module terms inlined). Here every step of a day is recomputed through
 // the published-model functions one after the other — sun position (suncalc) → extraterrestrial → clear sky →
-// sky outlook → Erbs → site exposure → transposition → PV module → controller, Simpson-weighted over the hour —
+// sky outlook → Erbs → site exposure → transposition → incidence losses → PV module → controller, weighted by the
+// engine's Simpson samples over the hour —
 // and the two must agree to 1e-9 relative (the inlined sums are grouped differently, so not always bit for bit).
 import { DateTime } from 'luxon';
 import { describe, expect, it } from 'vitest';
@@ -28,14 +29,11 @@ import {
   resolveExposure,
   shiftSky,
   SKY_CLEARNESS,
-  sunPosition,
+  sunPositionWithTrue,
 } from '@/shared/engine';
 import { prepare } from '@/shared/engine/prepare';
 import { solarSeries } from '@/shared/engine/solar';
 import { engineInputSchema, type EngineInput, type EngineInputDraft } from '@/shared/schemas';
-
-const HOUR_MS = 3_600_000;
-const SIMPSON = [1 / 6, 4 / 6, 1 / 6];
 
 /** Controller output at one instant through the model functions, for the stop the rig is at. */
 function chainW(
@@ -50,7 +48,7 @@ function chainW(
   const stop = input.trip.stops[stopIndex];
   if (!stop) throw new Error('no stop');
   const { rig, options } = input;
-  const sun = sunPosition(utcMs, stop.lat, stop.lon);
+  const sun = sunPositionWithTrue(utcMs, stop.lat, stop.lon);
   const zenith = 90 - sun.altitudeDeg;
   const dniExtra = extraterrestrialW(dayOfYear, options.solarConstantWm2);
   let ghiClear = 0;
@@ -67,7 +65,7 @@ function chainW(
           }).ghi;
   }
   const ghiSky = ghiClear * SKY_CLEARNESS[shiftSky(stop.skyOutlook, skyShift)];
-  const split = erbs(ghiSky, zenith, dniExtra);
+  const split = erbs(ghiSky, 90 - sun.trueAltitudeDeg, dniExtra); // Erbs takes the true zenith
   const exposure = resolveExposure(stop.exposure);
   const dni = split.dni * beamFactor(exposure, sun.altitudeDeg, sun.azimuthDeg);
   const dhi = split.dhi * diffuseFactor(exposure);
@@ -219,10 +217,12 @@ describe('fast solar loop against the chain of model functions', () => {
           const ambient = ambientC(s.lowC, s.highC, (local.hour * 60 + local.minute + stepH * 30) / 60);
           let expectW = 0;
           let expectPoa = 0;
-          for (let k = 0; k < 3; k++) {
-            const r = chainW(input, 0, t + (k * stepH * HOUR_MS) / 2, dayOfYearUtc(t), ambient, shift);
-            expectW += (SIMPSON[k] ?? 0) * r.watts;
-            expectPoa += (SIMPSON[k] ?? 0) * r.poaFirst;
+          // The engine's own sample instants and Simpson weights for the step (finer where the sun crosses the
+          // horizon; their spacing is checked on its own in sun-sampling.test.ts).
+          for (let k = p.sun.start[i] ?? 0; k < (p.sun.start[i + 1] ?? 0); k++) {
+            const r = chainW(input, 0, p.sun.atMs[k] ?? 0, dayOfYearUtc(t), ambient, shift);
+            expectW += (p.sun.weight[k] ?? 0) * r.watts;
+            expectPoa += (p.sun.weight[k] ?? 0) * r.poaFirst;
           }
           if (expectW > 0) daylight++;
           const gotW = series.availableW[i] ?? Number.NaN;

@@ -5,7 +5,7 @@
 // its standard refraction. Measured when written: max |Δaltitude| 0.0146°, max |Δazimuth|·cos(altitude) 0.0130°.
 import * as Astronomy from 'astronomy-engine';
 import { describe, expect, it } from 'vitest';
-import { sunPosition } from '@/shared/engine';
+import { sunPosition, sunPositionWithTrue } from '@/shared/engine';
 
 const BOUND_DEG = 0.02; // the measured maxima above, rounded up
 
@@ -60,5 +60,33 @@ describe('suncalc against astronomy-engine', () => {
     }
     expect(maxAlt).toBeLessThan(BOUND_DEG);
     expect(maxAz).toBeLessThan(BOUND_DEG);
+  });
+
+  it('when the true (unrefracted) altitude is read, then it matches astronomy-engine without refraction within 0.02°, down to the horizon', () => {
+    const rnd = lcg(777);
+    let maxAlt = 0;
+    let compared = 0;
+    while (compared < 300) {
+      const lat = -65 + 130 * rnd();
+      const lon = -180 + 360 * rnd();
+      const ms = Date.UTC(2020, 0, 1) + rnd() * 15 * 365.25 * 86_400_000;
+      const d = new Date(ms);
+      const obs = new Astronomy.Observer(lat, lon, 0);
+      const eq = Astronomy.Equator(Astronomy.Body.Sun, d, obs, true, true);
+      const ref = Astronomy.Horizon(d, obs, eq.ra, eq.dec);
+      if (ref.altitude < -3) continue;
+      compared++;
+      maxAlt = Math.max(maxAlt, Math.abs(sunPositionWithTrue(ms, lat, lon).trueAltitudeDeg - ref.altitude));
+    }
+    expect(maxAlt).toBeLessThan(BOUND_DEG);
+  });
+
+  it('when the sun sits on the horizon, then the apparent altitude is about half a degree above the true one', () => {
+    // Sunrise at Greenwich on the equinox: refraction at the horizon is about 0.5–0.6° (standard atmosphere).
+    let ms = Date.UTC(2027, 2, 20, 5, 0);
+    while (sunPositionWithTrue(ms, 51.48, 0).trueAltitudeDeg < 0) ms += 10_000;
+    const s = sunPositionWithTrue(ms, 51.48, 0);
+    expect(s.altitudeDeg - s.trueAltitudeDeg).toBeGreaterThan(0.4);
+    expect(s.altitudeDeg - s.trueAltitudeDeg).toBeLessThan(0.7);
   });
 });
