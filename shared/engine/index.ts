@@ -26,7 +26,17 @@ export {
   skyViewOfTilt,
   groundViewOfTilt,
 } from './transposition';
-export { resolveExposure, beamFactor, diffuseFactor, horizonAt, skyViewFromHorizon } from './site-exposure';
+export {
+  resolveExposure,
+  beamFactor,
+  diffuseFactor,
+  horizonAt,
+  skyViewFromHorizon,
+  canopyBeamTransmittance,
+  canopyDiffuseTransmittance,
+  leafOff,
+  SITE_PRESETS,
+} from './site-exposure';
 export { noctCellTempC, effectiveNoctC, pvDcPowerW, FLUSH_EXTRA_C } from './pv-module';
 export { martinRuizIam, martinRuizDiffuse, MARTIN_RUIZ_AR } from './iam';
 export { arrayOutput, controllerLimitW, moduleClassFor, pwmShareOfRated } from './charge-controller';

@@ -12,7 +12,7 @@ import { extraterrestrialW } from './extraterrestrial';
 import { inverterDcDrawW } from './inverter';
 import { applianceEnergyWh, applianceHeatWh, applianceRunningWh, scheduledShare, thermostatDuty } from './loads';
 import { windowsShare, type LocalStep } from './routines';
-import { resolveExposure, type ResolvedExposure } from './site-exposure';
+import { leafOff, resolveExposure, type ResolvedExposure } from './site-exposure';
 import { sunPositionInto } from './sun-position';
 import { ambientC } from './temperature-curve';
 import {
@@ -22,6 +22,7 @@ import {
   HOUR_MS,
   localDayNumber,
   localMinuteOfDay,
+  localMonth,
   type Segment,
 } from './time-grid';
 
@@ -66,8 +67,10 @@ export type Prepared = {
   sunAltMid: Float64Array;
   sun: SunSamples;
   dniExtra: Float64Array;
+  /** The site exposures of the trip (the open sky first, then each stop's, in leaf and bare where deciduous) … */
   exposures: ResolvedExposure[];
-  openExposure: ResolvedExposure;
+  /** … and which one applies at each step (an open sky on drives). */
+  exposureOf: Uint8Array;
   hookupW: Float64Array;
   /** Bit q set: quarter q of the step lies inside the stop's allowed generator hours (or routine). */
   genAllowed: Uint8Array;
@@ -187,6 +190,27 @@ function dniExtraAt(c: DayCache, utcMs: number, solarConstant: number): number {
 }
 
 type SampleLists = { [K in Exclude<keyof SunSamples, 'start'>]: number[] };
+
+/** Each stop's exposure for the season of each step: deciduous cover is bare in its leaf-off months. */
+function fillExposures(p: Prepared, stops: readonly Stop[]): void {
+  p.exposures = [resolveExposure({ kind: 'preset', preset: 'open' })];
+  const index = new Map<string, number>();
+  for (let i = 0; i < p.n; i++) {
+    const w = p.where[i] ?? -1;
+    const stop = w >= 0 ? stops[w] : undefined;
+    if (!stop) continue; // a drive: open sky
+    const month = localMonth(p.startMs[i] ?? 0, p.offsetMin[i] ?? 0);
+    const bare = stop.exposure.kind === 'canopy' && stop.exposure.deciduous && leafOff(month, stop.lat);
+    const key = `${w}:${bare ? 'bare' : 'leaf'}`;
+    let k = index.get(key);
+    if (k === undefined) {
+      k = p.exposures.length;
+      p.exposures.push(resolveExposure(stop.exposure, month, stop.lat));
+      index.set(key, k);
+    }
+    p.exposureOf[i] = k;
+  }
+}
 
 function fillSun(p: Prepared, stops: readonly Stop[], solarConstant: number): void {
   const pos = new Float64Array(9); // start, middle, end: apparent altitude, azimuth, true altitude each
@@ -471,7 +495,7 @@ function allocate(input: EngineInput, n: number): Prepared {
   // then 4-, 2- and 1-byte ones, so every view starts aligned. A column added below without counting it here
   // makes the view constructor throw at once.
   const f64 = 17;
-  const buf = new ArrayBuffer(n * (8 * f64 + 4 * 1 + 2 * 2 + 1 * 4));
+  const buf = new ArrayBuffer(n * (8 * f64 + 4 * 1 + 2 * 2 + 1 * 5));
   let at = 0;
   const view = <T>(make: (b: ArrayBuffer, offset: number, length: number) => T, bytes: number, length: number): T => {
     const v = make(buf, at, length);
@@ -511,7 +535,7 @@ function allocate(input: EngineInput, n: number): Prepared {
     acStandbyOn: u8(),
     travelByDay: new Uint8Array(1),
     exposures: [],
-    openExposure: resolveExposure({ kind: 'preset', preset: 'open' }),
+    exposureOf: u8(),
     applianceStopWh: new Float64Array(0),
     heavy: [],
     sun: {
@@ -533,9 +557,9 @@ export function prepare(input: EngineInput): Prepared {
   p.startMs.set(grid.startMs);
   p.stepH.set(grid.stepH);
   const stops = input.trip.stops;
-  p.exposures = stops.map((s) => resolveExposure(s.exposure));
   fillPlaces(p, buildSegments(input.trip), stops);
   fillLocalTime(p, stops);
+  fillExposures(p, stops);
   fillSun(p, stops, input.options.solarConstantWm2);
   fillLoads(p);
   fillGenerator(p, stops);

@@ -82,12 +82,10 @@ function geometry(p: Prepared): Geometry {
     tiltDeg: a.mounting === 'tilted' ? a.tiltDeg : 0,
     azimuthDeg: a.azimuthDeg,
   }));
-  const stopDiffuse = p.exposures.map((e) => diffuseFactor(e));
-  const openDiffuse = diffuseFactor(p.openExposure);
   for (let i = 0; i < p.n; i++) {
-    const where = p.where[i] ?? -1;
-    const exp = where >= 0 ? (p.exposures[where] ?? p.openExposure) : p.openExposure;
-    g.diffF[i] = where >= 0 ? (stopDiffuse[where] ?? openDiffuse) : openDiffuse;
+    const exp = p.exposures[p.exposureOf[i] ?? 0] ?? p.exposures[0];
+    if (!exp) continue;
+    g.diffF[i] = diffuseFactor(exp);
     for (let k = sun.start[i] ?? 0; k < (sun.start[i + 1] ?? 0); k++) {
       const alt = sun.altDeg[k] ?? 0;
       const az = sun.azDeg[k] ?? 0;
