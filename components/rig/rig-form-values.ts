@@ -35,6 +35,20 @@ export function panelTemperature(units: UnitSystem): Shown {
   return { unit, show, store: (t) => round(fromDisplay(t, 'temperature', units), 2), range: rangeText(unit, show, 1) };
 }
 
+/** A length of the body, in m or ft. */
+export function bodyLength(units: UnitSystem): Shown {
+  const unit = toDisplay(0, 'length', units).unit;
+  const show = (m: number) => round(toDisplay(m, 'length', units).value, 1);
+  return { unit, show, store: (t) => round(fromDisplay(t, 'length', units), 3), range: rangeText(unit, show, 1) };
+}
+
+/** The insulation choices in plain words, with the heat they let through (typical, from memory). */
+export const INSULATION_CHOICES = [
+  { value: 'basic', label: 'Basic (thin walls, single glazing)' },
+  { value: 'standard', label: 'Standard touring' },
+  { value: 'four-season', label: 'Four-season' },
+] as const;
+
 /** Power change per degree: a step of 1 °F is 5/9 of a step of 1 °C, so the coefficient scales by that much. */
 export function perDegree(units: UnitSystem): Shown {
   const unit = `%/${toDisplay(0, 'temperature', units).unit}`;

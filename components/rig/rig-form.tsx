@@ -22,7 +22,14 @@ import { useUnits } from '@/stores/units-store';
 import { GeneratorFields } from './generator-fields';
 import { BATTERY_PRESETS, GENERATOR_PRESETS, INVERTER_PRESETS, SOLAR_PRESETS, TANK_PRESETS } from './part-presets';
 import { Advanced, Num, Presets, Section } from './rig-fields';
-import { INVERTER_HOURS_START, INVERTER_MODE_NOTE, newSolarArray, percentOfFraction } from './rig-form-values';
+import {
+  bodyLength,
+  INSULATION_CHOICES,
+  INVERTER_HOURS_START,
+  INVERTER_MODE_NOTE,
+  newSolarArray,
+  percentOfFraction,
+} from './rig-form-values';
 import { SolarArrayFields } from './solar-array-fields';
 
 /** The trip's rig in grouped sections; saved as one record with its version. */
@@ -191,9 +198,75 @@ export function RigForm({ tripId, record, canEdit }: { tripId: string; record: R
           )}
         />
         <Text variant="caption" color="inkSoft">
-          Inside, the battery is kept warm by the living space, so a cold night outside does not stop it charging.
+          Inside, the battery is at the living space's temperature (kept up by the heating), so a cold night outside
+          neither shrinks what it holds nor stops it charging. Outside, it follows the air.
         </Text>
         <Caution kind="lithiumCold" testID={chemistry === 'lifepo4' ? 'caution-lithium' : 'caution-lead-acid'} />
+      </Section>
+
+      <Section title="Living space" testID="rig-cabin">
+        <Text variant="caption" color="inkSoft">
+          Heating and cooling come from the living space's heat balance: how much heat its walls let through, the sun on
+          its roof and windows, and the people and appliances inside.
+        </Text>
+        <View style={styles.grid}>
+          <Num
+            control={control}
+            disabled={off}
+            name="cabin.lengthM"
+            label="Body length"
+            shown={bodyLength(units)}
+            range={[2, 20]}
+            hint="outside, without the drawbar"
+            testID="rig-cabin-length"
+          />
+          <Num
+            control={control}
+            disabled={off}
+            name="cabin.occupants"
+            label="People aboard"
+            range={[0, 12]}
+            hint="about 100 W of heat each"
+            testID="rig-cabin-occupants"
+          />
+        </View>
+        <Controller
+          control={control}
+          name="cabin.insulation"
+          render={({ field }) => (
+            <ChoiceChips
+              testID="rig-cabin-insulation"
+              label="Insulation"
+              disabled={off}
+              value={field.value ?? 'standard'}
+              onChange={field.onChange}
+              options={[...INSULATION_CHOICES]}
+            />
+          )}
+        />
+        <Advanced what="body size" testID="rig-cabin-advanced">
+          <View style={styles.grid}>
+            <Num
+              control={control}
+              disabled={off}
+              name="cabin.widthM"
+              label="Body width"
+              shown={bodyLength(units)}
+              range={[1.2, 3]}
+              testID="rig-cabin-width"
+            />
+            <Num
+              control={control}
+              disabled={off}
+              name="cabin.heightM"
+              label="Body height"
+              shown={bodyLength(units)}
+              range={[1.2, 3.5]}
+              hint="floor to roof, outside"
+              testID="rig-cabin-height"
+            />
+          </View>
+        </Advanced>
       </Section>
 
       <Section title="Solar" testID="rig-solar">

@@ -38,6 +38,14 @@ export const rigs = sqliteTable(
     vehicleCharger: text('vehicle_charger', { mode: 'json' }).$type<VehicleCharger | null>(),
     generator: text('generator', { mode: 'json' }).$type<Generator | null>(),
     propaneTanks: text('propane_tanks', { mode: 'json' }).$type<PropaneTank[]>().notNull(),
+    /** The living space for its heat balance; defaults are a 6 m touring caravan with two aboard. */
+    cabinLengthM: real('cabin_length_m').notNull().default(6),
+    cabinWidthM: real('cabin_width_m').notNull().default(2.3),
+    cabinHeightM: real('cabin_height_m').notNull().default(2.1),
+    insulation: text('insulation', { enum: ['basic', 'standard', 'four-season'] })
+      .notNull()
+      .default('standard'),
+    occupants: integer('occupants').notNull().default(2),
     version: integer('version').notNull().default(1),
     createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull(),
     updatedAt: integer('updated_at', { mode: 'timestamp_ms' }).notNull(),

@@ -43,7 +43,18 @@ export { arrayOutput, controllerLimitW, moduleClassFor, pwmShareOfRated } from '
 export { currentAt, deSotoParams, maxPowerPoint, openCircuitV, MODULE_CLASSES } from './single-diode';
 export { CHEMISTRY, peukertRuntimeH, peukertFactor, acceptanceLimitShare, chargeBlockedByCold } from './battery';
 export { inverterDcDrawW, dcCurrentA, checkOverload, pvwattsAcW, pvwattsDcW, PVWATTS_ETA_REF } from './inverter';
-export { thermostatDuty, applianceStep } from './loads';
+export { scheduledShare, applianceStep, applianceEnergyWh } from './loads';
+export {
+  cabinModel,
+  envelopeAreaM2,
+  freeRunningC,
+  heatToMoveW,
+  meanVerticalIrradiance,
+  cabinSolarGainW,
+  INSULATION_U,
+  PERSON_W,
+} from './cabin';
+export { thermostatCapacityW, COOLING_COP, FUEL_HEATER_EFFICIENCY, ELECTRIC_HEATER_EFFICIENCY } from './climate';
 export { ambientC } from './temperature-curve';
 export { hookupCapacityW, chargerDcW } from './hookup';
 export { vehicleChargeW } from './vehicle-charging';

@@ -10,7 +10,7 @@ import { haurwitzGhi, ineichenPerez, kastenYoungAirMass, pressureRatio } from '.
 import type { HeavyLoad } from './battery';
 import { extraterrestrialW } from './extraterrestrial';
 import { inverterDcDrawW } from './inverter';
-import { applianceEnergyWh, applianceHeatWh, applianceRunningWh, scheduledShare, thermostatDuty } from './loads';
+import { applianceEnergyWh, applianceHeatWh, applianceRunningWh, scheduledShare } from './loads';
 import { windowsShare, type LocalStep } from './routines';
 import { leafOff, resolveExposure, type ResolvedExposure } from './site-exposure';
 import { sunPositionInto } from './sun-position';
@@ -44,6 +44,8 @@ export type SunSamples = {
   cosZTrue: Float64Array;
   ghiClear: Float64Array;
 };
+
+export type Thermostat = { index: number; appliance: Appliance; active: Float64Array; heavyCurrentA: number };
 
 export type Prepared = {
   input: EngineInput;
@@ -87,6 +89,13 @@ export type Prepared = {
   applianceStopWh: Float64Array;
   /** Loads whose running current passes the bank's 20-hour current, with their running energy per step (Peukert). */
   heavy: HeavyLoad[];
+  /**
+   * Heat the fixed loads give the cabin, W (step mean): their electricity. Propane burned for cooking or by an
+   * absorption fridge is taken to leave through the vents and flues.
+   */
+  internalGainW: Float64Array;
+  /** Thermostat-run appliances: their index, their active share per step, and their running current if heavy. */
+  thermostats: Thermostat[];
 };
 
 function segmentAt(segs: readonly Segment[], ms: number, hint: number): number {
@@ -335,7 +344,7 @@ function stepSlots(p: Prepared, withDayTypes: boolean): Slots {
   return { slotOf, first };
 }
 
-/** Each step's share switched on for one appliance (onShare in loads.ts, with routine shares worked out per slot). */
+/** Each step's scheduled share for one appliance (scheduledShare in loads.ts, worked out once per slot of steps). */
 function fillShares(p: Prepared, a: Appliance, slots: () => { time: Slots; typed: Slots }, share: Float64Array): void {
   const sched = a.schedule;
   const n = p.n;
@@ -352,11 +361,6 @@ function fillShares(p: Prepared, a: Appliance, slots: () => { time: Slots; typed
       slotShare[slot] = scheduledShare(sched, localStep(p, at), prevDayType(p, at));
     }
     for (let i = 0; i < n; i++) share[i] = slotShare[slotOf[i] ?? 0] ?? 0;
-  }
-  if (sched.kind === 'thermostat') {
-    const { mode, setPointC, fullDutyDeltaC } = sched;
-    for (let i = 0; i < n; i++)
-      share[i] = (share[i] ?? 0) * thermostatDuty(mode, p.ambientC[i] ?? 15, setPointC, fullDutyDeltaC);
   }
 }
 
@@ -396,6 +400,17 @@ function fillLoads(p: Prepared): void {
     if (!a) continue;
     const always = a.schedule.kind === 'always';
     if (!always) fillShares(p, a, slots, share);
+    const currentA = runningCurrentA(a);
+    if (a.schedule.kind === 'thermostat') {
+      // Heating and cooling depend on the sky (solar gain): their duty is worked out per scenario (climate.ts).
+      p.thermostats.push({
+        index: j,
+        appliance: a,
+        active: Float64Array.from(share.subarray(0, n)),
+        heavyCurrentA: currentA > i20 ? currentA : 0,
+      });
+      continue;
+    }
     const isAc = a.circuit === 'ac';
     const total = isAc ? acWh : dcWh;
     const heats = !isAc && a.heatInputW !== 0;
@@ -404,7 +419,6 @@ function fillLoads(p: Prepared): void {
     // Off with no standby draw, a step adds exactly 0 to every total (which are never −0), so it is skipped.
     const skipOff = !always && a.standbyW === 0;
     if (skipOff) energy.fill(0);
-    const currentA = runningCurrentA(a);
     const running = currentA > i20 ? new Float64Array(n) : null;
     if (running) p.heavy.push({ circuit: isAc ? 'ac' : 'dc', currentA, runningWh: running });
     for (let i = 0; i < n; i++) {
@@ -538,6 +552,8 @@ function allocate(input: EngineInput, n: number): Prepared {
     exposureOf: u8(),
     applianceStopWh: new Float64Array(0),
     heavy: [],
+    internalGainW: new Float64Array(n),
+    thermostats: [],
     sun: {
       start: new Int32Array(n + 1),
       weight: new Float64Array(0),
@@ -562,6 +578,7 @@ export function prepare(input: EngineInput): Prepared {
   fillExposures(p, stops);
   fillSun(p, stops, input.options.solarConstantWm2);
   fillLoads(p);
+  for (let i = 0; i < p.n; i++) p.internalGainW[i] = ((p.acWh[i] ?? 0) + (p.dcWh[i] ?? 0)) / (p.stepH[i] ?? 1);
   fillGenerator(p, stops);
   fillInverterHours(p);
   for (let i = 0; i < p.n; i++) {

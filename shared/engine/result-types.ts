@@ -13,6 +13,8 @@ export type LedgerRow = {
   /** Plane-of-array irradiance of the first array (GHI if flat), W/m², step average, at the site. */
   irradianceWm2: number;
   ambientC: number;
+  /** The cabin's air temperature from its heat balance (held at the thermostats' set points where they can), °C. */
+  cabinC: number;
   solarAvailableWh: number;
   solarUsedWh: number;
   solarWastedWh: number;

@@ -1,10 +1,12 @@
 // Solar available at the battery bus for every step of one sky scenario: clear sky × sky clearness, split by
 // Erbs (fed the true zenith), shaded by the site's exposure, transposed onto each array (Hay–Davies or isotropic,
 // plus ground reflection), through the glass (Martin & Ruiz incidence losses), the module and the controller.
-// A flat array is the tilt-0 case: it sees the GHI. The sky-independent geometry (incidence, beam ratio, shading)
+// A flat array is the tilt-0 case: it sees the GHI. The same irradiance at the pitch gives the cabin its solar gain
+// (cabin.ts). The sky-independent geometry (incidence, beam ratio, shading)
 // is worked out once per trip and reused by every scenario. The loop over samples calls each model through an
 // instance built for the array, and allocates nothing.
 import { CHEMISTRY } from './battery';
+import { cabinModel, solarGainOf } from './cabin';
 import { arrayOutput, controllerLimitW, type ArrayOutput } from './charge-controller';
 import { erbsSplitter, type Split } from './decomposition';
 import { glassOf } from './iam';
@@ -19,6 +21,8 @@ export type SolarSeries = {
   availableW: Float64Array;
   /** Plane-of-array irradiance of the first array (or GHI), W/m² (step average), for the ledger. */
   poaWm2: Float64Array;
+  /** Solar gain into the cabin through its roof, walls and windows, W (step average). */
+  cabinSolarW: Float64Array;
 };
 
 /** One array's chain of models, each an instance built once for the array. */
@@ -31,6 +35,7 @@ type ArrayModel = {
 
 type Geometry = {
   arrays: ArrayModel[];
+  cabinGain: ReturnType<typeof solarGainOf>;
   capW: number;
   /** Per sample: the share of the beam the site lets through. */
   beamF: Float64Array;
@@ -71,6 +76,7 @@ function geometry(p: Prepared): Geometry {
   const ns = sun.weight.length;
   const g: Geometry = {
     arrays,
+    cabinGain: solarGainOf(cabinModel(p.input.rig.cabin), p.input.options.groundReflectance),
     capW,
     beamF: new Float64Array(ns),
     diffF: new Float64Array(p.n),
@@ -112,11 +118,11 @@ export function solarSeries(p: Prepared, skyShift: number): SolarSeries {
   const same = stops.map((s, w) => planned !== null && clearness[w] === SKY_CLEARNESS[s.skyOutlook]);
   const availableW = new Float64Array(p.n);
   const poaWm2 = new Float64Array(p.n);
-  const series = { availableW, poaWm2 };
+  const cabinSolarW = new Float64Array(p.n);
+  const series = { availableW, poaWm2, cabinSolarW };
   if (skyShift === 0) g.planned = series;
-  const { arrays, capW, beamF, diffF, cosInc, rb } = g;
+  const { arrays, capW, beamF, diffF, cosInc, rb, cabinGain } = g;
   const m = arrays.length;
-  if (m === 0) return series;
   const { start, weight, cosZ, cosZTrue, ghiClear } = p.sun;
   const split: Split = { dni: 0, dhi: 0, kt: 0 };
   const parts: SurfaceParts = { beam: 0, sky: 0, ground: 0 };
@@ -129,6 +135,7 @@ export function solarSeries(p: Prepared, skyShift: number): SolarSeries {
     if (planned && same[w]) {
       availableW[i] = planned.availableW[i] ?? 0;
       poaWm2[i] = planned.poaWm2[i] ?? 0;
+      cabinSolarW[i] = planned.cabinSolarW[i] ?? 0;
       continue;
     }
     const f = clearness[w] ?? 1;
@@ -137,6 +144,7 @@ export function solarSeries(p: Prepared, skyShift: number): SolarSeries {
     const ambient = p.ambientC[i] ?? 20;
     let watts = 0;
     let poaFirst = 0;
+    let cabinW = 0;
     for (let k = from; k < to; k++) {
       const ghiSky = (ghiClear[k] ?? 0) * f;
       if (ghiSky <= 0) continue;
@@ -145,6 +153,7 @@ export function solarSeries(p: Prepared, skyShift: number): SolarSeries {
       const dni = split.dni * (beamF[k] ?? 1);
       const dhi = split.dhi * diff;
       const ghi = dni * (cosZ[k] ?? 0) + dhi;
+      cabinW += (weight[k] ?? 0) * cabinGain(dni, dhi, ghi, cosZ[k] ?? 0);
       const ai = hayDavies ? dni / dniExtra : 0; // isotropic sky: no circumsolar share
       let sampleW = 0;
       for (let j = 0; j < m; j++) {
@@ -161,6 +170,7 @@ export function solarSeries(p: Prepared, skyShift: number): SolarSeries {
     }
     availableW[i] = watts;
     poaWm2[i] = poaFirst;
+    cabinSolarW[i] = cabinW;
   }
   return series;
 }

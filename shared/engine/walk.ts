@@ -10,6 +10,7 @@ import { CONTINUOUS_SHARE, defaultFuelModel, fuelUse } from './generator';
 import { chargerDcW } from './hookup';
 import { inverterDraw } from './inverter';
 import { propaneKgFromHeatWh } from './fuel';
+import type { StepLoads } from './climate';
 import { QUARTERS, type Prepared } from './prepare';
 import { vehicleChargeW } from './vehicle-charging';
 
@@ -51,6 +52,8 @@ export type Scenario = {
   capacityWh: number;
   hookupW: Float64Array;
   generator: GeneratorPlan;
+  /** The loads, heating and cooling under this scenario's sky. */
+  loads: StepLoads;
 };
 
 export type WalkResult = {
@@ -209,7 +212,7 @@ function rigOf(p: Prepared, s: Scenario): Rig {
     p,
     s,
     chem,
-    battery: batteryModel(chem, s.capacityWh, rig.battery.nominalV, p),
+    battery: batteryModel(chem, s.capacityWh, rig.battery.nominalV, s.loads),
     capacityWh: s.capacityWh,
     chargeV,
     hasInverter: rig.inverter !== null,
@@ -313,8 +316,8 @@ function book(r: Rig, dtH: number, genOn: boolean, f: Flows): void {
 /** One step (or quarter step) of dtH hours with the generator on or off; returns the new stored energy. */
 function runStep(r: Rig, i: number, dtH: number, stored: number, genOn: boolean, solarW: number, f: Flows): number {
   const stepH = r.p.stepH[i] ?? 1;
-  f.acW = (r.p.acWh[i] ?? 0) / stepH;
-  f.dcW = (r.p.dcWh[i] ?? 0) / stepH;
+  f.acW = (r.s.loads.acWh[i] ?? 0) / stepH;
+  f.dcW = (r.s.loads.dcWh[i] ?? 0) / stepH;
   f.solarToBatWh = f.vehicleToBatWh = f.chargerToBatWh = 0;
   serveAc(r, i, genOn, f);
   f.shortWh = r.hasInverter ? 0 : f.invAcW * dtH;
@@ -400,7 +403,7 @@ export function walk(p: Prepared, s: Scenario, ledger: LedgerColumns | null): Wa
       lowest = stored / r.capacityWh;
       lowestIndex = i;
     }
-    const heatKg = propaneKgFromHeatWh(p.heatWh[i] ?? 0);
+    const heatKg = propaneKgFromHeatWh(s.loads.propaneHeatWh[i] ?? 0);
     const genKg = r.gen.kind !== 'none' && r.gen.fuelKind === 'propane' ? f.fuel : 0;
     propane = Math.max(0, propane - heatKg - genKg);
     socPct[i] = (stored / r.capacityWh) * 100;

@@ -12,7 +12,7 @@ export const batterySchema = z.object({
   /** State of charge that must never be crossed; left out, it follows the chemistry's recommended depth of discharge. */
   reservePct: percentSchema.optional(),
   initialSocPct: percentSchema.default(100),
-  /** A battery inside the heated living space is not held to the ambient temperature for the cold-charge rule. */
+  /** Inside the living space the battery is at the cabin's temperature; outside, at the air's. */
   heatedSpace: z.boolean().default(false),
 });
 export type Battery = z.infer<typeof batterySchema>;
@@ -116,6 +116,20 @@ export const generatorSchema = z
   });
 export type Generator = z.infer<typeof generatorSchema>;
 
+export const insulationSchema = z.enum(['basic', 'standard', 'four-season']);
+export type Insulation = z.infer<typeof insulationSchema>;
+
+/** The living space, for its heat balance: outside size of the body, its insulation and who is aboard. */
+export const cabinSchema = z.object({
+  lengthM: z.number().min(2).max(20).default(6),
+  widthM: z.number().min(1.2).max(3).default(2.3),
+  heightM: z.number().min(1.2).max(3.5).default(2.1),
+  insulation: insulationSchema.default('standard'),
+  occupants: z.number().int().min(0).max(12).default(2),
+});
+export type Cabin = z.infer<typeof cabinSchema>;
+export type CabinInput = z.input<typeof cabinSchema>;
+
 export const propaneTankSchema = z.object({
   name: z.string().min(1).max(80).default('Cylinder'),
   propaneKg: positiveSchema.max(500),
@@ -134,6 +148,7 @@ export const rigSchema = z
     vehicleCharger: vehicleChargerSchema.nullable().default(null),
     generator: generatorSchema.nullable().default(null),
     propaneTanks: z.array(propaneTankSchema).max(8).default([]),
+    cabin: cabinSchema.default(cabinSchema.parse({})),
   })
   .refine((r) => r.solarArrays.length === 0 || r.controller !== null, {
     message: 'Solar arrays need a charge controller',

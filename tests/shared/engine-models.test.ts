@@ -31,7 +31,6 @@ import {
   skyViewFromHorizon,
   resolveExposure,
   beamFactor,
-  thermostatDuty,
   ambientC,
 } from '@/shared/engine';
 
@@ -196,7 +195,7 @@ describe('trade rules of thumb', () => {
   });
 });
 
-describe('site exposure, loads and temperature', () => {
+describe('site exposure and temperature', () => {
   it('when the horizon is 60° all round, then a flat panel sees cos²60° = 25 % of the sky (isotropic sky view)', () => {
     expect(skyViewFromHorizon([60, 60, 60, 60])).toBeCloseTo(0.25, 9);
   });
@@ -205,16 +204,6 @@ describe('site exposure, loads and temperature', () => {
     expect(beamFactor(e, 30, 180)).toBe(0.3);
     expect(beamFactor(e, 30, 90)).toBe(1);
   });
-  it.each([
-    ['cooling', 32, 26, 12, 0.5],
-    ['heating', 8, 18, 20, 0.5],
-    ['cooling', 20, 26, 12, 0],
-  ] as const)(
-    'when %s at %d °C with set point %d and full duty at +%d, then duty is %f',
-    (mode, amb, set, full, duty) => {
-      expect(thermostatDuty(mode, amb, set, full)).toBeCloseTo(duty, 9);
-    },
-  );
   it('when the curve runs from 8 to 16 °C, then it bottoms at 03:00 and peaks at 15:00', () => {
     expect(ambientC(8, 16, 3)).toBeCloseTo(8, 9);
     expect(ambientC(8, 16, 15)).toBeCloseTo(16, 9);

@@ -1,0 +1,127 @@
+// Heating and cooling under one sky: each hour the cabin heat balance (cabin.ts) says how far from its set point
+// the cabin would float; each thermostat-run appliance, in list order and while its active windows allow, moves the
+// heat needed up to its capacity, and its running share is that heat over its capacity. Its electricity (and, for a
+// propane heater, its fuel) follow from the running share. Cooling moves heat at the air conditioner's coefficient of
+// performance: electricity = heat removed ÷ COP. Heating delivers its input at the heater's efficiency.
+//
+// Typical figures when an appliance gives none: cooling COP 2.9 (a roof unit of EER about 10, CHECK-VALUES §11,
+// from memory); propane furnace or heater 70 % of its heat input reaches the cabin (vented RV furnaces 60–75 %,
+// from memory); electric heating 100 % (resistance: every watt becomes heat).
+import type { Appliance } from '../schemas/appliance';
+import { cabinModel, freeRunningC, heatToMoveW, type CabinModel } from './cabin';
+import type { HeavyLoad } from './battery';
+import { applianceEnergyWh, applianceHeatWh, applianceRunningWh } from './loads';
+import type { Prepared } from './prepare';
+
+export const COOLING_COP = 2.9;
+export const FUEL_HEATER_EFFICIENCY = 0.7;
+export const ELECTRIC_HEATER_EFFICIENCY = 1;
+
+/** The loads of every step under one sky: the trip's fixed loads plus heating and cooling, and the cabin's air. */
+export type StepLoads = {
+  acWh: Float64Array;
+  dcWh: Float64Array;
+  /** Propane heat input burned, Wh. */
+  propaneHeatWh: Float64Array;
+  acRunningW: Float64Array;
+  acSurgeExtraW: Float64Array;
+  acStandbyOn: Uint8Array;
+  heavy: HeavyLoad[];
+  /** The cabin's air temperature, °C (step mean). */
+  cabinC: Float64Array;
+  /** Running share of each thermostat-run appliance, by its index in the appliance list. */
+  thermostatRun: Map<number, Float64Array>;
+};
+
+/** Heat an appliance moves at full duty, W: its own figure, or its watts at its (or the typical) efficiency. */
+export function thermostatCapacityW(a: Appliance): number {
+  const s = a.schedule;
+  if (s.kind !== 'thermostat') return 0;
+  if (s.capacityW !== undefined) return a.quantity * s.capacityW;
+  if (s.mode === 'cooling') return a.quantity * a.runningW * (s.efficiency ?? COOLING_COP);
+  if (a.circuit === 'fuel') return a.quantity * a.heatInputW * (s.efficiency ?? FUEL_HEATER_EFFICIENCY);
+  return a.quantity * a.runningW * (s.efficiency ?? ELECTRIC_HEATER_EFFICIENCY);
+}
+
+export function climateModel(p: Prepared): CabinModel {
+  return cabinModel(p.input.rig.cabin);
+}
+
+/**
+ * The step loads under a sky whose solar gain into the cabin is cabinSolarW (W, step mean). The fixed loads are the
+ * precomputation's; with no thermostat-run appliance they are used as they are.
+ */
+export function climateLoads(p: Prepared, cabinSolarW: Float64Array): StepLoads {
+  const cabin = climateModel(p);
+  const n = p.n;
+  const cabinC = new Float64Array(n);
+  const thermostatRun = new Map<number, Float64Array>();
+  const units = p.thermostats;
+  const fixed = units.length === 0;
+  const loads: StepLoads = {
+    acWh: fixed ? p.acWh : Float64Array.from(p.acWh),
+    dcWh: fixed ? p.dcWh : Float64Array.from(p.dcWh),
+    propaneHeatWh: fixed ? p.heatWh : Float64Array.from(p.heatWh),
+    acRunningW: fixed ? p.acRunningW : Float64Array.from(p.acRunningW),
+    acSurgeExtraW: fixed ? p.acSurgeExtraW : Float64Array.from(p.acSurgeExtraW),
+    acStandbyOn: fixed ? p.acStandbyOn : Uint8Array.from(p.acStandbyOn),
+    heavy: [...p.heavy],
+    cabinC,
+    thermostatRun,
+  };
+  const capacities = units.map((t) => thermostatCapacityW(t.appliance));
+  const runs = units.map((t) => {
+    const run = new Float64Array(n);
+    thermostatRun.set(t.index, run);
+    if (t.appliance.circuit === 'ac' && t.appliance.standbyW > 0) loads.acStandbyOn.fill(1);
+    return run;
+  });
+  // Running energy of the units whose running current passes the bank's 20-hour current, for Peukert.
+  const heavyOf = units.map((t) => {
+    if (t.heavyCurrentA <= 0) return undefined;
+    const heavy: HeavyLoad = {
+      circuit: t.appliance.circuit === 'ac' ? 'ac' : 'dc',
+      currentA: t.heavyCurrentA,
+      runningWh: new Float64Array(n),
+    };
+    loads.heavy.push(heavy);
+    return heavy;
+  });
+  for (let i = 0; i < n; i++) {
+    const dtH = p.stepH[i] ?? 1;
+    const gainsW = (cabinSolarW[i] ?? 0) + (p.internalGainW[i] ?? 0) + cabin.peopleW;
+    let air = freeRunningC(cabin, p.ambientC[i] ?? 15, gainsW);
+    for (let u = 0; u < units.length; u++) {
+      const t = units[u];
+      const run = runs[u];
+      if (!t || !run) continue;
+      const a = t.appliance;
+      const s = a.schedule;
+      const active = t.active[i] ?? 0;
+      const capacity = capacities[u] ?? 0;
+      let runShare = 0;
+      if (s.kind === 'thermostat' && active > 0 && capacity > 0) {
+        const duty = Math.min(1, heatToMoveW(cabin, s.mode, air, s.setPointC) / capacity);
+        runShare = active * duty;
+        // The step's mean temperature moves by the heat delivered over the active part of the step.
+        air += ((s.mode === 'cooling' ? -1 : 1) * runShare * capacity) / cabin.ua;
+      }
+      run[i] = runShare;
+      const electricWh = applianceEnergyWh(a, runShare, dtH);
+      if (a.circuit === 'ac') {
+        loads.acWh[i] = (loads.acWh[i] ?? 0) + electricWh;
+        if (runShare > 0) {
+          loads.acRunningW[i] = (loads.acRunningW[i] ?? 0) + a.quantity * a.runningW;
+          loads.acSurgeExtraW[i] = Math.max(loads.acSurgeExtraW[i] ?? 0, (a.surgeW ?? a.runningW) - a.runningW);
+        }
+      } else {
+        loads.dcWh[i] = (loads.dcWh[i] ?? 0) + electricWh;
+        loads.propaneHeatWh[i] = (loads.propaneHeatWh[i] ?? 0) + applianceHeatWh(a, runShare, dtH);
+      }
+      const heavy = heavyOf[u];
+      if (heavy) heavy.runningWh[i] = applianceRunningWh(a, runShare, dtH);
+    }
+    cabinC[i] = air;
+  }
+  return loads;
+}
