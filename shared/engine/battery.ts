@@ -109,11 +109,6 @@ export function stepPeukertFactors(
   return { dc: dcExtra, ac: acExtra };
 }
 
-/** Lithium cells must not be charged below 0 °C (cell makers' data sheets). */
-export function chargeBlockedByCold(lithium: boolean, heatedSpace: boolean, ambientC: number): boolean {
-  return lithium && !heatedSpace && ambientC < 0;
-}
-
 /** The charge-acceptance terms for one step length: they depend only on the chemistry and the step. */
 export type Acceptance = { rate: number; taperStartSoc: number; taperGain: number; tail: number };
 
@@ -146,9 +141,17 @@ export type BatteryModel = {
   removalWh(needWh: number, i: number, dcW: number, acDcW: number): number;
   /** Most energy the sources may offer the terminals in dtH hours (before the charge loss). */
   acceptWh(storedWh: number, dtH: number): number;
+  /** Stored energy the cold holds back in step i: the battery cannot deliver below it. */
+  coldFloorWh(i: number): number;
 };
 
-type StepLoads = { heavy: readonly HeavyLoad[]; dcWh: Float64Array; acWh: Float64Array };
+type StepLoads = {
+  heavy: readonly HeavyLoad[];
+  dcWh: Float64Array;
+  acWh: Float64Array;
+  /** Share of the rated capacity the battery can deliver in each step (battery-temperature.ts). */
+  battery: { capacityShare: Float64Array };
+};
 
 // Most walks of one trip (the sky band, the solar, generator and hookup levers) share a capacity: work its factors
 // out once per set of loads and capacity.
@@ -180,6 +183,9 @@ export function batteryModel(
     acceptWh(storedWh, dtH) {
       const a = dtH === 1 ? hour : dtH === 0.25 ? quarter : acceptanceFor(chem, dtH);
       return (acceptedShare(storedWh / capacityWh, a) * capacityWh) / chem.chargeEfficiency;
+    },
+    coldFloorWh(i) {
+      return capacityWh * (1 - (loads.battery.capacityShare[i] ?? 1));
     },
   };
 }

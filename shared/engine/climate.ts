@@ -10,6 +10,7 @@
 import type { Appliance } from '../schemas/appliance';
 import { cabinModel, freeRunningC, heatToMoveW, type CabinModel } from './cabin';
 import type { HeavyLoad } from './battery';
+import { batteryClimate, type BatteryClimate } from './battery-temperature';
 import { applianceEnergyWh, applianceHeatWh, applianceRunningWh } from './loads';
 import type { Prepared } from './prepare';
 
@@ -31,6 +32,8 @@ export type StepLoads = {
   cabinC: Float64Array;
   /** Running share of each thermostat-run appliance, by its index in the appliance list. */
   thermostatRun: Map<number, Float64Array>;
+  /** The battery's temperature where it sits, what it can deliver, and whether it may charge. */
+  battery: BatteryClimate;
 };
 
 /** Heat an appliance moves at full duty, W: its own figure, or its watts at its (or the typical) efficiency. */
@@ -54,38 +57,35 @@ export function climateModel(p: Prepared): CabinModel {
 export function climateLoads(p: Prepared, cabinSolarW: Float64Array): StepLoads {
   const cabin = climateModel(p);
   const n = p.n;
+  const units = p.thermostats;
+  // With no thermostat-run appliance the fixed loads are the loads: shared, not copied.
+  const own = <T extends Float64Array | Uint8Array>(a: T): T => (units.length === 0 ? a : (a.slice() as T));
+  const acWh = own(p.acWh);
+  const dcWh = own(p.dcWh);
+  const propaneHeatWh = own(p.heatWh);
+  const acRunningW = own(p.acRunningW);
+  const acSurgeExtraW = own(p.acSurgeExtraW);
+  const acStandbyOn = own(p.acStandbyOn);
+  const heavy = [...p.heavy];
   const cabinC = new Float64Array(n);
   const thermostatRun = new Map<number, Float64Array>();
-  const units = p.thermostats;
-  const fixed = units.length === 0;
-  const loads: StepLoads = {
-    acWh: fixed ? p.acWh : Float64Array.from(p.acWh),
-    dcWh: fixed ? p.dcWh : Float64Array.from(p.dcWh),
-    propaneHeatWh: fixed ? p.heatWh : Float64Array.from(p.heatWh),
-    acRunningW: fixed ? p.acRunningW : Float64Array.from(p.acRunningW),
-    acSurgeExtraW: fixed ? p.acSurgeExtraW : Float64Array.from(p.acSurgeExtraW),
-    acStandbyOn: fixed ? p.acStandbyOn : Uint8Array.from(p.acStandbyOn),
-    heavy: [...p.heavy],
-    cabinC,
-    thermostatRun,
-  };
   const capacities = units.map((t) => thermostatCapacityW(t.appliance));
   const runs = units.map((t) => {
     const run = new Float64Array(n);
     thermostatRun.set(t.index, run);
-    if (t.appliance.circuit === 'ac' && t.appliance.standbyW > 0) loads.acStandbyOn.fill(1);
+    if (t.appliance.circuit === 'ac' && t.appliance.standbyW > 0) acStandbyOn.fill(1);
     return run;
   });
   // Running energy of the units whose running current passes the bank's 20-hour current, for Peukert.
   const heavyOf = units.map((t) => {
     if (t.heavyCurrentA <= 0) return undefined;
-    const heavy: HeavyLoad = {
+    const load: HeavyLoad = {
       circuit: t.appliance.circuit === 'ac' ? 'ac' : 'dc',
       currentA: t.heavyCurrentA,
       runningWh: new Float64Array(n),
     };
-    loads.heavy.push(heavy);
-    return heavy;
+    heavy.push(load);
+    return load;
   });
   for (let i = 0; i < n; i++) {
     const dtH = p.stepH[i] ?? 1;
@@ -109,19 +109,31 @@ export function climateLoads(p: Prepared, cabinSolarW: Float64Array): StepLoads 
       run[i] = runShare;
       const electricWh = applianceEnergyWh(a, runShare, dtH);
       if (a.circuit === 'ac') {
-        loads.acWh[i] = (loads.acWh[i] ?? 0) + electricWh;
+        acWh[i] = (acWh[i] ?? 0) + electricWh;
         if (runShare > 0) {
-          loads.acRunningW[i] = (loads.acRunningW[i] ?? 0) + a.quantity * a.runningW;
-          loads.acSurgeExtraW[i] = Math.max(loads.acSurgeExtraW[i] ?? 0, (a.surgeW ?? a.runningW) - a.runningW);
+          acRunningW[i] = (acRunningW[i] ?? 0) + a.quantity * a.runningW;
+          acSurgeExtraW[i] = Math.max(acSurgeExtraW[i] ?? 0, (a.surgeW ?? a.runningW) - a.runningW);
         }
       } else {
-        loads.dcWh[i] = (loads.dcWh[i] ?? 0) + electricWh;
-        loads.propaneHeatWh[i] = (loads.propaneHeatWh[i] ?? 0) + applianceHeatWh(a, runShare, dtH);
+        dcWh[i] = (dcWh[i] ?? 0) + electricWh;
+        propaneHeatWh[i] = (propaneHeatWh[i] ?? 0) + applianceHeatWh(a, runShare, dtH);
       }
-      const heavy = heavyOf[u];
-      if (heavy) heavy.runningWh[i] = applianceRunningWh(a, runShare, dtH);
+      const load = heavyOf[u];
+      if (load) load.runningWh[i] = applianceRunningWh(a, runShare, dtH);
     }
     cabinC[i] = air;
   }
-  return loads;
+  const b = p.input.rig.battery;
+  return {
+    acWh,
+    dcWh,
+    propaneHeatWh,
+    acRunningW,
+    acSurgeExtraW,
+    acStandbyOn,
+    heavy,
+    cabinC,
+    thermostatRun,
+    battery: batteryClimate(b.chemistry, b.heatedSpace, cabinC, p.ambientC),
+  };
 }

@@ -41,7 +41,8 @@ export { noctCellTempC, effectiveNoctC, pvDcPowerW, FLUSH_EXTRA_C } from './pv-m
 export { martinRuizIam, martinRuizDiffuse, MARTIN_RUIZ_AR } from './iam';
 export { arrayOutput, controllerLimitW, moduleClassFor, pwmShareOfRated } from './charge-controller';
 export { currentAt, deSotoParams, maxPowerPoint, openCircuitV, MODULE_CLASSES } from './single-diode';
-export { CHEMISTRY, peukertRuntimeH, peukertFactor, acceptanceLimitShare, chargeBlockedByCold } from './battery';
+export { CHEMISTRY, peukertRuntimeH, peukertFactor, acceptanceLimitShare } from './battery';
+export { coldCapacityShare, chargeBlockedByCold, batteryTemperatureC } from './battery-temperature';
 export { inverterDcDrawW, dcCurrentA, checkOverload, pvwattsAcW, pvwattsDcW, PVWATTS_ETA_REF } from './inverter';
 export { scheduledShare, applianceStep, applianceEnergyWh } from './loads';
 export {

@@ -70,6 +70,8 @@ function ledgerRows(p: Prepared, l: LedgerColumns, solar: SolarSeries, loads: St
       irradianceWm2: poa[i] ?? 0,
       ambientC: ambientC[i] ?? 0,
       cabinC: loads.cabinC[i] ?? 0,
+      batteryC: loads.battery.batteryC[i] ?? 0,
+      batteryCapacityPct: (loads.battery.capacityShare[i] ?? 1) * 100,
       solarAvailableWh: solarAvailableWh[i] ?? 0,
       solarUsedWh: solarUsedWh[i] ?? 0,
       solarWastedWh: solarWastedWh[i] ?? 0,

@@ -5,7 +5,7 @@
 // lives in the model files; this file only orders it. Rule-driven or routine generators step in quarter hours so a
 // mid-hour start is caught.
 import type { FuelModel } from '../schemas/rig';
-import { batteryModel, CHEMISTRY, chargeBlockedByCold, type BatteryModel, type ChemistryPreset } from './battery';
+import { batteryModel, CHEMISTRY, type BatteryModel, type ChemistryPreset } from './battery';
 import { CONTINUOUS_SHARE, defaultFuelModel, fuelUse } from './generator';
 import { chargerDcW } from './hookup';
 import { inverterDraw } from './inverter';
@@ -117,7 +117,6 @@ type Rig = {
   chargerAmps: number;
   chargerEfficiency: number;
   vehicleW: number;
-  batteryHeated: boolean;
   gen: GeneratorPlan;
   genCapW: number;
   /** Fuel burned by the generator for a run of some hours delivering some Wh, in the fuel's unit. */
@@ -221,7 +220,6 @@ function rigOf(p: Prepared, s: Scenario): Rig {
     chargerAmps: rig.shoreCharger?.amps ?? 0,
     chargerEfficiency: rig.shoreCharger?.efficiency ?? 1,
     vehicleW: rig.vehicleCharger ? vehicleChargeW(rig.vehicleCharger.kind, rig.vehicleCharger.amps, chargeV) : 0,
-    batteryHeated: rig.battery.heatedSpace,
     gen,
     genCapW: gen.kind !== 'none' ? gen.ratedW * CONTINUOUS_SHARE : 0,
     fuelUse: gen.kind !== 'none' ? fuelUse(gen.model, gen.fuelKind) : () => 0,
@@ -261,25 +259,30 @@ function coverDemand(r: Rig, i: number, solarW: number, f: Flows): void {
   f.demandW = demand;
 }
 
-/** Stage 3a: the battery gives what is left of the demand (Peukert on each load's running current), or runs short. Returns the stored energy. */
+/**
+ * Stage 3a: the battery gives what is left of the demand (Peukert on each load's running current) down to what the
+ * cold holds back, or runs short. Returns the stored energy.
+ */
 function discharge(r: Rig, i: number, dtH: number, stored: number, f: Flows): number {
   const need = f.demandW * dtH;
   const removal = r.battery.removalWh(need, i, f.dcW, f.invDcW);
-  if (removal <= stored) {
+  const floor = r.battery.coldFloorWh(i);
+  const available = Math.max(0, stored - floor);
+  if (removal <= available) {
     f.batLoss += removal - need;
     f.flow -= need;
     return stored - removal;
   }
-  const delivered = need * (stored / removal);
+  const delivered = need * (available / removal);
   f.shortWh += need - delivered;
-  f.batLoss += stored - delivered;
+  f.batLoss += available - delivered;
   f.flow -= delivered;
-  return 0;
+  return stored - available;
 }
 
 /** Stage 3b: what the sources have left charges the battery, up to what it accepts. Returns the stored energy. */
 function charge(r: Rig, i: number, dtH: number, stored: number, solarW: number, f: Flows): number {
-  const cold = chargeBlockedByCold(r.chem.lithium, r.batteryHeated, r.p.ambientC[i] ?? 20);
+  const cold = (r.s.loads.battery.chargeBlocked[i] ?? 0) === 1;
   const acceptWh = cold ? 0 : r.battery.acceptWh(stored, dtH);
   let room = acceptWh;
   f.solarToBatWh = Math.min((solarW - f.solarToLoadW) * dtH, room);

@@ -96,6 +96,16 @@ describe('ledger export', () => {
     expect(lines).toHaveLength(3);
     expect(lines[1]).toContain('"Loch, north shore"');
   });
+  it('when the hours are exported, then each carries the outside, cabin and battery temperatures and what the battery can give', () => {
+    const csv = ledgerCsv(result.ledger.slice(0, 1), ['Loch']);
+    const [header, first] = csv.trim().split('\r\n');
+    expect(header).toMatch(/outside °C,cabin °C,battery °C,battery deliverable %$/);
+    const row = result.ledger[0];
+    const tail = [row?.ambientC, row?.cabinC, row?.batteryC, row?.batteryCapacityPct].map((v) =>
+      String(Math.round((v ?? 0) * 10) / 10),
+    );
+    expect(first?.split(',').slice(-4)).toEqual(tail);
+  });
 });
 
 it('the demo fixture is the engine demo', () => {
