@@ -35,6 +35,9 @@ export type CabinModel = {
   roofGainPerWm2: number;
   sideGainPerWm2: number;
   peopleW: number;
+  /** freeRunningC and heatToMoveW for this cabin, for loops that ask them hour after hour. */
+  floatC: (outsideC: number, gainsW: number) => number;
+  heatToMove: (mode: 'cooling' | 'heating', cabinC: number, setPointC: number) => number;
 };
 
 export function envelopeAreaM2(c: Pick<Cabin, 'lengthM' | 'widthM' | 'heightM'>): number {
@@ -46,12 +49,15 @@ export function cabinModel(c: Cabin): CabinModel {
   const roof = c.lengthM * c.widthM;
   const windows = WINDOW_M2_PER_M * c.lengthM;
   const walls = Math.max(0, 2 * (c.lengthM + c.widthM) * c.heightM - windows);
-  return {
+  const m: CabinModel = {
     ua: u * envelopeAreaM2(c),
     roofGainPerWm2: (roof * ROOF_ABSORPTANCE * u) / OUTSIDE_FILM_W_M2K,
     sideGainPerWm2: (walls * WALL_ABSORPTANCE * u) / OUTSIDE_FILM_W_M2K + windows * WINDOW_SHGC,
     peopleW: c.occupants * PERSON_W,
+    floatC: (outsideC, gainsW) => freeRunningC(m, outsideC, gainsW),
+    heatToMove: (mode, cabinC, setPointC) => heatToMoveW(m, mode, cabinC, setPointC),
   };
+  return m;
 }
 
 /** Mean irradiance on a vertical surface over all azimuths, W/m²: beam DNI·sin z/π, sky DHI/2, ground GHI·ρ/2. */

@@ -8,10 +8,10 @@
 // from memory); propane furnace or heater 70 % of its heat input reaches the cabin (vented RV furnaces 60–75 %,
 // from memory); electric heating 100 % (resistance: every watt becomes heat).
 import type { Appliance } from '../schemas/appliance';
-import { cabinModel, freeRunningC, heatToMoveW, type CabinModel } from './cabin';
+import { cabinModel, type CabinModel } from './cabin';
 import type { HeavyLoad } from './battery';
 import { batteryClimate, type BatteryClimate } from './battery-temperature';
-import { applianceEnergyWh, applianceHeatWh, applianceRunningWh } from './loads';
+import { applianceMeter } from './loads';
 import type { Prepared } from './prepare';
 
 export const COOLING_COP = 2.9;
@@ -69,57 +69,60 @@ export function climateLoads(p: Prepared, cabinSolarW: Float64Array): StepLoads 
   const heavy = [...p.heavy];
   const cabinC = new Float64Array(n);
   const thermostatRun = new Map<number, Float64Array>();
-  const capacities = units.map((t) => thermostatCapacityW(t.appliance));
-  const runs = units.map((t) => {
+  // Each unit's fixed figures, worked out once.
+  const plans = units.map((t) => {
+    const a = t.appliance;
     const run = new Float64Array(n);
     thermostatRun.set(t.index, run);
-    if (t.appliance.circuit === 'ac' && t.appliance.standbyW > 0) acStandbyOn.fill(1);
-    return run;
-  });
-  // Running energy of the units whose running current passes the bank's 20-hour current, for Peukert.
-  const heavyOf = units.map((t) => {
-    if (t.heavyCurrentA <= 0) return undefined;
-    const load: HeavyLoad = {
-      circuit: t.appliance.circuit === 'ac' ? 'ac' : 'dc',
-      currentA: t.heavyCurrentA,
-      runningWh: new Float64Array(n),
+    if (a.circuit === 'ac' && a.standbyW > 0) acStandbyOn.fill(1);
+    // Running energy of a unit whose running current passes the bank's 20-hour current, for Peukert.
+    const load: HeavyLoad | null =
+      t.heavyCurrentA > 0
+        ? { circuit: a.circuit === 'ac' ? 'ac' : 'dc', currentA: t.heavyCurrentA, runningWh: new Float64Array(n) }
+        : null;
+    if (load) heavy.push(load);
+    const s = a.schedule;
+    return {
+      active: t.active,
+      run,
+      load,
+      meter: applianceMeter(a),
+      capacity: thermostatCapacityW(a),
+      mode: s.kind === 'thermostat' ? s.mode : ('heating' as const),
+      setPointC: s.kind === 'thermostat' ? s.setPointC : 0,
+      ac: a.circuit === 'ac',
+      standby: a.standbyW > 0,
+      runningTotalW: a.quantity * a.runningW,
+      surgeExtraW: (a.surgeW ?? a.runningW) - a.runningW,
     };
-    heavy.push(load);
-    return load;
   });
   for (let i = 0; i < n; i++) {
     const dtH = p.stepH[i] ?? 1;
     const gainsW = (cabinSolarW[i] ?? 0) + (p.internalGainW[i] ?? 0) + cabin.peopleW;
-    let air = freeRunningC(cabin, p.ambientC[i] ?? 15, gainsW);
-    for (let u = 0; u < units.length; u++) {
-      const t = units[u];
-      const run = runs[u];
-      if (!t || !run) continue;
-      const a = t.appliance;
-      const s = a.schedule;
-      const active = t.active[i] ?? 0;
-      const capacity = capacities[u] ?? 0;
+    let air = cabin.floatC(p.ambientC[i] ?? 15, gainsW);
+    for (const u of plans) {
+      const active = u.active[i] ?? 0;
       let runShare = 0;
-      if (s.kind === 'thermostat' && active > 0 && capacity > 0) {
-        const duty = Math.min(1, heatToMoveW(cabin, s.mode, air, s.setPointC) / capacity);
-        runShare = active * duty;
+      if (active > 0 && u.capacity > 0) {
+        runShare = active * Math.min(1, cabin.heatToMove(u.mode, air, u.setPointC) / u.capacity);
         // The step's mean temperature moves by the heat delivered over the active part of the step.
-        air += ((s.mode === 'cooling' ? -1 : 1) * runShare * capacity) / cabin.ua;
+        air += ((u.mode === 'cooling' ? -1 : 1) * runShare * u.capacity) / cabin.ua;
       }
-      run[i] = runShare;
-      const electricWh = applianceEnergyWh(a, runShare, dtH);
-      if (a.circuit === 'ac') {
+      // Off and without a standby draw, the unit adds nothing this step.
+      if (runShare === 0 && !u.standby) continue;
+      u.run[i] = runShare;
+      const electricWh = u.meter.energyWh(runShare, dtH);
+      if (u.ac) {
         acWh[i] = (acWh[i] ?? 0) + electricWh;
         if (runShare > 0) {
-          acRunningW[i] = (acRunningW[i] ?? 0) + a.quantity * a.runningW;
-          acSurgeExtraW[i] = Math.max(acSurgeExtraW[i] ?? 0, (a.surgeW ?? a.runningW) - a.runningW);
+          acRunningW[i] = (acRunningW[i] ?? 0) + u.runningTotalW;
+          acSurgeExtraW[i] = Math.max(acSurgeExtraW[i] ?? 0, u.surgeExtraW);
         }
       } else {
         dcWh[i] = (dcWh[i] ?? 0) + electricWh;
-        propaneHeatWh[i] = (propaneHeatWh[i] ?? 0) + applianceHeatWh(a, runShare, dtH);
+        propaneHeatWh[i] = (propaneHeatWh[i] ?? 0) + u.meter.heatWh(runShare, dtH);
       }
-      const load = heavyOf[u];
-      if (load) load.runningWh[i] = applianceRunningWh(a, runShare, dtH);
+      if (u.load) u.load.runningWh[i] = u.meter.runningWh(runShare, dtH);
     }
     cabinC[i] = air;
   }

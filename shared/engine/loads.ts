@@ -39,3 +39,18 @@ export function applianceStep(a: Appliance, share: number, durationH: number): A
     running: share > 0,
   };
 }
+
+/** The three energies of one appliance, for loops that ask them step after step. */
+export type ApplianceMeter = {
+  energyWh: (runShare: number, durationH: number) => number;
+  runningWh: (runShare: number, durationH: number) => number;
+  heatWh: (runShare: number, durationH: number) => number;
+};
+
+export function applianceMeter(a: Appliance): ApplianceMeter {
+  return {
+    energyWh: (runShare, durationH) => applianceEnergyWh(a, runShare, durationH),
+    runningWh: (runShare, durationH) => applianceRunningWh(a, runShare, durationH),
+    heatWh: (runShare, durationH) => applianceHeatWh(a, runShare, durationH),
+  };
+}

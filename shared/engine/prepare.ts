@@ -1,7 +1,7 @@
 // Precomputation shared by every scenario of one trip: the time grid, where each hour is, local time, ambient
 // temperature, sun geometry and clear-sky irradiance, and the appliance loads. Scenarios (sky band, headroom) reuse
 // it. The sun is sampled at the start, middle and end of each lit step (Simpson's rule); in a step where it crosses
-// the horizon, every five minutes (composite Simpson), so a sunrise or sunset inside the hour is weighed properly.
+// the horizon, every 7.5 minutes (composite Simpson), so a sunrise or sunset inside the hour is weighed properly.
 import type { EngineInput } from '../schemas/engine-input';
 import type { Appliance } from '../schemas/appliance';
 import type { DayType, RoutineWindow } from '../schemas/common';
@@ -10,7 +10,7 @@ import { haurwitzGhi, ineichenPerez, kastenYoungAirMass, pressureRatio } from '.
 import type { HeavyLoad } from './battery';
 import { extraterrestrialW } from './extraterrestrial';
 import { inverterDcDrawW } from './inverter';
-import { applianceEnergyWh, applianceHeatWh, applianceRunningWh, scheduledShare } from './loads';
+import { applianceMeter, scheduledShare } from './loads';
 import { windowsShare, type LocalStep } from './routines';
 import { leafOff, resolveExposure, type ResolvedExposure } from './site-exposure';
 import { sunPositionInto } from './sun-position';
@@ -27,8 +27,8 @@ import {
 } from './time-grid';
 
 export const QUARTERS = 4; // generator sub-steps
-/** Composite Simpson panels in a step where the sun crosses the horizon: 2 × 6 intervals of five minutes. */
-const HORIZON_PANELS = 6;
+/** Composite Simpson panels in a step where the sun crosses the horizon: 2 × 4 intervals of 7.5 minutes. */
+const HORIZON_PANELS = 4;
 
 /** Sun samples of the trip, lit ones only: step i owns [start[i], start[i + 1]), each with its share of the step. */
 export type SunSamples = {
@@ -411,6 +411,7 @@ function fillLoads(p: Prepared): void {
       });
       continue;
     }
+    const meter = applianceMeter(a);
     const isAc = a.circuit === 'ac';
     const total = isAc ? acWh : dcWh;
     const heats = !isAc && a.heatInputW !== 0;
@@ -426,16 +427,16 @@ function fillLoads(p: Prepared): void {
       if (skipOff && sh === 0) continue;
       const runShare = sh * a.dutyCycle;
       const dtH = stepH[i] ?? 1;
-      const e = applianceEnergyWh(a, runShare, dtH);
+      const e = meter.energyWh(runShare, dtH);
       energy[i] = e;
-      if (running) running[i] = applianceRunningWh(a, runShare, dtH);
+      if (running) running[i] = meter.runningWh(runShare, dtH);
       total[i] = (total[i] ?? 0) + e;
       if (isAc) {
         if (sh > 0) {
           acRunningW[i] = (acRunningW[i] ?? 0) + runningTotalW;
           acSurgeExtraW[i] = Math.max(acSurgeExtraW[i] ?? 0, surgeExtra);
         }
-      } else if (heats) heatWh[i] = (heatWh[i] ?? 0) + applianceHeatWh(a, runShare, dtH);
+      } else if (heats) heatWh[i] = (heatWh[i] ?? 0) + meter.heatWh(runShare, dtH);
     }
     if (isAc && a.standbyW > 0) acStandbyOn.fill(1, 0, n);
     // Only routine loads are ever suggested for moving to a drive, so only theirs are totalled per stop.
