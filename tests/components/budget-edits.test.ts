@@ -4,6 +4,7 @@ import { applyWhatIf, rigWithExtraSolar } from '@/components/budget/what-if';
 import { filterLedger, ledgerCsv } from '@/components/ledger/ledger-csv';
 import { DEMO_TRIPS, simulateTrip } from '@/shared/engine';
 import type { Fix } from '@/shared/engine/result-types';
+import { cabinSchema } from '@/shared/schemas/rig';
 import { toEngineInput } from '@/shared/trip-to-engine-input';
 import { NO_WHAT_IF } from '@/stores/what-if-store';
 import { demoDetail } from '../e2e/fixtures';
@@ -12,6 +13,21 @@ const detail = demoDetail('highlandLoop');
 const input = toEngineInput(detail);
 if (!input) throw new Error('the demo trip has stops');
 const result = simulateTrip(input);
+
+describe('engine input from a stored trip', () => {
+  it('when a trip was stored before rigs had a living space, then it runs on the default one (a 6 m caravan for two)', () => {
+    const { cabin: _cabin, ...olderRig } = detail.rig.rig;
+    const older = { ...detail, rig: { ...detail.rig, rig: olderRig as typeof detail.rig.rig } };
+    const fromOlder = toEngineInput(older);
+    if (!fromOlder) throw new Error('no input');
+    const withDefault = toEngineInput({
+      ...detail,
+      rig: { ...detail.rig, rig: { ...olderRig, cabin: cabinSchema.parse({}) } },
+    });
+    if (!withDefault) throw new Error('no input');
+    expect(simulateTrip(fromOlder).headline).toEqual(simulateTrip(withDefault).headline);
+  });
+});
 
 describe('what-if edits', () => {
   it('when no what-if is on, then the input is unchanged', () => {
