@@ -13,7 +13,7 @@ import { inverterDcDrawW } from './inverter';
 import { applianceMeter, scheduledShare } from './loads';
 import { windowsShare, type LocalStep } from './routines';
 import { leafOff, resolveExposure, type ResolvedExposure } from './site-exposure';
-import { sunPositionInto } from './sun-position';
+import { dayOfYearUtc, sunPositionInto } from './sun-position';
 import { ambientC } from './temperature-curve';
 import {
   buildGrid,
@@ -179,21 +179,14 @@ function clearSkyGhi(stop: Stop | undefined, altDeg: number, dniExtra: number): 
   }).ghi;
 }
 
-/** dayOfYearUtc and extraterrestrialW with the year's start and the last day remembered: one Date per year, not per step. */
-type DayCache = { yearStartMs: number; nextYearMs: number; day: number; dniExtra: number };
+/** The extraterrestrial irradiance of the last UTC day asked for: worked out once per day, not per step. */
+type DayCache = { utcDay: number; dniExtra: number };
 
 function dniExtraAt(c: DayCache, utcMs: number, solarConstant: number): number {
-  if (!(utcMs >= c.yearStartMs && utcMs < c.nextYearMs)) {
-    const y = new Date(utcMs).getUTCFullYear();
-    c.yearStartMs = Date.UTC(y, 0, 1);
-    c.nextYearMs = Date.UTC(y + 1, 0, 1);
-    c.day = Number.NaN;
-  }
-  // The same expression as dayOfYearUtc, so the day (and the irradiance) is unchanged.
-  const day = Math.floor((utcMs - c.yearStartMs) / 86_400_000) + 1;
-  if (day !== c.day) {
-    c.day = day;
-    c.dniExtra = extraterrestrialW(day, solarConstant);
+  const utcDay = Math.floor(utcMs / 86_400_000);
+  if (utcDay !== c.utcDay) {
+    c.utcDay = utcDay;
+    c.dniExtra = extraterrestrialW(dayOfYearUtc(utcMs), solarConstant);
   }
   return c.dniExtra;
 }
@@ -224,7 +217,7 @@ function fillExposures(p: Prepared, stops: readonly Stop[]): void {
 function fillSun(p: Prepared, stops: readonly Stop[], solarConstant: number): void {
   const pos = new Float64Array(9); // start, middle, end: apparent altitude, azimuth, true altitude each
   const at = new Float64Array(3);
-  const days: DayCache = { yearStartMs: Number.NaN, nextYearMs: Number.NaN, day: Number.NaN, dniExtra: 0 };
+  const days: DayCache = { utcDay: Number.NaN, dniExtra: 0 };
   const start = new Int32Array(p.n + 1);
   const lists: SampleLists = { weight: [], atMs: [], altDeg: [], azDeg: [], cosZ: [], cosZTrue: [], ghiClear: [] };
   const add = (stop: Stop | undefined, ms: number, w: number, v: Float64Array, k: number, dniExtra: number) => {
