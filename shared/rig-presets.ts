@@ -18,6 +18,7 @@ export const RIG_PRESETS: readonly RigPreset[] = [
       shoreCharger: { amps: 15 },
       vehicleCharger: { kind: 'dc-dc', amps: 30 },
       propaneTanks: [{ name: 'Cylinder', propaneKg: 4.5 }],
+      cabin: { lengthM: 5.4, widthM: 1.9, heightM: 1.9, insulation: 'standard', occupants: 2 },
     },
   },
   {
@@ -36,6 +37,7 @@ export const RIG_PRESETS: readonly RigPreset[] = [
         { name: 'Cylinder A', propaneKg: 6 },
         { name: 'Cylinder B', propaneKg: 6 },
       ],
+      cabin: { lengthM: 6, widthM: 2.3, heightM: 2.1, insulation: 'standard', occupants: 2 },
     },
   },
   {
@@ -51,6 +53,7 @@ export const RIG_PRESETS: readonly RigPreset[] = [
       shoreCharger: { amps: 15 },
       vehicleCharger: { kind: 'alternator', amps: 15 },
       propaneTanks: [{ name: 'Cylinder', propaneKg: 11 }],
+      cabin: { lengthM: 6, widthM: 2.3, heightM: 2.1, insulation: 'standard', occupants: 2 },
     },
   },
   {
@@ -71,6 +74,7 @@ export const RIG_PRESETS: readonly RigPreset[] = [
         { name: 'Cylinder A', propaneKg: 9.07 },
         { name: 'Cylinder B', propaneKg: 9.07 },
       ],
+      cabin: { lengthM: 7.3, widthM: 2.4, heightM: 2.3, insulation: 'standard', occupants: 2 },
     },
   },
   {
@@ -87,6 +91,7 @@ export const RIG_PRESETS: readonly RigPreset[] = [
       vehicleCharger: { kind: 'dc-dc', amps: 50 },
       generator: { ratedW: 3500, fuel: 'petrol', mode: { kind: 'rule', startBelowSocPct: 30, stopAboveSocPct: 85 } },
       propaneTanks: [{ name: 'Tank', propaneKg: 11 }],
+      cabin: { lengthM: 7, widthM: 2.3, heightM: 2.4, insulation: 'standard', occupants: 2 },
     },
   },
 ];

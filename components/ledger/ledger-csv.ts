@@ -29,6 +29,10 @@ export function ledgerCsv(rows: LedgerRow[], stopNames: string[]): string {
     'generator Wh',
     'energy short Wh',
     'propane left kg',
+    'outside °C',
+    'cabin °C',
+    'battery °C',
+    'battery deliverable %',
   ];
   const lines = rows.map((r) => [
     r.local,
@@ -46,6 +50,10 @@ export function ledgerCsv(rows: LedgerRow[], stopNames: string[]): string {
       r.generatorWh,
       r.energyShortWh,
       r.propaneLeftKg,
+      r.ambientC,
+      r.cabinC,
+      r.batteryC,
+      r.batteryCapacityPct,
     ].map(tenth),
   ]);
   return toCsv([header, ...lines]);

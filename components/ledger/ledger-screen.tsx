@@ -3,6 +3,7 @@ import { FlatList, StyleSheet, View } from 'react-native';
 import { useBudgetView } from '@/components/budget/use-budget-view';
 import { localDay, localMoment } from '@/components/format/time';
 import { useIsWide } from '@/components/theme/breakpoints';
+import { temperature } from '@/components/format/units';
 import { colors, space } from '@/components/theme/tokens';
 import { TabScroll } from '@/components/trip/tab-scroll';
 import { Button } from '@/components/ui/button';
@@ -16,6 +17,7 @@ import { Text } from '@/components/ui/text';
 import type { LedgerRow } from '@/shared/engine/result-types';
 import type { TripDetail } from '@/shared/schemas/api';
 import { DayCards } from './day-cards';
+import { useUnits } from '@/stores/units-store';
 import { daysCsv, filterLedger, ledgerCsv } from './ledger-csv';
 import { downloadFile } from './download-file';
 
@@ -55,6 +57,8 @@ export function LedgerScreen({ detail }: { detail: TripDetail }) {
   const [stop, setStop] = useState('all');
   const [shortOnly, setShortOnly] = useState(false);
   const names = detail.stops.map((s) => s.stop.name);
+  const units = useUnits();
+  const tUnit = temperature(0, units).unit;
   const cols: Col[] = [
     { title: 'Time', width: 150, get: (r) => localMoment(r.local) },
     {
@@ -78,6 +82,15 @@ export function LedgerScreen({ detail }: { detail: TripDetail }) {
       width: 80,
       get: (r) => wh(r.energyShortWh),
       tone: (r) => (r.energyShortWh > 0 ? 'ember' : 'ink'),
+    },
+    { title: `Outside ${tUnit}`, width: 80, get: (r) => temperature(r.ambientC, units).value },
+    { title: `Cabin ${tUnit}`, width: 80, get: (r) => temperature(r.cabinC, units).value },
+    { title: `Battery ${tUnit}`, width: 80, get: (r) => temperature(r.batteryC, units).value },
+    {
+      title: 'Battery gives %',
+      width: 90,
+      get: (r) => String(Math.round(r.batteryCapacityPct)),
+      tone: (r) => (r.batteryCapacityPct < 100 ? 'ember' : 'ink'),
     },
   ];
   const tableWidth = cols.reduce((s, c) => s + c.width, 0) + space.md * 2;

@@ -9,6 +9,7 @@ import { ConflictNotice } from '@/components/ui/conflict-notice';
 import { NumberField } from '@/components/ui/number-field';
 import { Text } from '@/components/ui/text';
 import { TimeOfDayField } from '@/components/ui/time-of-day-field';
+import { COOLING_COP, ELECTRIC_HEATER_EFFICIENCY, FUEL_HEATER_EFFICIENCY } from '@/shared/engine/climate';
 import type { ApplianceRecord, TripDetail } from '@/shared/schemas/api';
 import { scheduleSchema, type Schedule } from '@/shared/schemas/appliance';
 import { toEngineInput } from '@/shared/trip-to-engine-input';
@@ -22,6 +23,13 @@ import { describeWindow, setLength, setStart, stripOf, type StripKey } from './r
 import { RoutineStrip } from './routine-strip';
 
 type Props = { detail: TripDetail; record: ApplianceRecord; canEdit: boolean };
+
+/** What the efficiency means and the figure used when it is left empty. */
+export function thermostatEfficiencyHint(mode: 'cooling' | 'heating', circuit: 'ac' | 'dc' | 'fuel'): string {
+  if (mode === 'cooling') return `heat removed per unit of electricity (EER ÷ 3.41); empty: ${COOLING_COP}`;
+  const typical = circuit === 'fuel' ? FUEL_HEATER_EFFICIENCY : ELECTRIC_HEATER_EFFICIENCY;
+  return `share of its ${circuit === 'fuel' ? 'propane' : 'electricity'} that heats the cabin; empty: ${typical * 100} %`;
+}
 
 const STRIPS: { value: StripKey; label: string }[] = [
   { value: 'all', label: 'Every day' },
@@ -106,7 +114,7 @@ export function ScheduleEditor({ detail, record, canEdit }: Props) {
             kind === 'always'
               ? { kind: 'always' }
               : kind === 'thermostat'
-                ? { kind: 'thermostat', mode: 'heating', setPointC: 18, fullDutyDeltaC: 12 }
+                ? { kind: 'thermostat', mode: 'heating', setPointC: 18 }
                 : { kind: 'routine', windows: [{ days: { kind: 'all' }, startHour: 19, startMinute: 0, minutes: 60 }] },
           )
         }
@@ -134,6 +142,27 @@ export function ScheduleEditor({ detail, record, canEdit }: Props) {
               v !== null && setDraft({ ...draft, setPointC: fromDisplay(v, 'temperature', units) })
             }
             error={valid.success ? undefined : valid.error.issues.find((i) => i.path.includes('setPointC'))?.message}
+          />
+          <NumberField
+            testID="thermostat-efficiency"
+            label={draft.mode === 'cooling' ? 'Cooling efficiency (COP)' : 'Heater efficiency'}
+            unit={draft.mode === 'cooling' ? undefined : '%'}
+            hint={thermostatEfficiencyHint(draft.mode, record.appliance.circuit)}
+            editable={canEdit}
+            value={
+              draft.efficiency === undefined
+                ? undefined
+                : draft.mode === 'cooling'
+                  ? draft.efficiency
+                  : Math.round(draft.efficiency * 100)
+            }
+            onChangeNumber={(v) => {
+              const { efficiency: _typical, ...rest } = draft;
+              setDraft(
+                v === null ? rest : { ...draft, efficiency: draft.mode === 'cooling' ? v : Math.round(v * 10) / 1000 },
+              );
+            }}
+            error={valid.success ? undefined : valid.error.issues.find((i) => i.path.includes('efficiency'))?.message}
           />
           <Text variant="caption" color="inkSoft">
             Optionally limit it to the hours below (for example while someone is aboard); leave them empty to follow the

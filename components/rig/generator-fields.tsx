@@ -6,13 +6,16 @@ import { ChoiceChips } from '@/components/ui/choice-chips';
 import { Text } from '@/components/ui/text';
 import type { RigInput } from '@/shared/schemas/rig';
 import { Advanced, fieldStyles, Num, type RigControl } from './rig-fields';
-import { FUEL_MODEL_START, generatorModeFor, type GeneratorModeInput, type GeneratorModeKind } from './rig-form-values';
+import { fuelModelStart, generatorModeFor, type GeneratorModeInput, type GeneratorModeKind } from './rig-form-values';
 
 type Props = { control: RigControl; setValue: UseFormSetValue<RigInput>; disabled: boolean };
 
 /** The generator's rating, fuel, when it runs, and (optionally) how much fuel it burns. */
 export function GeneratorFields({ control, setValue, disabled }: Props) {
-  const [mode, fuelModel] = useWatch({ control, name: ['generator.mode', 'generator.fuelModel'] });
+  const [mode, fuelModel, ratedW, fuel] = useWatch({
+    control,
+    name: ['generator.mode', 'generator.fuelModel', 'generator.ratedW', 'generator.fuel'],
+  });
   // Set hours come from a budget fix; remember the ones the form opened with so picking them again restores them.
   const [opened] = useState<GeneratorModeInput | undefined>(mode?.kind === 'routine' ? mode : undefined);
   const kind: GeneratorModeKind = mode?.kind ?? 'rule';
@@ -109,10 +112,10 @@ export function GeneratorFields({ control, setValue, disabled }: Props) {
                 control={control}
                 disabled={disabled}
                 name="generator.fuelModel.idleFuelKwhPerH"
-                label="Fuel at idle"
+                label="Fuel while running"
                 unit="kWh/h"
                 range={[0, 50]}
-                hint="burned each hour with no load"
+                hint="burned each hour it runs, whatever the load"
                 testID="rig-generator-idle-fuel"
               />
               <Num
@@ -143,7 +146,7 @@ export function GeneratorFields({ control, setValue, disabled }: Props) {
             style={styles.start}
             label="Enter my own figures"
             accessibilityLabel="Enter my generator's own fuel figures"
-            onPress={() => setValue('generator.fuelModel', { ...FUEL_MODEL_START }, { shouldDirty: true })}
+            onPress={() => setValue('generator.fuelModel', fuelModelStart(ratedW, fuel), { shouldDirty: true })}
           />
         )}
       </Advanced>

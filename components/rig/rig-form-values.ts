@@ -1,6 +1,7 @@
 // Pure pieces of the rig form: how stored figures are shown (fractions as percent, panel temperatures in the
 // user's units) and typed back, and the whole parts the form adds, so every field starts filled.
-import { solarArraySchema, type RigInput, type SolarArray } from '@/shared/schemas/rig';
+import { defaultFuelModel } from '@/shared/engine/generator';
+import { solarArraySchema, type FuelKind, type FuelModel, type RigInput, type SolarArray } from '@/shared/schemas/rig';
 import { fromDisplay, toDisplay, type UnitSystem } from '@/shared/units';
 
 const round = (v: number, digits: number) => Math.round(v * 10 ** digits) / 10 ** digits;
@@ -33,6 +34,20 @@ export function panelTemperature(units: UnitSystem): Shown {
   const show = (c: number) => round(toDisplay(c, 'temperature', units).value, 1);
   return { unit, show, store: (t) => round(fromDisplay(t, 'temperature', units), 2), range: rangeText(unit, show, 1) };
 }
+
+/** A length of the body, in m or ft. */
+export function bodyLength(units: UnitSystem): Shown {
+  const unit = toDisplay(0, 'length', units).unit;
+  const show = (m: number) => round(toDisplay(m, 'length', units).value, 1);
+  return { unit, show, store: (t) => round(fromDisplay(t, 'length', units), 3), range: rangeText(unit, show, 1) };
+}
+
+/** The insulation choices in plain words, with the heat they let through (typical, from memory). */
+export const INSULATION_CHOICES = [
+  { value: 'basic', label: 'Basic (thin walls, single glazing)' },
+  { value: 'standard', label: 'Standard touring' },
+  { value: 'four-season', label: 'Four-season' },
+] as const;
 
 /** Power change per degree: a step of 1 °F is 5/9 of a step of 1 °C, so the coefficient scales by that much. */
 export function perDegree(units: UnitSystem): Shown {
@@ -79,5 +94,21 @@ export function generatorModeFor(
   return opened?.kind === 'routine' ? opened : current;
 }
 
-/** Typical part-load figures to start the fuel model from: a small inverter generator burns about 4 units of fuel energy per unit of electricity (from memory, rough). */
-export const FUEL_MODEL_START = { idleFuelKwhPerH: 0.6, fuelKwhPerKwhOut: 4 } as const;
+/**
+ * The figures a person starts their own fuel model from: the engine's typical curve for the generator's size and fuel
+ * (rounded so the fields read cleanly), which they then replace with their unit's.
+ */
+export function fuelModelStart(ratedW: number | undefined, fuel: FuelKind | undefined): FuelModel {
+  const m = defaultFuelModel(ratedW && ratedW > 0 ? ratedW : 2000, fuel ?? 'petrol');
+  return { idleFuelKwhPerH: round(m.idleFuelKwhPerH, 2), fuelKwhPerKwhOut: round(m.fuelKwhPerKwhOut, 2) };
+}
+
+/** The hours a newly scheduled inverter starts from: a usual waking day, which the person then sets. */
+export const INVERTER_HOURS_START = { startHour: 7, endHour: 23 } as const;
+
+/** What each way of keeping the inverter means for its idle draw, in plain words beside the choice. */
+export const INVERTER_MODE_NOTE: Record<'on-demand' | 'scheduled' | 'always', string> = {
+  'on-demand': 'Its idle draw counts only in hours when an AC appliance runs from the battery.',
+  scheduled: 'Its idle draw counts every day in these hours, and whenever an AC appliance runs outside them.',
+  always: 'Its idle draw counts every hour of the trip.',
+};

@@ -24,7 +24,14 @@ import { CableCheckSection } from './cable-check-section';
 import { GeneratorFields } from './generator-fields';
 import { BATTERY_PRESETS, GENERATOR_PRESETS, INVERTER_PRESETS, SOLAR_PRESETS, TANK_PRESETS } from './part-presets';
 import { Advanced, Num, Presets, Section } from './rig-fields';
-import { newSolarArray, percentOfFraction } from './rig-form-values';
+import {
+  bodyLength,
+  INSULATION_CHOICES,
+  INVERTER_HOURS_START,
+  INVERTER_MODE_NOTE,
+  newSolarArray,
+  percentOfFraction,
+} from './rig-form-values';
 import { SolarArrayFields } from './solar-array-fields';
 
 /** The trip's rig in grouped sections; saved as one record with its version. */
@@ -201,8 +208,74 @@ export function RigForm({ tripId, record, canEdit, dcLoads = [] }: RigFormProps)
           )}
         />
         <Text variant="caption" color="inkSoft">
-          Inside, the battery is kept warm by the living space, so a cold night outside does not stop it charging.
+          Inside, the battery is at the living space's temperature (kept up by the heating), so a cold night outside
+          neither shrinks what it holds nor stops it charging. Outside, it follows the air.
         </Text>
+      </Section>
+
+      <Section title="Living space" testID="rig-cabin">
+        <Text variant="caption" color="inkSoft">
+          Heating and cooling come from the living space's heat balance: how much heat its walls let through, the sun on
+          its roof and windows, and the people and appliances inside.
+        </Text>
+        <View style={styles.grid}>
+          <Num
+            control={control}
+            disabled={off}
+            name="cabin.lengthM"
+            label="Body length"
+            shown={bodyLength(units)}
+            range={[2, 20]}
+            hint="outside, without the drawbar"
+            testID="rig-cabin-length"
+          />
+          <Num
+            control={control}
+            disabled={off}
+            name="cabin.occupants"
+            label="People aboard"
+            range={[0, 12]}
+            hint="about 100 W of heat each"
+            testID="rig-cabin-occupants"
+          />
+        </View>
+        <Controller
+          control={control}
+          name="cabin.insulation"
+          render={({ field }) => (
+            <ChoiceChips
+              testID="rig-cabin-insulation"
+              label="Insulation"
+              disabled={off}
+              value={field.value ?? 'standard'}
+              onChange={field.onChange}
+              options={[...INSULATION_CHOICES]}
+            />
+          )}
+        />
+        <Advanced what="body size" testID="rig-cabin-advanced">
+          <View style={styles.grid}>
+            <Num
+              control={control}
+              disabled={off}
+              name="cabin.widthM"
+              label="Body width"
+              shown={bodyLength(units)}
+              range={[1.2, 3]}
+              testID="rig-cabin-width"
+            />
+            <Num
+              control={control}
+              disabled={off}
+              name="cabin.heightM"
+              label="Body height"
+              shown={bodyLength(units)}
+              range={[1.2, 3.5]}
+              hint="floor to roof, outside"
+              testID="rig-cabin-height"
+            />
+          </View>
+        </Advanced>
       </Section>
 
       <Section title="Solar" testID="rig-solar">
@@ -322,14 +395,46 @@ export function RigForm({ tripId, record, canEdit, dcLoads = [] }: RigFormProps)
                   label="Switched on"
                   disabled={off}
                   value={field.value ?? 'on-demand'}
-                  onChange={field.onChange}
+                  onChange={(mode) => {
+                    field.onChange(mode);
+                    if (mode === 'scheduled' && !inverter.onHours)
+                      setValue('inverter.onHours', { ...INVERTER_HOURS_START }, { shouldDirty: true });
+                  }}
                   options={[
                     { value: 'on-demand', label: 'Only when AC is used' },
+                    { value: 'scheduled', label: 'In set hours' },
                     { value: 'always', label: 'All the time' },
                   ]}
                 />
               )}
             />
+            {inverter.mode === 'scheduled' ? (
+              <View style={styles.grid}>
+                <Num
+                  control={control}
+                  disabled={off}
+                  name="inverter.onHours.startHour"
+                  label="On from"
+                  unit="h"
+                  range={[0, 24]}
+                  hint="local hour, 0–24"
+                  testID="rig-inverter-on-from"
+                />
+                <Num
+                  control={control}
+                  disabled={off}
+                  name="inverter.onHours.endHour"
+                  label="Off at"
+                  unit="h"
+                  range={[0, 24]}
+                  hint="an earlier hour runs past midnight"
+                  testID="rig-inverter-off-at"
+                />
+              </View>
+            ) : null}
+            <Text variant="caption" color="inkSoft">
+              {INVERTER_MODE_NOTE[inverter.mode ?? 'on-demand']}
+            </Text>
             <Advanced what="inverter losses" testID="rig-inverter-advanced">
               <View style={styles.grid}>
                 <Num
@@ -339,7 +444,7 @@ export function RigForm({ tripId, record, canEdit, dcLoads = [] }: RigFormProps)
                   label="Efficiency"
                   shown={percentOfFraction}
                   range={[0.5, 1]}
-                  hint="share of battery power that comes out as AC"
+                  hint="at its best load; light loads get less"
                   testID="rig-inverter-efficiency"
                 />
                 <Num
@@ -349,7 +454,7 @@ export function RigForm({ tripId, record, canEdit, dcLoads = [] }: RigFormProps)
                   label="Idle draw"
                   unit="W"
                   range={[0, 200]}
-                  hint={inverter.mode === 'always' ? 'drawn every hour of the trip' : 'drawn in hours with AC load'}
+                  hint="drawn whenever it is switched on"
                   testID="rig-inverter-idle"
                 />
               </View>

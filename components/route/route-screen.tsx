@@ -13,6 +13,7 @@ import { NumberField } from '@/components/ui/number-field';
 import { Text } from '@/components/ui/text';
 import type { DriveRecord, StopRecord, TripDetail } from '@/shared/schemas/api';
 import { can } from '@/shared/schemas/roles';
+import type { SiteExposure } from '@/shared/schemas/trip';
 import { ApiError } from '@/stores/queries/api-client';
 import { useDriveSaveMutation, useStopDeleteMutation, useStopsReorderMutation } from '@/stores/queries/route';
 import { showToast } from '@/stores/toast-store';
@@ -26,6 +27,11 @@ const EXPOSURE: Record<string, string> = {
   'partial-shade': 'partial shade',
   'deep-forest': 'deep forest',
 };
+function exposureText(e: SiteExposure): string {
+  if (e.kind === 'preset') return EXPOSURE[e.preset] ?? e.preset;
+  if (e.kind === 'canopy') return `sky ${e.skyOpennessPct} % open${e.deciduous ? ', leaves fall in winter' : ''}`;
+  return 'custom horizon';
+}
 const SKY: Record<string, string> = {
   clear: 'clear',
   hazy: 'hazy or smoke',
@@ -135,7 +141,7 @@ export function RouteScreen({ detail }: { detail: TripDetail }) {
           {localMoment(s.arriveAt)} → {localMoment(s.departAt)}
         </Text>
         <Text>
-          {s.exposure.kind === 'preset' ? EXPOSURE[s.exposure.preset] : 'custom horizon'} · {SKY[s.skyOutlook]} ·{' '}
+          {exposureText(s.exposure)} · {SKY[s.skyOutlook]} ·{' '}
           {s.hookup ? `hookup ${s.hookup.amps} A ${s.hookup.volts} V` : 'no hookup'} ·{' '}
           {temperature(s.lowC, units).value}–{temperature(s.highC, units).value} {temperature(0, units).unit}
         </Text>

@@ -2,7 +2,15 @@
 // and the conversion to and from the shared stop schema, which stays the one validator.
 import { DateTime } from 'luxon';
 import { z } from 'zod';
-import { stopSchema, type SitePreset, type SkyOutlook, type Stop, type StopInput } from '@/shared/schemas/trip';
+import { SITE_PRESETS } from '@/shared/engine/site-exposure';
+import {
+  stopSchema,
+  type SiteExposure,
+  type SitePreset,
+  type SkyOutlook,
+  type Stop,
+  type StopInput,
+} from '@/shared/schemas/trip';
 import { fromDisplay, toDisplay, type UnitSystem } from '@/shared/units';
 
 const LOCAL = 'yyyy-MM-dd HH:mm';
@@ -20,8 +28,17 @@ export const stopFormSchema = z.object({
   timeZone: z.string().min(1, { error: 'Choose a time zone.' }),
   arrive: z.string().regex(/^\d{4}-\d{2}-\d{2} \d{2}:\d{2}$/, { error: 'Use a date and time like 2027-09-12 15:00.' }),
   depart: z.string().regex(/^\d{4}-\d{2}-\d{2} \d{2}:\d{2}$/, { error: 'Use a date and time like 2027-09-14 10:00.' }),
-  exposureKind: z.enum(['preset', 'custom']),
-  preset: z.enum(['open', 'light-cover', 'partial-shade', 'deep-forest']),
+  /** canopy: sky openness and leaf-area index (the presets are quick picks of both); custom: a horizon per sector. */
+  exposureKind: z.enum(['canopy', 'custom']),
+  opennessPct: z
+    .number({ error: 'Enter how much of the sky is open, 0 to 100 %.' })
+    .min(0, { error: 'Sky openness runs from 0 to 100 %.' })
+    .max(100, { error: 'Sky openness runs from 0 to 100 %.' }),
+  leafAreaIndex: z
+    .number({ error: 'Enter the leaf-area index, 0 to 10.' })
+    .min(0, { error: 'The leaf-area index runs from 0 to 10.' })
+    .max(10, { error: 'The leaf-area index runs from 0 to 10.' }),
+  deciduous: z.boolean(),
   horizon: z.string(),
   canopyPct: z.number({ error: 'Enter a share from 0 to 100.' }).min(0).max(100),
   skyOutlook: z.enum(['clear', 'hazy', 'broken-cloud', 'overcast']),
@@ -46,7 +63,13 @@ export function toFormValues(
   const zone = stop?.timeZone ?? fallbackZone;
   const local = (iso: string | undefined, fallback: string) =>
     iso ? DateTime.fromISO(iso, { setZone: true }).setZone(zone).toFormat(LOCAL) : fallback;
-  const exposure = stop?.exposure ?? { kind: 'preset' as const, preset: 'open' as const };
+  const exposure: SiteExposure = stop?.exposure ?? { kind: 'preset', preset: 'open' };
+  const canopy =
+    exposure.kind === 'canopy'
+      ? exposure
+      : exposure.kind === 'preset'
+        ? SITE_PRESETS[exposure.preset]
+        : SITE_PRESETS.open;
   const t = (c: number) => Math.round(toDisplay(c, 'temperature', units).value);
   return {
     name: stop?.name ?? '',
@@ -55,8 +78,10 @@ export function toFormValues(
     timeZone: zone,
     arrive: local(stop?.arriveAt, ''),
     depart: local(stop?.departAt, ''),
-    exposureKind: exposure.kind,
-    preset: exposure.kind === 'preset' ? exposure.preset : 'open',
+    exposureKind: exposure.kind === 'custom' ? 'custom' : 'canopy',
+    opennessPct: canopy.skyOpennessPct,
+    leafAreaIndex: canopy.leafAreaIndex,
+    deciduous: exposure.kind === 'canopy' && exposure.deciduous,
     horizon: exposure.kind === 'custom' ? exposure.horizonDeg.join(', ') : '0, 0, 0, 0, 0, 0, 0, 0',
     canopyPct: exposure.kind === 'custom' ? Math.round(exposure.canopyTransmittance * 100) : 0,
     skyOutlook: stop?.skyOutlook ?? 'clear',
@@ -74,6 +99,22 @@ export function toFormValues(
 
 export type StopFromForm =
   { ok: true; stop: StopInput } | { ok: false; errors: Partial<Record<keyof StopFormValues, string>> };
+
+/** The quick pick a sky openness and leaf-area index stand on, if any. */
+export function presetAt(opennessPct: number, leafAreaIndex: number): SitePreset | null {
+  const hit = (Object.keys(SITE_PRESETS) as SitePreset[]).find(
+    (k) => SITE_PRESETS[k].skyOpennessPct === opennessPct && SITE_PRESETS[k].leafAreaIndex === leafAreaIndex,
+  );
+  return hit ?? null;
+}
+
+/** A canopy that stands on a quick pick (evergreen) is stored as that preset, so its name shows in the route. */
+function canopyExposure(v: StopFormValues): SiteExposure {
+  const preset = v.deciduous ? null : presetAt(v.opennessPct, v.leafAreaIndex);
+  return preset
+    ? { kind: 'preset', preset }
+    : { kind: 'canopy', skyOpennessPct: v.opennessPct, leafAreaIndex: v.leafAreaIndex, deciduous: v.deciduous };
+}
 
 const FIELD_OF: Record<string, keyof StopFormValues> = {
   name: 'name',
@@ -123,8 +164,8 @@ export function fromFormValues(v: StopFormValues, units: UnitSystem): StopFromFo
     arriveAt,
     departAt,
     exposure:
-      v.exposureKind === 'preset'
-        ? { kind: 'preset', preset: v.preset as SitePreset }
+      v.exposureKind === 'canopy'
+        ? canopyExposure(v)
         : { kind: 'custom', horizonDeg, canopyTransmittance: v.canopyPct / 100 },
     skyOutlook: v.skyOutlook as SkyOutlook,
     hookup: v.hookupOn ? { amps: v.amps, volts: v.volts } : null,

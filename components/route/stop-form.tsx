@@ -16,23 +16,38 @@ import { ApiError, conflictCurrent } from '@/stores/queries/api-client';
 import { useStopSaveMutation } from '@/stores/queries/route';
 import { showToast } from '@/stores/toast-store';
 import { useUnits } from '@/stores/units-store';
-import { fromFormValues, stopFormSchema, toFormValues, type StopFormValues } from './stop-form-values';
+import { SITE_PRESETS } from '@/shared/engine/site-exposure';
+import type { SitePreset } from '@/shared/schemas/trip';
+import { fromFormValues, presetAt, stopFormSchema, toFormValues, type StopFormValues } from './stop-form-values';
 import { ZonePicker } from './zone-picker';
 
 type Props = { tripId: string; record: StopRecord | null; fallbackZone: string; onDone: () => void };
-type NumName = 'lat' | 'lon' | 'amps' | 'volts' | 'generatorStart' | 'generatorEnd' | 'low' | 'high' | 'canopyPct';
+type NumName =
+  | 'lat'
+  | 'lon'
+  | 'amps'
+  | 'volts'
+  | 'generatorStart'
+  | 'generatorEnd'
+  | 'low'
+  | 'high'
+  | 'canopyPct'
+  | 'opennessPct'
+  | 'leafAreaIndex';
 
 function Num({
   control,
   name,
   label,
   unit,
+  hint,
   testID,
 }: {
   control: Control<StopFormValues>;
   name: NumName;
   label: string;
   unit?: string;
+  hint?: string;
   testID: string;
 }) {
   // Numbers always sit in a row of two.
@@ -46,6 +61,7 @@ function Num({
             testID={testID}
             label={label}
             unit={unit}
+            hint={hint}
             value={field.value}
             onChangeNumber={field.onChange}
             onBlur={field.onBlur}
@@ -104,9 +120,9 @@ export function StopForm({ tripId, record, fallbackZone, onDone }: Props) {
     resolver: zodResolver(stopFormSchema),
     defaultValues: toFormValues(record?.stop ?? null, record?.notes ?? '', units, fallbackZone),
   });
-  const [exposureKind, hookupOn, generatorOn, timeZone] = useWatch({
+  const [exposureKind, hookupOn, generatorOn, timeZone, opennessPct, leafAreaIndex] = useWatch({
     control,
-    name: ['exposureKind', 'hookupOn', 'generatorOn', 'timeZone'],
+    name: ['exposureKind', 'hookupOn', 'generatorOn', 'timeZone', 'opennessPct', 'leafAreaIndex'],
   });
   const tUnit = temperature(0, units).unit;
   // Saves name the version the form was opened on, so someone else's change meanwhile is caught (409).
@@ -218,31 +234,67 @@ export function StopForm({ tripId, record, fallbackZone, onDone }: Props) {
             value={field.value}
             onChange={field.onChange}
             options={[
-              { value: 'preset', label: 'A usual site' },
+              { value: 'canopy', label: 'Sky openness' },
               { value: 'custom', label: 'Custom horizon' },
             ]}
           />
         )}
       />
-      {exposureKind === 'preset' ? (
-        <Controller
-          control={control}
-          name="preset"
-          render={({ field }) => (
-            <ChoiceChips
-              testID="stop-preset"
-              label="Cover"
-              value={field.value}
-              onChange={field.onChange}
-              options={[
-                { value: 'open', label: 'Open sky' },
-                { value: 'light-cover', label: 'Light tree cover' },
-                { value: 'partial-shade', label: 'Partial shade' },
-                { value: 'deep-forest', label: 'Deep forest' },
-              ]}
+      {exposureKind === 'canopy' ? (
+        <>
+          <ChoiceChips<SitePreset | ''>
+            testID="stop-preset"
+            label="Quick picks"
+            value={presetAt(opennessPct, leafAreaIndex) ?? ''}
+            onChange={(preset) => {
+              if (!preset) return;
+              setValue('opennessPct', SITE_PRESETS[preset].skyOpennessPct, { shouldDirty: true, shouldValidate: true });
+              setValue('leafAreaIndex', SITE_PRESETS[preset].leafAreaIndex, {
+                shouldDirty: true,
+                shouldValidate: true,
+              });
+            }}
+            options={[
+              { value: 'open', label: 'Open sky' },
+              { value: 'light-cover', label: 'Light tree cover' },
+              { value: 'partial-shade', label: 'Partial shade' },
+              { value: 'deep-forest', label: 'Deep forest' },
+            ]}
+          />
+          <View style={styles.grid}>
+            <Num
+              control={control}
+              name="opennessPct"
+              label="Sky openness"
+              unit="%"
+              hint="share of the sky the pitch sees; a canopy photo or app measures it"
+              testID="stop-openness"
             />
-          )}
-        />
+            <Num
+              control={control}
+              name="leafAreaIndex"
+              label="Leaf-area index"
+              hint="how thick the canopy is: 1 sparse, 3 woodland, 5 dense forest"
+              testID="stop-leaf-area"
+            />
+          </View>
+          <Controller
+            control={control}
+            name="deciduous"
+            render={({ field }) => (
+              <ChoiceChips
+                testID="stop-deciduous"
+                label="Trees"
+                value={field.value ? 'deciduous' : 'evergreen'}
+                onChange={(v) => field.onChange(v === 'deciduous')}
+                options={[
+                  { value: 'evergreen', label: 'Evergreen' },
+                  { value: 'deciduous', label: 'Lose their leaves in winter' },
+                ]}
+              />
+            )}
+          />
+        </>
       ) : (
         <View style={styles.grid}>
           <Txt

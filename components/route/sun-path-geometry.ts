@@ -2,7 +2,7 @@
 // and the horizon (altitude 0) on the rim. Pure, so the picture's maths is testable.
 import { DateTime } from 'luxon';
 import { getPosition } from 'suncalc';
-import { resolveExposure } from '@/shared/engine/site-exposure';
+import { canopyBeamTransmittance, resolveExposure } from '@/shared/engine/site-exposure';
 import type { SiteExposure } from '@/shared/schemas/trip';
 
 export type Pt = { x: number; y: number };
@@ -13,7 +13,10 @@ export function polar(altitudeDeg: number, azimuthDeg: number, cx: number, cy: n
   return { x: cx + r * Math.sin(a), y: cy - r * Math.cos(a) };
 }
 
-/** The obstruction as a closed outline: each compass sector drawn at its elevation. */
+/**
+ * The obstruction as a closed outline: each compass sector drawn at its elevation (for a canopy, the edge of the open
+ * sky overhead), with the share of a sun just below that edge (at most 45° up) that still reaches the panels.
+ */
 export function horizonOutline(
   exposure: SiteExposure,
   cx: number,
@@ -21,6 +24,7 @@ export function horizonOutline(
   radius: number,
 ): { points: Pt[]; canopyTransmittance: number } {
   const e = resolveExposure(exposure);
+  const edge = Math.max(...e.horizonDeg);
   const n = e.horizonDeg.length;
   const width = 360 / n;
   const points: Pt[] = [];
@@ -28,7 +32,9 @@ export function horizonOutline(
     const from = i * width - width / 2;
     for (let k = 0; k <= 4; k++) points.push(polar(h, from + (width * k) / 4, cx, cy, radius));
   });
-  return { points, canopyTransmittance: e.canopyTransmittance };
+  const through =
+    e.leafAreaIndex === null ? e.canopyTransmittance : canopyBeamTransmittance(e.leafAreaIndex, Math.min(45, edge));
+  return { points, canopyTransmittance: edge > 0 ? through : 1 };
 }
 
 export type SunTrack = { label: string; points: Pt[]; hours: { hour: number; at: Pt }[] };

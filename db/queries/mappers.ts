@@ -29,6 +29,11 @@ export function rigToColumns(rig: Rig) {
     generator: rig.generator,
     propaneTanks: rig.propaneTanks,
     dcWiring: rig.dcWiring,
+    cabinLengthM: rig.cabin.lengthM,
+    cabinWidthM: rig.cabin.widthM,
+    cabinHeightM: rig.cabin.heightM,
+    insulation: rig.cabin.insulation,
+    occupants: rig.cabin.occupants,
   };
 }
 
@@ -51,6 +56,13 @@ export function rigFromRow(row: RigRow): Rig {
     generator: row.generator ?? null,
     propaneTanks: row.propaneTanks,
     dcWiring: row.dcWiring ?? emptyDcWiring(),
+    cabin: {
+      lengthM: row.cabinLengthM,
+      widthM: row.cabinWidthM,
+      heightM: row.cabinHeightM,
+      insulation: row.insulation,
+      occupants: row.occupants,
+    },
   };
 }
 
@@ -137,7 +149,8 @@ export function scheduleToColumns(schedule: Schedule) {
     scheduleKind: schedule.kind,
     thermostatMode: schedule.kind === 'thermostat' ? schedule.mode : null,
     setPointC: schedule.kind === 'thermostat' ? schedule.setPointC : null,
-    fullDutyDeltaC: schedule.kind === 'thermostat' ? schedule.fullDutyDeltaC : null,
+    thermostatEfficiency: schedule.kind === 'thermostat' ? (schedule.efficiency ?? null) : null,
+    thermostatCapacityW: schedule.kind === 'thermostat' ? (schedule.capacityW ?? null) : null,
   };
 }
 
@@ -158,7 +171,8 @@ function scheduleFromRow(row: ApplianceRow, windows: RoutineWindowRow[]): Schedu
       kind: 'thermostat',
       mode: row.thermostatMode ?? 'heating',
       setPointC: row.setPointC ?? 20,
-      fullDutyDeltaC: row.fullDutyDeltaC ?? 12,
+      ...(row.thermostatEfficiency === null ? {} : { efficiency: row.thermostatEfficiency }),
+      ...(row.thermostatCapacityW === null ? {} : { capacityW: row.thermostatCapacityW }),
       ...(ordered.length > 0 ? { activeWindows: ordered } : {}),
     };
   }

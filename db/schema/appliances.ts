@@ -22,7 +22,9 @@ export const appliances = sqliteTable(
     scheduleKind: text('schedule_kind', { enum: ['always', 'routine', 'thermostat'] }).notNull(),
     thermostatMode: text('thermostat_mode', { enum: ['cooling', 'heating'] }),
     setPointC: real('set_point_c'),
-    fullDutyDeltaC: real('full_duty_delta_c'),
+    /** Thermostats: cooling COP or heating efficiency, and heat moved at full duty per unit (W); null for typical. */
+    thermostatEfficiency: real('thermostat_efficiency'),
+    thermostatCapacityW: real('thermostat_capacity_w'),
     /** The member who looks after this appliance's routine ("looked after by"). */
     caretakerUserId: text('caretaker_user_id').references(() => user.id, { onDelete: 'set null' }),
     version: integer('version').notNull().default(1),

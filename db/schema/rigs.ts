@@ -41,6 +41,14 @@ export const rigs = sqliteTable(
     propaneTanks: text('propane_tanks', { mode: 'json' }).$type<PropaneTank[]>().notNull(),
     // Null on rigs stored before DC runs existed: read as no runs on the rig's default basis.
     dcWiring: text('dc_wiring', { mode: 'json' }).$type<DcWiring>(),
+    /** The living space for its heat balance; defaults are a 6 m touring caravan with two aboard. */
+    cabinLengthM: real('cabin_length_m').notNull().default(6),
+    cabinWidthM: real('cabin_width_m').notNull().default(2.3),
+    cabinHeightM: real('cabin_height_m').notNull().default(2.1),
+    insulation: text('insulation', { enum: ['basic', 'standard', 'four-season'] })
+      .notNull()
+      .default('standard'),
+    occupants: integer('occupants').notNull().default(2),
     version: integer('version').notNull().default(1),
     createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull(),
     updatedAt: integer('updated_at', { mode: 'timestamp_ms' }).notNull(),

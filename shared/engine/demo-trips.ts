@@ -109,6 +109,8 @@ export const highlandLoop: EngineInputDraft = {
       { name: 'Cylinder B', propaneKg: 6 },
     ],
     dcWiring: HIGHLAND_DC_WIRING,
+    // A 6 m touring caravan for two (outside body size).
+    cabin: { lengthM: 6, widthM: 2.3, heightM: 2.1, insulation: 'standard', occupants: 2 },
   },
   appliances: caravanLoads,
   options: { assumedHookup: { amps: 16, volts: 230 } },
@@ -125,7 +127,6 @@ const trailerLoads: ApplianceInput[] = [
       kind: 'thermostat',
       mode: 'cooling',
       setPointC: 27,
-      fullDutyDeltaC: 10,
       activeWindows: [{ days: { kind: 'all' }, startHour: 13, startMinute: 0, minutes: 300 }],
     },
   }),
@@ -138,7 +139,7 @@ const trailerLoads: ApplianceInput[] = [
   applianceFromLibrary('propane-stove', { id: 'stove' }),
   applianceFromLibrary('furnace-propane', {
     id: 'furnace',
-    schedule: { kind: 'thermostat', mode: 'heating', setPointC: 16, fullDutyDeltaC: 20 },
+    schedule: { kind: 'thermostat', mode: 'heating', setPointC: 16 },
   }),
 ];
 
@@ -214,6 +215,8 @@ export const desertSpringLoop: EngineInputDraft = {
       { name: 'Front B', propaneKg: 9.07 },
     ],
     dcWiring: DESERT_DC_WIRING,
+    // A 24 ft travel trailer for two.
+    cabin: { lengthM: 7.3, widthM: 2.4, heightM: 2.3, insulation: 'standard', occupants: 2 },
   },
   appliances: trailerLoads,
   options: { assumedHookup: { amps: 30, volts: 120 } },

@@ -4,8 +4,9 @@ import { CHEMISTRY } from './battery';
 import { ceilHalf, hhmm, kwh, localIso, localShort, utcIso, whereAt, whereText } from './describe';
 import { CONTINUOUS_SHARE } from './generator';
 import { chargerDcW } from './hookup';
-import { dcCurrentA } from './inverter';
-import { onShare } from './loads';
+import { dcCurrentA, inverterDcDrawW } from './inverter';
+import type { StepLoads } from './climate';
+import { scheduledShare } from './loads';
 import { prevDayType, type Prepared } from './prepare';
 import type { Fix, Flag } from './result-types';
 import type { LedgerColumns } from './walk';
@@ -15,7 +16,7 @@ export const ASSUMED_GENERATOR_W = 2000;
 const NIGHT_HOURS = 14; // a pitch night, afternoon arrival to morning departure
 const HIGH_CURRENT_A = 150;
 
-export type FlagContext = { p: Prepared; l: LedgerColumns; capacityWh: number; reservePct: number };
+export type FlagContext = { p: Prepared; l: LedgerColumns; loads: StepLoads; capacityWh: number; reservePct: number };
 
 function chargeV(p: Prepared): number {
   const b = p.input.rig.battery;
@@ -135,21 +136,21 @@ function capitalise(s: string): string {
 }
 
 function overloadFlags(ctx: FlagContext): Flag[] {
-  const { p } = ctx;
+  const { p, loads } = ctx;
   const inv = p.input.rig.inverter;
   if (!inv) return [];
   const surgeW = inv.surgeW ?? inv.ratedW * 2;
   const seen = new Set<number>();
   const flags: Flag[] = [];
   for (let i = 0; i < p.n; i++) {
-    const running = p.acRunningW[i] ?? 0;
+    const running = loads.acRunningW[i] ?? 0;
     if ((p.hookupW[i] ?? 0) > 0 || seen.has(p.where[i] ?? 0)) continue;
-    const over = running > inv.ratedW || running + (p.acSurgeExtraW[i] ?? 0) > surgeW;
+    const over = running > inv.ratedW || running + (loads.acSurgeExtraW[i] ?? 0) > surgeW;
     if (!over) continue;
     seen.add(p.where[i] ?? 0);
     const where = whereAt(p, i);
-    const names = overlappingAc(p, i);
-    const ratedW = Math.ceil(Math.max(running, (running + (p.acSurgeExtraW[i] ?? 0)) / 2) / 500) * 500;
+    const names = overlappingAc(ctx, i);
+    const ratedW = Math.ceil(Math.max(running, (running + (loads.acSurgeExtraW[i] ?? 0)) / 2) / 500) * 500;
     flags.push({
       id: `inverter-overload-${i}`,
       kind: 'inverter-overload',
@@ -163,7 +164,7 @@ function overloadFlags(ctx: FlagContext): Flag[] {
         {
           kind: 'stagger-appliances',
           text: `do not run ${names.join(' and ')} in the same minutes`,
-          params: { applianceIds: overlappingAcIds(p, i) },
+          params: { applianceIds: overlappingAcIds(ctx, i) },
         },
         { kind: 'larger-inverter', text: `an inverter of at least ${ratedW} W`, params: { ratedW } },
       ],
@@ -172,22 +173,26 @@ function overloadFlags(ctx: FlagContext): Flag[] {
   return flags;
 }
 
-function runningAc(p: Prepared, i: number): Appliance[] {
+/** AC appliances running in step i: scheduled on, or (thermostats) with a running share from the heat balance. */
+function runningAc(ctx: FlagContext, i: number): Appliance[] {
+  const { p, loads } = ctx;
   const step = {
     minuteOfDay: p.minuteOfDay[i] ?? 0,
     dayIndex: p.dayIndex[i] ?? 0,
     dayType: p.travelDay[i] ? ('travel' as const) : ('camp' as const),
     durationMin: (p.stepH[i] ?? 1) * 60,
   };
-  return p.input.appliances.filter(
-    (a) => a.circuit === 'ac' && onShare(a, step, prevDayType(p, i), p.ambientC[i] ?? 15) > 0,
-  );
+  return p.input.appliances.filter((a, j) => {
+    if (a.circuit !== 'ac') return false;
+    const run = loads.thermostatRun.get(j);
+    return run ? (run[i] ?? 0) > 0 : scheduledShare(a.schedule, step, prevDayType(p, i)) > 0;
+  });
 }
-function overlappingAc(p: Prepared, i: number): string[] {
-  return runningAc(p, i).map((a) => a.name.toLowerCase());
+function overlappingAc(ctx: FlagContext, i: number): string[] {
+  return runningAc(ctx, i).map((a) => a.name.toLowerCase());
 }
-function overlappingAcIds(p: Prepared, i: number): string[] {
-  return runningAc(p, i).map((a) => a.id);
+function overlappingAcIds(ctx: FlagContext, i: number): string[] {
+  return runningAc(ctx, i).map((a) => a.id);
 }
 
 function coldFlags(ctx: FlagContext): Flag[] {
@@ -254,7 +259,7 @@ function cablingFlags(ctx: FlagContext): Flag[] {
   const { p } = ctx;
   const inv = p.input.rig.inverter;
   if (!inv) return [];
-  const amps = dcCurrentA(inv.ratedW / inv.efficiency, p.input.rig.battery.nominalV);
+  const amps = dcCurrentA(inverterDcDrawW(inv, inv.ratedW, 1), p.input.rig.battery.nominalV);
   if (amps < HIGH_CURRENT_A) return [];
   const where = whereAt(p, 0);
   return [

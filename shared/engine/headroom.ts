@@ -123,8 +123,7 @@ function generatorPlanAt(s: Search, startBelowPct: number): GeneratorPlan {
     startBelow: startBelowPct / 100,
     stopAbove: Math.min(100, Math.max(stopAbove, startBelowPct + 5)) / 100,
     ratedW,
-    model: g?.fuelModel ?? defaultFuelModel(ratedW),
-    propane: fuelKind === 'propane',
+    model: g?.fuelModel ?? defaultFuelModel(ratedW, fuelKind),
     fuelKind,
   };
 }

@@ -1,33 +1,56 @@
-// Loads: running and standby watts, duty cycle, routines, and thermostats that follow the ambient curve
-// (duty rises linearly from the set point to flat out at fullDutyDeltaC past it — a planning simplification).
+// Loads: an appliance draws its running watts for the share of a step it runs and its standby watts the rest of
+// the time; a fuel appliance also burns its heat input while it runs. When it runs comes from its schedule: always,
+// routine windows in local time, or a thermostat, whose active windows are read here and whose duty comes from the
+// cabin heat balance (climate.ts).
 import type { DayType } from '../schemas/common';
-import type { Appliance } from '../schemas/appliance';
+import type { Appliance, Schedule } from '../schemas/appliance';
 import { windowsShare, type LocalStep } from './routines';
 
-export function thermostatDuty(
-  mode: 'cooling' | 'heating',
-  ambientC: number,
-  setPointC: number,
-  fullDutyDeltaC: number,
-): number {
-  const excess = mode === 'cooling' ? ambientC - setPointC : setPointC - ambientC;
-  return Math.min(1, Math.max(0, excess / fullDutyDeltaC));
+/** Share of the step the schedule switches the appliance on (a thermostat: its active windows), before its duty. */
+export function scheduledShare(s: Schedule, step: LocalStep, prevDayType: DayType): number {
+  if (s.kind === 'always') return 1;
+  const windows = s.kind === 'routine' ? s.windows : s.activeWindows;
+  return windows ? windowsShare(windows, step, prevDayType) : 1;
 }
 
-/** Share of the step the appliance is switched on (scheduled), before its duty cycle. */
-export function onShare(a: Appliance, step: LocalStep, prevDayType: DayType, ambientC: number): number {
-  const s = a.schedule;
-  if (s.kind === 'always') return 1;
-  if (s.kind === 'routine') return windowsShare(s.windows, step, prevDayType);
-  const active = s.activeWindows ? windowsShare(s.activeWindows, step, prevDayType) : 1;
-  return active * thermostatDuty(s.mode, ambientC, s.setPointC, s.fullDutyDeltaC);
+/** Electric energy drawn at running watts in a step of durationH hours that runs for `runShare` of it, Wh. */
+export function applianceRunningWh(a: Appliance, runShare: number, durationH: number): number {
+  return a.quantity * a.runningW * runShare * durationH;
+}
+
+/** Electric energy in that step: running watts while it runs, standby watts the rest of the time, Wh. */
+export function applianceEnergyWh(a: Appliance, runShare: number, durationH: number): number {
+  return applianceRunningWh(a, runShare, durationH) + a.quantity * a.standbyW * (1 - runShare) * durationH;
+}
+
+/** Propane heat input burned in that step (fuel appliances), Wh. */
+export function applianceHeatWh(a: Appliance, runShare: number, durationH: number): number {
+  return a.quantity * a.heatInputW * runShare * durationH;
 }
 
 export type ApplianceStep = { electricWh: number; heatWh: number; running: boolean };
 
-/** Energy in a step of durationH hours: running watts while it runs, standby watts the rest of the time. */
+/** Energy in a step of durationH hours switched on for `share` of it (its duty cycle applies on top). */
 export function applianceStep(a: Appliance, share: number, durationH: number): ApplianceStep {
   const runShare = share * a.dutyCycle;
-  const electricWh = a.quantity * (a.runningW * runShare + a.standbyW * (1 - runShare)) * durationH;
-  return { electricWh, heatWh: a.quantity * a.heatInputW * runShare * durationH, running: share > 0 };
+  return {
+    electricWh: applianceEnergyWh(a, runShare, durationH),
+    heatWh: applianceHeatWh(a, runShare, durationH),
+    running: share > 0,
+  };
+}
+
+/** The three energies of one appliance, for loops that ask them step after step. */
+export type ApplianceMeter = {
+  energyWh: (runShare: number, durationH: number) => number;
+  runningWh: (runShare: number, durationH: number) => number;
+  heatWh: (runShare: number, durationH: number) => number;
+};
+
+export function applianceMeter(a: Appliance): ApplianceMeter {
+  return {
+    energyWh: (runShare, durationH) => applianceEnergyWh(a, runShare, durationH),
+    runningWh: (runShare, durationH) => applianceRunningWh(a, runShare, durationH),
+    heatWh: (runShare, durationH) => applianceHeatWh(a, runShare, durationH),
+  };
 }

@@ -1,37 +1,51 @@
 // Precomputation shared by every scenario of one trip: the time grid, where each hour is, local time, ambient
-// temperature, sun geometry and clear-sky irradiance (three samples per hour, Simpson's rule, so sunrise and
-// sunset inside an hour are weighed properly), and the appliance loads. Scenarios (sky band, headroom) reuse it.
+// temperature, sun geometry and clear-sky irradiance, and the appliance loads. Scenarios (sky band, headroom) reuse
+// it. The sun is sampled at the start, middle and end of each lit step (Simpson's rule); in a step where it crosses
+// the horizon, every 7.5 minutes (composite Simpson), so a sunrise or sunset inside the hour is weighed properly.
 import type { EngineInput } from '../schemas/engine-input';
 import type { Appliance } from '../schemas/appliance';
-import type { DayType } from '../schemas/common';
+import type { DayType, RoutineWindow } from '../schemas/common';
 import type { Stop } from '../schemas/trip';
-import { ineichenPerez, kastenYoungAirMass, pressureRatio } from './clear-sky';
+import { haurwitzGhi, ineichenPerez, kastenYoungAirMass, pressureRatio } from './clear-sky';
+import type { HeavyLoad } from './battery';
 import { extraterrestrialW } from './extraterrestrial';
-// Energy per step follows onShare, thermostatDuty and applianceStep in loads.ts, written out in fillShares and fillLoads.
-import type { LocalStep } from './routines';
-import { windowsShare } from './routines';
-import { resolveExposure, type ResolvedExposure } from './site-exposure';
-import { sunPositionInto } from './sun-position';
-import { ambientC as ambientCurve } from './temperature-curve';
+import { inverterDcDrawW } from './inverter';
+import { applianceMeter, scheduledShare } from './loads';
+import { windowsShare, type LocalStep } from './routines';
+import { leafOff, resolveExposure, type ResolvedExposure } from './site-exposure';
+import { dayOfYearUtc, sunPositionInto } from './sun-position';
+import { ambientC } from './temperature-curve';
 import {
   buildGrid,
   buildSegments,
   fillOffsets,
-  HOUR_MS as HOUR_MS_IMPORTED,
-  localDayNumber as dayNumberOf,
-  localMinuteOfDay as minuteOfDayOf,
+  HOUR_MS,
+  localDayNumber,
+  localMinuteOfDay,
+  localMonth,
   type Segment,
 } from './time-grid';
 
-// Module-local copies of imported bindings used once per step: once compiled to CommonJS (as the benchmark and
-// the server run it) every use of an imported name is a property read through a getter.
-const HOUR_MS = HOUR_MS_IMPORTED;
-const localDayNumber = dayNumberOf;
-const localMinuteOfDay = minuteOfDayOf;
-const ambientC = ambientCurve;
-
-export const SAMPLES = 3; // start, middle, end of each step
 export const QUARTERS = 4; // generator sub-steps
+/** Composite Simpson panels in a step where the sun crosses the horizon: 2 × 4 intervals of 7.5 minutes. */
+const HORIZON_PANELS = 4;
+
+/** Sun samples of the trip, lit ones only: step i owns [start[i], start[i + 1]), each with its share of the step. */
+export type SunSamples = {
+  start: Int32Array;
+  /** Simpson weight: the samples of a fully lit step add up to 1. */
+  weight: Float64Array;
+  atMs: Float64Array;
+  /** Apparent (refraction-corrected) altitude and azimuth from north, degrees. */
+  altDeg: Float64Array;
+  azDeg: Float64Array;
+  /** Cosine of the apparent zenith (the beam's direction) and of the true zenith (for the decomposition). */
+  cosZ: Float64Array;
+  cosZTrue: Float64Array;
+  ghiClear: Float64Array;
+};
+
+export type Thermostat = { index: number; appliance: Appliance; active: Float64Array; heavyCurrentA: number };
 
 export type Prepared = {
   input: EngineInput;
@@ -53,14 +67,12 @@ export type Prepared = {
   lat: Float64Array;
   lon: Float64Array;
   sunAltMid: Float64Array;
-  /** Per sample (n × SAMPLES): sun altitude, azimuth, clear-sky GHI, and cos of the zenith (0 with the sun down). */
-  alt: Float64Array;
-  az: Float64Array;
-  ghiClear: Float64Array;
-  cosZ: Float64Array;
+  sun: SunSamples;
   dniExtra: Float64Array;
+  /** The site exposures of the trip (the open sky first, then each stop's, in leaf and bare where deciduous) … */
   exposures: ResolvedExposure[];
-  openExposure: ResolvedExposure;
+  /** … and which one applies at each step (an open sky on drives). */
+  exposureOf: Uint8Array;
   hookupW: Float64Array;
   /** Bit q set: quarter q of the step lies inside the stop's allowed generator hours (or routine). */
   genAllowed: Uint8Array;
@@ -71,8 +83,19 @@ export type Prepared = {
   acRunningW: Float64Array;
   acSurgeExtraW: Float64Array;
   acStandbyOn: Uint8Array;
+  /** Share of the step inside the hours the inverter is kept on (scheduled inverters). */
+  inverterOnShare: Float64Array;
   /** Electric Wh of appliance a at stop w: index a × stops + w, for routine appliances (the loads a flag may suggest moving). */
   applianceStopWh: Float64Array;
+  /** Loads whose running current passes the bank's 20-hour current, with their running energy per step (Peukert). */
+  heavy: HeavyLoad[];
+  /**
+   * Heat the fixed loads give the cabin, W (step mean): their electricity. Propane burned for cooking or by an
+   * absorption fridge is taken to leave through the vents and flues.
+   */
+  internalGainW: Float64Array;
+  /** Thermostat-run appliances: their index, their active share per step, and their running current if heavy. */
+  thermostats: Thermostat[];
 };
 
 function segmentAt(segs: readonly Segment[], ms: number, hint: number): number {
@@ -142,11 +165,10 @@ function fillLocalTime(p: Prepared, stops: readonly Stop[]): void {
 
 const RAD = Math.PI / 180;
 
-/** cz: cos((90 − altDeg)°), as haurwitzGhi computes it, so Haurwitz is written out here with the same numbers. */
-function clearSkyGhi(stop: Stop | undefined, altDeg: number, cz: number, dniExtra: number): number {
+function clearSkyGhi(stop: Stop | undefined, altDeg: number, dniExtra: number): number {
   const zen = 90 - altDeg;
   if (altDeg <= 0) return 0;
-  if (stop?.linkeTurbidity === undefined) return cz > 0 ? 1098 * cz * Math.exp(-0.059 / cz) : 0; // haurwitzGhi
+  if (stop?.linkeTurbidity === undefined) return haurwitzGhi(zen);
   const am = kastenYoungAirMass(zen) * pressureRatio(stop.elevationM);
   return ineichenPerez({
     zenithDeg: zen,
@@ -157,32 +179,63 @@ function clearSkyGhi(stop: Stop | undefined, altDeg: number, cz: number, dniExtr
   }).ghi;
 }
 
-/** dayOfYearUtc and extraterrestrialW with the year's start and the last day remembered: one Date per year, not per step. */
-type DayCache = { yearStartMs: number; nextYearMs: number; day: number; dniExtra: number };
+/** The extraterrestrial irradiance of the last UTC day asked for: worked out once per day, not per step. */
+type DayCache = { utcDay: number; dniExtra: number };
 
 function dniExtraAt(c: DayCache, utcMs: number, solarConstant: number): number {
-  if (!(utcMs >= c.yearStartMs && utcMs < c.nextYearMs)) {
-    const y = new Date(utcMs).getUTCFullYear();
-    c.yearStartMs = Date.UTC(y, 0, 1);
-    c.nextYearMs = Date.UTC(y + 1, 0, 1);
-    c.day = Number.NaN;
-  }
-  // The same expression as dayOfYearUtc, so the day (and the irradiance) is unchanged.
-  const day = Math.floor((utcMs - c.yearStartMs) / 86_400_000) + 1;
-  if (day !== c.day) {
-    c.day = day;
-    c.dniExtra = extraterrestrialW(day, solarConstant);
+  const utcDay = Math.floor(utcMs / 86_400_000);
+  if (utcDay !== c.utcDay) {
+    c.utcDay = utcDay;
+    c.dniExtra = extraterrestrialW(dayOfYearUtc(utcMs), solarConstant);
   }
   return c.dniExtra;
 }
 
+type SampleLists = { [K in Exclude<keyof SunSamples, 'start'>]: number[] };
+
+/** Each stop's exposure for the season of each step: deciduous cover is bare in its leaf-off months. */
+function fillExposures(p: Prepared, stops: readonly Stop[]): void {
+  p.exposures = [resolveExposure({ kind: 'preset', preset: 'open' })];
+  const index = new Map<string, number>();
+  for (let i = 0; i < p.n; i++) {
+    const w = p.where[i] ?? -1;
+    const stop = w >= 0 ? stops[w] : undefined;
+    if (!stop) continue; // a drive: open sky
+    const month = localMonth(p.startMs[i] ?? 0, p.offsetMin[i] ?? 0);
+    const bare = stop.exposure.kind === 'canopy' && stop.exposure.deciduous && leafOff(month, stop.lat);
+    const key = `${w}:${bare ? 'bare' : 'leaf'}`;
+    let k = index.get(key);
+    if (k === undefined) {
+      k = p.exposures.length;
+      p.exposures.push(resolveExposure(stop.exposure, month, stop.lat));
+      index.set(key, k);
+    }
+    p.exposureOf[i] = k;
+  }
+}
+
 function fillSun(p: Prepared, stops: readonly Stop[], solarConstant: number): void {
-  const pos = new Float64Array(6); // start, middle, end: altitude and azimuth each
-  const days: DayCache = { yearStartMs: Number.NaN, nextYearMs: Number.NaN, day: Number.NaN, dniExtra: 0 };
+  const pos = new Float64Array(9); // start, middle, end: apparent altitude, azimuth, true altitude each
+  const at = new Float64Array(3);
+  const days: DayCache = { utcDay: Number.NaN, dniExtra: 0 };
+  const start = new Int32Array(p.n + 1);
+  const lists: SampleLists = { weight: [], atMs: [], altDeg: [], azDeg: [], cosZ: [], cosZTrue: [], ghiClear: [] };
+  const add = (stop: Stop | undefined, ms: number, w: number, v: Float64Array, k: number, dniExtra: number) => {
+    const alt = v[k] ?? 0;
+    if (alt <= 0) return; // below the horizon: no light, no sample
+    lists.weight.push(w);
+    lists.atMs.push(ms);
+    lists.altDeg.push(alt);
+    lists.azDeg.push(v[k + 1] ?? 0);
+    lists.cosZ.push(Math.cos((90 - alt) * RAD));
+    lists.cosZTrue.push(Math.cos((90 - (v[k + 2] ?? 0)) * RAD));
+    lists.ghiClear.push(clearSkyGhi(stop, alt, dniExtra));
+  };
   let prevEndMs = Number.NaN;
   let prevLat = Number.NaN;
   let prevLon = Number.NaN;
   for (let i = 0; i < p.n; i++) {
+    start[i] = lists.weight.length;
     const t = p.startMs[i] ?? 0;
     const dt = (p.stepH[i] ?? 1) * HOUR_MS;
     const lat = p.lat[i] ?? 0;
@@ -190,34 +243,52 @@ function fillSun(p: Prepared, stops: readonly Stop[], solarConstant: number): vo
     const stop = stops[p.stopOf[i] ?? 0];
     const dniExtra = dniExtraAt(days, t, solarConstant);
     p.dniExtra[i] = dniExtra;
-    sunPositionInto(t + dt / 2, lat, lon, pos, 2);
-    const midAlt = pos[2] ?? 0;
-    p.sunAltMid[i] = midAlt;
-    const k = i * SAMPLES;
+    sunPositionInto(t + dt / 2, lat, lon, pos, 3);
+    p.sunAltMid[i] = pos[3] ?? 0;
     // The sun moves under 8° in half an hour: well below the horizon at mid-step, the whole step is dark.
-    if (midAlt < -8) {
-      for (let s = 0; s < SAMPLES; s++) p.alt[k + s] = -90;
+    if ((pos[3] ?? 0) < -8) {
       prevEndMs = Number.NaN;
       continue;
     }
     // The previous step's end is this step's start when the rig has not moved: reuse it.
-    if (prevEndMs === t && prevLat === lat && prevLon === lon) {
-      pos[0] = pos[4] ?? 0;
-      pos[1] = pos[5] ?? 0;
-    } else sunPositionInto(t, lat, lon, pos, 0);
-    sunPositionInto(t + dt, lat, lon, pos, 4);
-    for (let s = 0; s < SAMPLES; s++) {
-      const alt = pos[2 * s] ?? 0;
-      p.alt[k + s] = alt;
-      p.az[k + s] = pos[2 * s + 1] ?? 0;
-      const cz = alt > 0 ? Math.cos((90 - alt) * RAD) : 0;
-      p.cosZ[k + s] = cz;
-      p.ghiClear[k + s] = clearSkyGhi(stop, alt, cz, dniExtra);
-    }
+    if (prevEndMs === t && prevLat === lat && prevLon === lon) pos.copyWithin(0, 6, 9);
+    else sunPositionInto(t, lat, lon, pos, 0);
+    sunPositionInto(t + dt, lat, lon, pos, 6);
     prevEndMs = t + dt;
     prevLat = lat;
     prevLon = lon;
+    const lit = [pos[0] ?? 0, pos[3] ?? 0, pos[6] ?? 0].filter((alt) => alt > 0).length;
+    if (lit === 3) {
+      add(stop, t, 1 / 6, pos, 0, dniExtra);
+      add(stop, t + dt / 2, 4 / 6, pos, 3, dniExtra);
+      add(stop, t + dt, 1 / 6, pos, 6, dniExtra);
+    } else if (lit > 0) {
+      // The sun crosses the horizon in this step: composite Simpson over 2 × HORIZON_PANELS intervals.
+      const intervals = 2 * HORIZON_PANELS;
+      for (let q = 0; q <= intervals; q++) {
+        const ms = t + (q * dt) / intervals;
+        const w = (q === 0 || q === intervals ? 1 : q % 2 === 1 ? 4 : 2) / (3 * intervals);
+        if (q === 0) add(stop, ms, w, pos, 0, dniExtra);
+        else if (q === HORIZON_PANELS) add(stop, ms, w, pos, 3, dniExtra);
+        else if (q === intervals) add(stop, ms, w, pos, 6, dniExtra);
+        else {
+          sunPositionInto(ms, lat, lon, at, 0);
+          add(stop, ms, w, at, 0, dniExtra);
+        }
+      }
+    }
   }
+  start[p.n] = lists.weight.length;
+  p.sun = {
+    start,
+    weight: Float64Array.from(lists.weight),
+    atMs: Float64Array.from(lists.atMs),
+    altDeg: Float64Array.from(lists.altDeg),
+    azDeg: Float64Array.from(lists.azDeg),
+    cosZ: Float64Array.from(lists.cosZ),
+    cosZTrue: Float64Array.from(lists.cosZTrue),
+    ghiClear: Float64Array.from(lists.ghiClear),
+  };
 }
 
 function localStep(p: Prepared, i: number): LocalStep {
@@ -266,38 +337,23 @@ function stepSlots(p: Prepared, withDayTypes: boolean): Slots {
   return { slotOf, first };
 }
 
-/** Each step's scheduled share for one appliance (onShare in loads.ts, term for term) into `share`. */
+/** Each step's scheduled share for one appliance (scheduledShare in loads.ts, worked out once per slot of steps). */
 function fillShares(p: Prepared, a: Appliance, slots: () => { time: Slots; typed: Slots }, share: Float64Array): void {
   const sched = a.schedule;
   const n = p.n;
-  if (sched.kind === 'always') {
-    share.fill(1, 0, n);
-    return;
-  }
-  const windows = sched.kind === 'routine' ? sched.windows : sched.activeWindows;
+  const windows = sched.kind === 'routine' ? sched.windows : sched.kind === 'thermostat' ? sched.activeWindows : null;
   if (!windows) share.fill(1, 0, n);
   else if (windows.some((w) => w.days.kind === 'trip-days')) {
-    for (let i = 0; i < n; i++) share[i] = windowsShare(windows, localStep(p, i), prevDayType(p, i));
+    for (let i = 0; i < n; i++) share[i] = scheduledShare(sched, localStep(p, i), prevDayType(p, i));
   } else {
     const all = slots();
     const { slotOf, first } = windows.some((w) => w.days.kind === 'day-type') ? all.typed : all.time;
     const slotShare = new Float64Array(first.length);
     for (let slot = 0; slot < first.length; slot++) {
       const at = first[slot] ?? 0;
-      slotShare[slot] = windowsShare(windows, localStep(p, at), prevDayType(p, at));
+      slotShare[slot] = scheduledShare(sched, localStep(p, at), prevDayType(p, at));
     }
     for (let i = 0; i < n; i++) share[i] = slotShare[slotOf[i] ?? 0] ?? 0;
-  }
-  if (sched.kind === 'thermostat') {
-    const amb = p.ambientC;
-    const cooling = sched.mode === 'cooling';
-    const { setPointC, fullDutyDeltaC } = sched;
-    for (let i = 0; i < n; i++) {
-      const a = amb[i] ?? 15;
-      // thermostatDuty in loads.ts, written out so the mode is decided once per appliance
-      const excess = cooling ? a - setPointC : setPointC - a;
-      share[i] = (share[i] ?? 0) * Math.min(1, Math.max(0, excess / fullDutyDeltaC));
-    }
   }
 }
 
@@ -322,39 +378,60 @@ function fillLoads(p: Prepared): void {
     else runs.push({ stop: w, from: i, to: i + 1 });
   }
   const energy = new Float64Array(n);
-  // Appliance by appliance over all steps: each step's totals still add the appliances in list order, and each
-  // appliance's per-stop total still adds the steps in time order, so every sum is the same as step by step.
+  const battery = p.input.rig.battery;
+  const inverter = p.input.rig.inverter;
+  /** Battery current while the appliance runs, A; AC loads through the inverter (none without one: unserved). */
+  const runningCurrentA = (a: Appliance): number => {
+    const w = a.quantity * a.runningW;
+    if (a.circuit !== 'ac') return w / battery.nominalV;
+    return inverter ? inverterDcDrawW(inverter, w, 0) / battery.nominalV : 0;
+  };
+  const i20 = battery.capacityAh / 20;
+  // Appliance by appliance over all steps: each step's totals still add the appliances in list order.
   for (let j = 0; j < appliances.length; j++) {
     const a = appliances[j];
     if (!a) continue;
     const always = a.schedule.kind === 'always';
     if (!always) fillShares(p, a, slots, share);
-    const { quantity, runningW, standbyW, dutyCycle, heatInputW } = a;
+    const currentA = runningCurrentA(a);
+    if (a.schedule.kind === 'thermostat') {
+      // Heating and cooling depend on the sky (solar gain): their duty is worked out per scenario (climate.ts).
+      p.thermostats.push({
+        index: j,
+        appliance: a,
+        active: Float64Array.from(share.subarray(0, n)),
+        heavyCurrentA: currentA > i20 ? currentA : 0,
+      });
+      continue;
+    }
+    const meter = applianceMeter(a);
     const isAc = a.circuit === 'ac';
     const total = isAc ? acWh : dcWh;
-    const heats = !isAc && heatInputW !== 0;
-    const runningTotalW = runningW * quantity;
-    const surgeExtra = (a.surgeW ?? runningW) - runningW;
+    const heats = !isAc && a.heatInputW !== 0;
+    const runningTotalW = a.runningW * a.quantity;
+    const surgeExtra = (a.surgeW ?? a.runningW) - a.runningW;
     // Off with no standby draw, a step adds exactly 0 to every total (which are never −0), so it is skipped.
-    const skipOff = !always && standbyW === 0;
+    const skipOff = !always && a.standbyW === 0;
     if (skipOff) energy.fill(0);
-    // One pass per appliance; the branches below are fixed for the whole pass.
+    const running = currentA > i20 ? new Float64Array(n) : null;
+    if (running) p.heavy.push({ circuit: isAc ? 'ac' : 'dc', currentA, runningWh: running });
     for (let i = 0; i < n; i++) {
       const sh = always ? 1 : (share[i] ?? 0);
       if (skipOff && sh === 0) continue;
-      const runShare = sh * dutyCycle;
+      const runShare = sh * a.dutyCycle;
       const dtH = stepH[i] ?? 1;
-      const e = quantity * (runningW * runShare + standbyW * (1 - runShare)) * dtH;
+      const e = meter.energyWh(runShare, dtH);
       energy[i] = e;
+      if (running) running[i] = meter.runningWh(runShare, dtH);
       total[i] = (total[i] ?? 0) + e;
       if (isAc) {
         if (sh > 0) {
           acRunningW[i] = (acRunningW[i] ?? 0) + runningTotalW;
           acSurgeExtraW[i] = Math.max(acSurgeExtraW[i] ?? 0, surgeExtra);
         }
-      } else if (heats) heatWh[i] = (heatWh[i] ?? 0) + quantity * heatInputW * runShare * dtH;
+      } else if (heats) heatWh[i] = (heatWh[i] ?? 0) + meter.heatWh(runShare, dtH);
     }
-    if (isAc && standbyW > 0) acStandbyOn.fill(1, 0, n);
+    if (isAc && a.standbyW > 0) acStandbyOn.fill(1, 0, n);
     // Only routine loads are ever suggested for moving to a drive, so only theirs are totalled per stop.
     if (a.schedule.kind === 'routine') {
       const base = j * stopsCount;
@@ -405,12 +482,28 @@ function fillGenerator(p: Prepared, stops: readonly Stop[]): void {
   }
 }
 
+/** The hours a scheduled inverter is kept on, as a routine window over every day. */
+function fillInverterHours(p: Prepared): void {
+  const inv = p.input.rig.inverter;
+  if (inv?.mode !== 'scheduled' || !inv.onHours) return;
+  const { startHour, endHour } = inv.onHours;
+  const hours = startHour === endHour ? 0 : (endHour - startHour + 24) % 24 || 24;
+  if (hours === 0) return;
+  const window: RoutineWindow = {
+    days: { kind: 'all' },
+    startHour: startHour % 24,
+    startMinute: 0,
+    minutes: hours * 60,
+  };
+  for (let i = 0; i < p.n; i++) p.inverterOnShare[i] = windowsShare([window], localStep(p, i), prevDayType(p, i));
+}
+
 function allocate(input: EngineInput, n: number): Prepared {
   // All step columns are views into one ArrayBuffer: one allocation instead of thirty. 8-byte columns first,
   // then 4-, 2- and 1-byte ones, so every view starts aligned. A column added below without counting it here
   // makes the view constructor throw at once.
-  const f64 = 16 + 4 * SAMPLES;
-  const buf = new ArrayBuffer(n * (8 * f64 + 4 * 1 + 2 * 2 + 1 * 4));
+  const f64 = 17;
+  const buf = new ArrayBuffer(n * (8 * f64 + 4 * 1 + 2 * 2 + 1 * 5));
   let at = 0;
   const view = <T>(make: (b: ArrayBuffer, offset: number, length: number) => T, bytes: number, length: number): T => {
     const v = make(buf, at, length);
@@ -433,10 +526,6 @@ function allocate(input: EngineInput, n: number): Prepared {
     lat: f(),
     lon: f(),
     sunAltMid: f(),
-    alt: f(n * SAMPLES),
-    az: f(n * SAMPLES),
-    ghiClear: f(n * SAMPLES),
-    cosZ: f(n * SAMPLES),
     dniExtra: f(),
     hookupW: f(),
     acWh: f(),
@@ -444,6 +533,7 @@ function allocate(input: EngineInput, n: number): Prepared {
     heatWh: f(),
     acRunningW: f(),
     acSurgeExtraW: f(),
+    inverterOnShare: f(),
     dayIndex: i32(),
     where: i16(),
     stopOf: i16(),
@@ -453,8 +543,21 @@ function allocate(input: EngineInput, n: number): Prepared {
     acStandbyOn: u8(),
     travelByDay: new Uint8Array(1),
     exposures: [],
-    openExposure: resolveExposure({ kind: 'preset', preset: 'open' }),
+    exposureOf: u8(),
     applianceStopWh: new Float64Array(0),
+    heavy: [],
+    internalGainW: new Float64Array(n),
+    thermostats: [],
+    sun: {
+      start: new Int32Array(n + 1),
+      weight: new Float64Array(0),
+      atMs: new Float64Array(0),
+      altDeg: new Float64Array(0),
+      azDeg: new Float64Array(0),
+      cosZ: new Float64Array(0),
+      cosZTrue: new Float64Array(0),
+      ghiClear: new Float64Array(0),
+    },
   };
 }
 
@@ -464,12 +567,14 @@ export function prepare(input: EngineInput): Prepared {
   p.startMs.set(grid.startMs);
   p.stepH.set(grid.stepH);
   const stops = input.trip.stops;
-  p.exposures = stops.map((s) => resolveExposure(s.exposure));
   fillPlaces(p, buildSegments(input.trip), stops);
   fillLocalTime(p, stops);
+  fillExposures(p, stops);
   fillSun(p, stops, input.options.solarConstantWm2);
   fillLoads(p);
+  for (let i = 0; i < p.n; i++) p.internalGainW[i] = ((p.acWh[i] ?? 0) + (p.dcWh[i] ?? 0)) / (p.stepH[i] ?? 1);
   fillGenerator(p, stops);
+  fillInverterHours(p);
   for (let i = 0; i < p.n; i++) {
     const w = p.where[i] ?? -1;
     const h = w >= 0 ? stops[w]?.hookup : null;

@@ -19,3 +19,12 @@ export function pvDcPowerW(ratedW: number, poaWm2: number, cellC: number, gammaP
   if (poaWm2 <= 0) return 0;
   return Math.max(0, ratedW * (poaWm2 / 1000) * (1 + gammaPerC * (cellC - 25)) * derate);
 }
+
+/** noctCellTempC for one fitted array, for a loop over many samples. */
+export function cellTemperatureOf(
+  noctC: number,
+  fit: 'flush' | 'racked',
+): (ambientC: number, poaWm2: number) => number {
+  const noct = effectiveNoctC(noctC, fit);
+  return (ambientC, poaWm2) => noctCellTempC(ambientC, poaWm2, noct);
+}

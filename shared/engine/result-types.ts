@@ -13,6 +13,12 @@ export type LedgerRow = {
   /** Plane-of-array irradiance of the first array (GHI if flat), W/m², step average, at the site. */
   irradianceWm2: number;
   ambientC: number;
+  /** The cabin's air temperature from its heat balance (held at the thermostats' set points where they can), °C. */
+  cabinC: number;
+  /** The battery's temperature where it sits (the cabin's inside, the air's outside), °C. */
+  batteryC: number;
+  /** Share of its rated capacity the battery can deliver at that temperature, %. */
+  batteryCapacityPct: number;
   solarAvailableWh: number;
   solarUsedWh: number;
   solarWastedWh: number;

@@ -2,6 +2,7 @@
 // sky (full ledger) and, together, under one sky level better and one worse (state of charge only).
 import { engineInputSchema, type EngineInput, type EngineInputDraft } from '../schemas/engine-input';
 import { CHEMISTRY } from './battery';
+import { climateLoads, type StepLoads } from './climate';
 import { localIso, utcIso, whereAt } from './describe';
 import { buildFlags } from './flags';
 import { fuelUnit } from './fuel';
@@ -27,10 +28,11 @@ export function plannedScenario(p: Prepared, solar: SolarSeries): Scenario {
     capacityWh: capacityWhOf(p.input),
     hookupW: p.hookupW,
     generator: generatorPlanFor(p),
+    loads: climateLoads(p, solar.cabinSolarW),
   };
 }
 
-function ledgerRows(p: Prepared, l: LedgerColumns, solar: SolarSeries): LedgerRow[] {
+function ledgerRows(p: Prepared, l: LedgerColumns, solar: SolarSeries, loads: StepLoads): LedgerRow[] {
   const rows: LedgerRow[] = new Array<LedgerRow>(p.n);
   // Columns read into locals once: the loop builds one object per hour and nothing else.
   const { stepH, sunAltMid, ambientC, startMs, offsetMin } = p;
@@ -67,6 +69,9 @@ function ledgerRows(p: Prepared, l: LedgerColumns, solar: SolarSeries): LedgerRo
       sunAltitudeDeg: sunAltMid[i] ?? 0,
       irradianceWm2: poa[i] ?? 0,
       ambientC: ambientC[i] ?? 0,
+      cabinC: loads.cabinC[i] ?? 0,
+      batteryC: loads.battery.batteryC[i] ?? 0,
+      batteryCapacityPct: (loads.battery.capacityShare[i] ?? 1) * 100,
       solarAvailableWh: solarAvailableWh[i] ?? 0,
       solarUsedWh: solarUsedWh[i] ?? 0,
       solarWastedWh: solarWastedWh[i] ?? 0,
@@ -195,10 +200,12 @@ export function simulateParsed(input: EngineInput): SimulationResult {
   const p = prepare(input);
   const solar = solarSeries(p, 0);
   const l = newLedger(p.n);
-  const r = walk(p, plannedScenario(p, solar), l);
-  const flags = buildFlags({ p, l, capacityWh: capacityWhOf(input), reservePct: reservePctOf(input) });
+  const planned = plannedScenario(p, solar);
+  const r = walk(p, planned, l);
+  const loads = planned.loads;
+  const flags = buildFlags({ p, l, loads, capacityWh: capacityWhOf(input), reservePct: reservePctOf(input) });
   return {
-    ledger: ledgerRows(p, l, solar),
+    ledger: ledgerRows(p, l, solar, loads),
     days: daySheets(p, l),
     headline: headline(p, l, r),
     flags,

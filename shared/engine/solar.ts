@@ -1,70 +1,67 @@
 // Solar available at the battery bus for every step of one sky scenario: clear sky × sky clearness, split by
-// Erbs, shaded by the site's exposure, transposed onto each array (Hay–Davies or isotropic, plus ground
-// reflection), through the module and controller models. The sky-independent geometry (incidence, beam ratio,
-// shading) is computed once per trip and reused by every scenario; the inner loop allocates nothing.
+// Erbs (fed the true zenith), shaded by the site's exposure, transposed onto each array (Hay–Davies or isotropic,
+// plus ground reflection), through the glass (Martin & Ruiz incidence losses), the module and the controller.
+// A flat array is the tilt-0 case: it sees the GHI. The same irradiance at the pitch gives the cabin its solar gain
+// (cabin.ts). The sky-independent geometry (incidence, beam ratio, shading)
+// is worked out once per trip and reused by every scenario. The loop over samples calls each model through an
+// instance built for the array, and allocates nothing.
 import { CHEMISTRY } from './battery';
-import { controllerLimitW, pwmFactor } from './charge-controller';
-import { SAMPLES, type Prepared } from './prepare';
-import { effectiveNoctC } from './pv-module';
+import { cabinModel, solarGainOf } from './cabin';
+import { arrayOutput, controllerLimitW, type ArrayOutput } from './charge-controller';
+import { erbsSplitter, type Split } from './decomposition';
+import { glassOf } from './iam';
+import type { Prepared } from './prepare';
+import { cellTemperatureOf } from './pv-module';
 import { beamFactor, diffuseFactor } from './site-exposure';
 import { shiftSky, SKY_CLEARNESS } from './sky-outlook';
-
-const RAD = Math.PI / 180;
-const SIMPSON = [1 / 6, 4 / 6, 1 / 6] as const;
-const MIN_COS_ZENITH = 0.065; // as in decomposition.ts
-const MAX_ZENITH_DEG = 87;
-// A module-local copy: an imported binding in the innermost loops costs a lookup per use once compiled.
-const S = SAMPLES;
+import { beamRatio, cosIncidence, surfaceTransposer, type SurfaceParts } from './transposition';
 
 export type SolarSeries = {
   /** Controller output available, W (step average). */
   availableW: Float64Array;
   /** Plane-of-array irradiance of the first array (or GHI), W/m² (step average), for the ledger. */
   poaWm2: Float64Array;
+  /** Solar gain into the cabin through its roof, walls and windows, W (step average). */
+  cabinSolarW: Float64Array;
 };
 
-type ArrayConst = {
-  ratedW: number;
-  tilted: boolean;
-  iso: number;
-  ground: number;
-  noct: number;
-  gamma: number;
-  derate: number;
-  convert: number;
+/** One array's chain of models, each an instance built once for the array. */
+type ArrayModel = {
+  transpose: ReturnType<typeof surfaceTransposer>;
+  glass: ReturnType<typeof glassOf>;
+  cellC: ReturnType<typeof cellTemperatureOf>;
+  output: ArrayOutput;
 };
 
 type Geometry = {
-  m: number;
-  arrays: ArrayConst[];
-  cosZ: Float64Array; // per sample
-  beamF: Float64Array; // per sample
-  diffF: Float64Array; // per step
-  cosInc: Float64Array; // per sample × array, clamped at 0 (tilted arrays only; flat arrays take GHI)
-  rb: Float64Array; // per sample × array, Hay–Davies beam ratio (tilted arrays only)
+  arrays: ArrayModel[];
+  cabinGain: ReturnType<typeof solarGainOf>;
   capW: number;
+  /** Per sample: the share of the beam the site lets through. */
+  beamF: Float64Array;
+  /** Per step: the share of sky diffuse the site lets through. */
+  diffF: Float64Array;
+  /** Per sample × array: cos of the angle of incidence (clamped at 0) and Hay–Davies' beam ratio. */
+  cosInc: Float64Array;
+  rb: Float64Array;
   /** The planned sky's series, kept so the band can copy the steps whose sky the shift leaves unchanged. */
   planned: SolarSeries | null;
 };
 
 const geometryCache = new WeakMap<Prepared, Geometry>();
 
-function arrayConstants(p: Prepared): { arrays: ArrayConst[]; capW: number } {
+function arrayModels(p: Prepared): { arrays: ArrayModel[]; capW: number } {
   const rig = p.input.rig;
   const chargeV = rig.battery.nominalV * CHEMISTRY[rig.battery.chemistry].chargeVoltageRatio;
   const ctrl = rig.controller;
+  const rho = p.input.options.groundReflectance;
   const arrays = rig.solarArrays.map((a) => {
     const tilt = a.mounting === 'flat' ? 0 : a.tiltDeg;
-    const convert = !ctrl ? 0 : ctrl.kind === 'mppt' ? ctrl.efficiency : pwmFactor(chargeV, a.vmpV);
     return {
-      ratedW: a.ratedW,
-      tilted: tilt > 0,
-      iso: (1 + Math.cos(tilt * RAD)) / 2,
-      ground: (1 - Math.cos(tilt * RAD)) / 2,
-      noct: effectiveNoctC(a.noctC, a.fit),
-      gamma: a.gammaPctPerC / 100,
-      derate: a.derate,
-      convert,
+      transpose: surfaceTransposer(tilt, rho),
+      glass: glassOf(tilt),
+      cellC: cellTemperatureOf(a.noctC, a.fit),
+      output: ctrl ? arrayOutput(ctrl, a, chargeV) : () => 0,
     };
   });
   return { arrays, capW: ctrl ? controllerLimitW(ctrl, chargeV) : 0 };
@@ -73,55 +70,37 @@ function arrayConstants(p: Prepared): { arrays: ArrayConst[]; capW: number } {
 function geometry(p: Prepared): Geometry {
   const cached = geometryCache.get(p);
   if (cached) return cached;
-  const { arrays, capW } = arrayConstants(p);
+  const { arrays, capW } = arrayModels(p);
   const m = arrays.length;
-  const ns = p.n * S;
-  // One buffer for the per-sample columns; cos of the zenith comes from the precomputation (same numbers).
-  const buf = new ArrayBuffer(8 * (ns + p.n + 2 * ns * m));
+  const sun = p.sun;
+  const ns = sun.weight.length;
   const g: Geometry = {
-    m,
     arrays,
+    cabinGain: solarGainOf(cabinModel(p.input.rig.cabin), p.input.options.groundReflectance),
     capW,
-    cosZ: p.cosZ,
-    beamF: new Float64Array(buf, 0, ns),
-    diffF: new Float64Array(buf, 8 * ns, p.n),
-    cosInc: new Float64Array(buf, 8 * (ns + p.n), ns * m),
-    rb: new Float64Array(buf, 8 * (ns + p.n + ns * m), ns * m),
+    beamF: new Float64Array(ns),
+    diffF: new Float64Array(p.n),
+    cosInc: new Float64Array(ns * m),
+    rb: new Float64Array(ns * m),
     planned: null,
   };
-  // cosIncidence (transposition.ts) term for term, with the panel's and the sun's sines and cosines taken once.
-  const panels = p.input.rig.solarArrays
-    .map((a, j) => {
-      const b = (a.mounting === 'tilted' ? a.tiltDeg : 0) * RAD;
-      return { j, cosB: Math.cos(b), sinB: Math.sin(b), azimuthDeg: a.azimuthDeg };
-    })
-    .filter((panel) => arrays[panel.j]?.tilted);
-  const stopDiffuse = p.exposures.map((e) => diffuseFactor(e));
-  // Above the highest obstruction the beam is never blocked, so beamFactor's sector look-up is only needed below it.
-  const stopTop = p.exposures.map((e) => Math.max(...e.horizonDeg));
-  const openTop = Math.max(...p.openExposure.horizonDeg);
-  const openDiffuse = diffuseFactor(p.openExposure);
-  const { alt: alts, az: azs, cosZ } = p;
-  const { beamF, cosInc, rb } = g;
+  const panels = p.input.rig.solarArrays.map((a) => ({
+    tiltDeg: a.mounting === 'tilted' ? a.tiltDeg : 0,
+    azimuthDeg: a.azimuthDeg,
+  }));
   for (let i = 0; i < p.n; i++) {
-    const where = p.where[i] ?? -1;
-    const exp = where >= 0 ? (p.exposures[where] ?? p.openExposure) : p.openExposure;
-    g.diffF[i] = where >= 0 ? (stopDiffuse[where] ?? openDiffuse) : openDiffuse;
-    const top = where >= 0 ? (stopTop[where] ?? openTop) : openTop;
-    for (let s = 0; s < S; s++) {
-      const k = i * S + s;
-      const alt = alts[k] ?? -90;
-      if (alt <= 0) continue;
-      const az = azs[k] ?? 180;
-      beamF[k] = alt >= top ? 1 : beamFactor(exp, alt, az);
-      if (panels.length === 0) continue;
-      const cz = cosZ[k] ?? 0;
-      const sz = Math.sin((90 - alt) * RAD);
-      for (const panel of panels) {
-        const ci = Math.max(0, cz * panel.cosB + sz * panel.sinB * Math.cos((az - panel.azimuthDeg) * RAD));
-        cosInc[k * m + panel.j] = ci;
-        rb[k * m + panel.j] = ci / Math.max(cz, 0.01745);
-      }
+    const exp = p.exposures[p.exposureOf[i] ?? 0] ?? p.exposures[0];
+    if (!exp) continue;
+    g.diffF[i] = diffuseFactor(exp);
+    for (let k = sun.start[i] ?? 0; k < (sun.start[i + 1] ?? 0); k++) {
+      const alt = sun.altDeg[k] ?? 0;
+      const az = sun.azDeg[k] ?? 0;
+      g.beamF[k] = beamFactor(exp, alt, az);
+      panels.forEach((panel, j) => {
+        const ci = Math.max(0, cosIncidence(90 - alt, az, panel.tiltDeg, panel.azimuthDeg));
+        g.cosInc[k * m + j] = ci;
+        g.rb[k * m + j] = beamRatio(ci, sun.cosZ[k] ?? 0);
+      });
     }
   }
   geometryCache.set(p, g);
@@ -132,71 +111,66 @@ function geometry(p: Prepared): Geometry {
 export function solarSeries(p: Prepared, skyShift: number): SolarSeries {
   const g = geometry(p);
   const stops = p.input.trip.stops;
-  const opt = p.input.options;
-  const hayDavies = opt.transposition === 'hay-davies';
-  const rho = opt.groundReflectance;
+  const hayDavies = p.input.options.transposition === 'hay-davies';
   const clearness = stops.map((s) => SKY_CLEARNESS[shiftSky(s.skyOutlook, skyShift)]);
   const planned = skyShift === 0 ? null : g.planned;
   // A stop whose sky the shift leaves as planned (clear made better, overcast made worse) gives the planned figures.
   const same = stops.map((s, w) => planned !== null && clearness[w] === SKY_CLEARNESS[s.skyOutlook]);
   const availableW = new Float64Array(p.n);
   const poaWm2 = new Float64Array(p.n);
-  const series = { availableW, poaWm2 };
+  const cabinSolarW = new Float64Array(p.n);
+  const series = { availableW, poaWm2, cabinSolarW };
   if (skyShift === 0) g.planned = series;
-  if (g.m === 0) return series;
-  const { alt: alts, ghiClear, dniExtra: dniExtras, ambientC, stopOf } = p;
-  const { cosZ, beamF, diffF, cosInc, rb, arrays, m, capW } = g;
+  const { arrays, capW, beamF, diffF, cosInc, rb, cabinGain } = g;
+  const m = arrays.length;
+  const { start, weight, cosZ, cosZTrue, ghiClear } = p.sun;
+  const split: Split = { dni: 0, dhi: 0, kt: 0 };
+  const parts: SurfaceParts = { beam: 0, sky: 0, ground: 0 };
+  const erbs = erbsSplitter();
   for (let i = 0; i < p.n; i++) {
-    if ((alts[i * S + 1] ?? -90) <= -8) continue;
-    const w = stopOf[i] ?? 0;
+    const from = start[i] ?? 0;
+    const to = start[i + 1] ?? 0;
+    if (from === to) continue;
+    const w = p.stopOf[i] ?? 0;
     if (planned && same[w]) {
       availableW[i] = planned.availableW[i] ?? 0;
       poaWm2[i] = planned.poaWm2[i] ?? 0;
+      cabinSolarW[i] = planned.cabinSolarW[i] ?? 0;
       continue;
     }
     const f = clearness[w] ?? 1;
-    const dniExtra = dniExtras[i] ?? 1361;
+    const dniExtra = p.dniExtra[i] ?? 1361;
     const diff = diffF[i] ?? 1;
-    const ambient = ambientC[i] ?? 20;
+    const ambient = p.ambientC[i] ?? 20;
     let watts = 0;
     let poaFirst = 0;
-    for (let s = 0; s < S; s++) {
-      const k = i * S + s;
-      const cz = cosZ[k] ?? 0;
+    let cabinW = 0;
+    for (let k = from; k < to; k++) {
       const ghiSky = (ghiClear[k] ?? 0) * f;
-      if (cz <= 0 || ghiSky <= 0) continue;
-      // Erbs split (decomposition.ts, the diffuse fraction written out), then the site's shading of beam and diffuse.
-      const kt = Math.min(2, ghiSky / (dniExtra * Math.max(cz, MIN_COS_ZENITH)));
-      const low = 90 - (alts[k] ?? 0) > MAX_ZENITH_DEG;
-      const diffuseShare =
-        kt <= 0.22
-          ? 1 - 0.09 * kt
-          : kt <= 0.8
-            ? 0.9511 - 0.1604 * kt + 4.388 * kt ** 2 - 16.638 * kt ** 3 + 12.336 * kt ** 4
-            : 0.165;
-      const dhiSky = low ? ghiSky : diffuseShare * ghiSky;
-      const dniSky = low ? 0 : Math.max(0, (ghiSky - dhiSky) / cz);
-      const dni = dniSky * (beamF[k] ?? 1);
-      const dhi = dhiSky * diff;
-      const ghi = dni * cz + dhi;
-      const ai = dni / dniExtra;
+      if (ghiSky <= 0) continue;
+      erbs(ghiSky, cosZTrue[k] ?? 0, dniExtra, split);
+      // The site's shading of beam and diffuse; the beam arrives along the apparent sun direction.
+      const dni = split.dni * (beamF[k] ?? 1);
+      const dhi = split.dhi * diff;
+      const ghi = dni * (cosZ[k] ?? 0) + dhi;
+      cabinW += (weight[k] ?? 0) * cabinGain(dni, dhi, ghi, cosZ[k] ?? 0);
+      const ai = hayDavies ? dni / dniExtra : 0; // isotropic sky: no circumsolar share
       let sampleW = 0;
       for (let j = 0; j < m; j++) {
         const a = arrays[j];
         if (!a) continue;
-        let poa = ghi;
-        if (a.tilted) {
-          const sky = hayDavies ? dhi * (ai * (rb[k * m + j] ?? 0) + (1 - ai) * a.iso) : dhi * a.iso;
-          poa = dni * (cosInc[k * m + j] ?? 0) + sky + ghi * rho * a.ground;
-        }
-        if (j === 0) poaFirst += (SIMPSON[s] ?? 0) * poa;
-        const cell = ambient + ((a.noct - 20) / 800) * poa;
-        sampleW += Math.max(0, a.ratedW * (poa / 1000) * (1 + a.gamma * (cell - 25)) * a.derate) * a.convert;
+        const ci = cosInc[k * m + j] ?? 0;
+        a.transpose(dni, dhi, ghi, ai, ci, rb[k * m + j] ?? 0, parts);
+        // Plane-of-array irradiance for the cell temperature and the ledger; what passes the glass for power.
+        const poa = parts.beam + parts.sky + parts.ground;
+        if (j === 0) poaFirst += (weight[k] ?? 0) * poa;
+        sampleW += a.output(a.glass(parts.beam, parts.sky, parts.ground, ci), a.cellC(ambient, poa));
       }
-      watts += (SIMPSON[s] ?? 0) * Math.min(sampleW, capW);
+      watts += (weight[k] ?? 0) * Math.min(sampleW, capW);
     }
     availableW[i] = watts;
     poaWm2[i] = poaFirst;
+    cabinSolarW[i] = cabinW;
   }
   return series;
 }

@@ -12,6 +12,17 @@ export function sunPosition(utcMs: number, lat: number, lon: number): SunPositio
   return { altitudeDeg: p.altitude, azimuthDeg: p.azimuth };
 }
 
+/** The sun's position with its true (unrefracted) altitude too, degrees. */
+export function sunPositionWithTrue(
+  utcMs: number,
+  lat: number,
+  lon: number,
+): SunPosition & { trueAltitudeDeg: number } {
+  const out = new Float64Array(3);
+  sunPositionInto(utcMs, lat, lon, out, 0);
+  return { altitudeDeg: out[0] ?? 0, azimuthDeg: out[1] ?? 0, trueAltitudeDeg: out[2] ?? 0 };
+}
+
 // The same arithmetic as suncalc 2's getPosition, operation for operation, so the results are bit-identical
 // (tests compare the two), but without the Date and the two objects suncalc allocates per call: the trip's
 // precomputation asks for thousands of positions. Constants are spelled as suncalc spells them.
@@ -55,7 +66,10 @@ let lastLat = Number.NaN;
 let sinPhi = 0;
 let cosPhi = 1;
 
-/** sunPosition into out[k] (altitude, degrees, refraction-corrected) and out[k + 1] (azimuth from north). */
+/**
+ * sunPosition into out[k] (altitude, degrees, refraction-corrected), out[k + 1] (azimuth from north) and out[k + 2]
+ * (the true altitude, before refraction: what the decomposition is fed).
+ */
 export function sunPositionInto(utcMs: number, lat: number, lon: number, out: Float64Array, k: number): void {
   // new Date(ms).valueOf() truncates fractional milliseconds and is NaN beyond ±8.64e15 ms.
   const ms = Math.abs(utcMs) <= 8.64e15 ? Math.trunc(utcMs) + 0 : Number.NaN;
@@ -89,6 +103,7 @@ export function sunPositionInto(utcMs: number, lat: number, lon: number, out: Fl
   const hr = h < 0 ? 0 : h;
   out[k] = (h + 2967e-7 / Math.tan(hr + 0.00312536 / (hr + 0.08901179))) / RAD;
   out[k + 1] = (Math.atan2(Math.sin(H), Math.cos(H) * sinPhi - Math.tan(dec) * cosPhi) / RAD + 540) % 360;
+  out[k + 2] = h / RAD;
 }
 
 /** Cooper (1969) declination, degrees, for day of year n (Duffie & Beckman eq. 1.6.1a). */

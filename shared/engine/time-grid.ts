@@ -145,8 +145,8 @@ export function fillOffsets(zoneName: string, ms: Float64Array, from: number, to
 const TWO_DIGITS = Array.from({ length: 100 }, (_, i) => String(i).padStart(2, '0'));
 const LAST_MS = 253_402_300_800_000; // 10000-01-01T00:00Z: four-digit years only
 
-/** YYYY-MM-DDT of a day number since 1970 (civil date from days, Hinnant). */
-function isoDate(days: number): string {
+/** The civil date of a day number since 1970 (Hinnant's days-to-civil), month 1–12. */
+function civilDate(days: number): { year: number; month: number; day: number } {
   const z = days + 719_468;
   const era = Math.floor(z / 146_097);
   const doe = z - era * 146_097;
@@ -155,7 +155,12 @@ function isoDate(days: number): string {
   const mp = Math.floor((5 * doy + 2) / 153);
   const day = doy - Math.floor((153 * mp + 2) / 5) + 1;
   const month = mp < 10 ? mp + 3 : mp - 9;
-  const year = yoe + era * 400 + (month <= 2 ? 1 : 0);
+  return { year: yoe + era * 400 + (month <= 2 ? 1 : 0), month, day };
+}
+
+/** YYYY-MM-DDT of a day number since 1970. */
+function isoDate(days: number): string {
+  const { year, month, day } = civilDate(days);
   return `${String(year).padStart(4, '0')}-${TWO_DIGITS[month] ?? ''}-${TWO_DIGITS[day] ?? ''}T`;
 }
 
@@ -216,4 +221,9 @@ export function localDayNumber(utcMs: number, offsetMin: number): number {
 export function localMinuteOfDay(utcMs: number, offsetMin: number): number {
   const local = utcMs + offsetMin * 60_000;
   return (local - Math.floor(local / DAY_MS) * DAY_MS) / 60_000;
+}
+
+/** Local calendar month, 0 (January) to 11. */
+export function localMonth(utcMs: number, offsetMin: number): number {
+  return civilDate(localDayNumber(utcMs, offsetMin)).month - 1;
 }

@@ -1,11 +1,16 @@
-// The battery walk: steps through the prepared hours in UTC, covering AC loads from hookup, generator or
-// inverter, DC loads from solar, vehicle, charger or battery, and books every watt-hour so the balance closes:
+// The battery walk: steps through the prepared hours in UTC and books every watt-hour so the balance closes:
 //   solarUsed + vehicle + hookup + generator + short = acLoad + dcLoad + inverterLoss + chargerLoss + batteryLoss + Δstored
-// Rule-driven or routine generators step in quarter hours so a mid-hour start is caught.
+// Each step runs the same named stages: serve the AC load (hookup, generator, inverter), offer the charging sources
+// (solar, vehicle, charger), cover the DC demand in merit order, then discharge or charge the battery. The physics
+// lives in the model files; this file only orders it. Rule-driven or routine generators step in quarter hours so a
+// mid-hour start is caught.
 import type { FuelModel } from '../schemas/rig';
-import { CHEMISTRY, type ChemistryPreset } from './battery';
-import { CONTINUOUS_SHARE, defaultFuelModel } from './generator';
-import { kwhPerFuelUnit, PROPANE_KWH_PER_KG } from './fuel';
+import { batteryModel, CHEMISTRY, type BatteryModel, type ChemistryPreset } from './battery';
+import { CONTINUOUS_SHARE, defaultFuelModel, fuelUse } from './generator';
+import { chargerDcW } from './hookup';
+import { inverterDraw } from './inverter';
+import { propaneKgFromHeatWh } from './fuel';
+import type { StepLoads } from './climate';
 import { QUARTERS, type Prepared } from './prepare';
 import { vehicleChargeW } from './vehicle-charging';
 
@@ -34,18 +39,12 @@ export const LEDGER_COLUMNS = [
 export type LedgerColumn = (typeof LEDGER_COLUMNS)[number];
 export type LedgerColumns = Record<LedgerColumn, Float64Array>;
 
+type FuelKind = 'propane' | 'petrol' | 'diesel';
+
 export type GeneratorPlan =
   | { kind: 'none' }
-  | {
-      kind: 'rule';
-      startBelow: number;
-      stopAbove: number;
-      ratedW: number;
-      model: FuelModel;
-      propane: boolean;
-      fuelKind: 'propane' | 'petrol' | 'diesel';
-    }
-  | { kind: 'routine'; ratedW: number; model: FuelModel; propane: boolean; fuelKind: 'propane' | 'petrol' | 'diesel' };
+  | { kind: 'rule'; startBelow: number; stopAbove: number; ratedW: number; model: FuelModel; fuelKind: FuelKind }
+  | { kind: 'routine'; ratedW: number; model: FuelModel; fuelKind: FuelKind };
 
 export type Scenario = {
   solarW: Float64Array;
@@ -53,6 +52,8 @@ export type Scenario = {
   capacityWh: number;
   hookupW: Float64Array;
   generator: GeneratorPlan;
+  /** The loads, heating and cooling under this scenario's sky. */
+  loads: StepLoads;
 };
 
 export type WalkResult = {
@@ -66,8 +67,8 @@ export type WalkResult = {
 export function generatorPlanFor(p: Prepared): GeneratorPlan {
   const g = p.input.rig.generator;
   if (!g || g.mode.kind === 'off') return { kind: 'none' };
-  const model = g.fuelModel ?? defaultFuelModel(g.ratedW);
-  const base = { ratedW: g.ratedW, model, propane: g.fuel === 'propane', fuelKind: g.fuel };
+  const model = g.fuelModel ?? defaultFuelModel(g.ratedW, g.fuel);
+  const base = { ratedW: g.ratedW, model, fuelKind: g.fuel };
   if (g.mode.kind === 'routine') return { kind: 'routine', ...base };
   return { kind: 'rule', startBelow: g.mode.startBelowSocPct / 100, stopAbove: g.mode.stopAboveSocPct / 100, ...base };
 }
@@ -101,8 +102,51 @@ export function newLedger(n: number): LedgerColumns {
   };
 }
 
-/** Mutable per-step flows, reused across steps to keep the loop free of allocations. */
-type Flow = {
+/** The rig's fixed figures for one walk. */
+type Rig = {
+  p: Prepared;
+  s: Scenario;
+  chem: ChemistryPreset;
+  battery: BatteryModel;
+  capacityWh: number;
+  chargeV: number;
+  hasInverter: boolean;
+  /** DC the inverter draws for an AC output while on for a share of the step. */
+  inverterDraw: (acW: number, onShare: number) => number;
+  inverterAlwaysOn: boolean;
+  chargerAmps: number;
+  chargerEfficiency: number;
+  vehicleW: number;
+  gen: GeneratorPlan;
+  genCapW: number;
+  /** Fuel burned by the generator for a run of some hours delivering some Wh, in the fuel's unit. */
+  fuelUse: (hours: number, outWh: number) => number;
+};
+
+/**
+ * One step's flows. The `…W` fields are the stage results of the (sub-)step being run; the Wh fields add up over
+ * the quarters of a step and are what the ledger books. One object reused for the whole walk: no allocation.
+ */
+type Flows = {
+  acW: number;
+  dcW: number;
+  hookAcW: number;
+  genAcW: number;
+  invAcW: number;
+  invDcW: number;
+  hookSpareW: number;
+  chargerW: number;
+  vehicleW: number;
+  solarToLoadW: number;
+  vehicleToLoadW: number;
+  chargerToLoadW: number;
+  demandW: number;
+  solarToBatWh: number;
+  vehicleToBatWh: number;
+  chargerToBatWh: number;
+  /** Energy the (sub-)step could not supply: AC loads with no inverter, and what an empty battery cannot give. */
+  shortWh: number;
+  // booked per step
   solarUsed: number;
   vehicle: number;
   hookup: number;
@@ -118,253 +162,25 @@ type Flow = {
   cold: number;
 };
 
-function zeroFlow(f: Flow): void {
-  f.solarUsed = f.vehicle = f.hookup = f.generator = f.acLoad = f.dcLoad = 0;
-  f.invLoss = f.chgLoss = f.batLoss = f.short = f.flow = f.fuel = f.cold = 0;
-}
-
-/** Acceptance terms of acceptanceLimitShare (battery.ts) for one step length, computed once per length. */
-type Acceptance = { dtH: number; rate: number; taperGain: number; tail: number };
-
-type Ctx = {
-  p: Prepared;
-  chem: ChemistryPreset;
-  cap: number;
-  chargeV: number;
-  nominalV: number;
-  capacityAh: number;
-  invEff: number;
-  invIdle: number;
-  invAlways: boolean;
-  hasInverter: boolean;
-  chgAmps: number;
-  chgEff: number;
-  vehW: number;
-  heated: boolean;
-  gen: GeneratorPlan;
-  // Constants of the helpers the step inlines (peukertFactor, acceptanceLimitShare, chargerDcW, generatorFuel),
-  // each computed by the same expression the helper uses, so the arithmetic per step is unchanged.
-  i20: number;
-  peukertExp: number;
-  taperStart: number;
-  chgCapW: number;
-  genCapW: number;
-  fuelPerKwh: number;
-  idleFuelKwhPerH: number;
-  fuelKwhPerKwhOut: number;
-  full: Acceptance;
-  quarter: Acceptance;
-  other: Acceptance;
-  /** The last Peukert current and factor: a step's quarters draw the same current, so the power is taken once. */
-  lastCurrentA: number;
-  lastPeukert: number;
-};
-
-function acceptance(chem: ChemistryPreset, dtH: number): Acceptance {
-  const rate = chem.maxChargeC * dtH * chem.chargeEfficiency;
-  const k = chem.maxChargeC / (1 - chem.taperStartSoc);
-  const tail = 1 - Math.exp(-k * dtH);
-  return { dtH, rate, taperGain: (1 - chem.taperStartSoc) * tail, tail };
-}
-
-function acceptanceFor(c: Ctx, dtH: number): Acceptance {
-  if (dtH === c.full.dtH) return c.full;
-  if (dtH === c.quarter.dtH) return c.quarter;
-  if (dtH !== c.other.dtH) c.other = acceptance(c.chem, dtH);
-  return c.other;
-}
-
-/** One step of dtH hours with the generator on or off; returns the new stored energy, books flows into f. */
-function step(
-  c: Ctx,
-  i: number,
-  dtH: number,
-  stored: number,
-  genOn: boolean,
-  solarW: number,
-  hookW: number,
-  f: Flow,
-): number {
-  const p = c.p;
-  const stepH = p.stepH[i] ?? 1;
-  const acW = (p.acWh[i] ?? 0) / stepH;
-  const dcW = (p.dcWh[i] ?? 0) / stepH;
-  const genCap = genOn ? c.genCapW : 0;
-  const hookAc = Math.min(acW, hookW);
-  const genAc = Math.min(acW - hookAc, genCap);
-  const invAc = acW - hookAc - genAc;
-  let unserved = 0;
-  let invDc = 0;
-  if (c.hasInverter) {
-    const on = invAc > 0 || c.invAlways || (p.acStandbyOn[i] ?? 0) > 0;
-    invDc = on ? invAc / c.invEff + c.invIdle : 0;
-  } else unserved = invAc;
-  const hookSpare = hookW - hookAc;
-  const genSpare = genCap - genAc;
-  // chargerDcW in hookup.ts
-  const chgMax = c.chgAmps > 0 ? Math.max(0, Math.min(c.chgCapW, (hookSpare + genSpare) * c.chgEff)) : 0;
-  const vehW = c.vehW * (p.onRoadShare[i] ?? 0);
-  let demand = dcW + invDc;
-  const solarToLoad = Math.min(solarW, demand);
-  demand -= solarToLoad;
-  const vehToLoad = Math.min(vehW, demand);
-  demand -= vehToLoad;
-  const chgToLoad = Math.min(chgMax, demand);
-  demand -= chgToLoad;
-  let solarToBat = 0,
-    vehToBat = 0,
-    chgToBat = 0,
-    batLoss = 0,
-    short = unserved * dtH,
-    flow = 0;
-  let next = stored;
-  if (demand > 0) {
-    const need = demand * dtH;
-    // peukertFactor in battery.ts
-    const currentA = demand / c.nominalV;
-    let peukert = 1;
-    if (currentA > c.i20) {
-      if (currentA !== c.lastCurrentA) {
-        c.lastCurrentA = currentA;
-        c.lastPeukert = Math.pow(currentA / c.i20, c.peukertExp);
-      }
-      peukert = c.lastPeukert;
-    }
-    const removal = (need / c.chem.dischargeEfficiency) * peukert;
-    if (removal <= stored) {
-      next = stored - removal;
-      batLoss = removal - need;
-      flow = -need;
-    } else {
-      const delivered = need * (stored / removal);
-      short += need - delivered;
-      batLoss = stored - delivered;
-      flow = -delivered;
-      next = 0;
-    }
-  } else {
-    const soc = stored / c.cap;
-    // chargeBlockedByCold and acceptanceLimitShare in battery.ts
-    const cold = c.chem.lithium && !c.heated && (p.ambientC[i] ?? 20) < 0;
-    let share = 0;
-    if (!cold) {
-      const acc = acceptanceFor(c, dtH);
-      share =
-        soc < c.taperStart
-          ? Math.max(0, Math.min(acc.rate, c.taperStart - soc + acc.taperGain))
-          : Math.max(0, (1 - soc) * acc.tail);
-    }
-    const limitIn = cold ? 0 : (share * c.cap) / c.chem.chargeEfficiency;
-    let room = limitIn;
-    solarToBat = Math.min((solarW - solarToLoad) * dtH, room);
-    room -= solarToBat;
-    vehToBat = Math.min((vehW - vehToLoad) * dtH, room);
-    room -= vehToBat;
-    chgToBat = Math.min((chgMax - chgToLoad) * dtH, room);
-    flow = solarToBat + vehToBat + chgToBat;
-    batLoss = flow * (1 - c.chem.chargeEfficiency);
-    next = Math.min(c.cap, stored + flow - batLoss);
-    if (cold && solarW + vehW + chgMax > solarToLoad + vehToLoad + chgToLoad) f.cold = 1;
-  }
-  const chgDc = chgToLoad * dtH + chgToBat;
-  const chgAc = chgDc / c.chgEff;
-  const chgFromHook = Math.min(chgAc, hookSpare * dtH);
-  const genOut = genAc * dtH + (chgAc - chgFromHook);
-  f.solarUsed += solarToLoad * dtH + solarToBat;
-  f.vehicle += vehToLoad * dtH + vehToBat;
-  f.hookup += hookAc * dtH + chgFromHook;
-  f.generator += genOut;
-  f.acLoad += acW * dtH;
-  f.dcLoad += dcW * dtH;
-  f.invLoss += invDc > 0 ? (invDc - invAc) * dtH : 0;
-  f.chgLoss += chgAc - chgDc;
-  f.batLoss += batLoss;
-  f.short += short;
-  f.flow += flow;
-  // generatorFuel in generator.ts
-  if (genOn && c.gen.kind !== 'none')
-    f.fuel += (c.idleFuelKwhPerH * dtH + c.fuelKwhPerKwhOut * (genOut / 1000)) / c.fuelPerKwh;
-  return next;
-}
-
-function context(p: Prepared, s: Scenario): Ctx {
-  const rig = p.input.rig;
-  const chem = CHEMISTRY[rig.battery.chemistry];
-  const chargeV = rig.battery.nominalV * chem.chargeVoltageRatio;
-  const capacityAh = s.capacityWh / rig.battery.nominalV;
-  const chgAmps = rig.shoreCharger?.amps ?? 0;
-  const gen = s.generator;
+function newFlows(): Flows {
   return {
-    p,
-    chem,
-    cap: s.capacityWh,
-    chargeV,
-    nominalV: rig.battery.nominalV,
-    capacityAh,
-    invEff: rig.inverter?.efficiency ?? 1,
-    invIdle: rig.inverter?.idleW ?? 0,
-    invAlways: rig.inverter?.mode === 'always',
-    hasInverter: rig.inverter !== null,
-    chgAmps,
-    chgEff: rig.shoreCharger?.efficiency ?? 1,
-    vehW: rig.vehicleCharger
-      ? vehicleChargeW(rig.vehicleCharger.kind, rig.vehicleCharger.amps, rig.battery.nominalV * chem.chargeVoltageRatio)
-      : 0,
-    heated: rig.battery.heatedSpace,
-    gen,
-    i20: capacityAh / 20,
-    peukertExp: chem.peukertK - 1,
-    taperStart: chem.taperStartSoc,
-    chgCapW: chgAmps * chargeV,
-    genCapW: gen.kind !== 'none' ? gen.ratedW * CONTINUOUS_SHARE : 0,
-    fuelPerKwh: gen.kind !== 'none' ? kwhPerFuelUnit(gen.fuelKind) : 1,
-    idleFuelKwhPerH: gen.kind !== 'none' ? gen.model.idleFuelKwhPerH : 0,
-    fuelKwhPerKwhOut: gen.kind !== 'none' ? gen.model.fuelKwhPerKwhOut : 0,
-    full: acceptance(chem, 1),
-    quarter: acceptance(chem, 1 / QUARTERS),
-    other: acceptance(chem, Number.NaN),
-    lastCurrentA: Number.NaN,
-    lastPeukert: 1,
-  };
-}
-
-function writeLedger(
-  l: LedgerColumns,
-  i: number,
-  f: Flow,
-  solarAvailWh: number,
-  genH: number,
-  propaneKg: number,
-  stored: number,
-  cap: number,
-  propaneLeft: number,
-): void {
-  l.solarAvailableWh[i] = solarAvailWh;
-  l.solarUsedWh[i] = f.solarUsed;
-  l.solarWastedWh[i] = Math.max(0, solarAvailWh - f.solarUsed);
-  l.acLoadWh[i] = f.acLoad;
-  l.dcLoadWh[i] = f.dcLoad;
-  l.inverterLossWh[i] = f.invLoss;
-  l.chargerLossWh[i] = f.chgLoss;
-  l.batteryLossWh[i] = f.batLoss;
-  l.hookupWh[i] = f.hookup;
-  l.vehicleWh[i] = f.vehicle;
-  l.generatorWh[i] = f.generator;
-  l.generatorH[i] = genH;
-  l.generatorFuel[i] = f.fuel;
-  l.propaneBurnedKg[i] = propaneKg;
-  l.batteryFlowWh[i] = f.flow;
-  l.storedWh[i] = stored;
-  l.socPct[i] = (stored / cap) * 100;
-  l.energyShortWh[i] = f.short;
-  l.propaneLeftKg[i] = propaneLeft;
-  l.coldBlocked[i] = f.cold;
-}
-
-export function walk(p: Prepared, s: Scenario, ledger: LedgerColumns | null): WalkResult {
-  const c = context(p, s);
-  const rig = p.input.rig;
-  const f: Flow = {
+    acW: 0,
+    dcW: 0,
+    hookAcW: 0,
+    genAcW: 0,
+    invAcW: 0,
+    invDcW: 0,
+    hookSpareW: 0,
+    chargerW: 0,
+    vehicleW: 0,
+    solarToLoadW: 0,
+    vehicleToLoadW: 0,
+    chargerToLoadW: 0,
+    demandW: 0,
+    solarToBatWh: 0,
+    vehicleToBatWh: 0,
+    chargerToBatWh: 0,
+    shortWh: 0,
     solarUsed: 0,
     vehicle: 0,
     hookup: 0,
@@ -379,52 +195,139 @@ export function walk(p: Prepared, s: Scenario, ledger: LedgerColumns | null): Wa
     fuel: 0,
     cold: 0,
   };
-  const socPct = new Float64Array(p.n);
-  let stored = (rig.battery.initialSocPct / 100) * c.cap;
-  let propane = rig.propaneTanks.reduce((sum, t) => sum + (t.propaneKg * t.fillPct) / 100, 0);
-  let lowest = stored / c.cap;
-  let lowestIndex = 0;
-  let shortWh = 0;
-  let genHours = 0;
-  let genRunning = false;
-  const quarters = QUARTERS; // module-local copies of imported bindings for the loop
-  const propaneKwhPerKg = PROPANE_KWH_PER_KG;
-  for (let i = 0; i < p.n; i++) {
-    zeroFlow(f);
-    const dtH = p.stepH[i] ?? 1;
-    const solarW = (s.solarW[i] ?? 0) * s.solarScale;
-    const hookW = s.hookupW[i] ?? 0;
-    const mask = c.gen.kind === 'rule' ? (p.genAllowed[i] ?? 0) : c.gen.kind === 'routine' ? (p.genRoutine[i] ?? 0) : 0;
-    let genH = 0;
-    if (mask === 0) {
-      genRunning = false;
-      stored = step(c, i, dtH, stored, false, solarW, hookW, f);
-    } else {
-      const q = dtH / quarters;
-      for (let k = 0; k < quarters; k++) {
-        const allowed = (mask & (1 << k)) !== 0;
-        genRunning = decideGenerator(c.gen, allowed, genRunning, stored / c.cap);
-        if (genRunning) genH += q;
-        stored = step(c, i, q, stored, genRunning, solarW, hookW, f);
-        if (stored / c.cap < lowest) {
-          lowest = stored / c.cap;
-          lowestIndex = i;
-        }
-      }
-    }
-    if (stored / c.cap < lowest) {
-      lowest = stored / c.cap;
-      lowestIndex = i;
-    }
-    const heatKg = (p.heatWh[i] ?? 0) / 1000 / propaneKwhPerKg; // propaneKgFromHeatWh in fuel.ts
-    const genKg = c.gen.kind !== 'none' && c.gen.propane ? f.fuel : 0;
-    propane = Math.max(0, propane - heatKg - genKg);
-    socPct[i] = (stored / c.cap) * 100;
-    shortWh += f.short;
-    genHours += genH;
-    if (ledger) writeLedger(ledger, i, f, solarW * dtH, genH, heatKg + genKg, stored, c.cap, propane);
+}
+
+function startStep(f: Flows): void {
+  f.solarUsed = f.vehicle = f.hookup = f.generator = f.acLoad = f.dcLoad = 0;
+  f.invLoss = f.chgLoss = f.batLoss = f.short = f.flow = f.fuel = f.cold = 0;
+}
+
+function rigOf(p: Prepared, s: Scenario): Rig {
+  const rig = p.input.rig;
+  const chem = CHEMISTRY[rig.battery.chemistry];
+  const chargeV = rig.battery.nominalV * chem.chargeVoltageRatio;
+  const gen = s.generator;
+  return {
+    p,
+    s,
+    chem,
+    battery: batteryModel(chem, s.capacityWh, rig.battery.nominalV, s.loads),
+    capacityWh: s.capacityWh,
+    chargeV,
+    hasInverter: rig.inverter !== null,
+    inverterDraw: rig.inverter ? inverterDraw(rig.inverter) : () => 0,
+    inverterAlwaysOn: rig.inverter?.mode === 'always',
+    chargerAmps: rig.shoreCharger?.amps ?? 0,
+    chargerEfficiency: rig.shoreCharger?.efficiency ?? 1,
+    vehicleW: rig.vehicleCharger ? vehicleChargeW(rig.vehicleCharger.kind, rig.vehicleCharger.amps, chargeV) : 0,
+    gen,
+    genCapW: gen.kind !== 'none' ? gen.ratedW * CONTINUOUS_SHARE : 0,
+    fuelUse: gen.kind !== 'none' ? fuelUse(gen.model, gen.fuelKind) : () => 0,
+  };
+}
+
+/** Stage 1: the AC load goes to the hookup first, then a running generator, and the rest through the inverter
+ * (its part-load curve plus idle draw while on). */
+function serveAc(r: Rig, i: number, genOn: boolean, f: Flows): void {
+  const p = r.p;
+  const hookW = r.s.hookupW[i] ?? 0;
+  const genCapW = genOn ? r.genCapW : 0;
+  f.hookAcW = Math.min(f.acW, hookW);
+  f.genAcW = Math.min(f.acW - f.hookAcW, genCapW);
+  f.invAcW = f.acW - f.hookAcW - f.genAcW;
+  f.hookSpareW = hookW - f.hookAcW;
+  // On for the whole step when AC loads use it or it is always on; otherwise for its set hours, if any.
+  const onShare = f.invAcW > 0 || r.inverterAlwaysOn || (p.acStandbyOn[i] ?? 0) > 0 ? 1 : (p.inverterOnShare[i] ?? 0);
+  f.invDcW = r.inverterDraw(f.invAcW, onShare);
+  // Without an inverter nothing can run AC loads off the battery: they go unserved.
+  f.chargerW =
+    r.chargerAmps > 0
+      ? chargerDcW(f.hookSpareW + (genCapW - f.genAcW), r.chargerAmps, r.chargeV, r.chargerEfficiency)
+      : 0;
+}
+
+/** Stage 2: solar, then the vehicle, then the charger cover the DC demand (DC loads and the inverter). */
+function coverDemand(r: Rig, i: number, solarW: number, f: Flows): void {
+  f.vehicleW = r.vehicleW * (r.p.onRoadShare[i] ?? 0);
+  let demand = f.dcW + f.invDcW;
+  f.solarToLoadW = Math.min(solarW, demand);
+  demand -= f.solarToLoadW;
+  f.vehicleToLoadW = Math.min(f.vehicleW, demand);
+  demand -= f.vehicleToLoadW;
+  f.chargerToLoadW = Math.min(f.chargerW, demand);
+  demand -= f.chargerToLoadW;
+  f.demandW = demand;
+}
+
+/**
+ * Stage 3a: the battery gives what is left of the demand (Peukert on each load's running current) down to what the
+ * cold holds back, or runs short. Returns the stored energy.
+ */
+function discharge(r: Rig, i: number, dtH: number, stored: number, f: Flows): number {
+  const need = f.demandW * dtH;
+  const removal = r.battery.removalWh(need, i, f.dcW, f.invDcW);
+  const floor = r.battery.coldFloorWh(i);
+  const available = Math.max(0, stored - floor);
+  if (removal <= available) {
+    f.batLoss += removal - need;
+    f.flow -= need;
+    return stored - removal;
   }
-  return { socPct, lowestSocPct: lowest * 100, lowestIndex, energyShortWh: shortWh, generatorHours: genHours };
+  const delivered = need * (available / removal);
+  f.shortWh += need - delivered;
+  f.batLoss += available - delivered;
+  f.flow -= delivered;
+  return stored - available;
+}
+
+/** Stage 3b: what the sources have left charges the battery, up to what it accepts. Returns the stored energy. */
+function charge(r: Rig, i: number, dtH: number, stored: number, solarW: number, f: Flows): number {
+  const cold = (r.s.loads.battery.chargeBlocked[i] ?? 0) === 1;
+  const acceptWh = cold ? 0 : r.battery.acceptWh(stored, dtH);
+  let room = acceptWh;
+  f.solarToBatWh = Math.min((solarW - f.solarToLoadW) * dtH, room);
+  room -= f.solarToBatWh;
+  f.vehicleToBatWh = Math.min((f.vehicleW - f.vehicleToLoadW) * dtH, room);
+  room -= f.vehicleToBatWh;
+  f.chargerToBatWh = Math.min((f.chargerW - f.chargerToLoadW) * dtH, room);
+  const flow = f.solarToBatWh + f.vehicleToBatWh + f.chargerToBatWh;
+  const loss = flow * (1 - r.chem.chargeEfficiency);
+  f.flow += flow;
+  f.batLoss += loss;
+  if (cold && solarW + f.vehicleW + f.chargerW > f.solarToLoadW + f.vehicleToLoadW + f.chargerToLoadW) f.cold = 1;
+  return Math.min(r.capacityWh, stored + flow - loss);
+}
+
+/** Stage 4: book the (sub-)step's flows, including what the charger took from the hookup and the generator. */
+function book(r: Rig, dtH: number, genOn: boolean, f: Flows): void {
+  const chargerDcWh = f.chargerToLoadW * dtH + f.chargerToBatWh;
+  const chargerAcWh = chargerDcWh / r.chargerEfficiency;
+  const chargerFromHookWh = Math.min(chargerAcWh, f.hookSpareW * dtH);
+  const genOutWh = f.genAcW * dtH + (chargerAcWh - chargerFromHookWh);
+  f.solarUsed += f.solarToLoadW * dtH + f.solarToBatWh;
+  f.vehicle += f.vehicleToLoadW * dtH + f.vehicleToBatWh;
+  f.hookup += f.hookAcW * dtH + chargerFromHookWh;
+  f.generator += genOutWh;
+  f.acLoad += f.acW * dtH;
+  f.dcLoad += f.dcW * dtH;
+  f.invLoss += f.invDcW > 0 ? (f.invDcW - f.invAcW) * dtH : 0;
+  f.chgLoss += chargerAcWh - chargerDcWh;
+  f.short += f.shortWh;
+  if (genOn) f.fuel += r.fuelUse(dtH, genOutWh);
+}
+
+/** One step (or quarter step) of dtH hours with the generator on or off; returns the new stored energy. */
+function runStep(r: Rig, i: number, dtH: number, stored: number, genOn: boolean, solarW: number, f: Flows): number {
+  const stepH = r.p.stepH[i] ?? 1;
+  f.acW = (r.s.loads.acWh[i] ?? 0) / stepH;
+  f.dcW = (r.s.loads.dcWh[i] ?? 0) / stepH;
+  f.solarToBatWh = f.vehicleToBatWh = f.chargerToBatWh = 0;
+  serveAc(r, i, genOn, f);
+  f.shortWh = r.hasInverter ? 0 : f.invAcW * dtH;
+  coverDemand(r, i, solarW, f);
+  const next = f.demandW > 0 ? discharge(r, i, dtH, stored, f) : charge(r, i, dtH, stored, solarW, f);
+  book(r, dtH, genOn, f);
+  return next;
 }
 
 function decideGenerator(gen: GeneratorPlan, allowed: boolean, running: boolean, soc: number): boolean {
@@ -432,4 +335,89 @@ function decideGenerator(gen: GeneratorPlan, allowed: boolean, running: boolean,
   if (gen.kind === 'routine') return true;
   if (gen.kind !== 'rule') return false;
   return running ? soc < gen.stopAbove : soc < gen.startBelow;
+}
+
+function generatorMask(r: Rig, i: number): number {
+  if (r.gen.kind === 'rule') return r.p.genAllowed[i] ?? 0;
+  if (r.gen.kind === 'routine') return r.p.genRoutine[i] ?? 0;
+  return 0;
+}
+
+function writeLedger(l: LedgerColumns, i: number, f: Flows, solarAvailWh: number, genH: number, more: Extra): void {
+  l.solarAvailableWh[i] = solarAvailWh;
+  l.solarUsedWh[i] = f.solarUsed;
+  l.solarWastedWh[i] = Math.max(0, solarAvailWh - f.solarUsed);
+  l.acLoadWh[i] = f.acLoad;
+  l.dcLoadWh[i] = f.dcLoad;
+  l.inverterLossWh[i] = f.invLoss;
+  l.chargerLossWh[i] = f.chgLoss;
+  l.batteryLossWh[i] = f.batLoss;
+  l.hookupWh[i] = f.hookup;
+  l.vehicleWh[i] = f.vehicle;
+  l.generatorWh[i] = f.generator;
+  l.generatorH[i] = genH;
+  l.generatorFuel[i] = f.fuel;
+  l.propaneBurnedKg[i] = more.propaneKg;
+  l.batteryFlowWh[i] = f.flow;
+  l.storedWh[i] = more.stored;
+  l.socPct[i] = (more.stored / more.capacityWh) * 100;
+  l.energyShortWh[i] = f.short;
+  l.propaneLeftKg[i] = more.propaneLeft;
+  l.coldBlocked[i] = f.cold;
+}
+
+type Extra = { propaneKg: number; stored: number; capacityWh: number; propaneLeft: number };
+
+export function walk(p: Prepared, s: Scenario, ledger: LedgerColumns | null): WalkResult {
+  const r = rigOf(p, s);
+  const rig = p.input.rig;
+  const f = newFlows();
+  const extra: Extra = { propaneKg: 0, stored: 0, capacityWh: r.capacityWh, propaneLeft: 0 };
+  const socPct = new Float64Array(p.n);
+  let stored = (rig.battery.initialSocPct / 100) * r.capacityWh;
+  let propane = rig.propaneTanks.reduce((sum, t) => sum + (t.propaneKg * t.fillPct) / 100, 0);
+  let lowest = stored / r.capacityWh;
+  let lowestIndex = 0;
+  let shortWh = 0;
+  let genHours = 0;
+  let genRunning = false;
+  for (let i = 0; i < p.n; i++) {
+    startStep(f);
+    const dtH = p.stepH[i] ?? 1;
+    const solarW = (s.solarW[i] ?? 0) * s.solarScale;
+    const mask = generatorMask(r, i);
+    let genH = 0;
+    if (mask === 0) {
+      genRunning = false;
+      stored = runStep(r, i, dtH, stored, false, solarW, f);
+    } else {
+      const q = dtH / QUARTERS;
+      for (let k = 0; k < QUARTERS; k++) {
+        genRunning = decideGenerator(r.gen, (mask & (1 << k)) !== 0, genRunning, stored / r.capacityWh);
+        if (genRunning) genH += q;
+        stored = runStep(r, i, q, stored, genRunning, solarW, f);
+        if (stored / r.capacityWh < lowest) {
+          lowest = stored / r.capacityWh;
+          lowestIndex = i;
+        }
+      }
+    }
+    if (stored / r.capacityWh < lowest) {
+      lowest = stored / r.capacityWh;
+      lowestIndex = i;
+    }
+    const heatKg = propaneKgFromHeatWh(s.loads.propaneHeatWh[i] ?? 0);
+    const genKg = r.gen.kind !== 'none' && r.gen.fuelKind === 'propane' ? f.fuel : 0;
+    propane = Math.max(0, propane - heatKg - genKg);
+    socPct[i] = (stored / r.capacityWh) * 100;
+    shortWh += f.short;
+    genHours += genH;
+    if (ledger) {
+      extra.propaneKg = heatKg + genKg;
+      extra.stored = stored;
+      extra.propaneLeft = propane;
+      writeLedger(ledger, i, f, solarW * dtH, genH, extra);
+    }
+  }
+  return { socPct, lowestSocPct: lowest * 100, lowestIndex, energyShortWh: shortWh, generatorHours: genHours };
 }

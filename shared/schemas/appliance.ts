@@ -11,11 +11,16 @@ export const scheduleSchema = z.discriminatedUnion('kind', [
   z.object({ kind: z.literal('routine'), windows: routineWindowsSchema.min(1) }),
   z.object({
     kind: z.literal('thermostat'),
-    /** cooling runs above the set point, heating below it. */
+    /** cooling holds the cabin at or below the set point, heating at or above it (the cabin heat balance). */
     mode: z.enum(['cooling', 'heating']),
     setPointC: z.number().min(-10).max(40),
-    /** Degrees past the set point at which the unit runs flat out. */
-    fullDutyDeltaC: z.number().positive().max(40).default(12),
+    /**
+     * Cooling: the coefficient of performance (heat removed per unit of electricity; EER ÷ 3.412). Heating: the share
+     * of the fuel's or electricity's energy that heats the cabin. Left out, a typical figure for the kind.
+     */
+    efficiency: z.number().min(0.3).max(6).optional(),
+    /** Heat moved at full duty per unit, W; left out, it follows from the running or heat-input watts. */
+    capacityW: z.number().min(0).max(20_000).optional(),
     /** When given, the thermostat is only active inside these windows (e.g. while someone is aboard). */
     activeWindows: routineWindowsSchema.optional(),
   }),

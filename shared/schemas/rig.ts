@@ -1,7 +1,7 @@
 // Rig contract: the power system a trip runs on.
 import { z } from 'zod';
 import { nameText } from './text';
-import { fractionSchema, percentSchema, positiveSchema, routineWindowsSchema } from './common';
+import { fractionSchema, localHourSchema, percentSchema, positiveSchema, routineWindowsSchema } from './common';
 import { dcWiringSchema, emptyDcWiring } from './dc-wiring';
 import { LIMITS } from './limits';
 
@@ -15,7 +15,7 @@ export const batterySchema = z.object({
   /** State of charge that must never be crossed; left out, it follows the chemistry's recommended depth of discharge. */
   reservePct: percentSchema.optional(),
   initialSocPct: percentSchema.default(100),
-  /** A battery inside the heated living space is not held to the ambient temperature for the cold-charge rule. */
+  /** Inside the living space the battery is at the cabin's temperature; outside, at the air's. */
   heatedSpace: z.boolean().default(false),
 });
 export type Battery = z.infer<typeof batterySchema>;
@@ -49,15 +49,29 @@ export const controllerSchema = z.object({
 });
 export type Controller = z.infer<typeof controllerSchema>;
 
-export const inverterSchema = z.object({
-  ratedW: positiveSchema.max(20_000),
-  surgeW: positiveSchema.max(60_000).optional(),
-  efficiency: z.number().min(0.5).max(1).default(0.9),
-  idleW: z.number().min(0).max(200).default(10),
-  /** on-demand: idle draw only in hours with AC load on the battery; always: on the whole trip. */
-  mode: z.enum(['on-demand', 'always']).default('on-demand'),
-});
+/** Local hours the inverter is kept on; endHour < startHour means the window crosses midnight. */
+export const inverterHoursSchema = z.object({ startHour: localHourSchema, endHour: localHourSchema });
+
+export const inverterSchema = z
+  .object({
+    ratedW: positiveSchema.max(20_000),
+    surgeW: positiveSchema.max(60_000).optional(),
+    /** Nominal (peak) efficiency; light loads get less, along the part-load curve. */
+    efficiency: z.number().min(0.5).max(1).default(0.9),
+    idleW: z.number().min(0).max(200).default(10),
+    /**
+     * on-demand: switched on only in hours with AC load on the battery; always: on the whole trip; scheduled: on in
+     * `onHours` every day (and whenever AC loads run).
+     */
+    mode: z.enum(['on-demand', 'always', 'scheduled']).default('on-demand'),
+    onHours: inverterHoursSchema.optional(),
+  })
+  .refine((inv) => inv.mode !== 'scheduled' || inv.onHours !== undefined, {
+    message: 'Give the hours the inverter is kept on',
+    path: ['onHours'],
+  });
 export type Inverter = z.infer<typeof inverterSchema>;
+export type InverterInput = z.input<typeof inverterSchema>;
 
 export const shoreChargerSchema = z.object({
   amps: positiveSchema.max(500),
@@ -105,6 +119,20 @@ export const generatorSchema = z
   });
 export type Generator = z.infer<typeof generatorSchema>;
 
+export const insulationSchema = z.enum(['basic', 'standard', 'four-season']);
+export type Insulation = z.infer<typeof insulationSchema>;
+
+/** The living space, for its heat balance: outside size of the body, its insulation and who is aboard. */
+export const cabinSchema = z.object({
+  lengthM: z.number().min(2).max(20).default(6),
+  widthM: z.number().min(1.2).max(3).default(2.3),
+  heightM: z.number().min(1.2).max(3.5).default(2.1),
+  insulation: insulationSchema.default('standard'),
+  occupants: z.number().int().min(0).max(12).default(2),
+});
+export type Cabin = z.infer<typeof cabinSchema>;
+export type CabinInput = z.input<typeof cabinSchema>;
+
 export const propaneTankSchema = z.object({
   name: nameText(80, { empty: 'Give the tank a name.' }).default('Cylinder'),
   propaneKg: positiveSchema.max(500),
@@ -131,6 +159,7 @@ export const rigSchema = z
       .default([]),
     /** The DC runs for the cable check; none stored, the check suggests runs from the rig's parts. */
     dcWiring: dcWiringSchema.default(emptyDcWiring),
+    cabin: cabinSchema.default(cabinSchema.parse({})),
   })
   .refine((r) => r.solarArrays.length === 0 || r.controller !== null, {
     message: 'Solar arrays need a charge controller',

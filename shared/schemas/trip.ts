@@ -1,7 +1,14 @@
 // Trip contract: stops (where the rig stays) and drives (the moves between them).
 import { z } from 'zod';
 import { nameText } from './text';
-import { isoInstantSchema, localHourSchema, nonNegativeSchema, fractionSchema, timeZoneSchema } from './common';
+import {
+  isoInstantSchema,
+  localHourSchema,
+  nonNegativeSchema,
+  fractionSchema,
+  percentSchema,
+  timeZoneSchema,
+} from './common';
 import { LIMITS, fieldRule } from './limits';
 
 export const sitePresetSchema = z.enum(['open', 'light-cover', 'partial-shade', 'deep-forest']);
@@ -23,8 +30,22 @@ export const customExposureSchema = z.object({
   skyViewFraction: fractionSchema.optional(),
 });
 
+/**
+ * Sky openness: the share of the sky hemisphere the pitch sees (as a canopy photo or a phone app measures it), and
+ * the leaf-area index of the canopy over the rest, which sets how the sun's beam fades through it.
+ */
+export const canopyExposureSchema = z.object({
+  kind: z.literal('canopy'),
+  skyOpennessPct: percentSchema,
+  leafAreaIndex: z.number().min(0).max(10).default(3),
+  /** Deciduous cover is bare in its hemisphere's leaf-off months. */
+  deciduous: z.boolean().default(false),
+});
+export type CanopyExposure = z.infer<typeof canopyExposureSchema>;
+
 export const siteExposureSchema = z.discriminatedUnion('kind', [
   z.object({ kind: z.literal('preset'), preset: sitePresetSchema }),
+  canopyExposureSchema,
   customExposureSchema,
 ]);
 export type SiteExposure = z.infer<typeof siteExposureSchema>;

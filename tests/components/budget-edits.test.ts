@@ -4,6 +4,7 @@ import { applyWhatIf, rigWithExtraSolar } from '@/components/budget/what-if';
 import { daysCsv, filterLedger, ledgerCsv } from '@/components/ledger/ledger-csv';
 import { DEMO_TRIPS, simulateTrip } from '@/shared/engine';
 import type { Fix } from '@/shared/engine/result-types';
+import { cabinSchema } from '@/shared/schemas/rig';
 import { toEngineInput } from '@/shared/trip-to-engine-input';
 import { NO_WHAT_IF } from '@/stores/what-if-store';
 import { demoDetail } from '../e2e/fixtures';
@@ -12,6 +13,21 @@ const detail = demoDetail('highlandLoop');
 const input = toEngineInput(detail);
 if (!input) throw new Error('the demo trip has stops');
 const result = simulateTrip(input);
+
+describe('engine input from a stored trip', () => {
+  it('when a trip was stored before rigs had a living space, then it runs on the default one (a 6 m caravan for two)', () => {
+    const { cabin: _cabin, ...olderRig } = detail.rig.rig;
+    const older = { ...detail, rig: { ...detail.rig, rig: olderRig as typeof detail.rig.rig } };
+    const fromOlder = toEngineInput(older);
+    if (!fromOlder) throw new Error('no input');
+    const withDefault = toEngineInput({
+      ...detail,
+      rig: { ...detail.rig, rig: { ...olderRig, cabin: cabinSchema.parse({}) } },
+    });
+    if (!withDefault) throw new Error('no input');
+    expect(simulateTrip(fromOlder).headline).toEqual(simulateTrip(withDefault).headline);
+  });
+});
 
 describe('what-if edits', () => {
   it('when no what-if is on, then the input is unchanged', () => {
@@ -116,6 +132,16 @@ describe('ledger export', () => {
     if (!negativeNet) throw new Error('the demo trip has a day that uses more than it harvests');
     expect(csv).toContain(`,${Math.round(negativeNet.netWh * 10) / 10},`);
     expect(csv).not.toContain(",'-");
+  });
+  it('when the hours are exported, then each carries the outside, cabin and battery temperatures and what the battery can give', () => {
+    const csv = ledgerCsv(result.ledger.slice(0, 1), ['Loch']);
+    const [header, first] = csv.trim().split('\r\n');
+    expect(header).toMatch(/outside °C,cabin °C,battery °C,battery deliverable %$/);
+    const row = result.ledger[0];
+    const tail = [row?.ambientC, row?.cabinC, row?.batteryC, row?.batteryCapacityPct].map((v) =>
+      String(Math.round((v ?? 0) * 10) / 10),
+    );
+    expect(first?.split(',').slice(-4)).toEqual(tail);
   });
 });
 

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { energy, fuelAmount, mass, temperature } from '@/components/format/units';
-import { fromFormValues, toFormValues } from '@/components/route/stop-form-values';
+import { fromFormValues, presetAt, toFormValues } from '@/components/route/stop-form-values';
 import { highlandLoop } from '@/shared/engine';
 import { stopSchema } from '@/shared/schemas/trip';
 import { readStoredUnits } from '@/stores/units-store';
@@ -57,6 +57,22 @@ describe('stop form values', () => {
     const built = fromFormValues({ ...values, depart: '2027-09-13 10:00' }, 'metric');
     expect(built.ok).toBe(false);
     if (!built.ok) expect(built.errors.depart).toMatch(/left after/);
+  });
+
+  it('when the deep-forest stop is opened, then its sky openness and leaf-area index show, and the quick pick is lit', () => {
+    const values = toFormValues(stop, '', 'metric', 'Europe/London');
+    expect(values).toMatchObject({ exposureKind: 'canopy', opennessPct: 5.5, leafAreaIndex: 5, deciduous: false });
+    expect(presetAt(values.opennessPct, values.leafAreaIndex)).toBe('deep-forest');
+  });
+
+  it('when a measured openness and deciduous trees are typed, then the stop keeps them as a canopy', () => {
+    const values = toFormValues(stop, '', 'metric', 'Europe/London');
+    const built = fromFormValues({ ...values, opennessPct: 38, leafAreaIndex: 4, deciduous: true }, 'metric');
+    if (!built.ok) throw new Error(JSON.stringify(built.errors));
+    expect(built.stop.exposure).toEqual({ kind: 'canopy', skyOpennessPct: 38, leafAreaIndex: 4, deciduous: true });
+    const back = toFormValues(stopSchema.parse(built.stop), '', 'metric', 'Europe/London');
+    expect(back).toMatchObject({ opennessPct: 38, leafAreaIndex: 4, deciduous: true });
+    expect(presetAt(38, 4)).toBeNull();
   });
 
   it('when a custom horizon has too few angles, then the horizon field says how to write it', () => {

@@ -1,6 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import {
-  FUEL_MODEL_START,
+  fuelModelStart,
+  INVERTER_HOURS_START,
+  INVERTER_MODE_NOTE,
   generatorModeFor,
   newSolarArray,
   panelTemperature,
@@ -12,6 +14,12 @@ import { allZones, filterZones, placeOf } from '@/components/route/zone-filter';
 import { fuelModelSchema, rigSchema, solarArraySchema } from '@/shared/schemas/rig';
 
 describe('rig form figures', () => {
+  it('when a person starts their own fuel figures, then they start from the typical curve for that size and fuel', () => {
+    expect(fuelModelStart(2200, 'propane')).toEqual({ idleFuelKwhPerH: 1.58, fuelKwhPerKwhOut: 3.3 });
+    expect(fuelModelStart(5000, 'diesel').idleFuelKwhPerH).toBe(4.48); // 0.08415 L/h per kW × 10.64 kWh/L × 5 kW
+    expect(fuelModelStart(undefined, undefined)).toEqual(fuelModelStart(2000, 'petrol'));
+  });
+
   it.each([
     [0.9, 90],
     [0.97, 97],
@@ -99,7 +107,7 @@ describe('rig form figures', () => {
         ratedW: 2200,
         fuel: 'diesel',
         mode: { kind: 'rule', startBelowSocPct: 35, stopAboveSocPct: 85 },
-        fuelModel: { ...FUEL_MODEL_START },
+        fuelModel: fuelModelStart(2200, 'propane'),
       },
     });
     expect(rig.solarArrays[0]).toMatchObject({
@@ -111,8 +119,8 @@ describe('rig form figures', () => {
       derate: 0.8,
     });
     expect(rig.inverter).toEqual({ ratedW: 2000, efficiency: 0.88, idleW: 14, mode: 'always' });
-    expect(rig.generator?.fuelModel).toEqual(FUEL_MODEL_START);
-    expect(fuelModelSchema.safeParse(FUEL_MODEL_START).success).toBe(true);
+    expect(rig.generator?.fuelModel).toEqual(fuelModelStart(2200, 'propane'));
+    expect(fuelModelSchema.safeParse(fuelModelStart(2200, 'propane')).success).toBe(true);
     expect(rig.battery).toMatchObject({ heatedSpace: true, initialSocPct: 80 });
   });
 
@@ -124,6 +132,19 @@ describe('rig form figures', () => {
     });
     expect(result.success).toBe(false);
     expect(result.error?.issues[0]?.path).toEqual(['generator', 'mode', 'stopAboveSocPct']);
+  });
+
+  it('when the inverter is kept on in set hours but none are given, then the message lands on the hours', () => {
+    const rig = { name: 'R', battery: { chemistry: 'agm', capacityAh: 100, nominalV: 12 } } as const;
+    const without = rigSchema.safeParse({ ...rig, inverter: { ratedW: 2000, mode: 'scheduled' } });
+    expect(without.success).toBe(false);
+    expect(without.error?.issues[0]?.path).toEqual(['inverter', 'onHours']);
+    const withHours = rigSchema.safeParse({
+      ...rig,
+      inverter: { ratedW: 2000, mode: 'scheduled', onHours: { ...INVERTER_HOURS_START } },
+    });
+    expect(withHours.success).toBe(true);
+    expect(INVERTER_MODE_NOTE.scheduled).toMatch(/these hours/);
   });
 });
 

@@ -176,13 +176,12 @@ const southernSpring: EngineInputDraft = {
         kind: 'thermostat',
         mode: 'heating',
         setPointC: 14,
-        fullDutyDeltaC: 8,
         activeWindows: [{ days: { kind: 'all' }, startHour: 21, startMinute: 0, minutes: 600 }],
       },
     }),
     applianceFromLibrary('box-fan', {
       id: 'fan',
-      schedule: { kind: 'thermostat', mode: 'cooling', setPointC: 20, fullDutyDeltaC: 6 },
+      schedule: { kind: 'thermostat', mode: 'cooling', setPointC: 20 },
     }),
     applianceFromLibrary('propane-oven', {
       id: 'oven',
@@ -292,7 +291,7 @@ const alpineAutumn: EngineInputDraft = {
     },
     applianceFromLibrary('propane-heater', {
       id: 'heater',
-      schedule: { kind: 'thermostat', mode: 'heating', setPointC: 18, fullDutyDeltaC: 10 },
+      schedule: { kind: 'thermostat', mode: 'heating', setPointC: 18 },
     }),
     applianceFromLibrary('induction-hob', {
       id: 'hob',

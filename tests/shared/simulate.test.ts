@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { CHEMISTRY, findHeadroom, simulateTrip } from '@/shared/engine';
+import { CHEMISTRY, findHeadroom, pvwattsDcW, simulateTrip } from '@/shared/engine';
 import { desertSpringLoop, highlandLoop } from '@/tests/fixtures/demo-trips';
 import { constantLoad, simpleTrip } from './trip-builder';
 
@@ -12,11 +12,11 @@ describe('closed-form cases', () => {
     expect(200 * 12.8 - (last?.storedWh ?? 0)).toBeCloseTo(expectedWh, 6);
   });
 
-  it('when an AC load runs through the inverter, then the drain also divides by the inverter efficiency', () => {
+  it('when an AC load runs through the inverter, then the drain follows the inverter’s part-load curve', () => {
     const r = simulateTrip(
       simpleTrip({ capacityAh: 200, inverter: true, appliances: [constantLoad('load', 'ac', 45)] }),
     );
-    const expectedWh = (45 * 24) / 0.9 / CHEMISTRY.lifepo4.dischargeEfficiency;
+    const expectedWh = (pvwattsDcW(45, 2000, 0.9) * 24) / CHEMISTRY.lifepo4.dischargeEfficiency;
     expect(200 * 12.8 - (r.ledger.at(-1)?.storedWh ?? 0)).toBeCloseTo(expectedWh, 6);
   });
 

@@ -5,7 +5,7 @@
 // its standard refraction. Measured when written: max |Δaltitude| 0.0146°, max |Δazimuth|·cos(altitude) 0.0130°.
 import * as Astronomy from 'astronomy-engine';
 import { describe, expect, it } from 'vitest';
-import { sunPosition } from '@/shared/engine';
+import { sunPosition, sunPositionWithTrue } from '@/shared/engine';
 
 const BOUND_DEG = 0.02; // the measured maxima above, rounded up
 
@@ -20,23 +20,28 @@ function lcg(seed: number): () => number {
 
 type Pair = { lat: number; lon: number; ms: number };
 
-function pairs(count: number): Pair[] {
-  const rnd = lcg(12345);
+/** Pairs from 65° S to 65° N, 2020–2035, whose reference altitude (refracted or not) is above `minAltDeg`. */
+function pairs(count: number, seed: number, minAltDeg: number, refraction: 'normal' | undefined): Pair[] {
+  const rnd = lcg(seed);
   const out: Pair[] = [];
   while (out.length < count) {
     const lat = -65 + 130 * rnd();
     const lon = -180 + 360 * rnd();
     const ms = Date.UTC(2020, 0, 1) + rnd() * 15 * 365.25 * 86_400_000;
-    const d = new Date(ms);
-    const obs = new Astronomy.Observer(lat, lon, 0);
-    const eq = Astronomy.Equator(Astronomy.Body.Sun, d, obs, true, true);
-    if (Astronomy.Horizon(d, obs, eq.ra, eq.dec, 'normal').altitude > 5) out.push({ lat, lon, ms });
+    if (reference({ lat, lon, ms }, refraction).altitude > minAltDeg) out.push({ lat, lon, ms });
   }
   return out;
 }
 
+function reference(p: Pair, refraction: 'normal' | undefined): Astronomy.HorizontalCoordinates {
+  const d = new Date(p.ms);
+  const obs = new Astronomy.Observer(p.lat, p.lon, 0);
+  const eq = Astronomy.Equator(Astronomy.Body.Sun, d, obs, true, true);
+  return Astronomy.Horizon(d, obs, eq.ra, eq.dec, refraction);
+}
+
 describe('suncalc against astronomy-engine', () => {
-  const sample = pairs(800);
+  const sample = pairs(800, 12345, 5, 'normal');
 
   it('when 800 sunlit pairs span 65° S to 65° N, then the tropics and both high latitudes are covered', () => {
     expect(sample.some((p) => Math.abs(p.lat) < 23.44)).toBe(true);
@@ -48,10 +53,7 @@ describe('suncalc against astronomy-engine', () => {
     let maxAlt = 0;
     let maxAz = 0;
     for (const p of sample) {
-      const d = new Date(p.ms);
-      const obs = new Astronomy.Observer(p.lat, p.lon, 0);
-      const eq = Astronomy.Equator(Astronomy.Body.Sun, d, obs, true, true);
-      const ref = Astronomy.Horizon(d, obs, eq.ra, eq.dec, 'normal');
+      const ref = reference(p, 'normal');
       const ours = sunPosition(p.ms, p.lat, p.lon);
       maxAlt = Math.max(maxAlt, Math.abs(ours.altitudeDeg - ref.altitude));
       const dAz = Math.abs(ours.azimuthDeg - ref.azimuth);
@@ -60,5 +62,23 @@ describe('suncalc against astronomy-engine', () => {
     }
     expect(maxAlt).toBeLessThan(BOUND_DEG);
     expect(maxAz).toBeLessThan(BOUND_DEG);
+  });
+
+  it('when the true (unrefracted) altitude is read, then it matches astronomy-engine without refraction within 0.02°, down to the horizon', () => {
+    let maxAlt = 0;
+    for (const p of pairs(300, 777, -3, undefined)) {
+      const ref = reference(p, undefined);
+      maxAlt = Math.max(maxAlt, Math.abs(sunPositionWithTrue(p.ms, p.lat, p.lon).trueAltitudeDeg - ref.altitude));
+    }
+    expect(maxAlt).toBeLessThan(BOUND_DEG);
+  });
+
+  it('when the sun sits on the horizon, then the apparent altitude is about half a degree above the true one', () => {
+    // Sunrise at Greenwich on the equinox: refraction at the horizon is about 0.5–0.6° (standard atmosphere).
+    let ms = Date.UTC(2027, 2, 20, 5, 0);
+    while (sunPositionWithTrue(ms, 51.48, 0).trueAltitudeDeg < 0) ms += 10_000;
+    const s = sunPositionWithTrue(ms, 51.48, 0);
+    expect(s.altitudeDeg - s.trueAltitudeDeg).toBeGreaterThan(0.4);
+    expect(s.altitudeDeg - s.trueAltitudeDeg).toBeLessThan(0.7);
   });
 });
