@@ -149,7 +149,7 @@ function layoutAll(items: AxisTick[], { scale, left, right, measure, gap = 8 }: 
     const [a, b] = [labels[i], labels[i + 1]];
     if (a) a.left = Math.min(a.left, b ? b.left - gap - a.width : right - a.width);
   }
-  const fits = labels.every((l) => l.left >= left - 0.5 && Math.abs(l.left - l.target) <= l.slack + 0.5);
+  const fits = labels.every((l) => l.left >= left - 1e-9 && Math.abs(l.left - l.target) <= l.slack + 0.5);
   return fits ? labels.map((l) => ({ left: l.left, width: l.width, text: l.item.text, x: l.item.x })) : null;
 }
 
