@@ -1,6 +1,7 @@
 // Trip contract: stops (where the rig stays) and drives (the moves between them).
 import { z } from 'zod';
 import { isoInstantSchema, localHourSchema, nonNegativeSchema, fractionSchema, timeZoneSchema } from './common';
+import { drivePlanShape } from './drive-plan';
 
 export const sitePresetSchema = z.enum(['open', 'light-cover', 'partial-shade', 'deep-forest']);
 export type SitePreset = z.infer<typeof sitePresetSchema>;
@@ -61,6 +62,7 @@ export type StopInput = z.input<typeof stopSchema>;
 export const driveSchema = z.object({
   hoursOnRoad: nonNegativeSchema.max(48),
   vehicleCharging: z.boolean().default(true),
+  ...drivePlanShape,
 });
 export type Drive = z.infer<typeof driveSchema>;
 
