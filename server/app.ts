@@ -23,6 +23,7 @@ import { inviteLinksRouter } from './routes/invite-links';
 import { clubInviteLinksRouter } from './routes/club-invite-links';
 import { clubsRouter } from './routes/clubs';
 import { outboxRouter } from './routes/outbox';
+import { placesRouter } from './routes/places';
 import { createBudgetService } from './budget-service';
 import { webStatic } from './web-static';
 import packageJson from '../package.json';
@@ -117,6 +118,7 @@ export function createApp(deps: AppDeps): TrailtallyApp {
   app.use('/api/rigs', signedIn, rigsRouter({ db, now: deps.now }));
   app.use('/api/rig-presets', signedIn, rigPresetsRouter());
   app.use('/api/me/preferences', signedIn, preferencesRouter({ db }));
+  app.use('/api/places', signedIn, placesRouter());
   app.use('/api', (req, _res, next) =>
     next(new HttpError(404, 'not_found', `No API route for ${req.method} ${req.baseUrl}${req.path}.`)),
   );

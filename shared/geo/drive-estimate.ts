@@ -38,7 +38,12 @@ export type DrivePlanFields = {
  * otherwise it follows the stops. The time follows the distance unless someone typed one. Neither may run past
  * the gap between leaving one stop and reaching the next.
  */
-export function planDrive<T extends DrivePlanFields>(drive: T, from: LatLon, to: LatLon, gapHours: number): T {
+export function planDrive<T extends DrivePlanFields>(
+  drive: T,
+  from: LatLon,
+  to: LatLon,
+  gapHours: number,
+): T & { distanceKm: number } {
   const source = drive.distanceSource ?? 'great-circle';
   const distanceKm =
     source === 'great-circle' || drive.distanceKm === null || drive.distanceKm === undefined
