@@ -24,6 +24,7 @@ import { clubInviteLinksRouter } from './routes/club-invite-links';
 import { clubsRouter } from './routes/clubs';
 import { outboxRouter } from './routes/outbox';
 import { placesRouter } from './routes/places';
+import { calendarFeedRouter } from './routes/calendar-feed';
 import { createBudgetService } from './budget-service';
 import { webStatic } from './web-static';
 import packageJson from '../package.json';
@@ -119,6 +120,7 @@ export function createApp(deps: AppDeps): TrailtallyApp {
   app.use('/api/rig-presets', signedIn, rigPresetsRouter());
   app.use('/api/me/preferences', signedIn, preferencesRouter({ db }));
   app.use('/api/places', signedIn, placesRouter());
+  app.use('/api/calendar', calendarFeedRouter({ db, budgets, now: deps.now, publicUrl: config.publicUrl }));
   app.use('/api', (req, _res, next) =>
     next(new HttpError(404, 'not_found', `No API route for ${req.method} ${req.baseUrl}${req.path}.`)),
   );

@@ -11,6 +11,7 @@ import { membersRouter } from './members';
 import { stopsRouter } from './stops';
 import { tripRigRouter } from './trip-rig';
 import { tripInvitesRouter } from './trip-invites';
+import { tripExportsRouter } from './trip-exports';
 import type { Mailer } from '../mail/mailer';
 
 /** Everything under /api/trips/:tripId/… once the caller's role is known. */
@@ -24,6 +25,7 @@ export function tripItemsRouter(deps: TripItemsDeps): Router {
   router.use('/rig', tripRigRouter(deps));
   router.use('/members', membersRouter(deps));
   router.use('/invites', tripInvitesRouter(deps));
+  router.use(tripExportsRouter(deps));
 
   router.get('/budget', (req, res) => {
     const answer = deps.budgets.forTrip(tripAccess(res).tripId);
