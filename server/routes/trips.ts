@@ -24,6 +24,7 @@ import { eq } from 'drizzle-orm';
 import { conflict, notFound, unprocessable } from '../errors';
 import { currentUser } from '../middleware/require-session';
 import { loadTripAccess, requirePermission, tripAccess } from '../middleware/trip-access';
+import { routeForCard } from '../places/route-for-card';
 import { duplicateTrip } from '../trip-copy';
 import { tripItemsRouter, type TripItemsDeps } from './trip-items';
 
@@ -42,6 +43,7 @@ export function tripsRouter(deps: TripItemsDeps): Router {
         lowestSocPct: budget ? budget.headline.lowestSocPct : null,
         reservePct: budget ? budget.headline.reservePct : null,
         flagCount: budget ? budget.flags.length : null,
+        route: routeForCard(listStopRows(db, trip.id), budget),
       });
     });
     res.json({ trips: list });

@@ -18,6 +18,8 @@ export const tripSummarySchema = z.object({
   lowestSocPct: z.number().nullable().optional(),
   reservePct: z.number().nullable().optional(),
   flagCount: z.number().int().nullable().optional(),
+  /** The stops' positions and lowest charge there, for the card's small map. */
+  route: z.array(z.object({ lat: z.number(), lon: z.number(), lowestSocPct: z.number().nullable() })).optional(),
 });
 
 export type TripSummary = z.infer<typeof tripSummarySchema>;
