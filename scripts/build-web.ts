@@ -55,7 +55,8 @@ export function ensureWebBuild({ force = false } = {}): void {
       : 'Building the web app into dist/ (first start; about a minute) …',
   );
   copyCanvasKit();
-  const result = spawnSync('npx', ['expo', 'export', '--platform', 'web', '--output-dir', 'dist'], {
+  // --clear: Metro's cache keeps the old list of route files, so a route added since the last build would be missing.
+  const result = spawnSync('npx', ['expo', 'export', '--platform', 'web', '--output-dir', 'dist', '--clear'], {
     cwd: ROOT,
     stdio: 'inherit',
     env: { ...process.env, CI: '1', EXPO_NO_TELEMETRY: '1' },

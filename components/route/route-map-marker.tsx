@@ -1,12 +1,10 @@
 import { useMemo, useRef, useState } from 'react';
-import { PanResponder, Pressable, StyleSheet, View } from 'react-native';
+import { Pressable, StyleSheet, View } from 'react-native';
 import { colors } from '@/components/theme/tokens';
 import { Text } from '@/components/ui/text';
 import type { ChargeTone } from '@/shared/route-charge';
+import { useMarkerDrag } from './use-marker-drag';
 import { useMarkerKeys } from './use-marker-keys';
-
-/** Below this many pixels of movement a press is a tap, not a drag. */
-const DRAG_SLOP_PX = 4;
 
 export type MarkerProps = {
   index: number;
@@ -29,22 +27,20 @@ export type MarkerProps = {
 export function RouteMapMarker({ index, label, x, y, tone, size, testID, onPress, onMove }: MarkerProps) {
   const ref = useRef<View>(null);
   const [drag, setDrag] = useState<{ dx: number; dy: number } | null>(null);
-  // Made again only when the marker moves or its handler changes, never during a drag (nothing above changes then).
-  const responder = useMemo(
+  const dragging = useMemo(
     () =>
-      PanResponder.create({
-        // Claims the gesture from the button only once it moves, so a tap still opens the stop.
-        onMoveShouldSetPanResponderCapture: (_e, g) =>
-          onMove !== undefined && Math.abs(g.dx) + Math.abs(g.dy) > DRAG_SLOP_PX,
-        onPanResponderMove: (_e, g) => setDrag({ dx: g.dx, dy: g.dy }),
-        onPanResponderRelease: (_e, g) => {
-          setDrag(null);
-          onMove?.(x + g.dx, y + g.dy);
-        },
-        onPanResponderTerminate: () => setDrag(null),
-      }),
+      onMove
+        ? {
+            onDrag: (dx: number, dy: number) => setDrag(dx === 0 && dy === 0 ? null : { dx, dy }),
+            onDrop: (dx: number, dy: number) => {
+              setDrag(null);
+              onMove(x + dx, y + dy);
+            },
+          }
+        : undefined,
     [onMove, x, y],
   );
+  const dragHandlers = useMarkerDrag(ref, dragging);
   useMarkerKeys(ref, onMove ? (dx, dy) => onMove(x + dx, y + dy) : undefined);
   const cx = x + (drag?.dx ?? 0);
   const cy = y + (drag?.dy ?? 0);
@@ -78,7 +74,7 @@ export function RouteMapMarker({ index, label, x, y, tone, size, testID, onPress
       </View>
     );
   return (
-    <View {...responder.panHandlers} style={[styles.wrap, place]} pointerEvents="box-none">
+    <View {...dragHandlers} style={[styles.wrap, place]} pointerEvents="box-none">
       <Pressable
         ref={ref}
         testID={testID}

@@ -1,4 +1,6 @@
 import { useRouter } from 'expo-router';
+import { Card } from '@/components/ui/card';
+import { Text } from '@/components/ui/text';
 import type { SimulationResult } from '@/shared/engine/result-types';
 import { chargeTone } from '@/shared/route-charge';
 import type { TripDetail } from '@/shared/schemas/api';
@@ -10,16 +12,25 @@ export function BudgetRouteMap({ detail, result }: { detail: TripDetail; result:
   const router = useRouter();
   if (detail.stops.length === 0) return null;
   return (
-    <RouteMap
-      testID="budget-route-map"
-      compact
-      height={220}
-      label={`Map of the route with each stop marked by its lowest charge`}
-      stops={mapStops(detail.stops, result)}
-      onOpenStop={(stopId) =>
-        router.push({ pathname: '/trips/[tripId]/route', params: { tripId: detail.trip.id, stop: stopId } })
-      }
-    />
+    <Card testID="budget-route">
+      <Text variant="title" role="heading" aria-level={2}>
+        Route
+      </Text>
+      <Text variant="caption" color="inkSoft">
+        Each stop by its lowest charge: circle comfortable, ringed close to the reserve, square below it. Press one to
+        open it.
+      </Text>
+      <RouteMap
+        testID="budget-route-map"
+        compact
+        height={220}
+        label="Map of the route with each stop marked by its lowest charge"
+        stops={mapStops(detail.stops, result)}
+        onOpenStop={(stopId) =>
+          router.push({ pathname: '/trips/[tripId]/route', params: { tripId: detail.trip.id, stop: stopId } })
+        }
+      />
+    </Card>
   );
 }
 

@@ -122,14 +122,18 @@ export function RouteScreen({ detail, initialStopId }: { detail: TripDetail; ini
     );
   };
 
+  // Above the list and, on a phone, above the stop being edited too: a pin is placed while its stop is open.
+  const map = (
+    <RouteMapCard
+      detail={detail}
+      canEdit={canEdit}
+      selectedStopId={current?.id ?? null}
+      onOpenStop={(id) => setEditing({ kind: 'stop', id })}
+    />
+  );
   const list = (
     <View style={styles.column}>
-      <RouteMapCard
-        detail={detail}
-        canEdit={canEdit}
-        selectedStopId={current?.id ?? null}
-        onOpenStop={(id) => setEditing({ kind: 'stop', id })}
-      />
+      {wide ? map : null}
       {!canEdit ? (
         <Banner testID="route-read-only" tone="info" message="Only the trip owner or a planner can change the route." />
       ) : null}
@@ -218,7 +222,14 @@ export function RouteScreen({ detail, initialStopId }: { detail: TripDetail; ini
 
   return (
     <TabScroll testID="route-screen">
-      {wide ? <Panes main={list} side={editor} sideWidth={560} /> : editing ? editor : list}
+      {wide ? (
+        <Panes main={list} side={editor} sideWidth={560} />
+      ) : (
+        <View style={styles.column}>
+          {editing?.kind === 'stop' || !editing ? map : null}
+          {editing ? editor : list}
+        </View>
+      )}
     </TabScroll>
   );
 }

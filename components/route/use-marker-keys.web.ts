@@ -1,6 +1,6 @@
 import { useEffect, useRef, type RefObject } from 'react';
 import type { View } from 'react-native';
-import type { MarkerKeyHandler } from './use-marker-keys';
+import type { MarkerKeyHandler } from './marker-drag';
 
 const STEP_PX = 4;
 const BIG_STEP_PX = 24;

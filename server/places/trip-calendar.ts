@@ -4,18 +4,11 @@
 import ical, { ICalCalendarMethod } from 'ical-generator';
 import { DateTime } from 'luxon';
 import type { SimulationResult } from '@/shared/engine/result-types';
+import { FLAG_TITLE } from '@/shared/flag-titles';
 import type { TripDetail } from '@/shared/schemas/api';
 
 type Detail = Pick<TripDetail, 'trip' | 'stops' | 'drives'>;
 
-const FLAG_WORDS: Record<string, string> = {
-  'below-reserve': 'below reserve',
-  'energy-short': 'energy short',
-  'inverter-overload': 'inverter overload',
-  'cold-charge-blocked': 'too cold to charge',
-  'propane-out': 'propane runs out',
-  'high-dc-current': 'high DC current',
-};
 
 const GENERATOR_CAUTION =
   'Run the generator outdoors only, never inside, under an awning or near an open window or vent; keep a working CO alarm.';
@@ -27,7 +20,7 @@ function dayLines(stopIndex: number, budget: SimulationResult | null): string[] 
     .filter((day) => day.stopIndexes.includes(stopIndex))
     .map((day) => {
       const flags = budget.flags.filter((flag) => flag.atLocal.slice(0, 10) === day.date);
-      const kinds = [...new Set(flags.map((flag) => FLAG_WORDS[flag.kind] ?? flag.kind))];
+      const kinds = [...new Set(flags.map((flag) => FLAG_TITLE[flag.kind].toLowerCase()))];
       const label = DateTime.fromISO(day.date).toFormat('ccc d LLL');
       const flagText =
         flags.length === 0
