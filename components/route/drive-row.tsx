@@ -1,5 +1,6 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
+import { duration } from '@/components/format/duration';
 import { colors, radii, space } from '@/components/theme/tokens';
 import { Button } from '@/components/ui/button';
 import { NumberField } from '@/components/ui/number-field';
@@ -18,14 +19,6 @@ const SOURCE_WORDS: Record<NonNullable<Drive['distanceSource']>, string> = {
   track: 'measured along the GPX track',
   typed: 'as typed',
 };
-
-/** "1 h 45 min" */
-function duration(h: number): string {
-  const minutes = Math.round(h * 60);
-  const whole = Math.floor(minutes / 60);
-  const rest = minutes % 60;
-  return whole === 0 ? `${rest} min` : rest === 0 ? `${whole} h` : `${whole} h ${rest} min`;
-}
 
 function summary(drive: Drive, units: 'metric' | 'us'): string {
   const parts: string[] = [];

@@ -1,5 +1,6 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
+import { duration } from '@/components/format/duration';
 import { localMoment } from '@/components/format/time';
 import { colors, radii, space } from '@/components/theme/tokens';
 import { Banner } from '@/components/ui/banner';
@@ -37,7 +38,7 @@ function PreviewList({ preview }: { preview: GpxPreview }) {
               <Text variant="caption" color="lake" testID={`gpx-preview-drive-${i}`}>
                 then {d.value.toFixed(1)} {d.unit}
                 {drive.distanceSource === 'track' ? ' along the track' : ' (straight line × 1.3)'}, about{' '}
-                {drive.hoursOnRoad} h on the road
+                {duration(drive.hoursOnRoad)} on the road
               </Text>
             ) : null}
           </View>

@@ -108,7 +108,14 @@ export function RouteMapCard({ detail, canEdit, selectedStopId, onOpenStop }: Pr
         stops={stops}
         height={wide ? 420 : 300}
         onOpenStop={onOpenStop}
-        onMoveStop={canEdit ? (stopId, to) => setPending({ stopId, to }) : undefined}
+        onMoveStop={
+          canEdit
+            ? (stopId, to) => {
+                setPending({ stopId, to });
+                setPlacing(false);
+              }
+            : undefined
+        }
         placingStopId={placing && selected ? selected.id : null}
       />
       {pending && moving ? (

@@ -141,7 +141,7 @@ export function RouteScreen({ detail, initialStopId }: { detail: TripDetail; ini
         <EmptyState
           testID="route-empty"
           title="No stops yet"
-          body="Add the first place you will stay: its coordinates, dates and how open the sky is."
+          body="Add the first place you will stay by its name (or its coordinates), or import a GPX file from your navigation app below."
         />
       ) : null}
       {detail.stops.map((record, i) => {

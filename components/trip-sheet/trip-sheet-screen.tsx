@@ -5,6 +5,7 @@ import { Link } from 'expo-router';
 import { DateTime } from 'luxon';
 import { ScrollView, StyleSheet, View } from 'react-native';
 import { energy, fuelAmount, mass, text as figureText } from '@/components/format/units';
+import { duration } from '@/components/format/duration';
 import { localMoment } from '@/components/format/time';
 import { mapStops, RouteMap } from '@/components/route/route-map';
 import { colors, fonts, space } from '@/components/theme/tokens';
@@ -70,7 +71,7 @@ function stopRows(detail: TripDetail, budget: SimulationResult | null, units: Un
         '→',
         `Drive to ${detail.stops[i + 1]?.stop.name ?? ''}`,
         d ? `${Math.round(d.value)} ${d.unit}` : '',
-        `${drive.hoursOnRoad} h`,
+        duration(drive.hoursOnRoad),
         drive.vehicleCharging ? 'vehicle charging' : 'no vehicle charging',
         '',
       ]);
