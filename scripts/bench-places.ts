@@ -1,17 +1,13 @@
 // Place search benchmark (tinybench): prints medians. Target, reported and not asserted: a prefix search
 // answers in under 20 ms, from one typed letter to a whole name; nearest towns and a map extent are shown too.
-import { cpus, loadavg } from 'node:os';
+import { cpus } from 'node:os';
 import { Bench } from 'tinybench';
 import { basemapFor, warmBasemap } from '../server/places/basemap';
 import { nearestPlaces, searchPlaces, warmGazetteer } from '../server/places/gazetteer';
+import { loadAverage as load } from './load-average';
 
 // What a person types on the way to a place: one letter, a few, a whole name, an accent left out, a qualifier.
 const PREFIXES = ['s', 'a', 'sa', 'fo', 'san', 'fort w', 'inverness', 'tromso', 'portland, or', 'zzzz'];
-
-const load = (): string =>
-  loadavg()
-    .map((x) => x.toFixed(2))
-    .join(' ');
 
 async function main(): Promise<void> {
   console.log(`${cpus().length} CPUs, load average before: ${load()}`);

@@ -1,8 +1,9 @@
 // Engine benchmark (tinybench): prints medians. Targets are reported, not asserted:
 // 30-day trip, 40 appliances, three sky scenarios < 2 ms; headroom on that trip < 50 ms; 7-day trip < 0.5 ms.
-import { cpus, loadavg } from 'node:os';
+import { cpus } from 'node:os';
 import { Bench } from 'tinybench';
 import { findHeadroom, simulateTrip } from '../shared/engine';
+import { loadAverage as load } from './load-average';
 // The same trips are pinned by the golden test, so the figures measured here are for results known to be unchanged.
 import { benchTrip as trip } from '../tests/shared/golden-inputs';
 
@@ -19,12 +20,6 @@ bench
   .add('simulateTrip: 7 days, 15 appliances, 3 sky scenarios', () => {
     simulateTrip(week);
   });
-
-// Medians are wall time: on a shared machine they rise with the load, so the load is printed with them.
-const load = (): string =>
-  loadavg()
-    .map((x) => x.toFixed(2))
-    .join(' ');
 
 async function main(): Promise<void> {
   console.log(`${cpus().length} CPUs, load average before: ${load()}`);
