@@ -9,7 +9,6 @@ import type { TripDetail } from '@/shared/schemas/api';
 
 type Detail = Pick<TripDetail, 'trip' | 'stops' | 'drives'>;
 
-
 const GENERATOR_CAUTION =
   'Run the generator outdoors only, never inside, under an awning or near an open window or vent; keep a working CO alarm.';
 
