@@ -2,6 +2,7 @@ import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { greatCircleKm } from '@/shared/geo/great-circle';
 import type { DriveRecord } from '@/shared/schemas/api';
 import type { StopInput } from '@/shared/schemas/trip';
+import type { TripSummary } from '@/shared/schemas/trip-summary';
 import { createTestApp, signUpAgent, type TestContext } from '../factories/test-app';
 import { addStop, createTrip, getDetail } from '../factories/trip-factory';
 
@@ -143,6 +144,17 @@ describe('drives sized from their distance', () => {
     });
     expect(typed.status).toBe(422);
     expect(typed.body.error.fields['drive.hoursOnRoad']).toBeDefined();
+  });
+
+  it('when trips are listed, then each card carries its stops’ positions for its small map', async () => {
+    const { agent, tripId } = await twoStopTrip();
+    const { trips } = (await agent.get('/api/trips').expect(200)).body as { trips: TripSummary[] };
+    const card = trips.find((t) => t.id === tripId);
+    expect(card?.route?.map(({ lat, lon }) => ({ lat, lon }))).toEqual([lochside, pinewood]);
+    // Each stop's lowest charge, none of them below the trip's lowest (which may fall on a drive).
+    const lows = card?.route?.map((stop) => stop.lowestSocPct ?? NaN) ?? [];
+    for (const low of lows) expect(low).toBeGreaterThanOrEqual(card?.lowestSocPct ?? Infinity);
+    expect(Math.min(...lows)).toBeLessThanOrEqual(100);
   });
 
   it.each([
