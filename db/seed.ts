@@ -59,7 +59,8 @@ export function insertTripFromEngineInput(db: Db, ownerId: string, draft: Engine
       const drive = input.trip.drives[i];
       if (drive)
         tx.update(drives)
-          .set(drive)
+          // The demo's hours are the plan's own, not a suggestion to follow the stops.
+          .set({ ...drive, hoursSource: drive.hoursSource ?? 'typed' })
           .where(and(eq(drives.tripId, trip.id), eq(drives.position, i)))
           .run();
     });

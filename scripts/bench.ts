@@ -2,11 +2,12 @@
 // 30-day trip, 40 appliances, three sky scenarios < 5 ms; headroom on that trip < 50 ms; the 7-day trip is reported
 // for comparison only; the budget of the largest plan the API accepts (what a budget worker does: validate, simulate,
 // serialise) < 250 ms.
-import { cpus, loadavg } from 'node:os';
+import { cpus } from 'node:os';
 import { Bench } from 'tinybench';
 import { computeBudget } from '../server/budget/compute';
 import { findHeadroom, simulateTrip } from '../shared/engine';
 import { largestPlan } from '../tests/factories/largest-plan';
+import { loadAverage as load } from './load-average';
 // The same trips are pinned by the golden test, so the figures measured here are for results known to be unchanged.
 import { benchTrip as trip } from '../tests/shared/golden-inputs';
 
@@ -28,12 +29,6 @@ bench
     const outcome = computeBudget(largest);
     if (outcome.kind !== 'ok') throw new Error(`the largest plan did not compute: ${JSON.stringify(outcome)}`);
   });
-
-// Medians are wall time: on a shared machine they rise with the load, so the load is printed with them.
-const load = (): string =>
-  loadavg()
-    .map((x) => x.toFixed(2))
-    .join(' ');
 
 async function main(): Promise<void> {
   console.log(`${cpus().length} CPUs, load average before: ${load()}`);

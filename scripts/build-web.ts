@@ -58,9 +58,10 @@ export function ensureWebBuild({ force = false } = {}): void {
   // Metro keeps its transform cache in the system temp folder, keyed by each file's real path. Checkouts that share
   // one node_modules (linked worktrees) share expo-router's route-context file, so one checkout's build would reuse
   // another's cached pointer to its app/ folder and ship that checkout's screens. A cache per checkout prevents it.
+  // --clear: Metro's cache keeps the old list of route files, so a route added since the last build would be missing.
   const metroTemp = path.join(ROOT, '.expo', 'build-tmp');
   fs.mkdirSync(metroTemp, { recursive: true });
-  const result = spawnSync('npx', ['expo', 'export', '--platform', 'web', '--output-dir', 'dist'], {
+  const result = spawnSync('npx', ['expo', 'export', '--platform', 'web', '--output-dir', 'dist', '--clear'], {
     cwd: ROOT,
     stdio: 'inherit',
     env: { ...process.env, CI: '1', EXPO_NO_TELEMETRY: '1', TMPDIR: metroTemp },

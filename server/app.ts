@@ -31,6 +31,8 @@ import { createBudgetService, type BudgetService } from './budget/budget-service
 import { INVITES_PER_HOUR } from '../shared/schemas/sharing';
 import type { TrustProxy } from './trust-proxy';
 import { trustedOrigins } from './trusted-origins';
+import { placesRouter } from './routes/places';
+import { calendarFeedRouter } from './routes/calendar-feed';
 import { webStatic } from './web-static';
 import packageJson from '../package.json';
 
@@ -150,6 +152,8 @@ export function createApp(deps: AppDeps): TrailtallyApp {
   app.use('/api/rigs', signedIn, rigsRouter({ db, now: deps.now }));
   app.use('/api/rig-presets', signedIn, rigPresetsRouter());
   app.use('/api/me/preferences', signedIn, preferencesRouter({ db }));
+  app.use('/api/places', signedIn, placesRouter());
+  app.use('/api/calendar', calendarFeedRouter({ db, budgets, now: deps.now, publicUrl: config.publicUrl }));
   app.use('/api', (req, _res, next) =>
     next(new HttpError(404, 'not_found', `No API route for ${req.method} ${req.baseUrl}${req.path}.`)),
   );

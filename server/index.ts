@@ -7,6 +7,8 @@ import { loadEnv } from './env';
 import { createLogger } from './logger';
 import { startLocalSmtp, type LocalSmtp } from './mail/local-smtp';
 import { createSmtpMailer } from './mail/mailer';
+import { warmBasemap } from './places/basemap';
+import { warmGazetteer } from './places/gazetteer';
 
 /** Starts the server: migrate, seed demo data on a first start, listen, and close cleanly on signals. */
 export async function main(): Promise<void> {
@@ -54,6 +56,11 @@ export async function main(): Promise<void> {
     const address = server.address();
     const port = typeof address === 'object' && address ? address.port : env.PORT;
     console.log(`Trailtally is ready at http://localhost:${port}`);
+    // Place search and the map's background are indexed once, right after start-up, not on the first search.
+    setImmediate(() => {
+      warmGazetteer();
+      warmBasemap();
+    });
   });
 
   let closing = false;

@@ -18,6 +18,7 @@ import { HeadlineFigures } from './headline-figures';
 import { SocChartCard } from './soc-chart-card';
 import { useBudgetView } from './use-budget-view';
 import { editsForWhatIf, WhatIfPanel } from './what-if-panel';
+import { BudgetRouteMap } from '@/components/route/route-mini-map';
 
 export function BudgetScreen({ detail }: { detail: TripDetail }) {
   const units = useUnits();
@@ -85,6 +86,7 @@ export function BudgetScreen({ detail }: { detail: TripDetail }) {
         }
         side={
           <View style={styles.column}>
+            <BudgetRouteMap detail={detail} result={result} />
             {whatIf}
             <FlagList
               flags={result.flags}

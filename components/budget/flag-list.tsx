@@ -6,17 +6,9 @@ import { Card } from '@/components/ui/card';
 import { Caution } from '@/components/ui/cautions';
 import { Text } from '@/components/ui/text';
 import type { DaySheet, Flag } from '@/shared/engine/result-types';
+import { FLAG_TITLE } from '@/shared/flag-titles';
 import type { TripDetail } from '@/shared/schemas/api';
 import { editForFix } from './apply-fix';
-
-const FLAG_TITLE: Record<Flag['kind'], string> = {
-  'below-reserve': 'Below the reserve',
-  'energy-short': 'Energy short',
-  'inverter-overload': 'Inverter overloaded',
-  'cold-charge-blocked': 'Too cold to charge',
-  'propane-out': 'Propane runs out',
-  'high-dc-current': 'High DC current',
-};
 
 type Props = {
   flags: Flag[];

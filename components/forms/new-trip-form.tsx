@@ -14,6 +14,7 @@ import { createTripRequestSchema, type CreateTripRequest, type TripDetail } from
 import { ApiError } from '@/stores/queries/api-client';
 import { useMyRigsQuery, useRigPresetsQuery } from '@/stores/queries/rigs';
 import { useTripCreateMutation } from '@/stores/queries/trips';
+import { ZoneField } from './zone-field';
 
 // The form holds the rig choice as one string ("preset:id" or "saved:id") so a single chip group can pick it.
 const formSchema = z
@@ -77,7 +78,7 @@ export function NewTripForm({ onCreated }: { onCreated: (detail: TripDetail) => 
     ...(mine.data?.rigs ?? []).map((r) => ({ value: `saved:${r.id}`, label: r.rig.name })),
     ...(presets.data?.presets ?? []).map((p) => ({ value: `preset:${p.id}`, label: p.label })),
   ];
-  const text = (name: 'name' | 'startDate' | 'endDate' | 'timeZone', label: string, hint?: string) => (
+  const text = (name: 'name' | 'startDate' | 'endDate', label: string, hint?: string) => (
     <Controller
       control={control}
       name={name}
@@ -105,7 +106,19 @@ export function NewTripForm({ onCreated }: { onCreated: (detail: TripDetail) => 
         {text('startDate', 'First day', 'YYYY-MM-DD')}
         {text('endDate', 'Last day', 'YYYY-MM-DD')}
       </View>
-      {text('timeZone', 'Home time zone', 'an IANA name such as Europe/London')}
+      <Controller
+        control={control}
+        name="timeZone"
+        render={({ field, fieldState }) => (
+          <ZoneField
+            testID="new-trip-timeZone"
+            label="Home time zone"
+            value={field.value}
+            onChange={field.onChange}
+            error={fieldState.error?.message}
+          />
+        )}
+      />
       {presets.isPending || mine.isPending ? <Skeleton testID="new-trip-rigs-loading" height={96} /> : null}
       <Controller
         control={control}

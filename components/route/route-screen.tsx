@@ -3,22 +3,25 @@ import { StyleSheet, View } from 'react-native';
 import { localMoment } from '@/components/format/time';
 import { temperature } from '@/components/format/units';
 import { useIsWide } from '@/components/theme/breakpoints';
-import { colors, radii, space } from '@/components/theme/tokens';
+import { colors, space } from '@/components/theme/tokens';
 import { Panes, TabScroll } from '@/components/trip/tab-scroll';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { EmptyState } from '@/components/ui/empty-state';
-import { NumberField } from '@/components/ui/number-field';
 import { Text } from '@/components/ui/text';
-import type { DriveRecord, StopRecord, TripDetail } from '@/shared/schemas/api';
+import type { StopRecord, TripDetail } from '@/shared/schemas/api';
 import { can } from '@/shared/schemas/roles';
 import type { SiteExposure } from '@/shared/schemas/trip';
 import { ApiError } from '@/stores/queries/api-client';
-import { useDriveSaveMutation, useStopDeleteMutation, useStopsReorderMutation } from '@/stores/queries/route';
+import { useStopDeleteMutation, useStopsReorderMutation } from '@/stores/queries/route';
 import { showToast } from '@/stores/toast-store';
 import { useUnits } from '@/stores/units-store';
+import { DriveRow } from './drive-row';
+import { nextStopTimes } from './next-stop-times';
+import { RouteMapCard } from './route-map-card';
 import { StopForm } from './stop-form';
+import { TripExportsCard } from './trip-exports-card';
 import { SunPath } from './sun-path';
 
 const EXPOSURE: Record<string, string> = {
@@ -41,70 +44,11 @@ const SKY: Record<string, string> = {
 
 type Editing = { kind: 'stop'; id: string } | { kind: 'new' } | null;
 
-function DriveRow({
-  tripId,
-  record,
-  index,
-  canEdit,
-}: {
-  tripId: string;
-  record: DriveRecord;
-  index: number;
-  canEdit: boolean;
-}) {
-  const save = useDriveSaveMutation(tripId);
-  const [hours, setHours] = useState<number | null>(record.drive.hoursOnRoad);
-  const dirty = hours !== record.drive.hoursOnRoad;
-  const send = async (drive: DriveRecord['drive']) => {
-    try {
-      await save.mutateAsync({ driveId: record.id, version: record.version, drive });
-      showToast('Drive saved');
-    } catch (error) {
-      showToast(error instanceof ApiError ? error.message : 'The drive could not be saved.', { tone: 'danger' });
-    }
-  };
-  return (
-    <View style={styles.drive} testID={`drive-${index}`}>
-      <Text variant="label" color="lake">
-        Drive {index + 1}: {record.drive.hoursOnRoad} h on the road
-        {record.drive.vehicleCharging ? ', charging from the vehicle' : ''}
-      </Text>
-      {canEdit ? (
-        <View style={styles.driveEdit}>
-          <View style={styles.driveField}>
-            <NumberField
-              testID={`drive-${index}-hours`}
-              label="Hours on the road"
-              value={hours}
-              onChangeNumber={setHours}
-            />
-          </View>
-          <Button
-            testID={`drive-${index}-save`}
-            tone="secondary"
-            label="Save"
-            disabled={!dirty || hours === null}
-            busy={save.isPending}
-            onPress={() => hours !== null && void send({ ...record.drive, hoursOnRoad: hours })}
-          />
-          <Button
-            testID={`drive-${index}-charging`}
-            tone="quiet"
-            label={record.drive.vehicleCharging ? 'Vehicle charging: on' : 'Vehicle charging: off'}
-            accessibilityLabel={`Vehicle charging during drive ${index + 1}: ${record.drive.vehicleCharging ? 'on' : 'off'}. Press to switch.`}
-            onPress={() => void send({ ...record.drive, vehicleCharging: !record.drive.vehicleCharging })}
-          />
-        </View>
-      ) : null}
-    </View>
-  );
-}
-
-export function RouteScreen({ detail }: { detail: TripDetail }) {
+export function RouteScreen({ detail, initialStopId }: { detail: TripDetail; initialStopId?: string }) {
   const wide = useIsWide();
   const units = useUnits();
   const canEdit = can(detail.trip.role, 'editTrip');
-  const [editing, setEditing] = useState<Editing>(null);
+  const [editing, setEditing] = useState<Editing>(initialStopId ? { kind: 'stop', id: initialStopId } : null);
   const [confirmRemove, setConfirmRemove] = useState(false);
   const reorder = useStopsReorderMutation(detail.trip.id);
   const remove = useStopDeleteMutation(detail.trip.id);
@@ -184,8 +128,18 @@ export function RouteScreen({ detail }: { detail: TripDetail }) {
     );
   };
 
+  // Above the list and, on a phone, above the stop being edited too: a pin is placed while its stop is open.
+  const map = (
+    <RouteMapCard
+      detail={detail}
+      canEdit={canEdit}
+      selectedStopId={current?.id ?? null}
+      onOpenStop={(id) => setEditing({ kind: 'stop', id })}
+    />
+  );
   const list = (
     <View style={styles.column}>
+      {wide ? map : null}
       {!canEdit ? (
         <Banner testID="route-read-only" tone="info" message="Only the trip owner or a planner can change the route." />
       ) : null}
@@ -193,7 +147,7 @@ export function RouteScreen({ detail }: { detail: TripDetail }) {
         <EmptyState
           testID="route-empty"
           title="No stops yet"
-          body="Add the first place you will stay: its coordinates, dates and how open the sky is."
+          body="Add the first place you will stay by its name (or its coordinates), or import a GPX file from your navigation app below."
         />
       ) : null}
       {detail.stops.map((record, i) => {
@@ -208,6 +162,7 @@ export function RouteScreen({ detail }: { detail: TripDetail }) {
         );
       })}
       {canEdit ? <Button testID="stop-add" label="Add a stop" onPress={() => setEditing({ kind: 'new' })} /> : null}
+      <TripExportsCard detail={detail} />
     </View>
   );
 
@@ -230,6 +185,10 @@ export function RouteScreen({ detail }: { detail: TripDetail }) {
             tripId={detail.trip.id}
             record={current ?? null}
             fallbackZone={detail.trip.timeZone}
+            newStopTimes={nextStopTimes(
+              detail.trip,
+              detail.stops.map((r) => r.stop),
+            )}
             onDone={() => setEditing(null)}
           />
         ) : (
@@ -269,7 +228,14 @@ export function RouteScreen({ detail }: { detail: TripDetail }) {
 
   return (
     <TabScroll testID="route-screen">
-      {wide ? <Panes main={list} side={editor} sideWidth={560} /> : editing ? editor : list}
+      {wide ? (
+        <Panes main={list} side={editor} sideWidth={560} />
+      ) : (
+        <View style={styles.column}>
+          {editing?.kind === 'stop' || !editing ? map : null}
+          {editing ? editor : list}
+        </View>
+      )}
     </TabScroll>
   );
 }
@@ -288,16 +254,4 @@ const styles = StyleSheet.create({
     justifyContent: 'center',
   },
   actions: { flexDirection: 'row', flexWrap: 'wrap', gap: space.xs },
-  drive: {
-    marginLeft: space.xl,
-    paddingLeft: space.lg,
-    borderLeftWidth: 3,
-    borderLeftColor: colors.lake,
-    borderStyle: 'dashed',
-    gap: space.sm,
-    paddingVertical: space.sm,
-    borderRadius: radii.sm,
-  },
-  driveEdit: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'flex-end', gap: space.sm },
-  driveField: { width: 160 },
 });

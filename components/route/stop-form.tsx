@@ -19,9 +19,18 @@ import { useUnits } from '@/stores/units-store';
 import { SITE_PRESETS } from '@/shared/engine/site-exposure';
 import type { SitePreset } from '@/shared/schemas/trip';
 import { fromFormValues, presetAt, stopFormSchema, toFormValues, type StopFormValues } from './stop-form-values';
+import { NearestTowns } from './nearest-towns';
+import { PlaceSearchField } from './place-search-field';
 import { ZonePicker } from './zone-picker';
 
-type Props = { tripId: string; record: StopRecord | null; fallbackZone: string; onDone: () => void };
+type Props = {
+  tripId: string;
+  record: StopRecord | null;
+  fallbackZone: string;
+  onDone: () => void;
+  /** A new stop's suggested arrival and departure (local "YYYY-MM-DD HH:MM"), after the last stop. */
+  newStopTimes?: { arrive: string; depart: string };
+};
 type NumName =
   | 'lat'
   | 'lon'
@@ -82,7 +91,7 @@ function Txt({
   inRow = false,
 }: {
   control: Control<StopFormValues>;
-  name: 'name' | 'timeZone' | 'arrive' | 'depart' | 'horizon' | 'notes';
+  name: 'timeZone' | 'arrive' | 'depart' | 'horizon' | 'notes';
   label: string;
   hint?: string;
   testID: string;
@@ -110,7 +119,7 @@ function Txt({
 }
 
 /** Add or edit a stop. The form keeps everything typed when the server refuses it. */
-export function StopForm({ tripId, record, fallbackZone, onDone }: Props) {
+export function StopForm({ tripId, record, fallbackZone, onDone, newStopTimes }: Props) {
   const units = useUnits();
   const save = useStopSaveMutation(tripId);
   const [formError, setFormError] = useState<string>();
@@ -118,11 +127,14 @@ export function StopForm({ tripId, record, fallbackZone, onDone }: Props) {
   const [conflict, setConflict] = useState<StopRecord | null>(null);
   const { control, handleSubmit, setError, setValue, getValues, reset, formState } = useForm<StopFormValues>({
     resolver: zodResolver(stopFormSchema),
-    defaultValues: toFormValues(record?.stop ?? null, record?.notes ?? '', units, fallbackZone),
+    defaultValues: {
+      ...toFormValues(record?.stop ?? null, record?.notes ?? '', units, fallbackZone),
+      ...(record ? {} : newStopTimes),
+    },
   });
-  const [exposureKind, hookupOn, generatorOn, timeZone, opennessPct, leafAreaIndex] = useWatch({
+  const [exposureKind, hookupOn, generatorOn, timeZone, opennessPct, leafAreaIndex, lat, lon] = useWatch({
     control,
-    name: ['exposureKind', 'hookupOn', 'generatorOn', 'timeZone', 'opennessPct', 'leafAreaIndex'],
+    name: ['exposureKind', 'hookupOn', 'generatorOn', 'timeZone', 'opennessPct', 'leafAreaIndex', 'lat', 'lon'],
   });
   const tUnit = temperature(0, units).unit;
   // Saves name the version the form was opened on, so someone else's change meanwhile is caught (409).
@@ -172,11 +184,31 @@ export function StopForm({ tripId, record, fallbackZone, onDone }: Props) {
   return (
     <View style={styles.form} testID="stop-form">
       {formError ? <Banner testID="stop-form-error" message={formError} /> : null}
-      <Txt control={control} name="name" label="Name" testID="stop-name" />
+      <Controller
+        control={control}
+        name="name"
+        render={({ field, fieldState }) => (
+          <PlaceSearchField
+            testID="stop-name"
+            value={field.value}
+            onChangeText={field.onChange}
+            onBlur={field.onBlur}
+            error={fieldState.error?.message}
+            onPick={(place) => {
+              const set = { shouldValidate: true, shouldDirty: true };
+              setValue('name', place.name, set);
+              setValue('lat', place.lat, set);
+              setValue('lon', place.lon, set);
+              if (place.timeZone) setValue('timeZone', place.timeZone, set);
+            }}
+          />
+        )}
+      />
       <View style={styles.grid}>
         <Num control={control} name="lat" label="Latitude" unit="°" testID="stop-lat" />
         <Num control={control} name="lon" label="Longitude" unit="°" testID="stop-lon" />
       </View>
+      <NearestTowns lat={lat} lon={lon} testID="stop-nearest-towns" />
       <View style={styles.zone}>
         <Txt
           control={control}

@@ -8,6 +8,7 @@ import { Text } from '@/components/ui/text';
 import type { TripSummary } from '@/shared/schemas/trip-summary';
 import { countNights, formatTripDates } from './format-trip-dates';
 import { SocGauge } from './soc-gauge';
+import { TripCardMap } from '@/components/route/route-mini-map';
 
 type Props = { trip: TripSummary; canDelete: boolean; onDuplicate: () => void; onDelete: () => void; busy: boolean };
 
@@ -35,6 +36,7 @@ export function TripCard({ trip, canDelete, onDuplicate, onDelete, busy }: Props
           </Text>
         </Pressable>
       </Link>
+      <TripCardMap trip={trip} />
       <View style={styles.meta}>
         {trip.lowestSocPct !== null && trip.lowestSocPct !== undefined ? (
           <SocGauge

@@ -122,6 +122,11 @@ export const stopRecord = (row: StopRow): StopRecord => ({
 export const driveFromRow = (row: DriveRow): Drive => ({
   hoursOnRoad: row.hoursOnRoad,
   vehicleCharging: row.vehicleCharging,
+  distanceKm: row.distanceKm,
+  distanceSource: row.distanceSource,
+  roadFactor: row.roadFactor,
+  averageSpeedKmh: row.averageSpeedKmh,
+  hoursSource: row.hoursSource,
 });
 export const driveRecord = (row: DriveRow): DriveRecord => ({
   id: row.id,

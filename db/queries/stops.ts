@@ -4,9 +4,10 @@ import type { Stop } from '@/shared/schemas/trip';
 import type { DbExecutor } from '../client';
 import { drives, type DriveRow } from '../schema/drives';
 import { stops, type StopRow } from '../schema/stops';
+import { newDrivePlan, planTripDrives } from './drive-plans';
 import { stopToColumns } from './mappers';
 
-/** Default for a new drive: two hours on the road, or the whole gap when it is shorter (common practice). */
+/** A new drive's hours until planTripDrives suggests them from its stops' distance (drive-plans.ts). */
 const DEFAULT_DRIVE_HOURS = 2;
 
 export function listStopRows(db: DbExecutor, tripId: string): StopRow[] {
@@ -116,6 +117,7 @@ function syncDrives(db: DbExecutor, tripId: string, ordered: StopRow[]): void {
           hoursOnRoad: Math.min(DEFAULT_DRIVE_HOURS, gap),
           vehicleCharging: true,
           version: 1,
+          ...newDrivePlan(db, tripId),
         })
         .run();
     } else if (drive.hoursOnRoad > gap) {
@@ -126,6 +128,7 @@ function syncDrives(db: DbExecutor, tripId: string, ordered: StopRow[]): void {
         .run();
     }
   }
+  planTripDrives(db, tripId, ordered);
 }
 
 /**

@@ -9,3 +9,4 @@ export * from './activity';
 export * from './preferences';
 export * from './invites';
 export * from './clubs';
+export * from './calendar-feeds';

@@ -1,6 +1,7 @@
 import type { Db } from '@/db/client';
 import { findTrip } from '@/db/queries/trips';
 import { BudgetBusyError, BudgetTooLargeError, type BudgetRunner } from './budget-pool';
+import type { SimulationResult } from '@/shared/engine/result-types';
 import type { BudgetFigures, TripBudget } from './compute';
 
 export type BudgetAnswer = { revision: number } & (
@@ -128,6 +129,20 @@ export function createBudgetService(
       const trip = findTrip(db, tripId);
       if (!trip) return undefined;
       return start(trip.id, trip.revision);
+    },
+
+    /**
+     * The simulated result for a file made from the trip (a calendar): null when there is none to give — no stops
+     * yet, a plan too large to compute, or every worker busy — so the file is still written, without budget lines.
+     */
+    async resultForFile(tripId: string): Promise<SimulationResult | null> {
+      const trip = findTrip(db, tripId);
+      if (!trip) return null;
+      const answer = await start(trip.id, trip.revision).catch((error: unknown) => {
+        if (error instanceof BudgetBusyError) return undefined;
+        throw error;
+      });
+      return answer?.kind === 'ok' ? (JSON.parse(answer.resultJson) as SimulationResult) : null;
     },
 
     /** The trips list's figures for a trip at `revision`, without waiting; starts a computation when they are old. */

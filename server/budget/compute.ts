@@ -4,11 +4,17 @@
 import { openReadOnlyDatabase, type Db, type DbExecutor } from '@/db/client';
 import { findTrip, loadTripDetail } from '@/db/queries/trips';
 import { simulateParsed } from '@/shared/engine';
+import { lowestChargeByStop } from '@/shared/route-charge';
 import { engineInputSchema, type EngineInputDraft } from '@/shared/schemas/engine-input';
 import { toEngineInput } from '@/shared/trip-to-engine-input';
 
-/** The figures the trips list shows of a budget. */
-export type BudgetFigures = { lowestSocPct: number; reservePct: number; flagCount: number };
+/** The figures the trips list shows of a budget, with the lowest charge at each stop for the card's small map. */
+export type BudgetFigures = {
+  lowestSocPct: number;
+  reservePct: number;
+  flagCount: number;
+  lowestByStop: (number | null)[];
+};
 
 export type BudgetOutcome =
   | { kind: 'ok'; resultJson: string; figures: BudgetFigures }
@@ -33,7 +39,12 @@ export function computeBudget(draft: EngineInputDraft | null): BudgetOutcome {
     return {
       kind: 'ok',
       resultJson: JSON.stringify(result),
-      figures: { lowestSocPct, reservePct, flagCount: result.flags.length },
+      figures: {
+        lowestSocPct,
+        reservePct,
+        flagCount: result.flags.length,
+        lowestByStop: lowestChargeByStop(result.ledger, parsed.data.trip.stops.length),
+      },
     };
   } catch (error) {
     // An engine fault is reported, not thrown: the pool keeps its worker and the server logs the message.

@@ -1,10 +1,12 @@
 import { and, eq } from 'drizzle-orm';
 import { Router } from 'express';
 import type { Db } from '@/db/client';
+import { gapHoursBetween } from '@/db/queries/drive-plans';
 import { driveRecord } from '@/db/queries/mappers';
 import { listStopRows } from '@/db/queries/stops';
 import { logActivity, touchTrip } from '@/db/queries/trips';
 import { drives } from '@/db/schema/drives';
+import { planDrive } from '@/shared/geo/drive-estimate';
 import { updateDriveRequestSchema } from '@/shared/schemas/api';
 import { conflict, notFound, unprocessable } from '../errors';
 import { idParam, requirePermission, tripAccess } from '../middleware/trip-access';
@@ -28,16 +30,32 @@ export function drivesRouter({ db, now }: { db: Db; now: () => Date }): Router {
       const stopRows = listStopRows(tx, tripId);
       const from = stopRows[current.position];
       const to = stopRows[current.position + 1];
-      const gapH = from && to ? (Date.parse(to.arriveAt) - Date.parse(from.departAt)) / 3_600_000 : 0;
-      if (drive.hoursOnRoad > gapH + 1e-9) {
+      const gapH = from && to ? gapHoursBetween(from, to) : 0;
+      // A client that sends only hours (or only a distance) has typed it: it stays as typed from then on.
+      const hoursSource =
+        drive.hoursSource ?? (drive.hoursOnRoad !== current.hoursOnRoad ? 'typed' : current.hoursSource);
+      const distanceSource =
+        drive.distanceSource ??
+        (drive.distanceKm !== undefined && drive.distanceKm !== current.distanceKm ? 'typed' : current.distanceSource);
+      const merged = {
+        hoursOnRoad: drive.hoursOnRoad,
+        vehicleCharging: drive.vehicleCharging,
+        distanceKm: drive.distanceKm === undefined ? current.distanceKm : drive.distanceKm,
+        distanceSource,
+        roadFactor: drive.roadFactor ?? current.roadFactor,
+        averageSpeedKmh: drive.averageSpeedKmh ?? current.averageSpeedKmh,
+        hoursSource,
+      };
+      if (hoursSource === 'typed' && drive.hoursOnRoad > gapH + 1e-9) {
         throw unprocessable(
           'drive.hoursOnRoad',
           `The drive cannot last longer than the ${gapH.toFixed(1)} h between leaving ${from?.name ?? 'the stop'} and reaching ${to?.name ?? 'the next'}.`,
         );
       }
+      const planned = from && to ? planDrive(merged, from, to, gapH) : merged;
       const row = tx
         .update(drives)
-        .set({ ...drive, version: version + 1 })
+        .set({ ...planned, version: version + 1 })
         .where(eq(drives.id, driveId))
         .returning()
         .get();

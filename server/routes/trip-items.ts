@@ -13,6 +13,7 @@ import { stopsRouter } from './stops';
 import { tripRigRouter } from './trip-rig';
 import { tripInvitesRouter } from './trip-invites';
 import { tripSharesRouter } from './trip-shares';
+import { tripExportsRouter } from './trip-exports';
 import type { Mailer } from '../mail/mailer';
 
 /** Everything under /api/trips/:tripId/… once the caller's role is known. */
@@ -37,6 +38,7 @@ export function tripItemsRouter(deps: TripItemsDeps): Router {
   router.use('/members', membersRouter(deps));
   router.use('/invites', tripInvitesRouter(deps));
   router.use('/shares', tripSharesRouter(deps));
+  router.use(tripExportsRouter(deps));
 
   router.get('/budget', async (req, res) => {
     let answer: BudgetAnswer | undefined;

@@ -25,6 +25,7 @@ import { LIMITS, tripDayCount } from '@/shared/schemas/limits';
 import { conflict, limitReached, notFound, unprocessable } from '../errors';
 import { currentUser } from '../middleware/require-session';
 import { loadTripAccess, requirePermission, tripAccess } from '../middleware/trip-access';
+import { routeForCard } from '../places/route-for-card';
 import { duplicateTrip } from '../trip-copy';
 import { tripItemsRouter, type TripItemsDeps } from './trip-items';
 
@@ -45,6 +46,7 @@ export function tripsRouter(deps: TripItemsDeps): Router {
         reservePct: figures?.reservePct ?? null,
         flagCount: figures?.flagCount ?? null,
         budgetStatus: status,
+        route: routeForCard(listStopRows(db, trip.id), figures?.lowestByStop ?? null),
       });
     });
     res.json({ trips: list });

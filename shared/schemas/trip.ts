@@ -10,6 +10,7 @@ import {
   timeZoneSchema,
 } from './common';
 import { LIMITS, fieldRule } from './limits';
+import { drivePlanShape } from './drive-plan';
 
 export const sitePresetSchema = z.enum(['open', 'light-cover', 'partial-shade', 'deep-forest']);
 export type SitePreset = z.infer<typeof sitePresetSchema>;
@@ -87,6 +88,7 @@ export type StopInput = z.input<typeof stopSchema>;
 export const driveSchema = z.object({
   hoursOnRoad: nonNegativeSchema.max(48),
   vehicleCharging: z.boolean().default(true),
+  ...drivePlanShape,
 });
 export type Drive = z.infer<typeof driveSchema>;
 

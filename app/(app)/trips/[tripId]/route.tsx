@@ -4,12 +4,12 @@ import { BasedOnBanner } from '@/components/trip/based-on-banner';
 import { useTripQuery } from '@/stores/queries/trips';
 
 export default function TripRouteRoute() {
-  const { tripId } = useLocalSearchParams<{ tripId: string }>();
+  const { tripId, stop } = useLocalSearchParams<{ tripId: string; stop?: string }>();
   const trip = useTripQuery(tripId);
   return trip.data ? (
     <>
       <BasedOnBanner detail={trip.data} />
-      <RouteScreen detail={trip.data} />
+      <RouteScreen detail={trip.data} initialStopId={stop} />
     </>
   ) : null;
 }

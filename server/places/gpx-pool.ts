@@ -1,0 +1,50 @@
+// One worker thread reads GPX files off the main thread (see gpx-worker.ts). The machine has few cores and the
+// budget engine needs them, so one thread, a short queue, and a time limit per file.
+import path from 'node:path';
+import { Piscina } from 'piscina';
+import type { GpxPreview } from '@/shared/schemas/gpx';
+import { HttpError } from '../errors';
+import type { GpxTask, GpxTaskResult } from './gpx-worker';
+
+const QUEUE_LIMIT = 4;
+const TIME_LIMIT_MS = 30_000;
+
+let pool: Piscina<GpxTask, GpxTaskResult> | null = null;
+
+function gpxPool(): Piscina<GpxTask, GpxTaskResult> {
+  pool ??= new Piscina<GpxTask, GpxTaskResult>({
+    filename: path.join(__dirname, 'gpx-worker.ts'),
+    // The worker is TypeScript: it loads through tsx, as the server itself does.
+    execArgv: [...process.execArgv.filter((arg) => !arg.startsWith('--inspect')), '--import', 'tsx'],
+    minThreads: 0,
+    maxThreads: 1,
+    maxQueue: QUEUE_LIMIT,
+    idleTimeout: 60_000,
+  });
+  return pool;
+}
+
+/** Reads and plans a GPX file in the worker; file problems become a 422 about the file. */
+export async function previewGpx(task: GpxTask): Promise<GpxPreview> {
+  let result: GpxTaskResult;
+  try {
+    result = await gpxPool().run(task, { signal: AbortSignal.timeout(TIME_LIMIT_MS) });
+  } catch (error) {
+    const name = (error as Error | undefined)?.name ?? '';
+    if (name === 'AbortError' || name === 'TimeoutError')
+      throw new HttpError(422, 'unprocessable', 'That file took too long to read. Export a simplified track.', {
+        file: ['That file took too long to read.'],
+      });
+    if (/queue is full/i.test((error as Error | undefined)?.message ?? ''))
+      throw new HttpError(503, 'rate_limited', 'Several files are being read just now. Try again in a moment.');
+    throw error;
+  }
+  if (!result.ok) throw new HttpError(422, 'unprocessable', result.message, { file: [result.message] });
+  return result.preview;
+}
+
+/** Stops the worker (tests and shutdown). */
+export async function closeGpxPool(): Promise<void> {
+  await pool?.destroy();
+  pool = null;
+}
