@@ -148,10 +148,13 @@ describe('drives sized from their distance', () => {
 
   it('when trips are listed, then each card carries its stops’ positions for its small map', async () => {
     const { agent, tripId } = await twoStopTrip();
+    // The list shows the figures last computed and never waits for them: the budget is computed first.
+    await agent.get(`/api/trips/${tripId}/budget`).expect(200);
     const { trips } = (await agent.get('/api/trips').expect(200)).body as { trips: TripSummary[] };
     const card = trips.find((t) => t.id === tripId);
     expect(card?.route?.map(({ lat, lon }) => ({ lat, lon }))).toEqual([lochside, pinewood]);
     // Each stop's lowest charge, none of them below the trip's lowest (which may fall on a drive).
+    expect(card?.budgetStatus).toBe('current');
     const lows = card?.route?.map((stop) => stop.lowestSocPct ?? NaN) ?? [];
     for (const low of lows) expect(low).toBeGreaterThanOrEqual(card?.lowestSocPct ?? Infinity);
     expect(Math.min(...lows)).toBeLessThanOrEqual(100);
