@@ -72,7 +72,8 @@ export default function RouteMapCanvas({
       onLayout={(e: LayoutChangeEvent) => setWidth(Math.round(e.nativeEvent.layout.width))}
     >
       {width > 0 ? (
-        <Svg width={width} height={height} role="img" accessibilityLabel={label}>
+        // Out of the flow: a drawing sized by the last layout must never hold its box wider than the card.
+        <Svg width={width} height={height} role="img" accessibilityLabel={label} style={StyleSheet.absoluteFill}>
           <Rect x={0} y={0} width={width} height={height} fill={colors.infoSoft} />
           {paths ? (
             <G>

@@ -148,7 +148,9 @@ describe('the cable check on the Rig tab', () => {
     await page.fill(byTestId('new-trip-name'), 'Cable weekend');
     await page.fill(byTestId('new-trip-startDate'), '2027-10-04');
     await page.fill(byTestId('new-trip-endDate'), '2027-10-06');
-    await page.fill(byTestId('new-trip-timeZone'), 'Europe/London');
+    await page.click(byTestId('new-trip-timeZone-change'));
+    await page.fill(byTestId('new-trip-timeZone-list-search'), 'London');
+    await page.click(byTestId('new-trip-timeZone-list-option-Europe/London'));
     await page.click(byTestId('new-trip-rig-preset:van-small'));
     await page.click(byTestId('new-trip-submit'));
     await page.waitForSelector(byTestId('route-screen'));
