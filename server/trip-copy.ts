@@ -7,6 +7,7 @@ import { drives } from '@/db/schema/drives';
 import { stops } from '@/db/schema/stops';
 import type { Rig } from '@/shared/schemas/rig';
 import { notFound } from './errors';
+import { ensureRoomForTrip } from './owner-limits';
 
 /**
  * Copies a trip with its rig, stops, drives, appliances and routines into a new trip owned by
@@ -23,6 +24,7 @@ export function duplicateTrip(
     const source = findTrip(tx, tripId);
     const sourceRig = findTripRig(tx, tripId);
     if (!source || !sourceRig) throw notFound('That trip was not found.');
+    ensureRoomForTrip(tx, ownerId);
     const copy = insertTrip(
       tx,
       {

@@ -8,6 +8,7 @@ import { replaceTripRigRequestSchema, saveTripRigRequestSchema, updateRigRequest
 import { notFound, unprocessable } from '../errors';
 import { requirePermission, tripAccess } from '../middleware/trip-access';
 import { unwrapWrite } from './write-result';
+import { ensureRoomForSavedRig } from '../owner-limits';
 
 export function tripRigRouter({ db, now }: { db: Db; now: () => Date }): Router {
   const router = Router({ mergeParams: true });
@@ -53,7 +54,10 @@ export function tripRigRouter({ db, now }: { db: Db; now: () => Date }): Router 
     const { name } = saveTripRigRequestSchema.parse(req.body);
     const tripRig = findTripRig(db, tripId);
     if (!tripRig) throw notFound('That trip has no rig.');
-    const row = insertRig(db, { ownerId: userId, tripId: null }, { ...rigFromRow(tripRig), name }, now());
+    const row = db.transaction((tx) => {
+      ensureRoomForSavedRig(tx, userId);
+      return insertRig(tx, { ownerId: userId, tripId: null }, { ...rigFromRow(tripRig), name }, now());
+    });
     res.status(201).json({ rig: rigRecord(row) });
   });
 
