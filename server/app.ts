@@ -51,6 +51,11 @@ export type AppConfig = {
   production?: boolean;
   /** Budgets run in worker threads; one that computes longer than timeLimitMs answers "too large to compute". */
   budget?: { timeLimitMs?: number; threads?: number };
+  /**
+   * Weather endpoints (null: that kind is not fetched) and the past years wanted per stop. Left out, no weather is
+   * fetched and every stop plans with its preset sky.
+   */
+  weather?: { archiveUrl: string | null; forecastUrl: string | null; years?: number };
   /** Invite e-mails one person may send per hour (trip and club together); tests lower it. */
   invitesPerHour?: number;
 };
