@@ -83,6 +83,7 @@ export async function main(): Promise<void> {
       void localSmtp?.close();
       void localWeather?.close();
       void app.locals.budgets.close();
+      app.locals.weather.close();
       db.$client.close();
       process.exit(0);
     });
