@@ -1,6 +1,8 @@
-import { and, asc, eq, inArray, lte, notInArray, or, sql } from 'drizzle-orm';
+import { and, asc, eq, gte, inArray, lte, notInArray, or, sql } from 'drizzle-orm';
+import { MAX_RECORD_YEARS, type EngineWeather, type HourlySky } from '@/shared/schemas/engine-weather';
+import { shiftDate, stopDates, weatherPlace, type StopPlaceAndTime } from '@/shared/weather-ranges';
 import type { DbExecutor } from '../client';
-import { weatherSeries, type WeatherSeriesRow } from '../schema';
+import { stops, trips, weatherSeries, type WeatherSeriesRow } from '../schema';
 
 export type SeriesKey = {
   latE1: number;
@@ -142,4 +144,100 @@ export function seriesData(db: DbExecutor, key: SeriesKey): Pick<WeatherSeriesRo
     .from(weatherSeries)
     .where(keyMatch(key))
     .get();
+}
+
+const HOUR_MS = 3_600_000;
+
+/** The trips with a stop on a 0.1° place: their budgets change when that place's weather arrives. */
+export function bumpTripsAt(db: DbExecutor, place: { latE1: number; lonE1: number }): void {
+  const rows = db
+    .select({ tripId: stops.tripId, lat: stops.lat, lon: stops.lon })
+    .from(stops)
+    .where(
+      and(
+        gte(stops.lat, (place.latE1 - 1) / 10),
+        lte(stops.lat, (place.latE1 + 1) / 10),
+        gte(stops.lon, (place.lonE1 - 1) / 10),
+        lte(stops.lon, (place.lonE1 + 1) / 10),
+      ),
+    )
+    .all();
+  const tripIds = [
+    ...new Set(
+      rows
+        .filter((r) => {
+          const p = weatherPlace(r.lat, r.lon);
+          return p.latE1 === place.latE1 && p.lonE1 === place.lonE1;
+        })
+        .map((r) => r.tripId),
+    ),
+  ];
+  if (tripIds.length > 0)
+    db.update(trips)
+      .set({ revision: sql`${trips.revision} + 1` })
+      .where(inArray(trips.id, tripIds))
+      .run();
+}
+
+/**
+ * The recorded years and forecasts held for a trip's stops, laid on the trip's calendar for the engine. Years line
+ * up by how far back they are from each stop's own dates, so a trip across New Year reads one winter; the most
+ * recent MAX_RECORD_YEARS are used. Every stop plans from the record where there is one.
+ */
+export function engineWeatherFor(db: DbExecutor, tripStops: readonly StopPlaceAndTime[]): EngineWeather | null {
+  if (tripStops.length === 0) return null;
+  const byShift = new Map<number, (HourlySky | null)[]>();
+  const forecast: (HourlySky | null)[] = [];
+  tripStops.forEach((stop, w) => {
+    const place = weatherPlace(stop.lat, stop.lon);
+    const dates = stopDates(stop);
+    const tripStartMs = Date.parse(`${dates.startDate}T00:00:00Z`) - HOUR_MS;
+    const rows = db
+      .select()
+      .from(weatherSeries)
+      .where(
+        and(
+          eq(weatherSeries.latE1, place.latE1),
+          eq(weatherSeries.lonE1, place.lonE1),
+          sql`${weatherSeries.ghiWm2} is not null`,
+        ),
+      )
+      .all();
+    const ownYear = Number(dates.startDate.slice(0, 4));
+    let freshest: WeatherSeriesRow | undefined;
+    for (const row of rows) {
+      if (!row.ghiWm2 || !row.tempC) continue;
+      if (row.source === 'forecast') {
+        const overlaps = row.startDate <= dates.endDate && row.endDate >= dates.startDate;
+        if (overlaps && (!freshest || (row.fetchedAt?.getTime() ?? 0) > (freshest.fetchedAt?.getTime() ?? 0)))
+          freshest = row;
+        continue;
+      }
+      const shift = ownYear - Number(row.startDate.slice(0, 4));
+      if (shift < 0 || shiftDate(dates.startDate, shift) !== row.startDate) continue;
+      if (shiftDate(dates.endDate, shift) !== row.endDate) continue;
+      const perStop = byShift.get(shift) ?? Array.from({ length: tripStops.length }, () => null);
+      perStop[w] = { startMs: tripStartMs, ghiWm2: row.ghiWm2, tempC: row.tempC };
+      byShift.set(shift, perStop);
+    }
+    forecast[w] =
+      freshest?.ghiWm2 && freshest.tempC
+        ? {
+            startMs: Date.parse(`${freshest.startDate}T00:00:00Z`) - HOUR_MS,
+            ghiWm2: freshest.ghiWm2,
+            tempC: freshest.tempC,
+          }
+        : null;
+  });
+  const firstYear = Number(stopDates(tripStops[0] as StopPlaceAndTime).startDate.slice(0, 4));
+  const years = [...byShift.entries()]
+    .sort((a, b) => a[0] - b[0])
+    .slice(0, MAX_RECORD_YEARS)
+    .map(([shift, perStop]) => ({ year: firstYear - shift, stops: perStop }));
+  if (years.length === 0 && forecast.every((f) => f === null)) return null;
+  return {
+    stops: tripStops.map(() => ({ source: 'record' as const, recordedTemperature: true })),
+    years,
+    forecast,
+  };
 }

@@ -1,5 +1,6 @@
 import type { Db } from '@/db/client';
 import {
+  bumpTripsAt,
   earliestQueuedAt,
   keyText,
   nextDueSeries,
@@ -99,7 +100,12 @@ export function createWeatherQueue(options: WeatherQueueOptions): WeatherQueue {
       if (!endpoint) throw new WeatherFetchError('refused', 'Fetching this kind of weather is turned off.');
       const got = await fetchHourlyWeather(endpoint, request, { timeoutMs: o.timeoutMs });
       checkCoverage(got, row);
-      if (!closed) storeSeries(db, row.id, { ghiWm2: got.ghiWm2, tempC: got.tempC }, new Date());
+      if (closed) return;
+      // The series and the budgets it changes, at once: every trip with a stop at that place computes again.
+      db.transaction((tx) => {
+        storeSeries(tx, row.id, { ghiWm2: got.ghiWm2, tempC: got.tempC }, new Date());
+        bumpTripsAt(tx, row);
+      });
     } catch (error) {
       if (closed) return;
       const refused = error instanceof WeatherFetchError && error.kind === 'refused';

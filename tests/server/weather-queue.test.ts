@@ -1,7 +1,11 @@
 import http from 'node:http';
 import type { AddressInfo } from 'node:net';
 import { afterAll, afterEach, beforeAll, describe, expect, it } from 'vitest';
+import { eq } from 'drizzle-orm';
+import { bumpTripsAt } from '@/db/queries/weather-series';
+import { trips } from '@/db/schema';
 import type { AppConfig } from '@/server/app';
+import { weatherPlace } from '@/shared/weather-ranges';
 import { startLocalWeather, type LocalWeather } from '@/server/weather/local-weather';
 import type { TripWeather } from '@/shared/schemas/weather';
 import { createTestApp, signUpAgent, type TestContext } from '../factories/test-app';
@@ -52,6 +56,22 @@ describe('weather records through the local fake', () => {
     expect((await weatherOf(agent, other.trip.id)).stops[0]).toMatchObject({ state: 'ready', yearsReady: 5 });
     await app.locals.weather.idle();
     expect(fake.requestCount()).toBe(asked);
+  });
+
+  it("when a stop's record is in, then its budget runs once per recorded year and says how many held", async () => {
+    const { app } = appWith({ archiveUrl: fake.archiveUrl, forecastUrl: fake.forecastUrl, years: 5, queue: FAST });
+    const { agent } = await signUpAgent(app);
+    const trip = await createTrip(agent);
+    await addStop(agent, trip.trip.id);
+    await addAppliance(agent, trip.trip.id);
+    await app.locals.weather.idle();
+    const after = await agent.get(`/api/trips/${trip.trip.id}/budget`).expect(200);
+    expect(after.body.result.chance).toMatchObject({ years: 5 });
+    expect(after.body.result.chance.byYear.map((y: { year: number }) => y.year).sort()).toEqual([
+      2022, 2023, 2024, 2025, 2026,
+    ]);
+    expect(after.body.result.skies).toEqual({ sources: ['record'], assumedStops: 0 });
+    expect(after.body.result.socBand.p10).toHaveLength(after.body.result.ledger.length);
   });
 
   it('when a stop is inside the forecast horizon, then its forecast days are fetched too', async () => {
@@ -137,7 +157,8 @@ describe('weather records from a broken service', () => {
     expect((await weatherOf(agent, trip.trip.id)).stops[0]).toMatchObject({ state: 'unavailable', yearsReady: 0 });
     const budget = await agent.get(`/api/trips/${trip.trip.id}/budget`);
     expect(budget.status).toBe(200);
-    expect(budget.body.result).not.toBeNull();
+    expect(budget.body.result.chance).toBeNull();
+    expect(budget.body.result.skies).toEqual({ sources: ['preset'], assumedStops: 1 });
   });
 
   it('when a fetch fails once, then it is retried after a wait and the record completes', async () => {
@@ -175,6 +196,21 @@ describe('weather records from a broken service', () => {
     const gaps = starts.slice(1).map((s, i) => s.at - (starts[i]?.at ?? 0));
     // 10 a second: 100 ms apart, less a few ms of timer slack.
     for (const gap of gaps) expect(gap).toBeGreaterThanOrEqual(95);
+  });
+
+  it("when a place's weather arrives, then the budgets of trips stopping there, and only those, are computed again", async () => {
+    const { app, db } = appWith({ archiveUrl: null, forecastUrl: null });
+    const { agent } = await signUpAgent(app);
+    const here = await createTrip(agent);
+    const elsewhere = await createTrip(agent, { name: 'Elsewhere' });
+    const stop = stopOnNextFreeDay();
+    await addStop(agent, here.trip.id, stop);
+    await addStop(agent, elsewhere.trip.id, { ...stop, lat: stop.lat + 1 });
+    const revision = (id: string) => db.select().from(trips).where(eq(trips.id, id)).get()?.revision ?? 0;
+    const [hereBefore, elsewhereBefore] = [revision(here.trip.id), revision(elsewhere.trip.id)];
+    bumpTripsAt(db, weatherPlace(stop.lat + 0.03, stop.lon));
+    expect(revision(here.trip.id)).toBe(hereBefore + 1);
+    expect(revision(elsewhere.trip.id)).toBe(elsewhereBefore);
   });
 
   it('when the weather route is asked for a trip one cannot see, then it answers 404 with the stable error', async () => {
