@@ -193,9 +193,9 @@ describe('weather records from a broken service', () => {
     await addStop(agent, trip.trip.id);
     await app.locals.weather.idle();
     expect(starts.length).toBe(6);
-    const gaps = starts.slice(1).map((s, i) => s.at - (starts[i]?.at ?? 0));
-    // 10 a second: 100 ms apart, less a few ms of timer slack.
-    for (const gap of gaps) expect(gap).toBeGreaterThanOrEqual(95);
+    // 10 a second: the k-th request starts at least k × 100 ms after the first, less arrival jitter on a busy machine.
+    const first = starts[0]?.at ?? 0;
+    starts.forEach((s, k) => expect(s.at - first).toBeGreaterThanOrEqual(k * 100 - 25));
   });
 
   it("when a place's weather arrives, then the budgets of trips stopping there, and only those, are computed again", async () => {
