@@ -34,6 +34,19 @@ import { trustedOrigins } from './trusted-origins';
 import { placesRouter } from './routes/places';
 import { calendarFeedRouter } from './routes/calendar-feed';
 import { webStatic } from './web-static';
+import { createWeatherQueue, type WeatherQueue, type WeatherQueueOptions } from './weather/weather-queue';
+
+type QueueTuning =
+  | 'requestsPerSecond'
+  | 'concurrency'
+  | 'timeoutMs'
+  | 'maxAttempts'
+  | 'backoffMs'
+  | 'maxBackoffMs'
+  | 'restAfterGiveUpMs';
+
+/** Past years fetched per stop when the configuration says nothing. */
+const DEFAULT_WEATHER_YEARS = 20;
 import packageJson from '../package.json';
 
 export type AppConfig = {
@@ -51,6 +64,17 @@ export type AppConfig = {
   production?: boolean;
   /** Budgets run in worker threads; one that computes longer than timeLimitMs answers "too large to compute". */
   budget?: { timeLimitMs?: number; threads?: number };
+  /**
+   * Weather endpoints (null: that kind is not fetched) and the past years wanted per stop. Left out, no weather is
+   * fetched and every stop plans with its preset sky.
+   */
+  weather?: {
+    archiveUrl: string | null;
+    forecastUrl: string | null;
+    years?: number;
+    /** The fetcher's pace, retries and time limit (tests shorten them). */
+    queue?: Partial<Pick<WeatherQueueOptions, QueueTuning>>;
+  };
   /** Invite e-mails one person may send per hour (trip and club together); tests lower it. */
   invitesPerHour?: number;
 };
@@ -67,8 +91,8 @@ export type AppDeps = {
   budgetRunner?: BudgetRunner;
 };
 
-/** `budgets.close()` stops the budget workers: call it when the app is done with. */
-export type TrailtallyApp = Express & { locals: { auth: Auth; budgets: BudgetService } };
+/** `budgets.close()` stops the budget workers and `weather.close()` the weather fetcher: call it when the app is done with. */
+export type TrailtallyApp = Express & { locals: { auth: Auth; budgets: BudgetService; weather: WeatherQueue } };
 
 const JSON_BODY_LIMIT = '100kb';
 
@@ -137,13 +161,22 @@ export function createApp(deps: AppDeps): TrailtallyApp {
     deps.logger?.error({ err, tripId }, 'budget failed'),
   );
   app.locals.budgets = budgets;
+  const weather = createWeatherQueue({
+    db,
+    endpoints: { archiveUrl: config.weather?.archiveUrl ?? null, forecastUrl: config.weather?.forecastUrl ?? null },
+    years: config.weather?.years ?? DEFAULT_WEATHER_YEARS,
+    today: deps.now,
+    ...config.weather?.queue,
+    onError: (err) => deps.logger?.warn({ err }, 'weather fetch failed'),
+  });
+  app.locals.weather = weather;
   const signedIn = requireSession(auth);
   const invites = {
     mailer: deps.mailer,
     publicUrl: config.publicUrl,
     invitesPerHour: config.invitesPerHour ?? INVITES_PER_HOUR,
   };
-  app.use('/api/trips', signedIn, tripsRouter({ db, now: deps.now, budgets, ...invites }));
+  app.use('/api/trips', signedIn, tripsRouter({ db, now: deps.now, budgets, weather, ...invites }));
   app.use('/api/invites', inviteLinksRouter({ db, now: deps.now, auth }));
   app.use('/api/clubs', signedIn, clubsRouter({ db, now: deps.now, ...invites }));
   app.use('/api/club-invites', clubInviteLinksRouter({ db, now: deps.now, auth }));

@@ -5,6 +5,8 @@ import { z } from 'zod';
 import { OWNER_ONLY_FILE, ensurePrivateFolder, tightenIfPresent } from '../db/private-files';
 import { trustProxySchema } from './trust-proxy';
 
+const weatherUrlSchema = z.union([z.literal('off'), z.url({ protocol: /^https?$/ })]).optional();
+
 // The only place that reads process.env: everything else receives a checked Env.
 const envSchema = z.object({
   NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
@@ -22,6 +24,16 @@ const envSchema = z.object({
   SMTP_URL: z.url().optional(),
   /** Port for the local SMTP fake; 0 picks a free one. */
   SMTP_FAKE_PORT: z.coerce.number().int().min(0).max(65535).default(0),
+  /**
+   * The hourly historical-weather archive and the hourly forecast (their full endpoint URLs), or `off` to fetch no
+   * weather. Unset: the public services in production, a local weather fake on loopback otherwise.
+   */
+  WEATHER_API_URL: weatherUrlSchema,
+  WEATHER_FORECAST_URL: weatherUrlSchema,
+  /** Port for the local weather fake; 0 picks a free one. */
+  WEATHER_FAKE_PORT: z.coerce.number().int().min(0).max(65535).default(0),
+  /** Past years of weather fetched for each stop. */
+  WEATHER_YEARS: z.coerce.number().int().min(1).max(40).default(20),
   /** Longest one budget may compute before it is stopped and answered "too large to compute"; unset, 5 s. */
   BUDGET_TIME_LIMIT_MS: z.coerce.number().int().min(100).max(600_000).optional(),
   /** Worker threads that compute budgets; unset, one fewer than the cores (1 to 4). */

@@ -9,6 +9,8 @@ import { startLocalSmtp, type LocalSmtp } from './mail/local-smtp';
 import { createSmtpMailer } from './mail/mailer';
 import { warmBasemap } from './places/basemap';
 import { warmGazetteer } from './places/gazetteer';
+import { needsLocalWeather, weatherEndpoints } from './weather/endpoints';
+import { startLocalWeather, type LocalWeather } from './weather/local-weather';
 
 /** Starts the server: migrate, seed demo data on a first start, listen, and close cleanly on signals. */
 export async function main(): Promise<void> {
@@ -27,6 +29,14 @@ export async function main(): Promise<void> {
       `No SMTP_URL set: e-mail is kept by a local SMTP fake on ${localSmtp.url}${env.NODE_ENV === 'production' ? '' : ' (see /outbox)'}`,
     );
   }
+  // Likewise weather: without the services configured, development runs a local fake with synthetic weather.
+  const production = env.NODE_ENV === 'production';
+  let localWeather: LocalWeather | undefined;
+  if (needsLocalWeather(env, production)) {
+    localWeather = await startLocalWeather(env.WEATHER_FAKE_PORT);
+    console.log(`No WEATHER_API_URL set: synthetic weather from a local fake at ${localWeather.archiveUrl}`);
+  }
+  const weather = weatherEndpoints(env, production, localWeather);
   const app = createApp({
     db,
     mailer: createSmtpMailer(env.SMTP_URL ?? localSmtp?.url ?? ''),
@@ -39,7 +49,8 @@ export async function main(): Promise<void> {
       devWebOrigin: env.DEV_WEB_ORIGIN,
       webDir: env.WEB_DIR,
       requireEmailVerification: env.REQUIRE_EMAIL_VERIFICATION,
-      production: env.NODE_ENV === 'production',
+      production,
+      weather: { ...weather, years: env.WEATHER_YEARS },
       budget: { timeLimitMs: env.BUDGET_TIME_LIMIT_MS, threads: env.BUDGET_WORKERS },
       trustProxy: env.TRUST_PROXY,
     },
@@ -70,7 +81,9 @@ export async function main(): Promise<void> {
     console.log(`${signal} received, closing…`);
     server.close(() => {
       void localSmtp?.close();
+      void localWeather?.close();
       void app.locals.budgets.close();
+      app.locals.weather.close();
       db.$client.close();
       process.exit(0);
     });

@@ -9,12 +9,14 @@ import { space } from '@/components/theme/tokens';
 import type { TripDetail } from '@/shared/schemas/api';
 import { can } from '@/shared/schemas/roles';
 import { useUnits } from '@/stores/units-store';
+import { useTripWeatherQuery } from '@/stores/queries/weather';
 import { clearWhatIf } from '@/stores/what-if-store';
 import { editForFix } from './apply-fix';
 import { DayBars } from './day-bars';
 import { EstimateCaution } from './estimate-caution';
 import { FlagList } from './flag-list';
 import { HeadlineFigures } from './headline-figures';
+import { PlanChance } from './plan-chance';
 import { SocChartCard } from './soc-chart-card';
 import { useBudgetView } from './use-budget-view';
 import { editsForWhatIf, WhatIfPanel } from './what-if-panel';
@@ -22,6 +24,8 @@ import { BudgetRouteMap } from '@/components/route/route-mini-map';
 
 export function BudgetScreen({ detail }: { detail: TripDetail }) {
   const units = useUnits();
+  // Watches the stops' weather records: the budget is fetched again as they arrive.
+  useTripWeatherQuery(detail.trip.id);
   const view = useBudgetView(detail);
   const { apply, busy } = useApplyEdit(detail.trip.id);
   const canEdit = can(detail.trip.role, 'editTrip');
@@ -76,6 +80,7 @@ export function BudgetScreen({ detail }: { detail: TripDetail }) {
           message="Showing a what-if: these figures are not saved. Keep the change below, or discard it."
         />
       ) : null}
+      <PlanChance result={result} stopCount={detail.stops.length} />
       <HeadlineFigures headline={result.headline} units={units} />
       <Panes
         main={

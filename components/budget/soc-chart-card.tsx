@@ -105,8 +105,11 @@ export function SocChartCard({ result, stops }: Props) {
         State of charge
       </Text>
       <View style={styles.legend}>
-        <Legend color={colors.pine} label="Planned sky" />
-        <Legend color={colors.sunlit} label="Better to worse sky" />
+        <Legend color={colors.pine} label={result.socBand ? 'Median past year' : 'Planned sky'} />
+        <Legend
+          color={colors.sunlit}
+          label={result.socBand ? '1 in 10 to 9 in 10 past years' : 'Better to worse sky'}
+        />
         <Legend color={colors.ember} label="Reserve" mark="dashed" />
         <Legend color={colors.lake} label="Arrive at stop" mark="dashed" />
         <Legend color={colors.ember} label="Lowest point" mark="ring" />

@@ -45,11 +45,13 @@ export function flagMarks(flags: Flag[], utcs: number[]): FlagMark[] {
 
 export function socSeries(result: SimulationResult): SocSeries {
   const band = result.band;
+  // On recorded years the band is their 10th to 90th percentile, hour by hour; else one preset better and worse.
+  const years = result.socBand as SimulationResult['socBand'] | undefined;
   const points = result.ledger.map((row, i) => ({
     x: i,
     soc: row.socPct,
-    better: band?.better.socPct[i] ?? row.socPct,
-    worse: band?.worse.socPct[i] ?? row.socPct,
+    better: years?.p90[i] ?? band?.better.socPct[i] ?? row.socPct,
+    worse: years?.p10[i] ?? band?.worse.socPct[i] ?? row.socPct,
   }));
   const stops: StopMark[] = [];
   let lastStop = -1;

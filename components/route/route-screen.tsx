@@ -17,6 +17,8 @@ import { ApiError } from '@/stores/queries/api-client';
 import { useStopDeleteMutation, useStopsReorderMutation } from '@/stores/queries/route';
 import { showToast } from '@/stores/toast-store';
 import { useUnits } from '@/stores/units-store';
+import { useTripWeatherQuery } from '@/stores/queries/weather';
+import { stopSkyText } from '@/components/budget/plan-chance-text';
 import { DriveRow } from './drive-row';
 import { nextStopTimes } from './next-stop-times';
 import { RouteMapCard } from './route-map-card';
@@ -47,6 +49,7 @@ type Editing = { kind: 'stop'; id: string } | { kind: 'new' } | null;
 export function RouteScreen({ detail, initialStopId }: { detail: TripDetail; initialStopId?: string }) {
   const wide = useIsWide();
   const units = useUnits();
+  const weather = useTripWeatherQuery(detail.trip.id);
   const canEdit = can(detail.trip.role, 'editTrip');
   const [editing, setEditing] = useState<Editing>(initialStopId ? { kind: 'stop', id: initialStopId } : null);
   const [confirmRemove, setConfirmRemove] = useState(false);
@@ -88,6 +91,12 @@ export function RouteScreen({ detail, initialStopId }: { detail: TripDetail; ini
           {exposureText(s.exposure)} · {SKY[s.skyOutlook]} ·{' '}
           {s.hookup ? `hookup ${s.hookup.amps} A ${s.hookup.volts} V` : 'no hookup'} ·{' '}
           {temperature(s.lowC, units).value}–{temperature(s.highC, units).value} {temperature(0, units).unit}
+        </Text>
+        <Text variant="caption" color="inkSoft" testID={`stop-${i}-sky`}>
+          {stopSkyText(
+            weather.data?.stops.find((w) => w.stopId === record.id),
+            (SKY[s.skyOutlook] ?? s.skyOutlook).toLowerCase(),
+          )}
         </Text>
         {canEdit ? (
           <View style={styles.actions}>

@@ -3,6 +3,7 @@
 // serialises a large plan or result.
 import { openReadOnlyDatabase, type Db, type DbExecutor } from '@/db/client';
 import { findTrip, loadTripDetail } from '@/db/queries/trips';
+import { engineWeatherFor } from '@/db/queries/weather-series';
 import { simulateParsed } from '@/shared/engine';
 import { lowestChargeByStop } from '@/shared/route-charge';
 import { engineInputSchema, type EngineInputDraft } from '@/shared/schemas/engine-input';
@@ -59,7 +60,14 @@ export function computeTripBudget(db: DbExecutor, tripId: string): TripBudget | 
     (tx) => {
       const trip = findTrip(tx, tripId);
       const detail = trip ? loadTripDetail(tx, tripId, 'viewer') : undefined;
-      return trip && detail ? { revision: trip.revision, draft: toEngineInput(detail) } : undefined;
+      if (!trip || !detail) return undefined;
+      const draft = toEngineInput(detail);
+      // The weather held for the stops' places and dates: the record's years and any forecast.
+      const weather = engineWeatherFor(
+        tx,
+        detail.stops.map((record) => record.stop),
+      );
+      return { revision: trip.revision, draft: draft && weather ? { ...draft, weather } : draft };
     },
     { behavior: 'deferred' },
   );

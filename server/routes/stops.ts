@@ -11,8 +11,9 @@ import { LIMITS } from '@/shared/schemas/limits';
 import { conflict, HttpError, limitReached, notFound, unprocessable } from '../errors';
 import { idParam, requirePermission, tripAccess } from '../middleware/trip-access';
 import { unwrapWrite } from './write-result';
+import type { WeatherQueue } from '../weather/weather-queue';
 
-type Deps = { db: Db; now: () => Date };
+type Deps = { db: Db; now: () => Date; weather: WeatherQueue };
 
 function assertFits(db: DbExecutor, tripId: string, stop: Stop, exceptStopId?: string): void {
   const trip = findTrip(db, tripId);
@@ -22,9 +23,11 @@ function assertFits(db: DbExecutor, tripId: string, stop: Stop, exceptStopId?: s
   if (breach) throw unprocessable(breach.field, breach.message);
 }
 
-export function stopsRouter({ db, now }: Deps): Router {
+export function stopsRouter({ db, now, weather }: Deps): Router {
   const router = Router({ mergeParams: true });
   router.use(requirePermission('editTrip'));
+  // A saved stop's weather is fetched in the background; it never holds up the save.
+  const queueWeather = (tripId: string) => weather.want(listStopRows(db, tripId));
 
   router.post('/', (req, res) => {
     const { tripId, userId } = tripAccess(res);
@@ -39,6 +42,7 @@ export function stopsRouter({ db, now }: Deps): Router {
       return inserted;
     });
     res.status(201).json(stopRecord(row));
+    queueWeather(tripId);
   });
 
   router.post('/reorder', (req, res) => {
@@ -66,6 +70,7 @@ export function stopsRouter({ db, now }: Deps): Router {
       logActivity(tx, { tripId, userId, summary: 'reordered the stops', at: now() });
     });
     res.json(loadTripDetail(db, tripId, role));
+    queueWeather(tripId);
   });
 
   router.patch('/:stopId', (req, res) => {
@@ -82,6 +87,7 @@ export function stopsRouter({ db, now }: Deps): Router {
       return updated;
     });
     res.json(record);
+    queueWeather(tripId);
   });
 
   router.delete('/:stopId', (req, res) => {

@@ -15,6 +15,8 @@ import { tripInvitesRouter } from './trip-invites';
 import { tripSharesRouter } from './trip-shares';
 import { tripExportsRouter } from './trip-exports';
 import type { Mailer } from '../mail/mailer';
+import type { WeatherQueue } from '../weather/weather-queue';
+import { listStopRows } from '@/db/queries/stops';
 
 /** Everything under /api/trips/:tripId/… once the caller's role is known. */
 export type TripItemsDeps = {
@@ -24,6 +26,7 @@ export type TripItemsDeps = {
   mailer: Mailer;
   publicUrl: string;
   invitesPerHour: number;
+  weather: WeatherQueue;
 };
 
 /** Anything shaped like an e-mail address: never shown to someone who reads the trip through a club. */
@@ -71,6 +74,13 @@ export function tripItemsRouter(deps: TripItemsDeps): Router {
     }
     // The worker handed the result over as JSON already: it is sent as it is, never parsed or walked here.
     res.type('json').send(`{"version":${answer.revision},"result":${answer.resultJson}}`);
+  });
+
+  // Where each stop's weather record stands; asking also queues whatever is missing.
+  router.get('/weather', (_req, res) => {
+    const stops = listStopRows(deps.db, tripAccess(res).tripId);
+    res.setHeader('Cache-Control', 'private, no-store');
+    res.json({ stops: deps.weather.statusFor(stops) });
   });
 
   router.get('/activity', (_req, res) => {

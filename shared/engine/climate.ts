@@ -51,10 +51,11 @@ export function climateModel(p: Prepared): CabinModel {
 }
 
 /**
- * The step loads under a sky whose solar gain into the cabin is cabinSolarW (W, step mean). The fixed loads are the
+ * The step loads under a sky whose solar gain into the cabin is cabinSolarW (W, step mean) and whose outside air is
+ * ambientC (°C, step mean; the stops' low/high curve unless a record replaces it). The fixed loads are the
  * precomputation's; with no thermostat-run appliance they are used as they are.
  */
-export function climateLoads(p: Prepared, cabinSolarW: Float64Array): StepLoads {
+export function climateLoads(p: Prepared, cabinSolarW: Float64Array, ambientC = p.ambientC): StepLoads {
   const cabin = climateModel(p);
   const n = p.n;
   const units = p.thermostats;
@@ -99,7 +100,7 @@ export function climateLoads(p: Prepared, cabinSolarW: Float64Array): StepLoads 
   for (let i = 0; i < n; i++) {
     const dtH = p.stepH[i] ?? 1;
     const gainsW = (cabinSolarW[i] ?? 0) + (p.internalGainW[i] ?? 0) + cabin.peopleW;
-    let air = cabin.floatC(p.ambientC[i] ?? 15, gainsW);
+    let air = cabin.floatC(ambientC[i] ?? 15, gainsW);
     for (const u of plans) {
       const active = u.active[i] ?? 0;
       let runShare = 0;
@@ -137,6 +138,6 @@ export function climateLoads(p: Prepared, cabinSolarW: Float64Array): StepLoads 
     heavy,
     cabinC,
     thermostatRun,
-    battery: batteryClimate(b.chemistry, b.heatedSpace, cabinC, p.ambientC),
+    battery: batteryClimate(b.chemistry, b.heatedSpace, cabinC, ambientC),
   };
 }

@@ -119,10 +119,35 @@ export type Flag = {
 
 export type BandRun = { skyShift: -1 | 1; socPct: number[]; lowestSocPct: number };
 
+/** One recorded year's run: the year of the record and the trip's lowest charge in it. */
+export type YearLow = { year: number; lowestSocPct: number };
+
+/** The chance the plan holds: the trip run once per recorded year. */
+export type PlanChance = {
+  /** Years run, and in how many the lowest charge stayed at or above the reserve. */
+  years: number;
+  held: number;
+  /** The median year (the planned run the ledger shows), a bad year (1 in 10) and the worst year. */
+  median: YearLow;
+  bad: YearLow;
+  worst: YearLow;
+  /** Every year, lowest charge first. */
+  byYear: YearLow[];
+};
+
+/** Where each stop's sky came from in this budget, and how many stops plan on an assumed (preset) sky. */
+export type SkySummary = { sources: ('record' | 'forecast' | 'preset')[]; assumedStops: number };
+
 export type SimulationResult = {
   ledger: LedgerRow[];
   days: DaySheet[];
   headline: Headline;
   flags: Flag[];
+  /** One preset level better and worse; null when the plan runs on recorded years (socBand replaces it). */
   band: { better: BandRun; worse: BandRun } | null;
+  /** The chance the plan holds; null when no stop has a record. */
+  chance: PlanChance | null;
+  /** The 10th and 90th percentile of state of charge, step by step, over the recorded years. */
+  socBand: { p10: number[]; p90: number[] } | null;
+  skies: SkySummary;
 };

@@ -1,5 +1,6 @@
 // simulateTrip: validate the input, precompute the trip once, walk the battery hour by hour under the planned
-// sky (full ledger) and, together, under one sky level better and one worse (state of charge only).
+// sky (full ledger) and, together, under one sky level better and one worse (state of charge only). With recorded
+// years, the trip is walked once per year (record-years.ts) and the planned run is the median year.
 import { engineInputSchema, type EngineInput, type EngineInputDraft } from '../schemas/engine-input';
 import { CHEMISTRY } from './battery';
 import { climateLoads, type StepLoads } from './climate';
@@ -8,6 +9,8 @@ import { buildFlags } from './flags';
 import { fuelUnit } from './fuel';
 import { prepare, type Prepared } from './prepare';
 import type { BandRun, DaySheet, Headline, LedgerRow, SimulationResult } from './result-types';
+import { runRecordYears } from './record-years';
+import { effectiveSources, seriesForRun, stepSky, type StepSky } from './recorded-sky';
 import { solarSeries, type SolarSeries } from './solar';
 import { localLabel, utcIsoString } from './time-grid';
 import { generatorPlanFor, newLedger, walk, type LedgerColumns, type Scenario, type WalkResult } from './walk';
@@ -21,21 +24,27 @@ export function capacityWhOf(input: EngineInput): number {
   return input.rig.battery.capacityAh * input.rig.battery.nominalV;
 }
 
-export function plannedScenario(p: Prepared, solar: SolarSeries): Scenario {
+export function plannedScenario(p: Prepared, solar: SolarSeries, ambientC = p.ambientC): Scenario {
   return {
     solarW: solar.availableW,
     solarScale: 1,
     capacityWh: capacityWhOf(p.input),
     hookupW: p.hookupW,
     generator: generatorPlanFor(p),
-    loads: climateLoads(p, solar.cabinSolarW),
+    loads: climateLoads(p, solar.cabinSolarW, ambientC),
   };
 }
 
-function ledgerRows(p: Prepared, l: LedgerColumns, solar: SolarSeries, loads: StepLoads): LedgerRow[] {
+function ledgerRows(
+  p: Prepared,
+  l: LedgerColumns,
+  solar: SolarSeries,
+  loads: StepLoads,
+  ambientC: Float64Array,
+): LedgerRow[] {
   const rows: LedgerRow[] = new Array<LedgerRow>(p.n);
   // Columns read into locals once: the loop builds one object per hour and nothing else.
-  const { stepH, sunAltMid, ambientC, startMs, offsetMin } = p;
+  const { stepH, sunAltMid, startMs, offsetMin } = p;
   const poa = solar.poaWm2;
   const {
     solarAvailableWh,
@@ -195,21 +204,46 @@ function bandRun(p: Prepared, shift: -1 | 1): BandRun {
   return { skyShift: shift, socPct, lowestSocPct: r.lowestSocPct };
 }
 
+/** The planned run's scenario under a sky: the preset's when there is no recorded or forecast one. */
+function scenarioUnder(p: Prepared, sky: StepSky | undefined): { solar: SolarSeries; scenario: Scenario } {
+  const solar = solarSeries(p, 0, sky);
+  return { solar, scenario: plannedScenario(p, solar, sky?.ambientC) };
+}
+
 /** Simulate a validated input (no parsing); exposed for callers that already hold an EngineInput. */
 export function simulateParsed(input: EngineInput): SimulationResult {
   const p = prepare(input);
-  const solar = solarSeries(p, 0);
+  const weather = input.weather;
+  const sources = effectiveSources(weather, input.trip.stops.length);
+  const reservePct = reservePctOf(input);
+  // With a record, the trip runs once per recorded year and the planned run is the median year's.
+  const years =
+    weather && weather.years.length > 0
+      ? runRecordYears(p, weather, reservePct, (sky) => walk(p, scenarioUnder(p, sky).scenario, null))
+      : undefined;
+  const forecastOnly =
+    weather && !years && sources.includes('forecast')
+      ? stepSky(
+          p,
+          seriesForRun(weather, null),
+          weather.stops.map((s) => s.recordedTemperature),
+        )
+      : undefined;
+  const sky = years?.medianSky ?? forecastOnly;
+  const { solar, scenario: planned } = scenarioUnder(p, sky);
   const l = newLedger(p.n);
-  const planned = plannedScenario(p, solar);
   const r = walk(p, planned, l);
   const loads = planned.loads;
-  const flags = buildFlags({ p, l, loads, capacityWh: capacityWhOf(input), reservePct: reservePctOf(input) });
+  const flags = buildFlags({ p, l, loads, capacityWh: capacityWhOf(input), reservePct });
   return {
-    ledger: ledgerRows(p, l, solar, loads),
+    ledger: ledgerRows(p, l, solar, loads, sky?.ambientC ?? p.ambientC),
     days: daySheets(p, l),
     headline: headline(p, l, r),
     flags,
-    band: input.options.skyBand ? { better: bandRun(p, -1), worse: bandRun(p, 1) } : null,
+    band: input.options.skyBand && !years ? { better: bandRun(p, -1), worse: bandRun(p, 1) } : null,
+    chance: years?.chance ?? null,
+    socBand: years?.socBand ?? null,
+    skies: { sources, assumedStops: sources.filter((s) => s === 'preset').length },
   };
 }
 

@@ -11,6 +11,7 @@ import { arrayOutput, controllerLimitW, type ArrayOutput } from './charge-contro
 import { erbsSplitter, type Split } from './decomposition';
 import { glassOf } from './iam';
 import type { Prepared } from './prepare';
+import type { StepSky } from './recorded-sky';
 import { cellTemperatureOf } from './pv-module';
 import { beamFactor, diffuseFactor } from './site-exposure';
 import { shiftSky, SKY_CLEARNESS } from './sky-outlook';
@@ -24,6 +25,9 @@ export type SolarSeries = {
   /** Solar gain into the cabin through its roof, walls and windows, W (step average). */
   cabinSolarW: Float64Array;
 };
+
+/** Glass that passes everything: the check that leaves incidence losses out. */
+const clearGlass = (beam: number, sky: number, ground: number): number => beam + sky + ground;
 
 /** One array's chain of models, each an instance built once for the array. */
 type ArrayModel = {
@@ -59,7 +63,7 @@ function arrayModels(p: Prepared): { arrays: ArrayModel[]; capW: number } {
     const tilt = a.mounting === 'flat' ? 0 : a.tiltDeg;
     return {
       transpose: surfaceTransposer(tilt, rho),
-      glass: glassOf(tilt),
+      glass: p.input.options.incidenceLosses ? glassOf(tilt) : clearGlass,
       cellC: cellTemperatureOf(a.noctC, a.fit),
       output: ctrl ? arrayOutput(ctrl, a, chargeV) : () => 0,
     };
@@ -107,20 +111,25 @@ function geometry(p: Prepared): Geometry {
   return g;
 }
 
-/** skyShift: 0 the planned sky, −1 one level better, +1 one level worse. */
-export function solarSeries(p: Prepared, skyShift: number): SolarSeries {
+/**
+ * skyShift: 0 the planned sky, −1 one level better, +1 one level worse. sky: a recorded or forecast sky, whose
+ * steps with a clearness replace the preset's and whose air temperatures replace the low/high curve.
+ */
+export function solarSeries(p: Prepared, skyShift: number, sky?: StepSky): SolarSeries {
   const g = geometry(p);
   const stops = p.input.trip.stops;
   const hayDavies = p.input.options.transposition === 'hay-davies';
   const clearness = stops.map((s) => SKY_CLEARNESS[shiftSky(s.skyOutlook, skyShift)]);
-  const planned = skyShift === 0 ? null : g.planned;
+  const planned = skyShift === 0 || sky ? null : g.planned;
+  const ambientC = sky?.ambientC ?? p.ambientC;
+  const stepClearness = sky?.clearness;
   // A stop whose sky the shift leaves as planned (clear made better, overcast made worse) gives the planned figures.
   const same = stops.map((s, w) => planned !== null && clearness[w] === SKY_CLEARNESS[s.skyOutlook]);
   const availableW = new Float64Array(p.n);
   const poaWm2 = new Float64Array(p.n);
   const cabinSolarW = new Float64Array(p.n);
   const series = { availableW, poaWm2, cabinSolarW };
-  if (skyShift === 0) g.planned = series;
+  if (skyShift === 0 && !sky) g.planned = series;
   const { arrays, capW, beamF, diffF, cosInc, rb, cabinGain } = g;
   const m = arrays.length;
   const { start, weight, cosZ, cosZTrue, ghiClear } = p.sun;
@@ -138,10 +147,11 @@ export function solarSeries(p: Prepared, skyShift: number): SolarSeries {
       cabinSolarW[i] = planned.cabinSolarW[i] ?? 0;
       continue;
     }
-    const f = clearness[w] ?? 1;
+    const recorded = stepClearness?.[i] ?? Number.NaN;
+    const f = Number.isNaN(recorded) ? (clearness[w] ?? 1) : recorded;
     const dniExtra = p.dniExtra[i] ?? 1361;
     const diff = diffF[i] ?? 1;
-    const ambient = p.ambientC[i] ?? 20;
+    const ambient = ambientC[i] ?? 20;
     let watts = 0;
     let poaFirst = 0;
     let cabinW = 0;

@@ -1,6 +1,7 @@
 // The whole engine input: one trip on one rig with its appliances.
 import { z } from 'zod';
 import { applianceSchema } from './appliance';
+import { engineWeatherSchema } from './engine-weather';
 import { optionsSchema } from './options';
 import { rigSchema } from './rig';
 import { LIMITS } from './limits';
@@ -15,6 +16,8 @@ export const engineInputSchema = z
       .max(LIMITS.appliancesPerTrip, { error: `A trip has at most ${LIMITS.appliancesPerTrip} appliances.` })
       .default([]),
     options: optionsSchema.default(optionsSchema.parse({})),
+    /** Recorded years and the forecast per stop; null: every stop plans with its preset sky. */
+    weather: engineWeatherSchema.nullable().default(null),
   })
   .superRefine((input, ctx) => {
     const seen = new Set<string>();

@@ -1,15 +1,13 @@
 // The cable check on the Rig tab, at phone width in metric units and at laptop width in US units: every run with
 // its verdict, nothing cut off or scrolling sideways, a failing run fixed and saved with the rig.
-import fs from 'node:fs';
-import path from 'node:path';
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { DEMO_ACCOUNT, DEMO_VIEWER } from '@/db/seed';
 import {
   byTestId,
   openTrip,
-  SCREENSHOT_DIR,
   screenshotTall,
+  shootAt,
   seriousA11yViolations,
   signIn,
   trackPageErrors,
@@ -45,14 +43,6 @@ async function expectNothingCutOff(page: Page): Promise<void> {
       .map((el) => `${el.getAttribute('data-testid') ?? el.tagName}: ${el.textContent?.slice(0, 40) ?? ''}`);
   }, byTestId('rig-cable-check'));
   expect(outside).toEqual([]);
-}
-
-/** A screenful with the element at its top (the trip tabs scroll inside the page, so full-page shots miss it). */
-async function shootAt(page: Page, testId: string, name: string): Promise<void> {
-  fs.mkdirSync(SCREENSHOT_DIR, { recursive: true });
-  await page.locator(byTestId(testId)).evaluate((el) => el.scrollIntoView({ block: 'start' }));
-  await page.waitForTimeout(200);
-  await page.screenshot({ path: path.join(SCREENSHOT_DIR, `${name}.png`) });
 }
 
 describe('the cable check on the Rig tab', () => {

@@ -118,6 +118,14 @@ export async function screenshotTall(page: Page, name: string): Promise<void> {
   if (viewport) await page.setViewportSize(viewport);
 }
 
+/** A screenful with the element at its top (the trip tabs scroll inside the page, so full-page shots miss it). */
+export async function shootAt(page: Page, testId: string, name: string): Promise<void> {
+  fs.mkdirSync(SCREENSHOT_DIR, { recursive: true });
+  await page.locator(byTestId(testId)).evaluate((el) => el.scrollIntoView({ block: 'start' }));
+  await page.waitForTimeout(200);
+  await page.screenshot({ path: path.join(SCREENSHOT_DIR, `${name}.png`) });
+}
+
 /** Collects uncaught page errors so a test can assert that none happened. */
 export function trackPageErrors(page: Page): string[] {
   const errors: string[] = [];

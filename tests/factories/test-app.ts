@@ -75,6 +75,7 @@ export function createTestApp(
     mailer,
     close: () => {
       void app.locals.budgets.close();
+      app.locals.weather.close();
       db.$client.close();
       fs.rmSync(dir, { recursive: true, force: true });
     },

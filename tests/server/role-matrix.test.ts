@@ -52,6 +52,7 @@ const base = () => `/api/trips/${world.tripId}`;
 const ROWS: Row[] = [
   { name: 'GET trip', prepare: async () => ({ method: 'get', path: base() }), expected: needs('read') },
   { name: 'GET budget', prepare: async () => ({ method: 'get', path: `${base()}/budget` }), expected: needs('read') },
+  { name: 'GET weather', prepare: async () => ({ method: 'get', path: `${base()}/weather` }), expected: needs('read') },
   {
     name: 'GET activity',
     prepare: async () => ({ method: 'get', path: `${base()}/activity` }),

@@ -1,0 +1,37 @@
+import { useQuery, useQueryClient } from '@tanstack/react-query';
+import { useEffect, useRef } from 'react';
+import type { TripWeather } from '@/shared/schemas/weather';
+import { apiFetch } from './api-client';
+import { tripKeys } from './trips';
+
+/** While any stop's record is loading, ask again this often. */
+const LOADING_POLL_MS = 2500;
+
+export const weatherKeys = { trip: (tripId: string) => [...tripKeys.root, 'weather', tripId] as const };
+
+/** What changes a budget: how many years and forecast days each stop has. */
+function fingerprint(w: TripWeather | undefined): string {
+  return w ? w.stops.map((s) => `${s.stopId}:${s.state}:${s.yearsReady}:${s.forecastDays}`).join('|') : '';
+}
+
+/**
+ * Each stop's weather record, asked again while any is loading. When more of it arrives the budget is computed on
+ * it, so the budget is fetched again.
+ */
+export function useTripWeatherQuery(tripId: string) {
+  const queryClient = useQueryClient();
+  const query = useQuery({
+    queryKey: weatherKeys.trip(tripId),
+    queryFn: () => apiFetch<TripWeather>(`/api/trips/${encodeURIComponent(tripId)}/weather`),
+    refetchInterval: (q) => (q.state.data?.stops.some((s) => s.state === 'loading') ? LOADING_POLL_MS : false),
+  });
+  const seen = useRef<string | null>(null);
+  const now = fingerprint(query.data);
+  useEffect(() => {
+    if (!now) return;
+    if (seen.current !== null && seen.current !== now)
+      void queryClient.invalidateQueries({ queryKey: tripKeys.budget(tripId) });
+    seen.current = now;
+  }, [now, queryClient, tripId]);
+  return query;
+}

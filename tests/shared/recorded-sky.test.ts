@@ -1,0 +1,141 @@
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { syntheticHourly, syntheticSite } from '@/server/weather/synthetic-weather';
+import { simulateTrip } from '@/shared/engine';
+import type { EngineInputDraft } from '@/shared/schemas';
+import type { EngineWeather, HourlySky } from '@/shared/schemas/engine-weather';
+import { constantLoad, simpleTrip } from './trip-builder';
+
+const HOUR_MS = 3_600_000;
+
+/** A recorded day laid on the trip's calendar: value h is the mean of the hour starting at startMs + h hours. */
+function recordedDays(recordStart: string, recordEnd: string, tripStart: string, scale = 1): HourlySky {
+  const series = syntheticHourly(syntheticSite(45, 0), recordStart, recordEnd);
+  // The service stamps each value at the end of its hour: the first value covers the hour before its stamp.
+  return {
+    startMs: Date.parse(`${tripStart}T00:00:00Z`) - HOUR_MS,
+    ghiWm2: series.ghi.map((g) => Math.min(1500, g * scale)),
+    tempC: series.tempC,
+  };
+}
+
+function withRecord(input: EngineInputDraft, years: { year: number; sky: HourlySky }[]): EngineInputDraft {
+  const weather: EngineWeather = {
+    stops: [{ source: 'record', recordedTemperature: true }],
+    years: years.map((y) => ({ year: y.year, stops: [y.sky] })),
+    forecast: [null],
+  };
+  return { ...input, weather };
+}
+
+describe('a recorded sky', () => {
+  it('when a flat, open array without losses sees a recorded day, then its harvest is the recorded GHI × rated watts / 1000 to 0.5 %', () => {
+    const base = simpleTrip({ solarW: 1000, capacityAh: 2000, initialSocPct: 10 });
+    const array = { ratedW: 1000, mounting: 'flat' as const, fit: 'racked' as const, gammaPctPerC: 0, derate: 1 };
+    const input: EngineInputDraft = {
+      ...base,
+      rig: { ...base.rig, solarArrays: [array], controller: { kind: 'mppt', maxAmps: 500, efficiency: 1 } },
+      options: { skyBand: false, incidenceLosses: false },
+    };
+    const sky = recordedDays('2019-06-21', '2019-06-22', '2027-06-21');
+    const result = simulateTrip(withRecord(input, [{ year: 2019, sky }]));
+    // The stop runs 00:00–24:00 UTC: the values stamped 01:00 … 24:00 (indexes 1 … 24).
+    const recordedWh = sky.ghiWm2.slice(1, 25).reduce<number>((s, g) => s + (g ?? 0), 0) * (1000 / 1000);
+    const harvestWh = result.days.reduce((s, d) => s + d.solarAvailableWh, 0);
+    expect(recordedWh).toBeGreaterThan(2000);
+    expect(Math.abs(harvestWh - recordedWh) / recordedWh).toBeLessThan(0.005);
+    expect(result.skies).toEqual({ sources: ['record'], assumedStops: 0 });
+  });
+
+  it('when the record has temperatures, then they replace the low/high curve unless the stop keeps its own', () => {
+    const input = simpleTrip({ lowC: -5, highC: -1 });
+    const sky = recordedDays('2019-06-21', '2019-06-22', '2027-06-21');
+    const recorded = simulateTrip(withRecord(input, [{ year: 2019, sky }]));
+    // Step 12 covers 12:00–13:00 UTC: the value stamped 13:00 (index 13).
+    expect(recorded.ledger[12]?.ambientC).toBeCloseTo(sky.tempC[13] ?? Number.NaN, 6);
+    const kept = simulateTrip({
+      ...withRecord(input, [{ year: 2019, sky }]),
+      weather: {
+        stops: [{ source: 'record', recordedTemperature: false }],
+        years: [{ year: 2019, stops: [sky] }],
+        forecast: [null],
+      },
+    });
+    expect(kept.ledger[12]?.ambientC).toBeLessThanOrEqual(-1);
+  });
+
+  it('when the record has a gap, then those hours plan on the preset sky', () => {
+    const input = simpleTrip({ solarW: 400, sky: 'overcast' });
+    const sky = recordedDays('2019-06-21', '2019-06-22', '2027-06-21');
+    const gap = { ...sky, ghiWm2: sky.ghiWm2.map(() => null), tempC: sky.tempC.map(() => null) };
+    const withGap = simulateTrip(withRecord(input, [{ year: 2019, sky: gap }]));
+    const preset = simulateTrip(input);
+    expect(withGap.days[0]?.solarAvailableWh).toBeCloseTo(preset.days[0]?.solarAvailableWh ?? Number.NaN, 6);
+  });
+});
+
+describe('the chance the plan holds', () => {
+  // Five past years from dull to bright; the load needs a fair sky to stay above the reserve.
+  const years = [0.15, 0.4, 0.6, 0.8, 1].map((scale, i) => ({
+    year: 2015 + i,
+    sky: recordedDays('2019-06-21', '2019-06-24', '2027-06-21', scale),
+  }));
+  const plan = (capacityAh: number, solarW: number) =>
+    withRecord(
+      simpleTrip({
+        solarW,
+        capacityAh,
+        initialSocPct: 60,
+        arrive: '2027-06-21T00:00Z',
+        depart: '2027-06-24T00:00Z',
+        appliances: [constantLoad('fridge', 'dc', 45)],
+      }),
+      years,
+    );
+
+  it('when the trip runs on five recorded years, then it reports how many held, the median, bad and worst years', () => {
+    const result = simulateTrip(plan(100, 200));
+    const chance = result.chance;
+    expect(chance?.years).toBe(5);
+    expect(chance?.worst.year).toBe(2015);
+    expect(chance?.median.year).toBe(2017);
+    expect(chance?.bad).toEqual(chance?.worst);
+    // Lowest charges climb with the brightness of the year.
+    const lows = chance?.byYear.map((y) => y.lowestSocPct) ?? [];
+    expect(lows).toEqual([...lows].sort((a, b) => a - b));
+    expect(chance?.held).toBe(lows.filter((l) => l >= 20).length);
+    // The ledger is the median year's run, and the band spans the years hour by hour.
+    expect(result.headline.lowestSocPct).toBeCloseTo(chance?.median.lowestSocPct ?? Number.NaN, 9);
+    const band = result.socBand;
+    expect(band?.p10).toHaveLength(result.ledger.length);
+    result.ledger.forEach((row, i) => {
+      expect(band?.p10[i]).toBeLessThanOrEqual((band?.p90[i] ?? 0) + 1e-9);
+    });
+    expect(result.band).toBeNull();
+  });
+
+  it('when the battery or the array grows, then the chance of holding never falls', () => {
+    fc.assert(
+      fc.property(
+        fc.integer({ min: 40, max: 300 }),
+        fc.integer({ min: 0, max: 400 }),
+        fc.integer({ min: 0, max: 200 }),
+        fc.integer({ min: 0, max: 300 }),
+        (capacityAh, solarW, moreAh, moreW) => {
+          const before = simulateTrip(plan(capacityAh, solarW)).chance?.held ?? 0;
+          const biggerBattery = simulateTrip(plan(capacityAh + moreAh, solarW)).chance?.held ?? 0;
+          const biggerArray = simulateTrip(plan(capacityAh, solarW + moreW)).chance?.held ?? 0;
+          expect(biggerBattery).toBeGreaterThanOrEqual(before);
+          expect(biggerArray).toBeGreaterThanOrEqual(before);
+        },
+      ),
+      { numRuns: 40, seed: 13 },
+    );
+  });
+
+  it('when no stop has a record, then there is no chance figure and the stops count as assumed skies', () => {
+    const result = simulateTrip(simpleTrip({ solarW: 200 }));
+    expect(result.chance).toBeNull();
+    expect(result.skies).toEqual({ sources: ['preset'], assumedStops: 1 });
+  });
+});
