@@ -16,7 +16,11 @@ const run = (script: string, ...args: string[]) =>
 
 /** Starts the server on the test's data folder and resolves once it listens. */
 function startServer() {
-  const child = spawn(TSX, ['server/index.ts'], { env, stdio: ['ignore', 'pipe', 'pipe'] });
+  // Node itself, not the tsx wrapper: the wrapper may exit before the server has let go of the database.
+  const child = spawn(process.execPath, ['--import', 'tsx', 'server/index.ts'], {
+    env,
+    stdio: ['ignore', 'pipe', 'pipe'],
+  });
   let output = '';
   const ready = new Promise<void>((resolve, reject) => {
     const onData = (chunk: Buffer) => {
