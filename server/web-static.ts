@@ -2,39 +2,13 @@ import fs from 'node:fs';
 import path from 'node:path';
 import express from 'express';
 import type { Response, Router } from 'express';
+import { pickEncoding, type EncodingName } from './accept-encoding';
 
 /** Ready-made compressed copies the build writes beside a file, best first (Brotli is the smaller). */
-const ENCODINGS = [
+const ENCODINGS: readonly { name: EncodingName; suffix: string }[] = [
   { name: 'br', suffix: '.br' },
   { name: 'gzip', suffix: '.gz' },
-] as const;
-type EncodingName = (typeof ENCODINGS)[number]['name'];
-
-/**
- * The best ready-made encoding a client accepts: the highest q value it gives, Brotli when it rates both alike.
- * Undefined when it accepts neither (the file is then sent as it is).
- */
-export function pickEncoding(
-  acceptEncoding: string | undefined,
-  available: readonly EncodingName[],
-): EncodingName | undefined {
-  const quality = new Map<string, number>();
-  for (const part of (acceptEncoding ?? '').split(',')) {
-    const [token = '', ...params] = part.trim().split(';');
-    const q = params.map((p) => /^\s*q=([\d.]+)\s*$/.exec(p)?.[1]).find((v) => v !== undefined);
-    if (token) quality.set(token.toLowerCase(), q === undefined ? 1 : Number(q));
-  }
-  let best: EncodingName | undefined;
-  let bestQ = 0;
-  for (const name of available) {
-    const q = quality.get(name) ?? quality.get('*') ?? 0;
-    if (q > bestQ) {
-      best = name;
-      bestQ = q;
-    }
-  }
-  return best;
-}
+];
 
 const isHashed = (urlPath: string): boolean => urlPath.startsWith('/_expo/') || urlPath.startsWith('/assets/');
 

@@ -1,36 +1,18 @@
 import fs from 'node:fs';
-import http from 'node:http';
-import type { AddressInfo } from 'node:net';
+import type http from 'node:http';
 import os from 'node:os';
 import path from 'node:path';
 import zlib from 'node:zlib';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { precompressDir } from '@/scripts/precompress-web';
-import { pickEncoding } from '@/server/web-static';
+import { pickEncoding } from '@/server/accept-encoding';
+import { listen, rawGet } from '../factories/raw-get';
 import { createTestApp, type TestContext } from '../factories/test-app';
 
 // A script big enough to be worth compressing, and text the middleware would squeeze on the fly if it ran.
 const SCRIPT = `console.log(${JSON.stringify('trailtally '.repeat(2000))});\n`;
 const WASM = Buffer.concat([Buffer.from([0, 0x61, 0x73, 0x6d, 1, 0, 0, 0]), Buffer.alloc(4096, 7)]);
-
-type RawResponse = { status: number; headers: http.IncomingHttpHeaders; body: Buffer };
-
-/** A GET whose body is kept as the bytes sent, whatever its Content-Encoding (supertest would decode it). */
-function rawGet(server: http.Server, urlPath: string, acceptEncoding: string): Promise<RawResponse> {
-  const { port } = server.address() as AddressInfo;
-  return new Promise((resolve, reject) => {
-    http
-      .get({ host: '127.0.0.1', port, path: urlPath, headers: { 'Accept-Encoding': acceptEncoding } }, (res) => {
-        const chunks: Buffer[] = [];
-        res.on('data', (c: Buffer) => chunks.push(c));
-        res.on('end', () =>
-          resolve({ status: res.statusCode ?? 0, headers: res.headers, body: Buffer.concat(chunks) }),
-        );
-      })
-      .on('error', reject);
-  });
-}
 
 describe('static web files', () => {
   let dir: string;
@@ -49,8 +31,7 @@ describe('static web files', () => {
     fs.writeFileSync(path.join(dir, 'unlisted.txt'), 'plain '.repeat(400));
     precompressDir(dir);
     ctx = createTestApp({ webDir: dir });
-    server = http.createServer(ctx.app);
-    await new Promise<void>((resolve) => server.listen(0, '127.0.0.1', resolve));
+    server = await listen(ctx.app);
   });
   afterAll(async () => {
     await new Promise((resolve) => server.close(resolve));
@@ -66,7 +47,7 @@ describe('static web files', () => {
   });
 
   it('when a browser accepts Brotli, then the build-time Brotli bytes go out with the script type and their length', async () => {
-    const res = await rawGet(server, script, 'gzip, deflate, br, zstd');
+    const res = await rawGet(server, script, { 'Accept-Encoding': 'gzip, deflate, br, zstd' });
     expect(res.status).toBe(200);
     expect(res.headers['content-encoding']).toBe('br');
     expect(res.headers['content-type']).toMatch(/^text\/javascript/);
@@ -78,20 +59,20 @@ describe('static web files', () => {
   });
 
   it('when a client accepts only gzip, then the gzip copy is sent', async () => {
-    const res = await rawGet(server, script, 'gzip');
+    const res = await rawGet(server, script, { 'Accept-Encoding': 'gzip' });
     expect(res.headers['content-encoding']).toBe('gzip');
     expect(res.body.equals(fs.readFileSync(path.join(dir, `${script}.gz`)))).toBe(true);
   });
 
   it('when a client accepts no ready-made encoding, then the original goes out uncompressed (not deflated on the fly)', async () => {
-    const res = await rawGet(server, script, 'deflate');
+    const res = await rawGet(server, script, { 'Accept-Encoding': 'deflate' });
     expect(res.headers['content-encoding']).toBeUndefined();
     expect(res.body.toString()).toBe(SCRIPT);
     expect(Number(res.headers['content-length'])).toBe(Buffer.byteLength(SCRIPT));
   });
 
   it('when the hashed wasm is asked for, then it is WebAssembly, compressed and cached for a year', async () => {
-    const res = await rawGet(server, wasm, 'br');
+    const res = await rawGet(server, wasm, { 'Accept-Encoding': 'br' });
     expect(res.headers['content-type']).toBe('application/wasm');
     expect(res.headers['content-encoding']).toBe('br');
     expect(res.headers['cache-control']).toBe('public, max-age=31536000, immutable');
