@@ -3,12 +3,24 @@ import crypto from 'node:crypto';
 import fs from 'node:fs';
 import path from 'node:path';
 import { precompressDir } from './precompress-web';
+import { addFontsToShell } from './web-fonts';
 
 const ROOT = path.resolve(__dirname, '..');
 const OUT_DIR = path.join(ROOT, 'dist');
 const STAMP = path.join(OUT_DIR, '.source-fingerprint');
 // Everything that ends up in the web bundle. Server-only folders are left out on purpose.
-const SOURCES = ['app', 'components', 'stores', 'shared', 'assets', 'app.json', 'package-lock.json', 'tsconfig.json'];
+const SOURCES = [
+  'app',
+  'components',
+  'stores',
+  'shared',
+  'assets',
+  'app.json',
+  'package-lock.json',
+  'tsconfig.json',
+  'metro.config.js',
+  'scripts/metro',
+];
 
 function listFiles(entry: string): string[] {
   const full = path.join(ROOT, entry);
@@ -98,6 +110,7 @@ export function ensureWebBuild({ force = false } = {}): void {
   const hashedWasm = path.join(OUT_DIR, canvasKitUrl);
   fs.mkdirSync(path.dirname(hashedWasm), { recursive: true });
   fs.copyFileSync(canvasKitSource(), hashedWasm);
+  addFontsToShell(OUT_DIR);
   console.log('Compressing scripts, fonts and the wasm (Brotli 11 and gzip) …');
   const sizes = precompressDir(OUT_DIR);
   const mb = (bytes: number): string => `${(bytes / 1e6).toFixed(2)} MB`;
