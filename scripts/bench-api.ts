@@ -19,11 +19,16 @@ function processTree(pid: number): number[] {
   return [pid, ...children.flatMap(processTree)];
 }
 
-/** The server's resident memory, MB, from /proc (Linux): the process tsx started, not the launcher itself. */
+const isNode = (pid: number): boolean => fs.readFileSync(`/proc/${pid}/comm`, 'utf8').trim() === 'node';
+
+/**
+ * The server's resident memory, MB, from /proc (Linux): the Node process tsx started (its budget workers are threads
+ * in it), not the launcher nor tsx's esbuild service.
+ */
 function rssMb(pid: number): number {
-  const tree = processTree(pid);
+  const servers = processTree(pid).slice(1).filter(isNode);
   let kb = 0;
-  for (const id of tree.length > 1 ? tree.slice(1) : tree) {
+  for (const id of servers.length > 0 ? servers : [pid]) {
     const status = fs.readFileSync(`/proc/${id}/status`, 'utf8');
     kb += Number(/VmRSS:\s+(\d+)/.exec(status)?.[1] ?? 0);
   }

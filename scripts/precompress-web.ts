@@ -7,7 +7,8 @@ export const PRECOMPRESSED_EXTENSIONS = ['.js', '.css', '.wasm', '.ttf', '.otf',
 /** Below this the headers outweigh the saving. */
 const SMALLEST_WORTH_IT = 1024;
 
-function filesUnder(dir: string): string[] {
+/** Every file under a folder, at any depth. */
+export function filesUnder(dir: string): string[] {
   return fs
     .readdirSync(dir, { withFileTypes: true })
     .flatMap((entry) => (entry.isDirectory() ? filesUnder(path.join(dir, entry.name)) : [path.join(dir, entry.name)]));

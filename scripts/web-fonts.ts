@@ -1,5 +1,6 @@
 import fs from 'node:fs';
 import path from 'node:path';
+import { filesUnder } from './precompress-web';
 
 /**
  * Nunito's weights the app draws with, and the local face the browser shows until each arrives. The fallback is
@@ -42,12 +43,6 @@ export function fontHead(urls: Record<string, string>): string {
     );
   }
   return `${links.join('\n')}\n<style id="nunito-faces">${rules.join('\n')}</style>\n`;
-}
-
-function filesUnder(dir: string): string[] {
-  return fs
-    .readdirSync(dir, { withFileTypes: true })
-    .flatMap((entry) => (entry.isDirectory() ? filesUnder(path.join(dir, entry.name)) : [path.join(dir, entry.name)]));
 }
 
 /**
