@@ -1,13 +1,9 @@
-import { Nunito_400Regular } from '@expo-google-fonts/nunito/400Regular';
-import { Nunito_600SemiBold } from '@expo-google-fonts/nunito/600SemiBold';
-import { Nunito_700Bold } from '@expo-google-fonts/nunito/700Bold';
-import { Nunito_800ExtraBold } from '@expo-google-fonts/nunito/800ExtraBold';
 import { QueryClientProvider } from '@tanstack/react-query';
-import { useFonts } from 'expo-font';
 import { Stack } from 'expo-router';
 import { useState } from 'react';
 import { LoadingScreen } from '@/components/layout/loading-screen';
 import { colors } from '@/components/theme/tokens';
+import { useAppFonts } from '@/components/theme/use-app-fonts';
 import { useSession } from '@/stores/auth-client';
 import { createQueryClient } from '@/stores/queries/query-client';
 import { hydrateUnits } from '@/stores/units-store';
@@ -17,12 +13,7 @@ hydrateUnits();
 
 export default function RootLayout() {
   const [queryClient] = useState(createQueryClient);
-  const [fontsLoaded, fontError] = useFonts({
-    Nunito_400Regular,
-    Nunito_600SemiBold,
-    Nunito_700Bold,
-    Nunito_800ExtraBold,
-  });
+  const fontsReady = useAppFonts();
   const session = useSession();
   // better-auth reports "pending" again while it refetches after a sign-in from signed out; only the
   // first answer may hold the app, or the navigator is torn down and pages outside the groups (an
@@ -30,9 +21,9 @@ export default function RootLayout() {
   const [sessionKnown, setSessionKnown] = useState(false);
   if (!session.isPending && !sessionKnown) setSessionKnown(true);
 
-  // Hold the first paint until the fonts and the session are known, so nobody sees a flash of
-  // the sign-in page while already signed in. A font failure still lets the app run.
-  if ((!fontsLoaded && !fontError) || !sessionKnown) return <LoadingScreen />;
+  // Hold the first paint until the session is known, so nobody sees a flash of the sign-in page while already signed
+  // in. Native apps also wait for the fonts; the web page draws with a fallback and swaps Nunito in.
+  if (!fontsReady || !sessionKnown) return <LoadingScreen />;
 
   const signedIn = !!session.data;
   return (

@@ -2,12 +2,25 @@ import { spawnSync } from 'node:child_process';
 import crypto from 'node:crypto';
 import fs from 'node:fs';
 import path from 'node:path';
+import { precompressDir } from './precompress-web';
+import { addFontsToShell } from './web-fonts';
 
 const ROOT = path.resolve(__dirname, '..');
 const OUT_DIR = path.join(ROOT, 'dist');
 const STAMP = path.join(OUT_DIR, '.source-fingerprint');
 // Everything that ends up in the web bundle. Server-only folders are left out on purpose.
-const SOURCES = ['app', 'components', 'stores', 'shared', 'assets', 'app.json', 'package-lock.json', 'tsconfig.json'];
+const SOURCES = [
+  'app',
+  'components',
+  'stores',
+  'shared',
+  'assets',
+  'app.json',
+  'package-lock.json',
+  'tsconfig.json',
+  'metro.config.js',
+  'scripts/metro',
+];
 
 function listFiles(entry: string): string[] {
   const full = path.join(ROOT, entry);
@@ -33,13 +46,25 @@ export function sourceFingerprint(): string {
  * Skia on the web needs canvaskit.wasm beside the app. It comes from the installed canvaskit-wasm package
  * (so it always matches Skia's JS) and is copied into public/ for the export; it is never committed.
  */
-export function copyCanvasKit(): void {
-  const source = require.resolve('canvaskit-wasm/bin/full/canvaskit.wasm', {
+const canvasKitSource = (): string =>
+  require.resolve('canvaskit-wasm/bin/full/canvaskit.wasm', {
     paths: [path.join(ROOT, 'node_modules/@shopify/react-native-skia')],
   });
+
+export function copyCanvasKit(): void {
+  const source = canvasKitSource();
   const target = path.join(ROOT, 'public', 'canvaskit.wasm');
   fs.mkdirSync(path.dirname(target), { recursive: true });
   if (!fs.existsSync(target) || fs.statSync(target).size !== fs.statSync(source).size) fs.copyFileSync(source, target);
+}
+
+/**
+ * The exported app loads canvaskit.wasm from a name that carries a hash of its contents, under `_expo/static/`, so
+ * it is cached for a year like the scripts and a new Skia release is a new name.
+ */
+export function hashedCanvasKitUrl(): string {
+  const hash = crypto.createHash('sha256').update(fs.readFileSync(canvasKitSource())).digest('hex').slice(0, 16);
+  return `/_expo/static/wasm/canvaskit-${hash}.wasm`;
 }
 
 export function ensureWebBuild({ force = false } = {}): void {
@@ -61,19 +86,42 @@ export function ensureWebBuild({ force = false } = {}): void {
   // --clear: Metro's cache keeps the old list of route files, so a route added since the last build would be missing.
   const metroTemp = path.join(ROOT, '.expo', 'build-tmp');
   fs.mkdirSync(metroTemp, { recursive: true });
-  const result = spawnSync('npx', ['expo', 'export', '--platform', 'web', '--output-dir', 'dist', '--clear'], {
-    cwd: ROOT,
-    stdio: 'inherit',
-    env: { ...process.env, CI: '1', EXPO_NO_TELEMETRY: '1', TMPDIR: metroTemp },
-  });
+  const canvasKitUrl = hashedCanvasKitUrl();
+  const sourceMaps = process.argv.includes('--source-maps') ? ['--source-maps'] : [];
+  const result = spawnSync(
+    'npx',
+    ['expo', 'export', '--platform', 'web', '--output-dir', 'dist', '--clear', ...sourceMaps],
+    {
+      cwd: ROOT,
+      stdio: 'inherit',
+      // The chart's loader reads the wasm's address from this (inlined at build time).
+      env: {
+        ...process.env,
+        CI: '1',
+        EXPO_NO_TELEMETRY: '1',
+        TMPDIR: metroTemp,
+        EXPO_PUBLIC_CANVASKIT_URL: canvasKitUrl,
+      },
+    },
+  );
   if (result.status !== 0) throw new Error('The web build failed; see the output above.');
+  // public/ holds the plain name for the development server; the export serves only the hashed one.
+  fs.rmSync(path.join(OUT_DIR, 'canvaskit.wasm'), { force: true });
+  const hashedWasm = path.join(OUT_DIR, canvasKitUrl);
+  fs.mkdirSync(path.dirname(hashedWasm), { recursive: true });
+  fs.copyFileSync(canvasKitSource(), hashedWasm);
+  addFontsToShell(OUT_DIR);
+  console.log('Compressing scripts, fonts and the wasm (Brotli 11 and gzip) …');
+  const sizes = precompressDir(OUT_DIR);
+  const mb = (bytes: number): string => `${(bytes / 1e6).toFixed(2)} MB`;
+  console.log(`${sizes.files} files: ${mb(sizes.raw)} raw, ${mb(sizes.gz)} gzip, ${mb(sizes.br)} Brotli.`);
   fs.writeFileSync(STAMP, `${fingerprint}\n`);
   console.log('Web app built.');
 }
 
 if (require.main === module) {
   try {
-    ensureWebBuild({ force: process.argv.includes('--force') });
+    ensureWebBuild({ force: process.argv.includes('--force') || process.argv.includes('--source-maps') });
   } catch (error) {
     console.error(error instanceof Error ? error.message : error);
     process.exit(1);

@@ -140,7 +140,8 @@ export function createApp(deps: AppDeps): TrailtallyApp {
       crossOriginEmbedderPolicy: false,
     }),
   );
-  app.use(compression());
+  // Static scripts, fonts and the wasm were compressed at build time (web-static.ts marks them); never again here.
+  app.use(compression({ filter: (req, res) => !res.locals.precompressed && compression.filter(req, res) }));
   if (config.devWebOrigin) app.use('/api', cors({ origin: config.devWebOrigin, credentials: true }));
   app.use('/api', requireTrustedOrigin(origins, config.publicUrl));
 

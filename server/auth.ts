@@ -6,6 +6,7 @@ import { PASSWORD_MAX_LENGTH, PASSWORD_MIN_LENGTH } from '@/shared/schemas/accou
 import { authRules } from './auth-rules';
 import type { Mailer } from './mail/mailer';
 import { resetPasswordMail, verifyEmailMail } from './mail/templates';
+import { createSessionEpochs } from './session-epochs';
 import { originRefusalAdvice } from './trusted-origins';
 
 export type AuthConfig = {
@@ -17,7 +18,11 @@ export type AuthConfig = {
   requireEmailVerification: boolean;
 };
 
+/** How long a browser's signed copy of its session is trusted without asking the database, seconds. */
+const SESSION_COOKIE_CACHE_S = 5 * 60;
+
 export function createAuth(db: Db, config: AuthConfig) {
+  const epochs = createSessionEpochs();
   return betterAuth({
     appName: 'Trailtally',
     baseURL: config.baseUrl,
@@ -49,6 +54,23 @@ export function createAuth(db: Db, config: AuthConfig) {
       autoSignInAfterVerification: true,
       sendVerificationEmail: async ({ user: who, url }) => {
         await config.mailer.send(verifyEmailMail({ to: who.email, name: who.name, url }));
+      },
+    },
+    // Each request's session is read from a signed cookie rather than the database; a session that ends (sign-out,
+    // a password change or reset, a removed account) or an account that changes makes every cached copy of that
+    // user's sessions stale at once (session-epochs.ts), so ending a session still takes effect on the next request.
+    session: {
+      cookieCache: {
+        enabled: true,
+        maxAge: SESSION_COOKIE_CACHE_S,
+        version: (_session, who) => epochs.versionOf(who.id),
+      },
+    },
+    databaseHooks: {
+      session: { delete: { after: async (ended) => epochs.bump(ended.userId) } },
+      user: {
+        update: { after: async (who) => epochs.bump(who.id) },
+        delete: { after: async (who) => epochs.bump(who.id) },
       },
     },
     // Requests are limited by express-rate-limit in front of this handler, one policy for all.

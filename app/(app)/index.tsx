@@ -1,5 +1,7 @@
 import { Link } from 'expo-router';
+import { useEffect } from 'react';
 import { Pressable, StyleSheet } from 'react-native';
+import { preloadChartWhenIdle } from '@/components/budget/chart-loader';
 import { TripList } from '@/components/trips/trip-list';
 import { colors, radii, space } from '@/components/theme/tokens';
 import { EmptyState } from '@/components/ui/empty-state';
@@ -23,6 +25,8 @@ function NewTripLink({ testID }: { testID: string }) {
 
 export default function TripsScreen() {
   const trips = useTripsQuery();
+  // Once the list has drawn, the chart's bytes come down in the background so a trip opened later draws at once.
+  useEffect(preloadChartWhenIdle, []);
   return (
     <Screen
       testID="trips-screen"

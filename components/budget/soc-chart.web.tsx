@@ -1,15 +1,16 @@
-import { WithSkiaWeb } from '@shopify/react-native-skia/lib/module/web';
+import { lazy, Suspense } from 'react';
 import { Skeleton } from '@/components/ui/skeleton';
+import { loadChartCanvas } from './chart-loader.web';
 import type { SocChartCanvasProps } from './soc-chart-canvas';
 
-/** Loads canvaskit.wasm and the Skia chart chunk only when a chart is on screen. */
+// The same promise a trip page or the Trips screen may already have started (chart-loader.web.ts).
+const SocChartCanvas = lazy(async () => ({ default: await loadChartCanvas() }));
+
+/** Loads canvaskit.wasm and the Skia chart chunk only when a chart is (or is about to be) on screen. */
 export function SocChartSurface(props: SocChartCanvasProps) {
   return (
-    <WithSkiaWeb
-      opts={{ locateFile: (file: string) => `/${file}` }}
-      getComponent={() => import('./soc-chart-canvas')}
-      fallback={<Skeleton testID="soc-chart-loading" height={props.height} />}
-      componentProps={props}
-    />
+    <Suspense fallback={<Skeleton testID="soc-chart-loading" height={props.height} />}>
+      <SocChartCanvas {...props} />
+    </Suspense>
   );
 }

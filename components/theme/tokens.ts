@@ -1,3 +1,5 @@
+import { face } from './font-face';
+
 // Trailtally's design tokens. Colours are the product palette; read them from here, never inline.
 export const colors = {
   ink: '#14213D',
@@ -24,11 +26,11 @@ export const colors = {
 export type ColorName = keyof typeof colors;
 
 export const fonts = {
-  regular: 'Nunito_400Regular',
-  semiBold: 'Nunito_600SemiBold',
-  bold: 'Nunito_700Bold',
-  extraBold: 'Nunito_800ExtraBold',
-} as const;
+  regular: face('Nunito_400Regular'),
+  semiBold: face('Nunito_600SemiBold'),
+  bold: face('Nunito_700Bold'),
+  extraBold: face('Nunito_800ExtraBold'),
+};
 
 /** Spacing scale in px; components pick steps from it instead of ad-hoc numbers. */
 export const space = { xs: 4, sm: 8, md: 12, lg: 16, xl: 24, xxl: 32, xxxl: 48 } as const;

@@ -73,8 +73,11 @@ export function createBudgetPool(options: BudgetPoolOptions): BudgetRunner {
       const { port1: startedHere, port2: startedThere } = new MessageChannel();
       const abort = new AbortController();
       let timer: NodeJS.Timeout | undefined;
-      startedHere.once('message', () => {
-        timer = setTimeout(() => abort.abort(), timeLimitMs);
+      // 'started' when the worker begins, 'simulated' when the engine is done: the limit covers reading and
+      // simulating the plan; writing and compressing the body after it is bounded by the result's size.
+      startedHere.on('message', (stage: unknown) => {
+        if (stage === 'started') timer = setTimeout(() => abort.abort(), timeLimitMs);
+        else clearTimeout(timer);
       });
       try {
         return (await workers.run(

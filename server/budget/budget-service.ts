@@ -3,13 +3,16 @@ import { findTrip } from '@/db/queries/trips';
 import { BudgetBusyError, BudgetTooLargeError, type BudgetRunner } from './budget-pool';
 import type { SimulationResult } from '@/shared/engine/result-types';
 import type { BudgetFigures, TripBudget } from './compute';
+import { readyBodySize, type ReadyBody } from './ready-body';
 
-export type BudgetAnswer = { revision: number } & (
-  | { kind: 'ok'; resultJson: string; figures: BudgetFigures }
-  /** Nothing to simulate yet, or a plan the engine refuses: the reason is shown in place of the budget. */
-  | { kind: 'none'; reason: string }
-  | { kind: 'too-large' }
-);
+export type BudgetAnswer = { revision: number } &
+  /** `body` is the response `{ version, result }`, serialised and compressed by the worker. */
+  (
+    | { kind: 'ok'; body: ReadyBody; figures: BudgetFigures }
+    /** Nothing to simulate yet, or a plan the engine refuses: the reason is shown in place of the budget. */
+    | { kind: 'none'; reason: string }
+    | { kind: 'too-large' }
+  );
 
 /** What the trips list shows: the last figures computed (of this revision or an older one) and how current they are. */
 export type BudgetGlance = {
@@ -19,14 +22,14 @@ export type BudgetGlance = {
 
 /** Full answers kept, by count and by size: the largest plan's result is a few megabytes of JSON. */
 const CACHE_ENTRIES = 100;
-const CACHE_CHARS = 64 * 1024 * 1024;
+const CACHE_BYTES = 64 * 1024 * 1024;
 /** A plan stopped for taking too long is not tried again for this long, so asking again costs nothing. */
 const TOO_LARGE_KEPT_MS = 60_000;
 /** Trips whose last figures are remembered for the list; far more than one server's trips in use at once. */
 const GLANCE_ENTRIES = 10_000;
 const FAULT_REASON = 'The budget could not be computed for this plan. Please report it.';
 
-const sizeOf = (answer: BudgetAnswer): number => (answer.kind === 'ok' ? answer.resultJson.length : 0);
+const sizeOf = (answer: BudgetAnswer): number => (answer.kind === 'ok' ? readyBodySize(answer.body) : 0);
 
 /**
  * Budgets per (trip, revision), computed off the event loop by a runner (a worker pool that reads the plan itself)
@@ -40,7 +43,7 @@ export function createBudgetService(
   onError: (error: unknown, tripId: string) => void = () => undefined,
 ) {
   const answers = new Map<string, BudgetAnswer>();
-  let answerChars = 0;
+  let answerBytes = 0;
   const running = new Map<string, Promise<BudgetAnswer | undefined>>();
   const tooLargeUntil = new Map<string, number>();
   const glances = new Map<string, { revision: number; figures: BudgetFigures | null; unavailable: boolean }>();
@@ -48,12 +51,12 @@ export function createBudgetService(
   function keep(key: string, answer: BudgetAnswer): void {
     if (answers.has(key)) return;
     answers.set(key, answer);
-    answerChars += sizeOf(answer);
-    while (answers.size > CACHE_ENTRIES || answerChars > CACHE_CHARS) {
+    answerBytes += sizeOf(answer);
+    while (answers.size > CACHE_ENTRIES || answerBytes > CACHE_BYTES) {
       const oldest = answers.entries().next().value;
       if (!oldest) break;
       answers.delete(oldest[0]);
-      answerChars -= sizeOf(oldest[1]);
+      answerBytes -= sizeOf(oldest[1]);
     }
   }
 
@@ -142,7 +145,9 @@ export function createBudgetService(
         if (error instanceof BudgetBusyError) return undefined;
         throw error;
       });
-      return answer?.kind === 'ok' ? (JSON.parse(answer.resultJson) as SimulationResult) : null;
+      if (answer?.kind !== 'ok') return null;
+      const { result } = JSON.parse(new TextDecoder().decode(answer.body.identity)) as { result: SimulationResult };
+      return result;
     },
 
     /** The trips list's figures for a trip at `revision`, without waiting; starts a computation when they are old. */

@@ -1,6 +1,6 @@
 // What a budget worker runs: read the stored plan from the database, check it against the engine's contract,
-// simulate it, and hand back the answer already serialised, so the server's event loop never reads, walks or
-// serialises a large plan or result.
+// simulate it, and hand back the response body already serialised and compressed, so the server's event loop never
+// reads, walks, serialises or compresses a large plan or result.
 import { openReadOnlyDatabase, type Db, type DbExecutor } from '@/db/client';
 import { findTrip, loadTripDetail } from '@/db/queries/trips';
 import { engineWeatherFor } from '@/db/queries/weather-series';
@@ -8,6 +8,7 @@ import { simulateParsed } from '@/shared/engine';
 import { lowestChargeByStop } from '@/shared/route-charge';
 import { engineInputSchema, type EngineInputDraft } from '@/shared/schemas/engine-input';
 import { toEngineInput } from '@/shared/trip-to-engine-input';
+import { readyBody, type ReadyBody } from './ready-body';
 
 /** The figures the trips list shows of a budget, with the lowest charge at each stop for the card's small map. */
 export type BudgetFigures = {
@@ -24,8 +25,19 @@ export type BudgetOutcome =
   /** The engine failed: a fault to log, not the user's doing. */
   | { kind: 'failed'; message: string };
 
+/** What the server keeps of a budget: the response body `{ version, result }`, ready in each encoding. */
+export type ReadyOutcome =
+  { kind: 'ok'; body: ReadyBody; figures: BudgetFigures } | Exclude<BudgetOutcome, { kind: 'ok' }>;
+
 /** A trip's budget and the revision of the plan it was computed from. */
-export type TripBudget = { revision: number; outcome: BudgetOutcome };
+export type TripBudget = { revision: number; outcome: ReadyOutcome };
+
+/** The budget's response body, made once per revision, so each request for it only sends bytes. */
+function readyOutcome(revision: number, outcome: BudgetOutcome): ReadyOutcome {
+  if (outcome.kind !== 'ok') return outcome;
+  const { resultJson, figures } = outcome;
+  return { kind: 'ok', figures, body: readyBody(`{"version":${revision},"result":${resultJson}}`) };
+}
 
 export function computeBudget(draft: EngineInputDraft | null): BudgetOutcome {
   if (!draft) return { kind: 'none', reason: 'Add a stop to see the budget.' };
@@ -54,7 +66,11 @@ export function computeBudget(draft: EngineInputDraft | null): BudgetOutcome {
 }
 
 /** The budget of a stored trip, or undefined when there is no such trip. */
-export function computeTripBudget(db: DbExecutor, tripId: string): TripBudget | undefined {
+export function computeTripBudget(
+  db: DbExecutor,
+  tripId: string,
+  onSimulated: () => void = () => undefined,
+): TripBudget | undefined {
   // One read transaction: the plan and its revision come from the same moment, however busy the writers are.
   const read = db.transaction(
     (tx) => {
@@ -71,18 +87,25 @@ export function computeTripBudget(db: DbExecutor, tripId: string): TripBudget | 
     },
     { behavior: 'deferred' },
   );
-  return read && { revision: read.revision, outcome: computeBudget(read.draft) };
+  if (!read) return undefined;
+  const outcome = computeBudget(read.draft);
+  onSimulated();
+  return { revision: read.revision, outcome: readyOutcome(read.revision, outcome) };
 }
 
 /** A worker's read-only connections, one per database file, opened on its first budget from that file. */
 const connections = new Map<string, Db>();
 
 /** What a worker thread runs for one task: the budget of a trip stored in the database at `databasePath`. */
-export function computeStoredBudget(databasePath: string, tripId: string): TripBudget | undefined {
+export function computeStoredBudget(
+  databasePath: string,
+  tripId: string,
+  onSimulated?: () => void,
+): TripBudget | undefined {
   let db = connections.get(databasePath);
   if (!db) {
     db = openReadOnlyDatabase(databasePath);
     connections.set(databasePath, db);
   }
-  return computeTripBudget(db, tripId);
+  return computeTripBudget(db, tripId, onSimulated);
 }

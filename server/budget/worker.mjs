@@ -7,11 +7,15 @@ const { computeStoredBudget } = await tsImport('./compute.ts', import.meta.url);
 
 /**
  * One trip's budget. `started` is told first, so the server's time limit counts the work only, not the time the
- * task waited in the queue or the worker took to start.
+ * task waited in the queue or the worker took to start, and told again once the engine is done (the body is then
+ * only written and compressed).
  * @param {{ databasePath: string; tripId: string; started: import('node:worker_threads').MessagePort }} task
  */
 export default function runBudget({ databasePath, tripId, started }) {
   started.postMessage('started');
-  started.close();
-  return computeStoredBudget(databasePath, tripId);
+  try {
+    return computeStoredBudget(databasePath, tripId, () => started.postMessage('simulated'));
+  } finally {
+    started.close();
+  }
 }

@@ -18,7 +18,13 @@ declare global {
 /** Lets a request through only with a valid session; the user is then in res.locals.user. */
 export function requireSession(auth: Auth) {
   return async (req: Request, res: Response, next: NextFunction) => {
-    const found = await auth.api.getSession({ headers: fromNodeHeaders(req.headers) });
+    const { headers, response: found } = await auth.api.getSession({
+      headers: fromNodeHeaders(req.headers),
+      returnHeaders: true,
+    });
+    // A renewed (or dropped) cached copy of the session goes back to the browser with the answer.
+    const cookies = headers.getSetCookie();
+    if (cookies.length > 0) res.append('Set-Cookie', cookies);
     if (!found) throw unauthorized();
     res.locals.user = { id: found.user.id, email: found.user.email, name: found.user.name };
     next();

@@ -2,6 +2,7 @@ import { Router } from 'express';
 import type { Db } from '@/db/client';
 import { listActivity } from '@/db/queries/trips';
 import packageJson from '@/package.json';
+import { pickEncoding } from '../accept-encoding';
 import { BudgetBusyError } from '../budget/budget-pool';
 import type { BudgetAnswer, BudgetService } from '../budget/budget-service';
 import { HttpError, notFound } from '../errors';
@@ -72,8 +73,15 @@ export function tripItemsRouter(deps: TripItemsDeps): Router {
       res.json({ version: answer.revision, result: null, reason: answer.reason });
       return;
     }
-    // The worker handed the result over as JSON already: it is sent as it is, never parsed or walked here.
-    res.type('json').send(`{"version":${answer.revision},"result":${answer.resultJson}}`);
+    // The worker handed the body over serialised and compressed: it is sent as it is, never parsed or compressed here.
+    const encoding = pickEncoding(req.headers['accept-encoding'], ['br', 'gzip']);
+    const bytes = encoding ? answer.body[encoding] : answer.body.identity;
+    res.locals.precompressed = true;
+    res.setHeader('Vary', 'Accept-Encoding');
+    if (encoding) res.setHeader('Content-Encoding', encoding);
+    res.setHeader('Content-Type', 'application/json; charset=utf-8');
+    res.setHeader('Content-Length', String(bytes.byteLength));
+    res.end(bytes);
   });
 
   // Where each stop's weather record stands; asking also queues whatever is missing.

@@ -1,0 +1,72 @@
+import { spawn, type ChildProcess } from 'node:child_process';
+import fs from 'node:fs';
+import net from 'node:net';
+import os from 'node:os';
+import path from 'node:path';
+
+// The real server as a child process, for the browser tests and the benchmarks (no test runner needed here).
+
+export type RunningServer = { url: string; dbPath: string; pid: number; stop: () => Promise<void> };
+
+/** A port nobody is listening on, so the server's public URL (checked by better-auth's origin test) is known up front. */
+async function freePort(): Promise<number> {
+  return new Promise((resolve, reject) => {
+    const probe = net.createServer();
+    probe.once('error', reject);
+    probe.listen(0, '127.0.0.1', () => {
+      const address = probe.address();
+      const port = typeof address === 'object' && address ? address.port : 0;
+      probe.close(() => resolve(port));
+    });
+  });
+}
+
+/**
+ * Starts the real server (built web app, fresh database with demo data) on a free port; `env` adds or overrides
+ * settings (a mail server of the test's own, say).
+ */
+export async function startServer(env: Record<string, string> = {}): Promise<RunningServer> {
+  const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'trailtally-e2e-'));
+  const port = await freePort();
+  const dbPath = path.join(dir, 'e2e.db');
+  const child: ChildProcess = spawn(path.resolve('node_modules/.bin/tsx'), ['server/index.ts'], {
+    env: {
+      ...process.env,
+      PORT: String(port),
+      PUBLIC_URL: `http://127.0.0.1:${port}`,
+      HOST: '127.0.0.1',
+      DATABASE_PATH: dbPath,
+      LOG_LEVEL: 'warn',
+      NODE_ENV: 'development',
+      ...env,
+    },
+    stdio: ['ignore', 'pipe', 'pipe'],
+  });
+  let output = '';
+  const url = await new Promise<string>((resolve, reject) => {
+    const timer = setTimeout(() => reject(new Error(`server did not start:\n${output}`)), 60_000);
+    const onData = (chunk: Buffer) => {
+      output += chunk.toString();
+      if (/ready at http/.test(output)) {
+        clearTimeout(timer);
+        resolve(`http://127.0.0.1:${port}`);
+      }
+    };
+    child.stdout?.on('data', onData);
+    child.stderr?.on('data', onData);
+    child.on('exit', (code) => reject(new Error(`server exited with ${code}:\n${output}`)));
+  });
+  return {
+    url,
+    dbPath,
+    pid: child.pid ?? 0,
+    stop: () =>
+      new Promise<void>((resolve) => {
+        child.once('exit', () => {
+          fs.rmSync(dir, { recursive: true, force: true });
+          resolve();
+        });
+        child.kill('SIGTERM');
+      }),
+  };
+}
