@@ -1,14 +1,16 @@
 // Flags: where the budget breaks, why, how big, and concrete fixes as data the UI can apply as an edit.
 import type { Appliance } from '../schemas/appliance';
 import { CHEMISTRY } from './battery';
-import { ceilHalf, hhmm, kwh, localIso, localShort, utcIso, whereAt, whereText } from './describe';
+import { ceilHalf, hhmm, kwh, localIso, utcIso, whereAt, whereText } from './describe';
+import { momentText, shortfallText } from './flag-text';
 import { CONTINUOUS_SHARE } from './generator';
 import { chargerDcW } from './hookup';
 import { dcCurrentA, inverterDcDrawW } from './inverter';
 import type { StepLoads } from './climate';
 import { scheduledShare } from './loads';
 import { prevDayType, type Prepared } from './prepare';
-import type { Fix, Flag } from './result-types';
+import type { Fix, Flag, FlagLowest, FlagWindow } from './result-types';
+import { localLabel, utcIsoString } from './time-grid';
 import type { LedgerColumns } from './walk';
 
 /** A portable generator assumed when the rig has none (common 2 kW class). */
@@ -85,24 +87,65 @@ function batteryFix(ctx: FlagContext, deficitWh: number): Fix {
   return { kind: 'add-battery', text: `about ${extraAh} Ah more battery at ${b.nominalV} V`, params: { extraAh } };
 }
 
-function shortfallFlags(ctx: FlagContext): Flag[] {
+/** The rows first..last on the ledger's hour grid: the first row's start and the last row's end. */
+export function windowOf(p: Prepared, first: number, last: number): FlagWindow {
+  const endMs = (p.startMs[last] ?? 0) + (p.stepH[last] ?? 1) * 3_600_000;
+  // The end is the next row's start, labelled in that row's offset (a clock change can fall between them).
+  const endOffset = p.offsetMin[last + 1] ?? p.offsetMin[last] ?? 0;
+  return {
+    firstRow: first,
+    lastRow: last,
+    startUtc: utcIso(p, first),
+    startLocal: localIso(p, first),
+    endUtc: utcIsoString(endMs),
+    endLocal: localLabel(endMs, endOffset),
+  };
+}
+
+/** The row of the lowest charge in first..last (the earliest of equals), labelled as the ledger labels it. */
+export function lowestOf(p: Prepared, l: LedgerColumns, first: number, last: number): FlagLowest {
+  let low = first;
+  for (let i = first + 1; i <= last; i++) if ((l.socPct[i] ?? 100) < (l.socPct[low] ?? 100)) low = i;
+  return { socPct: l.socPct[low] ?? 0, row: low, atUtc: utcIso(p, low), atLocal: localIso(p, low) };
+}
+
+/** The figures every flag carries, for a window of rows. */
+function flagFigures(ctx: FlagContext, first: number, last: number) {
   const { p, l, capacityWh, reservePct } = ctx;
+  const lowest = lowestOf(p, l, first, last);
+  let energyShortWh = 0;
+  for (let i = first; i <= last; i++) energyShortWh += l.energyShortWh[i] ?? 0;
+  const belowReserveWh = Math.max(0, ((reservePct - lowest.socPct) / 100) * capacityWh);
+  return {
+    atUtc: lowest.atUtc,
+    atLocal: lowest.atLocal,
+    window: windowOf(p, first, last),
+    energyShortWh,
+    belowReserveWh,
+    lowest,
+  };
+}
+
+/** The flags whose energy short the headline adds up: the battery below its reserve or empty. */
+export const isShortfall = (f: Pick<Flag, 'kind'>): boolean => f.kind === 'energy-short' || f.kind === 'below-reserve';
+
+const inShortfall = (ctx: FlagContext, i: number): boolean =>
+  (ctx.l.socPct[i] ?? 100) < ctx.reservePct - 1e-9 || (ctx.l.energyShortWh[i] ?? 0) > 0;
+
+function shortfallFlags(ctx: FlagContext): Flag[] {
+  const { p, reservePct } = ctx;
   const flags: Flag[] = [];
   let i = 0;
   while (i < p.n) {
-    if ((l.socPct[i] ?? 100) >= reservePct - 1e-9 && (l.energyShortWh[i] ?? 0) === 0) {
+    if (!inShortfall(ctx, i)) {
       i++;
       continue;
     }
     const start = i;
-    let low = i;
-    let shortWh = 0;
-    while (i < p.n && ((l.socPct[i] ?? 100) < reservePct - 1e-9 || (l.energyShortWh[i] ?? 0) > 0)) {
-      if ((l.socPct[i] ?? 100) < (l.socPct[low] ?? 100)) low = i;
-      shortWh += l.energyShortWh[i] ?? 0;
-      i++;
-    }
-    const deficitWh = ((reservePct - (l.socPct[low] ?? 0)) / 100) * capacityWh + shortWh;
+    while (i < p.n && inShortfall(ctx, i)) i++;
+    const figures = flagFigures(ctx, start, i - 1);
+    const low = figures.lowest.row;
+    const deficitWh = figures.belowReserveWh + figures.energyShortWh;
     const where = whereAt(p, low);
     const stopIndex = where.kind === 'stop' ? where.stopIndex : where.driveIndex;
     const fixes = [
@@ -111,28 +154,29 @@ function shortfallFlags(ctx: FlagContext): Flag[] {
       moveLoadFix(ctx, stopIndex),
       batteryFix(ctx, deficitWh),
     ].filter((f): f is Fix => f !== null);
-    const kind = shortWh > 0 ? 'energy-short' : 'below-reserve';
-    const what =
-      shortWh > 0
-        ? `runs the battery empty, ${kwh(shortWh)} short,`
-        : `falls ${kwh(deficitWh)} below the ${reservePct} % reserve`;
+    const kind = figures.energyShortWh > 0 ? 'energy-short' : 'below-reserve';
     flags.push({
       id: `${kind}-${start}`,
       kind,
       severity: 'danger',
-      atUtc: utcIso(p, low),
-      atLocal: localIso(p, low),
+      ...figures,
       where,
-      cause: `${capitalise(whereText(p, where))} ${what} by ${localShort(p, low)} (lowest ${(l.socPct[low] ?? 0).toFixed(0)} %)`,
-      size: { value: Math.round(deficitWh), unit: 'Wh' },
+      cause: shortfallText({
+        whereText: whereText(p, where),
+        kind,
+        energyShortWh: figures.energyShortWh,
+        belowReserveWh: figures.belowReserveWh,
+        reservePct,
+        window: figures.window,
+        lowest: figures.lowest,
+        causesText: '',
+      }),
+      // The title's figure is the text's: energy short when the battery ran empty, else the distance below reserve.
+      size: { value: Math.round(kind === 'energy-short' ? figures.energyShortWh : figures.belowReserveWh), unit: 'Wh' },
       fixes,
     });
   }
   return flags;
-}
-
-function capitalise(s: string): string {
-  return s.charAt(0).toUpperCase() + s.slice(1);
 }
 
 function overloadFlags(ctx: FlagContext): Flag[] {
@@ -155,10 +199,9 @@ function overloadFlags(ctx: FlagContext): Flag[] {
       id: `inverter-overload-${i}`,
       kind: 'inverter-overload',
       severity: 'warning',
-      atUtc: utcIso(p, i),
-      atLocal: localIso(p, i),
+      ...flagFigures(ctx, i, i),
       where,
-      cause: `At ${whereText(p, where)} around ${localShort(p, i)} the AC loads scheduled together (${names.join(', ')}) can ask ${Math.round(running)} W of a ${inv.ratedW} W inverter`,
+      cause: `At ${whereText(p, where)} at ${momentText(localIso(p, i))} the AC loads scheduled together (${names.join(', ')}) can ask ${Math.round(running)} W of a ${inv.ratedW} W inverter`,
       size: { value: Math.round(running), unit: 'W' },
       fixes: [
         {
@@ -209,10 +252,9 @@ function coldFlags(ctx: FlagContext): Flag[] {
       id: `cold-charge-blocked-${i}`,
       kind: 'cold-charge-blocked',
       severity: 'warning',
-      atUtc: utcIso(p, i),
-      atLocal: localIso(p, i),
+      ...flagFigures(ctx, i, i),
       where,
-      cause: `Below 0 °C at ${whereText(p, where)} the lithium battery must not charge; charging is held off for ${hours.toFixed(0)} h`,
+      cause: `Below 0 °C at ${whereText(p, where)} from ${momentText(localIso(p, i))} the lithium battery must not charge; charging is held off for ${hours.toFixed(0)} h`,
       size: { value: hours, unit: 'h' },
       fixes: [
         {
@@ -243,10 +285,9 @@ function propaneFlags(ctx: FlagContext): Flag[] {
       id: `propane-out-${outAt}`,
       kind: 'propane-out',
       severity: 'danger',
-      atUtc: utcIso(p, outAt),
-      atLocal: localIso(p, outAt),
+      ...flagFigures(ctx, outAt, outAt),
       where,
-      cause: `Propane runs out at ${whereText(p, where)} by ${localShort(p, outAt)}; the plan burns ${burned.toFixed(1)} kg against ${startKg.toFixed(1)} kg aboard`,
+      cause: `Propane runs out at ${whereText(p, where)} at ${momentText(localIso(p, outAt))}; the plan burns ${burned.toFixed(1)} kg against ${startKg.toFixed(1)} kg aboard`,
       size: { value: extraKg, unit: 'kg' },
       fixes: [
         { kind: 'add-propane', text: `${extraKg} kg more propane (a refill or another cylinder)`, params: { extraKg } },
@@ -267,8 +308,7 @@ function cablingFlags(ctx: FlagContext): Flag[] {
       id: 'high-dc-current',
       kind: 'high-dc-current',
       severity: 'info',
-      atUtc: utcIso(p, 0),
-      atLocal: localIso(p, 0),
+      ...flagFigures(ctx, 0, 0),
       where,
       cause: `At full output the ${inv.ratedW} W inverter draws about ${Math.round(amps)} A from the ${p.input.rig.battery.nominalV} V bank`,
       size: { value: Math.round(amps), unit: 'A' },
@@ -286,3 +326,6 @@ function cablingFlags(ctx: FlagContext): Flag[] {
 export function buildFlags(ctx: FlagContext): Flag[] {
   return [...shortfallFlags(ctx), ...propaneFlags(ctx), ...coldFlags(ctx), ...overloadFlags(ctx), ...cablingFlags(ctx)];
 }
+
+/** Whether a flag happens at a time (its header shows one); a rig's cabling current holds all trip. */
+export const hasMoment = (f: Pick<Flag, 'kind'>): boolean => f.kind !== 'high-dc-current';

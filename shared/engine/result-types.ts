@@ -105,15 +105,38 @@ export type Fix = { kind: FixKind; text: string; params: Record<string, number |
 export type FlagKind =
   'below-reserve' | 'energy-short' | 'inverter-overload' | 'cold-charge-blocked' | 'propane-out' | 'high-dc-current';
 
+/** The ledger rows a flag spans: its first and last row, and its start and end on the ledger's hour grid. */
+export type FlagWindow = {
+  firstRow: number;
+  lastRow: number;
+  /** Start of the first row. */
+  startUtc: string;
+  startLocal: string;
+  /** End of the last row (the start of the row after it). */
+  endUtc: string;
+  endLocal: string;
+};
+
+/** The lowest charge inside a flag's window: the ledger row where it is reached, labelled as the ledger labels it. */
+export type FlagLowest = { socPct: number; row: number; atUtc: string; atLocal: string };
+
 export type Flag = {
   id: string;
   kind: FlagKind;
   severity: 'danger' | 'warning' | 'info';
+  /** When the flag is shown at: its lowest charge's row (the same instant as `lowest.atUtc`). */
   atUtc: string;
   atLocal: string;
   where: Where;
+  /** The flag's text, built from the fields below by one formatter (flag-text.ts). */
   cause: string;
   size: { value: number; unit: 'Wh' | 'W' | 'A' | 'kg' | 'h' };
+  window: FlagWindow;
+  /** Energy the battery could not supply inside the window: the sum of the window's ledger rows, Wh. */
+  energyShortWh: number;
+  /** How far below the reserve the lowest charge falls, Wh (0 when it stays at or above it). */
+  belowReserveWh: number;
+  lowest: FlagLowest;
   fixes: Fix[];
 };
 

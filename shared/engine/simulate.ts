@@ -4,7 +4,7 @@ import { engineInputSchema, type EngineInput, type EngineInputDraft } from '../s
 import { CHEMISTRY } from './battery';
 import { climateLoads, type StepLoads } from './climate';
 import { localIso, utcIso, whereAt } from './describe';
-import { buildFlags } from './flags';
+import { buildFlags, isShortfall } from './flags';
 import { fuelUnit } from './fuel';
 import { prepare, type Prepared } from './prepare';
 import type { BandRun, DaySheet, Headline, LedgerRow, SimulationResult } from './result-types';
@@ -204,10 +204,12 @@ export function simulateParsed(input: EngineInput): SimulationResult {
   const r = walk(p, planned, l);
   const loads = planned.loads;
   const flags = buildFlags({ p, l, loads, capacityWh: capacityWhOf(input), reservePct: reservePctOf(input) });
+  // The headline's energy short is the flags' own figures added up, so the page shows one number for one thing.
+  const energyShortWh = flags.reduce((s, f) => (isShortfall(f) ? s + f.energyShortWh : s), 0);
   return {
     ledger: ledgerRows(p, l, solar, loads),
     days: daySheets(p, l),
-    headline: headline(p, l, r),
+    headline: { ...headline(p, l, r), energyShortWh },
     flags,
     band: input.options.skyBand ? { better: bandRun(p, -1), worse: bandRun(p, 1) } : null,
   };
