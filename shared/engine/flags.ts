@@ -9,7 +9,8 @@ import { dcCurrentA, inverterDcDrawW } from './inverter';
 import type { StepLoads } from './climate';
 import { scheduledShare } from './loads';
 import { prevDayType, type Prepared } from './prepare';
-import type { Fix, Flag, FlagLowest, FlagWindow } from './result-types';
+import { attributeDraw, causesText, drawdownStart } from './causes';
+import type { Cause, Fix, Flag, FlagLowest, FlagWindow } from './result-types';
 import { localLabel, utcIsoString } from './time-grid';
 import type { LedgerColumns } from './walk';
 
@@ -123,6 +124,8 @@ function flagFigures(ctx: FlagContext, first: number, last: number) {
     energyShortWh,
     belowReserveWh,
     lowest,
+    drawdown: { firstRow: lowest.row, lastRow: lowest.row },
+    causes: [] as Cause[],
   };
 }
 
@@ -136,6 +139,7 @@ function shortfallFlags(ctx: FlagContext): Flag[] {
   const { p, reservePct } = ctx;
   const flags: Flag[] = [];
   let i = 0;
+  let afterLast = 0;
   while (i < p.n) {
     if (!inShortfall(ctx, i)) {
       i++;
@@ -145,6 +149,9 @@ function shortfallFlags(ctx: FlagContext): Flag[] {
     while (i < p.n && inShortfall(ctx, i)) i++;
     const figures = flagFigures(ctx, start, i - 1);
     const low = figures.lowest.row;
+    figures.drawdown = { firstRow: drawdownStart(ctx.l, afterLast, low), lastRow: low };
+    figures.causes = attributeDraw(ctx, figures.drawdown.firstRow, low);
+    afterLast = i;
     const deficitWh = figures.belowReserveWh + figures.energyShortWh;
     const where = whereAt(p, low);
     const stopIndex = where.kind === 'stop' ? where.stopIndex : where.driveIndex;
@@ -169,7 +176,7 @@ function shortfallFlags(ctx: FlagContext): Flag[] {
         reservePct,
         window: figures.window,
         lowest: figures.lowest,
-        causesText: '',
+        causesText: causesText(figures.causes),
       }),
       // The title's figure is the text's: energy short when the battery ran empty, else the distance below reserve.
       size: { value: Math.round(kind === 'energy-short' ? figures.energyShortWh : figures.belowReserveWh), unit: 'Wh' },

@@ -291,7 +291,7 @@ function fillSun(p: Prepared, stops: readonly Stop[], solarConstant: number): vo
   };
 }
 
-function localStep(p: Prepared, i: number): LocalStep {
+export function localStep(p: Prepared, i: number): LocalStep {
   return {
     minuteOfDay: p.minuteOfDay[i] ?? 0,
     dayIndex: p.dayIndex[i] ?? 0,

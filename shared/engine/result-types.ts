@@ -117,6 +117,17 @@ export type FlagWindow = {
   endLocal: string;
 };
 
+/** What drew the battery down before a flag, in energy: an appliance, the inverter, or the battery's own losses. */
+export type Cause = {
+  kind: 'appliance' | 'inverter' | 'battery-loss';
+  name: string;
+  applianceId: string | null;
+  /** The battery's draw attributed to it over the draw-down, Wh. */
+  wh: number;
+  /** Its share of that draw, %. */
+  sharePct: number;
+};
+
 /** The lowest charge inside a flag's window: the ledger row where it is reached, labelled as the ledger labels it. */
 export type FlagLowest = { socPct: number; row: number; atUtc: string; atLocal: string };
 
@@ -137,6 +148,10 @@ export type Flag = {
   /** How far below the reserve the lowest charge falls, Wh (0 when it stays at or above it). */
   belowReserveWh: number;
   lowest: FlagLowest;
+  /** Rows from the highest charge before the flag to its lowest: the draw-down the causes are counted over. */
+  drawdown: { firstRow: number; lastRow: number };
+  /** The battery's draw over the draw-down by cause, largest first (shortfall flags; empty for the others). */
+  causes: Cause[];
   fixes: Fix[];
 };
 
