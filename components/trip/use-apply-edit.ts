@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import type { FixEdit } from '@/components/budget/apply-fix';
 import { ApiError } from '@/stores/queries/api-client';
+import { useScheduleSaveMutation } from '@/stores/queries/appliances';
 import { useStopSaveMutation } from '@/stores/queries/route';
 import { useTripRigSaveMutation } from '@/stores/queries/rigs';
 import { showToast } from '@/stores/toast-store';
@@ -9,6 +10,7 @@ import { showToast } from '@/stores/toast-store';
 export function useApplyEdit(tripId: string) {
   const rigSave = useTripRigSaveMutation(tripId);
   const stopSave = useStopSaveMutation(tripId);
+  const scheduleSave = useScheduleSaveMutation(tripId);
   const [busy, setBusy] = useState<string | null>(null);
 
   const apply = async (key: string, edits: FixEdit[], rigVersion: number): Promise<boolean> => {
@@ -16,6 +18,12 @@ export function useApplyEdit(tripId: string) {
     try {
       for (const edit of edits) {
         if (edit.kind === 'rig') await rigSave.mutateAsync({ version: rigVersion, rig: edit.rig });
+        else if (edit.kind === 'appliance')
+          await scheduleSave.mutateAsync({
+            applianceId: edit.record.id,
+            version: edit.record.version,
+            schedule: edit.schedule,
+          });
         else
           await stopSave.mutateAsync({
             stopId: edit.record.id,

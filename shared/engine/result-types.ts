@@ -1,4 +1,5 @@
 // The shapes simulateTrip and findHeadroom return. Plain data (numbers, strings, arrays) so they serialise.
+import type { Schedule } from '../schemas/appliance';
 import type { FuelKind } from '../schemas/rig';
 
 export type Where = { kind: 'stop'; stopIndex: number } | { kind: 'drive'; driveIndex: number };
@@ -98,9 +99,24 @@ export type FixKind =
   | 'larger-inverter'
   | 'add-propane'
   | 'keep-battery-warm'
-  | 'check-cabling';
+  | 'check-cabling'
+  | 'thermostat-setting'
+  | 'appliance-less'
+  | 'appliance-another-time'
+  | 'appliance-shore-only';
 
-export type Fix = { kind: FixKind; text: string; params: Record<string, number | string | boolean | string[]> };
+/** What walking the battery again with the fix applied gave: whether the flag clears, and the lowest charge then. */
+export type FixCheck = { clears: boolean; lowestSocPct: number };
+
+export type Fix = {
+  kind: FixKind;
+  text: string;
+  params: Record<string, number | string | boolean | string[]>;
+  /** Present on fixes that were checked by re-simulation. */
+  check?: FixCheck;
+  /** The schedule an appliance fix gives the appliance (the edit Apply sends). */
+  applianceEdit?: { applianceId: string; schedule: Schedule };
+};
 
 export type FlagKind =
   'below-reserve' | 'energy-short' | 'inverter-overload' | 'cold-charge-blocked' | 'propane-out' | 'high-dc-current';

@@ -203,7 +203,10 @@ export function simulateParsed(input: EngineInput): SimulationResult {
   const planned = plannedScenario(p, solar);
   const r = walk(p, planned, l);
   const loads = planned.loads;
-  const flags = buildFlags({ p, l, loads, capacityWh: capacityWhOf(input), reservePct: reservePctOf(input) });
+  const capacityWh = capacityWhOf(input);
+  const reservePct = reservePctOf(input);
+  const fix = { p, scenario: planned, cabinSolarW: solar.cabinSolarW, capacityWh, reservePct, trials: new Map() };
+  const flags = buildFlags({ p, l, loads, capacityWh, reservePct, fix });
   // The headline's energy short is the flags' own figures added up, so the page shows one number for one thing.
   const energyShortWh = flags.reduce((s, f) => (isShortfall(f) ? s + f.energyShortWh : s), 0);
   return {

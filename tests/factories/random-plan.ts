@@ -26,6 +26,7 @@ export const tripArb = fc.record({
   lowC: fc.integer({ min: -10, max: 25 }),
   appliances: fc.array(applianceArb, { maxLength: 6 }),
   generator: fc.boolean(),
+  timeZone: fc.constantFrom('UTC', 'Europe/London', 'America/Denver', 'Australia/Sydney', 'Pacific/Auckland'),
 });
 
 export type RandomPlan = typeof tripArb extends fc.Arbitrary<infer T> ? T : never;
@@ -47,7 +48,7 @@ export function build(t: RandomPlan): EngineInputDraft {
     name,
     lat: t.lat,
     lon: t.lon,
-    timeZone: 'UTC',
+    timeZone: t.timeZone,
     arriveAt,
     departAt,
     exposure: { kind: 'preset' as const, preset: t.exposure },
