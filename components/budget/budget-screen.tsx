@@ -23,8 +23,9 @@ import { BudgetRouteMap } from '@/components/route/route-mini-map';
 export function BudgetScreen({ detail }: { detail: TripDetail }) {
   const units = useUnits();
   const view = useBudgetView(detail);
-  const { apply, busy } = useApplyEdit(detail.trip.id);
+  const { apply, busy } = useApplyEdit(detail);
   const canEdit = can(detail.trip.role, 'editTrip');
+  const scrollKey = `budget-${detail.trip.id}`;
 
   const whatIf = (
     <WhatIfPanel
@@ -41,7 +42,7 @@ export function BudgetScreen({ detail }: { detail: TripDetail }) {
 
   if (view.state === 'loading') {
     return (
-      <TabScroll testID="budget-screen-loading">
+      <TabScroll testID="budget-screen-loading" scrollKey={scrollKey}>
         <Skeleton testID="budget-loading" height={120} />
         <Skeleton height={300} />
       </TabScroll>
@@ -49,14 +50,14 @@ export function BudgetScreen({ detail }: { detail: TripDetail }) {
   }
   if (view.state === 'error') {
     return (
-      <TabScroll testID="budget-screen-error">
+      <TabScroll testID="budget-screen-error" scrollKey={scrollKey}>
         <QueryError testID="budget-error" error={view.error} onRetry={view.retry} />
       </TabScroll>
     );
   }
   if (view.state === 'empty') {
     return (
-      <TabScroll testID="budget-screen">
+      <TabScroll testID="budget-screen" scrollKey={scrollKey}>
         <EmptyState
           testID="budget-empty"
           title="No budget yet"
@@ -68,7 +69,7 @@ export function BudgetScreen({ detail }: { detail: TripDetail }) {
   }
   const { result } = view;
   return (
-    <TabScroll testID="budget-screen">
+    <TabScroll testID="budget-screen" scrollKey={scrollKey}>
       {view.whatIf ? (
         <Banner
           testID="what-if-banner"

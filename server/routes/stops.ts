@@ -14,7 +14,7 @@ import { unwrapWrite } from './write-result';
 
 type Deps = { db: Db; now: () => Date };
 
-function assertFits(db: DbExecutor, tripId: string, stop: Stop, exceptStopId?: string): void {
+export function assertFits(db: DbExecutor, tripId: string, stop: Stop, exceptStopId?: string): void {
   const trip = findTrip(db, tripId);
   if (!trip) throw notFound('That trip was not found.');
   const others = listStopRows(db, tripId).filter((row) => row.id !== exceptStopId);

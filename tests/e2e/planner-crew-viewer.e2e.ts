@@ -124,11 +124,33 @@ describe('a trip leader at 1440 px', () => {
     expect(await shortfalls.count()).toBeGreaterThan(0);
     const shortBefore = Number((await page.textContent(byTestId('figure-short-value')))?.replace(/\D/g, ''));
     await screenshot(page, 'leader-budget-flag-desktop');
-    // Apply the first shortfall flag's battery fix until the plan holds; each applied fix must remove its flag.
+    // Apply a fix, then Undo it from the toast: the trip's records come back as they were, versions included.
+    const records = async () => {
+      const detail = (await (await page.request.get(`${suite.server.url}/api/trips/${tripId}`)).json()) as {
+        rig: unknown;
+        stops: unknown;
+        appliances: unknown;
+      };
+      return { rig: detail.rig, stops: detail.stops, appliances: detail.appliances };
+    };
+    const asItWas = await records();
+    const firstFlag = shortfalls.first();
+    const firstFlagId = (await firstFlag.getAttribute('data-testid')) ?? '';
+    await firstFlag.locator('[data-testid^="fix-"]').first().click();
+    await page.waitForSelector(byTestId('toast-action'));
+    await expect.poll(async () => JSON.stringify(await records())).not.toBe(JSON.stringify(asItWas));
+    await page.click(byTestId('toast-action'));
+    await expect.poll(async () => JSON.stringify(await records()), { timeout: 15_000 }).toBe(JSON.stringify(asItWas));
+    await expect.poll(() => page.locator(byTestId(firstFlagId)).count(), { timeout: 15_000 }).toBe(1);
+    await expect
+      .poll(async () => Number((await page.textContent(byTestId('figure-short-value')))?.replace(/\D/g, '')))
+      .toBe(shortBefore);
+    await screenshot(page, 'leader-budget-undone-desktop');
+    // Apply each shortfall flag's first fix (the ones that clear their flag come first) until the plan holds.
     for (let round = 0; round < 6 && (await shortfalls.count()) > 0; round++) {
       const flag = shortfalls.first();
       const flagId = (await flag.getAttribute('data-testid')) ?? '';
-      await flag.getByRole('button', { name: /more battery/ }).click();
+      await flag.locator('[data-testid^="fix-"]').first().click();
       await expect.poll(() => page.locator(byTestId(flagId)).count(), { timeout: 15_000 }).toBe(0);
       if (round === 0) {
         await expect
