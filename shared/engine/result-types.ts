@@ -54,7 +54,11 @@ export type DaySheet = {
   harvestWh: number;
   solarAvailableWh: number;
   useWh: number;
-  /** Harvest minus use, Wh. */
+  /** Everything that came in: solar used, hookup, vehicle and generator, Wh. */
+  sourcesWh: number;
+  /** Inverter, charger and battery losses, Wh. */
+  lossesWh: number;
+  /** All sources in minus use minus losses, Wh: what the day added to the battery, less what it could not supply. */
   netWh: number;
   hookupWh: number;
   vehicleWh: number;

@@ -105,6 +105,8 @@ function emptyDay(p: Prepared, i: number): DaySheet {
     harvestWh: 0,
     solarAvailableWh: 0,
     useWh: 0,
+    sourcesWh: 0,
+    lossesWh: 0,
     netWh: 0,
     hookupWh: 0,
     vehicleWh: 0,
@@ -140,8 +142,12 @@ function daySheets(p: Prepared, l: LedgerColumns): DaySheet[] {
     d.lowestSocPct = Math.min(d.lowestSocPct, l.socPct[i] ?? 0);
     d.endSocPct = l.socPct[i] ?? 0;
     d.energyShortWh += l.energyShortWh[i] ?? 0;
+    d.lossesWh += (l.inverterLossWh[i] ?? 0) + (l.chargerLossWh[i] ?? 0) + (l.batteryLossWh[i] ?? 0);
   }
-  for (const day of days) day.netWh = day.harvestWh - day.useWh;
+  for (const day of days) {
+    day.sourcesWh = day.harvestWh + day.hookupWh + day.vehicleWh + day.generatorWh;
+    day.netWh = day.sourcesWh - day.useWh - day.lossesWh;
+  }
   return days;
 }
 
