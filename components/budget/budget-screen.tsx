@@ -17,6 +17,7 @@ import { FlagList } from './flag-list';
 import { HeadlineFigures } from './headline-figures';
 import { SocChartCard } from './soc-chart-card';
 import { useBudgetView } from './use-budget-view';
+import { WhatItWouldTake } from './what-it-would-take';
 import { editsForWhatIf, WhatIfPanel } from './what-if-panel';
 import { BudgetRouteMap } from '@/components/route/route-mini-map';
 
@@ -89,6 +90,7 @@ export function BudgetScreen({ detail }: { detail: TripDetail }) {
           <View style={styles.column}>
             <BudgetRouteMap detail={detail} result={result} />
             {whatIf}
+            {view.whatIf ? null : <WhatItWouldTake detail={detail} />}
             <FlagList
               flags={result.flags}
               days={result.days}

@@ -4,7 +4,9 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { solarReadout } from '@/components/budget/solar-readout';
 import { netIsWarning } from '@/components/ledger/day-net';
-import { simulateTrip } from '@/shared/engine';
+import { findHeadroom, simulateTrip } from '@/shared/engine';
+import { fiveNightTrip } from '@/tests/fixtures/five-night-trip';
+import { leverLine } from '@/components/budget/headroom-lines';
 import type { SimulationResult } from '@/shared/engine/result-types';
 import { build, tripArb } from '@/tests/factories/random-plan';
 import { GOLDEN_CASES } from '../shared/golden-inputs';
@@ -73,5 +75,17 @@ describe('chart readout solar', () => {
     expect(solarReadout({ solarAvailableWh: 20, solarUsedWh: 20, solarWastedWh: 0, socPct: 60 }).batteryFull).toBe(
       false,
     );
+  });
+});
+
+describe('what it would take', () => {
+  it('when the five-night trip is searched, then every lever gives its lowest charge or says why it cannot fix', () => {
+    const h = findHeadroom(fiveNightTrip);
+    expect(h.needed).toBe(true);
+    for (const lever of h.levers) {
+      const line = leverLine(lever);
+      if (lever.status === 'found') expect(line.text).toMatch(/lowest charge then \d+ %$/);
+      if (lever.status === 'cannot-fix') expect(line.text).toMatch(/^cannot fix: .+\(lowest \d+ %\)$/);
+    }
   });
 });
