@@ -146,20 +146,23 @@ describe('a trip leader at 1440 px', () => {
       .poll(async () => Number((await page.textContent(byTestId('figure-short-value')))?.replace(/\D/g, '')))
       .toBe(shortBefore);
     await screenshot(page, 'leader-budget-undone-desktop');
-    // Apply each shortfall flag's first fix (the ones that clear their flag come first) until the plan holds.
-    for (let round = 0; round < 6 && (await shortfalls.count()) > 0; round++) {
+    // Apply the first flag's first fix a few times: fixes are capped at what the rig can carry, so each one must
+    // lower the energy short, and the ones that clear their flag remove it.
+    let shortNow = shortBefore;
+    for (let round = 0; round < 3 && (await shortfalls.count()) > 0; round++) {
       const flag = shortfalls.first();
+      const clears = !((await flag.textContent()) ?? '').includes('helps, not enough alone');
       const flagId = (await flag.getAttribute('data-testid')) ?? '';
       await flag.locator('[data-testid^="fix-"]').first().click();
-      await expect.poll(() => page.locator(byTestId(flagId)).count(), { timeout: 15_000 }).toBe(0);
-      if (round === 0) {
-        await expect
-          .poll(async () => Number((await page.textContent(byTestId('figure-short-value')))?.replace(/\D/g, '')))
-          .toBeLessThan(shortBefore);
-      }
+      if (clears) await expect.poll(() => page.locator(byTestId(flagId)).count(), { timeout: 15_000 }).toBe(0);
+      const before = shortNow;
+      await expect
+        .poll(async () => Number((await page.textContent(byTestId('figure-short-value')))?.replace(/\D/g, '')), {
+          timeout: 15_000,
+        })
+        .toBeLessThan(before);
+      shortNow = Number((await page.textContent(byTestId('figure-short-value')))?.replace(/\D/g, ''));
     }
-    await expect.poll(() => shortfalls.count()).toBe(0);
-    expect(await page.textContent(byTestId('figure-short-value'))).toBe('0');
     await screenshot(page, 'leader-budget-fixed-desktop');
     expect(errors).toEqual([]);
     await page.close();
