@@ -1,14 +1,16 @@
 // Turns an engine Fix into the edit that carries it out, or null when the fix is advice only
-// (staggering appliances, checking cables). Pure, so it is tested without a screen.
+// (staggering appliances, checking cables). Appliance fixes carry the schedule the engine checked. Pure, so it is tested without a screen.
 import { ASSUMED_GENERATOR_W } from '@/shared/engine/flags';
 import type { DaySheet, Fix } from '@/shared/engine/result-types';
-import type { StopRecord, TripDetail } from '@/shared/schemas/api';
+import type { Schedule } from '@/shared/schemas/appliance';
+import type { ApplianceRecord, StopRecord, TripDetail } from '@/shared/schemas/api';
 import type { RoutineWindow } from '@/shared/schemas/common';
 import type { RigInput } from '@/shared/schemas/rig';
 
 export type FixEdit =
   | { kind: 'rig'; rig: RigInput; summary: string }
-  | { kind: 'stop'; record: StopRecord; stop: StopRecord['stop']; summary: string };
+  | { kind: 'stop'; record: StopRecord; stop: StopRecord['stop']; summary: string }
+  | { kind: 'appliance'; record: ApplianceRecord; schedule: Schedule; summary: string };
 
 const num = (v: unknown): number | null => (typeof v === 'number' && Number.isFinite(v) ? v : null);
 
@@ -20,16 +22,18 @@ export function dayIndexesAtStop(days: DaySheet[], stopIndex: number): number[] 
 function generatorEdit(detail: TripDetail, fix: Fix, days: DaySheet[]): FixEdit | null {
   const stopIndex = num(fix.params.stopIndex);
   const hours = num(fix.params.hours);
-  const startHour = num(fix.params.startHour) ?? 8;
-  if (stopIndex === null || hours === null) return null;
-  const dayIndexes = dayIndexesAtStop(days, stopIndex);
+  const startHour = num(fix.params.startHour);
+  if (stopIndex === null || hours === null || startHour === null) return null;
+  // The engine names the days it checked the fix on; the day sheets are the fallback for older results.
+  const named = Array.isArray(fix.params.dayIndexes) ? fix.params.dayIndexes.map(Number) : [];
+  const dayIndexes = named.length > 0 ? named : dayIndexesAtStop(days, stopIndex);
   if (dayIndexes.length === 0) return null;
+  // Exactly the window the engine walked: the last quarter hours before the allowed end.
   const window: RoutineWindow = {
     days: { kind: 'trip-days', dayIndexes },
-    // Run in the evening part of the allowed hours, when the battery is lowest after sunset.
-    startHour: Math.max(startHour, Math.min(23, (num(fix.params.endHour) ?? 20) - Math.ceil(hours))),
-    startMinute: 0,
-    minutes: Math.max(1, Math.min(1440, Math.round(hours * 60))),
+    startHour,
+    startMinute: num(fix.params.startMinute) ?? 0,
+    minutes: Math.max(15, Math.min(1440, num(fix.params.minutes) ?? Math.round(hours * 60))),
   };
   const rig = detail.rig.rig;
   const current = rig.generator;
@@ -107,6 +111,20 @@ export function editForFix(detail: TripDetail, fix: Fix, days: DaySheet[]): FixE
     }
     case 'add-generator-hours':
       return generatorEdit(detail, fix, days);
+    case 'thermostat-setting':
+    case 'appliance-less':
+    case 'appliance-another-time':
+    case 'appliance-shore-only': {
+      const change = fix.applianceEdit;
+      const record = change ? detail.appliances.find((a) => a.id === change.applianceId) : undefined;
+      if (!change || !record) return null;
+      return {
+        kind: 'appliance',
+        record,
+        schedule: change.schedule,
+        summary: `${record.appliance.name}: ${fix.text.split(' — ')[0] ?? fix.text}`,
+      };
+    }
     default:
       return null;
   }

@@ -19,6 +19,7 @@ import { HeadlineFigures } from './headline-figures';
 import { PlanChance } from './plan-chance';
 import { SocChartCard } from './soc-chart-card';
 import { useBudgetView } from './use-budget-view';
+import { WhatItWouldTake } from './what-it-would-take';
 import { editsForWhatIf, WhatIfPanel } from './what-if-panel';
 import { BudgetRouteMap } from '@/components/route/route-mini-map';
 
@@ -27,8 +28,9 @@ export function BudgetScreen({ detail }: { detail: TripDetail }) {
   // Watches the stops' weather records: the budget is fetched again as they arrive.
   useTripWeatherQuery(detail.trip.id);
   const view = useBudgetView(detail);
-  const { apply, busy } = useApplyEdit(detail.trip.id);
+  const { apply, busy } = useApplyEdit(detail);
   const canEdit = can(detail.trip.role, 'editTrip');
+  const scrollKey = `budget-${detail.trip.id}`;
 
   const whatIf = (
     <WhatIfPanel
@@ -45,7 +47,7 @@ export function BudgetScreen({ detail }: { detail: TripDetail }) {
 
   if (view.state === 'loading') {
     return (
-      <TabScroll testID="budget-screen-loading">
+      <TabScroll testID="budget-screen-loading" scrollKey={scrollKey}>
         <Skeleton testID="budget-loading" height={120} />
         <Skeleton height={300} />
       </TabScroll>
@@ -53,14 +55,14 @@ export function BudgetScreen({ detail }: { detail: TripDetail }) {
   }
   if (view.state === 'error') {
     return (
-      <TabScroll testID="budget-screen-error">
+      <TabScroll testID="budget-screen-error" scrollKey={scrollKey}>
         <QueryError testID="budget-error" error={view.error} onRetry={view.retry} />
       </TabScroll>
     );
   }
   if (view.state === 'empty') {
     return (
-      <TabScroll testID="budget-screen">
+      <TabScroll testID="budget-screen" scrollKey={scrollKey}>
         <EmptyState
           testID="budget-empty"
           title="No budget yet"
@@ -72,7 +74,7 @@ export function BudgetScreen({ detail }: { detail: TripDetail }) {
   }
   const { result } = view;
   return (
-    <TabScroll testID="budget-screen">
+    <TabScroll testID="budget-screen" scrollKey={scrollKey}>
       {view.whatIf ? (
         <Banner
           testID="what-if-banner"
@@ -93,6 +95,7 @@ export function BudgetScreen({ detail }: { detail: TripDetail }) {
           <View style={styles.column}>
             <BudgetRouteMap detail={detail} result={result} />
             {whatIf}
+            {view.whatIf ? null : <WhatItWouldTake detail={detail} />}
             <FlagList
               flags={result.flags}
               days={result.days}

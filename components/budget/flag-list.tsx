@@ -1,12 +1,13 @@
 import { StyleSheet, View } from 'react-native';
-import { localMoment } from '@/components/format/time';
 import { colors, radii, space } from '@/components/theme/tokens';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { Caution } from '@/components/ui/cautions';
 import { Text } from '@/components/ui/text';
 import type { DaySheet, Flag } from '@/shared/engine/result-types';
-import { FLAG_TITLE } from '@/shared/flag-titles';
+import { momentText } from '@/shared/engine/flag-text';
+import { hasMoment } from '@/shared/engine/flags';
+import { flagTitle } from '@/shared/flag-titles';
 import type { TripDetail } from '@/shared/schemas/api';
 import { editForFix } from './apply-fix';
 
@@ -53,11 +54,12 @@ export function FlagList({ flags, days, detail, canEdit, readOnlyReason, busyKey
               </Text>
             </View>
             <Text variant="label" color={flag.severity === 'danger' ? 'ember' : 'ink'} style={styles.title}>
-              {FLAG_TITLE[flag.kind]} · {flag.size.value.toLocaleString('en-GB')} {flag.size.unit}
+              {flagTitle(flag)}
             </Text>
           </View>
           <Text variant="caption" color="inkSoft">
-            {localMoment(flag.atLocal)} at {where(flag)}
+            {hasMoment(flag) ? `${momentText(flag.atLocal)} at ` : ''}
+            {where(flag)}
           </Text>
           <Text>{flag.cause}</Text>
           {flag.fixes.map((fix, i) => {

@@ -13,6 +13,7 @@ import type { SimulationResult } from '@/shared/engine/result-types';
 import type { StopRecord } from '@/shared/schemas/api';
 import { SocChartSurface } from './soc-chart';
 import { dayRange, socSeries, wholeTrip, type SocSeries } from './soc-series';
+import { solarReadout } from './solar-readout';
 
 type Props = { result: SimulationResult; stops: StopRecord[] };
 
@@ -91,6 +92,7 @@ export function SocChartCard({ result, stops }: Props) {
   const series = socSeries(result);
   const range = day === null || !series.days[day] ? wholeTrip(series) : dayRange(series, day);
   const row = selected === null ? undefined : result.ledger[selected];
+  const solar = row ? solarReadout(row) : null;
   const step = (by: number) =>
     setSelected((s) => {
       const from = s === null || s < range.from || s > range.to ? (by > 0 ? range.from - 1 : range.to + 1) : s;
@@ -146,8 +148,9 @@ export function SocChartCard({ result, stops }: Props) {
             <Text variant="label">{localMoment(row.local)}</Text>
             <Text variant="caption" color="inkSoft">
               {row.where.kind === 'stop' ? stopName(row.where.stopIndex) : 'On the road'} · charge{' '}
-              {text(percent(row.socPct))} · solar {text(energy(row.solarUsedWh))} · use{' '}
-              {text(energy(row.acLoadWh + row.dcLoadWh))}
+              {text(percent(row.socPct))} · solar {text(energy(solar?.availableWh ?? 0))} available,{' '}
+              {text(energy(solar?.usedWh ?? 0))} used, {text(energy(solar?.wastedWh ?? 0))} wasted
+              {solar?.batteryFull ? ' (battery full)' : ''} · use {text(energy(row.acLoadWh + row.dcLoadWh))}
               {row.hookupWh > 0 ? ` · hookup ${text(energy(row.hookupWh))}` : ''}
               {row.generatorWh > 0 ? ` · generator ${text(energy(row.generatorWh))}` : ''}
               {row.energyShortWh > 0 ? ` · short ${text(energy(row.energyShortWh))}` : ''}

@@ -3,6 +3,7 @@ import { localDay } from '@/components/format/time';
 import { colors, fonts, radii, space } from '@/components/theme/tokens';
 import { Text } from '@/components/ui/text';
 import type { DaySheet } from '@/shared/engine/result-types';
+import { netIsWarning } from './day-net';
 
 type Figure = { label: string; value: string; unit: string; warn?: boolean };
 
@@ -15,8 +16,9 @@ export function DayCards({ days, names, reservePct }: { days: DaySheet[]; names:
       {days.map((d) => {
         const figures: Figure[] = [
           { label: 'Harvest', value: wh(d.harvestWh), unit: 'Wh' },
+          { label: 'All sources', value: wh(d.sourcesWh), unit: 'Wh' },
           { label: 'Use', value: wh(d.useWh), unit: 'Wh' },
-          { label: 'Net', value: wh(d.netWh), unit: 'Wh', warn: d.netWh < 0 },
+          { label: 'Net', value: wh(d.netWh), unit: 'Wh', warn: netIsWarning(d) },
           { label: 'Lowest', value: String(Math.round(d.lowestSocPct)), unit: '%', warn: d.lowestSocPct < reservePct },
           { label: 'Generator', value: d.generatorHours.toFixed(1), unit: 'h' },
           { label: 'Short', value: wh(d.energyShortWh), unit: 'Wh', warn: d.energyShortWh > 0 },

@@ -17,6 +17,7 @@ import { Text } from '@/components/ui/text';
 import type { LedgerRow } from '@/shared/engine/result-types';
 import type { TripDetail } from '@/shared/schemas/api';
 import { DayCards } from './day-cards';
+import { netIsWarning } from './day-net';
 import { useUnits } from '@/stores/units-store';
 import { daysCsv, filterLedger, ledgerCsv } from './ledger-csv';
 import { downloadFile } from './download-file';
@@ -150,9 +151,17 @@ export function LedgerScreen({ detail }: { detail: TripDetail }) {
               <Row
                 table
                 header
-                cells={['Day', 'Stops', 'Harvest Wh', 'Use Wh', 'Net Wh', 'Generator h', 'Lowest %', 'Short Wh'].map(
-                  (t, i) => ({ text: t, width: i === 0 ? 110 : i === 1 ? 200 : 90 }),
-                )}
+                cells={[
+                  'Day',
+                  'Stops',
+                  'Harvest Wh',
+                  'All sources Wh',
+                  'Use Wh',
+                  'Net Wh',
+                  'Generator h',
+                  'Lowest %',
+                  'Short Wh',
+                ].map((t, i) => ({ text: t, width: i === 0 ? 110 : i === 1 ? 200 : 90 }))}
               />
               {result.days.map((d) => (
                 <Row
@@ -163,8 +172,9 @@ export function LedgerScreen({ detail }: { detail: TripDetail }) {
                     { text: localDay(`${d.date}T12:00`), width: 110 },
                     { text: d.travel ? 'travel day' : d.stopIndexes.map((i) => names[i] ?? '').join(', '), width: 200 },
                     { text: wh(d.harvestWh), width: 90 },
+                    { text: wh(d.sourcesWh), width: 90 },
                     { text: wh(d.useWh), width: 90 },
-                    { text: String(Math.round(d.netWh)), width: 90, tone: d.netWh < 0 ? 'ember' : 'ink' },
+                    { text: String(Math.round(d.netWh)), width: 90, tone: netIsWarning(d) ? 'ember' : 'ink' },
                     { text: d.generatorHours.toFixed(1), width: 90 },
                     {
                       text: String(Math.round(d.lowestSocPct)),

@@ -34,6 +34,7 @@ export function rigToColumns(rig: Rig) {
     cabinHeightM: rig.cabin.heightM,
     insulation: rig.cabin.insulation,
     occupants: rig.cabin.occupants,
+    roofAreaM2: rig.cabin.roofAreaM2 ?? null,
   };
 }
 
@@ -62,6 +63,7 @@ export function rigFromRow(row: RigRow): Rig {
       heightM: row.cabinHeightM,
       insulation: row.insulation,
       occupants: row.occupants,
+      ...(row.roofAreaM2 === null ? {} : { roofAreaM2: row.roofAreaM2 }),
     },
   };
 }

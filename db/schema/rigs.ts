@@ -49,6 +49,8 @@ export const rigs = sqliteTable(
       .notNull()
       .default('standard'),
     occupants: integer('occupants').notNull().default(2),
+    /** Roof area that could carry panels, m²; null reads as length × width (caps the solar a fix may add). */
+    roofAreaM2: real('roof_area_m2'),
     version: integer('version').notNull().default(1),
     createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull(),
     updatedAt: integer('updated_at', { mode: 'timestamp_ms' }).notNull(),

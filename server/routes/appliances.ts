@@ -27,7 +27,7 @@ function assertCaretakerIsMember(db: DbExecutor, tripId: string, caretakerUserId
 }
 
 /** Trip days a routine names must be days of this trip. */
-function assertScheduleInTrip(db: DbExecutor, tripId: string, schedule: Schedule, field: string): void {
+export function assertScheduleInTrip(db: DbExecutor, tripId: string, schedule: Schedule, field: string): void {
   const trip = findTrip(db, tripId);
   if (!trip) throw notFound('That trip was not found.');
   const breach = checkScheduleInTrip(trip, schedule, field);

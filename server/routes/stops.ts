@@ -15,7 +15,7 @@ import type { WeatherQueue } from '../weather/weather-queue';
 
 type Deps = { db: Db; now: () => Date; weather: WeatherQueue };
 
-function assertFits(db: DbExecutor, tripId: string, stop: Stop, exceptStopId?: string): void {
+export function assertFits(db: DbExecutor, tripId: string, stop: Stop, exceptStopId?: string): void {
   const trip = findTrip(db, tripId);
   if (!trip) throw notFound('That trip was not found.');
   const others = listStopRows(db, tripId).filter((row) => row.id !== exceptStopId);

@@ -12,6 +12,7 @@ import { drivesRouter } from './drives';
 import { membersRouter } from './members';
 import { stopsRouter } from './stops';
 import { tripRigRouter } from './trip-rig';
+import { tripUndoRouter } from './trip-undo';
 import { tripInvitesRouter } from './trip-invites';
 import { tripSharesRouter } from './trip-shares';
 import { tripExportsRouter } from './trip-exports';
@@ -43,6 +44,7 @@ export function tripItemsRouter(deps: TripItemsDeps): Router {
   router.use('/invites', tripInvitesRouter(deps));
   router.use('/shares', tripSharesRouter(deps));
   router.use(tripExportsRouter(deps));
+  router.use(tripUndoRouter(deps));
 
   router.get('/budget', async (req, res) => {
     let answer: BudgetAnswer | undefined;

@@ -1,9 +1,7 @@
 // Words and labels for results: where a step is, and local times for cause texts.
 import type { Prepared } from './prepare';
 import type { Where } from './result-types';
-import { localDayNumber, localLabel, utcIsoString } from './time-grid';
-
-const WEEKDAYS = ['Thu', 'Fri', 'Sat', 'Sun', 'Mon', 'Tue', 'Wed'] as const; // 1970-01-01 was a Thursday
+import { localLabel, utcIsoString } from './time-grid';
 
 export function whereAt(p: Prepared, i: number): Where {
   const w = p.where[i] ?? 0;
@@ -24,15 +22,6 @@ export function utcIso(p: Prepared, i: number): string {
 
 export function localIso(p: Prepared, i: number): string {
   return localLabel(p.startMs[i] ?? 0, p.offsetMin[i] ?? 0);
-}
-
-/** "Thu 21:00" at the end of step i, in the place's zone. */
-export function localShort(p: Prepared, i: number): string {
-  // The offset of step i applies to its end too, except across a clock change, where an hour's label slip is harmless.
-  const ms = (p.startMs[i] ?? 0) + (p.stepH[i] ?? 1) * 3_600_000;
-  const off = p.offsetMin[i] ?? 0;
-  const day = WEEKDAYS[((localDayNumber(ms, off) % 7) + 7) % 7] ?? '';
-  return `${day} ${localLabel(ms, off).slice(11, 16)}`;
 }
 
 export function hhmm(hour: number): string {

@@ -1,138 +1,119 @@
+export { ASSUMED_GENERATOR_W } from './fixes';
 // Flags: where the budget breaks, why, how big, and concrete fixes as data the UI can apply as an edit.
 import type { Appliance } from '../schemas/appliance';
-import { CHEMISTRY } from './battery';
-import { ceilHalf, hhmm, kwh, localIso, localShort, utcIso, whereAt, whereText } from './describe';
-import { CONTINUOUS_SHARE } from './generator';
-import { chargerDcW } from './hookup';
+import { localIso, utcIso, whereAt, whereText } from './describe';
+import { momentText, shortfallText } from './flag-text';
+import { shoreOnlySchedule, shortfallFixes, type FixContext } from './fixes';
 import { dcCurrentA, inverterDcDrawW } from './inverter';
 import type { StepLoads } from './climate';
 import { scheduledShare } from './loads';
 import { prevDayType, type Prepared } from './prepare';
-import type { Fix, Flag } from './result-types';
+import { attributeDraw, causesText, drawdownStart } from './causes';
+import type { Cause, Fix, Flag, FlagLowest, FlagWindow } from './result-types';
+import { localLabel, utcIsoString } from './time-grid';
 import type { LedgerColumns } from './walk';
 
-/** A portable generator assumed when the rig has none (common 2 kW class). */
-export const ASSUMED_GENERATOR_W = 2000;
-const NIGHT_HOURS = 14; // a pitch night, afternoon arrival to morning departure
 const HIGH_CURRENT_A = 150;
 
-export type FlagContext = { p: Prepared; l: LedgerColumns; loads: StepLoads; capacityWh: number; reservePct: number };
+export type FlagContext = {
+  p: Prepared;
+  l: LedgerColumns;
+  loads: StepLoads;
+  capacityWh: number;
+  reservePct: number;
+  /** The planned scenario and what fixes need to walk variations of it. */
+  fix: FixContext;
+};
 
-function chargeV(p: Prepared): number {
-  const b = p.input.rig.battery;
-  return b.nominalV * CHEMISTRY[b.chemistry].chargeVoltageRatio;
-}
-
-function generatorFix(ctx: FlagContext, stopIndex: number, deficitWh: number): Fix | null {
-  const { p } = ctx;
-  const stop = p.input.trip.stops[stopIndex];
-  const charger = p.input.rig.shoreCharger;
-  if (!stop?.generatorHours || !charger) return null;
-  const genW = (p.input.rig.generator?.ratedW ?? ASSUMED_GENERATOR_W) * CONTINUOUS_SHARE;
-  const rateW = chargerDcW(genW, charger.amps, chargeV(p), charger.efficiency);
-  const hours = ceilHalf(deficitWh / rateW);
-  const { startHour, endHour } = stop.generatorHours;
-  const what = p.input.rig.generator ? 'generator' : `a ${ASSUMED_GENERATOR_W} W portable generator`;
+/** The rows first..last on the ledger's hour grid: the first row's start and the last row's end. */
+export function windowOf(p: Prepared, first: number, last: number): FlagWindow {
+  const endMs = (p.startMs[last] ?? 0) + (p.stepH[last] ?? 1) * 3_600_000;
+  // The end is the next row's start, labelled in that row's offset (a clock change can fall between them).
+  const endOffset = p.offsetMin[last + 1] ?? p.offsetMin[last] ?? 0;
   return {
-    kind: 'add-generator-hours',
-    text: `${hours} h of ${what} inside ${hhmm(startHour)}–${hhmm(endHour)} at stop ${stopIndex + 1}`,
-    params: { stopIndex, hours, startHour, endHour, assumedGenerator: !p.input.rig.generator },
+    firstRow: first,
+    lastRow: last,
+    startUtc: utcIso(p, first),
+    startLocal: localIso(p, first),
+    endUtc: utcIsoString(endMs),
+    endLocal: localLabel(endMs, endOffset),
   };
 }
 
-function hookupFix(ctx: FlagContext, stopIndex: number, deficitWh: number): Fix | null {
-  const { p } = ctx;
-  const charger = p.input.rig.shoreCharger;
-  const stop = p.input.trip.stops[stopIndex];
-  if (!charger || !stop || stop.hookup) return null;
-  const h = p.input.options.assumedHookup;
-  const perNightWh = chargerDcW(h.amps * h.volts, charger.amps, chargeV(p), charger.efficiency) * NIGHT_HOURS;
-  const nights = Math.max(1, Math.ceil(deficitWh / perNightWh));
+/** The row of the lowest charge in first..last (the earliest of equals), labelled as the ledger labels it. */
+export function lowestOf(p: Prepared, l: LedgerColumns, first: number, last: number): FlagLowest {
+  let low = first;
+  for (let i = first + 1; i <= last; i++) if ((l.socPct[i] ?? 100) < (l.socPct[low] ?? 100)) low = i;
+  return { socPct: l.socPct[low] ?? 0, row: low, atUtc: utcIso(p, low), atLocal: localIso(p, low) };
+}
+
+/** The figures every flag carries, for a window of rows. */
+function flagFigures(ctx: FlagContext, first: number, last: number) {
+  const { p, l, capacityWh, reservePct } = ctx;
+  const lowest = lowestOf(p, l, first, last);
+  let energyShortWh = 0;
+  for (let i = first; i <= last; i++) energyShortWh += l.energyShortWh[i] ?? 0;
+  const belowReserveWh = Math.max(0, ((reservePct - lowest.socPct) / 100) * capacityWh);
   return {
-    kind: 'add-hookup-night',
-    text: `${nights === 1 ? 'a hookup night' : `${nights} hookup nights`} at stop ${stopIndex + 1} (${h.amps} A)`,
-    params: { stopIndex, nights, amps: h.amps, volts: h.volts },
+    atUtc: lowest.atUtc,
+    atLocal: lowest.atLocal,
+    window: windowOf(p, first, last),
+    energyShortWh,
+    belowReserveWh,
+    lowest,
+    drawdown: { firstRow: lowest.row, lastRow: lowest.row },
+    causes: [] as Cause[],
   };
 }
 
-function applianceWhAtStop(p: Prepared, applianceIndex: number, stopIndex: number): number {
-  return p.applianceStopWh[applianceIndex * p.input.trip.stops.length + stopIndex] ?? 0;
-}
+/** The flags whose energy short the headline adds up: the battery below its reserve or empty. */
+export const isShortfall = (f: Pick<Flag, 'kind'>): boolean => f.kind === 'energy-short' || f.kind === 'below-reserve';
 
-function moveLoadFix(ctx: FlagContext, stopIndex: number): Fix | null {
-  const { p } = ctx;
-  const drives = p.input.trip.drives.length;
-  if (drives === 0) return null;
-  let best: { a: Appliance; wh: number } | null = null;
-  for (const [j, a] of p.input.appliances.entries()) {
-    if (a.schedule.kind !== 'routine') continue;
-    const wh = applianceWhAtStop(p, j, stopIndex);
-    if (wh > 0 && (!best || wh > best.wh)) best = { a, wh };
-  }
-  if (!best) return null;
-  const driveIndex = Math.min(stopIndex, drives - 1);
-  return {
-    kind: 'move-appliance-to-drive',
-    text: `move the ${best.a.name.toLowerCase()} (${kwh(best.wh)} at this stop) to the drive`,
-    params: { applianceId: best.a.id, driveIndex, savesWh: Math.round(best.wh) },
-  };
-}
-
-function batteryFix(ctx: FlagContext, deficitWh: number): Fix {
-  const b = ctx.p.input.rig.battery;
-  const usableShare = 1 - ctx.reservePct / 100;
-  const extraAh = Math.ceil(deficitWh / usableShare / b.nominalV / 10) * 10;
-  return { kind: 'add-battery', text: `about ${extraAh} Ah more battery at ${b.nominalV} V`, params: { extraAh } };
-}
+const inShortfall = (ctx: FlagContext, i: number): boolean =>
+  (ctx.l.socPct[i] ?? 100) < ctx.reservePct - 1e-9 || (ctx.l.energyShortWh[i] ?? 0) > 0;
 
 function shortfallFlags(ctx: FlagContext): Flag[] {
-  const { p, l, capacityWh, reservePct } = ctx;
+  const { p, reservePct } = ctx;
   const flags: Flag[] = [];
   let i = 0;
+  let afterLast = 0;
   while (i < p.n) {
-    if ((l.socPct[i] ?? 100) >= reservePct - 1e-9 && (l.energyShortWh[i] ?? 0) === 0) {
+    if (!inShortfall(ctx, i)) {
       i++;
       continue;
     }
     const start = i;
-    let low = i;
-    let shortWh = 0;
-    while (i < p.n && ((l.socPct[i] ?? 100) < reservePct - 1e-9 || (l.energyShortWh[i] ?? 0) > 0)) {
-      if ((l.socPct[i] ?? 100) < (l.socPct[low] ?? 100)) low = i;
-      shortWh += l.energyShortWh[i] ?? 0;
-      i++;
-    }
-    const deficitWh = ((reservePct - (l.socPct[low] ?? 0)) / 100) * capacityWh + shortWh;
+    while (i < p.n && inShortfall(ctx, i)) i++;
+    const figures = flagFigures(ctx, start, i - 1);
+    const low = figures.lowest.row;
+    figures.drawdown = { firstRow: drawdownStart(ctx.l, afterLast, low), lastRow: low };
+    figures.causes = attributeDraw(ctx, figures.drawdown.firstRow, low);
+    afterLast = i;
     const where = whereAt(p, low);
-    const stopIndex = where.kind === 'stop' ? where.stopIndex : where.driveIndex;
-    const fixes = [
-      generatorFix(ctx, stopIndex, deficitWh),
-      hookupFix(ctx, stopIndex, deficitWh),
-      moveLoadFix(ctx, stopIndex),
-      batteryFix(ctx, deficitWh),
-    ].filter((f): f is Fix => f !== null);
-    const kind = shortWh > 0 ? 'energy-short' : 'below-reserve';
-    const what =
-      shortWh > 0
-        ? `runs the battery empty, ${kwh(shortWh)} short,`
-        : `falls ${kwh(deficitWh)} below the ${reservePct} % reserve`;
+    const kind = figures.energyShortWh > 0 ? 'energy-short' : 'below-reserve';
     flags.push({
       id: `${kind}-${start}`,
       kind,
       severity: 'danger',
-      atUtc: utcIso(p, low),
-      atLocal: localIso(p, low),
+      ...figures,
       where,
-      cause: `${capitalise(whereText(p, where))} ${what} by ${localShort(p, low)} (lowest ${(l.socPct[low] ?? 0).toFixed(0)} %)`,
-      size: { value: Math.round(deficitWh), unit: 'Wh' },
-      fixes,
+      cause: shortfallText({
+        whereText: whereText(p, where),
+        kind,
+        energyShortWh: figures.energyShortWh,
+        belowReserveWh: figures.belowReserveWh,
+        reservePct,
+        window: figures.window,
+        lowest: figures.lowest,
+        causesText: causesText(figures.causes),
+      }),
+      // The title's figure is the text's: energy short when the battery ran empty, else the distance below reserve.
+      size: { value: Math.round(kind === 'energy-short' ? figures.energyShortWh : figures.belowReserveWh), unit: 'Wh' },
+      fixes: [],
     });
   }
+  for (const flag of flags) flag.fixes = shortfallFixes(ctx.fix, flag);
   return flags;
-}
-
-function capitalise(s: string): string {
-  return s.charAt(0).toUpperCase() + s.slice(1);
 }
 
 function overloadFlags(ctx: FlagContext): Flag[] {
@@ -149,25 +130,18 @@ function overloadFlags(ctx: FlagContext): Flag[] {
     if (!over) continue;
     seen.add(p.where[i] ?? 0);
     const where = whereAt(p, i);
-    const names = overlappingAc(ctx, i);
-    const ratedW = Math.ceil(Math.max(running, (running + (loads.acSurgeExtraW[i] ?? 0)) / 2) / 500) * 500;
+    const together = runningAc(ctx, i);
+    const names = together.map((a) => a.name.toLowerCase());
+    const ratedW = nextInverterW(Math.max(running, (running + (loads.acSurgeExtraW[i] ?? 0)) / 2));
     flags.push({
       id: `inverter-overload-${i}`,
       kind: 'inverter-overload',
       severity: 'warning',
-      atUtc: utcIso(p, i),
-      atLocal: localIso(p, i),
+      ...flagFigures(ctx, i, i),
       where,
-      cause: `At ${whereText(p, where)} around ${localShort(p, i)} the AC loads scheduled together (${names.join(', ')}) can ask ${Math.round(running)} W of a ${inv.ratedW} W inverter`,
+      cause: `At ${whereText(p, where)} at ${momentText(localIso(p, i))} the AC loads scheduled together (${names.join(', ')}) can ask ${Math.round(running)} W of a ${inv.ratedW} W inverter`,
       size: { value: Math.round(running), unit: 'W' },
-      fixes: [
-        {
-          kind: 'stagger-appliances',
-          text: `do not run ${names.join(' and ')} in the same minutes`,
-          params: { applianceIds: overlappingAcIds(ctx, i) },
-        },
-        { kind: 'larger-inverter', text: `an inverter of at least ${ratedW} W`, params: { ratedW } },
-      ],
+      fixes: overloadFixes(ctx, together, inv.ratedW, surgeW, ratedW, names),
     });
   }
   return flags;
@@ -188,11 +162,59 @@ function runningAc(ctx: FlagContext, i: number): Appliance[] {
     return run ? (run[i] ?? 0) > 0 : scheduledShare(a.schedule, step, prevDayType(p, i)) > 0;
   });
 }
-function overlappingAc(ctx: FlagContext, i: number): string[] {
-  return runningAc(ctx, i).map((a) => a.name.toLowerCase());
+/**
+ * One appliance alone over the rating: a larger inverter (the next common size) or that appliance only where a
+ * hookup carries it; staggering cannot help. Several together: staggering them, or a larger inverter.
+ */
+function overloadFixes(
+  ctx: FlagContext,
+  together: Appliance[],
+  ratedW: number,
+  surgeW: number,
+  neededW: number,
+  names: string[],
+): Fix[] {
+  const larger: Fix = { kind: 'larger-inverter', text: `an inverter of ${neededW} W`, params: { ratedW: neededW } };
+  const alone = together.find(
+    (a) => a.quantity * a.runningW > ratedW || a.quantity * (a.surgeW ?? a.runningW) > surgeW,
+  );
+  if (!alone) {
+    return [
+      {
+        kind: 'stagger-appliances',
+        text: `do not run ${names.join(' and ')} in the same minutes`,
+        params: { applianceIds: together.map((a) => a.id) },
+      },
+      larger,
+    ];
+  }
+  const single = nextInverterW(
+    Math.max(alone.quantity * alone.runningW, (alone.quantity * (alone.surgeW ?? alone.runningW)) / 2),
+  );
+  const fixes: Fix[] = [
+    {
+      kind: 'larger-inverter',
+      text: `an inverter of ${single} W: the ${alone.name.toLowerCase()} alone asks ${alone.quantity * alone.runningW} W of the ${ratedW} W one`,
+      params: { ratedW: Math.max(single, neededW) },
+    },
+  ];
+  const shore = shoreOnlySchedule(ctx.p, alone);
+  if (shore)
+    fixes.push({
+      kind: 'appliance-shore-only',
+      text: `run the ${alone.name.toLowerCase()} only on hookup days`,
+      params: { applianceId: alone.id },
+      applianceEdit: { applianceId: alone.id, schedule: shore },
+    });
+  return fixes;
 }
-function overlappingAcIds(ctx: FlagContext, i: number): string[] {
-  return runningAc(ctx, i).map((a) => a.id);
+
+/** Common inverter ratings, W (sizes sold for vans, caravans and trailers; common practice). */
+export const INVERTER_SIZES_W = [300, 600, 1000, 1500, 2000, 2500, 3000, 3500, 4000, 5000, 6000, 8000] as const;
+
+/** The smallest common inverter size at or above w (the largest listed when none is). */
+export function nextInverterW(w: number): number {
+  return INVERTER_SIZES_W.find((s) => s >= w) ?? INVERTER_SIZES_W[INVERTER_SIZES_W.length - 1] ?? w;
 }
 
 function coldFlags(ctx: FlagContext): Flag[] {
@@ -209,10 +231,9 @@ function coldFlags(ctx: FlagContext): Flag[] {
       id: `cold-charge-blocked-${i}`,
       kind: 'cold-charge-blocked',
       severity: 'warning',
-      atUtc: utcIso(p, i),
-      atLocal: localIso(p, i),
+      ...flagFigures(ctx, i, i),
       where,
-      cause: `Below 0 °C at ${whereText(p, where)} the lithium battery must not charge; charging is held off for ${hours.toFixed(0)} h`,
+      cause: `Below 0 °C at ${whereText(p, where)} from ${momentText(localIso(p, i))} the lithium battery must not charge; charging is held off for ${hours.toFixed(0)} h`,
       size: { value: hours, unit: 'h' },
       fixes: [
         {
@@ -243,10 +264,9 @@ function propaneFlags(ctx: FlagContext): Flag[] {
       id: `propane-out-${outAt}`,
       kind: 'propane-out',
       severity: 'danger',
-      atUtc: utcIso(p, outAt),
-      atLocal: localIso(p, outAt),
+      ...flagFigures(ctx, outAt, outAt),
       where,
-      cause: `Propane runs out at ${whereText(p, where)} by ${localShort(p, outAt)}; the plan burns ${burned.toFixed(1)} kg against ${startKg.toFixed(1)} kg aboard`,
+      cause: `Propane runs out at ${whereText(p, where)} at ${momentText(localIso(p, outAt))}; the plan burns ${burned.toFixed(1)} kg against ${startKg.toFixed(1)} kg aboard`,
       size: { value: extraKg, unit: 'kg' },
       fixes: [
         { kind: 'add-propane', text: `${extraKg} kg more propane (a refill or another cylinder)`, params: { extraKg } },
@@ -267,8 +287,7 @@ function cablingFlags(ctx: FlagContext): Flag[] {
       id: 'high-dc-current',
       kind: 'high-dc-current',
       severity: 'info',
-      atUtc: utcIso(p, 0),
-      atLocal: localIso(p, 0),
+      ...flagFigures(ctx, 0, 0),
       where,
       cause: `At full output the ${inv.ratedW} W inverter draws about ${Math.round(amps)} A from the ${p.input.rig.battery.nominalV} V bank`,
       size: { value: Math.round(amps), unit: 'A' },
@@ -286,3 +305,6 @@ function cablingFlags(ctx: FlagContext): Flag[] {
 export function buildFlags(ctx: FlagContext): Flag[] {
   return [...shortfallFlags(ctx), ...propaneFlags(ctx), ...coldFlags(ctx), ...overloadFlags(ctx), ...cablingFlags(ctx)];
 }
+
+/** Whether a flag happens at a time (its header shows one); a rig's cabling current holds all trip. */
+export const hasMoment = (f: Pick<Flag, 'kind'>): boolean => f.kind !== 'high-dc-current';

@@ -3,7 +3,7 @@
 // Each lever is a monotone search (bisection) over battery walks that reuse one precomputed trip.
 import { engineInputSchema, type EngineInput, type EngineInputDraft } from '../schemas/engine-input';
 import { defaultFuelModel } from './generator';
-import { ASSUMED_GENERATOR_W } from './flags';
+import { ASSUMED_GENERATOR_W, hookupSupplyFor, UNKNOWN_COUNTRY_HOOKUP } from './fixes';
 import { prepare, type Prepared } from './prepare';
 import { plannedScenario, reservePctOf } from './simulate';
 import { solarSeries } from './solar';
@@ -213,10 +213,13 @@ function hookupLever(s: Search, baseline: WalkResult): HeadroomLever {
   const before = nights.filter((n) => startOf(n) <= breach).sort((a, b) => startOf(b) - startOf(a));
   const after = nights.filter((n) => startOf(n) > breach).sort((a, b) => startOf(a) - startOf(b));
   const order = [...before, ...after];
-  const h = s.p.input.options.assumedHookup;
+  const supplyAt = (stopIndex: number) => hookupSupplyFor(s.p, stopIndex) ?? UNKNOWN_COUNTRY_HOOKUP;
   const run = (k: number): WalkResult => {
     const hookupW = Float64Array.from(s.base.hookupW);
-    for (const night of order.slice(0, Math.ceil(k))) for (const i of night.steps) hookupW[i] = h.amps * h.volts;
+    for (const night of order.slice(0, Math.ceil(k))) {
+      const h = supplyAt(night.stopIndex);
+      for (const i of night.steps) hookupW[i] = h.amps * h.volts;
+    }
     return walk(s.p, { ...s.base, hookupW }, null);
   };
   const found = bisect((k) => ok(run(k), s.reservePct), 1, order.length, 1);
@@ -233,6 +236,7 @@ function hookupLever(s: Search, baseline: WalkResult): HeadroomLever {
   const k = Math.ceil(found);
   const chosen = order.slice(0, k);
   const stops = [...new Set(chosen.map((n) => n.stopIndex + 1))].sort((a, b) => a - b);
+  const h = supplyAt((stops[0] ?? 1) - 1);
   return {
     lever: 'hookup',
     status: 'found',

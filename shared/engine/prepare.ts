@@ -291,7 +291,7 @@ function fillSun(p: Prepared, stops: readonly Stop[], solarConstant: number): vo
   };
 }
 
-function localStep(p: Prepared, i: number): LocalStep {
+export function localStep(p: Prepared, i: number): LocalStep {
   return {
     minuteOfDay: p.minuteOfDay[i] ?? 0,
     dayIndex: p.dayIndex[i] ?? 0,
@@ -561,6 +561,35 @@ function allocate(input: EngineInput, n: number): Prepared {
   };
 }
 
+function fillLoadsAndGains(p: Prepared): void {
+  fillLoads(p);
+  for (let i = 0; i < p.n; i++) p.internalGainW[i] = ((p.acWh[i] ?? 0) + (p.dcWh[i] ?? 0)) / (p.stepH[i] ?? 1);
+}
+
+/**
+ * The same trip with another list of appliances: the time, sun and places are kept, the loads worked out again.
+ * A fix that changes an appliance is checked on this rather than on a whole new precomputation.
+ */
+export function withAppliances(p: Prepared, appliances: Appliance[]): Prepared {
+  const n = p.n;
+  const q: Prepared = {
+    ...p,
+    input: { ...p.input, appliances },
+    acWh: new Float64Array(n),
+    dcWh: new Float64Array(n),
+    heatWh: new Float64Array(n),
+    acRunningW: new Float64Array(n),
+    acSurgeExtraW: new Float64Array(n),
+    acStandbyOn: new Uint8Array(n),
+    applianceStopWh: new Float64Array(0),
+    heavy: [],
+    internalGainW: new Float64Array(n),
+    thermostats: [],
+  };
+  fillLoadsAndGains(q);
+  return q;
+}
+
 export function prepare(input: EngineInput): Prepared {
   const grid = buildGrid(input.trip);
   const p = allocate(input, grid.n);
@@ -571,8 +600,7 @@ export function prepare(input: EngineInput): Prepared {
   fillLocalTime(p, stops);
   fillExposures(p, stops);
   fillSun(p, stops, input.options.solarConstantWm2);
-  fillLoads(p);
-  for (let i = 0; i < p.n; i++) p.internalGainW[i] = ((p.acWh[i] ?? 0) + (p.dcWh[i] ?? 0)) / (p.stepH[i] ?? 1);
+  fillLoadsAndGains(p);
   fillGenerator(p, stops);
   fillInverterHours(p);
   for (let i = 0; i < p.n; i++) {

@@ -1,4 +1,5 @@
 // The shapes simulateTrip and findHeadroom return. Plain data (numbers, strings, arrays) so they serialise.
+import type { Schedule } from '../schemas/appliance';
 import type { FuelKind } from '../schemas/rig';
 
 export type Where = { kind: 'stop'; stopIndex: number } | { kind: 'drive'; driveIndex: number };
@@ -53,7 +54,11 @@ export type DaySheet = {
   harvestWh: number;
   solarAvailableWh: number;
   useWh: number;
-  /** Harvest minus use, Wh. */
+  /** Everything that came in: solar used, hookup, vehicle and generator, Wh. */
+  sourcesWh: number;
+  /** Inverter, charger and battery losses, Wh. */
+  lossesWh: number;
+  /** All sources in minus use minus losses, Wh: what the day added to the battery, less what it could not supply. */
   netWh: number;
   hookupWh: number;
   vehicleWh: number;
@@ -98,22 +103,75 @@ export type FixKind =
   | 'larger-inverter'
   | 'add-propane'
   | 'keep-battery-warm'
-  | 'check-cabling';
+  | 'check-cabling'
+  | 'thermostat-setting'
+  | 'appliance-less'
+  | 'appliance-another-time'
+  | 'appliance-shore-only';
 
-export type Fix = { kind: FixKind; text: string; params: Record<string, number | string | boolean | string[]> };
+/** What walking the battery again with the fix applied gave: whether the flag clears, and the lowest charge then. */
+export type FixCheck = { clears: boolean; lowestSocPct: number };
+
+export type Fix = {
+  kind: FixKind;
+  text: string;
+  params: Record<string, number | string | boolean | string[]>;
+  /** Present on fixes that were checked by re-simulation. */
+  check?: FixCheck;
+  /** The schedule an appliance fix gives the appliance (the edit Apply sends). */
+  applianceEdit?: { applianceId: string; schedule: Schedule };
+};
 
 export type FlagKind =
   'below-reserve' | 'energy-short' | 'inverter-overload' | 'cold-charge-blocked' | 'propane-out' | 'high-dc-current';
+
+/** The ledger rows a flag spans: its first and last row, and its start and end on the ledger's hour grid. */
+export type FlagWindow = {
+  firstRow: number;
+  lastRow: number;
+  /** Start of the first row. */
+  startUtc: string;
+  startLocal: string;
+  /** End of the last row (the start of the row after it). */
+  endUtc: string;
+  endLocal: string;
+};
+
+/** What drew the battery down before a flag, in energy: an appliance, the inverter, or the battery's own losses. */
+export type Cause = {
+  kind: 'appliance' | 'inverter' | 'battery-loss';
+  name: string;
+  applianceId: string | null;
+  /** The battery's draw attributed to it over the draw-down, Wh. */
+  wh: number;
+  /** Its share of that draw, %. */
+  sharePct: number;
+};
+
+/** The lowest charge inside a flag's window: the ledger row where it is reached, labelled as the ledger labels it. */
+export type FlagLowest = { socPct: number; row: number; atUtc: string; atLocal: string };
 
 export type Flag = {
   id: string;
   kind: FlagKind;
   severity: 'danger' | 'warning' | 'info';
+  /** When the flag is shown at: its lowest charge's row (the same instant as `lowest.atUtc`). */
   atUtc: string;
   atLocal: string;
   where: Where;
+  /** The flag's text, built from the fields below by one formatter (flag-text.ts). */
   cause: string;
   size: { value: number; unit: 'Wh' | 'W' | 'A' | 'kg' | 'h' };
+  window: FlagWindow;
+  /** Energy the battery could not supply inside the window: the sum of the window's ledger rows, Wh. */
+  energyShortWh: number;
+  /** How far below the reserve the lowest charge falls, Wh (0 when it stays at or above it). */
+  belowReserveWh: number;
+  lowest: FlagLowest;
+  /** Rows from the highest charge before the flag to its lowest: the draw-down the causes are counted over. */
+  drawdown: { firstRow: number; lastRow: number };
+  /** The battery's draw over the draw-down by cause, largest first (shortfall flags; empty for the others). */
+  causes: Cause[];
   fixes: Fix[];
 };
 

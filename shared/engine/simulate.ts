@@ -5,7 +5,7 @@ import { engineInputSchema, type EngineInput, type EngineInputDraft } from '../s
 import { CHEMISTRY } from './battery';
 import { climateLoads, type StepLoads } from './climate';
 import { localIso, utcIso, whereAt } from './describe';
-import { buildFlags } from './flags';
+import { buildFlags, isShortfall } from './flags';
 import { fuelUnit } from './fuel';
 import { prepare, type Prepared } from './prepare';
 import type { BandRun, DaySheet, Headline, LedgerRow, SimulationResult } from './result-types';
@@ -114,6 +114,8 @@ function emptyDay(p: Prepared, i: number): DaySheet {
     harvestWh: 0,
     solarAvailableWh: 0,
     useWh: 0,
+    sourcesWh: 0,
+    lossesWh: 0,
     netWh: 0,
     hookupWh: 0,
     vehicleWh: 0,
@@ -149,8 +151,12 @@ function daySheets(p: Prepared, l: LedgerColumns): DaySheet[] {
     d.lowestSocPct = Math.min(d.lowestSocPct, l.socPct[i] ?? 0);
     d.endSocPct = l.socPct[i] ?? 0;
     d.energyShortWh += l.energyShortWh[i] ?? 0;
+    d.lossesWh += (l.inverterLossWh[i] ?? 0) + (l.chargerLossWh[i] ?? 0) + (l.batteryLossWh[i] ?? 0);
   }
-  for (const day of days) day.netWh = day.harvestWh - day.useWh;
+  for (const day of days) {
+    day.sourcesWh = day.harvestWh + day.hookupWh + day.vehicleWh + day.generatorWh;
+    day.netWh = day.sourcesWh - day.useWh - day.lossesWh;
+  }
   return days;
 }
 
@@ -234,11 +240,15 @@ export function simulateParsed(input: EngineInput): SimulationResult {
   const l = newLedger(p.n);
   const r = walk(p, planned, l);
   const loads = planned.loads;
-  const flags = buildFlags({ p, l, loads, capacityWh: capacityWhOf(input), reservePct });
+  const capacityWh = capacityWhOf(input);
+  const fix = { p, scenario: planned, cabinSolarW: solar.cabinSolarW, capacityWh, reservePct, trials: new Map() };
+  const flags = buildFlags({ p, l, loads, capacityWh, reservePct, fix });
+  // The headline's energy short is the flags' own figures added up, so the page shows one number for one thing.
+  const energyShortWh = flags.reduce((s, f) => (isShortfall(f) ? s + f.energyShortWh : s), 0);
   return {
     ledger: ledgerRows(p, l, solar, loads, sky?.ambientC ?? p.ambientC),
     days: daySheets(p, l),
-    headline: headline(p, l, r),
+    headline: { ...headline(p, l, r), energyShortWh },
     flags,
     band: input.options.skyBand && !years ? { better: bandRun(p, -1), worse: bandRun(p, 1) } : null,
     chance: years?.chance ?? null,

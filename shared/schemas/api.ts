@@ -128,3 +128,34 @@ export const updateApplianceRequestSchema = z
 export const updateScheduleRequestSchema = z.object({ version: versionSchema, schedule: scheduleSchema }).strict();
 
 export const updateMemberRoleRequestSchema = z.object({ role: roleSchema }).strict();
+
+/**
+ * Undo of an applied fix: the record as it was before (its content and its version), sent with the version it has
+ * now. The server writes it back only if nothing changed it since (else 409), and only backwards in versions.
+ */
+export const undoFixRequestSchema = z.discriminatedUnion('kind', [
+  z
+    .object({
+      kind: z.literal('rig'),
+      version: versionSchema,
+      restore: z.object({ version: versionSchema, rig: rigSchema }).strict(),
+    })
+    .strict(),
+  z
+    .object({
+      kind: z.literal('stop'),
+      stopId: idSchema,
+      version: versionSchema,
+      restore: z.object({ version: versionSchema, stop: stopSchema, notes: z.string().max(4000) }).strict(),
+    })
+    .strict(),
+  z
+    .object({
+      kind: z.literal('appliance'),
+      applianceId: idSchema,
+      version: versionSchema,
+      restore: z.object({ version: versionSchema, schedule: scheduleSchema }).strict(),
+    })
+    .strict(),
+]);
+export type UndoFixRequest = z.input<typeof undoFixRequestSchema>;

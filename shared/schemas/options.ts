@@ -13,6 +13,7 @@ export const optionsSchema = z.object({
   /** Run the same trip under one sky level better and one worse. */
   skyBand: z.boolean().default(true),
   /** Hookup the headroom finder assumes when it books a night at a stop that has none. */
-  assumedHookup: hookupSchema.default({ amps: 16, volts: 230 }),
+  /** The hookup supply fixes offer when the trip names one; else the supply usual in each stop's country. */
+  assumedHookup: hookupSchema.optional(),
 });
 export type Options = z.infer<typeof optionsSchema>;

@@ -35,6 +35,8 @@ export const solarArraySchema = z
     /** Maximum-power voltage; matters for PWM controllers, which hold the panel at battery voltage. */
     vmpV: z.number().positive().max(200).default(18),
     derate: fractionSchema.default(0.86),
+    /** Panels set out on the ground: they take no roof area, so the roof's room for more panels ignores them. */
+    portable: z.boolean().default(false),
   })
   .refine((a) => a.mounting === 'tilted' || a.tiltDeg === 0, {
     message: 'A flat array has tiltDeg 0',
@@ -129,6 +131,8 @@ export const cabinSchema = z.object({
   heightM: z.number().min(1.2).max(3.5).default(2.1),
   insulation: insulationSchema.default('standard'),
   occupants: z.number().int().min(0).max(12).default(2),
+  /** Roof area that could carry panels, m²; without it the roof is taken as length × width. */
+  roofAreaM2: z.number().min(1).max(60).optional(),
 });
 export type Cabin = z.infer<typeof cabinSchema>;
 export type CabinInput = z.input<typeof cabinSchema>;

@@ -1,5 +1,5 @@
 import { useMutation, useQuery, useQueryClient, type QueryClient } from '@tanstack/react-query';
-import type { CreateTripRequest, TripDetail, UpdateTripRequest } from '@/shared/schemas/api';
+import type { CreateTripRequest, TripDetail, UndoFixRequest, UpdateTripRequest } from '@/shared/schemas/api';
 import type { TripListResponse } from '@/shared/schemas/trip-summary';
 import { apiFetch } from './api-client';
 import { STALE } from './stale';
@@ -81,5 +81,15 @@ export function useTripDuplicateMutation() {
   return useMutation({
     mutationFn: (tripId: string) => apiFetch<TripDetail>(`${tripPath(tripId)}/duplicate`, { method: 'POST' }),
     onSuccess: () => queryClient.invalidateQueries({ queryKey: tripKeys.list() }),
+  });
+}
+
+/** Puts back the one record an applied fix changed, as it was (content and version). */
+export function useUndoFixMutation(tripId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (body: UndoFixRequest) =>
+      apiFetch<unknown>(`/api/trips/${encodeURIComponent(tripId)}/undo-fix`, { method: 'POST', json: body }),
+    onSuccess: () => invalidateTrip(queryClient, tripId),
   });
 }

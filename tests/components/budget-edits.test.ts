@@ -84,6 +84,30 @@ describe('flag fixes as edits', () => {
     expect(after.flags.map((f) => f.id)).not.toContain(flag?.id);
   });
 
+  it('when a fix the engine says clears its flag is applied as an edit, then that stretch holds the reserve', () => {
+    let checked = 0;
+    for (const flag of result.flags.filter((f) => f.kind === 'energy-short' || f.kind === 'below-reserve')) {
+      for (const fix of flag.fixes.filter((f) => f.check?.clears)) {
+        const edit = editForFix(detail, fix, result.days);
+        if (!edit || edit.kind === 'stop') continue;
+        const edited =
+          edit.kind === 'rig'
+            ? { ...input, rig: edit.rig }
+            : {
+                ...input,
+                appliances: (input.appliances ?? []).map((a) =>
+                  a.id === edit.record.id ? { ...a, schedule: edit.schedule } : a,
+                ),
+              };
+        const after = simulateTrip(edited);
+        const rows = after.ledger.slice(flag.drawdown.firstRow, flag.window.lastRow + 1);
+        expect(Math.min(...rows.map((r) => r.socPct))).toBeGreaterThanOrEqual(after.headline.reservePct - 1e-6);
+        checked++;
+      }
+    }
+    expect(checked).toBeGreaterThan(0);
+  });
+
   it("when a generator fix names a stop, then the routine runs on that stop's days inside its hours", () => {
     const fix = first('add-generator-hours');
     const edit = fix ? editForFix(detail, fix, result.days) : null;
@@ -91,7 +115,8 @@ describe('flag fixes as edits', () => {
       throw new Error('expected a generator routine');
     const w = edit.rig.generator.mode.windows[0];
     expect(w?.days?.kind).toBe('trip-days');
-    expect(w?.startHour).toBeGreaterThanOrEqual(Number(fix?.params.startHour));
+    expect(w?.startHour).toBe(Number(fix?.params.startHour));
+    expect(w?.startMinute).toBe(Number(fix?.params.startMinute));
     expect((w?.startHour ?? 0) * 60 + (w?.minutes ?? 0)).toBeLessThanOrEqual(Number(fix?.params.endHour) * 60);
   });
 });

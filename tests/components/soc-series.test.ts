@@ -152,6 +152,12 @@ describe('flag labels', () => {
     where: { kind: 'stop', stopIndex: 0 },
     cause: '',
     size: { value: 1, unit: 'Wh' },
+    window: { firstRow: 0, lastRow: 0, startUtc: atUtc, startLocal: atUtc, endUtc: atUtc, endLocal: atUtc },
+    energyShortWh: 1,
+    belowReserveWh: 0,
+    lowest: { socPct: 0, row: 0, atUtc, atLocal: atUtc },
+    drawdown: { firstRow: 0, lastRow: 0 },
+    causes: [],
     fixes: [],
   });
   const utcs = Array.from({ length: 48 }, (_, h) => Date.parse('2027-09-12T00:00:00Z') + h * 3_600_000);

@@ -62,6 +62,24 @@ describe('new rig, stop and thermostat fields', () => {
     expect(budget.result.ledger.some((row: { cabinC: number }) => Math.abs(row.cabinC - 19) < 1e-9)).toBe(true);
   });
 
+  it('when a roof area and a portable array are saved, then they come back as saved', async () => {
+    const { agent } = await signUpAgent(ctx.app);
+    const detail = await createTrip(agent);
+    const cabin = { ...detail.rig.rig.cabin, roofAreaM2: 7.5 };
+    const solarArrays = [
+      ...detail.rig.rig.solarArrays,
+      { name: 'Ground panel', ratedW: 200, mounting: 'flat', tiltDeg: 0, portable: true },
+    ];
+    const saved = await agent
+      .put(`/api/trips/${detail.trip.id}/rig`)
+      .send({ version: detail.rig.version, rig: { ...detail.rig.rig, cabin, solarArrays } })
+      .expect(200);
+    expect(saved.body.rig.cabin.roofAreaM2).toBe(7.5);
+    const after = await getDetail(agent, detail.trip.id);
+    expect(after.rig.rig.cabin.roofAreaM2).toBe(7.5);
+    expect(after.rig.rig.solarArrays.at(-1)).toMatchObject({ name: 'Ground panel', portable: true });
+  });
+
   it('when a scheduled inverter has no hours, then the API refuses it (a rule between fields: 422) naming the hours', async () => {
     const { agent } = await signUpAgent(ctx.app);
     const detail = await createTrip(agent);

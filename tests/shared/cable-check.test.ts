@@ -161,6 +161,7 @@ describe('verdicts per run', () => {
         gammaPctPerC: -0.4,
         vmpV: 18,
         derate: 0.86,
+        portable: false,
       },
     ],
     controller: { kind: 'mppt', maxAmps: 30, efficiency: 0.97 },

@@ -130,7 +130,7 @@ describe('demo trips', () => {
     expect(shortfalls.length).toBeGreaterThan(0);
     const fixes = shortfalls.flatMap((f) => f.fixes);
     const gen = fixes.find((f) => f.kind === 'add-generator-hours' && f.params.stopIndex === 3);
-    expect(gen?.text).toMatch(/^\d+(\.5)? h of .* inside 09:00–20:00 at stop 4$/);
+    expect(gen?.text).toMatch(/^run .* \d+ h \d\d min a day, \d\d:\d\d–20:00, at stop 4 \(allowed 09:00–20:00\)/);
     expect(fixes.some((f) => f.kind === 'add-hookup-night')).toBe(true);
   });
 

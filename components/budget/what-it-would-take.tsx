@@ -1,0 +1,74 @@
+import { StyleSheet, View } from 'react-native';
+import { colors, radii, space } from '@/components/theme/tokens';
+import { Card } from '@/components/ui/card';
+import { Text } from '@/components/ui/text';
+import { findHeadroom } from '@/shared/engine';
+import type { HeadroomLever, HeadroomResult } from '@/shared/engine/headroom';
+import { leverLine } from './headroom-lines';
+import type { TripDetail } from '@/shared/schemas/api';
+import { toEngineInput } from '@/shared/trip-to-engine-input';
+
+const LEVER_NAMES: Record<HeadroomLever['lever'], string> = {
+  battery: 'Extra battery',
+  solar: 'Extra solar',
+  generator: 'Generator time',
+  hookup: 'Hookup nights',
+};
+
+// The last search, keyed by its input: a re-render must not search again (a few battery walks per lever).
+let last: { key: string; value: HeadroomResult | null } | null = null;
+
+function headroomFor(detail: TripDetail): HeadroomResult | null {
+  const input = toEngineInput(detail);
+  if (!input) return null;
+  const key = JSON.stringify(input);
+  if (last?.key === key) return last.value;
+  let value: HeadroomResult | null;
+  try {
+    value = findHeadroom(input);
+  } catch {
+    value = null;
+  }
+  last = { key, value };
+  return value;
+}
+
+/** The headroom finder on screen: the smallest of each lever that keeps the whole trip above the reserve. */
+export function WhatItWouldTake({ detail }: { detail: TripDetail }) {
+  const headroom = headroomFor(detail);
+  if (!headroom) return null;
+  return (
+    <Card testID="what-it-would-take">
+      <Text variant="title" role="heading" aria-level={2}>
+        What it would take
+      </Text>
+      {!headroom.needed ? (
+        <Text color="pine" testID="what-it-would-take-none">
+          Nothing: the plan stays above the {headroom.reservePct} % reserve all trip.
+        </Text>
+      ) : (
+        <>
+          <Text variant="caption" color="inkSoft">
+            Each on its own, the smallest change that keeps the whole trip above the {headroom.reservePct} % reserve
+            (now the lowest is {headroom.baselineLowestSocPct.toFixed(0)} %).
+          </Text>
+          {headroom.levers.map((l) => {
+            const line = leverLine(l);
+            return (
+              <View key={l.lever} style={styles.lever} testID={`what-it-would-take-${l.lever}`}>
+                <Text variant="label">{LEVER_NAMES[l.lever]}</Text>
+                <Text variant="caption" color={line.tone}>
+                  {line.text}
+                </Text>
+              </View>
+            );
+          })}
+        </>
+      )}
+    </Card>
+  );
+}
+
+const styles = StyleSheet.create({
+  lever: { padding: space.sm, borderRadius: radii.sm, backgroundColor: colors.dune, gap: 2 },
+});

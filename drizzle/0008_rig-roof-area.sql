@@ -1,0 +1,1 @@
+ALTER TABLE `rigs` ADD `roof_area_m2` real;

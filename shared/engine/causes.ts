@@ -1,0 +1,92 @@
+// Causes: what drew the battery down before a flag, in energy. Over the draw-down (from the highest charge since the
+// last flag, or the trip's start, to the flag's lowest charge), each step's battery draw is shared out among what it
+// fed in proportion to their energy in that step: the DC loads, the AC loads that went through the inverter (not
+// those a hookup or a running generator carried) and the inverter's own idle draw and conversion loss; the battery's
+// discharge losses are their own cause. An appliance's energy per step is the load model's (loads.ts), or for
+// heating and cooling the running share from the cabin heat balance (climate.ts).
+import type { Appliance } from '../schemas/appliance';
+import type { StepLoads } from './climate';
+import { applianceEnergyWh, scheduledShare } from './loads';
+import { localStep, prevDayType, type Prepared } from './prepare';
+import type { Cause } from './result-types';
+import type { LedgerColumns } from './walk';
+
+/** Causes under this share of the draw are left out of the list (they would only crowd it). */
+const SMALLEST_SHARE = 0.005;
+
+type Ctx = { p: Prepared; l: LedgerColumns; loads: StepLoads };
+
+/** The row the draw-down starts at: the highest charge in from..to (the latest of equals). */
+export function drawdownStart(l: LedgerColumns, from: number, to: number): number {
+  let best = from;
+  for (let i = from; i <= to; i++) if ((l.socPct[i] ?? 0) >= (l.socPct[best] ?? 0)) best = i;
+  return best;
+}
+
+function applianceWh(ctx: Ctx, a: Appliance, j: number, i: number): number {
+  const dtH = ctx.p.stepH[i] ?? 1;
+  const run = ctx.loads.thermostatRun.get(j);
+  if (run) return applianceEnergyWh(a, run[i] ?? 0, dtH);
+  const share = scheduledShare(a.schedule, localStep(ctx.p, i), prevDayType(ctx.p, i));
+  return applianceEnergyWh(a, share * a.dutyCycle, dtH);
+}
+
+/** The AC energy of step i that went through the inverter: what the hookup and a running generator did not carry. */
+function acThroughInverterWh(ctx: Ctx, i: number): number {
+  const { p, l } = ctx;
+  const ac = l.acLoadWh[i] ?? 0;
+  const hook = Math.min(ac, (p.hookupW[i] ?? 0) * (p.stepH[i] ?? 1));
+  return Math.max(0, ac - hook - Math.min(ac - hook, l.generatorWh[i] ?? 0));
+}
+
+/** The battery's draw over rows from..to attributed to appliances, the inverter and battery losses, ranked. */
+export function attributeDraw(ctx: Ctx, from: number, to: number): Cause[] {
+  const { p, l } = ctx;
+  const appliances = p.input.appliances;
+  const byAppliance = new Float64Array(appliances.length);
+  let inverterWh = 0;
+  let batteryLossWh = 0;
+  for (let i = from; i <= to; i++) {
+    const flow = l.batteryFlowWh[i] ?? 0;
+    const draw = Math.max(0, -flow) + (l.energyShortWh[i] ?? 0);
+    if (draw <= 0) continue;
+    const acInv = acThroughInverterWh(ctx, i);
+    const invLoss = l.inverterLossWh[i] ?? 0;
+    const dc = l.dcLoadWh[i] ?? 0;
+    const demand = dc + acInv + invLoss;
+    if (demand <= 0) continue;
+    const share = Math.min(1, draw / demand);
+    const acShare = (l.acLoadWh[i] ?? 0) > 0 ? acInv / (l.acLoadWh[i] ?? 1) : 0;
+    for (let j = 0; j < appliances.length; j++) {
+      const a = appliances[j];
+      if (!a) continue;
+      const wh = applianceWh(ctx, a, j, i);
+      if (wh <= 0) continue;
+      byAppliance[j] = (byAppliance[j] ?? 0) + wh * share * (a.circuit === 'ac' ? acShare : 1);
+    }
+    inverterWh += invLoss * share;
+    if (flow < 0) batteryLossWh += l.batteryLossWh[i] ?? 0;
+  }
+  const causes: Omit<Cause, 'sharePct'>[] = appliances.map((a, j) => ({
+    kind: 'appliance' as const,
+    name: a.name,
+    applianceId: a.id,
+    wh: byAppliance[j] ?? 0,
+  }));
+  causes.push({ kind: 'inverter', name: 'inverter idle and conversion', applianceId: null, wh: inverterWh });
+  causes.push({ kind: 'battery-loss', name: 'battery losses', applianceId: null, wh: batteryLossWh });
+  const total = causes.reduce((s, c) => s + c.wh, 0);
+  if (total <= 0) return [];
+  return causes
+    .map((c) => ({ ...c, sharePct: (c.wh / total) * 100 }))
+    .filter((c) => c.sharePct / 100 >= SMALLEST_SHARE)
+    .sort((a, b) => b.wh - a.wh);
+}
+
+/** "roof air conditioner 71 %, fridge 12 %, lights 6 %": the leading causes, as a flag's text names them. */
+export function causesText(causes: readonly Cause[], count = 3): string {
+  return causes
+    .slice(0, count)
+    .map((c) => `${c.kind === 'appliance' ? c.name.toLowerCase() : c.name} ${Math.round(c.sharePct)} %`)
+    .join(', ');
+}

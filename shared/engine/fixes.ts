@@ -1,0 +1,360 @@
+// Fixes for a shortfall, generated from its causes and the rig's levers, each checked by walking the battery again
+// with the fix applied. A fix "clears" its flag when, from the draw-down's start to the window's end, the charge
+// stays at or above the reserve and nothing runs short; otherwise it "helps, not enough alone" and says the lowest
+// charge it reaches. Every size is one a traveller can buy or book:
+// - generator time in whole quarter hours inside the stop's allowed hours, with the fuel it burns;
+// - battery in modules of 50 Ah (banks under 200 Ah) or 100 Ah at the bank's voltage, up to a plausible bank for the
+//   rig's size: 5 kWh for a van under 5.5 m, 10 kWh for a caravan or trailer under 8 m, 15 kWh above (from memory);
+// - solar in 100 W panels, up to what the roof holds: its area (the rig's own figure, else its length × width),
+//   60 % of it usable around vents, hatches and the air conditioner, at 200 W/m² for ~20 %-efficient modules
+//   (common practice);
+// - a hookup of the supply usual in the stop's country (hookup-supply.ts) unless the trip names one.
+import type { Appliance, Schedule } from '../schemas/appliance';
+import type { RoutineWindow } from '../schemas/common';
+import { hookupRegionOf } from '../hookup-supply';
+import { climateLoads } from './climate';
+import { hhmm } from './describe';
+import { groupedNumber } from './flag-text';
+import { defaultFuelModel } from './generator';
+import { QUARTERS, withAppliances, type Prepared } from './prepare';
+import type { Fix, FixCheck, Flag } from './result-types';
+import { newLedger, walk, type Scenario } from './walk';
+
+/** A portable generator assumed when the rig has none (common 2 kW class). */
+export const ASSUMED_GENERATOR_W = 2000;
+export const PANEL_W = 100;
+export const ROOF_USABLE_SHARE = 0.6;
+export const PANEL_W_PER_M2 = 200;
+
+export type FixContext = {
+  p: Prepared;
+  scenario: Scenario;
+  cabinSolarW: Float64Array;
+  capacityWh: number;
+  reservePct: number;
+  /** Trials already walked in this run, by what they changed: flags that share a fix share its walk. */
+  trials: Map<string, Trial>;
+};
+
+type Trial = { socPct: Float64Array; shortWh: Float64Array; fuel: number; generatorH: number };
+
+function runTrial(ctx: FixContext, key: string, make: () => { p: Prepared; scenario: Scenario }): Trial {
+  const known = ctx.trials.get(key);
+  if (known) return known;
+  const { p, scenario } = make();
+  const l = newLedger(p.n);
+  walk(p, scenario, l);
+  let fuel = 0;
+  let generatorH = 0;
+  for (let i = 0; i < p.n; i++) {
+    fuel += l.generatorFuel[i] ?? 0;
+    generatorH += l.generatorH[i] ?? 0;
+  }
+  const trial = { socPct: l.socPct, shortWh: l.energyShortWh, fuel, generatorH };
+  ctx.trials.set(key, trial);
+  return trial;
+}
+
+function verdict(ctx: FixContext, flag: Flag, t: Trial): FixCheck {
+  let lowest = 100;
+  let short = 0;
+  for (let i = flag.drawdown.firstRow; i <= flag.window.lastRow; i++) {
+    lowest = Math.min(lowest, t.socPct[i] ?? 0);
+    short += t.shortWh[i] ?? 0;
+  }
+  return { clears: lowest >= ctx.reservePct - 1e-6 && short <= 1e-6, lowestSocPct: lowest };
+}
+
+const notEnough = (check: FixCheck): string =>
+  check.clears ? '' : ` — helps, not enough alone (lowest ${check.lowestSocPct.toFixed(0)} %)`;
+
+/** Smallest k in 1..max whose trial clears the flag, else max (the most the lever allows). */
+function smallestStep(max: number, clears: (k: number) => boolean): number {
+  if (max <= 1 || !clears(max)) return max;
+  let lo = 0;
+  let hi = max;
+  while (hi - lo > 1) {
+    const mid = Math.floor((lo + hi) / 2);
+    if (clears(mid)) hi = mid;
+    else lo = mid;
+  }
+  return hi;
+}
+
+// ---- the leading appliance -------------------------------------------------------------------------------------
+
+/** Trip days on which the rig stands on a hookup (some hour of the day at a stop with one). */
+export function hookupDays(p: Prepared): number[] {
+  const days = new Set<number>();
+  for (let i = 0; i < p.n; i++) if ((p.hookupW[i] ?? 0) > 0) days.add(p.dayIndex[i] ?? 0);
+  return [...days].sort((a, b) => a - b);
+}
+
+function onDays(windows: RoutineWindow[] | undefined, dayIndexes: number[]): RoutineWindow[] {
+  const base = windows && windows.length > 0 ? windows : [{ startHour: 0, startMinute: 0, minutes: 1440 }];
+  return base.map((w) => ({ ...w, days: { kind: 'trip-days' as const, dayIndexes } }));
+}
+
+type ApplianceChange = { kind: Fix['kind']; text: string; schedule: Schedule };
+
+/** Run it only on the days the rig stands on a hookup: the schedule that says so, or null without such days. */
+export function shoreOnlySchedule(p: Prepared, a: Appliance): Schedule | null {
+  const days = hookupDays(p);
+  if (days.length === 0) return null;
+  const s = a.schedule;
+  if (s.kind === 'thermostat') return { ...s, activeWindows: onDays(s.activeWindows, days) };
+  if (s.kind === 'routine') return { ...s, windows: onDays(s.windows, days) };
+  return { kind: 'routine', windows: onDays(undefined, days) };
+}
+
+function applianceChanges(p: Prepared, a: Appliance): ApplianceChange[] {
+  const name = a.name.toLowerCase();
+  const s = a.schedule;
+  const out: ApplianceChange[] = [];
+  if (s.kind === 'thermostat') {
+    const step = s.mode === 'cooling' ? 2 : -2;
+    const to = s.setPointC + step;
+    out.push({
+      kind: 'thermostat-setting',
+      text: `set the ${name} to ${to} °C instead of ${s.setPointC} °C`,
+      schedule: { ...s, setPointC: to },
+    });
+  }
+  if (s.kind === 'routine' && s.windows.length > 0) {
+    const halved = s.windows.map((w) => ({ ...w, minutes: Math.max(5, Math.round(w.minutes / 2)) }));
+    const was = s.windows[0]?.minutes ?? 0;
+    out.push({
+      kind: 'appliance-less',
+      text: `run the ${name} half as long (${halved[0]?.minutes ?? 0} min instead of ${was} min each time)`,
+      schedule: { ...s, windows: halved },
+    });
+    const solar = p.input.rig.solarArrays.length > 0;
+    const first = s.windows[0];
+    if (solar && first && (first.startHour < 10 || first.startHour >= 15)) {
+      const moved = s.windows.map((w) => ({ ...w, startHour: 11, startMinute: 0 }));
+      out.push({
+        kind: 'appliance-another-time',
+        text: `run the ${name} from 11:00 instead of ${hhmm(first.startHour)}, when the panels give most`,
+        schedule: { ...s, windows: moved },
+      });
+    }
+  }
+  const shore = shoreOnlySchedule(p, a);
+  if (shore) out.push({ kind: 'appliance-shore-only', text: `run the ${name} only on hookup days`, schedule: shore });
+  return out;
+}
+
+function applianceFixes(ctx: FixContext, flag: Flag): Fix[] {
+  const lead = flag.causes[0];
+  if (!lead || lead.kind !== 'appliance' || lead.applianceId === null) return [];
+  const { p } = ctx;
+  const j = p.input.appliances.findIndex((a) => a.id === lead.applianceId);
+  const a = p.input.appliances[j];
+  if (!a) return [];
+  return applianceChanges(p, a).map((change) => {
+    const trial = runTrial(ctx, `appliance:${a.id}:${change.kind}`, () => {
+      const appliances = p.input.appliances.map((x, k) => (k === j ? { ...x, schedule: change.schedule } : x));
+      const q = withAppliances(p, appliances);
+      return { p: q, scenario: { ...ctx.scenario, loads: climateLoads(q, ctx.cabinSolarW) } };
+    });
+    const check = verdict(ctx, flag, trial);
+    return {
+      kind: change.kind,
+      text: `${change.text}${notEnough(check)}`,
+      params: { applianceId: a.id },
+      applianceEdit: { applianceId: a.id, schedule: change.schedule },
+      check,
+    };
+  });
+}
+
+// ---- generator -------------------------------------------------------------------------------------------------
+
+function stopSteps(p: Prepared, stopIndex: number): number[] {
+  const steps: number[] = [];
+  for (let i = 0; i < p.n; i++) if (p.where[i] === stopIndex) steps.push(i);
+  return steps;
+}
+
+function generatorFix(ctx: FixContext, flag: Flag, stopIndex: number): Fix | null {
+  const { p } = ctx;
+  const stop = p.input.trip.stops[stopIndex];
+  const hours = stop?.generatorHours;
+  if (!stop || !hours || !p.input.rig.shoreCharger) return null;
+  const spanH = (hours.endHour - hours.startHour + 24) % 24;
+  const maxQuarters = spanH * QUARTERS;
+  if (maxQuarters === 0) return null;
+  const g = p.input.rig.generator;
+  const ratedW = g?.ratedW ?? ASSUMED_GENERATOR_W;
+  const fuelKind = g?.fuel ?? 'petrol';
+  const plan = {
+    kind: 'routine' as const,
+    ratedW,
+    model: g?.fuelModel ?? defaultFuelModel(ratedW, fuelKind),
+    fuelKind,
+  };
+  const steps = stopSteps(p, stopIndex);
+  const keep = g?.mode.kind === 'routine';
+  /** Quarters of each day at the stop, the last q quarter hours before the allowed end. */
+  const trialFor = (q: number): Trial =>
+    runTrial(ctx, `generator:${stopIndex}:${q}`, () => {
+      const genRoutine = keep ? Uint8Array.from(p.genRoutine) : new Uint8Array(p.n);
+      for (const i of steps) {
+        const dtMin = (p.stepH[i] ?? 1) * 60;
+        for (let k = 0; k < QUARTERS; k++) {
+          const qMin = (p.minuteOfDay[i] ?? 0) + ((k + 0.5) * dtMin) / QUARTERS;
+          // Minutes before the allowed end, across midnight too.
+          const before = (((hours.endHour * 60 - qMin) % 1440) + 1440) % 1440;
+          if (before > 0 && before <= q * 15) genRoutine[i] = (genRoutine[i] ?? 0) | (1 << k);
+        }
+      }
+      return { p: { ...p, genRoutine }, scenario: { ...ctx.scenario, generator: plan } };
+    });
+  const q = smallestStep(maxQuarters, (k) => verdict(ctx, flag, trialFor(k)).clears);
+  const trial = trialFor(q);
+  const check = verdict(ctx, flag, trial);
+  const base = runTrial(ctx, 'base', () => ({ p, scenario: ctx.scenario }));
+  const minutes = q * 15;
+  const startMin = (((hours.endHour * 60 - minutes) % 1440) + 1440) % 1440;
+  const startHour = Math.floor(startMin / 60);
+  const startMinute = startMin % 60;
+  const from = `${String(startHour).padStart(2, '0')}:${String(startMinute).padStart(2, '0')}`;
+  const fuel = Math.max(0, trial.fuel - base.fuel);
+  const unit = fuelKind === 'propane' ? 'kg propane' : `L ${fuelKind}`;
+  const what = g ? 'the generator' : `a ${ASSUMED_GENERATOR_W} W portable generator`;
+  const dayIndexes = [...new Set(steps.map((i) => p.dayIndex[i] ?? 0))];
+  const runH = Math.max(0, trial.generatorH - base.generatorH);
+  return {
+    kind: 'add-generator-hours',
+    text:
+      `run ${what} ${Math.floor(minutes / 60)} h ${String(minutes % 60).padStart(2, '0')} min a day, ${from}–` +
+      `${hhmm(hours.endHour)}, at stop ${stopIndex + 1} (allowed ${hhmm(hours.startHour)}–${hhmm(hours.endHour)}): ` +
+      `${runH.toFixed(1)} h in all, about ${fuel.toFixed(1)} ${unit}${notEnough(check)}`,
+    params: {
+      stopIndex,
+      hours: minutes / 60,
+      startHour,
+      startMinute,
+      minutes,
+      endHour: hours.endHour,
+      allowedStartHour: hours.startHour,
+      dayIndexes: dayIndexes.map(String),
+      fuel: Math.round(fuel * 10) / 10,
+      assumedGenerator: !g,
+    },
+    check,
+  };
+}
+
+// ---- hookup ----------------------------------------------------------------------------------------------------
+
+/** Where the table does not know the stop's country, the headroom finder assumes a 16 A, 230 V pedestal. */
+export const UNKNOWN_COUNTRY_HOOKUP = { amps: 16, volts: 230 } as const;
+
+/** The supply a hookup fix offers at a stop: the trip's chosen one, else the one usual in the stop's country. */
+export function hookupSupplyFor(p: Prepared, stopIndex: number): { amps: number; volts: number } | null {
+  const stop = p.input.trip.stops[stopIndex];
+  return p.input.options.assumedHookup ?? (stop ? (hookupRegionOf(stop.timeZone)?.usual ?? null) : null);
+}
+
+function hookupFix(ctx: FixContext, flag: Flag, stopIndex: number): Fix | null {
+  const { p } = ctx;
+  const stop = p.input.trip.stops[stopIndex];
+  if (!stop || stop.hookup || !p.input.rig.shoreCharger) return null;
+  const region = hookupRegionOf(stop.timeZone);
+  const picked = p.input.options.assumedHookup;
+  const supply = hookupSupplyFor(p, stopIndex);
+  if (!supply) return null;
+  const trial = runTrial(ctx, `hookup:${stopIndex}:${supply.amps}x${supply.volts}`, () => {
+    const hookupW = Float64Array.from(ctx.scenario.hookupW);
+    for (const i of stopSteps(p, stopIndex)) hookupW[i] = supply.amps * supply.volts;
+    return { p, scenario: { ...ctx.scenario, hookupW } };
+  });
+  const check = verdict(ctx, flag, trial);
+  const basis = picked ? 'the supply you chose' : `usual in ${region?.label ?? 'that country'}`;
+  return {
+    kind: 'add-hookup-night',
+    text: `book a hookup at stop ${stopIndex + 1} (${supply.amps} A at ${supply.volts} V, ${basis})${notEnough(check)}`,
+    params: { stopIndex, nights: 1, amps: supply.amps, volts: supply.volts },
+    check,
+  };
+}
+
+// ---- battery and solar -----------------------------------------------------------------------------------------
+
+/** The largest bank a rig of this size plausibly carries, Wh (from memory; see the header). */
+export function plausibleBatteryWh(p: Prepared): number {
+  const length = p.input.rig.cabin.lengthM;
+  return length < 5.5 ? 5000 : length < 8 ? 10000 : 15000;
+}
+
+export function batteryModuleAh(p: Prepared): number {
+  return p.input.rig.battery.capacityAh >= 200 ? 100 : 50;
+}
+
+function batteryFix(ctx: FixContext, flag: Flag): Fix | null {
+  const { p } = ctx;
+  const b = p.input.rig.battery;
+  const moduleAh = batteryModuleAh(p);
+  const maxModules = Math.floor((plausibleBatteryWh(p) - ctx.capacityWh) / (moduleAh * b.nominalV));
+  if (maxModules < 1) return null;
+  const trialFor = (k: number): Trial =>
+    runTrial(ctx, `battery:${k}`, () => ({
+      p,
+      scenario: { ...ctx.scenario, capacityWh: ctx.capacityWh + k * moduleAh * b.nominalV },
+    }));
+  const k = smallestStep(maxModules, (m) => verdict(ctx, flag, trialFor(m)).clears);
+  const check = verdict(ctx, flag, trialFor(k));
+  const extraAh = k * moduleAh;
+  const cap = check.clears ? '' : ` (the most a rig this size plausibly carries: ${plausibleBatteryWh(p) / 1000} kWh)`;
+  return {
+    kind: 'add-battery',
+    text: `add ${k} × ${moduleAh} Ah at ${b.nominalV} V (${extraAh} Ah, ${((extraAh * b.nominalV) / 1000).toFixed(2)} kWh)${cap}${notEnough(check)}`,
+    params: { extraAh, moduleAh, modules: k },
+    check,
+  };
+}
+
+/** Panel watts the roof can still take (portable arrays apart), W, in whole panels. */
+export function roofRoomW(p: Prepared): number {
+  const rig = p.input.rig;
+  const area = rig.cabin.roofAreaM2 ?? rig.cabin.lengthM * rig.cabin.widthM;
+  const onRoof = rig.solarArrays.filter((a) => !a.portable).reduce((s, a) => s + a.ratedW, 0);
+  const room = area * ROOF_USABLE_SHARE * PANEL_W_PER_M2 - onRoof;
+  return Math.max(0, Math.floor(room / PANEL_W) * PANEL_W);
+}
+
+function solarFix(ctx: FixContext, flag: Flag): Fix | null {
+  const { p } = ctx;
+  const ratedW = p.input.rig.solarArrays.reduce((s, a) => s + a.ratedW, 0);
+  const maxPanels = roofRoomW(p) / PANEL_W;
+  if (ratedW === 0 || maxPanels < 1) return null;
+  const trialFor = (k: number): Trial =>
+    runTrial(ctx, `solar:${k}`, () => ({
+      p,
+      scenario: { ...ctx.scenario, solarScale: 1 + (k * PANEL_W) / ratedW },
+    }));
+  const k = smallestStep(maxPanels, (m) => verdict(ctx, flag, trialFor(m)).clears);
+  const check = verdict(ctx, flag, trialFor(k));
+  const cap = check.clears ? '' : ' (all the roof holds)';
+  return {
+    kind: 'add-solar',
+    text: `add ${k} × ${PANEL_W} W panels (${groupedNumber(k * PANEL_W)} W)${cap}${notEnough(check)}`,
+    params: { extraW: k * PANEL_W, panels: k },
+    check,
+  };
+}
+
+/** The checked fixes of a shortfall flag: those that clear it first, each group in the order generated. */
+export function shortfallFixes(ctx: FixContext, flag: Flag): Fix[] {
+  const where = flag.where;
+  const stopIndex = where.kind === 'stop' ? where.stopIndex : where.driveIndex;
+  const fixes = [
+    ...applianceFixes(ctx, flag),
+    generatorFix(ctx, flag, stopIndex),
+    hookupFix(ctx, flag, stopIndex),
+    solarFix(ctx, flag),
+    batteryFix(ctx, flag),
+  ].filter((f): f is Fix => f !== null);
+  return [...fixes.filter((f) => f.check?.clears), ...fixes.filter((f) => !f.check?.clears)];
+}
