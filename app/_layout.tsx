@@ -11,6 +11,7 @@ import { colors } from '@/components/theme/tokens';
 import { useSession } from '@/stores/auth-client';
 import { createQueryClient } from '@/stores/queries/query-client';
 import { hydrateUnits } from '@/stores/units-store';
+import '@/shared/schemas/plain-errors';
 
 // Before the first render, so no screen shows metric figures for a moment to a US-units user.
 hydrateUnits();

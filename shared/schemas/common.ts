@@ -3,6 +3,7 @@
 import { IANAZone } from 'luxon';
 import { z } from 'zod';
 import { LIMITS, fieldRule } from './limits';
+import './plain-errors';
 
 export const percentSchema = z.number().min(0).max(100);
 export const fractionSchema = z.number().min(0).max(1);
