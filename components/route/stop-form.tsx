@@ -2,6 +2,8 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useEffect, useRef, useState } from 'react';
 import { Controller, useForm, useWatch, type Control } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
+import { FieldSlot } from '@/components/forms/field-slot';
+import { showServerRefusal } from '@/components/forms/server-refusal';
 import { temperature } from '@/components/format/units';
 import { space } from '@/components/theme/tokens';
 import { Banner } from '@/components/ui/banner';
@@ -12,13 +14,21 @@ import { ConflictNotice } from '@/components/ui/conflict-notice';
 import { NumberField } from '@/components/ui/number-field';
 import { TextField } from '@/components/ui/text-field';
 import type { StopRecord } from '@/shared/schemas/api';
-import { ApiError, conflictCurrent } from '@/stores/queries/api-client';
+import { conflictCurrent } from '@/stores/queries/api-client';
 import { useStopSaveMutation } from '@/stores/queries/route';
 import { showToast } from '@/stores/toast-store';
 import { useUnits } from '@/stores/units-store';
 import { SITE_PRESETS } from '@/shared/engine/site-exposure';
 import type { SitePreset } from '@/shared/schemas/trip';
-import { fromFormValues, presetAt, stopFormSchema, toFormValues, type StopFormValues } from './stop-form-values';
+import {
+  fromFormValues,
+  presetAt,
+  STOP_FIELD_ORDER,
+  stopFieldOf,
+  stopFormSchema,
+  toFormValues,
+  type StopFormValues,
+} from './stop-form-values';
 import { NearestTowns } from './nearest-towns';
 import { PlaceSearchField } from './place-search-field';
 import { ZonePicker } from './zone-picker';
@@ -65,7 +75,7 @@ function Num({
       control={control}
       name={name}
       render={({ field, fieldState }) => (
-        <View style={styles.cell}>
+        <FieldSlot fieldRef={field.ref} style={styles.cell}>
           <NumberField
             testID={testID}
             label={label}
@@ -76,7 +86,7 @@ function Num({
             onBlur={field.onBlur}
             error={fieldState.error?.message}
           />
-        </View>
+        </FieldSlot>
       )}
     />
   );
@@ -102,7 +112,7 @@ function Txt({
       control={control}
       name={name}
       render={({ field, fieldState }) => (
-        <View style={inRow ? styles.cell : null}>
+        <FieldSlot fieldRef={field.ref} style={inRow ? styles.cell : null}>
           <TextField
             testID={testID}
             label={label}
@@ -112,7 +122,7 @@ function Txt({
             onBlur={field.onBlur}
             error={fieldState.error?.message}
           />
-        </View>
+        </FieldSlot>
       )}
     />
   );
@@ -163,8 +173,8 @@ export function StopForm({ tripId, record, fallbackZone, onDone, newStopTimes }:
       setFormError(undefined);
       const built = fromFormValues(values, units);
       if (!built.ok) {
-        for (const [field, message] of Object.entries(built.errors))
-          setError(field as keyof StopFormValues, { message });
+        const fields = STOP_FIELD_ORDER.filter((field) => built.errors[field]);
+        fields.forEach((field, i) => setError(field, { message: built.errors[field] }, { shouldFocus: i === 0 }));
         return;
       }
       try {
@@ -175,33 +185,40 @@ export function StopForm({ tripId, record, fallbackZone, onDone, newStopTimes }:
       } catch (error) {
         const current = conflictCurrent<StopRecord>(error);
         if (current) setConflict(current);
-        else if (error instanceof ApiError && error.fields) {
-          for (const [field, messages] of Object.entries(error.fields)) setFormError(`${field}: ${messages.join(' ')}`);
-        } else setFormError(error instanceof ApiError ? error.message : 'The stop could not be saved.');
+        else
+          setFormError(
+            showServerRefusal(error, {
+              order: STOP_FIELD_ORDER,
+              fieldOf: stopFieldOf,
+              setError,
+              fallback: 'The stop could not be saved.',
+            }),
+          );
       }
     });
 
   return (
     <View style={styles.form} testID="stop-form">
-      {formError ? <Banner testID="stop-form-error" message={formError} /> : null}
       <Controller
         control={control}
         name="name"
         render={({ field, fieldState }) => (
-          <PlaceSearchField
-            testID="stop-name"
-            value={field.value}
-            onChangeText={field.onChange}
-            onBlur={field.onBlur}
-            error={fieldState.error?.message}
-            onPick={(place) => {
-              const set = { shouldValidate: true, shouldDirty: true };
-              setValue('name', place.name, set);
-              setValue('lat', place.lat, set);
-              setValue('lon', place.lon, set);
-              if (place.timeZone) setValue('timeZone', place.timeZone, set);
-            }}
-          />
+          <FieldSlot fieldRef={field.ref}>
+            <PlaceSearchField
+              testID="stop-name"
+              value={field.value}
+              onChangeText={field.onChange}
+              onBlur={field.onBlur}
+              error={fieldState.error?.message}
+              onPick={(place) => {
+                const set = { shouldValidate: true, shouldDirty: true };
+                setValue('name', place.name, set);
+                setValue('lat', place.lat, set);
+                setValue('lon', place.lon, set);
+                if (place.timeZone) setValue('timeZone', place.timeZone, set);
+              }}
+            />
+          </FieldSlot>
         )}
       />
       <View style={styles.grid}>
@@ -424,6 +441,8 @@ export function StopForm({ tripId, record, fallbackZone, onDone, newStopTimes }:
           }}
         />
       ) : null}
+      {/* Beside Save, where the eye is after pressing it; refusals about one field sit beside that field. */}
+      {formError ? <Banner testID="stop-form-error" message={formError} /> : null}
       <View style={styles.actions}>
         <Button
           testID="stop-save"
