@@ -7,6 +7,7 @@ import { space } from '@/components/theme/tokens';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { ChoiceChips } from '@/components/ui/choice-chips';
+import { DateTimeField } from '@/components/ui/date-time-field';
 import { Skeleton } from '@/components/ui/skeleton';
 import { Text } from '@/components/ui/text';
 import { TextField } from '@/components/ui/text-field';
@@ -23,8 +24,8 @@ import { ZoneField } from './zone-field';
 const formSchema = z
   .object({
     name: z.string().trim().min(1, { error: 'Give the trip a name.' }).max(120),
-    startDate: z.iso.date({ error: 'Use a date like 2027-09-12.' }),
-    endDate: z.iso.date({ error: 'Use a date like 2027-09-19.' }),
+    startDate: z.iso.date({ error: 'Choose the first day.' }),
+    endDate: z.iso.date({ error: 'Choose the last day.' }),
     timeZone: timeZoneSchema,
     rig: z.string().regex(/^(preset|saved):.+/, { error: 'Choose a rig to start from.' }),
   })
@@ -84,21 +85,20 @@ export function NewTripForm({ onCreated }: { onCreated: (detail: TripDetail) => 
     ...(mine.data?.rigs ?? []).map((r) => ({ value: `saved:${r.id}`, label: r.rig.name })),
     ...(presets.data?.presets ?? []).map((p) => ({ value: `preset:${p.id}`, label: p.label })),
   ];
-  const text = (name: 'name' | 'startDate' | 'endDate', label: string, hint?: string) => (
+  const day = (name: 'startDate' | 'endDate', label: string) => (
     <Controller
       control={control}
       name={name}
       render={({ field, fieldState }) => (
-        <FieldSlot fieldRef={field.ref} style={name === 'startDate' || name === 'endDate' ? styles.cell : null}>
-          <TextField
+        <FieldSlot fieldRef={field.ref} style={styles.cell}>
+          <DateTimeField
+            kind="date"
             testID={`new-trip-${name}`}
             label={label}
-            hint={hint}
             value={field.value}
-            onChangeText={field.onChange}
+            onChange={field.onChange}
             onBlur={field.onBlur}
             error={fieldState.error?.message}
-            onSubmitEditing={submit}
           />
         </FieldSlot>
       )}
@@ -106,10 +106,26 @@ export function NewTripForm({ onCreated }: { onCreated: (detail: TripDetail) => 
   );
   return (
     <View style={styles.form} testID="new-trip-form">
-      {text('name', 'Trip name')}
+      <Controller
+        control={control}
+        name="name"
+        render={({ field, fieldState }) => (
+          <FieldSlot fieldRef={field.ref}>
+            <TextField
+              testID="new-trip-name"
+              label="Trip name"
+              value={field.value}
+              onChangeText={field.onChange}
+              onBlur={field.onBlur}
+              error={fieldState.error?.message}
+              onSubmitEditing={submit}
+            />
+          </FieldSlot>
+        )}
+      />
       <View style={styles.grid}>
-        {text('startDate', 'First day', 'YYYY-MM-DD')}
-        {text('endDate', 'Last day', 'YYYY-MM-DD')}
+        {day('startDate', 'First day')}
+        {day('endDate', 'Last day')}
       </View>
       <Controller
         control={control}

@@ -3,6 +3,7 @@ import { useEffect, useRef, useState } from 'react';
 import { Controller, useForm, useWatch, type Control } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 import { FieldSlot } from '@/components/forms/field-slot';
+import { ZoneField } from '@/components/forms/zone-field';
 import { showServerRefusal } from '@/components/forms/server-refusal';
 import { temperature } from '@/components/format/units';
 import { space } from '@/components/theme/tokens';
@@ -11,6 +12,7 @@ import { Button } from '@/components/ui/button';
 import { Caution } from '@/components/ui/cautions';
 import { ChoiceChips } from '@/components/ui/choice-chips';
 import { ConflictNotice } from '@/components/ui/conflict-notice';
+import { DateTimeField } from '@/components/ui/date-time-field';
 import { NumberField } from '@/components/ui/number-field';
 import { TextField } from '@/components/ui/text-field';
 import type { StopRecord } from '@/shared/schemas/api';
@@ -31,7 +33,6 @@ import {
 } from './stop-form-values';
 import { NearestTowns } from './nearest-towns';
 import { PlaceSearchField } from './place-search-field';
-import { ZonePicker } from './zone-picker';
 
 type Props = {
   tripId: string;
@@ -101,7 +102,7 @@ function Txt({
   inRow = false,
 }: {
   control: Control<StopFormValues>;
-  name: 'timeZone' | 'arrive' | 'depart' | 'horizon' | 'notes';
+  name: 'horizon' | 'notes';
   label: string;
   hint?: string;
   testID: string;
@@ -128,12 +129,44 @@ function Txt({
   );
 }
 
+/** A local day and time at the stop, through the platform's own picker. */
+function When({
+  control,
+  name,
+  label,
+  testID,
+}: {
+  control: Control<StopFormValues>;
+  name: 'arrive' | 'depart';
+  label: string;
+  testID: string;
+}) {
+  return (
+    <Controller
+      control={control}
+      name={name}
+      render={({ field, fieldState }) => (
+        <FieldSlot fieldRef={field.ref} style={styles.cell}>
+          <DateTimeField
+            kind="datetime"
+            testID={testID}
+            label={label}
+            value={field.value}
+            onChange={field.onChange}
+            onBlur={field.onBlur}
+            error={fieldState.error?.message}
+          />
+        </FieldSlot>
+      )}
+    />
+  );
+}
+
 /** Add or edit a stop. The form keeps everything typed when the server refuses it. */
 export function StopForm({ tripId, record, fallbackZone, onDone, newStopTimes }: Props) {
   const units = useUnits();
   const save = useStopSaveMutation(tripId);
   const [formError, setFormError] = useState<string>();
-  const [zoneListOpen, setZoneListOpen] = useState(false);
   const [conflict, setConflict] = useState<StopRecord | null>(null);
   const { control, handleSubmit, setError, setValue, getValues, reset, formState } = useForm<StopFormValues>({
     resolver: zodResolver(stopFormSchema),
@@ -142,9 +175,9 @@ export function StopForm({ tripId, record, fallbackZone, onDone, newStopTimes }:
       ...(record ? {} : newStopTimes),
     },
   });
-  const [exposureKind, hookupOn, generatorOn, timeZone, opennessPct, leafAreaIndex, lat, lon] = useWatch({
+  const [exposureKind, hookupOn, generatorOn, opennessPct, leafAreaIndex, lat, lon] = useWatch({
     control,
-    name: ['exposureKind', 'hookupOn', 'generatorOn', 'timeZone', 'opennessPct', 'leafAreaIndex', 'lat', 'lon'],
+    name: ['exposureKind', 'hookupOn', 'generatorOn', 'opennessPct', 'leafAreaIndex', 'lat', 'lon'],
   });
   const tUnit = temperature(0, units).unit;
   // Saves name the version the form was opened on, so someone else's change meanwhile is caught (409).
@@ -164,7 +197,7 @@ export function StopForm({ tripId, record, fallbackZone, onDone, newStopTimes }:
     try {
       setValue('timeZone', tzlookup(lat, lon), { shouldValidate: true });
     } catch {
-      setError('timeZone', { message: 'No time zone found for those coordinates; type one such as Europe/London.' });
+      setError('timeZone', { message: 'No time zone found for those coordinates; choose one from the list.' });
     }
   };
 
@@ -226,52 +259,33 @@ export function StopForm({ tripId, record, fallbackZone, onDone, newStopTimes }:
         <Num control={control} name="lon" label="Longitude" unit="°" testID="stop-lon" />
       </View>
       <NearestTowns lat={lat} lon={lon} testID="stop-nearest-towns" />
-      <View style={styles.zone}>
-        <Txt
-          control={control}
-          name="timeZone"
-          label="Time zone"
-          hint="an IANA name such as Europe/London"
-          testID="stop-time-zone"
-        />
-        <View style={styles.zoneButtons}>
-          <Button
-            testID="stop-zone-from-coordinates"
-            tone="secondary"
-            label="From coordinates"
-            onPress={() => void zoneFromCoordinates()}
-          />
-          <Button
-            testID="stop-zone-list-toggle"
-            tone="secondary"
-            label={zoneListOpen ? 'Hide the list' : 'Pick from a list'}
-            accessibilityLabel={zoneListOpen ? 'Hide the time zone list' : 'Pick the time zone from a list'}
-            aria-expanded={zoneListOpen}
-            onPress={() => setZoneListOpen(!zoneListOpen)}
-          />
-        </View>
-      </View>
-      {zoneListOpen ? (
-        <ZonePicker
-          testID="stop-zone-list"
-          value={timeZone}
-          onClose={() => setZoneListOpen(false)}
-          onPick={(zone) => {
-            setValue('timeZone', zone, { shouldValidate: true, shouldDirty: true });
-            setZoneListOpen(false);
-          }}
-        />
-      ) : null}
+      <Controller
+        control={control}
+        name="timeZone"
+        render={({ field, fieldState }) => (
+          <FieldSlot fieldRef={field.ref}>
+            <ZoneField
+              testID="stop-time-zone"
+              label="Time zone"
+              value={field.value}
+              onChange={(zone) => setValue('timeZone', zone, { shouldValidate: true, shouldDirty: true })}
+              error={fieldState.error?.message}
+              extraAction={
+                <Button
+                  testID="stop-zone-from-coordinates"
+                  tone="secondary"
+                  label="From coordinates"
+                  accessibilityLabel="Set the time zone from the coordinates"
+                  onPress={() => void zoneFromCoordinates()}
+                />
+              }
+            />
+          </FieldSlot>
+        )}
+      />
       <View style={styles.grid}>
-        <Txt
-          control={control}
-          name="arrive"
-          inRow
-          label="Arrive (local)"
-          hint="YYYY-MM-DD HH:MM"
-          testID="stop-arrive"
-        />
-        <Txt control={control} name="depart" inRow label="Leave (local)" hint="YYYY-MM-DD HH:MM" testID="stop-depart" />
+        <When control={control} name="arrive" label="Arrive (local time)" testID="stop-arrive" />
+        <When control={control} name="depart" label="Leave (local time)" testID="stop-depart" />
       </View>
       <Controller
         control={control}
