@@ -31,11 +31,12 @@ export function DateTimeField({
         type={kind === 'date' ? 'date' : 'datetime-local'}
         value={toInputValue(value)}
         disabled={!editable}
+        aria-readonly={!editable || undefined}
         aria-labelledby={`${id}-label`}
         aria-describedby={note ? `${id}-note` : undefined}
         aria-invalid={!!error}
         data-testid={testID}
-        style={{ ...inputStyle, borderColor: error ? colors.ember : colors.line }}
+        style={{ ...inputStyle, borderColor: error ? colors.ember : colors.line, ...(editable ? null : readOnlyStyle) }}
         onChange={(e) => onChange(fromInputValue(e.currentTarget.value))}
         onBlur={onBlur}
       />
@@ -70,4 +71,14 @@ const inputStyle = {
   color: colors.ink,
   fontFamily: fonts.regular,
   fontSize: 16,
+} as const;
+
+// Read-only reads as plain text: no box and no picker button, like TextField's read-only look.
+const readOnlyStyle = {
+  minHeight: 28,
+  borderWidth: 0,
+  padding: 0,
+  backgroundColor: 'transparent',
+  fontFamily: fonts.semiBold,
+  appearance: 'none',
 } as const;

@@ -31,9 +31,10 @@ export function TimeOfDayField({
         step={stepMinutes * 60}
         value={value}
         disabled={!editable}
+        aria-readonly={!editable || undefined}
         aria-labelledby={`${id}-label`}
         data-testid={testID}
-        style={inputStyle}
+        style={editable ? inputStyle : { ...inputStyle, ...readOnlyStyle }}
         onChange={(e) => {
           const parsed = parseClock(e.currentTarget.value, stepMinutes);
           setTyping(parsed ? null : e.currentTarget.value);
@@ -61,4 +62,14 @@ const inputStyle = {
   color: colors.ink,
   fontFamily: fonts.regular,
   fontSize: 16,
+} as const;
+
+// Read-only reads as plain text: no box and no picker button, like TextField's read-only look.
+const readOnlyStyle = {
+  minHeight: 28,
+  borderWidth: 0,
+  padding: 0,
+  backgroundColor: 'transparent',
+  fontFamily: fonts.semiBold,
+  appearance: 'none',
 } as const;

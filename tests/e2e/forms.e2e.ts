@@ -2,7 +2,7 @@
 // date and time pickers; a viewer's read-only fields.
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
-import { DEMO_ACCOUNT } from '@/db/seed';
+import { DEMO_ACCOUNT, DEMO_VIEWER } from '@/db/seed';
 import { byTestId, openTrip, screenshot, signIn, trackPageErrors, useServerAndBrowser, VIEWPORTS } from './harness';
 
 const suite = useServerAndBrowser();
@@ -85,6 +85,32 @@ describe('date and time pickers', () => {
       expect(await page.textContent(byTestId('stop-time-zone-value'))).toContain('Europe/London');
       await page.locator(byTestId('stop-arrive')).evaluate((el) => el.scrollIntoView({ block: 'start' }));
       await screenshot(page, `forms-stop-pickers-${width}`);
+      await context.close();
+    },
+  );
+});
+
+describe('a viewer', () => {
+  it.each(['phone', 'desktop'] as const)(
+    'when a viewer opens an appliance at %s width, then the Loads tab says it is read-only and its fields read as text, not boxes',
+    async (width) => {
+      const context = await suite.browser.newContext({ viewport: VIEWPORTS[width] });
+      const page = await context.newPage();
+      await signIn(page, suite.server.url, DEMO_VIEWER.email, DEMO_VIEWER.password);
+      await openTrip(page, 'Highland loop');
+      await page.click(byTestId('tab-loads'));
+      await page.waitForSelector(byTestId('loads-read-only'));
+      await page.locator('[data-testid^="appliance-"][role="button"]').first().click();
+      await page.waitForSelector(byTestId('appliance-form'));
+      const name = page.locator(byTestId('appliance-name'));
+      expect(await name.getAttribute('aria-readonly')).toBe('true');
+      const look = await name.evaluate((el) => {
+        const style = getComputedStyle(el);
+        return { border: style.borderTopWidth, background: style.backgroundColor };
+      });
+      expect(look).toEqual({ border: '0px', background: 'rgba(0, 0, 0, 0)' });
+      await page.locator(byTestId('appliance-form')).evaluate((el) => el.scrollIntoView({ block: 'start' }));
+      await screenshot(page, `forms-viewer-appliance-${width}`);
       await context.close();
     },
   );
