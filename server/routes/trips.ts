@@ -1,10 +1,12 @@
 import { Router } from 'express';
+import { can } from '@/shared/schemas/roles';
 import { findRigPreset } from '@/shared/rig-presets';
 import { createTripRequestSchema, updateTripRequestSchema } from '@/shared/schemas/api';
 import { copyTripRequestSchema } from '@/shared/schemas/sharing';
 import { tripCopies } from '@/db/schema/clubs';
 import { rigSchema } from '@/shared/schemas/rig';
 import { checkTripDatesCoverStops } from '@/shared/trip-rules';
+import { listSharedClubNames } from '@/db/queries/clubs';
 import { findSavedRig } from '@/db/queries/rigs';
 import { rigFromRow } from '@/db/queries/mappers';
 import { listStopRows } from '@/db/queries/stops';
@@ -46,6 +48,7 @@ export function tripsRouter(deps: TripItemsDeps): Router {
         reservePct: figures?.reservePct ?? null,
         flagCount: figures?.flagCount ?? null,
         budgetStatus: status,
+        ...(can(role, 'editTrip') ? { sharedWith: listSharedClubNames(db, trip.id) } : {}),
         route: routeForCard(listStopRows(db, trip.id), figures?.lowestByStop ?? null),
       });
     });
