@@ -1,4 +1,5 @@
 import { and, asc, eq, isNull } from 'drizzle-orm';
+import type { ApplianceFields } from '@/shared/schemas/appliance';
 import type { Rig } from '@/shared/schemas/rig';
 import type { DbExecutor } from '../client';
 import { rigs, type RigRow } from '../schema/rigs';
@@ -35,6 +36,25 @@ export function updateRigRow(
   const row = db
     .update(rigs)
     .set({ ...rigToColumns(rig), version: version + 1, updatedAt: now })
+    .where(and(eq(rigs.id, current.id), eq(rigs.version, version)))
+    .returning()
+    .get();
+  return { status: 'ok', row };
+}
+
+/** Replaces a saved rig's usual loads as one versioned change of the rig. */
+export function updateRigLoads(
+  db: DbExecutor,
+  current: RigRow | undefined,
+  version: number,
+  loads: ApplianceFields[],
+  now: Date,
+): VersionedWrite<RigRow> {
+  if (!current) return { status: 'missing' };
+  if (current.version !== version) return { status: 'conflict', current };
+  const row = db
+    .update(rigs)
+    .set({ loads, version: version + 1, updatedAt: now })
     .where(and(eq(rigs.id, current.id), eq(rigs.version, version)))
     .returning()
     .get();

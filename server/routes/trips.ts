@@ -21,6 +21,7 @@ import {
   toTripSummary,
   touchTrip,
 } from '@/db/queries/trips';
+import { appliances } from '@/db/schema/appliances';
 import { trips } from '@/db/schema/trips';
 import { eq } from 'drizzle-orm';
 import { LIMITS, tripDayCount } from '@/shared/schemas/limits';
@@ -141,14 +142,28 @@ export function tripsRouter(deps: TripItemsDeps): Router {
   // trip with its stops, drives and routines, running on one of their saved rigs, linked to the original.
   trip.post('/copy', (req, res) => {
     const { tripId, userId } = tripAccess(res);
-    const { rigId, name } = copyTripRequestSchema.parse(req.body);
+    const { rigId, name, sharedApplianceIds } = copyTripRequestSchema.parse(req.body);
     const saved = findSavedRig(db, userId, rigId);
     if (!saved) throw unprocessable('rigId', 'Choose one of your saved rigs (My rigs).');
     const source = findTrip(db, tripId);
     if (!source) throw notFound('That trip was not found.');
+    const planIds = new Set(
+      db
+        .select({ id: appliances.id })
+        .from(appliances)
+        .where(eq(appliances.tripId, tripId))
+        .all()
+        .map((a) => a.id),
+    );
+    if (sharedApplianceIds.some((id) => !planIds.has(id)))
+      throw unprocessable('sharedApplianceIds', 'Tick only appliances from this plan.');
+    const loads = saved.loads ?? [];
+    if (loads.length + new Set(sharedApplianceIds).size > LIMITS.appliancesPerTrip)
+      throw unprocessable('sharedApplianceIds', `A trip holds at most ${LIMITS.appliancesPerTrip} appliances.`);
     const at = now();
     const copyId = db.transaction((tx) => {
-      const id = duplicateTrip(tx, tripId, userId, at, { name: name ?? source.name, rig: rigFromRow(saved) });
+      const onto = { rig: rigFromRow(saved), loads, sharedApplianceIds };
+      const id = duplicateTrip(tx, tripId, userId, at, { name: name ?? source.name, onto });
       tx.insert(tripCopies)
         .values({
           copyTripId: id,
