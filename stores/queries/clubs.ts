@@ -124,8 +124,15 @@ export function useTripShareWithdrawMutation(tripId: string) {
 export function useCopyOntoRigMutation() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: ({ tripId, ...body }: { tripId: string; rigId: string; name?: string }) =>
-      apiFetch<TripDetail>(`/api/trips/${encodeURIComponent(tripId)}/copy`, { method: 'POST', json: body }),
+    mutationFn: ({
+      tripId,
+      ...body
+    }: {
+      tripId: string;
+      rigId: string;
+      name?: string;
+      sharedApplianceIds?: string[];
+    }) => apiFetch<TripDetail>(`/api/trips/${encodeURIComponent(tripId)}/copy`, { method: 'POST', json: body }),
     onSuccess: (detail) => {
       queryClient.setQueryData(tripKeys.detail(detail.trip.id), detail);
       return Promise.all([
