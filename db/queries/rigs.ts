@@ -24,6 +24,25 @@ export function findSavedRig(db: DbExecutor, ownerId: string, rigId: string): Ri
     .get();
 }
 
+/** One versioned change of a rig row: refused when the row is gone or the version is stale. */
+function updateRigVersioned(
+  db: DbExecutor,
+  current: RigRow | undefined,
+  version: number,
+  columns: Partial<typeof rigs.$inferInsert>,
+  now: Date,
+): VersionedWrite<RigRow> {
+  if (!current) return { status: 'missing' };
+  if (current.version !== version) return { status: 'conflict', current };
+  const row = db
+    .update(rigs)
+    .set({ ...columns, version: version + 1, updatedAt: now })
+    .where(and(eq(rigs.id, current.id), eq(rigs.version, version)))
+    .returning()
+    .get();
+  return { status: 'ok', row };
+}
+
 export function updateRigRow(
   db: DbExecutor,
   current: RigRow | undefined,
@@ -31,15 +50,7 @@ export function updateRigRow(
   rig: Rig,
   now: Date,
 ): VersionedWrite<RigRow> {
-  if (!current) return { status: 'missing' };
-  if (current.version !== version) return { status: 'conflict', current };
-  const row = db
-    .update(rigs)
-    .set({ ...rigToColumns(rig), version: version + 1, updatedAt: now })
-    .where(and(eq(rigs.id, current.id), eq(rigs.version, version)))
-    .returning()
-    .get();
-  return { status: 'ok', row };
+  return updateRigVersioned(db, current, version, rigToColumns(rig), now);
 }
 
 /** Replaces a saved rig's usual loads as one versioned change of the rig. */
@@ -50,15 +61,7 @@ export function updateRigLoads(
   loads: ApplianceFields[],
   now: Date,
 ): VersionedWrite<RigRow> {
-  if (!current) return { status: 'missing' };
-  if (current.version !== version) return { status: 'conflict', current };
-  const row = db
-    .update(rigs)
-    .set({ loads, version: version + 1, updatedAt: now })
-    .where(and(eq(rigs.id, current.id), eq(rigs.version, version)))
-    .returning()
-    .get();
-  return { status: 'ok', row };
+  return updateRigVersioned(db, current, version, { loads }, now);
 }
 
 export function deleteSavedRig(db: DbExecutor, ownerId: string, rigId: string): boolean {
