@@ -1,7 +1,8 @@
 import { useId } from 'react';
 import { StyleSheet, View } from 'react-native';
-import { colors, fonts, radii, space } from '@/components/theme/tokens';
+import { colors, space } from '@/components/theme/tokens';
 import { Text } from './text';
+import { webInputStyle, webReadOnlyStyle } from './web-input-style';
 import { describeInLocale, fromInputValue, toInputValue, type DateTimeFieldProps } from './date-time-field.types';
 
 /**
@@ -36,7 +37,11 @@ export function DateTimeField({
         aria-describedby={note ? `${id}-note` : undefined}
         aria-invalid={!!error}
         data-testid={testID}
-        style={{ ...inputStyle, borderColor: error ? colors.ember : colors.line, ...(editable ? null : readOnlyStyle) }}
+        style={{
+          ...webInputStyle,
+          borderColor: error ? colors.ember : colors.line,
+          ...(editable ? null : webReadOnlyStyle),
+        }}
         onChange={(e) => onChange(fromInputValue(e.currentTarget.value))}
         onBlur={onBlur}
       />
@@ -56,29 +61,3 @@ export function DateTimeField({
 }
 
 const styles = StyleSheet.create({ wrap: { gap: space.xs } });
-
-// A DOM element takes a plain style object; these match TextField's box.
-const inputStyle = {
-  minHeight: 48,
-  boxSizing: 'border-box',
-  width: '100%',
-  minWidth: 0,
-  borderWidth: 2,
-  borderStyle: 'solid',
-  borderRadius: radii.md,
-  padding: `0 ${space.md}px`,
-  backgroundColor: colors.white,
-  color: colors.ink,
-  fontFamily: fonts.regular,
-  fontSize: 16,
-} as const;
-
-// Read-only reads as plain text: no box and no picker button, like TextField's read-only look.
-const readOnlyStyle = {
-  minHeight: 28,
-  borderWidth: 0,
-  padding: 0,
-  backgroundColor: 'transparent',
-  fontFamily: fonts.semiBold,
-  appearance: 'none',
-} as const;

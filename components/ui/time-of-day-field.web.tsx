@@ -1,7 +1,8 @@
 import { useId, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
-import { colors, fonts, radii, space } from '@/components/theme/tokens';
+import { space } from '@/components/theme/tokens';
 import { Text } from './text';
+import { webInputStyle, webReadOnlyStyle } from './web-input-style';
 import { formatClock, parseClock, type TimeOfDayFieldProps } from './time-of-day-field.types';
 
 /**
@@ -34,7 +35,7 @@ export function TimeOfDayField({
         aria-readonly={!editable || undefined}
         aria-labelledby={`${id}-label`}
         data-testid={testID}
-        style={editable ? inputStyle : { ...inputStyle, ...readOnlyStyle }}
+        style={editable ? webInputStyle : { ...webInputStyle, ...webReadOnlyStyle }}
         onChange={(e) => {
           const parsed = parseClock(e.currentTarget.value, stepMinutes);
           setTyping(parsed ? null : e.currentTarget.value);
@@ -47,29 +48,3 @@ export function TimeOfDayField({
 }
 
 const styles = StyleSheet.create({ wrap: { gap: space.xs } });
-
-// A DOM element takes a plain style object; these match TextField's box.
-const inputStyle = {
-  minHeight: 48,
-  boxSizing: 'border-box',
-  width: '100%',
-  borderWidth: 2,
-  borderStyle: 'solid',
-  borderColor: colors.line,
-  borderRadius: radii.md,
-  padding: `0 ${space.md}px`,
-  backgroundColor: colors.white,
-  color: colors.ink,
-  fontFamily: fonts.regular,
-  fontSize: 16,
-} as const;
-
-// Read-only reads as plain text: no box and no picker button, like TextField's read-only look.
-const readOnlyStyle = {
-  minHeight: 28,
-  borderWidth: 0,
-  padding: 0,
-  backgroundColor: 'transparent',
-  fontFamily: fonts.semiBold,
-  appearance: 'none',
-} as const;
