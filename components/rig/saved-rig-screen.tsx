@@ -2,7 +2,6 @@ import { Link } from 'expo-router';
 import { StyleSheet, View } from 'react-native';
 import { useIsWide } from '@/components/theme/breakpoints';
 import { space } from '@/components/theme/tokens';
-import { Card } from '@/components/ui/card';
 import { EmptyState } from '@/components/ui/empty-state';
 import { QueryError } from '@/components/ui/query-error';
 import { Screen } from '@/components/ui/screen';
@@ -41,15 +40,13 @@ export function SavedRigScreen({ rigId }: { rigId: string }) {
       {back}
       <View style={[styles.panes, wide ? styles.panesWide : null]}>
         <View style={styles.main}>
-          <Card testID="saved-rig-parts">
-            <RigForm
-              key={record.id}
-              save={save}
-              record={record}
-              canEdit
-              dcLoads={dcLoadsFromAppliances(record.loads.map((load, i) => ({ ...load, id: `load-${i}` })))}
-            />
-          </Card>
+          <RigForm
+            key={record.id}
+            save={save}
+            record={record}
+            canEdit
+            dcLoads={dcLoadsFromAppliances(record.loads.map((load, i) => ({ ...load, id: `load-${i}` })))}
+          />
         </View>
         <View style={wide ? styles.side : null}>
           <RigLoadsEditor record={record} />

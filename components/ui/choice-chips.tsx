@@ -32,7 +32,7 @@ export function ChoiceChips<T extends string>({ label, options, value, onChange,
               style={[styles.chip, on ? styles.on : null, disabled ? styles.disabled : null]}
             >
               {on ? <View style={styles.mark} testID={`${testID}-${o.value}-mark`} /> : null}
-              <Text variant="label" color={on ? 'pine' : 'ink'}>
+              <Text variant="label" color={on ? 'pine' : 'ink'} style={styles.chipText}>
                 {o.label}
               </Text>
             </Pressable>
@@ -61,6 +61,8 @@ const styles = StyleSheet.create({
   // Chosen reads as a ticked, outlined tag in a light tint, never as the solid fill that marks a button (an action).
   on: { backgroundColor: colors.pineSoft, borderColor: colors.pine, borderWidth: 2, paddingHorizontal: space.lg - 1 },
   disabled: { opacity: 0.55 },
+  // A long label wraps inside its chip rather than pushing the chip past its card.
+  chipText: { flexShrink: 1 },
   // The radio's filled dot: the chosen chip is marked, not filled like a button.
   mark: { width: 10, height: 10, borderRadius: 5, backgroundColor: colors.pine },
 });
