@@ -9,6 +9,7 @@ import { stops } from '@/db/schema/stops';
 import type { ApplianceFields } from '@/shared/schemas/appliance';
 import type { Rig } from '@/shared/schemas/rig';
 import { notFound } from './errors';
+import { ensureRoomForTrip } from './owner-limits';
 
 /** What the copy runs on, for "copy onto my rig": the saved rig, its usual loads, and which of the plan's own
  * appliances come along (the rest of the plan's list stays with the plan). */
@@ -29,6 +30,7 @@ export function duplicateTrip(
     const source = findTrip(tx, tripId);
     const sourceRig = findTripRig(tx, tripId);
     if (!source || !sourceRig) throw notFound('That trip was not found.');
+    ensureRoomForTrip(tx, ownerId);
     const copy = insertTrip(
       tx,
       {

@@ -9,6 +9,7 @@ import { notFound } from '../errors';
 import { idParam } from '../middleware/trip-access';
 import { currentUser } from '../middleware/require-session';
 import { unwrapWrite } from './write-result';
+import { ensureRoomForSavedRig } from '../owner-limits';
 
 /** "My rigs": each user's saved rigs. A trip runs on its own copy, edited under /trips/:id/rig. */
 export function rigsRouter({ db, now }: { db: Db; now: () => Date }): Router {
@@ -20,7 +21,11 @@ export function rigsRouter({ db, now }: { db: Db; now: () => Date }): Router {
 
   router.post('/', (req, res) => {
     const { rig, loads } = createRigRequestSchema.parse(req.body);
-    const row = insertRig(db, { ownerId: currentUser(res).id, tripId: null }, rig, now(), loads);
+    const ownerId = currentUser(res).id;
+    const row = db.transaction((tx) => {
+      ensureRoomForSavedRig(tx, ownerId);
+      return insertRig(tx, { ownerId, tripId: null }, rig, now(), loads);
+    });
     res.status(201).json(savedRigRecord(row));
   });
 

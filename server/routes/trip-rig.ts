@@ -8,6 +8,7 @@ import { replaceTripRigRequestSchema, saveTripRigRequestSchema, updateRigRequest
 import { notFound, unprocessable } from '../errors';
 import { requirePermission, tripAccess } from '../middleware/trip-access';
 import { unwrapWrite } from './write-result';
+import { ensureRoomForSavedRig } from '../owner-limits';
 
 export function tripRigRouter({ db, now }: { db: Db; now: () => Date }): Router {
   const router = Router({ mergeParams: true });
@@ -58,7 +59,10 @@ export function tripRigRouter({ db, now }: { db: Db; now: () => Date }): Router 
       const { id: _id, ...fields } = appliance;
       return fields;
     });
-    const row = insertRig(db, { ownerId: userId, tripId: null }, { ...rigFromRow(tripRig), name }, now(), loads);
+    const row = db.transaction((tx) => {
+      ensureRoomForSavedRig(tx, userId);
+      return insertRig(tx, { ownerId: userId, tripId: null }, { ...rigFromRow(tripRig), name }, now(), loads);
+    });
     res.status(201).json({ rig: savedRigRecord(row) });
   });
 

@@ -29,6 +29,7 @@ import { conflict, limitReached, notFound, unprocessable } from '../errors';
 import { currentUser } from '../middleware/require-session';
 import { loadTripAccess, requirePermission, tripAccess } from '../middleware/trip-access';
 import { routeForCard } from '../places/route-for-card';
+import { ensureRoomForTrip } from '../owner-limits';
 import { duplicateTrip } from '../trip-copy';
 import { tripItemsRouter, type TripItemsDeps } from './trip-items';
 
@@ -72,6 +73,7 @@ export function tripsRouter(deps: TripItemsDeps): Router {
     }
     const at = now();
     const tripId = db.transaction((tx) => {
+      ensureRoomForTrip(tx, user.id);
       const trip = insertTrip(
         tx,
         {

@@ -17,6 +17,10 @@ export const LIMITS = {
   propaneTanksPerRig: 8,
   /** Clubs one person may organise. */
   clubsPerUser: 20,
+  /** Trips one person owns: years of weekends and rallies. */
+  tripsPerUser: 500,
+  /** Rigs one person keeps in My rigs. */
+  savedRigsPerUser: 50,
   /** Characters of a trip, stop, rig or club name. */
   nameChars: 120,
   /** Characters of an appliance, array or cylinder name. */

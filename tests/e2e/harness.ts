@@ -24,8 +24,11 @@ async function freePort(): Promise<number> {
   });
 }
 
-/** Starts the real server (built web app, fresh database with demo data) on a free port. */
-export async function startServer(): Promise<RunningServer> {
+/**
+ * Starts the real server (built web app, fresh database with demo data) on a free port; `env` adds or overrides
+ * settings (a mail server of the test's own, say).
+ */
+export async function startServer(env: Record<string, string> = {}): Promise<RunningServer> {
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'trailtally-e2e-'));
   const port = await freePort();
   const dbPath = path.join(dir, 'e2e.db');
@@ -38,6 +41,7 @@ export async function startServer(): Promise<RunningServer> {
       DATABASE_PATH: dbPath,
       LOG_LEVEL: 'warn',
       NODE_ENV: 'development',
+      ...env,
     },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
@@ -163,10 +167,10 @@ export type Suite = { server: RunningServer; browser: Browser };
  * One real server and one browser for a test file: started before its first test, stopped after
  * its last. Read `suite.server` and `suite.browser` inside tests, once they are set.
  */
-export function useServerAndBrowser(): Suite {
+export function useServerAndBrowser(env: () => Record<string, string> = () => ({})): Suite {
   const suite = {} as Suite;
   beforeAll(async () => {
-    suite.server = await startServer();
+    suite.server = await startServer(env());
     suite.browser = await launchBrowser();
   });
   afterAll(async () => {

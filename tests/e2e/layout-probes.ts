@@ -23,6 +23,15 @@ export async function horizontalOverflow(page: Page): Promise<string[]> {
       for (let p = el.parentElement; p && p !== stop; p = p.parentElement) if (scrollsSideways(p)) return true;
       return false;
     };
+    // True when an ancestor between `el` and `stop` clips sideways (an SVG drawing, a rounded map): what is cut off
+    // there is cut on purpose, and the clipping box itself is checked instead.
+    const insideClip = (el: Element, stop: Element | null) => {
+      for (let p = el.parentElement; p && p !== stop; p = p.parentElement) {
+        const x = getComputedStyle(p).overflowX;
+        if (x === 'hidden' || x === 'clip') return true;
+      }
+      return false;
+    };
     const visible = (el: Element) => {
       const r = el.getBoundingClientRect();
       if (r.width === 0 || r.height === 0) return false;
@@ -30,7 +39,7 @@ export async function horizontalOverflow(page: Page): Promise<string[]> {
       return s.visibility !== 'hidden' && s.display !== 'none' && Number(s.opacity) > 0;
     };
     for (const el of document.body.querySelectorAll('*')) {
-      if (!visible(el) || insideScroller(el, null)) continue;
+      if (!visible(el) || insideScroller(el, null) || insideClip(el, null)) continue;
       const r = el.getBoundingClientRect();
       if (r.right > window.innerWidth + 1 || r.left < -1) {
         problems.push(`${name(el)} spans ${Math.round(r.left)}–${Math.round(r.right)} in ${window.innerWidth}`);
@@ -41,7 +50,7 @@ export async function horizontalOverflow(page: Page): Promise<string[]> {
       if (!visible(card)) continue;
       const box = card.getBoundingClientRect();
       for (const el of card.querySelectorAll('*')) {
-        if (!visible(el) || insideScroller(el, card)) continue;
+        if (!visible(el) || insideScroller(el, card) || insideClip(el, card)) continue;
         const r = el.getBoundingClientRect();
         if (r.right > box.right + 1 || r.left < box.left - 1) {
           problems.push(`${name(el)} is wider than its card ${name(card)}`);

@@ -35,7 +35,7 @@ const PASSWORD = TEST_PASSWORD;
  * Bodies per route with a JSON body, per route that takes none, per account route, and per account route that
  * checks a password (each such check costs a deliberately slow hash).
  */
-const RUNS = { body: 190, bodiless: 15, account: 150, passwordChecked: 40 };
+const RUNS = { body: 190, bodiless: 15, account: 150, passwordChecked: 40, gpx: 30 };
 /** Several hundred requests per test on a shared machine. */
 const FUZZ_TIMEOUT_MS = 90_000;
 
@@ -58,6 +58,7 @@ let ids: {
   savedRig: string;
   club: string;
   invite: string;
+  feed: string;
 };
 let snapshot: Awaited<ReturnType<typeof getDetail>>;
 
@@ -244,7 +245,49 @@ const BODILESS: { name: string; method: 'post' | 'delete'; path: () => string }[
     method: 'post',
     path: () => `/api/clubs/${ids.club}/invites/${ids.invite}/resend`,
   },
+  { name: 'POST calendar feed', method: 'post', path: () => `/api/trips/${tripId}/calendar-feeds` },
+  { name: 'DELETE calendar feed', method: 'delete', path: () => `/api/trips/${tripId}/calendar-feeds/${ids.feed}` },
 ];
+
+/** The routes that read a GPX file rather than JSON. */
+const GPX_ROUTES = [
+  { name: 'POST gpx/preview', path: () => `/api/trips/${tripId}/gpx/preview` },
+  { name: 'POST gpx/import', path: () => `/api/trips/${tripId}/gpx/import?tripVersion=1&replace=true` },
+];
+
+/** GPX that is broken: cut short, not XML, XML of another kind, or waypoints with impossible positions. */
+const badGpx = fc.oneof(
+  fc.constantFrom(
+    '<gpx',
+    '<?xml version="1.0"?><gpx version="1.1"><wpt lat="91" lon="0"><name>x</name></wpt></gpx>',
+    '<?xml version="1.0"?><gpx version="1.1"><wpt lat="a" lon="b"/></gpx>',
+    '<?xml version="1.0"?><kml></kml>',
+    '<gpx version="1.1"><trk><trkseg><trkpt lat="1" lon="1"></trkseg></trk></gpx>',
+    '<!DOCTYPE gpx [<!ENTITY x "xx">]><gpx>&x;&x;</gpx>',
+  ),
+  fc.string({ minLength: 1, maxLength: 200 }),
+  // Every waypoint off the globe (a latitude past a pole or a longitude past the date line), or not a number.
+  fc
+    .array(
+      fc.oneof(
+        fc.tuple(
+          fc.double().filter((lat) => !(Math.abs(lat) <= 90)),
+          fc.double({ min: -180, max: 180 }),
+        ),
+        fc.tuple(
+          fc.double({ min: -90, max: 90 }),
+          fc.double().filter((lon) => !(Math.abs(lon) <= 180)),
+        ),
+      ),
+      { minLength: 1, maxLength: 5 },
+    )
+    .map(
+      (points) =>
+        `<gpx version="1.1" xmlns="http://www.topografix.com/GPX/1/1">${points
+          .map(([lat, lon]) => `<wpt lat="${lat}" lon="${lon}"><name>p</name></wpt>`)
+          .join('')}</gpx>`,
+    ),
+);
 
 /**
  * The account routes (better-auth's), with their bodies as the screens send them. `schema` is the body the product
@@ -413,8 +456,9 @@ async function sendMalformed(
   method: 'post' | 'patch' | 'put' | 'delete',
   path: string,
   text: string,
+  contentType = 'application/json',
 ): Promise<{ status: number; body: unknown }> {
-  const response = await client[method](path).set('Content-Type', 'application/json').set('Origin', ORIGIN).send(text);
+  const response = await client[method](path).set('Content-Type', contentType).set('Origin', ORIGIN).send(text);
   sent += 1;
   const what = `${method.toUpperCase()} ${path} ${text.slice(0, 120)}`;
   expect(response.status, what).toBeLessThan(500);
@@ -454,6 +498,7 @@ beforeAll(async () => {
   const saved = await agent.post('/api/rigs').send({ rig: snapshot.rig.rig });
   const club = await agent.post('/api/clubs').send({ name: 'Fuzz club' });
   const invite = await agent.post(`/api/trips/${tripId}/invites`).send({ email: 'invitee@example.test', role: 'crew' });
+  const feed = await agent.post(`/api/trips/${tripId}/calendar-feeds`).send();
   ids = {
     stop: stop.id,
     drive: snapshot.drives[0]?.id ?? '',
@@ -462,6 +507,7 @@ beforeAll(async () => {
     savedRig: saved.body.id,
     club: club.body.club.id,
     invite: invite.body.invite?.id ?? invite.body.id,
+    feed: feed.body.feed?.id ?? feed.body.id,
   };
   lastFingerprint = databaseFingerprint();
 });
@@ -498,6 +544,23 @@ describe.each(BODILESS)('$name', (route) => {
           expect((body as { error?: { code?: unknown } }).error?.code).toBe('bad_request');
         }),
         { numRuns: RUNS.bodiless, seed: 20261202 },
+      );
+    },
+    FUZZ_TIMEOUT_MS,
+  );
+});
+
+describe.each(GPX_ROUTES)('$name', (route) => {
+  it(
+    'when the GPX file is broken, then 4xx with the error body and the database unchanged',
+    async () => {
+      await fc.assert(
+        fc.asyncProperty(badGpx, async (text) => {
+          const { status, body } = await sendMalformed(agent, 'post', route.path(), text, 'application/gpx+xml');
+          expect(status, text.slice(0, 200)).toBeGreaterThanOrEqual(400);
+          expect((body as { error?: { code?: unknown } }).error?.code).toEqual(expect.any(String));
+        }),
+        { numRuns: RUNS.gpx, seed: 20261204 },
       );
     },
     FUZZ_TIMEOUT_MS,

@@ -6,6 +6,7 @@ import { LIMITS } from '@/shared/schemas/limits';
 import { createTestApp, signUpAgent, type TestContext } from '../factories/test-app';
 import { addAppliance, addStop, createTrip, getDetail, LIGHTS } from '../factories/trip-factory';
 import { createLargestTrip } from '../factories/largest-trip';
+import { insertTrip } from '@/db/queries/trips';
 
 let ctx: TestContext;
 let agent: Agent;
@@ -165,6 +166,48 @@ describe('counts per trip and per person', () => {
     expect(response.status).toBe(400);
     expect(response.body.error.fields.clubs?.[0]).toContain(String(LIMITS.clubsPerUser));
     expect((await organiser.get('/api/clubs')).body.clubs).toHaveLength(LIMITS.clubsPerUser);
+  });
+
+  it('when a person owns the most trips, then a new trip and a duplicate are refused with 400 naming the limit', async () => {
+    const { agent: keeper, userId } = await signUpAgent(ctx.app, 'Trip keeper');
+    const { trip } = await createTrip(keeper);
+    // The rest written straight to the database: the count is what is checked, not how the trips came.
+    ctx.db.transaction((tx) => {
+      for (let i = 1; i < LIMITS.tripsPerUser; i++)
+        insertTrip(
+          tx,
+          { ownerId: userId, name: `Trip ${i}`, startDate: '2027-06-01', endDate: '2027-06-03', timeZone: 'UTC' },
+          new Date(),
+        );
+    });
+    const created = await keeper.post('/api/trips').send({
+      name: 'One too many',
+      startDate: '2027-06-01',
+      endDate: '2027-06-03',
+      timeZone: 'Europe/London',
+      rigSource: { kind: 'preset', presetId: 'caravan-lithium' },
+    });
+    expect(created.status).toBe(400);
+    expect(created.body.error.code).toBe('limit_reached');
+    expect(created.body.error.fields.trips?.[0]).toContain(String(LIMITS.tripsPerUser));
+    const duplicated = await keeper.post(`/api/trips/${trip.id}/duplicate`);
+    expect(duplicated.status).toBe(400);
+    expect(duplicated.body.error.fields.trips?.[0]).toContain(String(LIMITS.tripsPerUser));
+    expect((await keeper.get('/api/trips')).body.trips).toHaveLength(LIMITS.tripsPerUser);
+  });
+
+  it('when a person keeps the most rigs, then saving another, new or from a trip, is refused with 400 naming the limit', async () => {
+    const { agent: keeper } = await signUpAgent(ctx.app, 'Rig keeper');
+    const { trip } = await createTrip(keeper);
+    const { rig } = (await getDetail(keeper, trip.id)).rig;
+    for (let i = 0; i < LIMITS.savedRigsPerUser; i++)
+      expect((await keeper.post('/api/rigs').send({ rig: { ...rig, name: `Rig ${i + 1}` } })).status).toBe(201);
+    const created = await keeper.post('/api/rigs').send({ rig: { ...rig, name: 'One too many' } });
+    expect(created.status).toBe(400);
+    expect(created.body.error.fields.rigs?.[0]).toContain(String(LIMITS.savedRigsPerUser));
+    const saved = await keeper.post(`/api/trips/${trip.id}/rig/save`).send({ name: 'Also too many' });
+    expect(saved.status).toBe(400);
+    expect((await keeper.get('/api/rigs')).body.rigs).toHaveLength(LIMITS.savedRigsPerUser);
   });
 
   it('when a small trip adds a stop, then the limit does not stand in its way', async () => {
