@@ -33,6 +33,7 @@ export function DateTimeField({
         value={toInputValue(value)}
         disabled={!editable}
         aria-readonly={!editable || undefined}
+        aria-label={label}
         aria-labelledby={`${id}-label`}
         aria-describedby={note ? `${id}-note` : undefined}
         aria-invalid={!!error}
