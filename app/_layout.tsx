@@ -7,6 +7,7 @@ import { useAppFonts } from '@/components/theme/use-app-fonts';
 import { useSession } from '@/stores/auth-client';
 import { createQueryClient } from '@/stores/queries/query-client';
 import { hydrateUnits } from '@/stores/units-store';
+import '@/shared/schemas/plain-errors';
 
 // Before the first render, so no screen shows metric figures for a moment to a US-units user.
 hydrateUnits();

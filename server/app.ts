@@ -8,6 +8,7 @@ import { pinoHttp } from 'pino-http';
 import type { Logger } from 'pino';
 import type { Db } from '../db/client';
 import { createAuth } from './auth';
+import '../shared/schemas/plain-errors';
 import type { Auth } from './auth';
 import { HttpError } from './errors';
 import { httpLogSerializers } from './logger';

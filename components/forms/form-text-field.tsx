@@ -1,4 +1,5 @@
 import { Controller, type Control, type FieldValues, type Path } from 'react-hook-form';
+import { FieldSlot } from './field-slot';
 import { TextField, type TextFieldProps } from '@/components/ui/text-field';
 
 type Props<T extends FieldValues> = Omit<TextFieldProps, 'value' | 'onChangeText' | 'onBlur' | 'error'> & {
@@ -13,13 +14,15 @@ export function FormTextField<T extends FieldValues>({ control, name, ...props }
       control={control}
       name={name}
       render={({ field, fieldState }) => (
-        <TextField
-          {...props}
-          value={typeof field.value === 'string' ? field.value : ''}
-          onChangeText={field.onChange}
-          onBlur={field.onBlur}
-          error={fieldState.error?.message}
-        />
+        <FieldSlot fieldRef={field.ref}>
+          <TextField
+            {...props}
+            value={typeof field.value === 'string' ? field.value : ''}
+            onChangeText={field.onChange}
+            onBlur={field.onBlur}
+            error={fieldState.error?.message}
+          />
+        </FieldSlot>
       )}
     />
   );

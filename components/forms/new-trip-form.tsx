@@ -7,29 +7,40 @@ import { space } from '@/components/theme/tokens';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { ChoiceChips } from '@/components/ui/choice-chips';
+import { DateTimeField } from '@/components/ui/date-time-field';
 import { Skeleton } from '@/components/ui/skeleton';
 import { Text } from '@/components/ui/text';
 import { TextField } from '@/components/ui/text-field';
+import { timeZoneSchema } from '@/shared/schemas/common';
+import { fieldsSound, RUN_WITH_OTHER_ERRORS } from '@/shared/schemas/cross-field';
 import { createTripRequestSchema, type CreateTripRequest, type TripDetail } from '@/shared/schemas/api';
-import { ApiError } from '@/stores/queries/api-client';
 import { useMyRigsQuery, useRigPresetsQuery } from '@/stores/queries/rigs';
 import { useTripCreateMutation } from '@/stores/queries/trips';
+import { FieldSlot } from './field-slot';
+import { showServerRefusal } from './server-refusal';
 import { ZoneField } from './zone-field';
 
 // The form holds the rig choice as one string ("preset:id" or "saved:id") so a single chip group can pick it.
 const formSchema = z
   .object({
     name: z.string().trim().min(1, { error: 'Give the trip a name.' }).max(120),
-    startDate: z.iso.date({ error: 'Use a date like 2027-09-12.' }),
-    endDate: z.iso.date({ error: 'Use a date like 2027-09-19.' }),
-    timeZone: z.string().min(1, { error: 'Choose a time zone.' }),
+    startDate: z.iso.date({ error: 'Choose the first day.' }),
+    endDate: z.iso.date({ error: 'Choose the last day.' }),
+    timeZone: timeZoneSchema,
     rig: z.string().regex(/^(preset|saved):.+/, { error: 'Choose a rig to start from.' }),
   })
-  .refine((v) => v.endDate >= v.startDate, {
-    message: 'The trip must end on or after its first day.',
-    path: ['endDate'],
-  });
+  .superRefine((v, ctx) => {
+    if (fieldsSound(ctx, 'startDate', 'endDate') && v.endDate < v.startDate)
+      ctx.addIssue({ code: 'custom', path: ['endDate'], message: 'The trip must end on or after its first day.' });
+  }, RUN_WITH_OTHER_ERRORS);
 type FormValues = z.infer<typeof formSchema>;
+const FIELD_ORDER: readonly (keyof FormValues)[] = ['name', 'startDate', 'endDate', 'timeZone', 'rig'];
+/** The form field that shows an API field: the rig source is the rig chips, the rest keep their names. */
+const fieldOf = (apiField: string): keyof FormValues | undefined => {
+  const first = apiField.split('.')[0];
+  if (first === 'rigSource') return 'rig';
+  return FIELD_ORDER.find((field) => field === first);
+};
 
 function toRequest(v: FormValues): CreateTripRequest {
   const [kind, id] = [v.rig.slice(0, v.rig.indexOf(':')), v.rig.slice(v.rig.indexOf(':') + 1)];
@@ -65,58 +76,70 @@ export function NewTripForm({ onCreated }: { onCreated: (detail: TripDetail) => 
     try {
       onCreated(await create.mutateAsync(toRequest(values)));
     } catch (error) {
-      if (error instanceof ApiError && error.fields) {
-        for (const [field, messages] of Object.entries(error.fields)) {
-          const key = field === 'rigSource' || field.startsWith('rigSource.') ? 'rig' : field;
-          if (key in values) setError(key as keyof FormValues, { message: messages.join(' ') });
-        }
-      }
-      setFormError(error instanceof ApiError ? error.message : 'The trip could not be created.');
+      setFormError(
+        showServerRefusal(error, { order: FIELD_ORDER, fieldOf, setError, fallback: 'The trip could not be created.' }),
+      );
     }
   });
   const rigOptions = [
     ...(mine.data?.rigs ?? []).map((r) => ({ value: `saved:${r.id}`, label: r.rig.name })),
     ...(presets.data?.presets ?? []).map((p) => ({ value: `preset:${p.id}`, label: p.label })),
   ];
-  const text = (name: 'name' | 'startDate' | 'endDate', label: string, hint?: string) => (
+  const day = (name: 'startDate' | 'endDate', label: string) => (
     <Controller
       control={control}
       name={name}
       render={({ field, fieldState }) => (
-        <View style={name === 'startDate' || name === 'endDate' ? styles.cell : null}>
-          <TextField
+        <FieldSlot fieldRef={field.ref} style={styles.cell}>
+          <DateTimeField
+            kind="date"
             testID={`new-trip-${name}`}
             label={label}
-            hint={hint}
             value={field.value}
-            onChangeText={field.onChange}
+            onChange={field.onChange}
             onBlur={field.onBlur}
             error={fieldState.error?.message}
-            onSubmitEditing={submit}
           />
-        </View>
+        </FieldSlot>
       )}
     />
   );
   return (
     <View style={styles.form} testID="new-trip-form">
-      {formError ? <Banner testID="new-trip-error" message={formError} /> : null}
-      {text('name', 'Trip name')}
+      <Controller
+        control={control}
+        name="name"
+        render={({ field, fieldState }) => (
+          <FieldSlot fieldRef={field.ref}>
+            <TextField
+              testID="new-trip-name"
+              label="Trip name"
+              value={field.value}
+              onChangeText={field.onChange}
+              onBlur={field.onBlur}
+              error={fieldState.error?.message}
+              onSubmitEditing={submit}
+            />
+          </FieldSlot>
+        )}
+      />
       <View style={styles.grid}>
-        {text('startDate', 'First day', 'YYYY-MM-DD')}
-        {text('endDate', 'Last day', 'YYYY-MM-DD')}
+        {day('startDate', 'First day')}
+        {day('endDate', 'Last day')}
       </View>
       <Controller
         control={control}
         name="timeZone"
         render={({ field, fieldState }) => (
-          <ZoneField
-            testID="new-trip-timeZone"
-            label="Home time zone"
-            value={field.value}
-            onChange={field.onChange}
-            error={fieldState.error?.message}
-          />
+          <FieldSlot fieldRef={field.ref}>
+            <ZoneField
+              testID="new-trip-timeZone"
+              label="Home time zone"
+              value={field.value}
+              onChange={field.onChange}
+              error={fieldState.error?.message}
+            />
+          </FieldSlot>
         )}
       />
       {presets.isPending || mine.isPending ? <Skeleton testID="new-trip-rigs-loading" height={96} /> : null}
@@ -124,7 +147,7 @@ export function NewTripForm({ onCreated }: { onCreated: (detail: TripDetail) => 
         control={control}
         name="rig"
         render={({ field, fieldState }) => (
-          <View style={styles.rig}>
+          <FieldSlot fieldRef={field.ref} style={styles.rig}>
             <ChoiceChips
               testID="new-trip-rig"
               label="Start from a rig (My rigs first, then common rigs)"
@@ -137,9 +160,10 @@ export function NewTripForm({ onCreated }: { onCreated: (detail: TripDetail) => 
                 {fieldState.error.message}
               </Text>
             ) : null}
-          </View>
+          </FieldSlot>
         )}
       />
+      {formError ? <Banner testID="new-trip-error" message={formError} /> : null}
       <Button
         testID="new-trip-submit"
         label="Create trip"

@@ -1,5 +1,5 @@
 import { DateTime } from 'luxon';
-import { useState } from 'react';
+import { useState, type ReactNode } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { ZonePicker } from '@/components/route/zone-picker';
 import { placeOf } from '@/components/route/zone-filter';
@@ -7,10 +7,18 @@ import { space } from '@/components/theme/tokens';
 import { Button } from '@/components/ui/button';
 import { Text } from '@/components/ui/text';
 
-type Props = { label: string; value: string; onChange: (zone: string) => void; error?: string; testID: string };
+type Props = {
+  label: string;
+  value: string;
+  onChange: (zone: string) => void;
+  error?: string;
+  /** Another way to set the zone, shown beside Change (e.g. from the stop's coordinates). */
+  extraAction?: ReactNode;
+  testID: string;
+};
 
 /** A time zone chosen from the searchable list of zones (no IANA names to type), showing the one chosen now. */
-export function ZoneField({ label, value, onChange, error, testID }: Props) {
+export function ZoneField({ label, value, onChange, error, extraAction, testID }: Props) {
   const [open, setOpen] = useState(false);
   const offset = DateTime.now().setZone(value);
   return (
@@ -28,6 +36,7 @@ export function ZoneField({ label, value, onChange, error, testID }: Props) {
           aria-expanded={open}
           onPress={() => setOpen(!open)}
         />
+        {extraAction}
       </View>
       {error ? (
         <Text variant="caption" color="ember" role="alert">

@@ -3,6 +3,8 @@ import { useEffect, useRef, useState } from 'react';
 import { Controller, useForm, useWatch } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 import { space } from '@/components/theme/tokens';
+import { FieldSlot } from '@/components/forms/field-slot';
+import { showServerRefusal } from '@/components/forms/server-refusal';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { ChoiceChips } from '@/components/ui/choice-chips';
@@ -13,9 +15,20 @@ import { Caution } from '@/components/ui/cautions';
 import type { ApplianceRecord } from '@/shared/schemas/api';
 import { applianceFieldsSchema, type ApplianceFields } from '@/shared/schemas/appliance';
 import type { z } from 'zod';
-import { ApiError, conflictCurrent } from '@/stores/queries/api-client';
+import { conflictCurrent } from '@/stores/queries/api-client';
 import { useApplianceSaveMutation } from '@/stores/queries/appliances';
 import { showToast } from '@/stores/toast-store';
+
+/** The fields a refusal can name, in the order they appear. */
+const APPLIANCE_FIELD_ORDER = [
+  'name',
+  'circuit',
+  'quantity',
+  'runningW',
+  'standbyW',
+  'dutyCycle',
+  'heatInputW',
+] as const;
 
 type Props = {
   tripId: string;
@@ -56,7 +69,7 @@ export function ApplianceForm({ tripId, record, initial, canEdit, onSaved }: Pro
   const save = useApplianceSaveMutation(tripId);
   const [formError, setFormError] = useState<string>();
   const [conflict, setConflict] = useState<ApplianceRecord | null>(null);
-  const { control, handleSubmit, reset, formState, getValues } = useForm<
+  const { control, handleSubmit, reset, formState, getValues, setError } = useForm<
     z.input<typeof applianceFieldsSchema>,
     unknown,
     ApplianceFields
@@ -91,8 +104,16 @@ export function ApplianceForm({ tripId, record, initial, canEdit, onSaved }: Pro
       } catch (error) {
         const current = conflictCurrent<ApplianceRecord>(error);
         if (current) setConflict(current);
-        // The form keeps what the person typed; only the message changes.
-        else setFormError(error instanceof ApiError ? error.message : 'The appliance could not be saved.');
+        // The form keeps what the person typed; refusals land beside their fields.
+        else
+          setFormError(
+            showServerRefusal(error, {
+              order: APPLIANCE_FIELD_ORDER,
+              fieldOf: (apiField) => APPLIANCE_FIELD_ORDER.find((field) => `appliance.${field}` === apiField),
+              setError,
+              fallback: 'The appliance could not be saved.',
+            }),
+          );
       }
     });
 
@@ -101,7 +122,7 @@ export function ApplianceForm({ tripId, record, initial, canEdit, onSaved }: Pro
       control={control}
       name={name}
       render={({ field, fieldState }) => (
-        <View style={styles.cell}>
+        <FieldSlot fieldRef={field.ref} style={styles.cell}>
           <NumberField
             testID={`appliance-${name}`}
             label={label}
@@ -112,7 +133,7 @@ export function ApplianceForm({ tripId, record, initial, canEdit, onSaved }: Pro
             onBlur={field.onBlur}
             error={fieldState.error?.message}
           />
-        </View>
+        </FieldSlot>
       )}
     />
   );
@@ -124,15 +145,17 @@ export function ApplianceForm({ tripId, record, initial, canEdit, onSaved }: Pro
         control={control}
         name="name"
         render={({ field, fieldState }) => (
-          <TextField
-            testID="appliance-name"
-            label="Name"
-            editable={canEdit}
-            value={field.value}
-            onChangeText={field.onChange}
-            onBlur={field.onBlur}
-            error={fieldState.error?.message}
-          />
+          <FieldSlot fieldRef={field.ref}>
+            <TextField
+              testID="appliance-name"
+              label="Name"
+              editable={canEdit}
+              value={field.value}
+              onChangeText={field.onChange}
+              onBlur={field.onBlur}
+              error={fieldState.error?.message}
+            />
+          </FieldSlot>
         )}
       />
       <Controller

@@ -4,6 +4,7 @@ import { useState, type ReactNode } from 'react';
 import { Controller, type Control, type FieldPathByValue } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 import { colors, radii, space } from '@/components/theme/tokens';
+import { FieldSlot } from '@/components/forms/field-slot';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { NumberField } from '@/components/ui/number-field';
@@ -55,7 +56,7 @@ export function Num({
           ? (message ?? (range ? (shown?.range ?? plainRange(unit))(range[0], range[1]) : fieldState.error.message))
           : undefined;
         return (
-          <View style={styles.cell}>
+          <FieldSlot fieldRef={field.ref} style={styles.cell}>
             <NumberField
               testID={testID}
               label={label}
@@ -69,7 +70,7 @@ export function Num({
               onBlur={field.onBlur}
               error={error}
             />
-          </View>
+          </FieldSlot>
         );
       }}
     />

@@ -16,7 +16,6 @@ import type { RigRecord } from '@/shared/schemas/api';
 import { rigSchema, type Rig, type RigInput } from '@/shared/schemas/rig';
 import { fromDisplay, toDisplay } from '@/shared/units';
 import { ApiError, conflictCurrent } from '@/stores/queries/api-client';
-import { useTripRigSaveMutation } from '@/stores/queries/rigs';
 import { showToast } from '@/stores/toast-store';
 import { useUnits } from '@/stores/units-store';
 import type { DcLoad } from '@/shared/engine/dc-run-defaults';
@@ -35,17 +34,22 @@ import {
 import { SolarArrayFields } from './solar-array-fields';
 
 /** The trip's rig in grouped sections; saved as one record with its version. */
+/** Saves the rig: a trip's own copy, or one of My rigs (both answer the saved record with its new version). */
+export type RigSaver = {
+  mutateAsync: (body: { version: number; rig: Rig }) => Promise<RigRecord>;
+  isPending: boolean;
+};
+
 type RigFormProps = {
-  tripId: string;
+  save: RigSaver;
   record: RigRecord;
   canEdit: boolean;
   /** The trip's DC loads, from which the cable check suggests load circuits. */
   dcLoads?: readonly DcLoad[];
 };
 
-export function RigForm({ tripId, record, canEdit, dcLoads = [] }: RigFormProps) {
+export function RigForm({ save, record, canEdit, dcLoads = [] }: RigFormProps) {
   const units = useUnits();
-  const save = useTripRigSaveMutation(tripId);
   const [formError, setFormError] = useState<string>();
   const [conflict, setConflict] = useState<RigRecord | null>(null);
   const { control, handleSubmit, setValue, reset, formState } = useForm<RigInput, unknown, Rig>({

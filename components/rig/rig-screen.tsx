@@ -12,7 +12,12 @@ import { dcLoadsFromAppliances } from '@/shared/engine/dc-run-defaults';
 import type { TripDetail } from '@/shared/schemas/api';
 import { can } from '@/shared/schemas/roles';
 import { ApiError } from '@/stores/queries/api-client';
-import { useMyRigsQuery, useTripRigCopyToMineMutation, useTripRigReplaceMutation } from '@/stores/queries/rigs';
+import {
+  useMyRigsQuery,
+  useTripRigCopyToMineMutation,
+  useTripRigReplaceMutation,
+  useTripRigSaveMutation,
+} from '@/stores/queries/rigs';
 import { showToast } from '@/stores/toast-store';
 import { RigForm } from './rig-form';
 
@@ -73,6 +78,7 @@ function MyRigs({ detail }: { detail: TripDetail }) {
 
 export function RigScreen({ detail }: { detail: TripDetail }) {
   const canEdit = can(detail.trip.role, 'editTrip');
+  const save = useTripRigSaveMutation(detail.trip.id);
   return (
     <TabScroll testID="rig-screen">
       {!canEdit ? (
@@ -82,7 +88,7 @@ export function RigScreen({ detail }: { detail: TripDetail }) {
         main={
           <RigForm
             key={detail.rig.id}
-            tripId={detail.trip.id}
+            save={save}
             record={detail.rig}
             canEdit={canEdit}
             dcLoads={dcLoadsFromAppliances(detail.appliances.map((a) => a.appliance))}

@@ -11,11 +11,41 @@ import {
   type Stop,
   type StopInput,
 } from '@/shared/schemas/trip';
+import { fieldsSound, RUN_WITH_OTHER_ERRORS } from '@/shared/schemas/cross-field';
+import { timeZoneSchema } from '@/shared/schemas/common';
 import { fromDisplay, toDisplay, type UnitSystem } from '@/shared/units';
 
 const LOCAL = 'yyyy-MM-dd HH:mm';
 
-export const stopFormSchema = z.object({
+const HOUR_RANGE = 'Use an hour from 0 to 24.';
+/** An hour of the day: "Enter an hour." only when it is empty, the range otherwise. */
+const hourField = () =>
+  z
+    .number({ error: (issue) => (issue.input === null || issue.input === undefined ? 'Enter an hour.' : undefined) })
+    .int({ error: 'Use a whole hour, 0 to 24.' })
+    .min(0, { error: HOUR_RANGE })
+    .max(24, { error: HOUR_RANGE });
+
+const LOCAL_PATTERN = /^\d{4}-\d{2}-\d{2} \d{2}:\d{2}$/;
+const MISSING_TIME = 'That date and time does not exist in this time zone (check the date, or a clock change).';
+const HORIZON_RULE = 'List 4 to 36 angles from 0 to 90°, clockwise from north (for example 8 or 16 of them).';
+
+/** The instant a local date and time names in a zone, or null when the clock never shows it there. */
+export function localToIso(local: string, zone: string): string | null {
+  const t = DateTime.fromFormat(local, LOCAL, { zone });
+  // Luxon moves a time inside a spring-forward gap to a real one; a typed time that moved did not exist.
+  if (!t.isValid || t.toFormat(LOCAL) !== local) return null;
+  return t.toISO({ suppressSeconds: true, suppressMilliseconds: true });
+}
+
+export function horizonAngles(text: string): number[] {
+  return text
+    .split(/[\s,;]+/)
+    .filter(Boolean)
+    .map(Number);
+}
+
+const stopFieldsSchema = z.object({
   name: z.string().trim().min(1, { error: 'Give the stop a name.' }).max(120),
   lat: z
     .number({ error: 'Enter a latitude.' })
@@ -25,9 +55,9 @@ export const stopFormSchema = z.object({
     .number({ error: 'Enter a longitude.' })
     .min(-180, { error: 'Longitude runs from −180 to 180.' })
     .max(180, { error: 'Longitude runs from −180 to 180.' }),
-  timeZone: z.string().min(1, { error: 'Choose a time zone.' }),
-  arrive: z.string().regex(/^\d{4}-\d{2}-\d{2} \d{2}:\d{2}$/, { error: 'Use a date and time like 2027-09-12 15:00.' }),
-  depart: z.string().regex(/^\d{4}-\d{2}-\d{2} \d{2}:\d{2}$/, { error: 'Use a date and time like 2027-09-14 10:00.' }),
+  timeZone: timeZoneSchema,
+  arrive: z.string().regex(LOCAL_PATTERN, { error: 'Choose the day and time of arrival.' }),
+  depart: z.string().regex(LOCAL_PATTERN, { error: 'Choose the day and time of leaving.' }),
   /** canopy: sky openness and leaf-area index (the presets are quick picks of both); custom: a horizon per sector. */
   exposureKind: z.enum(['canopy', 'custom']),
   opennessPct: z
@@ -46,13 +76,39 @@ export const stopFormSchema = z.object({
   amps: z.number({ error: 'Enter the amps.' }).positive().max(100),
   volts: z.number({ error: 'Enter the volts.' }).positive().max(480),
   generatorOn: z.boolean(),
-  generatorStart: z.number({ error: 'Enter an hour.' }).int().min(0).max(24),
-  generatorEnd: z.number({ error: 'Enter an hour.' }).int().min(0).max(24),
+  generatorStart: hourField(),
+  generatorEnd: hourField(),
   low: z.number({ error: 'Enter the expected low.' }),
   high: z.number({ error: 'Enter the expected high.' }),
   notes: z.string().max(4000),
 });
-export type StopFormValues = z.infer<typeof stopFormSchema>;
+
+/** The form's fields in the order they appear on screen. */
+export const STOP_FIELD_ORDER = Object.keys(stopFieldsSchema.shape) as (keyof StopFormValues)[];
+
+/**
+ * The whole stop form in one pass: each rule between fields runs as soon as its own fields are sound, so a wrong
+ * latitude never hides a high below the low, and every refusal shows at the same time.
+ */
+export const stopFormSchema = stopFieldsSchema.superRefine((v, ctx) => {
+  const sound = (...fields: (keyof StopFormValues)[]) => fieldsSound(ctx, ...fields);
+  const refuse = (path: keyof StopFormValues, message: string) =>
+    ctx.addIssue({ code: 'custom', path: [path], message });
+  if (sound('low', 'high') && v.high < v.low) refuse('high', 'The high must be at or above the low.');
+  if (v.exposureKind === 'custom') {
+    const angles = horizonAngles(v.horizon);
+    if (angles.length < 4 || angles.length > 36 || angles.some((h) => !Number.isFinite(h) || h < 0 || h > 90))
+      refuse('horizon', HORIZON_RULE);
+  }
+  if (!sound('timeZone')) return;
+  const arriveAt = sound('arrive') ? localToIso(v.arrive, v.timeZone) : undefined;
+  const departAt = sound('depart') ? localToIso(v.depart, v.timeZone) : undefined;
+  if (arriveAt === null) refuse('arrive', MISSING_TIME);
+  if (departAt === null) refuse('depart', MISSING_TIME);
+  if (arriveAt && departAt && Date.parse(departAt) <= Date.parse(arriveAt))
+    refuse('depart', 'Leave after you arrive: pick a later day or time.');
+}, RUN_WITH_OTHER_ERRORS);
+export type StopFormValues = z.infer<typeof stopFieldsSchema>;
 
 export function toFormValues(
   stop: Stop | null,
@@ -117,6 +173,7 @@ function canopyExposure(v: StopFormValues): SiteExposure {
 }
 
 const FIELD_OF: Record<string, keyof StopFormValues> = {
+  notes: 'notes',
   name: 'name',
   lat: 'lat',
   lon: 'lon',
@@ -130,32 +187,24 @@ const FIELD_OF: Record<string, keyof StopFormValues> = {
   generatorHours: 'generatorStart',
 };
 
+/** The form field that shows a stop field ("departAt", or the API's "stop.departAt"), if any. */
+export function stopFieldOf(apiField: string): keyof StopFormValues | undefined {
+  const [first = '', second] = apiField.split('.');
+  const key = first === 'stop' && second ? second : first;
+  return Object.hasOwn(FIELD_OF, key) ? FIELD_OF[key] : undefined;
+}
+
 /** Builds the API's stop from the form and runs the shared schema on it; its messages land on the right fields. */
 export function fromFormValues(v: StopFormValues, units: UnitSystem): StopFromForm {
-  const iso = (local: string) => {
-    const t = DateTime.fromFormat(local, LOCAL, { zone: v.timeZone });
-    // Luxon moves a time inside a spring-forward gap to a real one; a typed time that moved did not exist.
-    if (!t.isValid || t.toFormat(LOCAL) !== local) return null;
-    return t.toISO({ suppressSeconds: true, suppressMilliseconds: true });
-  };
-  const arriveAt = iso(v.arrive);
-  const departAt = iso(v.depart);
-  const errors: Partial<Record<keyof StopFormValues, string>> = {};
-  if (!arriveAt)
-    errors.arrive = 'That date and time does not exist in this time zone (check the date, or a clock change).';
-  if (!departAt)
-    errors.depart = 'That date and time does not exist in this time zone (check the date, or a clock change).';
-  const horizonDeg = v.horizon
-    .split(/[\s,;]+/)
-    .filter(Boolean)
-    .map(Number);
-  if (
-    v.exposureKind === 'custom' &&
-    (horizonDeg.length < 4 || horizonDeg.length > 36 || horizonDeg.some((h) => !Number.isFinite(h) || h < 0 || h > 90))
-  ) {
-    errors.horizon = 'List 4 to 36 angles from 0 to 90°, clockwise from north (for example 8 or 16 of them).';
+  const arriveAt = localToIso(v.arrive, v.timeZone);
+  const departAt = localToIso(v.depart, v.timeZone);
+  const horizonDeg = horizonAngles(v.horizon);
+  if (!arriveAt || !departAt) {
+    const errors: Partial<Record<keyof StopFormValues, string>> = {};
+    if (!arriveAt) errors.arrive = MISSING_TIME;
+    if (!departAt) errors.depart = MISSING_TIME;
+    return { ok: false, errors };
   }
-  if (!arriveAt || !departAt || errors.horizon) return { ok: false, errors };
   const stop: StopInput = {
     name: v.name.trim(),
     lat: v.lat,
@@ -175,15 +224,10 @@ export function fromFormValues(v: StopFormValues, units: UnitSystem): StopFromFo
   };
   const parsed = stopSchema.safeParse(stop);
   if (parsed.success) return { ok: true, stop };
+  const errors: Partial<Record<keyof StopFormValues, string>> = {};
   for (const issue of parsed.error.issues) {
-    const field = FIELD_OF[String(issue.path[0])];
-    if (field && !errors[field])
-      errors[field] =
-        issue.path[0] === 'departAt'
-          ? 'The stop must be left after it is reached.'
-          : issue.path[0] === 'highC'
-            ? 'The high must be at or above the low.'
-            : issue.message;
+    const field = stopFieldOf(String(issue.path[0]));
+    if (field && !errors[field]) errors[field] = issue.message;
   }
   return { ok: false, errors };
 }

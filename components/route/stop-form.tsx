@@ -2,6 +2,9 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useEffect, useRef, useState } from 'react';
 import { Controller, useForm, useWatch, type Control } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
+import { FieldSlot } from '@/components/forms/field-slot';
+import { ZoneField } from '@/components/forms/zone-field';
+import { showServerRefusal } from '@/components/forms/server-refusal';
 import { temperature } from '@/components/format/units';
 import { space } from '@/components/theme/tokens';
 import { Banner } from '@/components/ui/banner';
@@ -9,19 +12,27 @@ import { Button } from '@/components/ui/button';
 import { Caution } from '@/components/ui/cautions';
 import { ChoiceChips } from '@/components/ui/choice-chips';
 import { ConflictNotice } from '@/components/ui/conflict-notice';
+import { DateTimeField } from '@/components/ui/date-time-field';
 import { NumberField } from '@/components/ui/number-field';
 import { TextField } from '@/components/ui/text-field';
 import type { StopRecord } from '@/shared/schemas/api';
-import { ApiError, conflictCurrent } from '@/stores/queries/api-client';
+import { conflictCurrent } from '@/stores/queries/api-client';
 import { useStopSaveMutation } from '@/stores/queries/route';
 import { showToast } from '@/stores/toast-store';
 import { useUnits } from '@/stores/units-store';
 import { SITE_PRESETS } from '@/shared/engine/site-exposure';
 import type { SitePreset } from '@/shared/schemas/trip';
-import { fromFormValues, presetAt, stopFormSchema, toFormValues, type StopFormValues } from './stop-form-values';
+import {
+  fromFormValues,
+  presetAt,
+  STOP_FIELD_ORDER,
+  stopFieldOf,
+  stopFormSchema,
+  toFormValues,
+  type StopFormValues,
+} from './stop-form-values';
 import { NearestTowns } from './nearest-towns';
 import { PlaceSearchField } from './place-search-field';
-import { ZonePicker } from './zone-picker';
 
 type Props = {
   tripId: string;
@@ -65,7 +76,7 @@ function Num({
       control={control}
       name={name}
       render={({ field, fieldState }) => (
-        <View style={styles.cell}>
+        <FieldSlot fieldRef={field.ref} style={styles.cell}>
           <NumberField
             testID={testID}
             label={label}
@@ -76,7 +87,7 @@ function Num({
             onBlur={field.onBlur}
             error={fieldState.error?.message}
           />
-        </View>
+        </FieldSlot>
       )}
     />
   );
@@ -91,7 +102,7 @@ function Txt({
   inRow = false,
 }: {
   control: Control<StopFormValues>;
-  name: 'timeZone' | 'arrive' | 'depart' | 'horizon' | 'notes';
+  name: 'horizon' | 'notes';
   label: string;
   hint?: string;
   testID: string;
@@ -102,7 +113,7 @@ function Txt({
       control={control}
       name={name}
       render={({ field, fieldState }) => (
-        <View style={inRow ? styles.cell : null}>
+        <FieldSlot fieldRef={field.ref} style={inRow ? styles.cell : null}>
           <TextField
             testID={testID}
             label={label}
@@ -112,7 +123,40 @@ function Txt({
             onBlur={field.onBlur}
             error={fieldState.error?.message}
           />
-        </View>
+        </FieldSlot>
+      )}
+    />
+  );
+}
+
+/** A local day and time at the stop, through the platform's own picker. */
+function When({
+  control,
+  name,
+  label,
+  testID,
+}: {
+  control: Control<StopFormValues>;
+  name: 'arrive' | 'depart';
+  label: string;
+  testID: string;
+}) {
+  return (
+    <Controller
+      control={control}
+      name={name}
+      render={({ field, fieldState }) => (
+        <FieldSlot fieldRef={field.ref} style={styles.cell}>
+          <DateTimeField
+            kind="datetime"
+            testID={testID}
+            label={label}
+            value={field.value}
+            onChange={field.onChange}
+            onBlur={field.onBlur}
+            error={fieldState.error?.message}
+          />
+        </FieldSlot>
       )}
     />
   );
@@ -123,7 +167,6 @@ export function StopForm({ tripId, record, fallbackZone, onDone, newStopTimes }:
   const units = useUnits();
   const save = useStopSaveMutation(tripId);
   const [formError, setFormError] = useState<string>();
-  const [zoneListOpen, setZoneListOpen] = useState(false);
   const [conflict, setConflict] = useState<StopRecord | null>(null);
   const { control, handleSubmit, setError, setValue, getValues, reset, formState } = useForm<StopFormValues>({
     resolver: zodResolver(stopFormSchema),
@@ -132,9 +175,9 @@ export function StopForm({ tripId, record, fallbackZone, onDone, newStopTimes }:
       ...(record ? {} : newStopTimes),
     },
   });
-  const [exposureKind, hookupOn, generatorOn, timeZone, opennessPct, leafAreaIndex, lat, lon] = useWatch({
+  const [exposureKind, hookupOn, generatorOn, opennessPct, leafAreaIndex, lat, lon] = useWatch({
     control,
-    name: ['exposureKind', 'hookupOn', 'generatorOn', 'timeZone', 'opennessPct', 'leafAreaIndex', 'lat', 'lon'],
+    name: ['exposureKind', 'hookupOn', 'generatorOn', 'opennessPct', 'leafAreaIndex', 'lat', 'lon'],
   });
   const tUnit = temperature(0, units).unit;
   // Saves name the version the form was opened on, so someone else's change meanwhile is caught (409).
@@ -154,7 +197,7 @@ export function StopForm({ tripId, record, fallbackZone, onDone, newStopTimes }:
     try {
       setValue('timeZone', tzlookup(lat, lon), { shouldValidate: true });
     } catch {
-      setError('timeZone', { message: 'No time zone found for those coordinates; type one such as Europe/London.' });
+      setError('timeZone', { message: 'No time zone found for those coordinates; choose one from the list.' });
     }
   };
 
@@ -163,8 +206,8 @@ export function StopForm({ tripId, record, fallbackZone, onDone, newStopTimes }:
       setFormError(undefined);
       const built = fromFormValues(values, units);
       if (!built.ok) {
-        for (const [field, message] of Object.entries(built.errors))
-          setError(field as keyof StopFormValues, { message });
+        const fields = STOP_FIELD_ORDER.filter((field) => built.errors[field]);
+        fields.forEach((field, i) => setError(field, { message: built.errors[field] }, { shouldFocus: i === 0 }));
         return;
       }
       try {
@@ -175,33 +218,40 @@ export function StopForm({ tripId, record, fallbackZone, onDone, newStopTimes }:
       } catch (error) {
         const current = conflictCurrent<StopRecord>(error);
         if (current) setConflict(current);
-        else if (error instanceof ApiError && error.fields) {
-          for (const [field, messages] of Object.entries(error.fields)) setFormError(`${field}: ${messages.join(' ')}`);
-        } else setFormError(error instanceof ApiError ? error.message : 'The stop could not be saved.');
+        else
+          setFormError(
+            showServerRefusal(error, {
+              order: STOP_FIELD_ORDER,
+              fieldOf: stopFieldOf,
+              setError,
+              fallback: 'The stop could not be saved.',
+            }),
+          );
       }
     });
 
   return (
     <View style={styles.form} testID="stop-form">
-      {formError ? <Banner testID="stop-form-error" message={formError} /> : null}
       <Controller
         control={control}
         name="name"
         render={({ field, fieldState }) => (
-          <PlaceSearchField
-            testID="stop-name"
-            value={field.value}
-            onChangeText={field.onChange}
-            onBlur={field.onBlur}
-            error={fieldState.error?.message}
-            onPick={(place) => {
-              const set = { shouldValidate: true, shouldDirty: true };
-              setValue('name', place.name, set);
-              setValue('lat', place.lat, set);
-              setValue('lon', place.lon, set);
-              if (place.timeZone) setValue('timeZone', place.timeZone, set);
-            }}
-          />
+          <FieldSlot fieldRef={field.ref}>
+            <PlaceSearchField
+              testID="stop-name"
+              value={field.value}
+              onChangeText={field.onChange}
+              onBlur={field.onBlur}
+              error={fieldState.error?.message}
+              onPick={(place) => {
+                const set = { shouldValidate: true, shouldDirty: true };
+                setValue('name', place.name, set);
+                setValue('lat', place.lat, set);
+                setValue('lon', place.lon, set);
+                if (place.timeZone) setValue('timeZone', place.timeZone, set);
+              }}
+            />
+          </FieldSlot>
         )}
       />
       <View style={styles.grid}>
@@ -209,52 +259,33 @@ export function StopForm({ tripId, record, fallbackZone, onDone, newStopTimes }:
         <Num control={control} name="lon" label="Longitude" unit="°" testID="stop-lon" />
       </View>
       <NearestTowns lat={lat} lon={lon} testID="stop-nearest-towns" />
-      <View style={styles.zone}>
-        <Txt
-          control={control}
-          name="timeZone"
-          label="Time zone"
-          hint="an IANA name such as Europe/London"
-          testID="stop-time-zone"
-        />
-        <View style={styles.zoneButtons}>
-          <Button
-            testID="stop-zone-from-coordinates"
-            tone="secondary"
-            label="From coordinates"
-            onPress={() => void zoneFromCoordinates()}
-          />
-          <Button
-            testID="stop-zone-list-toggle"
-            tone="secondary"
-            label={zoneListOpen ? 'Hide the list' : 'Pick from a list'}
-            accessibilityLabel={zoneListOpen ? 'Hide the time zone list' : 'Pick the time zone from a list'}
-            aria-expanded={zoneListOpen}
-            onPress={() => setZoneListOpen(!zoneListOpen)}
-          />
-        </View>
-      </View>
-      {zoneListOpen ? (
-        <ZonePicker
-          testID="stop-zone-list"
-          value={timeZone}
-          onClose={() => setZoneListOpen(false)}
-          onPick={(zone) => {
-            setValue('timeZone', zone, { shouldValidate: true, shouldDirty: true });
-            setZoneListOpen(false);
-          }}
-        />
-      ) : null}
+      <Controller
+        control={control}
+        name="timeZone"
+        render={({ field, fieldState }) => (
+          <FieldSlot fieldRef={field.ref}>
+            <ZoneField
+              testID="stop-time-zone"
+              label="Time zone"
+              value={field.value}
+              onChange={(zone) => setValue('timeZone', zone, { shouldValidate: true, shouldDirty: true })}
+              error={fieldState.error?.message}
+              extraAction={
+                <Button
+                  testID="stop-zone-from-coordinates"
+                  tone="secondary"
+                  label="From coordinates"
+                  accessibilityLabel="Set the time zone from the coordinates"
+                  onPress={() => void zoneFromCoordinates()}
+                />
+              }
+            />
+          </FieldSlot>
+        )}
+      />
       <View style={styles.grid}>
-        <Txt
-          control={control}
-          name="arrive"
-          inRow
-          label="Arrive (local)"
-          hint="YYYY-MM-DD HH:MM"
-          testID="stop-arrive"
-        />
-        <Txt control={control} name="depart" inRow label="Leave (local)" hint="YYYY-MM-DD HH:MM" testID="stop-depart" />
+        <When control={control} name="arrive" label="Arrive (local time)" testID="stop-arrive" />
+        <When control={control} name="depart" label="Leave (local time)" testID="stop-depart" />
       </View>
       <Controller
         control={control}
@@ -424,6 +455,8 @@ export function StopForm({ tripId, record, fallbackZone, onDone, newStopTimes }:
           }}
         />
       ) : null}
+      {/* Beside Save, where the eye is after pressing it; refusals about one field sit beside that field. */}
+      {formError ? <Banner testID="stop-form-error" message={formError} /> : null}
       <View style={styles.actions}>
         <Button
           testID="stop-save"

@@ -34,6 +34,13 @@ export function TripCard({ trip, canDelete, onDuplicate, onDelete, busy }: Props
           <Text variant="caption" color="inkSoft">
             {trip.rigName ? `Rig: ${trip.rigName}` : 'No rig yet'}
           </Text>
+          {trip.sharedWith && trip.sharedWith.length > 0 ? (
+            <View style={styles.shared} testID={`trip-shared-${trip.id}`}>
+              <Text variant="caption" color="lakeInk">
+                Shared with {trip.sharedWith.join(', ')}
+              </Text>
+            </View>
+          ) : null}
         </Pressable>
       </Link>
       <TripCardMap trip={trip} />
@@ -111,6 +118,14 @@ const styles = StyleSheet.create({
     backgroundColor: colors.pineSoft,
   },
   flagsOn: { backgroundColor: colors.emberSoft },
+  // A tinted tag, not a button: it says where the trip is shared and does nothing when tapped.
+  shared: {
+    alignSelf: 'flex-start',
+    borderRadius: radii.sm,
+    paddingHorizontal: space.sm,
+    paddingVertical: 2,
+    backgroundColor: colors.infoSoft,
+  },
   actions: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.xs },
   confirmText: { flexBasis: '100%' },
 });

@@ -31,7 +31,8 @@ export function ChoiceChips<T extends string>({ label, options, value, onChange,
               onPress={() => onChange(o.value)}
               style={[styles.chip, on ? styles.on : null, disabled ? styles.disabled : null]}
             >
-              <Text variant="label" color={on ? 'white' : 'ink'}>
+              {on ? <View style={styles.mark} testID={`${testID}-${o.value}-mark`} /> : null}
+              <Text variant="label" color={on ? 'pine' : 'ink'} style={styles.chipText}>
                 {o.label}
               </Text>
             </Pressable>
@@ -48,12 +49,20 @@ const styles = StyleSheet.create({
   chip: {
     minHeight: 44,
     paddingHorizontal: space.lg,
+    flexDirection: 'row',
+    alignItems: 'center',
+    gap: space.xs,
     justifyContent: 'center',
     borderRadius: radii.pill,
     borderWidth: 1,
     borderColor: colors.line,
     backgroundColor: colors.card,
   },
-  on: { backgroundColor: colors.pine, borderColor: colors.pine },
+  // Chosen reads as a ticked, outlined tag in a light tint, never as the solid fill that marks a button (an action).
+  on: { backgroundColor: colors.pineSoft, borderColor: colors.pine, borderWidth: 2, paddingHorizontal: space.lg - 1 },
   disabled: { opacity: 0.55 },
+  // A long label wraps inside its chip rather than pushing the chip past its card.
+  chipText: { flexShrink: 1 },
+  // The radio's filled dot: the chosen chip is marked, not filled like a button.
+  mark: { width: 10, height: 10, borderRadius: 5, backgroundColor: colors.pine },
 });

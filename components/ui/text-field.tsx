@@ -15,6 +15,8 @@ export const TextField = forwardRef<TextInput, TextFieldProps>(function TextFiel
   ref,
 ) {
   const id = useId();
+  // A field that cannot be changed reads as plain text: no box, nothing that invites a tap.
+  const readOnly = rest.editable === false;
   const describedBy = error ? `${id}-error` : hint ? `${id}-hint` : undefined;
   return (
     <View style={styles.wrap}>
@@ -27,8 +29,9 @@ export const TextField = forwardRef<TextInput, TextFieldProps>(function TextFiel
         aria-labelledby={`${id}-label`}
         aria-describedby={describedBy}
         aria-invalid={!!error}
+        aria-readonly={readOnly || undefined}
         placeholderTextColor={colors.mist}
-        style={[styles.input, error ? styles.inputError : null, style]}
+        style={[styles.input, error ? styles.inputError : null, style, readOnly ? styles.readOnly : null]}
         {...rest}
       />
       {error ? (
@@ -58,4 +61,11 @@ const styles = StyleSheet.create({
     fontSize: 16,
   },
   inputError: { borderColor: colors.ember },
+  readOnly: {
+    minHeight: 28,
+    borderWidth: 0,
+    paddingHorizontal: 0,
+    backgroundColor: 'transparent',
+    fontFamily: fonts.semiBold,
+  },
 });

@@ -1,7 +1,8 @@
 import { useId, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
-import { colors, fonts, radii, space } from '@/components/theme/tokens';
+import { space } from '@/components/theme/tokens';
 import { Text } from './text';
+import { webInputStyle, webReadOnlyStyle } from './web-input-style';
 import { formatClock, parseClock, type TimeOfDayFieldProps } from './time-of-day-field.types';
 
 /**
@@ -31,9 +32,10 @@ export function TimeOfDayField({
         step={stepMinutes * 60}
         value={value}
         disabled={!editable}
+        aria-readonly={!editable || undefined}
         aria-labelledby={`${id}-label`}
         data-testid={testID}
-        style={inputStyle}
+        style={editable ? webInputStyle : { ...webInputStyle, ...webReadOnlyStyle }}
         onChange={(e) => {
           const parsed = parseClock(e.currentTarget.value, stepMinutes);
           setTyping(parsed ? null : e.currentTarget.value);
@@ -46,19 +48,3 @@ export function TimeOfDayField({
 }
 
 const styles = StyleSheet.create({ wrap: { gap: space.xs } });
-
-// A DOM element takes a plain style object; these match TextField's box.
-const inputStyle = {
-  minHeight: 48,
-  boxSizing: 'border-box',
-  width: '100%',
-  borderWidth: 2,
-  borderStyle: 'solid',
-  borderColor: colors.line,
-  borderRadius: radii.md,
-  padding: `0 ${space.md}px`,
-  backgroundColor: colors.white,
-  color: colors.ink,
-  fontFamily: fonts.regular,
-  fontSize: 16,
-} as const;

@@ -148,6 +148,18 @@ export function sharedToUserClub(db: DbExecutor, tripId: string, userId: string)
 }
 
 /** Every club the trip is shared with, for its People tab. */
+/** The names of the clubs a trip is shared with, for the trips list. */
+export function listSharedClubNames(db: DbExecutor, tripId: string): string[] {
+  return db
+    .select({ name: clubs.name })
+    .from(clubTrips)
+    .innerJoin(clubs, eq(clubs.id, clubTrips.clubId))
+    .where(eq(clubTrips.tripId, tripId))
+    .orderBy(asc(clubs.name))
+    .all()
+    .map((row) => row.name);
+}
+
 export function listTripShares(db: DbExecutor, tripId: string) {
   return db
     .select({ clubId: clubs.id, clubName: clubs.name, sharedByName: user.name, sharedAt: clubTrips.sharedAt })

@@ -1,6 +1,6 @@
 // Row ↔ record conversions. The records are the shared engine schemas plus id and version, so the
 // API, the screens and the engine read one shape.
-import type { ApplianceRecord, DriveRecord, RigRecord, StopRecord } from '@/shared/schemas/api';
+import type { ApplianceRecord, DriveRecord, RigRecord, SavedRigRecord, StopRecord } from '@/shared/schemas/api';
 import type { ApplianceFields, Schedule } from '@/shared/schemas/appliance';
 import type { RoutineWindow } from '@/shared/schemas/common';
 import { emptyDcWiring } from '@/shared/schemas/dc-wiring';
@@ -69,6 +69,8 @@ export function rigFromRow(row: RigRow): Rig {
 }
 
 export const rigRecord = (row: RigRow): RigRecord => ({ id: row.id, version: row.version, rig: rigFromRow(row) });
+/** One of My rigs with its usual loads (none on rigs saved before rigs kept loads). */
+export const savedRigRecord = (row: RigRow): SavedRigRecord => ({ ...rigRecord(row), loads: row.loads ?? [] });
 
 export function stopToColumns(stop: Stop) {
   return {

@@ -1,4 +1,5 @@
 import { and, asc, desc, eq, sql } from 'drizzle-orm';
+import type { ApplianceFields } from '@/shared/schemas/appliance';
 import type { TripDetail } from '@/shared/schemas/api';
 import type { Role } from '@/shared/schemas/roles';
 import type { Rig } from '@/shared/schemas/rig';
@@ -124,10 +125,25 @@ export function insertTrip(db: DbExecutor, trip: NewTrip, now: Date, id: string 
   return row;
 }
 
-export function insertRig(db: DbExecutor, owner: { ownerId: string; tripId: string | null }, rig: Rig, now: Date) {
+/** `loads` only for one of My rigs: a trip keeps its appliances in their own table. */
+export function insertRig(
+  db: DbExecutor,
+  owner: { ownerId: string; tripId: string | null },
+  rig: Rig,
+  now: Date,
+  loads: ApplianceFields[] | null = null,
+) {
   return db
     .insert(rigs)
-    .values({ id: crypto.randomUUID(), ...owner, ...rigToColumns(rig), version: 1, createdAt: now, updatedAt: now })
+    .values({
+      id: crypto.randomUUID(),
+      ...owner,
+      ...rigToColumns(rig),
+      loads: owner.tripId === null ? loads : null,
+      version: 1,
+      createdAt: now,
+      updatedAt: now,
+    })
     .returning()
     .get();
 }

@@ -1,4 +1,5 @@
 import { index, integer, real, sqliteTable, text } from 'drizzle-orm/sqlite-core';
+import type { ApplianceFields } from '@/shared/schemas/appliance';
 import type { DcWiring } from '@/shared/schemas/dc-wiring';
 import type {
   Controller,
@@ -51,6 +52,11 @@ export const rigs = sqliteTable(
     occupants: integer('occupants').notNull().default(2),
     /** Roof area that could carry panels, m²; null reads as length × width (caps the solar a fix may add). */
     roofAreaM2: real('roof_area_m2'),
+    /**
+     * A saved rig's own appliance list (the household's usual loads), copied onto every trip made on it; read as a
+     * whole, so JSON. Null on trips' rigs (a trip keeps its appliances in their own table) and on older saved rigs.
+     */
+    loads: text('loads', { mode: 'json' }).$type<ApplianceFields[]>(),
     version: integer('version').notNull().default(1),
     createdAt: integer('created_at', { mode: 'timestamp_ms' }).notNull(),
     updatedAt: integer('updated_at', { mode: 'timestamp_ms' }).notNull(),

@@ -1,8 +1,8 @@
 import { Router } from 'express';
 import type { Db } from '@/db/client';
-import { rigFromRow, rigRecord } from '@/db/queries/mappers';
+import { rigFromRow, rigRecord, savedRigRecord } from '@/db/queries/mappers';
 import { findSavedRig, updateRigRow } from '@/db/queries/rigs';
-import { findTrip, findTripRig, insertRig, logActivity, touchTrip } from '@/db/queries/trips';
+import { findTrip, findTripRig, insertRig, loadTripDetail, logActivity, touchTrip } from '@/db/queries/trips';
 import { checkGeneratorInTrip } from '@/shared/trip-rules';
 import { replaceTripRigRequestSchema, saveTripRigRequestSchema, updateRigRequestSchema } from '@/shared/schemas/api';
 import { notFound, unprocessable } from '../errors';
@@ -54,11 +54,16 @@ export function tripRigRouter({ db, now }: { db: Db; now: () => Date }): Router 
     const { name } = saveTripRigRequestSchema.parse(req.body);
     const tripRig = findTripRig(db, tripId);
     if (!tripRig) throw notFound('That trip has no rig.');
+    // The trip's appliances become the saved rig's usual loads (who looks after each stays with the trip).
+    const loads = (loadTripDetail(db, tripId, 'viewer')?.appliances ?? []).map(({ appliance }) => {
+      const { id: _id, ...fields } = appliance;
+      return fields;
+    });
     const row = db.transaction((tx) => {
       ensureRoomForSavedRig(tx, userId);
-      return insertRig(tx, { ownerId: userId, tripId: null }, { ...rigFromRow(tripRig), name }, now());
+      return insertRig(tx, { ownerId: userId, tripId: null }, { ...rigFromRow(tripRig), name }, now(), loads);
     });
-    res.status(201).json({ rig: rigRecord(row) });
+    res.status(201).json({ rig: savedRigRecord(row) });
   });
 
   return router;

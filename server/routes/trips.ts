@@ -1,10 +1,12 @@
 import { Router } from 'express';
+import { can } from '@/shared/schemas/roles';
 import { findRigPreset } from '@/shared/rig-presets';
 import { createTripRequestSchema, updateTripRequestSchema } from '@/shared/schemas/api';
 import { copyTripRequestSchema } from '@/shared/schemas/sharing';
 import { tripCopies } from '@/db/schema/clubs';
 import { rigSchema } from '@/shared/schemas/rig';
 import { checkTripDatesCoverStops } from '@/shared/trip-rules';
+import { listSharedClubNames } from '@/db/queries/clubs';
 import { findSavedRig } from '@/db/queries/rigs';
 import { rigFromRow } from '@/db/queries/mappers';
 import { listStopRows } from '@/db/queries/stops';
@@ -19,6 +21,7 @@ import {
   toTripSummary,
   touchTrip,
 } from '@/db/queries/trips';
+import { appliances } from '@/db/schema/appliances';
 import { trips } from '@/db/schema/trips';
 import { eq } from 'drizzle-orm';
 import { LIMITS, tripDayCount } from '@/shared/schemas/limits';
@@ -47,6 +50,7 @@ export function tripsRouter(deps: TripItemsDeps): Router {
         reservePct: figures?.reservePct ?? null,
         flagCount: figures?.flagCount ?? null,
         budgetStatus: status,
+        ...(can(role, 'editTrip') ? { sharedWith: listSharedClubNames(db, trip.id) } : {}),
         route: routeForCard(listStopRows(db, trip.id), figures?.lowestByStop ?? null),
       });
     });
@@ -140,14 +144,28 @@ export function tripsRouter(deps: TripItemsDeps): Router {
   // trip with its stops, drives and routines, running on one of their saved rigs, linked to the original.
   trip.post('/copy', (req, res) => {
     const { tripId, userId } = tripAccess(res);
-    const { rigId, name } = copyTripRequestSchema.parse(req.body);
+    const { rigId, name, sharedApplianceIds } = copyTripRequestSchema.parse(req.body);
     const saved = findSavedRig(db, userId, rigId);
     if (!saved) throw unprocessable('rigId', 'Choose one of your saved rigs (My rigs).');
     const source = findTrip(db, tripId);
     if (!source) throw notFound('That trip was not found.');
+    const planIds = new Set(
+      db
+        .select({ id: appliances.id })
+        .from(appliances)
+        .where(eq(appliances.tripId, tripId))
+        .all()
+        .map((a) => a.id),
+    );
+    if (sharedApplianceIds.some((id) => !planIds.has(id)))
+      throw unprocessable('sharedApplianceIds', 'Tick only appliances from this plan.');
+    const loads = saved.loads ?? [];
+    if (loads.length + new Set(sharedApplianceIds).size > LIMITS.appliancesPerTrip)
+      throw unprocessable('sharedApplianceIds', `A trip holds at most ${LIMITS.appliancesPerTrip} appliances.`);
     const at = now();
     const copyId = db.transaction((tx) => {
-      const id = duplicateTrip(tx, tripId, userId, at, { name: name ?? source.name, rig: rigFromRow(saved) });
+      const onto = { rig: rigFromRow(saved), loads, sharedApplianceIds };
+      const id = duplicateTrip(tx, tripId, userId, at, { name: name ?? source.name, onto });
       tx.insert(tripCopies)
         .values({
           copyTripId: id,

@@ -19,6 +19,14 @@ const idSchema = z.string().min(1).max(64);
 export const rigRecordSchema = z.object({ id: idSchema, version: versionSchema, rig: rigSchema });
 export type RigRecord = z.infer<typeof rigRecordSchema>;
 
+/** A saved rig's usual loads: the appliances that come along on every trip made on it. */
+export const rigLoadsSchema = z
+  .array(applianceFieldsSchema)
+  .max(LIMITS.appliancesPerTrip, { error: `At most ${LIMITS.appliancesPerTrip} appliances on a rig.` });
+/** One of My rigs: the rig and its usual loads. */
+export const savedRigRecordSchema = rigRecordSchema.extend({ loads: rigLoadsSchema });
+export type SavedRigRecord = z.infer<typeof savedRigRecordSchema>;
+
 export const stopRecordSchema = z.object({ id: idSchema, version: versionSchema, notes: z.string(), stop: stopSchema });
 export type StopRecord = z.infer<typeof stopRecordSchema>;
 
@@ -98,7 +106,8 @@ export type CreateTripRequest = z.input<typeof createTripRequestSchema>;
 export const updateTripRequestSchema = tripFieldsSchema.partial().extend({ version: versionSchema }).strict();
 export type UpdateTripRequest = z.input<typeof updateTripRequestSchema>;
 
-export const createRigRequestSchema = z.object({ rig: rigSchema }).strict();
+export const createRigRequestSchema = z.object({ rig: rigSchema, loads: rigLoadsSchema.default([]) }).strict();
+export const updateRigLoadsRequestSchema = z.object({ version: versionSchema, loads: rigLoadsSchema }).strict();
 export const updateRigRequestSchema = z.object({ version: versionSchema, rig: rigSchema }).strict();
 export const replaceTripRigRequestSchema = z.object({ version: versionSchema, rigId: idSchema }).strict();
 export const saveTripRigRequestSchema = z.object({ name: nameText(120, { empty: 'Give the rig a name.' }) }).strict();

@@ -3,6 +3,7 @@
 import { IANAZone } from 'luxon';
 import { z } from 'zod';
 import { LIMITS, fieldRule } from './limits';
+import './plain-errors';
 
 export const percentSchema = z.number().min(0).max(100);
 export const fractionSchema = z.number().min(0).max(1);
@@ -31,7 +32,7 @@ function isValidZone(zone: string): boolean {
 export const timeZoneSchema = z
   .string()
   .max(ZONE_NAME_MAX)
-  .refine(isValidZone, { message: 'Use an IANA time zone such as Europe/London' });
+  .refine(isValidZone, { message: 'Not a known time zone: choose one from the list, such as Europe/London.' });
 
 export const localHourSchema = z.number().int().min(0).max(24);
 

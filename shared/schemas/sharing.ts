@@ -1,5 +1,6 @@
 // Contracts for sharing: trip invites, clubs, and copies of a club's trip onto a member's rig.
 import { z } from 'zod';
+import { LIMITS } from './limits';
 import { nameText } from './text';
 
 export const inviteRoleSchema = z.enum(['planner', 'crew', 'viewer'], {
@@ -82,8 +83,16 @@ export type ClubInviteReport = z.infer<typeof clubInviteReportSchema>;
 
 export const shareTripRequestSchema = z.object({ tripId: z.string().min(1).max(64) }).strict();
 
+/**
+ * The copy runs on one of My rigs and brings that rig's usual loads; of the plan's own appliances only those named in
+ * sharedApplianceIds come along (a rally's shared lights, say), never the organiser's whole list.
+ */
 export const copyTripRequestSchema = z
-  .object({ rigId: z.string().min(1).max(64), name: nameText(120, { empty: 'Give the trip a name.' }).optional() })
+  .object({
+    rigId: z.string().min(1).max(64),
+    name: nameText(120, { empty: 'Give the trip a name.' }).optional(),
+    sharedApplianceIds: z.array(z.string().min(1).max(64)).max(LIMITS.appliancesPerTrip).default([]),
+  })
   .strict();
 
 export const clubSummarySchema = z.object({

@@ -1,5 +1,6 @@
 // Free text that people name things with: trips, stops, appliances, rigs, clubs and themselves.
 import { z } from 'zod';
+import './plain-errors';
 
 // No C0 or C1 control characters (tabs, line breaks, escapes, NUL…) and no Unicode line or paragraph
 // separators: a name is one line of visible text. Explicit ranges rather than \p{…}, so every JS engine
@@ -10,10 +11,10 @@ const WITHOUT_CONTROL_CHARACTERS = /^[^\u0000-\u001F\u007F-\u009F\u2028\u2029]*$
 const WELL_FORMED_UTF16 = /^(?:[^\uD800-\uDFFF]|[\uD800-\uDBFF][\uDC00-\uDFFF])*$/;
 
 export const NAME_MESSAGES = {
-  empty: 'Enter a name.',
+  empty: 'Give it a name.',
   control: 'Use visible characters only: no line breaks, tabs or control characters.',
   surrogate: 'This text holds a broken character. Please type it again.',
-  tooLong: (max: number) => `Use at most ${max} characters.`,
+  tooLong: (max: number) => `At most ${max} characters.`,
 } as const;
 
 /**

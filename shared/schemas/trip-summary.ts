@@ -23,6 +23,8 @@ export const tripSummarySchema = z.object({
    * of the plan, while the new budget is computed); `unavailable` (no stops yet, or a plan too large to compute).
    */
   budgetStatus: z.enum(['current', 'computing', 'unavailable']).optional(),
+  /** The clubs the trip is shared with, by name (for its owner and planners, who manage the shares). */
+  sharedWith: z.array(z.string()).optional(),
   /** The stops' positions and lowest charge there, for the card's small map. */
   route: z.array(z.object({ lat: z.number(), lon: z.number(), lowestSocPct: z.number().nullable() })).optional(),
 });

@@ -77,9 +77,9 @@ export const stopSchema = z
     lowC: z.number().min(-50).max(60),
     highC: z.number().min(-50).max(60),
   })
-  .refine((s) => s.highC >= s.lowC, { message: 'highC must be at or above lowC', path: ['highC'] })
+  .refine((s) => s.highC >= s.lowC, { message: 'The high must be at or above the low.', path: ['highC'] })
   .refine((s) => Date.parse(s.departAt) > Date.parse(s.arriveAt), {
-    message: 'departAt must be after arriveAt',
+    message: 'Leave after you arrive: pick a later day or time.',
     path: ['departAt'],
   });
 export type Stop = z.infer<typeof stopSchema>;

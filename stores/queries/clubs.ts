@@ -75,7 +75,12 @@ export function useShareTripToClubMutation() {
   return useMutation({
     mutationFn: ({ clubId, tripId }: { clubId: string; tripId: string }) =>
       apiFetch<unknown>(`${clubPath(clubId)}/trips`, { method: 'POST', json: { tripId } }),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: clubKeys.root }),
+    // The trips list shows where each trip is shared, so it is read again too.
+    onSuccess: () =>
+      Promise.all([
+        queryClient.invalidateQueries({ queryKey: clubKeys.root }),
+        queryClient.invalidateQueries({ queryKey: tripKeys.list() }),
+      ]),
   });
 }
 
@@ -84,7 +89,11 @@ export function useUnshareTripMutation(clubId: string) {
   return useMutation({
     mutationFn: (tripId: string) =>
       apiFetch<void>(`${clubPath(clubId)}/trips/${encodeURIComponent(tripId)}`, { method: 'DELETE' }),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: clubKeys.root }),
+    onSuccess: () =>
+      Promise.all([
+        queryClient.invalidateQueries({ queryKey: clubKeys.root }),
+        queryClient.invalidateQueries({ queryKey: tripKeys.list() }),
+      ]),
   });
 }
 
@@ -115,8 +124,15 @@ export function useTripShareWithdrawMutation(tripId: string) {
 export function useCopyOntoRigMutation() {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: ({ tripId, ...body }: { tripId: string; rigId: string; name?: string }) =>
-      apiFetch<TripDetail>(`/api/trips/${encodeURIComponent(tripId)}/copy`, { method: 'POST', json: body }),
+    mutationFn: ({
+      tripId,
+      ...body
+    }: {
+      tripId: string;
+      rigId: string;
+      name?: string;
+      sharedApplianceIds?: string[];
+    }) => apiFetch<TripDetail>(`/api/trips/${encodeURIComponent(tripId)}/copy`, { method: 'POST', json: body }),
     onSuccess: (detail) => {
       queryClient.setQueryData(tripKeys.detail(detail.trip.id), detail);
       return Promise.all([

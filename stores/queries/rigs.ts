@@ -1,5 +1,6 @@
 import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { RigRecord } from '@/shared/schemas/api';
+import type { RigRecord, SavedRigRecord } from '@/shared/schemas/api';
+import type { ApplianceFields } from '@/shared/schemas/appliance';
 import type { Rig, RigInput } from '@/shared/schemas/rig';
 import { apiFetch } from './api-client';
 import { STALE } from './stale';
@@ -16,7 +17,7 @@ export const rigKeys = {
 export function useMyRigsQuery() {
   return useQuery({
     queryKey: rigKeys.mine(),
-    queryFn: () => apiFetch<{ rigs: RigRecord[] }>('/api/rigs'),
+    queryFn: () => apiFetch<{ rigs: SavedRigRecord[] }>('/api/rigs'),
     staleTime: STALE.MINUTES.ONE,
   });
 }
@@ -56,6 +57,38 @@ export function useTripRigReplaceMutation(tripId: string) {
     mutationFn: (body: { version: number; rigId: string }) =>
       apiFetch<RigRecord>(`${tripRig(tripId)}/replace`, { method: 'POST', json: body }),
     onSuccess: () => invalidateTrip(queryClient, tripId),
+  });
+}
+
+const savedRig = (rigId: string) => `/api/rigs/${encodeURIComponent(rigId)}`;
+
+/** A new one of My rigs, from a preset or blank, with its usual loads (none to begin with). */
+export function useRigCreateMutation() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (body: { rig: RigInput; loads?: ApplianceFields[] }) =>
+      apiFetch<SavedRigRecord>('/api/rigs', { method: 'POST', json: body }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: rigKeys.mine() }),
+  });
+}
+
+/** Saves one of My rigs' parts (its loads are saved on their own). */
+export function useSavedRigSaveMutation(rigId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (body: { version: number; rig: RigInput }) =>
+      apiFetch<SavedRigRecord>(savedRig(rigId), { method: 'PUT', json: body }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: rigKeys.mine() }),
+  });
+}
+
+/** Replaces one of My rigs' usual loads. */
+export function useRigLoadsMutation(rigId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (body: { version: number; loads: ApplianceFields[] }) =>
+      apiFetch<SavedRigRecord>(`${savedRig(rigId)}/loads`, { method: 'PUT', json: body }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: rigKeys.mine() }),
   });
 }
 

@@ -1,6 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import { energy, fuelAmount, mass, temperature } from '@/components/format/units';
-import { fromFormValues, presetAt, toFormValues } from '@/components/route/stop-form-values';
+import {
+  fromFormValues,
+  presetAt,
+  stopFieldOf,
+  stopFormSchema,
+  toFormValues,
+} from '@/components/route/stop-form-values';
 import { highlandLoop } from '@/shared/engine';
 import { stopSchema } from '@/shared/schemas/trip';
 import { readStoredUnits } from '@/stores/units-store';
@@ -52,11 +58,47 @@ describe('stop form values', () => {
     expect(built.ok && built.stop.lowC).toBe(0);
   });
 
+  /** Every message the form's resolver gives, by field. */
+  const refusals = (values: unknown): Record<string, string> => {
+    const result = stopFormSchema.safeParse(values);
+    return Object.fromEntries((result.error?.issues ?? []).map((issue) => [String(issue.path[0]), issue.message]));
+  };
+
   it('when departure is before arrival, then the message lands on the depart field', () => {
     const values = toFormValues(stop, '', 'metric', 'Europe/London');
-    const built = fromFormValues({ ...values, depart: '2027-09-13 10:00' }, 'metric');
-    expect(built.ok).toBe(false);
-    if (!built.ok) expect(built.errors.depart).toMatch(/left after/);
+    expect(refusals({ ...values, depart: '2027-09-13 10:00' }).depart).toMatch(/Leave after you arrive/);
+  });
+
+  it('when the latitude is wrong and the high is below the low, then both refusals show at once', () => {
+    const values = toFormValues(stop, '', 'metric', 'Europe/London');
+    const found = refusals({ ...values, lat: 123, low: 20, high: 5, depart: '2027-09-13 10:00', name: '' });
+    expect(found).toMatchObject({
+      name: 'Give the stop a name.',
+      lat: 'Latitude runs from −90 to 90.',
+      high: 'The high must be at or above the low.',
+      depart: expect.stringMatching(/Leave after you arrive/),
+    });
+  });
+
+  it('when a generator hour is 25, then the message gives the range; when it is empty, it asks for an hour', () => {
+    const values = toFormValues(stop, '', 'metric', 'Europe/London');
+    expect(refusals({ ...values, generatorStart: 25 }).generatorStart).toBe('Use an hour from 0 to 24.');
+    expect(refusals({ ...values, generatorEnd: null }).generatorEnd).toBe('Enter an hour.');
+  });
+
+  it('when the time zone is not a real zone, then the zone field is refused and the dates wait for it', () => {
+    const values = toFormValues(stop, '', 'metric', 'Europe/London');
+    const found = refusals({ ...values, timeZone: 'Mars/Olympus' });
+    expect(found.timeZone).toMatch(/time zone/);
+    expect(found.arrive).toBeUndefined();
+  });
+
+  it('when the server names a stop field, then the form field that shows it is found; unknown names find none', () => {
+    expect(stopFieldOf('stop.departAt')).toBe('depart');
+    expect(stopFieldOf('stop.highC')).toBe('high');
+    expect(stopFieldOf('notes')).toBe('notes');
+    expect(stopFieldOf('stop.constructor')).toBeUndefined();
+    expect(stopFieldOf('tripVersion')).toBeUndefined();
   });
 
   it('when the deep-forest stop is opened, then its sky openness and leaf-area index show, and the quick pick is lit', () => {
@@ -77,13 +119,13 @@ describe('stop form values', () => {
 
   it('when a custom horizon has too few angles, then the horizon field says how to write it', () => {
     const values = toFormValues(stop, '', 'metric', 'Europe/London');
-    const built = fromFormValues({ ...values, exposureKind: 'custom', horizon: '10, 20' }, 'metric');
-    expect(!built.ok && built.errors.horizon).toMatch(/4 to 36 angles/);
+    expect(refusals({ ...values, exposureKind: 'custom', horizon: '10, 20' }).horizon).toMatch(/4 to 36 angles/);
   });
 
   it('when a local time falls in the spring-forward gap, then it is refused', () => {
     const values = toFormValues(stop, '', 'metric', 'Europe/London');
-    const built = fromFormValues({ ...values, arrive: '2027-03-28 01:30', depart: '2027-03-29 10:00' }, 'metric');
-    expect(built.ok).toBe(false);
+    const gap = { ...values, arrive: '2027-03-28 01:30', depart: '2027-03-29 10:00' };
+    expect(fromFormValues(gap, 'metric').ok).toBe(false);
+    expect(refusals(gap).arrive).toMatch(/does not exist/);
   });
 });

@@ -27,8 +27,9 @@ async function addStop(
   await page.fill(byTestId('stop-name'), s.name);
   await page.fill(byTestId('stop-lat'), s.lat);
   await page.fill(byTestId('stop-lon'), s.lon);
-  await page.fill(byTestId('stop-arrive'), s.arrive);
-  await page.fill(byTestId('stop-depart'), s.depart);
+  // The browser's own date-and-time inputs take "YYYY-MM-DDTHH:MM".
+  await page.fill(byTestId('stop-arrive'), s.arrive.replace(' ', 'T'));
+  await page.fill(byTestId('stop-depart'), s.depart.replace(' ', 'T'));
   if (s.forest) await page.click(byTestId('stop-preset-deep-forest'));
   await page.click(byTestId('stop-save'));
   await page.waitForSelector(byTestId(`stop-${index}`));
@@ -190,15 +191,15 @@ describe('a trip leader at 1440 px', () => {
     // Dublin keeps the same clock as London in October, so the stop's times stay valid in the new zone.
     await page.click(byTestId('tab-route'));
     await page.click(byTestId('stop-0-edit'));
-    await page.click(byTestId('stop-zone-list-toggle'));
+    await page.click(byTestId('stop-time-zone-change'));
     await page.keyboard.type('dubl');
-    await page.click(byTestId('stop-zone-list-option-Europe/Dublin'));
-    expect(await page.inputValue(byTestId('stop-time-zone'))).toBe('Europe/Dublin');
+    await page.click(byTestId('stop-time-zone-list-option-Europe/Dublin'));
+    expect(await page.textContent(byTestId('stop-time-zone-value'))).toContain('Europe/Dublin');
     await page.click(byTestId('stop-save'));
     await page.waitForSelector(byTestId('stop-form'), { state: 'detached' });
     await page.reload();
     await page.click(byTestId('stop-0-edit'));
-    expect(await page.inputValue(byTestId('stop-time-zone'))).toBe('Europe/Dublin');
+    expect(await page.textContent(byTestId('stop-time-zone-value'))).toContain('Europe/Dublin');
     expect(errors).toEqual([]);
     await page.close();
   });

@@ -21,7 +21,7 @@ import { horizontalOverflow, overlappingText, tripChromeHeight } from './layout-
 const suite = useServerAndBrowser();
 
 type Check = { name: string; trip?: boolean; open: (page: Page, paths: Paths) => Promise<void> };
-type Paths = { trip: string; club: string };
+type Paths = { trip: string; club: string; rig: string };
 
 const go = async (page: Page, path: string, ready: string) => {
   await page.goto(`${suite.server.url}${path}`);
@@ -54,6 +54,8 @@ const CHECKS: Check[] = [
   { name: 'clubs', open: (page) => go(page, '/clubs', 'club-list') },
   { name: 'club', open: (page, paths) => go(page, paths.club, 'club-trips-card') },
   { name: 'account', open: (page) => go(page, '/account', 'units-card') },
+  { name: 'my-rigs', open: (page) => go(page, '/rigs', 'rigs-list') },
+  { name: 'saved-rig', open: (page, paths) => go(page, paths.rig, 'rig-loads') },
   { name: 'budget', trip: true, open: tab('tab-budget', 'budget-screen', chartDrawn) },
   {
     name: 'budget-what-if',
@@ -147,7 +149,12 @@ describe('every screen', () => {
     const club = await page.request.post(`${suite.server.url}/api/clubs`, { data: { name: 'Loch rally' }, headers });
     const clubId = ((await club.json()) as { club: { id: string } }).club.id;
     await page.request.post(`${suite.server.url}/api/clubs/${clubId}/trips`, { data: { tripId }, headers });
-    const paths: Paths = { trip: `/trips/${tripId}`, club: `/clubs/${clubId}` };
+    const saved = await page.request.post(`${suite.server.url}/api/trips/${tripId}/rig/save`, {
+      data: { name: 'Our touring van' },
+      headers,
+    });
+    const rigId = ((await saved.json()) as { rig: { id: string } }).rig.id;
+    const paths: Paths = { trip: `/trips/${tripId}`, club: `/clubs/${clubId}`, rig: `/rigs/${rigId}` };
     const hours = await tripHours(page, tripId);
 
     const violations: string[] = [];

@@ -302,11 +302,11 @@ describe('copy onto my rig', () => {
     await page.click(byTestId('share-club-submit'));
     await page.locator(byTestId('toast')).filter({ hasText: 'Shared to Firth Caravan Club' }).waitFor();
 
-    // Without a saved rig the copy form says how to get one instead of failing.
+    // Without a saved rig the copy form offers to make one instead of failing.
     await page.goto(`${suite.server.url}${clubPath}`);
     await page.click(byTestId(`club-trip-${tripId}-copy`));
     await page.waitForSelector(byTestId(`copy-${tripId}-no-rigs`));
-    expect(await page.textContent(byTestId(`copy-${tripId}-no-rigs`))).toContain('Rig tab');
+    expect(await page.textContent(byTestId(`copy-${tripId}-no-rigs`))).toContain('First, your own rig');
 
     await page.goto(`${suite.server.url}/trips/${tripId}/rig`);
     await page.fill(byTestId('rig-save-name'), 'Our caravan');

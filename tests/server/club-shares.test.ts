@@ -36,6 +36,23 @@ const CLOSED = { trip: 404, budget: 404, members: 404, duplicate: 404 };
 const OPEN = { trip: 200, budget: 200, members: 200, duplicate: 201 };
 
 describe('sharing a trip to a club', () => {
+  it('when the owner shares a trip to a club, then the trips list names that club on the trip for the owner and planners only', async () => {
+    const { owner, tripId } = await ownerWithTrip();
+    const planner = await signUpAgent(ctx.app, 'Planner');
+    grant(ctx.db, tripId, planner.userId, 'planner');
+    const crew = await signUpAgent(ctx.app, 'Crew');
+    grant(ctx.db, tripId, crew.userId, 'crew');
+    const listed = async (agent: Agent) =>
+      (await agent.get('/api/trips').expect(200)).body.trips.find((t: { id: string }) => t.id === tripId);
+    expect((await listed(owner.agent)).sharedWith).toEqual([]);
+
+    const clubId = await createClub(owner.agent, 'Rally club');
+    await owner.agent.post(`/api/clubs/${clubId}/trips`).send({ tripId }).expect(201);
+    expect((await listed(owner.agent)).sharedWith).toEqual(['Rally club']);
+    expect((await listed(planner.agent)).sharedWith).toEqual(['Rally club']);
+    expect((await listed(crew.agent)).sharedWith).toBeUndefined();
+  });
+
   it('when a planner shares the trip to a club they organise and is then removed, then the share was refused and neither they nor their club read the trip', async () => {
     const { owner, tripId } = await ownerWithTrip();
     const planner = await signUpAgent(ctx.app, 'Planner');

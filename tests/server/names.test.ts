@@ -50,6 +50,20 @@ describe('names through the API', () => {
       expect(Object.keys(response.body.error.fields)).toContain(field);
     },
   );
+
+  it('when an appliance draws no power and its name is too long, then the API answers in the same plain words as the form', async () => {
+    const { agent } = await signUpAgent(ctx.app);
+    const { trip } = await createTrip(agent);
+    const response = await agent
+      .post(`/api/trips/${trip.id}/appliances`)
+      .send({ appliance: { ...LIGHTS, name: 'x'.repeat(81), runningW: -1, quantity: 0 } });
+    expect(response.status).toBe(400);
+    expect(response.body.error.fields).toMatchObject({
+      'appliance.name': ['At most 80 characters.'],
+      'appliance.runningW': ['Enter 0 W or more.'],
+      'appliance.quantity': ['Enter 1 or more.'],
+    });
+  });
 });
 
 type TestAgent = Awaited<ReturnType<typeof signUpAgent>>['agent'];

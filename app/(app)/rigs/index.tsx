@@ -1,0 +1,5 @@
+import { MyRigsScreen } from '@/components/rig/my-rigs-screen';
+
+export default function RigsRoute() {
+  return <MyRigsScreen />;
+}
