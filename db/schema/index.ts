@@ -10,3 +10,4 @@ export * from './preferences';
 export * from './invites';
 export * from './clubs';
 export * from './calendar-feeds';
+export * from './check-ins';

@@ -7,6 +7,7 @@ import type { BudgetAnswer, BudgetService } from '../budget/budget-service';
 import { HttpError, notFound } from '../errors';
 import { tripAccess } from '../middleware/trip-access';
 import { appliancesRouter } from './appliances';
+import { checkInsRouter } from './check-ins';
 import { drivesRouter } from './drives';
 import { membersRouter } from './members';
 import { stopsRouter } from './stops';
@@ -35,6 +36,7 @@ export function tripItemsRouter(deps: TripItemsDeps): Router {
   router.use('/drives', drivesRouter(deps));
   router.use('/appliances', appliancesRouter(deps));
   router.use('/rig', tripRigRouter(deps));
+  router.use('/check-ins', checkInsRouter(deps));
   router.use('/members', membersRouter(deps));
   router.use('/invites', tripInvitesRouter(deps));
   router.use('/shares', tripSharesRouter(deps));
