@@ -3,6 +3,7 @@ import { z } from 'zod';
 import { applianceSchema } from './appliance';
 import { optionsSchema } from './options';
 import { rigSchema } from './rig';
+import { startStateSchema } from './start-state';
 import { LIMITS } from './limits';
 import { tripSchema } from './trip';
 
@@ -15,6 +16,8 @@ export const engineInputSchema = z
       .max(LIMITS.appliancesPerTrip, { error: `A trip has at most ${LIMITS.appliancesPerTrip} appliances.` })
       .default([]),
     options: optionsSchema.default(optionsSchema.parse({})),
+    /** A reading on the road to walk on from (a check-in); null walks the whole trip from the rig's own start. */
+    startState: startStateSchema.nullable().default(null),
   })
   .superRefine((input, ctx) => {
     const seen = new Set<string>();
