@@ -19,6 +19,7 @@ import { SocChartCard } from './soc-chart-card';
 import { useBudgetView } from './use-budget-view';
 import { editsForWhatIf, WhatIfPanel } from './what-if-panel';
 import { BudgetRouteMap } from '@/components/route/route-mini-map';
+import { CheckInForecast } from '@/components/check-ins/check-in-forecast';
 
 export function BudgetScreen({ detail }: { detail: TripDetail }) {
   const units = useUnits();
@@ -76,6 +77,7 @@ export function BudgetScreen({ detail }: { detail: TripDetail }) {
           message="Showing a what-if: these figures are not saved. Keep the change below, or discard it."
         />
       ) : null}
+      {view.whatIf ? null : <CheckInForecast detail={detail} plan={result} />}
       <HeadlineFigures headline={result.headline} units={units} />
       <Panes
         main={
