@@ -11,6 +11,7 @@ import { checkInsRouter } from './check-ins';
 import { drivesRouter } from './drives';
 import { membersRouter } from './members';
 import { stopsRouter } from './stops';
+import { stayRouter } from './stay';
 import { tripRigRouter } from './trip-rig';
 import { tripInvitesRouter } from './trip-invites';
 import { tripSharesRouter } from './trip-shares';
@@ -32,6 +33,7 @@ const EMAIL_LIKE = /[^\s@<>"]+@[^\s@<>"]+\.[^\s@<>"]+/;
 
 export function tripItemsRouter(deps: TripItemsDeps): Router {
   const router = Router({ mergeParams: true });
+  router.use('/stops', stayRouter(deps));
   router.use('/stops', stopsRouter(deps));
   router.use('/drives', drivesRouter(deps));
   router.use('/appliances', appliancesRouter(deps));

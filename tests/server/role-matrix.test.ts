@@ -216,6 +216,20 @@ const ROWS: Row[] = [
     expected: needs('loads', 204),
   },
   {
+    name: 'POST stop stay',
+    prepare: async () => {
+      const detail = await getDetail(owner(), world.tripId);
+      const last = detail.stops[detail.stops.length - 1];
+      if (!last) throw new Error('no stop');
+      return {
+        method: 'post',
+        path: `${base()}/stops/${last.id}/stay`,
+        body: { tripVersion: detail.trip.version, nights: 1, mode: 'shift-rest' },
+      };
+    },
+    expected: needs('trip'),
+  },
+  {
     name: 'GET check-ins',
     prepare: async () => ({ method: 'get', path: `${base()}/check-ins` }),
     expected: needs('read'),
