@@ -13,6 +13,7 @@ import { useCheckInsQuery } from '@/stores/queries/check-ins';
 import { CheckInForm } from './check-in-form';
 import { CheckInList } from './check-in-list';
 import { ReforecastCard } from './reforecast-card';
+import { StayControl } from './stay-control';
 import { reforecastFor } from './use-reforecast';
 
 /** The trip on the road: check in, see the forecast from the latest reading, and every reading so far. */
@@ -37,6 +38,7 @@ export function RoadScreen({ detail }: { detail: TripDetail }) {
               <ReforecastCard plan={plan} state={reforecastFor(detail, checkIns.data)} checkIns={checkIns.data} />
             ) : null}
             {canAdd ? <CheckInForm key={tripId} tripId={tripId} tanks={tanks} /> : null}
+            <StayControl detail={detail} checkIns={checkIns.data} />
           </View>
         }
         side={

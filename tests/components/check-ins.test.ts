@@ -1,10 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import { draftFromRecord, draftToFields, emptyDraft } from '@/components/check-ins/check-in-draft';
+import { currentStopIndex, stayOutcome } from '@/components/check-ins/stay-what-if';
 import { reforecastChart, reforecastHeadline, weekdayTime } from '@/components/check-ins/reforecast-view';
 import { DEMO_TRIPS, simulateParsed } from '@/shared/engine';
 import { reforecastFrom } from '@/shared/engine/reforecast';
 import type { CheckInRecord } from '@/shared/schemas/check-in';
 import { engineInputSchema } from '@/shared/schemas/engine-input';
+import { demoDetail } from '../e2e/fixtures';
 
 const ZONE = 'Europe/London';
 
@@ -114,5 +116,47 @@ describe('re-forecast view', () => {
     expect(chart.ahead[0]).toEqual({ x: 60, soc: 68 });
     expect(chart.ahead).toHaveLength(plan.ledger.length - 60 + 1);
     expect(chart.readings).toEqual([{ id: 'c1', x: 60, soc: 68 }]);
+  });
+});
+
+describe('stay longer or leave early', () => {
+  const detail = demoDetail('highlandLoop');
+  const plan = simulateParsed(engineInputSchema.parse(DEMO_TRIPS.highlandLoop));
+  const forest = detail.stops[1];
+  const inForest = {
+    id: 'c1',
+    checkIn: { at: forest?.stop.arriveAt ?? '', socPct: 90, propane: [], harvestWh: null, note: '' },
+  } as unknown as CheckInRecord;
+
+  it('when a check-in was taken at a stop, then that stop is the current one; with none and before the trip, the first', () => {
+    expect(currentStopIndex(detail, [inForest], new Date('2026-12-03T12:00Z'))).toBe(1);
+    expect(currentStopIndex(detail, [], new Date('2026-12-03T12:00Z'))).toBe(0);
+  });
+
+  it('when nothing changes, then the what-if is the plan itself', () => {
+    const same = stayOutcome(detail, [], 1, 0, 'shift-rest');
+    expect(same).toEqual({
+      ok: true,
+      lowestSocPct: plan.headline.lowestSocPct,
+      lowestAtLocal: plan.headline.lowestAtLocal,
+      fromCheckIn: false,
+    });
+  });
+
+  it('when a night more is spent in the deep forest, then the lowest charge falls', () => {
+    const longer = stayOutcome(detail, [], 1, 1, 'shift-rest');
+    expect(longer.ok && longer.lowestSocPct).toBeLessThan(plan.headline.lowestSocPct);
+  });
+
+  it('when there is a check-in, then the what-if runs from it', () => {
+    const fromReading = stayOutcome(detail, [inForest], 1, 1, 'shift-rest');
+    expect(fromReading.ok && fromReading.fromCheckIn).toBe(true);
+  });
+
+  it('when more nights are taken than the stop has, then the what-if says which stop would be left with no time', () => {
+    expect(stayOutcome(detail, [], 1, -5, 'shift-rest')).toEqual({
+      ok: false,
+      message: `That leaves no time at ${forest?.stop.name}: choose fewer nights.`,
+    });
   });
 });
