@@ -2,12 +2,24 @@ import { spawnSync } from 'node:child_process';
 import crypto from 'node:crypto';
 import fs from 'node:fs';
 import path from 'node:path';
+import { makeOffline } from './web-offline';
 
 const ROOT = path.resolve(__dirname, '..');
 const OUT_DIR = path.join(ROOT, 'dist');
 const STAMP = path.join(OUT_DIR, '.source-fingerprint');
 // Everything that ends up in the web bundle. Server-only folders are left out on purpose.
-const SOURCES = ['app', 'components', 'stores', 'shared', 'assets', 'app.json', 'package-lock.json', 'tsconfig.json'];
+const SOURCES = [
+  'app',
+  'components',
+  'stores',
+  'shared',
+  'assets',
+  'app.json',
+  'package-lock.json',
+  'tsconfig.json',
+  // The service worker and manifest are written after the export.
+  'scripts/web-offline.ts',
+];
 
 function listFiles(entry: string): string[] {
   const full = path.join(ROOT, entry);
@@ -42,7 +54,7 @@ export function copyCanvasKit(): void {
   if (!fs.existsSync(target) || fs.statSync(target).size !== fs.statSync(source).size) fs.copyFileSync(source, target);
 }
 
-export function ensureWebBuild({ force = false } = {}): void {
+export async function ensureWebBuild({ force = false } = {}): Promise<void> {
   const fingerprint = sourceFingerprint();
   const current = fs.existsSync(STAMP) ? fs.readFileSync(STAMP, 'utf8').trim() : '';
   if (!force && current === fingerprint && fs.existsSync(path.join(OUT_DIR, 'index.html'))) {
@@ -67,15 +79,15 @@ export function ensureWebBuild({ force = false } = {}): void {
     env: { ...process.env, CI: '1', EXPO_NO_TELEMETRY: '1', TMPDIR: metroTemp },
   });
   if (result.status !== 0) throw new Error('The web build failed; see the output above.');
+  const offline = await makeOffline(OUT_DIR);
+  console.log(`Service worker precaches ${offline.count} files (${(offline.size / 1e6).toFixed(1)} MB).`);
   fs.writeFileSync(STAMP, `${fingerprint}\n`);
   console.log('Web app built.');
 }
 
 if (require.main === module) {
-  try {
-    ensureWebBuild({ force: process.argv.includes('--force') });
-  } catch (error) {
+  ensureWebBuild({ force: process.argv.includes('--force') }).catch((error: unknown) => {
     console.error(error instanceof Error ? error.message : error);
     process.exit(1);
-  }
+  });
 }
