@@ -1,11 +1,17 @@
 import { QueryClientProvider } from '@tanstack/react-query';
+import { PersistQueryClientProvider } from '@tanstack/react-query-persist-client';
 import { Stack } from 'expo-router';
-import { useState } from 'react';
+import { useEffect, useState } from 'react';
 import { LoadingScreen } from '@/components/layout/loading-screen';
 import { colors } from '@/components/theme/tokens';
 import { useAppFonts } from '@/components/theme/use-app-fonts';
 import { useSession } from '@/stores/auth-client';
 import { createQueryClient } from '@/stores/queries/query-client';
+import { queryPersister } from '@/stores/queries/persister';
+import { STALE } from '@/stores/queries/stale';
+import { rememberSignedIn, wasSignedIn } from '@/stores/offline-session';
+import { useOnline } from '@/components/offline/use-online';
+import packageJson from '@/package.json';
 import { hydrateUnits } from '@/stores/units-store';
 import '@/shared/schemas/plain-errors';
 
@@ -16,27 +22,42 @@ export default function RootLayout() {
   const [queryClient] = useState(createQueryClient);
   const fontsReady = useAppFonts();
   const session = useSession();
+  const online = useOnline();
   // better-auth reports "pending" again while it refetches after a sign-in from signed out; only the
   // first answer may hold the app, or the navigator is torn down and pages outside the groups (an
   // invite being joined) lose their place.
   const [sessionKnown, setSessionKnown] = useState(false);
   if (!session.isPending && !sessionKnown) setSessionKnown(true);
+  // Only a definite answer from the server changes what this device remembers.
+  useEffect(() => {
+    if (sessionKnown && online && !session.error) rememberSignedIn(!!session.data);
+  }, [sessionKnown, online, session.error, session.data]);
 
   // Hold the first paint until the session is known, so nobody sees a flash of the sign-in page while already signed
   // in. Native apps also wait for the fonts; the web page draws with a fallback and swaps Nunito in.
   if (!fontsReady || !sessionKnown) return <LoadingScreen />;
 
-  const signedIn = !!session.data;
-  return (
-    <QueryClientProvider client={queryClient}>
-      <Stack screenOptions={{ headerShown: false, contentStyle: { backgroundColor: colors.dune } }}>
-        <Stack.Protected guard={signedIn}>
-          <Stack.Screen name="(app)" />
-        </Stack.Protected>
-        <Stack.Protected guard={!signedIn}>
-          <Stack.Screen name="(auth)" />
-        </Stack.Protected>
-      </Stack>
-    </QueryClientProvider>
+  // With no signal the session check cannot reach the server: whoever was signed in on this device stays in.
+  const signedIn = !!session.data || ((!online || !!session.error) && wasSignedIn());
+  const stack = (
+    <Stack screenOptions={{ headerShown: false, contentStyle: { backgroundColor: colors.dune } }}>
+      <Stack.Protected guard={signedIn}>
+        <Stack.Screen name="(app)" />
+      </Stack.Protected>
+      <Stack.Protected guard={!signedIn}>
+        <Stack.Screen name="(auth)" />
+      </Stack.Protected>
+    </Stack>
+  );
+  return queryPersister ? (
+    <PersistQueryClientProvider
+      client={queryClient}
+      // A new release starts from a fresh copy: its screens may read the data differently.
+      persistOptions={{ persister: queryPersister, maxAge: STALE.DAYS.SEVEN, buster: packageJson.version }}
+    >
+      {stack}
+    </PersistQueryClientProvider>
+  ) : (
+    <QueryClientProvider client={queryClient}>{stack}</QueryClientProvider>
   );
 }

@@ -4,6 +4,7 @@ import fs from 'node:fs';
 import path from 'node:path';
 import { precompressDir } from './precompress-web';
 import { addFontsToShell } from './web-fonts';
+import { makeOffline } from './web-offline';
 
 const ROOT = path.resolve(__dirname, '..');
 const OUT_DIR = path.join(ROOT, 'dist');
@@ -20,6 +21,8 @@ const SOURCES = [
   'tsconfig.json',
   'metro.config.js',
   'scripts/metro',
+  // The service worker and manifest are written after the export.
+  'scripts/web-offline.ts',
 ];
 
 function listFiles(entry: string): string[] {
@@ -67,7 +70,7 @@ export function hashedCanvasKitUrl(): string {
   return `/_expo/static/wasm/canvaskit-${hash}.wasm`;
 }
 
-export function ensureWebBuild({ force = false } = {}): void {
+export async function ensureWebBuild({ force = false } = {}): Promise<void> {
   const fingerprint = sourceFingerprint();
   const current = fs.existsSync(STAMP) ? fs.readFileSync(STAMP, 'utf8').trim() : '';
   if (!force && current === fingerprint && fs.existsSync(path.join(OUT_DIR, 'index.html'))) {
@@ -111,6 +114,8 @@ export function ensureWebBuild({ force = false } = {}): void {
   fs.mkdirSync(path.dirname(hashedWasm), { recursive: true });
   fs.copyFileSync(canvasKitSource(), hashedWasm);
   addFontsToShell(OUT_DIR);
+  const offline = await makeOffline(OUT_DIR);
+  console.log(`Service worker precaches ${offline.count} files (${(offline.size / 1e6).toFixed(1)} MB).`);
   console.log('Compressing scripts, fonts and the wasm (Brotli 11 and gzip) …');
   const sizes = precompressDir(OUT_DIR);
   const mb = (bytes: number): string => `${(bytes / 1e6).toFixed(2)} MB`;
@@ -120,10 +125,10 @@ export function ensureWebBuild({ force = false } = {}): void {
 }
 
 if (require.main === module) {
-  try {
-    ensureWebBuild({ force: process.argv.includes('--force') || process.argv.includes('--source-maps') });
-  } catch (error) {
-    console.error(error instanceof Error ? error.message : error);
-    process.exit(1);
-  }
+  ensureWebBuild({ force: process.argv.includes('--force') || process.argv.includes('--source-maps') }).catch(
+    (error: unknown) => {
+      console.error(error instanceof Error ? error.message : error);
+      process.exit(1);
+    },
+  );
 }

@@ -25,10 +25,17 @@ function ensureBrowser(): string {
 }
 
 const browser = ensureBrowser();
-ensureWebBuild();
-// Extra arguments (a file, -t "name") go to vitest, so one browser test can be run alone.
-const result = spawnSync('npx', ['vitest', 'run', '--config', 'vitest.e2e.config.mts', ...process.argv.slice(2)], {
-  stdio: 'inherit',
-  env: { ...process.env, CHROME_PATH: browser },
-});
-process.exit(result.status ?? 1);
+ensureWebBuild().then(
+  () => {
+    // Extra arguments (a file, -t "name") go to vitest, so one browser test can be run alone.
+    const result = spawnSync('npx', ['vitest', 'run', '--config', 'vitest.e2e.config.mts', ...process.argv.slice(2)], {
+      stdio: 'inherit',
+      env: { ...process.env, CHROME_PATH: browser },
+    });
+    process.exit(result.status ?? 1);
+  },
+  (error: unknown) => {
+    console.error(error instanceof Error ? error.message : error);
+    process.exit(1);
+  },
+);

@@ -22,6 +22,7 @@ import { useBudgetView } from './use-budget-view';
 import { WhatItWouldTake } from './what-it-would-take';
 import { editsForWhatIf, WhatIfPanel } from './what-if-panel';
 import { BudgetRouteMap } from '@/components/route/route-mini-map';
+import { CheckInForecast } from '@/components/check-ins/check-in-forecast';
 
 export function BudgetScreen({ detail }: { detail: TripDetail }) {
   const units = useUnits();
@@ -83,6 +84,7 @@ export function BudgetScreen({ detail }: { detail: TripDetail }) {
         />
       ) : null}
       <PlanChance result={result} stopCount={detail.stops.length} />
+      {view.whatIf ? null : <CheckInForecast detail={detail} plan={result} />}
       <HeadlineFigures headline={result.headline} units={units} />
       <Panes
         main={

@@ -6,6 +6,7 @@ import { colors, radii, space } from '@/components/theme/tokens';
 import { Text } from '@/components/ui/text';
 import { BrandMark } from './brand-mark';
 import { NAV_ITEMS } from './nav-items';
+import { ConnectionBanners } from '@/components/offline/connection-banners';
 import { ServerStatusBanner } from './server-status-banner';
 import { ToastHost } from './toast-host';
 import { useSyncUnitsFromServer } from '@/stores/queries/preferences';
@@ -48,6 +49,7 @@ export function AppShell({ children }: { children: ReactNode }) {
           {links}
         </View>
         <View style={styles.main} role="main">
+          <ConnectionBanners />
           <ServerStatusBanner />
           {children}
         </View>
@@ -58,6 +60,7 @@ export function AppShell({ children }: { children: ReactNode }) {
   return (
     <View style={styles.narrowRoot}>
       <View style={styles.main} role="main">
+        <ConnectionBanners />
         <ServerStatusBanner />
         {children}
       </View>

@@ -4,6 +4,7 @@ import { space } from '@/components/theme/tokens';
 import { Banner } from '@/components/ui/banner';
 import { apiFetch } from '@/stores/queries/api-client';
 import { STALE } from '@/stores/queries/stale';
+import { useOnline } from '@/components/offline/use-online';
 
 /** Polls the health route so a dropped server shows a banner instead of silent failures. */
 export function ServerStatusBanner() {
@@ -13,7 +14,9 @@ export function ServerStatusBanner() {
     refetchInterval: STALE.SECONDS.THIRTY,
     retry: false,
   });
-  if (!health.isError) return null;
+  // With no connection at all, the offline banner says so (and how old the data is).
+  const online = useOnline();
+  if (!health.isError || !online) return null;
   return (
     <View style={styles.wrap}>
       <Banner

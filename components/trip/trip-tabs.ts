@@ -1,8 +1,14 @@
-export type TripTab = { segment: '' | 'route' | 'loads' | 'rig' | 'people' | 'ledger'; label: string; testID: string };
+export type TripTab = {
+  segment: '' | 'road' | 'route' | 'loads' | 'rig' | 'people' | 'ledger';
+  label: string;
+  testID: string;
+};
 
 /** Budget first: it answers the question people open a trip for. */
 export const TRIP_TABS: TripTab[] = [
   { segment: '', label: 'Budget', testID: 'tab-budget' },
+  // On the road, reading the battery monitor is the next thing people do.
+  { segment: 'road', label: 'Check in', testID: 'tab-check-in' },
   { segment: 'route', label: 'Route', testID: 'tab-route' },
   { segment: 'loads', label: 'Loads', testID: 'tab-loads' },
   { segment: 'rig', label: 'Rig', testID: 'tab-rig' },

@@ -11,3 +11,4 @@ export * from './invites';
 export * from './clubs';
 export * from './calendar-feeds';
 export * from './weather-series';
+export * from './check-ins';

@@ -8,9 +8,11 @@ import type { BudgetAnswer, BudgetService } from '../budget/budget-service';
 import { HttpError, notFound } from '../errors';
 import { tripAccess } from '../middleware/trip-access';
 import { appliancesRouter } from './appliances';
+import { checkInsRouter } from './check-ins';
 import { drivesRouter } from './drives';
 import { membersRouter } from './members';
 import { stopsRouter } from './stops';
+import { stayRouter } from './stay';
 import { tripRigRouter } from './trip-rig';
 import { tripUndoRouter } from './trip-undo';
 import { tripInvitesRouter } from './trip-invites';
@@ -36,10 +38,12 @@ const EMAIL_LIKE = /[^\s@<>"]+@[^\s@<>"]+\.[^\s@<>"]+/;
 
 export function tripItemsRouter(deps: TripItemsDeps): Router {
   const router = Router({ mergeParams: true });
+  router.use('/stops', stayRouter(deps));
   router.use('/stops', stopsRouter(deps));
   router.use('/drives', drivesRouter(deps));
   router.use('/appliances', appliancesRouter(deps));
   router.use('/rig', tripRigRouter(deps));
+  router.use('/check-ins', checkInsRouter(deps));
   router.use('/members', membersRouter(deps));
   router.use('/invites', tripInvitesRouter(deps));
   router.use('/shares', tripSharesRouter(deps));

@@ -10,6 +10,7 @@ import { CONTINUOUS_SHARE, defaultFuelModel, fuelUse } from './generator';
 import { chargerDcW } from './hookup';
 import { inverterDraw } from './inverter';
 import { propaneKgFromHeatWh } from './fuel';
+import { walkRestart } from './start-state';
 import type { StepLoads } from './climate';
 import { QUARTERS, type Prepared } from './prepare';
 import { vehicleChargeW } from './vehicle-charging';
@@ -381,7 +382,18 @@ export function walk(p: Prepared, s: Scenario, ledger: LedgerColumns | null): Wa
   let shortWh = 0;
   let genHours = 0;
   let genRunning = false;
+  const restart = walkRestart(p);
   for (let i = 0; i < p.n; i++) {
+    if (i === restart?.index) {
+      // Everything from here is measured from the reading: what ran short or burned before it is behind us.
+      stored = (restart.socPct / 100) * r.capacityWh;
+      if (restart.propaneKg !== null) propane = restart.propaneKg;
+      lowest = stored / r.capacityWh;
+      lowestIndex = i;
+      shortWh = 0;
+      genHours = 0;
+      genRunning = false;
+    }
     startStep(f);
     const dtH = p.stepH[i] ?? 1;
     const solarW = (s.solarW[i] ?? 0) * s.solarScale;

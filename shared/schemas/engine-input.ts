@@ -4,6 +4,7 @@ import { applianceSchema } from './appliance';
 import { engineWeatherSchema } from './engine-weather';
 import { optionsSchema } from './options';
 import { rigSchema } from './rig';
+import { startStateSchema } from './start-state';
 import { LIMITS } from './limits';
 import { tripSchema } from './trip';
 
@@ -18,6 +19,8 @@ export const engineInputSchema = z
     options: optionsSchema.default(optionsSchema.parse({})),
     /** Recorded years and the forecast per stop; null: every stop plans with its preset sky. */
     weather: engineWeatherSchema.nullable().default(null),
+    /** A reading on the road to walk on from (a check-in); null walks the whole trip from the rig's own start. */
+    startState: startStateSchema.nullable().default(null),
   })
   .superRefine((input, ctx) => {
     const seen = new Set<string>();

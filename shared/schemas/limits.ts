@@ -27,6 +27,10 @@ export const LIMITS = {
   shortNameChars: 80,
   /** Characters of a trip's or stop's notes. */
   notesChars: 4000,
+  /** Check-ins per trip: several a day on the longest trip. */
+  checkInsPerTrip: 600,
+  /** Characters of a check-in's note. */
+  checkInNoteChars: 1000,
   /** Characters of a record id. */
   idChars: 64,
 } as const;

@@ -1,5 +1,6 @@
 import { QueryClient } from '@tanstack/react-query';
 import { ApiError } from './api-client';
+import { STALE } from './stale';
 
 export function createQueryClient(): QueryClient {
   return new QueryClient({
@@ -9,6 +10,8 @@ export function createQueryClient(): QueryClient {
         retry: (failureCount, error) =>
           failureCount < 2 && !(error instanceof ApiError && error.status >= 400 && error.status < 500),
         refetchOnWindowFocus: true,
+        // Kept as long as the copy saved on the device, so a trip opened once still opens with no signal.
+        gcTime: STALE.DAYS.SEVEN,
       },
     },
   });

@@ -49,6 +49,19 @@ let world: World;
 const owner = () => world.callers.owner.agent;
 const base = () => `/api/trips/${world.tripId}`;
 
+const READING = { at: '2027-06-10T18:00+01:00', socPct: 68, propane: [{ tank: 0, reading: { kind: 'full' } }] };
+
+/**
+ * A check-in the actor took when their role lets them take one (only its author may change it), else the owner's:
+ * the refusal then comes from the role, before authorship is asked.
+ */
+async function readingBy(w: World, actor: Actor): Promise<{ id: string; version: number }> {
+  const author = actor === 'planner' || actor === 'crew' ? w.callers[actor].agent : owner();
+  const response = await author.post(`${base()}/check-ins`).send({ checkIn: READING });
+  if (response.status !== 201) throw new Error(`check-in: ${response.status} ${response.text}`);
+  return response.body as { id: string; version: number };
+}
+
 const ROWS: Row[] = [
   { name: 'GET trip', prepare: async () => ({ method: 'get', path: base() }), expected: needs('read') },
   { name: 'GET budget', prepare: async () => ({ method: 'get', path: `${base()}/budget` }), expected: needs('read') },
@@ -200,6 +213,50 @@ const ROWS: Row[] = [
     prepare: async () => {
       const item = await addAppliance(owner(), world.tripId);
       return { method: 'delete', path: `${base()}/appliances/${item.id}` };
+    },
+    expected: needs('loads', 204),
+  },
+  {
+    name: 'POST stop stay',
+    prepare: async () => {
+      const detail = await getDetail(owner(), world.tripId);
+      const last = detail.stops[detail.stops.length - 1];
+      if (!last) throw new Error('no stop');
+      return {
+        method: 'post',
+        path: `${base()}/stops/${last.id}/stay`,
+        body: { tripVersion: detail.trip.version, nights: 1, mode: 'shift-rest' },
+      };
+    },
+    expected: needs('trip'),
+  },
+  {
+    name: 'GET check-ins',
+    prepare: async () => ({ method: 'get', path: `${base()}/check-ins` }),
+    expected: needs('read'),
+  },
+  {
+    name: 'POST check-in',
+    prepare: async () => ({ method: 'post', path: `${base()}/check-ins`, body: { checkIn: READING } }),
+    expected: needs('loads', 201),
+  },
+  {
+    name: 'PATCH own check-in',
+    prepare: async (w, actor) => {
+      const { id, version } = await readingBy(w, actor);
+      return {
+        method: 'patch',
+        path: `${base()}/check-ins/${id}`,
+        body: { version, checkIn: { ...READING, socPct: 61 } },
+      };
+    },
+    expected: needs('loads'),
+  },
+  {
+    name: 'DELETE own check-in',
+    prepare: async (w, actor) => {
+      const { id } = await readingBy(w, actor);
+      return { method: 'delete', path: `${base()}/check-ins/${id}` };
     },
     expected: needs('loads', 204),
   },

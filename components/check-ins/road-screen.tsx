@@ -1,0 +1,57 @@
+import { StyleSheet, View } from 'react-native';
+import { EstimateCaution } from '@/components/budget/estimate-caution';
+import { Panes, TabScroll } from '@/components/trip/tab-scroll';
+import { space } from '@/components/theme/tokens';
+import { Caution } from '@/components/ui/cautions';
+import { QueryError } from '@/components/ui/query-error';
+import { Skeleton } from '@/components/ui/skeleton';
+import type { TripDetail } from '@/shared/schemas/api';
+import { can } from '@/shared/schemas/roles';
+import { useSession } from '@/stores/auth-client';
+import { useBudgetQuery } from '@/stores/queries/budget';
+import { useCheckInsQuery } from '@/stores/queries/check-ins';
+import { CheckInForm } from './check-in-form';
+import { CheckInList } from './check-in-list';
+import { ReforecastCard } from './reforecast-card';
+import { StayControl } from './stay-control';
+import { reforecastFor } from './use-reforecast';
+
+/** The trip on the road: check in, see the forecast from the latest reading, and every reading so far. */
+export function RoadScreen({ detail }: { detail: TripDetail }) {
+  const tripId = detail.trip.id;
+  const me = useSession().data?.user.id;
+  const checkIns = useCheckInsQuery(tripId);
+  const budget = useBudgetQuery(tripId);
+  const canAdd = can(detail.trip.role, 'editLoads');
+  const tanks = detail.rig.rig.propaneTanks;
+
+  if (checkIns.isPending) return <Skeleton testID="road-loading" height={200} />;
+  if (checkIns.isError)
+    return <QueryError testID="road-error" error={checkIns.error} onRetry={() => void checkIns.refetch()} />;
+  const plan = budget.data?.result;
+  return (
+    <TabScroll testID="road-screen">
+      <Panes
+        main={
+          <View style={styles.column}>
+            {plan ? (
+              <ReforecastCard plan={plan} state={reforecastFor(detail, checkIns.data)} checkIns={checkIns.data} />
+            ) : null}
+            {canAdd ? <CheckInForm key={tripId} tripId={tripId} tanks={tanks} /> : null}
+            <StayControl detail={detail} checkIns={checkIns.data} />
+          </View>
+        }
+        side={
+          <View style={styles.column}>
+            <CheckInList tripId={tripId} checkIns={checkIns.data} tanks={tanks} me={me} canAdd={canAdd} />
+            <Caution kind="generator" />
+            {tanks.length > 0 ? <Caution kind="propane" /> : null}
+          </View>
+        }
+      />
+      <EstimateCaution />
+    </TabScroll>
+  );
+}
+
+const styles = StyleSheet.create({ column: { gap: space.xl } });

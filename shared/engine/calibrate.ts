@@ -1,0 +1,162 @@
+// "Use what we saw": fit one stop's sky openness and a scale on every load to check-ins by least squares
+// (Levenberg–Marquardt on two parameters, Jacobian by finite differences; Marquardt 1963). The residuals are the
+// charge the walk predicts at each later reading, started from the first reading, against the charge read, and the
+// day's harvest the walk predicts against the charge controller's history (in % of the bank, so both weigh alike).
+// The fit only proposes: callers show it as a before/after and apply it when the traveller accepts.
+import type { EngineInput } from '../schemas/engine-input';
+import type { SiteExposure } from '../schemas/trip';
+import type { Reading } from './reforecast';
+import { capacityWhOf, simulateParsed } from './simulate';
+
+export type CalibrationReading = Reading & { harvestWh: number | null };
+
+export type CalibrationFit = { opennessPct: number; loadScale: number; rmsPct: number };
+export type Calibration = {
+  stopIndex: number;
+  before: CalibrationFit;
+  after: CalibrationFit;
+  /** The plan with the fitted openness and load scale, ready to simulate or save. */
+  input: EngineInput;
+};
+
+const OPENNESS_RANGE = [0, 100] as const;
+const LOAD_SCALE_RANGE = [0.2, 5] as const;
+const MAX_STEPS = 40;
+const DAY_MS = 86_400_000;
+
+/** The plan with one stop's sky openness and every appliance's draw scaled: the two things a fit may change. */
+export function withCalibration(
+  input: EngineInput,
+  stopIndex: number,
+  opennessPct: number,
+  loadScale: number,
+): EngineInput {
+  const stops = input.trip.stops.map((stop, i) => {
+    if (i !== stopIndex) return stop;
+    const leafAreaIndex = stop.exposure.kind === 'canopy' ? stop.exposure.leafAreaIndex : 3;
+    const deciduous = stop.exposure.kind === 'canopy' ? stop.exposure.deciduous : false;
+    const exposure: SiteExposure = { kind: 'canopy', skyOpennessPct: opennessPct, leafAreaIndex, deciduous };
+    return { ...stop, exposure };
+  });
+  const appliances = input.appliances.map((a) => ({
+    ...a,
+    runningW: a.runningW * loadScale,
+    standbyW: a.standbyW * loadScale,
+  }));
+  return { ...input, trip: { ...input.trip, stops }, appliances };
+}
+
+/** Residuals of a plan against the readings (all in % of the bank), walked from the first reading. */
+export function residuals(input: EngineInput, readings: readonly CalibrationReading[]): number[] {
+  const [first, ...rest] = readings;
+  if (!first) return [];
+  const capacityWh = capacityWhOf(input);
+  const result = simulateParsed({
+    ...input,
+    options: { ...input.options, skyBand: false },
+    startState: { at: first.at, socPct: first.socPct, propaneKg: null },
+  });
+  const stepStart = (iso: string) => result.ledger.findIndex((row) => Date.parse(row.utc) >= Date.parse(iso));
+  const out: number[] = [];
+  for (const r of rest) {
+    const i = stepStart(r.at);
+    // The charge at a step's start is the one the step before ended with.
+    const predicted = i > 0 ? result.ledger[i - 1]?.socPct : undefined;
+    if (predicted !== undefined) out.push(predicted - r.socPct);
+  }
+  for (const r of readings) {
+    if (r.harvestWh === null) continue;
+    const i = stepStart(r.at);
+    const row = result.ledger[i];
+    if (!row) continue;
+    // Yesterday in the place's own calendar.
+    const yesterday = new Date(Date.parse(`${row.local.slice(0, 10)}T00:00Z`) - DAY_MS).toISOString().slice(0, 10);
+    const day = result.days.find((d) => d.date === yesterday);
+    // A day before the first reading was walked from the plan's own start, not from what was seen: leave it out.
+    if (day && Date.parse(`${yesterday}T00:00Z`) >= Date.parse(first.at) - DAY_MS)
+      out.push(((day.harvestWh - r.harvestWh) / capacityWh) * 100);
+  }
+  return out;
+}
+
+const rms = (r: readonly number[]) => (r.length > 0 ? Math.sqrt(r.reduce((s, v) => s + v * v, 0) / r.length) : 0);
+const clamp = (v: number, [lo, hi]: readonly [number, number]) => Math.min(hi, Math.max(lo, v));
+
+/** The openness a stop's exposure stands for now (a preset or a custom horizon counts as its sky view). */
+function currentOpenness(input: EngineInput, stopIndex: number, fallback: number): number {
+  const exposure = input.trip.stops[stopIndex]?.exposure;
+  if (exposure?.kind === 'canopy') return exposure.skyOpennessPct;
+  if (exposure?.kind === 'custom' && exposure.skyViewFraction !== undefined) return exposure.skyViewFraction * 100;
+  return fallback;
+}
+
+/**
+ * Fit the stop's openness and the load scale to the readings. `startOpennessPct` seeds the fit for a stop whose
+ * exposure is a preset or a horizon. Undefined when there are too few readings to fit two numbers.
+ */
+export function calibrate(
+  input: EngineInput,
+  stopIndex: number,
+  readings: readonly CalibrationReading[],
+  startOpennessPct = 50,
+): Calibration | undefined {
+  const sorted = [...readings].sort((a, b) => Date.parse(a.at) - Date.parse(b.at));
+  const at = (p: readonly [number, number]) => residuals(withCalibration(input, stopIndex, p[0], p[1]), sorted);
+  let p: [number, number] = [currentOpenness(input, stopIndex, startOpennessPct), 1];
+  let r = at(p);
+  if (r.length < 2) return undefined;
+  const before: CalibrationFit = { opennessPct: p[0], loadScale: p[1], rmsPct: rms(residuals(input, sorted)) };
+  let lambda = 1e-2;
+  const steps: readonly [number, number] = [0.5, 0.005];
+  for (let step = 0; step < MAX_STEPS; step++) {
+    // Jacobian columns by forward differences.
+    const cols = steps.map((h, k) => {
+      const q: [number, number] = [...p];
+      q[k] = (q[k] ?? 0) + h;
+      return at(q).map((v, i) => (v - (r[i] ?? 0)) / h);
+    });
+    const [a, b] = cols;
+    if (!a || !b) break;
+    let jaa = 0;
+    let jab = 0;
+    let jbb = 0;
+    let ga = 0;
+    let gb = 0;
+    for (let i = 0; i < r.length; i++) {
+      const ai = a[i] ?? 0;
+      const bi = b[i] ?? 0;
+      const ri = r[i] ?? 0;
+      jaa += ai * ai;
+      jab += ai * bi;
+      jbb += bi * bi;
+      ga += ai * ri;
+      gb += bi * ri;
+    }
+    let improved = false;
+    for (let tries = 0; tries < 8 && !improved; tries++) {
+      const m11 = jaa * (1 + lambda);
+      const m22 = jbb * (1 + lambda);
+      const det = m11 * m22 - jab * jab;
+      if (det === 0) break;
+      const da = -(m22 * ga - jab * gb) / det;
+      const db = -(m11 * gb - jab * ga) / det;
+      const q: [number, number] = [clamp(p[0] + da, OPENNESS_RANGE), clamp(p[1] + db, LOAD_SCALE_RANGE)];
+      const rq = at(q);
+      if (rms(rq) < rms(r)) {
+        const moved = Math.abs(q[0] - p[0]) + Math.abs(q[1] - p[1]) * 100;
+        p = q;
+        r = rq;
+        lambda = Math.max(1e-6, lambda / 3);
+        improved = true;
+        if (moved < 1e-4) step = MAX_STEPS;
+      } else lambda *= 4;
+    }
+    if (!improved) break;
+  }
+  return {
+    stopIndex,
+    before,
+    after: { opennessPct: p[0], loadScale: p[1], rmsPct: rms(r) },
+    input: withCalibration(input, stopIndex, p[0], p[1]),
+  };
+}

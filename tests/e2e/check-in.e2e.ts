@@ -1,0 +1,89 @@
+// Checking in on the road, at phone width and at laptop width: the reading is saved, listed with who took it, and the
+// forecast from it heads both the Check in tab and the Budget tab; a viewer sees the readings but no form.
+import type { Page } from 'playwright-core';
+import { describe, expect, it } from 'vitest';
+import { DEMO_ACCOUNT, DEMO_VIEWER } from '@/db/seed';
+import {
+  byTestId,
+  openTrip,
+  screenshotTall,
+  seriousA11yViolations,
+  signIn,
+  trackPageErrors,
+  useServerAndBrowser,
+  VIEWPORTS,
+} from './harness';
+import { horizontalOverflow, overlappingText } from './layout-probes';
+
+const suite = useServerAndBrowser();
+const HEADLINE = /^From your check-in Tue 18:00 at 68 %: lowest ahead \d+ % on [A-Z][a-z]{2} \d{2}:\d{2}$/;
+
+async function openCheckIn(page: Page): Promise<void> {
+  await openTrip(page, 'Highland loop');
+  await page.click(byTestId('tab-check-in'));
+  await page.waitForSelector(byTestId('road-screen'));
+}
+
+async function expectTidy(page: Page, name: string): Promise<void> {
+  expect(await horizontalOverflow(page)).toEqual([]);
+  expect(await overlappingText(page)).toEqual([]);
+  expect(await seriousA11yViolations(page)).toEqual([]);
+  await screenshotTall(page, name);
+}
+
+describe('check-ins', () => {
+  it('when a planner checks in on a phone, then the reading is listed with its author and the forecast starts from it on both tabs', async () => {
+    const context = await suite.browser.newContext({ viewport: VIEWPORTS.phone, timezoneId: 'Europe/London' });
+    const page = await context.newPage();
+    const errors = trackPageErrors(page);
+    await signIn(page, suite.server.url, DEMO_ACCOUNT.email, DEMO_ACCOUNT.password);
+    await openCheckIn(page);
+    await page.waitForSelector(byTestId('check-in-list-empty'));
+
+    // A message beside the field when the charge is missing.
+    await page.click(byTestId('check-in-save'));
+    await page.waitForSelector('text=Enter the state of charge the battery monitor shows.');
+
+    await page.fill(byTestId('check-in-soc'), '68');
+    await page.fill(byTestId('check-in-time'), '2027-09-14 18:00');
+    await page.click(byTestId('check-in-cylinder-0-part'));
+    await page.fill(byTestId('check-in-cylinder-0-amount'), '40');
+    await page.fill(byTestId('check-in-note'), 'Fan ran all night');
+    await page.click(byTestId('check-in-save'));
+    await page.waitForSelector(byTestId('check-in-saved'));
+    await page.waitForSelector(byTestId('reforecast-headline'));
+    expect((await page.textContent(byTestId('reforecast-headline')))?.trim()).toMatch(HEADLINE);
+    const list = (await page.textContent(byTestId('check-in-list'))) ?? '';
+    expect(list).toContain('Tue 14 Sep, 18:00 · 68 %');
+    expect(list).toContain(DEMO_ACCOUNT.name);
+    expect(list).toContain('Fan ran all night');
+    await expectTidy(page, 'check-in-phone');
+
+    await page.click(byTestId('tab-budget'));
+    await page.waitForSelector(byTestId('budget-screen'));
+    await page.waitForSelector(byTestId('reforecast-headline'));
+    expect((await page.textContent(byTestId('reforecast-headline')))?.trim()).toMatch(HEADLINE);
+    expect(errors).toEqual([]);
+    await context.close();
+  });
+
+  it('when the trip is opened at laptop width, then the check-in tab lays out in two panes without overflow', async () => {
+    const context = await suite.browser.newContext({ viewport: VIEWPORTS.desktop, timezoneId: 'Europe/London' });
+    const page = await context.newPage();
+    await signIn(page, suite.server.url, DEMO_ACCOUNT.email, DEMO_ACCOUNT.password);
+    await openCheckIn(page);
+    await page.waitForSelector(byTestId('check-in-form'));
+    await expectTidy(page, 'check-in-desktop');
+    await context.close();
+  });
+
+  it('when a viewer opens the check-in tab, then the readings are listed and there is no form', async () => {
+    const context = await suite.browser.newContext({ viewport: VIEWPORTS.phone, timezoneId: 'Europe/London' });
+    const page = await context.newPage();
+    await signIn(page, suite.server.url, DEMO_VIEWER.email, DEMO_VIEWER.password);
+    await openCheckIn(page);
+    await page.waitForSelector(byTestId('check-in-list'));
+    expect(await page.locator(byTestId('check-in-form')).count()).toBe(0);
+    await context.close();
+  });
+});
