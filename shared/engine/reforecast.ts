@@ -55,6 +55,14 @@ export function reforecastFrom(input: EngineInput, reading: Reading): Reforecast
     from,
     index,
     fromLocal: row.local,
-    result: { ...result, flags: result.flags.filter((flag) => Date.parse(flag.atUtc) >= Date.parse(row.utc)) },
+    result: {
+      ...result,
+      flags: result.flags.filter((flag) => Date.parse(flag.atUtc) >= Date.parse(row.utc)),
+      // The energy still to come short is counted from the reading on: what fell short before it is behind them.
+      headline: {
+        ...result.headline,
+        energyShortWh: result.ledger.slice(index).reduce((sum, hour) => sum + hour.energyShortWh, 0),
+      },
+    },
   };
 }
