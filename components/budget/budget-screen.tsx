@@ -109,9 +109,9 @@ export function BudgetScreen({ detail }: { detail: TripDetail }) {
                   : 'Fixes can be applied once the what-ifs are kept or discarded.'
               }
               busyKey={busy}
-              onApply={(key, flag, i) => {
+              onApply={(key, flag, i, choice) => {
                 const fix = flag.fixes[i];
-                const edit = fix ? editForFix(detail, fix, result.days) : null;
+                const edit = fix ? editForFix(detail, fix, result.days, choice) : null;
                 if (edit) void apply(key, [edit], detail.rig.version);
               }}
             />

@@ -1,3 +1,4 @@
+import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { colors, radii, space } from '@/components/theme/tokens';
 import { Button } from '@/components/ui/button';
@@ -9,7 +10,9 @@ import { momentText } from '@/shared/engine/flag-text';
 import { hasMoment } from '@/shared/engine/flags';
 import { flagTitle } from '@/shared/flag-titles';
 import type { TripDetail } from '@/shared/schemas/api';
-import { editForFix } from './apply-fix';
+import type { HookupSupply } from '@/shared/hookup-supply';
+import { editForFix, type FixChoice } from './apply-fix';
+import { HookupSupplyChoice } from './hookup-supply-choice';
 
 type Props = {
   flags: Flag[];
@@ -18,7 +21,7 @@ type Props = {
   canEdit: boolean;
   readOnlyReason?: string;
   busyKey: string | null;
-  onApply: (key: string, flag: Flag, fixIndex: number) => void;
+  onApply: (key: string, flag: Flag, fixIndex: number, choice: FixChoice) => void;
 };
 
 export function FlagList({ flags, days, detail, canEdit, readOnlyReason, busyKey, onApply }: Props) {
@@ -26,6 +29,8 @@ export function FlagList({ flags, days, detail, canEdit, readOnlyReason, busyKey
     f.where.kind === 'stop'
       ? (detail.stops[f.where.stopIndex]?.stop.name ?? `stop ${f.where.stopIndex + 1}`)
       : `drive ${f.where.driveIndex + 1}`;
+  // A hookup fix's supply picked by the traveller, by fix key; absent means the one the engine offered.
+  const [supplies, setSupplies] = useState<Record<string, HookupSupply>>({});
   const hasGeneratorFix = flags.some((f) => f.fixes.some((x) => x.kind === 'add-generator-hours'));
   return (
     <Card testID="flag-list">
@@ -63,22 +68,34 @@ export function FlagList({ flags, days, detail, canEdit, readOnlyReason, busyKey
           </Text>
           <Text>{flag.cause}</Text>
           {flag.fixes.map((fix, i) => {
-            const edit = canEdit ? editForFix(detail, fix, days) : null;
             const key = `${flag.id}-${i}`;
+            const supply = supplies[key];
+            const choice: FixChoice = supply ? { supply } : {};
+            const edit = canEdit ? editForFix(detail, fix, days, choice) : null;
             return (
               <View key={key} style={styles.fix}>
                 <Text variant="caption" style={styles.fixText}>
                   Fix: {fix.text}
                 </Text>
+                {edit && fix.kind === 'add-hookup-night' ? (
+                  <HookupSupplyChoice
+                    detail={detail}
+                    flag={flag}
+                    fix={fix}
+                    testID={`fix-supply-${flag.id}-${i}`}
+                    value={supply ?? null}
+                    onChange={(s) => setSupplies(({ [key]: _dropped, ...rest }) => (s ? { ...rest, [key]: s } : rest))}
+                  />
+                ) : null}
                 {edit ? (
                   <Button
                     testID={`fix-${flag.id}-${i}`}
                     tone="secondary"
                     label="Apply"
-                    accessibilityLabel={`Apply fix: ${fix.text}`}
+                    accessibilityLabel={`Apply fix: ${edit.summary}`}
                     busy={busyKey === key}
                     disabled={busyKey !== null}
-                    onPress={() => onApply(key, flag, i)}
+                    onPress={() => onApply(key, flag, i, choice)}
                   />
                 ) : null}
               </View>
