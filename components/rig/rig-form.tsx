@@ -30,6 +30,7 @@ import {
   INVERTER_MODE_NOTE,
   newSolarArray,
   percentOfFraction,
+  roofArea,
 } from './rig-form-values';
 import { SolarArrayFields } from './solar-array-fields';
 
@@ -283,6 +284,18 @@ export function RigForm({ save, record, canEdit, dcLoads = [] }: RigFormProps) {
       </Section>
 
       <Section title="Solar" testID="rig-solar">
+        <Num
+          control={control}
+          disabled={off}
+          optional
+          name="cabin.roofAreaM2"
+          label="Roof area"
+          shown={roofArea(units)}
+          range={[1, 60]}
+          hint="the whole roof, outside; left empty, the body's length × width. More-solar fixes count about 60 % of it as room for panels, less the panels already up there"
+
+          testID="rig-roof-area"
+        />
         {arrays.fields.map((f, i) => (
           <SolarArrayFields
             key={f.id}

@@ -55,6 +55,28 @@ export function SolarArrayFields({ control, setValue, index: i, units, disabled,
       </View>
       <Controller
         control={control}
+        name={`solarArrays.${i}.portable`}
+        render={({ field }) => (
+          <ChoiceChips
+            testID={`rig-array-${i}-portable`}
+            label={`Where array ${n} sits`}
+            disabled={disabled}
+            value={field.value ? 'portable' : 'roof'}
+            onChange={(v) => field.onChange(v === 'portable')}
+            options={[
+              { value: 'roof', label: 'On the roof' },
+              { value: 'portable', label: 'Portable, set out on the ground' },
+            ]}
+          />
+        )}
+      />
+      {array?.portable ? (
+        <Text variant="caption" color="inkSoft">
+          A portable array takes no roof room, so it leaves the roof free for more panels.
+        </Text>
+      ) : null}
+      <Controller
+        control={control}
         name={`solarArrays.${i}.mounting`}
         render={({ field }) => (
           <ChoiceChips
@@ -67,7 +89,7 @@ export function SolarArrayFields({ control, setValue, index: i, units, disabled,
                 setValue(`solarArrays.${i}`, withMounting(array, m), { shouldDirty: true, shouldValidate: true });
             }}
             options={[
-              { value: 'flat', label: 'Flat on the roof' },
+              { value: 'flat', label: array?.portable ? 'Flat on the ground' : 'Flat on the roof' },
               { value: 'tilted', label: 'Tilted' },
             ]}
           />
