@@ -19,6 +19,7 @@ import { HeadlineFigures } from './headline-figures';
 import { PlanChance } from './plan-chance';
 import { SocChartCard } from './soc-chart-card';
 import { useBudgetView } from './use-budget-view';
+import { UndoLastFix } from './undo-last-fix';
 import { WhatItWouldTake } from './what-it-would-take';
 import { editsForWhatIf, WhatIfPanel } from './what-if-panel';
 import { BudgetRouteMap } from '@/components/route/route-mini-map';
@@ -29,7 +30,7 @@ export function BudgetScreen({ detail }: { detail: TripDetail }) {
   // Watches the stops' weather records: the budget is fetched again as they arrive.
   useTripWeatherQuery(detail.trip.id);
   const view = useBudgetView(detail);
-  const { apply, busy } = useApplyEdit(detail);
+  const { apply, busy, undoLast, lastFix, undoCount } = useApplyEdit(detail);
   const canEdit = can(detail.trip.role, 'editTrip');
   const scrollKey = `budget-${detail.trip.id}`;
 
@@ -98,6 +99,9 @@ export function BudgetScreen({ detail }: { detail: TripDetail }) {
             <BudgetRouteMap detail={detail} result={result} />
             {whatIf}
             {view.whatIf ? null : <WhatItWouldTake detail={detail} />}
+            {lastFix ? (
+              <UndoLastFix summary={lastFix.summary} count={undoCount} busy={busy} onUndo={() => void undoLast()} />
+            ) : null}
             <FlagList
               flags={result.flags}
               days={result.days}

@@ -82,7 +82,7 @@ export function FlagList({ flags, days, detail, canEdit, readOnlyReason, busyKey
                     detail={detail}
                     flag={flag}
                     fix={fix}
-                    testID={`fix-supply-${flag.id}-${i}`}
+                    testID={`hookup-supply-${flag.id}-${i}`}
                     value={supply ?? null}
                     onChange={(s) => setSupplies(({ [key]: _dropped, ...rest }) => (s ? { ...rest, [key]: s } : rest))}
                   />
