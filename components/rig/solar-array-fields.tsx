@@ -1,6 +1,7 @@
 import { Controller, useWatch, type UseFormSetValue } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 import { colors, space } from '@/components/theme/tokens';
+import { FieldSlot } from '@/components/forms/field-slot';
 import { Button } from '@/components/ui/button';
 import { ChoiceChips } from '@/components/ui/choice-chips';
 import { Text } from '@/components/ui/text';
@@ -31,7 +32,7 @@ export function SolarArrayFields({ control, setValue, index: i, units, disabled,
           control={control}
           name={`solarArrays.${i}.name`}
           render={({ field, fieldState }) => (
-            <View style={styles.cell}>
+            <FieldSlot fieldRef={field.ref} style={styles.cell}>
               <TextField
                 testID={`rig-array-${i}-name`}
                 label={`Array ${n} name`}
@@ -39,9 +40,15 @@ export function SolarArrayFields({ control, setValue, index: i, units, disabled,
                 value={field.value ?? ''}
                 onChangeText={field.onChange}
                 onBlur={field.onBlur}
-                error={fieldState.error ? 'Give the array a name (up to 80 letters).' : undefined}
+                error={
+                  fieldState.error?.type === 'server'
+                    ? fieldState.error.message
+                    : fieldState.error
+                      ? 'Give the array a name (up to 80 letters).'
+                      : undefined
+                }
               />
-            </View>
+            </FieldSlot>
           )}
         />
         <Num
