@@ -73,10 +73,24 @@ export function FlagList({ flags, days, detail, canEdit, readOnlyReason, busyKey
             const choice: FixChoice = supply ? { supply } : {};
             const edit = canEdit ? editForFix(detail, fix, days, choice) : null;
             return (
-              <View key={key} style={styles.fix}>
-                <Text variant="caption" style={styles.fixText}>
-                  Fix: {fix.text}
-                </Text>
+              <View key={key} style={styles.fixBlock}>
+                <View style={styles.fix}>
+                  <Text variant="caption" style={styles.fixText}>
+                    Fix: {fix.text}
+                  </Text>
+                  {edit ? (
+                    <Button
+                      testID={`fix-${flag.id}-${i}`}
+                      tone="secondary"
+                      label="Apply"
+                      accessibilityLabel={`Apply fix: ${edit.summary}`}
+                      busy={busyKey === key}
+                      disabled={busyKey !== null}
+                      onPress={() => onApply(key, flag, i, choice)}
+                    />
+                  ) : null}
+                </View>
+                {/* Under its fix, so the Apply beside the fix's words books the supply picked here. */}
                 {edit && fix.kind === 'add-hookup-night' ? (
                   <HookupSupplyChoice
                     detail={detail}
@@ -85,17 +99,6 @@ export function FlagList({ flags, days, detail, canEdit, readOnlyReason, busyKey
                     testID={`hookup-supply-${flag.id}-${i}`}
                     value={supply ?? null}
                     onChange={(s) => setSupplies(({ [key]: _dropped, ...rest }) => (s ? { ...rest, [key]: s } : rest))}
-                  />
-                ) : null}
-                {edit ? (
-                  <Button
-                    testID={`fix-${flag.id}-${i}`}
-                    tone="secondary"
-                    label="Apply"
-                    accessibilityLabel={`Apply fix: ${edit.summary}`}
-                    busy={busyKey === key}
-                    disabled={busyKey !== null}
-                    onPress={() => onApply(key, flag, i, choice)}
                   />
                 ) : null}
               </View>
@@ -118,6 +121,7 @@ const styles = StyleSheet.create({
   danger: { borderLeftColor: colors.ember },
   warning: { borderLeftColor: colors.sunlit },
   info: { borderLeftColor: colors.lake },
+  fixBlock: { gap: space.xs },
   fix: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.sm, justifyContent: 'space-between' },
   fixText: { flex: 1, minWidth: 160 },
   titleRow: { flexDirection: 'row', alignItems: 'center', gap: space.sm },

@@ -79,7 +79,8 @@ export function HookupSupplyChoice({ detail, flag, fix, testID, value, onChange 
         <Button
           testID={`${testID}-open`}
           tone="quiet"
-          label="Pick another supply"
+          style={styles.open}
+          label="▸ Pick another supply"
           accessibilityLabel={`Pick another hookup supply at ${stop.stop.name}`}
           aria-expanded={false}
           onPress={() => setOpen(true)}
@@ -94,4 +95,8 @@ export function HookupSupplyChoice({ detail, flag, fix, testID, value, onChange 
   );
 }
 
-const styles = StyleSheet.create({ wrap: { gap: space.xs, width: '100%' } });
+const styles = StyleSheet.create({
+  wrap: { gap: space.xs },
+  // Starts under the fix's words, like the fix's other text, not centred across the card.
+  open: { alignSelf: 'flex-start', paddingHorizontal: 0, minHeight: 44 },
+});
