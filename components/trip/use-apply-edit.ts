@@ -7,7 +7,7 @@ import { useScheduleSaveMutation } from '@/stores/queries/appliances';
 import { useStopSaveMutation } from '@/stores/queries/route';
 import { useTripRigSaveMutation } from '@/stores/queries/rigs';
 import { invalidateTrip, useUndoFixMutation } from '@/stores/queries/trips';
-import { showToast } from '@/stores/toast-store';
+import { dismissToast, showToast } from '@/stores/toast-store';
 import { dropUndo, latestUndo, pushUndo, useUndoStack } from '@/stores/undo-store';
 
 function failureMessage(error: unknown, what: string): string {
@@ -15,6 +15,9 @@ function failureMessage(error: unknown, what: string): string {
     return 'Someone else changed this trip since you opened it. The screen now shows their version; check it and try again.';
   return error instanceof ApiError ? error.message : `That ${what} could not be saved.`;
 }
+
+// The toast of the latest fix: one Undo on screen at a time, so an older toast's Undo never takes back a newer fix.
+let undoToast: number | null = null;
 
 /** The request that puts a record back as it stood before an edit, once the edit's new version is known. */
 export function undoFor(edit: FixEdit, detail: TripDetail, newVersion: number): UndoFixRequest {
@@ -100,7 +103,12 @@ export function useApplyEdit(detail: TripDetail) {
       const summary = edits.map((e) => e.summary).join(', ');
       const only = edits.length === 1 ? edits[0] : undefined;
       if (only) pushUndo(tripId, undoFor(only, detail, versions[0] ?? 0), summary);
-      showToast(`Saved: ${summary}`, only ? { action: { label: 'Undo', run: () => void undoLast() } } : {});
+      if (only && undoToast !== null) dismissToast(undoToast);
+      const toast = showToast(
+        `Saved: ${summary}`,
+        only ? { action: { label: 'Undo', run: () => void undoLast() } } : {},
+      );
+      if (only) undoToast = toast;
       return true;
     } catch (error) {
       showToast(failureMessage(error, 'change'), { tone: 'danger' });
