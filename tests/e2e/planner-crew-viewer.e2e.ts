@@ -161,13 +161,17 @@ describe('a trip leader at 1440 px', () => {
       await expect.poll(records, { timeout: 15_000 }).not.toBe(afterOne);
       await expect.poll(() => page.textContent(byTestId('undo-last-fix-text'))).toContain('2 fixes can be undone');
       await screenshot(page, `leader-budget-two-fixes-${width}`);
-      // Where the flags stand on screen: the undo redraws the budget under the reader, not from the top.
-      const flagsTop = async () => (await page.locator(byTestId('flag-list')).boundingBox())?.y ?? Number.NaN;
-      const flagsTopBefore = await flagsTop();
+      // What the reader was looking at stays where it was: the undo redraws the budget under them (a flag put back
+      // above it pushes nothing out of view), and the screen does not start again from the top.
+      const seen = await page.evaluateHandle(() =>
+        document.elementFromPoint(window.innerWidth / 2, window.innerHeight / 3),
+      );
+      const seenTop = () => seen.evaluate((el) => (el?.isConnected ? el.getBoundingClientRect().top : Number.NaN));
+      const seenTopBefore = await seenTop();
       await page.click(byTestId('toast-action'));
       await expect.poll(records, { timeout: 15_000 }).toBe(afterOne);
       await expect.poll(() => page.textContent(byTestId('undo-last-fix-text'))).not.toContain('fixes can be undone');
-      expect(Math.abs((await flagsTop()) - flagsTopBefore)).toBeLessThan(60);
+      expect(Math.abs((await seenTop()) - seenTopBefore)).toBeLessThan(60);
       await page.click(byTestId('undo-last-fix-button'));
       await expect.poll(records, { timeout: 15_000 }).toBe(asItWas);
       await page.waitForSelector(byTestId('undo-last-fix'), { state: 'detached', timeout: 15_000 });
