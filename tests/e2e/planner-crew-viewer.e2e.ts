@@ -163,8 +163,12 @@ describe('a trip leader at 1440 px', () => {
       await screenshot(page, `leader-budget-two-fixes-${width}`);
       // What the reader was looking at stays where it was: the undo redraws the budget under them (a flag put back
       // above it pushes nothing out of view), and the screen does not start again from the top.
+      // A small marked element fully in view inside the budget (a container would move with what is put back).
       const seen = await page.evaluateHandle(() =>
-        document.elementFromPoint(window.innerWidth / 2, window.innerHeight / 3),
+        [...document.querySelectorAll('[data-testid="budget-screen"] [data-testid]')].find((el) => {
+          const r = el.getBoundingClientRect();
+          return r.top > 120 && r.bottom < window.innerHeight / 2 && r.height > 0 && r.height < 150;
+        }),
       );
       const seenTop = () => seen.evaluate((el) => (el?.isConnected ? el.getBoundingClientRect().top : Number.NaN));
       const seenTopBefore = await seenTop();
