@@ -54,6 +54,10 @@ export default function RootLayout() {
       client={queryClient}
       // A new release starts from a fresh copy: its screens may read the data differently.
       persistOptions={{ persister: queryPersister, maxAge: STALE.DAYS.SEVEN, buster: packageJson.version }}
+      // The device's copy may predate a save made just before a reload (writes to it are throttled) or on another
+      // device: it fills the screen at once, and everything restored is then asked for again. With no signal the
+      // requests wait and the copy stays on screen.
+      onSuccess={() => void queryClient.invalidateQueries()}
     >
       {stack}
     </PersistQueryClientProvider>

@@ -185,7 +185,8 @@ describe('a trip leader at 1440 px', () => {
     await page.reload();
     await page.waitForSelector(byTestId('rig-form'));
     await page.click(byTestId('rig-inverter-advanced'));
-    expect(await page.inputValue(byTestId('rig-inverter-idle'))).toBe('6');
+    // The device's copy shows first; the server's answer replaces it a moment later.
+    await expect.poll(() => page.inputValue(byTestId('rig-inverter-idle'))).toBe('6');
     expect(await page.getAttribute(byTestId('rig-inverter-mode-on-demand'), 'aria-checked')).toBe('true');
 
     // Dublin keeps the same clock as London in October, so the stop's times stay valid in the new zone.
