@@ -38,6 +38,8 @@ const EXPOSURE: Record<string, string> = {
 const ESTIMATE =
   'A plan is an estimate: weather, smoke, canopy and appliance behaviour vary. Keep a reserve and a way to leave early — fires and road closures happen.';
 
+/** The first fixes of each flag (the engine ranks them); the rest are a tap away, and the sheet stays on two pages. */
+const SHEET_FIXES_PER_FLAG = 2;
 const when = (iso: string) => DateTime.fromISO(iso, { setZone: true }).toFormat('ccc d LLL HH:mm');
 const pct = (v: number | null) => (v === null ? '—' : `${Math.round(v)} %`);
 
@@ -199,11 +201,16 @@ function Sheet({ detail, budget }: { detail: TripDetail; budget: SimulationResul
                 {i + 1}. {FLAG_TITLE[flag.kind]} — {localMoment(flag.atLocal)}, {where(flag)}
               </Text>
               <Text variant="caption">{flag.cause}</Text>
-              {flag.fixes.map((fix, j) => (
+              {flag.fixes.slice(0, SHEET_FIXES_PER_FLAG).map((fix, j) => (
                 <Text key={j} variant="caption">
                   Fix: {fix.text}
                 </Text>
               ))}
+              {flag.fixes.length > SHEET_FIXES_PER_FLAG ? (
+                <Text variant="caption">
+                  {flag.fixes.length - SHEET_FIXES_PER_FLAG} more on the Budget tab
+                </Text>
+              ) : null}
             </View>
           ))}
         </Section>
