@@ -207,9 +207,7 @@ function Sheet({ detail, budget }: { detail: TripDetail; budget: SimulationResul
                 </Text>
               ))}
               {flag.fixes.length > SHEET_FIXES_PER_FLAG ? (
-                <Text variant="caption">
-                  {flag.fixes.length - SHEET_FIXES_PER_FLAG} more on the Budget tab
-                </Text>
+                <Text variant="caption">{flag.fixes.length - SHEET_FIXES_PER_FLAG} more on the Budget tab</Text>
               ) : null}
             </View>
           ))}
