@@ -4,6 +4,12 @@
 import type { LedgerRow, SimulationResult } from './engine/result-types';
 import { whereColumns, type WhereColumns } from './ledger-columns';
 
+/**
+ * The budget's wire format: in its ETags and the key of the app's saved query cache, so neither a browser's HTTP
+ * cache nor a device's saved copy hands an answer of an older shape (rows inside the budget) to screens reading this one.
+ */
+export const BUDGET_FORMAT = 2;
+
 /** Each ledger hour's start (UTC and local, as the ledger gives them), state of charge and place. */
 export type SocTrack = { utc: string[]; local: string[]; socPct: number[] } & WhereColumns;
 

@@ -22,6 +22,7 @@ import { tripExportsRouter } from './trip-exports';
 import type { Mailer } from '../mail/mailer';
 import type { WeatherQueue } from '../weather/weather-queue';
 import { listStopRows } from '@/db/queries/stops';
+import { BUDGET_FORMAT } from '@/shared/budget-result';
 
 /** Everything under /api/trips/:tripId/… once the caller's role is known. */
 export type TripItemsDeps = {
@@ -66,7 +67,7 @@ async function budgetAnswer(
  * differently, so a browser never keeps a budget from an older release.
  */
 function freshOrNotModified(req: Request, res: Response, part: 'budget' | 'ledger', revision: number): boolean {
-  const etag = `"${part}-${packageJson.version}-${revision}"`;
+  const etag = `"${part}-${BUDGET_FORMAT}-${packageJson.version}-${revision}"`;
   res.setHeader('ETag', etag);
   res.setHeader('Cache-Control', 'private, no-cache');
   if (req.headers['if-none-match'] !== etag) return true;
