@@ -12,6 +12,21 @@ import { listen, rawGet } from '../factories/raw-get';
 import { createTestApp, TEST_ORIGIN, TEST_PASSWORD, signUpAgent, type TestContext } from '../factories/test-app';
 import { addAppliance, addStop, createTrip } from '../factories/trip-factory';
 
+/** A listening test app and a trip with a stop and an appliance, with the owner's cookies for raw requests. */
+async function tripWithCookies(ctx: TestContext): Promise<{ server: http.Server; cookie: string; tripId: string }> {
+  const server = await listen(ctx.app);
+  const { agent, email } = await signUpAgent(ctx.app);
+  const { trip } = await createTrip(agent);
+  await addStop(agent, trip.id);
+  await addAppliance(agent, trip.id);
+  const signIn = await request(ctx.app)
+    .post('/api/auth/sign-in/email')
+    .set('Origin', TEST_ORIGIN)
+    .send({ email, password: TEST_PASSWORD });
+  const cookie = (signIn.headers['set-cookie'] as unknown as string[]).map((c) => c.split(';')[0]).join('; ');
+  return { server, cookie, tripId: trip.id };
+}
+
 describe('the budget body', () => {
   let ctx: TestContext;
   let server: http.Server;
@@ -20,18 +35,10 @@ describe('the budget body', () => {
 
   beforeAll(async () => {
     ctx = createTestApp();
-    server = await listen(ctx.app);
-    const { agent, email } = await signUpAgent(ctx.app);
-    const { trip } = await createTrip(agent);
-    await addStop(agent, trip.id);
-    await addAppliance(agent, trip.id);
-    path = `/api/trips/${trip.id}/budget`;
-    const signIn = await request(ctx.app)
-      .post('/api/auth/sign-in/email')
-      .set('Origin', TEST_ORIGIN)
-      .send({ email, password: TEST_PASSWORD });
-    cookie = (signIn.headers['set-cookie'] as unknown as string[]).map((c) => c.split(';')[0]).join('; ');
-    await agent.get(path).expect(200); // computed once, in a worker
+    const made = await tripWithCookies(ctx);
+    ({ server, cookie } = made);
+    path = `/api/trips/${made.tripId}/budget`;
+    await request(ctx.app).get(path).set('Cookie', cookie).expect(200); // computed once, in a worker
   }, 60_000);
   afterAll(async () => {
     await new Promise((resolve) => server.close(resolve));
@@ -106,17 +113,7 @@ describe('the ledger route', () => {
 
   beforeAll(async () => {
     ctx = createTestApp();
-    server = await listen(ctx.app);
-    const { agent, email } = await signUpAgent(ctx.app);
-    const { trip } = await createTrip(agent);
-    tripId = trip.id;
-    await addStop(agent, trip.id);
-    await addAppliance(agent, trip.id);
-    const signIn = await request(ctx.app)
-      .post('/api/auth/sign-in/email')
-      .set('Origin', TEST_ORIGIN)
-      .send({ email, password: TEST_PASSWORD });
-    cookie = (signIn.headers['set-cookie'] as unknown as string[]).map((c) => c.split(';')[0]).join('; ');
+    ({ server, cookie, tripId } = await tripWithCookies(ctx));
   }, 60_000);
   afterAll(async () => {
     await new Promise((resolve) => server.close(resolve));
