@@ -1,5 +1,6 @@
 import { QueryClientProvider } from '@tanstack/react-query';
 import { PersistQueryClientProvider } from '@tanstack/react-query-persist-client';
+import { BUDGET_FORMAT } from '@/shared/budget-result';
 import { Stack } from 'expo-router';
 import { useEffect, useState } from 'react';
 import { LoadingScreen } from '@/components/layout/loading-screen';
@@ -53,7 +54,11 @@ export default function RootLayout() {
     <PersistQueryClientProvider
       client={queryClient}
       // A new release starts from a fresh copy: its screens may read the data differently.
-      persistOptions={{ persister: queryPersister, maxAge: STALE.DAYS.SEVEN, buster: packageJson.version }}
+      persistOptions={{
+        persister: queryPersister,
+        maxAge: STALE.DAYS.SEVEN,
+        buster: `${packageJson.version}-${BUDGET_FORMAT}`,
+      }}
       // The device's copy may predate a save made just before a reload (writes to it are throttled) or on another
       // device: it fills the screen at once, and everything restored is then asked for again. With no signal the
       // requests wait and the copy stays on screen.

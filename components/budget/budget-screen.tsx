@@ -89,7 +89,7 @@ export function BudgetScreen({ detail }: { detail: TripDetail }) {
       <Panes
         main={
           <View style={styles.column}>
-            <SocChartCard result={result} stops={detail.stops} />
+            <SocChartCard result={result} detail={detail} />
             <DayBars days={result.days} />
           </View>
         }

@@ -1,8 +1,10 @@
 import { simulateTrip } from '@/shared/engine';
+import { toBudgetResult, type BudgetResult } from '@/shared/budget-result';
 import type { SimulationResult } from '@/shared/engine/result-types';
 import type { EngineInputDraft } from '@/shared/schemas/engine-input';
 
-export type Simulated = { result: SimulationResult | null; error: string | null };
+/** A run in the browser: the engine's result (with its ledger) and the same as the server's budget body gives it. */
+export type Simulated = { result: SimulationResult | null; budget: BudgetResult | null; error: string | null };
 
 // A few recent runs keyed by their input: re-rendering a screen must not re-run the engine (~50–150 ms).
 const cache = new Map<string, Simulated>();
@@ -14,9 +16,14 @@ export function simulateCached(input: EngineInputDraft): Simulated {
   if (hit) return hit;
   let value: Simulated;
   try {
-    value = { result: simulateTrip(input), error: null };
+    const result = simulateTrip(input);
+    value = { result, budget: toBudgetResult(result), error: null };
   } catch (error) {
-    value = { result: null, error: error instanceof Error ? error.message : 'The plan could not be simulated.' };
+    value = {
+      result: null,
+      budget: null,
+      error: error instanceof Error ? error.message : 'The plan could not be simulated.',
+    };
   }
   cache.set(key, value);
   if (cache.size > KEEP) {

@@ -14,7 +14,7 @@ import { CAUTIONS } from '@/components/ui/cautions';
 import { QueryError } from '@/components/ui/query-error';
 import { Skeleton } from '@/components/ui/skeleton';
 import { Text } from '@/components/ui/text';
-import type { SimulationResult } from '@/shared/engine/result-types';
+import type { BudgetResult } from '@/shared/budget-result';
 import { FLAG_TITLE } from '@/shared/flag-titles';
 import { distanceInUnits } from '@/shared/geo/drive-estimate';
 import { chargeTone, lowestChargeByStop } from '@/shared/route-charge';
@@ -43,8 +43,8 @@ const SHEET_FIXES_PER_FLAG = 2;
 const when = (iso: string) => DateTime.fromISO(iso, { setZone: true }).toFormat('ccc d LLL HH:mm');
 const pct = (v: number | null) => (v === null ? '—' : `${Math.round(v)} %`);
 
-function stopRows(detail: TripDetail, budget: SimulationResult | null, units: UnitSystem): string[][] {
-  const lowest = budget ? lowestChargeByStop(budget.ledger, detail.stops.length) : [];
+function stopRows(detail: TripDetail, budget: BudgetResult | null, units: UnitSystem): string[][] {
+  const lowest = budget ? lowestChargeByStop(budget.soc, detail.stops.length) : [];
   const reserve = budget?.headline.reservePct ?? 0;
   const rows: string[][] = [];
   detail.stops.forEach(({ stop }, i) => {
@@ -82,7 +82,7 @@ function stopRows(detail: TripDetail, budget: SimulationResult | null, units: Un
   return rows;
 }
 
-function dayRows(detail: TripDetail, budget: SimulationResult, units: UnitSystem): string[][] {
+function dayRows(detail: TripDetail, budget: BudgetResult, units: UnitSystem): string[][] {
   return budget.days.map((day) => [
     DateTime.fromISO(day.date).toFormat('ccc d LLL'),
     day.stopIndexes.map((i) => `${i + 1}`).join(', ') + (day.travel ? ' (drive)' : ''),
@@ -95,7 +95,7 @@ function dayRows(detail: TripDetail, budget: SimulationResult, units: UnitSystem
   ]);
 }
 
-function FuelPlan({ budget, units }: { budget: SimulationResult; units: UnitSystem }) {
+function FuelPlan({ budget, units }: { budget: BudgetResult; units: UnitSystem }) {
   const h = budget.headline;
   const fuel = h.generatorFuel;
   return (
@@ -112,9 +112,9 @@ function FuelPlan({ budget, units }: { budget: SimulationResult; units: UnitSyst
   );
 }
 
-function Sheet({ detail, budget }: { detail: TripDetail; budget: SimulationResult | null }) {
+function Sheet({ detail, budget }: { detail: TripDetail; budget: BudgetResult | null }) {
   const units = useUnits();
-  const where = (f: SimulationResult['flags'][number]) =>
+  const where = (f: BudgetResult['flags'][number]) =>
     f.where.kind === 'stop' ? `stop ${f.where.stopIndex + 1}` : `drive ${f.where.driveIndex + 1}`;
   return (
     <View style={styles.sheet} testID="trip-sheet">

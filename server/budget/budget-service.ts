@@ -1,14 +1,16 @@
 import type { Db } from '@/db/client';
 import { findTrip } from '@/db/queries/trips';
 import { BudgetBusyError, BudgetTooLargeError, type BudgetRunner } from './budget-pool';
+import type { BudgetResult } from '@/shared/budget-result';
 import type { SimulationResult } from '@/shared/engine/result-types';
+import { fromLedgerColumns, type LedgerColumns } from '@/shared/ledger-columns';
 import type { BudgetFigures, TripBudget } from './compute';
 import { readyBodySize, type ReadyBody } from './ready-body';
 
 export type BudgetAnswer = { revision: number } &
-  /** `body` is the response `{ version, result }`, serialised and compressed by the worker. */
+  /** `body` is the response `{ version, result }` and `ledgerBody` `{ version, ledger }`, made by the worker. */
   (
-    | { kind: 'ok'; body: ReadyBody; figures: BudgetFigures }
+    | { kind: 'ok'; body: ReadyBody; ledgerBody: ReadyBody; figures: BudgetFigures }
     /** Nothing to simulate yet, or a plan the engine refuses: the reason is shown in place of the budget. */
     | { kind: 'none'; reason: string }
     | { kind: 'too-large' }
@@ -29,7 +31,8 @@ const TOO_LARGE_KEPT_MS = 60_000;
 const GLANCE_ENTRIES = 10_000;
 const FAULT_REASON = 'The budget could not be computed for this plan. Please report it.';
 
-const sizeOf = (answer: BudgetAnswer): number => (answer.kind === 'ok' ? readyBodySize(answer.body) : 0);
+const sizeOf = (answer: BudgetAnswer): number =>
+  answer.kind === 'ok' ? readyBodySize(answer.body) + readyBodySize(answer.ledgerBody) : 0;
 
 /**
  * Budgets per (trip, revision), computed off the event loop by a runner (a worker pool that reads the plan itself)
@@ -146,8 +149,11 @@ export function createBudgetService(
         throw error;
       });
       if (answer?.kind !== 'ok') return null;
-      const { result } = JSON.parse(new TextDecoder().decode(answer.body.identity)) as { result: SimulationResult };
-      return result;
+      const read = (body: ReadyBody): unknown => JSON.parse(new TextDecoder().decode(body.identity));
+      const { result } = read(answer.body) as { result: BudgetResult };
+      const { ledger } = read(answer.ledgerBody) as { ledger: LedgerColumns };
+      const { soc: _track, ...rest } = result;
+      return { ...rest, ledger: fromLedgerColumns(ledger) };
     },
 
     /** The trips list's figures for a trip at `revision`, without waiting; starts a computation when they are old. */

@@ -4,7 +4,9 @@
 import { openReadOnlyDatabase, type Db, type DbExecutor } from '@/db/client';
 import { findTrip, loadTripDetail } from '@/db/queries/trips';
 import { engineWeatherFor } from '@/db/queries/weather-series';
+import { toBudgetResult } from '@/shared/budget-result';
 import { simulateParsed } from '@/shared/engine';
+import { toLedgerColumns } from '@/shared/ledger-columns';
 import { lowestChargeByStop } from '@/shared/route-charge';
 import { engineInputSchema, type EngineInputDraft } from '@/shared/schemas/engine-input';
 import { toEngineInput } from '@/shared/trip-to-engine-input';
@@ -19,15 +21,19 @@ export type BudgetFigures = {
 };
 
 export type BudgetOutcome =
-  | { kind: 'ok'; resultJson: string; figures: BudgetFigures }
+  | { kind: 'ok'; resultJson: string; ledgerJson: string; figures: BudgetFigures }
   /** Nothing to simulate yet, or a plan the engine refuses: the reason is shown in place of the budget. */
   | { kind: 'none'; reason: string }
   /** The engine failed: a fault to log, not the user's doing. */
   | { kind: 'failed'; message: string };
 
-/** What the server keeps of a budget: the response body `{ version, result }`, ready in each encoding. */
+/**
+ * What the server keeps of a budget, ready in each encoding: the budget's body `{ version, result }` and the
+ * ledger's `{ version, ledger }` (the hourly rows as columns, sent only to the screens that show them).
+ */
 export type ReadyOutcome =
-  { kind: 'ok'; body: ReadyBody; figures: BudgetFigures } | Exclude<BudgetOutcome, { kind: 'ok' }>;
+  | { kind: 'ok'; body: ReadyBody; ledgerBody: ReadyBody; figures: BudgetFigures }
+  | Exclude<BudgetOutcome, { kind: 'ok' }>;
 
 /** A trip's budget and the revision of the plan it was computed from. */
 export type TripBudget = { revision: number; outcome: ReadyOutcome };
@@ -35,8 +41,13 @@ export type TripBudget = { revision: number; outcome: ReadyOutcome };
 /** The budget's response body, made once per revision, so each request for it only sends bytes. */
 function readyOutcome(revision: number, outcome: BudgetOutcome): ReadyOutcome {
   if (outcome.kind !== 'ok') return outcome;
-  const { resultJson, figures } = outcome;
-  return { kind: 'ok', figures, body: readyBody(`{"version":${revision},"result":${resultJson}}`) };
+  const { resultJson, ledgerJson, figures } = outcome;
+  return {
+    kind: 'ok',
+    figures,
+    body: readyBody(`{"version":${revision},"result":${resultJson}}`),
+    ledgerBody: readyBody(`{"version":${revision},"ledger":${ledgerJson}}`),
+  };
 }
 
 export function computeBudget(draft: EngineInputDraft | null): BudgetOutcome {
@@ -48,15 +59,17 @@ export function computeBudget(draft: EngineInputDraft | null): BudgetOutcome {
   }
   try {
     const result = simulateParsed(parsed.data);
+    const budget = toBudgetResult(result);
     const { lowestSocPct, reservePct } = result.headline;
     return {
       kind: 'ok',
-      resultJson: JSON.stringify(result),
+      resultJson: JSON.stringify(budget),
+      ledgerJson: JSON.stringify(toLedgerColumns(result.ledger)),
       figures: {
         lowestSocPct,
         reservePct,
         flagCount: result.flags.length,
-        lowestByStop: lowestChargeByStop(result.ledger, parsed.data.trip.stops.length),
+        lowestByStop: lowestChargeByStop(budget.soc, parsed.data.trip.stops.length),
       },
     };
   } catch (error) {

@@ -9,6 +9,8 @@ export const tripKeys = {
   list: () => [...tripKeys.root, 'list'] as const,
   detail: (tripId: string) => [...tripKeys.root, 'detail', tripId] as const,
   budget: (tripId: string) => [...tripKeys.root, 'budget', tripId] as const,
+  /** Under the budget's key, so whatever refreshes a budget refreshes its ledger too. */
+  ledger: (tripId: string) => [...tripKeys.budget(tripId), 'ledger'] as const,
   activity: (tripId: string) => [...tripKeys.root, 'activity', tripId] as const,
   members: (tripId: string) => [...tripKeys.root, 'members', tripId] as const,
 };

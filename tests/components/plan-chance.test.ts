@@ -1,3 +1,4 @@
+import { toBudgetResult } from '@/shared/budget-result';
 import { describe, expect, it } from 'vitest';
 import { assumedSkyText, chanceHeadline, chanceYears, stopSkyText } from '@/components/budget/plan-chance-text';
 import { socSeries } from '@/components/budget/soc-series';
@@ -52,7 +53,7 @@ describe('the chart band', () => {
     const result = simulateTrip(DEMO_TRIPS.highlandLoop);
     const p10 = result.ledger.map((r) => r.socPct - 5);
     const p90 = result.ledger.map((r) => r.socPct + 5);
-    const series = socSeries({ ...result, band: null, socBand: { p10, p90 } });
+    const series = socSeries({ ...toBudgetResult(result), band: null, socBand: { p10, p90 } });
     expect(series.points.map((p) => p.worse)).toEqual(p10);
     expect(series.points.map((p) => p.better)).toEqual(p90);
   });

@@ -5,7 +5,7 @@
 import type { Page } from 'playwright-core';
 import { expect } from 'vitest';
 import { DEMO_ACCOUNT } from '@/db/seed';
-import type { SimulationResult } from '@/shared/engine/result-types';
+import type { BudgetResponse } from '@/shared/schemas/budget-response';
 import { byTestId, openTrip, screenshotTall, seriousA11yViolations, signIn, type Suite, VIEWPORTS } from './harness';
 import { horizontalOverflow, overlappingText, tripChromeHeight } from './layout-probes';
 
@@ -93,9 +93,9 @@ export const openCheck = (name: string, page: Page, paths: Paths): Promise<void>
 /** The first and last local hour of the budget, as the chart's caption prints them. */
 async function tripHours(page: Page, base: string, tripId: string): Promise<{ first: string; last: string }> {
   const response = await page.request.get(`${base}/api/trips/${tripId}/budget`);
-  const body = (await response.json()) as { result: SimulationResult };
-  const ledger = body.result.ledger;
-  return { first: ledger[0]?.local ?? '', last: ledger[ledger.length - 1]?.local ?? '' };
+  const body = (await response.json()) as BudgetResponse;
+  const hours = body.result?.soc.local ?? [];
+  return { first: hours[0] ?? '', last: hours[hours.length - 1] ?? '' };
 }
 
 /** The chart's plot edges and where the drawn range's first and last hours fall, px (published by the canvas). */

@@ -25,7 +25,8 @@ describe('every screen on a laptop', () => {
     const box = await canvas.boundingBox();
     if (!box) throw new Error('no chart canvas');
     await page.mouse.move(box.x + box.width * 0.4, box.y + box.height / 2);
-    await expect.poll(() => page.textContent(byTestId('soc-readout'))).toMatch(/charge \d+ %/);
+    // Place and charge come with the budget; the hour's other figures arrive with the ledger, fetched on first use.
+    await expect.poll(() => page.textContent(byTestId('soc-readout'))).toMatch(/charge \d+ % · solar .+ available/);
     await page.click(byTestId('soc-next-hour'));
     await expect.poll(() => page.textContent(byTestId('soc-readout'))).toMatch(/charge \d+ %/);
 

@@ -71,7 +71,7 @@ describe('weather records through the local fake', () => {
       2022, 2023, 2024, 2025, 2026,
     ]);
     expect(after.body.result.skies).toEqual({ sources: ['record'], assumedStops: 0 });
-    expect(after.body.result.socBand.p10).toHaveLength(after.body.result.ledger.length);
+    expect(after.body.result.socBand.p10).toHaveLength(after.body.result.soc.socPct.length);
   });
 
   it('when a stop is inside the forecast horizon, then its forecast days are fetched too', async () => {
