@@ -4,7 +4,7 @@
 // and the worst year, and the 10th–90th percentile of state of charge step by step.
 import type { EngineWeather } from '../schemas/engine-weather';
 import type { Prepared } from './prepare';
-import { seriesForRun, stepSky, type StepSky } from './recorded-sky';
+import { seriesForRun, stepSky, type SkyChoice, type StepSky } from './recorded-sky';
 import type { PlanChance, YearLow } from './result-types';
 import type { WalkResult } from './walk';
 
@@ -30,14 +30,15 @@ function quantile(sorted: Float64Array, q: number): number {
 export function runRecordYears(
   p: Prepared,
   weather: EngineWeather,
+  choices: readonly SkyChoice[],
   reservePct: number,
   run: (sky: StepSky) => WalkResult,
 ): YearRuns | undefined {
-  const temps = weather.stops.map((s) => s.recordedTemperature);
+  const temps = choices.map((s) => s.recordedTemperature);
   const years: { year: number; sky: StepSky; result: WalkResult }[] = [];
   weather.years.forEach((y, index) => {
-    const series = seriesForRun(weather, index);
-    const hasRecord = weather.stops.some((s, w) => s.source === 'record' && y.stops[w]);
+    const series = seriesForRun(weather, choices, index);
+    const hasRecord = choices.some((s, w) => s.source === 'record' && y.stops[w]);
     if (!hasRecord) return;
     const sky = stepSky(p, series, temps);
     years.push({ year: y.year, sky, result: run(sky) });

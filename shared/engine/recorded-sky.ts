@@ -4,6 +4,7 @@
 // panel model then treat it as they treat a preset. Recorded air temperatures replace the low/high curve where the
 // stop keeps them.
 import type { EngineWeather, HourlySky, SkySource } from '../schemas/engine-weather';
+import type { Stop, StopSkySource } from '../schemas/trip';
 import type { Prepared } from './prepare';
 import { HOUR_MS } from './time-grid';
 
@@ -34,6 +35,12 @@ function meanOver(values: readonly (number | null)[], startMs: number, fromMs: n
   }
   return sum / (toMs - fromMs);
 }
+
+/** A stop's own choice: where its sky comes from, and whether recorded air temperatures replace its low/high. */
+export type SkyChoice = { source: StopSkySource; recordedTemperature: boolean };
+
+export const skyChoices = (stops: readonly Stop[]): SkyChoice[] =>
+  stops.map((s) => ({ source: s.skySource, recordedTemperature: !s.ownTemperatures }));
 
 /** The steps' sky and air from one series per stop (null: that stop keeps its preset and its low/high). */
 export function stepSky(p: Prepared, series: readonly (HourlySky | null)[], recordedTemperature: readonly boolean[]) {
@@ -77,8 +84,12 @@ function withForecast(record: HourlySky, forecast: HourlySky): HourlySky {
  * One run's series per stop: the year's record with any forecast hours over it, the forecast alone, or none (the
  * preset), as each stop's source says. yearIndex null: no recorded year (the forecast alone).
  */
-export function seriesForRun(weather: EngineWeather, yearIndex: number | null): (HourlySky | null)[] {
-  return weather.stops.map((stop, w) => {
+export function seriesForRun(
+  weather: EngineWeather,
+  choices: readonly SkyChoice[],
+  yearIndex: number | null,
+): (HourlySky | null)[] {
+  return choices.map((stop, w) => {
     const forecast = weather.forecast[w] ?? null;
     if (stop.source === 'forecast') return forecast;
     if (stop.source === 'preset') return null;
@@ -88,10 +99,13 @@ export function seriesForRun(weather: EngineWeather, yearIndex: number | null): 
   });
 }
 
-/** Where each stop's sky really comes from: the forecast where it has one, else the record, else its preset. */
-export function effectiveSources(weather: EngineWeather | null, stopCount: number): SkySource[] {
-  return Array.from({ length: stopCount }, (_, w): SkySource => {
-    const chosen = weather?.stops[w]?.source ?? 'preset';
+/**
+ * Where each stop's sky really comes from: its preset when chosen; else the forecast where it has one, else the
+ * record (when chosen), else its preset.
+ */
+export function effectiveSources(weather: EngineWeather | null, choices: readonly SkyChoice[]): SkySource[] {
+  return choices.map((choice, w): SkySource => {
+    const chosen = choice.source;
     if (chosen === 'preset') return 'preset';
     if (weather?.forecast[w]) return 'forecast';
     if (chosen === 'record' && weather?.years.some((y) => y.stops[w])) return 'record';

@@ -17,14 +17,11 @@ export const hourlySkySchema = z.object({
 });
 export type HourlySky = z.infer<typeof hourlySkySchema>;
 
-export const skySourceSchema = z.enum(['record', 'forecast', 'preset']);
-export type SkySource = z.infer<typeof skySourceSchema>;
+/** Where a stop's sky came from in a budget (a stop asking for the record or forecast may have neither yet). */
+export type SkySource = 'record' | 'forecast' | 'preset';
 
+/** What the past holds for a trip's stops. Which of it each stop uses is the stop's own choice (skySource). */
 export const engineWeatherSchema = z.object({
-  /** Per stop, in trip order: where its sky comes from, and whether recorded temperatures replace its low/high. */
-  stops: z
-    .array(z.object({ source: skySourceSchema, recordedTemperature: z.boolean().default(true) }))
-    .max(LIMITS.stopsPerTrip),
   /** Past years, each with a series per stop (null: that stop has no record for the year). */
   years: z
     .array(z.object({ year: z.number().int(), stops: z.array(hourlySkySchema.nullable()).max(LIMITS.stopsPerTrip) }))

@@ -37,12 +37,26 @@ describe('the chance the plan holds, in words', () => {
 
   it("when a stop's record is loading, ready or unavailable, then its line says where its sky comes from", () => {
     const base = { stopId: 's', yearsWanted: 20, forecastDays: 0 };
-    expect(stopSkyText({ ...base, state: 'loading', yearsReady: 7 }, 'clear')).toContain('loading, 7 of 20 years');
-    expect(stopSkyText({ ...base, state: 'ready', yearsReady: 20, forecastDays: 3 }, 'clear')).toBe(
+    const clear = { source: 'record', presetName: 'clear', ownTemperatures: false } as const;
+    expect(stopSkyText({ ...base, state: 'loading', yearsReady: 7 }, clear)).toContain('loading, 7 of 20 years');
+    expect(stopSkyText({ ...base, state: 'ready', yearsReady: 20, forecastDays: 3 }, clear)).toBe(
       'Sky from the record: 20 past years; forecast for 3 days',
     );
-    expect(stopSkyText({ ...base, state: 'unavailable', yearsReady: 0 }, 'overcast')).toContain(
-      'the sky is assumed overcast',
+    expect(
+      stopSkyText({ ...base, state: 'unavailable', yearsReady: 0 }, { ...clear, presetName: 'overcast' }),
+    ).toContain('the sky is assumed overcast');
+  });
+
+  it('when a stop picks its own sky, the forecast or its own temperatures, then its line says which is in use', () => {
+    const ready = { stopId: 's', yearsWanted: 20, yearsReady: 20, forecastDays: 0, state: 'ready' } as const;
+    const smoke = { source: 'preset', presetName: 'hazy or smoke', ownTemperatures: false } as const;
+    expect(stopSkyText(ready, smoke)).toBe('Sky: your pick, hazy or smoke (the weather record is not used)');
+    expect(stopSkyText({ ...ready, forecastDays: 4 }, { ...smoke, source: 'forecast' })).toBe(
+      'Sky from the forecast for 4 days; other days assumed hazy or smoke',
+    );
+    expect(stopSkyText(ready, { ...smoke, source: 'forecast' })).toContain('none for this stop yet');
+    expect(stopSkyText(ready, { ...smoke, source: 'record', ownTemperatures: true })).toBe(
+      'Sky from the record: 20 past years · Temperatures: your low and high',
     );
   });
 });

@@ -4,6 +4,7 @@ import { syntheticHourly, syntheticSite } from '@/server/weather/synthetic-weath
 import { simulateTrip } from '@/shared/engine';
 import type { EngineInputDraft } from '@/shared/schemas';
 import type { EngineWeather, HourlySky } from '@/shared/schemas/engine-weather';
+import type { StopInput } from '@/shared/schemas/trip';
 import { constantLoad, simpleTrip } from './trip-builder';
 
 const HOUR_MS = 3_600_000;
@@ -21,11 +22,15 @@ function recordedDays(recordStart: string, recordEnd: string, tripStart: string,
 
 function withRecord(input: EngineInputDraft, years: { year: number; sky: HourlySky }[]): EngineInputDraft {
   const weather: EngineWeather = {
-    stops: [{ source: 'record', recordedTemperature: true }],
     years: years.map((y) => ({ year: y.year, stops: [y.sky] })),
     forecast: [null],
   };
   return { ...input, weather };
+}
+
+/** The plan with its one stop's fields changed. */
+function stopWith(input: EngineInputDraft, patch: Partial<StopInput>): EngineInputDraft {
+  return { ...input, trip: { ...input.trip, stops: input.trip.stops.map((s) => ({ ...s, ...patch })) } };
 }
 
 describe('a recorded sky', () => {
@@ -53,15 +58,43 @@ describe('a recorded sky', () => {
     const recorded = simulateTrip(withRecord(input, [{ year: 2019, sky }]));
     // Step 12 covers 12:00–13:00 UTC: the value stamped 13:00 (index 13).
     expect(recorded.ledger[12]?.ambientC).toBeCloseTo(sky.tempC[13] ?? Number.NaN, 6);
-    const kept = simulateTrip({
-      ...withRecord(input, [{ year: 2019, sky }]),
-      weather: {
-        stops: [{ source: 'record', recordedTemperature: false }],
-        years: [{ year: 2019, stops: [sky] }],
-        forecast: [null],
-      },
-    });
+    const kept = simulateTrip(withRecord(stopWith(input, { ownTemperatures: true }), [{ year: 2019, sky }]));
     expect(kept.ledger[12]?.ambientC).toBeLessThanOrEqual(-1);
+  });
+
+  it('when a stop picks its own sky over the record, then it plans on that preset and counts as assumed', () => {
+    const input = simpleTrip({ solarW: 400, sky: 'hazy', lowC: -5, highC: -1 });
+    const sky = recordedDays('2019-06-21', '2019-06-22', '2027-06-21');
+    const picked = simulateTrip(withRecord(stopWith(input, { skySource: 'preset' }), [{ year: 2019, sky }]));
+    const presetOnly = simulateTrip(input);
+    expect(picked.days[0]?.solarAvailableWh).toBeCloseTo(presetOnly.days[0]?.solarAvailableWh ?? Number.NaN, 6);
+    // The record's air is not used either: the stop's own low and high stand.
+    expect(picked.ledger[12]?.ambientC).toBeLessThanOrEqual(-1);
+    expect(picked.chance).toBeNull();
+    expect(picked.skies).toEqual({ sources: ['preset'], assumedStops: 1 });
+  });
+
+  it('when a stop picks the forecast, then the forecast sets its sky and the record is not run', () => {
+    const input = stopWith(simpleTrip({ solarW: 400 }), { skySource: 'forecast' });
+    const record = recordedDays('2019-06-21', '2019-06-22', '2027-06-21');
+    const forecast = recordedDays('2019-06-21', '2019-06-22', '2027-06-21', 0.3);
+    const weather: EngineWeather = { years: [{ year: 2019, stops: [record] }], forecast: [forecast] };
+    const result = simulateTrip({ ...input, weather });
+    const forecastWh = forecast.ghiWm2.slice(1, 25).reduce<number>((s, g) => s + (g ?? 0), 0);
+    const recordWh = record.ghiWm2.slice(1, 25).reduce<number>((s, g) => s + (g ?? 0), 0);
+    const harvest = result.days[0]?.solarAvailableWh ?? 0;
+    expect(Math.abs(harvest - forecastWh * 0.4)).toBeLessThan(Math.abs(harvest - recordWh * 0.4));
+    expect(result.chance).toBeNull();
+    expect(result.skies).toEqual({ sources: ['forecast'], assumedStops: 0 });
+  });
+
+  it('when a stop picks the forecast but has none (beyond its horizon), then it plans on its preset', () => {
+    const input = stopWith(simpleTrip({ solarW: 400, sky: 'overcast' }), { skySource: 'forecast' });
+    const sky = recordedDays('2019-06-21', '2019-06-22', '2027-06-21');
+    const result = simulateTrip(withRecord(input, [{ year: 2019, sky }]));
+    const preset = simulateTrip(simpleTrip({ solarW: 400, sky: 'overcast' }));
+    expect(result.days[0]?.solarAvailableWh).toBeCloseTo(preset.days[0]?.solarAvailableWh ?? Number.NaN, 6);
+    expect(result.skies).toEqual({ sources: ['preset'], assumedStops: 1 });
   });
 
   it('when the record has a gap, then those hours plan on the preset sky', () => {
