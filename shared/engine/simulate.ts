@@ -223,10 +223,13 @@ export function simulateParsed(input: EngineInput): SimulationResult {
   const choices = skyChoices(input.trip.stops);
   const sources = effectiveSources(weather, choices);
   const reservePct = reservePctOf(input);
-  // With a record, the trip runs once per recorded year and the planned run is the median year's.
+  // With a record, the trip runs once per recorded year and the planned run is the median year's, reused as built.
   const years =
     weather && weather.years.length > 0
-      ? runRecordYears(p, weather, choices, reservePct, (sky) => walk(p, scenarioUnder(p, sky).scenario, null))
+      ? runRecordYears(p, weather, choices, reservePct, (sky) => {
+          const under = scenarioUnder(p, sky);
+          return { ...under, result: walk(p, under.scenario, null) };
+        })
       : undefined;
   const forecastOnly =
     weather && !years && sources.includes('forecast')
@@ -236,8 +239,8 @@ export function simulateParsed(input: EngineInput): SimulationResult {
           choices.map((s) => s.recordedTemperature),
         )
       : undefined;
-  const sky = years?.medianSky ?? forecastOnly;
-  const { solar, scenario: planned } = scenarioUnder(p, sky);
+  const sky = years?.median.sky ?? forecastOnly;
+  const { solar, scenario: planned } = years?.median.run ?? scenarioUnder(p, sky);
   const l = newLedger(p.n);
   const r = walk(p, planned, l);
   const loads = planned.loads;

@@ -97,6 +97,17 @@ describe('a recorded sky', () => {
     expect(result.skies).toEqual({ sources: ['preset'], assumedStops: 1 });
   });
 
+  it('when a series carries a value out of range or a non-number, then the input is refused', () => {
+    const input = simpleTrip({ solarW: 400 });
+    const sky = recordedDays('2019-06-21', '2019-06-22', '2027-06-21');
+    const bad = (patch: Partial<HourlySky>) => () =>
+      simulateTrip(withRecord(input, [{ year: 2019, sky: { ...sky, ...patch } }]));
+    expect(bad({ ghiWm2: [...sky.ghiWm2.slice(1), 1600] })).toThrow(/irradiance/);
+    expect(bad({ tempC: [Number.NaN, ...sky.tempC.slice(1)] })).toThrow(/temperature/);
+    expect(bad({ ghiWm2: ['12' as unknown as number] })).toThrow(/irradiance/);
+    expect(bad({})).not.toThrow();
+  });
+
   it('when the record has a gap, then those hours plan on the preset sky', () => {
     const input = simpleTrip({ solarW: 400, sky: 'overcast' });
     const sky = recordedDays('2019-06-21', '2019-06-22', '2027-06-21');
