@@ -2,9 +2,10 @@ import type { SimulationResult } from '@/shared/engine/result-types';
 import type { TripDetail } from '@/shared/schemas/api';
 import { toEngineInput } from '@/shared/trip-to-engine-input';
 import { useBudgetQuery } from '@/stores/queries/budget';
+import { useTripRecordQuery } from '@/stores/queries/weather';
 import { anyWhatIf, useWhatIf } from '@/stores/what-if-store';
 import { simulateCached } from './simulate-cached';
-import { applyWhatIf } from './what-if';
+import { applyWhatIf, withRecord } from './what-if';
 
 export type BudgetView =
   | { state: 'loading' }
@@ -16,9 +17,13 @@ export type BudgetView =
 export function useBudgetView(detail: TripDetail): BudgetView {
   const whatIf = useWhatIf(detail.trip.id);
   const budget = useBudgetQuery(detail.trip.id);
-  if (anyWhatIf(whatIf)) {
-    const input = toEngineInput(detail);
+  const on = anyWhatIf(whatIf);
+  // What-ifs run on the same recorded years as the server's budget, so the change is all that differs.
+  const record = useTripRecordQuery(detail, on);
+  if (on) {
+    const input = withRecord(toEngineInput(detail), record.data?.weather);
     if (!input) return { state: 'empty', reason: 'Add a stop to see a budget.' };
+    if (record.isPending && record.fetchStatus === 'fetching') return { state: 'loading' };
     const sim = simulateCached(applyWhatIf(input, whatIf));
     return sim.result
       ? { state: 'ready', result: sim.result, whatIf: true }

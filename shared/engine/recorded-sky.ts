@@ -166,3 +166,13 @@ export function effectiveSources(weather: EngineWeather | null, choices: readonl
     return 'preset';
   });
 }
+
+/** The forecast alone as a sky, when no recorded year runs but some stop's sky is from a forecast. */
+export function forecastOnlySky(p: Prepared, weather: EngineWeather | null, choices: readonly SkyChoice[]) {
+  if (!weather || !effectiveSources(weather, choices).includes('forecast')) return undefined;
+  return stepSky(
+    p,
+    seriesForRun(weather, choices, null),
+    choices.map((s) => s.recordedTemperature),
+  );
+}

@@ -10,7 +10,7 @@ import { fuelUnit } from './fuel';
 import { prepare, type Prepared } from './prepare';
 import type { BandRun, DaySheet, Headline, LedgerRow, SimulationResult } from './result-types';
 import { runRecordYears } from './record-years';
-import { effectiveSources, seriesForRun, skyChoices, stepSky, type StepSky } from './recorded-sky';
+import { effectiveSources, forecastOnlySky, skyChoices, type StepSky } from './recorded-sky';
 import { solarSeries, type SolarSeries } from './solar';
 import { localLabel, utcIsoString } from './time-grid';
 import { generatorPlanFor, newLedger, walk, type LedgerColumns, type Scenario, type WalkResult } from './walk';
@@ -231,14 +231,7 @@ export function simulateParsed(input: EngineInput): SimulationResult {
           return { ...under, result: walk(p, under.scenario, null) };
         })
       : undefined;
-  const forecastOnly =
-    weather && !years && sources.includes('forecast')
-      ? stepSky(
-          p,
-          seriesForRun(weather, choices, null),
-          choices.map((s) => s.recordedTemperature),
-        )
-      : undefined;
+  const forecastOnly = years ? undefined : forecastOnlySky(p, weather, choices);
   const sky = years?.median.sky ?? forecastOnly;
   const { solar, scenario: planned } = years?.median.run ?? scenarioUnder(p, sky);
   const l = newLedger(p.n);

@@ -1,4 +1,6 @@
 import { describe, expect, it } from 'vitest';
+import { headroomAim } from '@/components/budget/headroom-lines';
+import type { HeadroomResult } from '@/shared/engine/headroom';
 import { assumedSkyText, chanceHeadline, chanceYears, stopSkyText } from '@/components/budget/plan-chance-text';
 import { socSeries } from '@/components/budget/soc-series';
 import { DEMO_TRIPS, simulateTrip } from '@/shared/engine';
@@ -57,6 +59,28 @@ describe('the chance the plan holds, in words', () => {
     expect(stopSkyText(ready, { ...smoke, source: 'forecast' })).toContain('none for this stop yet');
     expect(stopSkyText(ready, { ...smoke, source: 'record', ownTemperatures: true })).toBe(
       'Sky from the record: 20 past years · Temperatures: your low and high',
+    );
+  });
+});
+
+describe('what it would take, in words', () => {
+  const result: HeadroomResult = {
+    reservePct: 20,
+    confidence: { held: 9, of: 10, years: 20, baselineHeld: 14 },
+    baselineLowestSocPct: 11.6,
+    baselineEnergyShortWh: 0,
+    needed: true,
+    levers: [],
+  };
+  it('when the search ran on recorded years, then the card says it aims at 9 of 10 past years and how many hold now', () => {
+    expect(headroomAim(result)).toContain('above the 20 % reserve in 9 of 10 past years (now it holds in 14 of 20');
+    expect(
+      headroomAim({ ...result, needed: false, confidence: { held: 9, of: 10, years: 20, baselineHeld: 19 } }),
+    ).toBe('Nothing: the plan stays above the 20 % reserve in 9 of 10 past years (it holds in 19 of 20).');
+  });
+  it('when there are no recorded years, then the card speaks of the whole trip on the planned sky', () => {
+    expect(headroomAim({ ...result, confidence: null })).toBe(
+      'Each on its own, the smallest change that keeps the whole trip above the 20 % reserve (now the lowest is 12 %).',
     );
   });
 });
