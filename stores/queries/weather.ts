@@ -10,7 +10,7 @@ import { tripKeys } from './trips';
 const LOADING_POLL_MS = 2500;
 
 export const weatherKeys = {
-  trip: (tripId: string) => [...tripKeys.root, 'weather', tripId] as const,
+  trip: tripKeys.weather,
   /** The recorded years themselves, for the stops as they stand (a moved stop reads other years). */
   record: (tripId: string, stops?: string) =>
     stops === undefined
