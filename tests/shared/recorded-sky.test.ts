@@ -124,7 +124,8 @@ describe('the chance the plan holds', () => {
     year: 2015 + i,
     sky: recordedDays('2019-06-21', '2019-06-24', '2027-06-21', scale),
   }));
-  const plan = (capacityAh: number, solarW: number) =>
+  /** Three days with a fridge, on the given past years. */
+  const planOn = (skies: { year: number; sky: HourlySky }[], capacityAh: number, solarW: number) =>
     withRecord(
       simpleTrip({
         solarW,
@@ -134,8 +135,14 @@ describe('the chance the plan holds', () => {
         depart: '2027-06-24T00:00Z',
         appliances: [constantLoad('fridge', 'dc', 45)],
       }),
-      years,
+      skies,
     );
+  const plan = (capacityAh: number, solarW: number) => planOn(years, capacityAh, solarW);
+  // Ten years from dull to bright.
+  const ten = Array.from({ length: 10 }, (_, i) => ({
+    year: 2010 + i,
+    sky: recordedDays('2019-06-21', '2019-06-24', '2027-06-21', 0.1 + i * 0.1),
+  }));
 
   it('when the trip runs on five recorded years, then it reports how many held, the median, bad and worst years', () => {
     const result = simulateTrip(plan(100, 200));
@@ -178,22 +185,8 @@ describe('the chance the plan holds', () => {
   });
 
   it('when recorded years exist, then what it would take holds the plan in at least 9 of 10 of them', () => {
-    // Ten years from dull to bright: the plan as it stands holds only in the brighter ones.
-    const ten = Array.from({ length: 10 }, (_, i) => ({
-      year: 2010 + i,
-      sky: recordedDays('2019-06-21', '2019-06-24', '2027-06-21', 0.1 + i * 0.1),
-    }));
-    const draft = withRecord(
-      simpleTrip({
-        solarW: 200,
-        capacityAh: 100,
-        initialSocPct: 60,
-        arrive: '2027-06-21T00:00Z',
-        depart: '2027-06-24T00:00Z',
-        appliances: [constantLoad('fridge', 'dc', 45)],
-      }),
-      ten,
-    );
+    // The plan as it stands holds only in the brighter years.
+    const draft = planOn(ten, 100, 200);
     const headroom = findHeadroom(draft);
     expect(headroom.confidence).toMatchObject({ held: 9, of: 10, years: 10 });
     expect(headroom.confidence?.baselineHeld).toBe(simulateTrip(draft).chance?.held);
@@ -215,23 +208,9 @@ describe('the chance the plan holds', () => {
   });
 
   it('when the battery found for 9 in 10 years is fitted, then the plan holds in at least 9 of 10 (random plans)', () => {
-    const ten = Array.from({ length: 10 }, (_, i) => ({
-      year: 2010 + i,
-      sky: recordedDays('2019-06-21', '2019-06-24', '2027-06-21', 0.1 + i * 0.1),
-    }));
     fc.assert(
       fc.property(fc.integer({ min: 40, max: 200 }), fc.integer({ min: 0, max: 300 }), (capacityAh, solarW) => {
-        const draft = withRecord(
-          simpleTrip({
-            solarW,
-            capacityAh,
-            initialSocPct: 60,
-            arrive: '2027-06-21T00:00Z',
-            depart: '2027-06-24T00:00Z',
-            appliances: [constantLoad('fridge', 'dc', 45)],
-          }),
-          ten,
-        );
+        const draft = planOn(ten, capacityAh, solarW);
         const battery = findHeadroom(draft).levers.find((l) => l.lever === 'battery');
         if (battery?.status !== 'found') return;
         const held = simulateTrip({
