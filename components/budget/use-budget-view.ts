@@ -3,9 +3,10 @@ import type { LedgerRow } from '@/shared/engine/result-types';
 import type { TripDetail } from '@/shared/schemas/api';
 import { toEngineInput } from '@/shared/trip-to-engine-input';
 import { useBudgetQuery, useLedgerQuery } from '@/stores/queries/budget';
+import { useTripRecordQuery } from '@/stores/queries/weather';
 import { anyWhatIf, useWhatIf, type WhatIf } from '@/stores/what-if-store';
 import { simulateCached, type Simulated } from './simulate-cached';
-import { applyWhatIf } from './what-if';
+import { applyWhatIf, withRecord } from './what-if';
 
 type Unready =
   { state: 'loading' } | { state: 'error'; error: unknown; retry: () => void } | { state: 'empty'; reason: string };
@@ -15,14 +16,19 @@ export type BudgetView = Unready | { state: 'ready'; result: BudgetResult; whatI
 /** The hourly ledger: fetched apart from the budget, only by the screens that show it. */
 export type LedgerView = Unready | { state: 'ready'; rows: LedgerRow[] };
 
-/** While what-ifs are on, the same engine run in the browser on the changed input; null when none is on. */
-function whatIfRun(
-  detail: TripDetail,
-  whatIf: WhatIf,
-): Simulated | { result: null; budget: null; error: string } | null {
-  if (!anyWhatIf(whatIf)) return null;
-  const input = toEngineInput(detail);
+type WhatIfRun = Simulated | { result: null; budget: null; error: string } | 'loading' | null;
+
+/**
+ * While what-ifs are on, the same engine run in the browser on the changed input, on the same recorded years as the
+ * server's budget (so the change is all that differs); null when none is on.
+ */
+function useWhatIfRun(detail: TripDetail, whatIf: WhatIf): WhatIfRun {
+  const on = anyWhatIf(whatIf);
+  const record = useTripRecordQuery(detail, on);
+  if (!on) return null;
+  const input = withRecord(toEngineInput(detail), record.data?.weather);
   if (!input) return { result: null, budget: null, error: 'Add a stop to see a budget.' };
+  if (record.isPending && record.fetchStatus === 'fetching') return 'loading';
   return simulateCached(applyWhatIf(input, whatIf));
 }
 
@@ -30,7 +36,8 @@ function whatIfRun(
 export function useBudgetView(detail: TripDetail): BudgetView {
   const whatIf = useWhatIf(detail.trip.id);
   const budget = useBudgetQuery(detail.trip.id);
-  const sim = whatIfRun(detail, whatIf);
+  const sim = useWhatIfRun(detail, whatIf);
+  if (sim === 'loading') return { state: 'loading' };
   if (sim)
     return sim.budget
       ? { state: 'ready', result: sim.budget, whatIf: true }
@@ -48,8 +55,9 @@ export function useBudgetView(detail: TripDetail): BudgetView {
  */
 export function useLedgerView(detail: TripDetail, enabled = true): LedgerView {
   const whatIf = useWhatIf(detail.trip.id);
-  const sim = whatIfRun(detail, whatIf);
+  const sim = useWhatIfRun(detail, whatIf);
   const ledger = useLedgerQuery(detail.trip.id, enabled && !sim);
+  if (sim === 'loading') return { state: 'loading' };
   if (sim)
     return sim.result ? { state: 'ready', rows: sim.result.ledger } : { state: 'empty', reason: sim.error ?? '' };
   if (ledger.isPending) return { state: 'loading' };

@@ -23,6 +23,8 @@ import type { Mailer } from '../mail/mailer';
 import type { WeatherQueue } from '../weather/weather-queue';
 import { listStopRows } from '@/db/queries/stops';
 import { BUDGET_FORMAT } from '@/shared/budget-result';
+import { stopFromRow } from '@/db/queries/mappers';
+import { engineWeatherFor } from '@/db/queries/weather-series';
 
 /** Everything under /api/trips/:tripId/… once the caller's role is known. */
 export type TripItemsDeps = {
@@ -127,6 +129,13 @@ export function tripItemsRouter(deps: TripItemsDeps): Router {
     const stops = listStopRows(deps.db, tripAccess(res).tripId);
     res.setHeader('Cache-Control', 'private, no-store');
     res.json({ stops: deps.weather.statusFor(stops) });
+  });
+
+  // The recorded years and forecast the budget runs on, for the browser's what-ifs to run on the same years.
+  router.get('/weather/record', (_req, res) => {
+    const stops = listStopRows(deps.db, tripAccess(res).tripId).map(stopFromRow);
+    res.setHeader('Cache-Control', 'private, no-cache');
+    res.json({ weather: engineWeatherFor(deps.db, stops) });
   });
 
   router.get('/activity', (_req, res) => {

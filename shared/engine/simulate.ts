@@ -10,7 +10,7 @@ import { fuelUnit } from './fuel';
 import { prepare, type Prepared } from './prepare';
 import type { BandRun, DaySheet, Headline, LedgerRow, SimulationResult } from './result-types';
 import { runRecordYears } from './record-years';
-import { effectiveSources, seriesForRun, stepSky, type StepSky } from './recorded-sky';
+import { effectiveSources, forecastOnlySky, skyChoices, type StepSky } from './recorded-sky';
 import { solarSeries, type SolarSeries } from './solar';
 import { localLabel, utcIsoString } from './time-grid';
 import { generatorPlanFor, newLedger, walk, type LedgerColumns, type Scenario, type WalkResult } from './walk';
@@ -220,23 +220,20 @@ function scenarioUnder(p: Prepared, sky: StepSky | undefined): { solar: SolarSer
 export function simulateParsed(input: EngineInput): SimulationResult {
   const p = prepare(input);
   const weather = input.weather;
-  const sources = effectiveSources(weather, input.trip.stops.length);
+  const choices = skyChoices(input.trip.stops);
+  const sources = effectiveSources(weather, choices);
   const reservePct = reservePctOf(input);
-  // With a record, the trip runs once per recorded year and the planned run is the median year's.
+  // With a record, the trip runs once per recorded year and the planned run is the median year's, reused as built.
   const years =
     weather && weather.years.length > 0
-      ? runRecordYears(p, weather, reservePct, (sky) => walk(p, scenarioUnder(p, sky).scenario, null))
+      ? runRecordYears(p, weather, choices, reservePct, (sky) => {
+          const under = scenarioUnder(p, sky);
+          return { ...under, result: walk(p, under.scenario, null) };
+        })
       : undefined;
-  const forecastOnly =
-    weather && !years && sources.includes('forecast')
-      ? stepSky(
-          p,
-          seriesForRun(weather, null),
-          weather.stops.map((s) => s.recordedTemperature),
-        )
-      : undefined;
-  const sky = years?.medianSky ?? forecastOnly;
-  const { solar, scenario: planned } = scenarioUnder(p, sky);
+  const forecastOnly = years ? undefined : forecastOnlySky(p, weather, choices);
+  const sky = years?.median.sky ?? forecastOnly;
+  const { solar, scenario: planned } = years?.median.run ?? scenarioUnder(p, sky);
   const l = newLedger(p.n);
   const r = walk(p, planned, l);
   const loads = planned.loads;

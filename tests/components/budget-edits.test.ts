@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { editForFix } from '@/components/budget/apply-fix';
-import { applyWhatIf, rigWithExtraSolar } from '@/components/budget/what-if';
+import { applyWhatIf, rigWithExtraSolar, withRecord } from '@/components/budget/what-if';
 import { daysCsv, filterLedger, ledgerCsv } from '@/components/ledger/ledger-csv';
 import { DEMO_TRIPS, simulateTrip } from '@/shared/engine';
 import type { Fix } from '@/shared/engine/result-types';
@@ -8,6 +8,7 @@ import { cabinSchema } from '@/shared/schemas/rig';
 import { toEngineInput } from '@/shared/trip-to-engine-input';
 import { NO_WHAT_IF } from '@/stores/what-if-store';
 import { demoDetail } from '../e2e/fixtures';
+import { withSyntheticRecord } from '../factories/recorded-weather';
 
 const detail = demoDetail('highlandLoop');
 const input = toEngineInput(detail);
@@ -47,6 +48,18 @@ describe('what-if edits', () => {
     const worse = applyWhatIf(input, { ...NO_WHAT_IF, worseSky: true });
     expect(input.trip.stops.map((s) => s.skyOutlook)).toContain('clear');
     expect(worse.trip.stops.map((s) => s.skyOutlook)).not.toContain('clear');
+  });
+  it('when the budget runs on recorded years, then a what-if runs on the same years and only the change differs', () => {
+    const onRecord = withRecord(input, withSyntheticRecord(input, 8).weather);
+    if (!onRecord) throw new Error('no input');
+    const base = simulateTrip(onRecord).chance;
+    const bigger = simulateTrip(applyWhatIf(onRecord, { ...NO_WHAT_IF, extraBattery: true })).chance;
+    expect(base?.years).toBe(8);
+    expect(bigger?.byYear.map((y) => y.year).sort()).toEqual(base?.byYear.map((y) => y.year).sort());
+    expect(bigger?.held).toBeGreaterThanOrEqual(base?.held ?? 0);
+    expect(bigger?.worst.lowestSocPct).toBeGreaterThanOrEqual(base?.worst.lowestSocPct ?? 0);
+    // No record fetched: the plan is left as it is.
+    expect(withRecord(input, null)).toBe(input);
   });
   it('when a rig has no solar, then more solar adds an array and a controller', () => {
     const rig = rigWithExtraSolar({ ...detail.rig.rig, solarArrays: [], controller: null });
