@@ -1,4 +1,4 @@
-import { Router } from 'express';
+import { Router, type Request, type Response } from 'express';
 import type { Db } from '@/db/client';
 import { listActivity } from '@/db/queries/trips';
 import packageJson from '@/package.json';
@@ -50,15 +50,8 @@ export function tripItemsRouter(deps: TripItemsDeps): Router {
   router.use(tripExportsRouter(deps));
   router.use(tripUndoRouter(deps));
 
-  router.get('/budget', async (req, res) => {
-    let answer: BudgetAnswer | undefined;
-    try {
-      answer = await deps.budgets.forTrip(tripAccess(res).tripId);
-    } catch (error) {
-      if (!(error instanceof BudgetBusyError)) throw error;
-      res.setHeader('Retry-After', '5');
-      throw new HttpError(503, 'busy', 'Many budgets are being computed just now. Please try again in a few seconds.');
-    }
+  /** Sends a worker's ready answer: an ETag on the trip's revision (304 when it matches), else the body as it is. */
+  function sendReady(req: Request, res: Response, answer: BudgetAnswer | undefined, what: 'budget' | 'fixes'): void {
     if (!answer) throw notFound('That trip was not found.');
     if (answer.kind === 'too-large')
       throw new HttpError(
@@ -68,7 +61,7 @@ export function tripItemsRouter(deps: TripItemsDeps): Router {
       );
     // The revision changes with every edit to the trip; the app version changes when the engine
     // may compute differently, so a browser never keeps a budget from an older release.
-    const etag = `"budget-${packageJson.version}-${answer.revision}"`;
+    const etag = `"${what}-${packageJson.version}-${answer.revision}"`;
     res.setHeader('ETag', etag);
     res.setHeader('Cache-Control', 'private, no-cache');
     if (req.headers['if-none-match'] === etag) {
@@ -76,7 +69,8 @@ export function tripItemsRouter(deps: TripItemsDeps): Router {
       return;
     }
     if (answer.kind === 'none') {
-      res.json({ version: answer.revision, result: null, reason: answer.reason });
+      const empty = what === 'fixes' ? { fixes: [] } : { result: null };
+      res.json({ version: answer.revision, ...empty, reason: answer.reason });
       return;
     }
     // The worker handed the body over serialised and compressed: it is sent as it is, never parsed or compressed here.
@@ -88,6 +82,27 @@ export function tripItemsRouter(deps: TripItemsDeps): Router {
     res.setHeader('Content-Type', 'application/json; charset=utf-8');
     res.setHeader('Content-Length', String(bytes.byteLength));
     res.end(bytes);
+  }
+
+  /** Every worker busy: 503 with a time to try again. */
+  async function unlessBusy(res: Response, work: Promise<BudgetAnswer | undefined>) {
+    try {
+      return await work;
+    } catch (error) {
+      if (!(error instanceof BudgetBusyError)) throw error;
+      res.setHeader('Retry-After', '5');
+      throw new HttpError(503, 'busy', 'Many budgets are being computed just now. Please try again in a few seconds.');
+    }
+  }
+
+  router.get('/budget', async (req, res) => {
+    sendReady(req, res, await unlessBusy(res, deps.budgets.forTrip(tripAccess(res).tripId)), 'budget');
+  });
+
+  // The budget's flags with their fixes, each checked by walking the trip again: asked for apart from the budget
+  // (only when someone looks at the flags), computed in the same workers and kept per revision the same way.
+  router.get('/budget/fixes', async (req, res) => {
+    sendReady(req, res, await unlessBusy(res, deps.budgets.fixesForTrip(tripAccess(res).tripId)), 'fixes');
   });
 
   // Where each stop's weather record stands; asking also queues whatever is missing.

@@ -13,6 +13,8 @@ export type YearRuns = {
   /** The median year's sky: the planned run's. */
   medianSky: StepSky;
   socBand: { p10: number[]; p90: number[] };
+  /** Every year run, in the record's order: fixes are checked under each of them. */
+  skies: { year: number; sky: StepSky }[];
 };
 
 /** The p-quantile (0–1) of sorted values, linear between neighbours. */
@@ -74,5 +76,6 @@ export function runRecordYears(
     },
     medianSky: median.sky,
     socBand: { p10, p90 },
+    skies: years.map((y) => ({ year: y.year, sky: y.sky })),
   };
 }
