@@ -1,7 +1,7 @@
 // Fixes for an inverter overload. One appliance alone over the rating: a larger inverter (the next common size),
 // that appliance only where a hookup carries it, or only while the generator runs (checked by walking the trip with
-// that schedule: the flag clears when nothing overloads the inverter at that place any more); staggering cannot
-// help. Several together: staggering them, or a larger inverter.
+// that schedule: it clears when the inverter is never overloaded at that place while the appliance runs); staggering
+// cannot help. Several together: staggering them, or a larger inverter.
 import type { Appliance } from '../schemas/appliance';
 import type { StepLoads } from './climate';
 import { applianceTrial, shoreOnlySchedule, type FixContext } from './fixes';
@@ -19,9 +19,17 @@ function generatorOnlyFix(ctx: FixContext, flag: Flag, alone: Appliance): Fix | 
   if (!schedule) return null;
   const kind = 'appliance-generator-only' as const;
   const run = applianceTrial(ctx, alone, { kind, schedule }).planned;
+  // Cleared when, at that place, the inverter is never overloaded while this appliance runs (another appliance's
+  // overload there is a flag of its own once this one is gone).
+  const loads = run.scenario.loads;
   let stillAt = -1;
   for (let i = 0; i < run.p.n && stillAt < 0; i++)
-    if (run.p.where[i] === place && overloadedAt(run.p, run.scenario.loads, run.genHours, i)) stillAt = i;
+    if (
+      run.p.where[i] === place &&
+      overloadedAt(run.p, loads, run.genHours, i) &&
+      runningAc({ p: run.p, loads }, i).some((a) => a.id === alone.id)
+    )
+      stillAt = i;
   let lowest = 100;
   for (let i = 0; i < run.p.n; i++) lowest = Math.min(lowest, run.socPct[i] ?? 100);
   const check: FixCheck = { clears: stillAt < 0, lowestSocPct: lowest };
