@@ -3,21 +3,15 @@ import type { FlagFixes, SimulationResult } from '@/shared/engine/result-types';
 import type { EngineInputDraft } from '@/shared/schemas/engine-input';
 
 export type Simulated = { result: SimulationResult | null; error: string | null };
+export type Checked = { fixes: FlagFixes[] | null; error: string | null };
 
-// A few recent runs keyed by their input: re-rendering a screen must not re-run the engine (~50–150 ms).
-const cache = new Map<string, Simulated>();
 const KEEP = 4;
 
-export function simulateCached(input: EngineInputDraft): Simulated {
-  const key = JSON.stringify(input);
+/** A few recent answers keyed by their input, so re-rendering a screen never runs the engine again. */
+function recent<T>(cache: Map<string, T>, key: string, make: () => T): T {
   const hit = cache.get(key);
   if (hit) return hit;
-  let value: Simulated;
-  try {
-    value = { result: simulateTrip(input), error: null };
-  } catch (error) {
-    value = { result: null, error: error instanceof Error ? error.message : 'The plan could not be simulated.' };
-  }
+  const value = make();
   cache.set(key, value);
   if (cache.size > KEEP) {
     const oldest = cache.keys().next().value;
@@ -26,24 +20,28 @@ export function simulateCached(input: EngineInputDraft): Simulated {
   return value;
 }
 
-export type Checked = { fixes: FlagFixes[] | null; error: string | null };
+const message = (error: unknown, otherwise: string): string => (error instanceof Error ? error.message : otherwise);
 
-// The checked fixes of a few recent what-ifs: checking walks the trip dozens of times, so it runs once per input.
-const fixesCache = new Map<string, Checked>();
+// A budget runs in ~50–150 ms on a phone; checking its fixes walks the trip dozens of times more.
+const simulated = new Map<string, Simulated>();
+const checked = new Map<string, Checked>();
+
+export function simulateCached(input: EngineInputDraft): Simulated {
+  return recent(simulated, JSON.stringify(input), () => {
+    try {
+      return { result: simulateTrip(input), error: null };
+    } catch (error) {
+      return { result: null, error: message(error, 'The plan could not be simulated.') };
+    }
+  });
+}
 
 export function checkFixesCached(input: EngineInputDraft, key = JSON.stringify(input)): Checked {
-  const hit = fixesCache.get(key);
-  if (hit) return hit;
-  let value: Checked;
-  try {
-    value = { fixes: checkFixes(input), error: null };
-  } catch (error) {
-    value = { fixes: null, error: error instanceof Error ? error.message : 'The fixes could not be checked.' };
-  }
-  fixesCache.set(key, value);
-  if (fixesCache.size > KEEP) {
-    const oldest = fixesCache.keys().next().value;
-    if (oldest !== undefined) fixesCache.delete(oldest);
-  }
-  return value;
+  return recent(checked, key, () => {
+    try {
+      return { fixes: checkFixes(input), error: null };
+    } catch (error) {
+      return { fixes: null, error: message(error, 'The fixes could not be checked.') };
+    }
+  });
 }
