@@ -19,6 +19,7 @@ import { HeadlineFigures } from './headline-figures';
 import { PlanChance } from './plan-chance';
 import { SocChartCard } from './soc-chart-card';
 import { useBudgetView } from './use-budget-view';
+import { useFlagFixes } from './use-flag-fixes';
 import { WhatItWouldTake } from './what-it-would-take';
 import { editsForWhatIf, WhatIfPanel } from './what-if-panel';
 import { BudgetRouteMap } from '@/components/route/route-mini-map';
@@ -29,6 +30,7 @@ export function BudgetScreen({ detail }: { detail: TripDetail }) {
   // Watches the stops' weather records: the budget is fetched again as they arrive.
   useTripWeatherQuery(detail.trip.id);
   const view = useBudgetView(detail);
+  const fixes = useFlagFixes(detail.trip.id, view);
   const { apply, busy } = useApplyEdit(detail);
   const canEdit = can(detail.trip.role, 'editTrip');
   const scrollKey = `budget-${detail.trip.id}`;
@@ -100,6 +102,7 @@ export function BudgetScreen({ detail }: { detail: TripDetail }) {
             {view.whatIf ? null : <WhatItWouldTake detail={detail} />}
             <FlagList
               flags={result.flags}
+              fixes={fixes}
               days={result.days}
               detail={detail}
               canEdit={canEdit && !view.whatIf}
@@ -109,9 +112,8 @@ export function BudgetScreen({ detail }: { detail: TripDetail }) {
                   : 'Fixes can be applied once the what-ifs are kept or discarded.'
               }
               busyKey={busy}
-              onApply={(key, flag, i) => {
-                const fix = flag.fixes[i];
-                const edit = fix ? editForFix(detail, fix, result.days) : null;
+              onApply={(key, fix) => {
+                const edit = editForFix(detail, fix, result.days);
                 if (edit) void apply(key, [edit], detail.rig.version);
               }}
             />

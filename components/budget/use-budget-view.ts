@@ -1,6 +1,7 @@
 import type { BudgetResult } from '@/shared/budget-result';
 import type { LedgerRow } from '@/shared/engine/result-types';
 import type { TripDetail } from '@/shared/schemas/api';
+import type { EngineInputDraft } from '@/shared/schemas/engine-input';
 import { toEngineInput } from '@/shared/trip-to-engine-input';
 import { useBudgetQuery, useLedgerQuery } from '@/stores/queries/budget';
 import { useTripRecordQuery } from '@/stores/queries/weather';
@@ -11,12 +12,16 @@ import { applyWhatIf, withRecord } from './what-if';
 type Unready =
   { state: 'loading' } | { state: 'error'; error: unknown; retry: () => void } | { state: 'empty'; reason: string };
 
-export type BudgetView = Unready | { state: 'ready'; result: BudgetResult; whatIf: boolean };
+export type BudgetView =
+  | Unready
+  /** `version` is the server budget's (null for a what-if); `input` is what a what-if ran (null for the server's). */
+  | { state: 'ready'; result: BudgetResult; whatIf: boolean; version: number | null; input: EngineInputDraft | null };
 
 /** The hourly ledger: fetched apart from the budget, only by the screens that show it. */
 export type LedgerView = Unready | { state: 'ready'; rows: LedgerRow[] };
 
-type WhatIfRun = Simulated | { result: null; budget: null; error: string } | 'loading' | null;
+type WhatIfRun =
+  (Simulated & { input: EngineInputDraft }) | { result: null; budget: null; error: string } | 'loading' | null;
 
 /**
  * While what-ifs are on, the same engine run in the browser on the changed input, on the same recorded years as the
@@ -29,7 +34,8 @@ function useWhatIfRun(detail: TripDetail, whatIf: WhatIf): WhatIfRun {
   const input = withRecord(toEngineInput(detail), record.data?.weather);
   if (!input) return { result: null, budget: null, error: 'Add a stop to see a budget.' };
   if (record.isPending && record.fetchStatus === 'fetching') return 'loading';
-  return simulateCached(applyWhatIf(input, whatIf));
+  const changed = applyWhatIf(input, whatIf);
+  return { ...simulateCached(changed), input: changed };
 }
 
 /** The server's budget, or — while what-ifs are on — the same engine run in the browser on the changed input. */
@@ -39,14 +45,14 @@ export function useBudgetView(detail: TripDetail): BudgetView {
   const sim = useWhatIfRun(detail, whatIf);
   if (sim === 'loading') return { state: 'loading' };
   if (sim)
-    return sim.budget
-      ? { state: 'ready', result: sim.budget, whatIf: true }
+    return sim.budget && 'input' in sim
+      ? { state: 'ready', result: sim.budget, whatIf: true, version: null, input: sim.input }
       : { state: 'empty', reason: sim.error ?? '' };
   if (budget.isPending) return { state: 'loading' };
   if (budget.isError) return { state: 'error', error: budget.error, retry: () => void budget.refetch() };
   if (!budget.data.result)
     return { state: 'empty', reason: budget.data.reason ?? 'Add a stop and an appliance to see a budget.' };
-  return { state: 'ready', result: budget.data.result, whatIf: false };
+  return { state: 'ready', result: budget.data.result, whatIf: false, version: budget.data.version, input: null };
 }
 
 /**

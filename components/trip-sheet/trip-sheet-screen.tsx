@@ -15,6 +15,8 @@ import { QueryError } from '@/components/ui/query-error';
 import { Skeleton } from '@/components/ui/skeleton';
 import { Text } from '@/components/ui/text';
 import type { BudgetResult } from '@/shared/budget-result';
+import { withFixes } from '@/shared/engine/check-fixes';
+import type { FlagFixes } from '@/shared/engine/result-types';
 import { FLAG_TITLE } from '@/shared/flag-titles';
 import { distanceInUnits } from '@/shared/geo/drive-estimate';
 import { chargeTone, lowestChargeByStop } from '@/shared/route-charge';
@@ -22,7 +24,7 @@ import type { TripDetail } from '@/shared/schemas/api';
 import { PLACE_DATA_CREDIT } from '@/shared/schemas/places';
 import type { UnitSystem } from '@/shared/units';
 import { ApiError } from '@/stores/queries/api-client';
-import { useBudgetQuery } from '@/stores/queries/budget';
+import { useBudgetFixesQuery, useBudgetQuery } from '@/stores/queries/budget';
 import { useTripQuery } from '@/stores/queries/trips';
 import { useUnits } from '@/stores/units-store';
 import { Section, Table } from './sheet-parts';
@@ -112,8 +114,11 @@ function FuelPlan({ budget, units }: { budget: BudgetResult; units: UnitSystem }
   );
 }
 
-function Sheet({ detail, budget }: { detail: TripDetail; budget: BudgetResult | null }) {
+type SheetProps = { detail: TripDetail; budget: BudgetResult | null; fixes: FlagFixes[] | null };
+
+function Sheet({ detail, budget, fixes }: SheetProps) {
   const units = useUnits();
+  const flags = budget ? withFixes(budget.flags, fixes ?? []) : [];
   const where = (f: BudgetResult['flags'][number]) =>
     f.where.kind === 'stop' ? `stop ${f.where.stopIndex + 1}` : `drive ${f.where.driveIndex + 1}`;
   return (
@@ -195,7 +200,12 @@ function Sheet({ detail, budget }: { detail: TripDetail; budget: BudgetResult | 
       {budget ? (
         <Section title={`Flags and fixes (${budget.flags.length})`} testID="trip-sheet-flags">
           {budget.flags.length === 0 ? <Text variant="caption">No flags: the plan holds as it stands.</Text> : null}
-          {budget.flags.map((flag, i) => (
+          {budget.flags.length > 0 && !fixes ? (
+            <Text variant="caption" testID="trip-sheet-fixes-loading">
+              Checking fixes…
+            </Text>
+          ) : null}
+          {flags.map((flag, i) => (
             <View key={flag.id} style={styles.flag} testID={`trip-sheet-flag-${i}`}>
               <Text variant="caption" style={styles.bold}>
                 {i + 1}. {FLAG_TITLE[flag.kind]} — {localMoment(flag.atLocal)}, {where(flag)}
@@ -231,6 +241,8 @@ export function TripSheetScreen({ tripId }: { tripId: string }) {
   usePrintPage();
   const trip = useTripQuery(tripId);
   const budget = useBudgetQuery(tripId);
+  const version = budget.data?.result ? budget.data.version : null;
+  const fixes = useBudgetFixesQuery(tripId, version, (budget.data?.result?.flags.length ?? 0) > 0);
   const signedOut = trip.error instanceof ApiError && trip.error.status === 401;
   return (
     <ScrollView style={styles.page} contentContainerStyle={styles.content} testID="trip-sheet-screen">
@@ -249,7 +261,11 @@ export function TripSheetScreen({ tripId }: { tripId: string }) {
       ) : !trip.data || budget.isPending ? (
         <Skeleton testID="trip-sheet-loading" height={600} />
       ) : (
-        <Sheet detail={trip.data} budget={budget.data?.result ?? null} />
+        <Sheet
+          detail={trip.data}
+          budget={budget.data?.result ?? null}
+          fixes={fixes.data?.version === version ? fixes.data.fixes : null}
+        />
       )}
     </ScrollView>
   );

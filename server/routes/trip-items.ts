@@ -40,14 +40,17 @@ export type TripItemsDeps = {
 /** Anything shaped like an e-mail address: never shown to someone who reads the trip through a club. */
 const EMAIL_LIKE = /[^\s@<>"]+@[^\s@<>"]+\.[^\s@<>"]+/;
 
-/** The trip's budget at its current revision, or the error to answer instead (busy, too large, no such trip). */
+/**
+ * The trip's budget (or its checked fixes) at its current revision, or the error to answer instead (busy, too large,
+ * no such trip).
+ */
 async function budgetAnswer(
-  budgets: BudgetService,
+  ask: () => Promise<BudgetAnswer | undefined>,
   res: Response,
 ): Promise<Exclude<BudgetAnswer, { kind: 'too-large' }>> {
   let answer: BudgetAnswer | undefined;
   try {
-    answer = await budgets.forTrip(tripAccess(res).tripId);
+    answer = await ask();
   } catch (error) {
     if (!(error instanceof BudgetBusyError)) throw error;
     res.setHeader('Retry-After', '5');
@@ -68,7 +71,12 @@ async function budgetAnswer(
  * The revision changes with every edit to the trip; the app version changes when the engine may compute
  * differently, so a browser never keeps a budget from an older release.
  */
-function freshOrNotModified(req: Request, res: Response, part: 'budget' | 'ledger', revision: number): boolean {
+function freshOrNotModified(
+  req: Request,
+  res: Response,
+  part: 'budget' | 'ledger' | 'fixes',
+  revision: number,
+): boolean {
   const etag = `"${part}-${BUDGET_FORMAT}-${packageJson.version}-${revision}"`;
   res.setHeader('ETag', etag);
   res.setHeader('Cache-Control', 'private, no-cache');
@@ -104,7 +112,7 @@ export function tripItemsRouter(deps: TripItemsDeps): Router {
   router.use(tripUndoRouter(deps));
 
   router.get('/budget', async (req, res) => {
-    const answer = await budgetAnswer(deps.budgets, res);
+    const answer = await budgetAnswer(() => deps.budgets.forTrip(tripAccess(res).tripId), res);
     if (answer.kind === 'none') {
       if (!freshOrNotModified(req, res, 'budget', answer.revision)) return;
       res.json({ version: answer.revision, result: null, reason: answer.reason });
@@ -115,13 +123,26 @@ export function tripItemsRouter(deps: TripItemsDeps): Router {
 
   // The hourly ledger as columns, for the screens that show it; kept and sent like the budget, under its own ETag.
   router.get('/ledger', async (req, res) => {
-    const answer = await budgetAnswer(deps.budgets, res);
-    if (answer.kind === 'none') {
+    const answer = await budgetAnswer(() => deps.budgets.forTrip(tripAccess(res).tripId), res);
+    if (answer.kind === 'none' || !answer.ledgerBody) {
       if (!freshOrNotModified(req, res, 'ledger', answer.revision)) return;
-      res.json({ version: answer.revision, ledger: null, reason: answer.reason });
+      const reason = answer.kind === 'none' ? answer.reason : 'The budget has no hourly ledger.';
+      res.json({ version: answer.revision, ledger: null, reason });
       return;
     }
     if (freshOrNotModified(req, res, 'ledger', answer.revision)) sendReady(req, res, answer.ledgerBody);
+  });
+
+  // The budget's flags with their fixes, each checked by walking the trip again: asked for apart from the budget
+  // (only when someone looks at the flags), computed in the same workers and kept per revision the same way.
+  router.get('/budget/fixes', async (req, res) => {
+    const answer = await budgetAnswer(() => deps.budgets.fixesForTrip(tripAccess(res).tripId), res);
+    if (answer.kind === 'none') {
+      if (!freshOrNotModified(req, res, 'fixes', answer.revision)) return;
+      res.json({ version: answer.revision, fixes: [], reason: answer.reason });
+      return;
+    }
+    if (freshOrNotModified(req, res, 'fixes', answer.revision)) sendReady(req, res, answer.body);
   });
 
   // Where each stop's weather record stands; asking also queues whatever is missing.

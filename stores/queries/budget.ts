@@ -1,6 +1,6 @@
 import { useQuery } from '@tanstack/react-query';
 import type { BudgetResponse, LedgerResponse } from '@/shared/schemas/budget-response';
-import type { LedgerRow } from '@/shared/engine/result-types';
+import type { FlagFixes, LedgerRow } from '@/shared/engine/result-types';
 import { fromLedgerColumns } from '@/shared/ledger-columns';
 import type { ActivityEntry, Member } from '@/shared/schemas/api';
 import { apiFetch } from './api-client';
@@ -33,6 +33,25 @@ export function useLedgerQuery(tripId: string, enabled = true) {
     queryFn: () => apiFetch<LedgerResponse>(`/api/trips/${encodeURIComponent(tripId)}/ledger`),
     select: ledgerRowsOf,
     enabled,
+    staleTime: STALE.SECONDS.THIRTY,
+  });
+}
+
+export type BudgetFixesResponse = { version: number; fixes: FlagFixes[]; reason?: string };
+
+/** Keyed under the budget, so whatever refreshes the budget refreshes its fixes too. */
+export const budgetFixesKey = (tripId: string, version: number) =>
+  [...tripKeys.budget(tripId), 'fixes', version] as const;
+
+/**
+ * The checked fixes of the budget's flags: asked for only when the flags are on screen (`enabled`), and kept per
+ * budget version, so fixes of an older budget are never shown against a newer one's flags.
+ */
+export function useBudgetFixesQuery(tripId: string, version: number | null, enabled: boolean) {
+  return useQuery({
+    queryKey: budgetFixesKey(tripId, version ?? -1),
+    queryFn: () => apiFetch<BudgetFixesResponse>(`/api/trips/${encodeURIComponent(tripId)}/budget/fixes`),
+    enabled: enabled && version !== null,
     staleTime: STALE.SECONDS.THIRTY,
   });
 }

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { editForFix } from '@/components/budget/apply-fix';
 import { applyWhatIf, rigWithExtraSolar, withRecord } from '@/components/budget/what-if';
 import { daysCsv, filterLedger, ledgerCsv } from '@/components/ledger/ledger-csv';
-import { DEMO_TRIPS, simulateTrip } from '@/shared/engine';
+import { checkFixes, DEMO_TRIPS, simulateTrip, withFixes } from '@/shared/engine';
 import type { Fix } from '@/shared/engine/result-types';
 import { cabinSchema } from '@/shared/schemas/rig';
 import { toEngineInput } from '@/shared/trip-to-engine-input';
@@ -69,7 +69,8 @@ describe('what-if edits', () => {
 });
 
 describe('flag fixes as edits', () => {
-  const fixes = result.flags.flatMap((f) => f.fixes);
+  const flags = withFixes(result.flags, checkFixes(input));
+  const fixes = flags.flatMap((f) => f.fixes);
   const first = (kind: Fix['kind']) => fixes.find((f) => f.kind === kind);
 
   it.each(['add-battery', 'add-hookup-night', 'add-generator-hours', 'larger-inverter'] as const)(
@@ -89,7 +90,7 @@ describe('flag fixes as edits', () => {
   });
 
   it('when a battery fix is applied, then its energy-short flag is gone', () => {
-    const flag = result.flags.find((f) => f.kind === 'energy-short');
+    const flag = flags.find((f) => f.kind === 'energy-short');
     const fix = flag?.fixes.find((f) => f.kind === 'add-battery');
     const edit = fix ? editForFix(detail, fix, result.days) : null;
     if (edit?.kind !== 'rig') throw new Error('expected a rig edit');
@@ -99,7 +100,7 @@ describe('flag fixes as edits', () => {
 
   it('when a fix the engine says clears its flag is applied as an edit, then that stretch holds the reserve', () => {
     let checked = 0;
-    for (const flag of result.flags.filter((f) => f.kind === 'energy-short' || f.kind === 'below-reserve')) {
+    for (const flag of flags.filter((f) => f.kind === 'energy-short' || f.kind === 'below-reserve')) {
       for (const fix of flag.fixes.filter((f) => f.check?.clears)) {
         const edit = editForFix(detail, fix, result.days);
         if (!edit || edit.kind === 'stop') continue;

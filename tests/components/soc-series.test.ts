@@ -159,7 +159,6 @@ describe('flag labels', () => {
     lowest: { socPct: 0, row: 0, atUtc, atLocal: atUtc },
     drawdown: { firstRow: 0, lastRow: 0 },
     causes: [],
-    fixes: [],
   });
   const utcs = Array.from({ length: 48 }, (_, h) => Date.parse('2027-09-12T00:00:00Z') + h * 3_600_000);
 

@@ -120,11 +120,23 @@ describe('a trip leader at 1440 px', () => {
       expect(loads).toContain(name);
     await screenshot(page, 'leader-loads-desktop');
 
+    // The flags' fixes are checked apart from the budget: asked for once the flags are shown.
+    const fixesAsked: string[] = [];
+    page.on('request', (r) => {
+      if (r.url().includes('/budget/fixes')) fixesAsked.push(r.url());
+    });
     await page.click(byTestId('tab-budget'));
     await page.waitForSelector(byTestId('flag-list'));
     await page.waitForSelector(`${byTestId('soc-chart')} canvas`);
     const shortfalls = page.locator('[data-testid^="flag-energy-short"], [data-testid^="flag-below-reserve"]');
     expect(await shortfalls.count()).toBeGreaterThan(0);
+    /** Waits until the fixes of the budget on screen have arrived ("Checking fixes…" gone) and the flag offers one. */
+    const fixesShown = async (flag: ReturnType<typeof shortfalls.first>) => {
+      await expect.poll(() => page.locator(byTestId('fixes-loading')).count(), { timeout: 30_000 }).toBe(0);
+      await flag.locator('[data-testid^="fix-"]').first().waitFor({ timeout: 30_000 });
+    };
+    await fixesShown(shortfalls.first());
+    expect(fixesAsked.length).toBeGreaterThan(0);
     const shortBefore = Number((await page.textContent(byTestId('figure-short-value')))?.replace(/\D/g, ''));
     await screenshot(page, 'leader-budget-flag-desktop');
     // Apply a fix, then Undo it from the toast: the trip's records come back as they were, versions included.
@@ -148,12 +160,15 @@ describe('a trip leader at 1440 px', () => {
     await expect
       .poll(async () => Number((await page.textContent(byTestId('figure-short-value')))?.replace(/\D/g, '')))
       .toBe(shortBefore);
+    // After the undo the fixes are checked again for the budget as it was, and offered again.
+    await fixesShown(page.locator(byTestId(firstFlagId)));
     await screenshot(page, 'leader-budget-undone-desktop');
     // Apply the first flag's first fix a few times: fixes are capped at what the rig can carry, so each one must
     // lower the energy short, and the ones that clear their flag remove it.
     let shortNow = shortBefore;
     for (let round = 0; round < 3 && (await shortfalls.count()) > 0; round++) {
       const flag = shortfalls.first();
+      await fixesShown(flag);
       const clears = !((await flag.textContent()) ?? '').includes('helps, not enough alone');
       const flagId = (await flag.getAttribute('data-testid')) ?? '';
       await flag.locator('[data-testid^="fix-"]').first().click();
@@ -185,8 +200,8 @@ describe('a trip leader at 1440 px', () => {
     await page.reload();
     await page.waitForSelector(byTestId('rig-form'));
     await page.click(byTestId('rig-inverter-advanced'));
-    // The device's copy shows first; the server's answer replaces it a moment later.
-    await expect.poll(() => page.inputValue(byTestId('rig-inverter-idle'))).toBe('6');
+    // The device's saved copy can show first after a reload; the server's value follows.
+    await expect.poll(() => page.inputValue(byTestId('rig-inverter-idle')), { timeout: 15_000 }).toBe('6');
     expect(await page.getAttribute(byTestId('rig-inverter-mode-on-demand'), 'aria-checked')).toBe('true');
 
     // Dublin keeps the same clock as London in October, so the stop's times stay valid in the new zone.
