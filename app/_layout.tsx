@@ -8,6 +8,7 @@ import { useAppFonts } from '@/components/theme/use-app-fonts';
 import { useSession } from '@/stores/auth-client';
 import { createQueryClient } from '@/stores/queries/query-client';
 import { queryPersister } from '@/stores/queries/persister';
+import { shouldKeepMutation } from '@/stores/queries/offline-queue';
 import { STALE } from '@/stores/queries/stale';
 import { rememberSignedIn, wasSignedIn } from '@/stores/offline-session';
 import { useOnline } from '@/components/offline/use-online';
@@ -53,7 +54,14 @@ export default function RootLayout() {
     <PersistQueryClientProvider
       client={queryClient}
       // A new release starts from a fresh copy: its screens may read the data differently.
-      persistOptions={{ persister: queryPersister, maxAge: STALE.DAYS.SEVEN, buster: packageJson.version }}
+      persistOptions={{
+        persister: queryPersister,
+        maxAge: STALE.DAYS.SEVEN,
+        buster: packageJson.version,
+        dehydrateOptions: { shouldDehydrateMutation: shouldKeepMutation },
+      }}
+      // Changes kept on the device before a reload go out now (or, with no signal, as soon as it returns).
+      onSuccess={() => void queryClient.resumePausedMutations()}
     >
       {stack}
     </PersistQueryClientProvider>
