@@ -8,7 +8,7 @@ import { useAppFonts } from '@/components/theme/use-app-fonts';
 import { useSession } from '@/stores/auth-client';
 import { createQueryClient } from '@/stores/queries/query-client';
 import { queryPersister } from '@/stores/queries/persister';
-import { shouldKeepMutation } from '@/stores/queries/offline-queue';
+import { resumeKeptSaves, shouldKeepMutation } from '@/stores/queries/offline-queue';
 import { STALE } from '@/stores/queries/stale';
 import { rememberSignedIn, wasSignedIn } from '@/stores/offline-session';
 import { useOnline } from '@/components/offline/use-online';
@@ -61,7 +61,7 @@ export default function RootLayout() {
         dehydrateOptions: { shouldDehydrateMutation: shouldKeepMutation },
       }}
       // Changes kept on the device before a reload go out now (or, with no signal, as soon as it returns).
-      onSuccess={() => void queryClient.resumePausedMutations()}
+      onSuccess={() => resumeKeptSaves(queryClient)}
     >
       {stack}
     </PersistQueryClientProvider>

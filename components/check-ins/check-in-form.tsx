@@ -13,7 +13,13 @@ import { checkInFieldsSchema, type CheckInRecord } from '@/shared/schemas/check-
 import type { PropaneTank } from '@/shared/schemas/rig';
 import { ApiError, conflictCurrent } from '@/stores/queries/api-client';
 import { useCheckInSaveMutation, type CheckInSave } from '@/stores/queries/check-ins';
-import { queuedSaveKeys, savesWait, useQueuedConflict, useSaveWaiting } from '@/stores/queries/offline-queue';
+import {
+  queuedSaveKeys,
+  reportKeptSaveRefusal,
+  savesWait,
+  useQueuedConflict,
+  useSaveWaiting,
+} from '@/stores/queries/offline-queue';
 import { draftFromRecord, draftToFields, emptyDraft, type CheckInDraft, type CylinderChoice } from './check-in-draft';
 
 const CHOICES: { value: CylinderChoice; label: string }[] = [
@@ -80,7 +86,7 @@ export function CheckInForm({ tripId, tanks, editing, onDone }: Props) {
       setOutcome('kept');
       if (!editing) setDraft(emptyDraft(tanks.length));
       // Its outcome (a refusal included) is picked up from the queue, by whichever form is open then.
-      sent.catch(() => undefined);
+      sent.catch(reportKeptSaveRefusal);
       return;
     }
     try {

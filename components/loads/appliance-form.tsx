@@ -18,7 +18,13 @@ import { applianceFieldsSchema, type ApplianceFields } from '@/shared/schemas/ap
 import type { z } from 'zod';
 import { conflictCurrent } from '@/stores/queries/api-client';
 import { useApplianceSaveMutation, type ApplianceSave } from '@/stores/queries/appliances';
-import { queuedSaveKeys, savesWait, useQueuedConflict, useSaveWaiting } from '@/stores/queries/offline-queue';
+import {
+  queuedSaveKeys,
+  reportKeptSaveRefusal,
+  savesWait,
+  useQueuedConflict,
+  useSaveWaiting,
+} from '@/stores/queries/offline-queue';
 import { showToast } from '@/stores/toast-store';
 
 /** The fields a refusal can name, in the order they appear. */
@@ -116,7 +122,7 @@ export function ApplianceForm({ tripId, record, initial, canEdit, onSaved }: Pro
       if (savesWait()) {
         showToast(`${values.name} kept on this device; it is sent when you are back online.`);
         // A refusal is picked up from the queue, by whichever form is open then.
-        sent.then(rebase).catch(() => undefined);
+        sent.then(rebase).catch(reportKeptSaveRefusal);
         return;
       }
       try {

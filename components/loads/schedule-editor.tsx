@@ -16,7 +16,13 @@ import { toEngineInput } from '@/shared/trip-to-engine-input';
 import { fromDisplay, toDisplay } from '@/shared/units';
 import { conflictCurrent } from '@/stores/queries/api-client';
 import { useScheduleSaveMutation, type ScheduleSave } from '@/stores/queries/appliances';
-import { queuedSaveKeys, savesWait, useQueuedConflict, useSaveWaiting } from '@/stores/queries/offline-queue';
+import {
+  queuedSaveKeys,
+  reportKeptSaveRefusal,
+  savesWait,
+  useQueuedConflict,
+  useSaveWaiting,
+} from '@/stores/queries/offline-queue';
 import { useBudgetQuery } from '@/stores/queries/budget';
 import { showToast } from '@/stores/toast-store';
 import { useUnits } from '@/stores/units-store';
@@ -96,7 +102,7 @@ export function ScheduleEditor({ detail, record, canEdit }: Props) {
     if (savesWait()) {
       showToast(`Routine for ${record.appliance.name} kept on this device; it is sent when you are back online.`);
       // A refusal is picked up from the queue, by whichever editor is open then.
-      sent.then(rebase).catch(() => undefined);
+      sent.then(rebase).catch(reportKeptSaveRefusal);
       return;
     }
     try {

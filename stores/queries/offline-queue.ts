@@ -5,6 +5,7 @@ import {
   type MutationKey,
   type QueryClient,
 } from '@tanstack/react-query';
+import { showToast } from '../toast-store';
 import { ApiError, conflictCurrent } from './api-client';
 import { STALE } from './stale';
 
@@ -58,6 +59,22 @@ export const shouldKeepMutation = (mutation: MutationLike) => mutation.state.isP
 
 /** Whether a save started now would wait for the connection. */
 export const savesWait = () => !onlineManager.isOnline();
+
+/**
+ * Tells the person when a kept save was refused on its way out for a reason other than a conflict (a conflict waits
+ * in the queue for its form): no form awaits a kept save, so the refusal would otherwise pass unseen.
+ */
+export function reportKeptSaveRefusal(error: unknown): void {
+  if (conflictCurrent(error)) return;
+  const reason = error instanceof Error ? error.message : 'the server refused it.';
+  showToast(`A change kept while offline was not saved: ${reason}`, { tone: 'danger' });
+}
+
+/** Sends the saves a reload brought back from the device, in order, reporting any the server refuses. */
+export function resumeKeptSaves(queryClient: QueryClient): void {
+  for (const mutation of queryClient.getMutationCache().getAll())
+    if (mutation.state.isPaused) mutation.continue().catch(reportKeptSaveRefusal);
+}
 
 /** How many kept saves are still to reach the server. */
 export function useWaitingSaveCount(): number {

@@ -4,7 +4,8 @@ import { withKeptCheckIns } from '@/components/check-ins/kept-check-ins';
 import type { CheckInRecord } from '@/shared/schemas/check-in';
 import { conflictCurrent } from '@/stores/queries/api-client';
 import type { CheckInSave } from '@/stores/queries/check-ins';
-import { queuedSaveKeys, shouldKeepMutation } from '@/stores/queries/offline-queue';
+import { queuedSaveKeys, resumeKeptSaves, shouldKeepMutation } from '@/stores/queries/offline-queue';
+import { useToastStore } from '@/stores/toast-store';
 import { createQueryClient } from '@/stores/queries/query-client';
 import type { ScheduleSave } from '@/stores/queries/appliances';
 
@@ -76,7 +77,8 @@ describe('changes made offline', () => {
     const after = createQueryClient();
     hydrate(after, saved);
     onlineManager.setOnline(true);
-    await after.resumePausedMutations();
+    resumeKeptSaves(after);
+    await vi.waitFor(() => expect(log).toHaveLength(4));
 
     expect(sent.map((s) => `${s.method} ${s.url}`)).toEqual([
       'POST /api/trips/t1/check-ins',
@@ -113,6 +115,41 @@ describe('changes made offline', () => {
     void mutation.execute(undefined);
     await vi.waitFor(() => expect(sent).toHaveLength(1));
     expect(shouldKeepMutation(mutation)).toBe(false);
+  });
+});
+
+describe('a kept save refused on its way out', () => {
+  afterEach(() => {
+    onlineManager.setOnline(true);
+    vi.unstubAllGlobals();
+  });
+
+  it('when the server refuses a restored save for another reason than a conflict, then a toast says so', async () => {
+    onlineManager.setOnline(false);
+    vi.stubGlobal(
+      'fetch',
+      vi.fn(
+        async () =>
+          new Response(
+            JSON.stringify({ error: { code: 'unprocessable', message: 'A check-in must fall within the trip.' } }),
+            {
+              status: 422,
+            },
+          ),
+      ),
+    );
+    const before = createQueryClient();
+    void startSave(before, queuedSaveKeys.checkIn, checkIn);
+    await vi.waitFor(() => expect(before.getMutationCache().getAll()[0]?.state.isPaused).toBe(true));
+    const after = createQueryClient();
+    hydrate(after, JSON.parse(JSON.stringify(dehydrate(before, { shouldDehydrateMutation: shouldKeepMutation }))));
+    onlineManager.setOnline(true);
+    resumeKeptSaves(after);
+    await vi.waitFor(() =>
+      expect(useToastStore.getState().toasts.map((t) => t.message)).toContain(
+        'A change kept while offline was not saved: A check-in must fall within the trip.',
+      ),
+    );
   });
 });
 
