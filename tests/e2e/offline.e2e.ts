@@ -98,13 +98,17 @@ describe('offline', () => {
     expect(await page.getAttribute(byTestId('routine-strip-cell-13'), 'aria-checked')).toBe('false');
     await page.click(byTestId('routine-strip-cell-13'));
     await page.click(byTestId('schedule-save'));
-    await expect.poll(() => page.textContent(byTestId('sync-waiting'))).toContain('2 changes waiting to sync');
+    await expect
+      .poll(() => page.textContent(byTestId('sync-waiting')), { timeout: 10_000 })
+      .toContain('2 changes waiting to sync');
     await screenshotTall(page, 'offline-changes-waiting-phone');
 
     // Still offline, the page reloads: the two changes come back from the device.
-    await expect.poll(() => keptOnDevice(page)).toBe(2);
+    await expect.poll(() => keptOnDevice(page), { timeout: 10_000 }).toBe(2);
     await page.reload();
-    await expect.poll(() => page.textContent(byTestId('sync-waiting'))).toContain('2 changes waiting to sync');
+    await expect
+      .poll(() => page.textContent(byTestId('sync-waiting')), { timeout: 10_000 })
+      .toContain('2 changes waiting to sync');
 
     // Meanwhile another member changes the same routine.
     const { api: crew, close: closeCrew } = await signInOverApi(url, DEMO_CREW.email, DEMO_CREW.password);
@@ -118,24 +122,32 @@ describe('offline', () => {
     await context.setOffline(false);
     // The check-in reaches the server; the routine meets the newer version and waits for a choice.
     await expect
-      .poll(async () => {
-        const list = (await (await crew.get(`${url}/api/trips/${tripId}/check-ins`)).json()) as {
-          checkIns: CheckInRecord[];
-        };
-        return list.checkIns.map((c) => `${c.checkIn.socPct} ${c.checkIn.note}`);
-      })
+      .poll(
+        async () => {
+          const list = (await (await crew.get(`${url}/api/trips/${tripId}/check-ins`)).json()) as {
+            checkIns: CheckInRecord[];
+          };
+          return list.checkIns.map((c) => `${c.checkIn.socPct} ${c.checkIn.note}`);
+        },
+        { timeout: 20_000 },
+      )
       .toContain('71 Read at camp, no signal');
-    await page.waitForSelector(byTestId('sync-waiting'), { state: 'detached' });
+    await page.waitForSelector(byTestId('sync-waiting'), { state: 'detached', timeout: 20_000 });
     await openLaptopRoutine(page);
     await page.waitForSelector(byTestId('schedule-conflict'));
     // Nothing set offline was lost: the lit hour is still lit.
-    await expect.poll(() => page.getAttribute(byTestId('routine-strip-cell-13'), 'aria-checked')).toBe('true');
+    await expect
+      .poll(() => page.getAttribute(byTestId('routine-strip-cell-13'), 'aria-checked'), { timeout: 10_000 })
+      .toBe('true');
     await screenshotTall(page, 'offline-conflict-phone');
     await page.click(byTestId('schedule-conflict-keep-mine'));
     await page.waitForSelector(byTestId('schedule-conflict'), { state: 'detached' });
-    await expect.poll(async () => (await laptopOf(crew, url, tripId)).appliance.schedule.kind).toBe('routine');
+    await expect
+      .poll(async () => (await laptopOf(crew, url, tripId)).appliance.schedule.kind, { timeout: 10_000 })
+      .toBe('routine');
     expect(errors).toEqual([]);
     await closeCrew();
     await context.close();
-  });
+    // A long journey (first visit, offline reload, changes, a reload, back online): twice the usual time on a busy machine.
+  }, 120_000);
 });
