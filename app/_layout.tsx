@@ -1,7 +1,7 @@
 import { QueryClientProvider } from '@tanstack/react-query';
 import { PersistQueryClientProvider } from '@tanstack/react-query-persist-client';
 import { Stack } from 'expo-router';
-import { useEffect, useState } from 'react';
+import { useEffect, useEffectEvent, useState } from 'react';
 import { LoadingScreen } from '@/components/layout/loading-screen';
 import { colors } from '@/components/theme/tokens';
 import { useAppFonts } from '@/components/theme/use-app-fonts';
@@ -29,17 +29,32 @@ export default function RootLayout() {
   // invite being joined) lose their place.
   const [sessionKnown, setSessionKnown] = useState(false);
   if (!session.isPending && !sessionKnown) setSessionKnown(true);
+  // Back online, the session answer on hand is the one that failed with no signal: until it is asked again, the
+  // device's memory stands (else the app would sign out for a moment and drop the page it was on).
+  const [recheck, setRecheck] = useState({ online, pending: false });
+  if (recheck.online !== online) setRecheck({ online, pending: online });
+  const refetchSession = useEffectEvent(() => session.refetch());
+  useEffect(() => {
+    if (!recheck.pending) return;
+    let live = true;
+    void refetchSession().finally(() => {
+      if (live) setRecheck((r) => ({ ...r, pending: false }));
+    });
+    return () => {
+      live = false;
+    };
+  }, [recheck.pending]);
   // Only a definite answer from the server changes what this device remembers.
   useEffect(() => {
-    if (sessionKnown && online && !session.error) rememberSignedIn(!!session.data);
-  }, [sessionKnown, online, session.error, session.data]);
+    if (sessionKnown && online && !recheck.pending && !session.error) rememberSignedIn(!!session.data);
+  }, [sessionKnown, online, recheck.pending, session.error, session.data]);
 
   // Hold the first paint until the session is known, so nobody sees a flash of the sign-in page while already signed
   // in. Native apps also wait for the fonts; the web page draws with a fallback and swaps Nunito in.
   if (!fontsReady || !sessionKnown) return <LoadingScreen />;
 
   // With no signal the session check cannot reach the server: whoever was signed in on this device stays in.
-  const signedIn = !!session.data || ((!online || !!session.error) && wasSignedIn());
+  const signedIn = !!session.data || ((!online || recheck.pending || !!session.error) && wasSignedIn());
   const stack = (
     <Stack screenOptions={{ headerShown: false, contentStyle: { backgroundColor: colors.dune } }}>
       <Stack.Protected guard={signedIn}>
