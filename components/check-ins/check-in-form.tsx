@@ -14,8 +14,8 @@ import type { PropaneTank } from '@/shared/schemas/rig';
 import { ApiError, conflictCurrent } from '@/stores/queries/api-client';
 import { useCheckInSaveMutation, type CheckInSave } from '@/stores/queries/check-ins';
 import {
+  keptForLater,
   queuedSaveKeys,
-  reportKeptSaveRefusal,
   savesWait,
   useQueuedConflict,
   useSaveWaiting,
@@ -82,11 +82,9 @@ export function CheckInForm({ tripId, tanks, editing, onDone }: Props) {
         ? { ...result.fields, at: DateTime.now().toISO({ suppressMilliseconds: true, suppressSeconds: true }) }
         : result.fields;
     const sent = save.mutateAsync({ tripId, checkInId: editing?.id ?? null, version, checkIn });
-    if (queued) {
+    if (keptForLater(sent)) {
       setOutcome('kept');
       if (!editing) setDraft(emptyDraft(tanks.length));
-      // Its outcome (a refusal included) is picked up from the queue, by whichever form is open then.
-      sent.catch(reportKeptSaveRefusal);
       return;
     }
     try {

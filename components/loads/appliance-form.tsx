@@ -18,13 +18,7 @@ import { applianceFieldsSchema, type ApplianceFields } from '@/shared/schemas/ap
 import type { z } from 'zod';
 import { conflictCurrent } from '@/stores/queries/api-client';
 import { useApplianceSaveMutation, type ApplianceSave } from '@/stores/queries/appliances';
-import {
-  queuedSaveKeys,
-  reportKeptSaveRefusal,
-  savesWait,
-  useQueuedConflict,
-  useSaveWaiting,
-} from '@/stores/queries/offline-queue';
+import { keptForLater, queuedSaveKeys, useQueuedConflict, useSaveWaiting } from '@/stores/queries/offline-queue';
 import { showToast } from '@/stores/toast-store';
 
 /** The fields a refusal can name, in the order they appear. */
@@ -119,10 +113,8 @@ export function ApplianceForm({ tripId, record, initial, canEdit, onSaved }: Pro
         appliance: values,
         caretakerUserId: record?.caretakerUserId ?? null,
       });
-      if (savesWait()) {
+      if (keptForLater(sent, rebase)) {
         showToast(`${values.name} kept on this device; it is sent when you are back online.`);
-        // A refusal is picked up from the queue, by whichever form is open then.
-        sent.then(rebase).catch(reportKeptSaveRefusal);
         return;
       }
       try {

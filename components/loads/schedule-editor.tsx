@@ -16,13 +16,7 @@ import { toEngineInput } from '@/shared/trip-to-engine-input';
 import { fromDisplay, toDisplay } from '@/shared/units';
 import { conflictCurrent } from '@/stores/queries/api-client';
 import { useScheduleSaveMutation, type ScheduleSave } from '@/stores/queries/appliances';
-import {
-  queuedSaveKeys,
-  reportKeptSaveRefusal,
-  savesWait,
-  useQueuedConflict,
-  useSaveWaiting,
-} from '@/stores/queries/offline-queue';
+import { keptForLater, queuedSaveKeys, useQueuedConflict, useSaveWaiting } from '@/stores/queries/offline-queue';
 import { useBudgetQuery } from '@/stores/queries/budget';
 import { showToast } from '@/stores/toast-store';
 import { useUnits } from '@/stores/units-store';
@@ -99,10 +93,8 @@ export function ScheduleEditor({ detail, record, canEdit }: Props) {
     if (!valid.success) return;
     queuedConflict?.settle();
     const sent = save.mutateAsync({ tripId, applianceId: record.id, version, schedule: valid.data });
-    if (savesWait()) {
+    if (keptForLater(sent, rebase)) {
       showToast(`Routine for ${record.appliance.name} kept on this device; it is sent when you are back online.`);
-      // A refusal is picked up from the queue, by whichever editor is open then.
-      sent.then(rebase).catch(reportKeptSaveRefusal);
       return;
     }
     try {

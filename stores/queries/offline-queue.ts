@@ -70,6 +70,17 @@ export function reportKeptSaveRefusal(error: unknown): void {
   showToast(`A change kept while offline was not saved: ${reason}`, { tone: 'danger' });
 }
 
+/**
+ * Whether a save just started is kept for later (no connection): if so, the form goes on at once, `whenSent` runs
+ * should it still be open when the save goes out, and a refusal is reported (a conflict waits for its form).
+ * Otherwise the caller awaits the answer as usual.
+ */
+export function keptForLater<T>(sent: Promise<T>, whenSent?: (saved: T) => void): boolean {
+  if (!savesWait()) return false;
+  sent.then(whenSent).catch(reportKeptSaveRefusal);
+  return true;
+}
+
 /** Sends the saves a reload brought back from the device, in order, reporting any the server refuses. */
 export function resumeKeptSaves(queryClient: QueryClient): void {
   for (const mutation of queryClient.getMutationCache().getAll())
