@@ -41,7 +41,7 @@ export function useApplyEdit(detail: TripDetail) {
   const tripId = detail.trip.id;
   const rigSave = useTripRigSaveMutation(tripId);
   const stopSave = useStopSaveMutation(tripId);
-  const scheduleSave = useScheduleSaveMutation(tripId);
+  const scheduleSave = useScheduleSaveMutation();
   const undoFix = useUndoFixMutation(tripId);
   const [busy, setBusy] = useState<string | null>(null);
 
@@ -50,6 +50,7 @@ export function useApplyEdit(detail: TripDetail) {
     if (edit.kind === 'appliance')
       return (
         await scheduleSave.mutateAsync({
+          tripId,
           applianceId: edit.record.id,
           version: edit.record.version,
           schedule: edit.schedule,
