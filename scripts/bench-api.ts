@@ -8,6 +8,11 @@ import { startServer } from '../tests/e2e/server-process';
 import { loadAverage } from './load-average';
 
 const SECONDS = Number(process.env.BENCH_SECONDS ?? 10);
+/** `--cpu-prof <dir>`: the server writes a CPU profile of the whole run there when it stops (open it in DevTools). */
+const profileAt = process.argv.indexOf('--cpu-prof');
+const PROFILE_DIR = profileAt >= 0 ? (process.argv[profileAt + 1] ?? 'bench-profiles') : null;
+/** `BENCH_NODE_ARGS="--max-old-space-size=320"`: Node options for the server, to try a heap setting under load. */
+const SERVER_NODE_ARGS = process.env.BENCH_NODE_ARGS?.split(' ').filter(Boolean) ?? [];
 
 /** A process and everything it started (tsx runs the server in a child process), by id. */
 function processTree(pid: number): number[] {
@@ -83,7 +88,10 @@ async function burst(
 
 async function main(): Promise<void> {
   console.log(`load average before: ${loadAverage()}; ${SECONDS} s per burst`);
-  const server = await startServer();
+  const server = await startServer({}, [
+    ...SERVER_NODE_ARGS,
+    ...(PROFILE_DIR ? ['--cpu-prof', '--cpu-prof-dir', PROFILE_DIR] : []),
+  ]);
   try {
     const cookie = await signIn(server.url);
     const trips = (await (await fetch(`${server.url}/api/trips`, { headers: { Cookie: cookie } })).json()) as {

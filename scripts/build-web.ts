@@ -117,7 +117,7 @@ export async function ensureWebBuild({ force = false } = {}): Promise<void> {
   const offline = await makeOffline(OUT_DIR);
   console.log(`Service worker precaches ${offline.count} files (${(offline.size / 1e6).toFixed(1)} MB).`);
   console.log('Compressing scripts, fonts and the wasm (Brotli 11 and gzip) …');
-  const sizes = precompressDir(OUT_DIR);
+  const sizes = await precompressDir(OUT_DIR);
   const mb = (bytes: number): string => `${(bytes / 1e6).toFixed(2)} MB`;
   console.log(`${sizes.files} files: ${mb(sizes.raw)} raw, ${mb(sizes.gz)} gzip, ${mb(sizes.br)} Brotli.`);
   fs.writeFileSync(STAMP, `${fingerprint}\n`);

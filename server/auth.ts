@@ -23,7 +23,7 @@ const SESSION_COOKIE_CACHE_S = 5 * 60;
 
 export function createAuth(db: Db, config: AuthConfig) {
   const epochs = createSessionEpochs();
-  return betterAuth({
+  const auth = betterAuth({
     appName: 'Trailtally',
     baseURL: config.baseUrl,
     basePath: '/api/auth',
@@ -79,6 +79,8 @@ export function createAuth(db: Db, config: AuthConfig) {
     plugins: [originRefusalAdvice(config.baseUrl)],
     telemetry: { enabled: false },
   });
+  // The epochs go with the auth, so a server-side copy of a checked session can be refused by the same stamp.
+  return Object.assign(auth, { sessionEpochs: epochs });
 }
 
 export type Auth = ReturnType<typeof createAuth>;

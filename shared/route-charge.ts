@@ -1,7 +1,7 @@
 // How each stop of a route fares in the budget, for the map's markers and the trip sheet: the lowest state of
 // charge reached while there, and a tone for it. Ember: below the reserve; sunlit: within 15 points above it,
 // so a cloudier week than planned would break it; pine: comfortable.
-import type { LedgerRow } from './engine/result-types';
+import type { SocTrack } from './budget-result';
 
 export type ChargeTone = 'pine' | 'sunlit' | 'ember';
 
@@ -9,15 +9,17 @@ export type ChargeTone = 'pine' | 'sunlit' | 'ember';
 export const CLOSE_TO_RESERVE_POINTS = 15;
 
 /** The lowest charge at each stop, in route order; null for a stop the ledger never reaches. */
-export function lowestChargeByStop(ledger: readonly LedgerRow[], stopCount: number): (number | null)[] {
+export function lowestChargeByStop(
+  track: Pick<SocTrack, 'socPct' | 'whereKind' | 'whereIndex'>,
+  stopCount: number,
+): (number | null)[] {
   const lowest: (number | null)[] = Array.from({ length: stopCount }, () => null);
-  for (const row of ledger) {
-    if (row.where.kind !== 'stop') continue;
-    const i = row.where.stopIndex;
-    if (i < 0 || i >= stopCount) continue;
+  track.socPct.forEach((socPct, hour) => {
+    const i = track.whereIndex[hour] ?? -1;
+    if (track.whereKind[hour] !== 's' || i < 0 || i >= stopCount) return;
     const known = lowest[i];
-    lowest[i] = known === null || known === undefined ? row.socPct : Math.min(known, row.socPct);
-  }
+    lowest[i] = known === null || known === undefined ? socPct : Math.min(known, socPct);
+  });
   return lowest;
 }
 

@@ -65,6 +65,11 @@ export function stopWeatherRanges(stop: StopPlaceAndTime, today: Date, years: nu
   };
 }
 
+/** Whether any day of a stop lies inside the forecast's horizon from today. */
+export function insideForecastHorizon(stop: Pick<StopPlaceAndTime, 'arriveAt' | 'departAt'>, today: Date): boolean {
+  return stopWeatherRanges({ ...stop, lat: 0, lon: 0 }, today, 0).forecast !== null;
+}
+
 /** Days in an inclusive range of dates. */
 export function daysIn(range: DateRange): number {
   return Math.round((Date.parse(range.endDate) - Date.parse(range.startDate)) / DAY_MS) + 1;

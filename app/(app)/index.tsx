@@ -1,7 +1,9 @@
 import { Link } from 'expo-router';
 import { useEffect } from 'react';
 import { Pressable, StyleSheet } from 'react-native';
-import { preloadChartWhenIdle } from '@/components/budget/chart-loader';
+import { preloadChart } from '@/components/budget/chart-loader';
+import { whenIdle } from '@/components/layout/when-idle';
+import { preloadTripScreens } from '@/components/trip/lazy-trip-screens';
 import { TripList } from '@/components/trips/trip-list';
 import { colors, radii, space } from '@/components/theme/tokens';
 import { EmptyState } from '@/components/ui/empty-state';
@@ -25,8 +27,16 @@ function NewTripLink({ testID }: { testID: string }) {
 
 export default function TripsScreen() {
   const trips = useTripsQuery();
-  // Once the list has drawn, the chart's bytes come down in the background so a trip opened later draws at once.
-  useEffect(preloadChartWhenIdle, []);
+  // Once the list has drawn, a trip's screens and the chart's bytes come down in the background, so a trip opened
+  // later shows and draws at once.
+  useEffect(
+    () =>
+      whenIdle(() => {
+        preloadTripScreens();
+        preloadChart();
+      }),
+    [],
+  );
   return (
     <Screen
       testID="trips-screen"

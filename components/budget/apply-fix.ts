@@ -118,7 +118,8 @@ export function editForFix(detail: TripDetail, fix: Fix, days: DaySheet[], choic
     case 'thermostat-setting':
     case 'appliance-less':
     case 'appliance-another-time':
-    case 'appliance-shore-only': {
+    case 'appliance-shore-only':
+    case 'appliance-generator-only': {
       const change = fix.applianceEdit;
       const record = change ? detail.appliances.find((a) => a.id === change.applianceId) : undefined;
       if (!change || !record) return null;

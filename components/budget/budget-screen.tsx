@@ -20,6 +20,7 @@ import { PlanChance } from './plan-chance';
 import { SocChartCard } from './soc-chart-card';
 import { useBudgetView } from './use-budget-view';
 import { UndoLastFix } from './undo-last-fix';
+import { useFlagFixes } from './use-flag-fixes';
 import { WhatItWouldTake } from './what-it-would-take';
 import { editsForWhatIf, WhatIfPanel } from './what-if-panel';
 import { BudgetRouteMap } from '@/components/route/route-mini-map';
@@ -30,6 +31,7 @@ export function BudgetScreen({ detail }: { detail: TripDetail }) {
   // Watches the stops' weather records: the budget is fetched again as they arrive.
   useTripWeatherQuery(detail.trip.id);
   const view = useBudgetView(detail);
+  const fixes = useFlagFixes(detail.trip.id, view);
   const { apply, busy, undoLast, lastFix, undoCount } = useApplyEdit(detail);
   const canEdit = can(detail.trip.role, 'editTrip');
   const scrollKey = `budget-${detail.trip.id}`;
@@ -90,7 +92,7 @@ export function BudgetScreen({ detail }: { detail: TripDetail }) {
       <Panes
         main={
           <View style={styles.column}>
-            <SocChartCard result={result} stops={detail.stops} />
+            <SocChartCard result={result} detail={detail} />
             <DayBars days={result.days} />
           </View>
         }
@@ -104,6 +106,7 @@ export function BudgetScreen({ detail }: { detail: TripDetail }) {
             ) : null}
             <FlagList
               flags={result.flags}
+              fixes={fixes}
               days={result.days}
               detail={detail}
               canEdit={canEdit && !view.whatIf}
@@ -113,9 +116,8 @@ export function BudgetScreen({ detail }: { detail: TripDetail }) {
                   : 'Fixes can be applied once the what-ifs are kept or discarded.'
               }
               busyKey={busy}
-              onApply={(key, flag, i, choice) => {
-                const fix = flag.fixes[i];
-                const edit = fix ? editForFix(detail, fix, result.days, choice) : null;
+              onApply={(key, fix, choice) => {
+                const edit = editForFix(detail, fix, result.days, choice);
                 if (edit) void apply(key, [edit], detail.rig.version);
               }}
             />

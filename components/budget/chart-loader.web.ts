@@ -35,13 +35,3 @@ export function loadChartCanvas(): Promise<ComponentType<SocChartCanvasProps>> {
 export function preloadChart(): void {
   loadChartCanvas().catch(() => undefined);
 }
-
-/** Preloads the chart once the browser is idle (the screen has drawn); the returned function calls it off. */
-export function preloadChartWhenIdle(): () => void {
-  if (typeof window.requestIdleCallback === 'function') {
-    const id = window.requestIdleCallback(preloadChart, { timeout: 3_000 });
-    return () => window.cancelIdleCallback(id);
-  }
-  const timer = setTimeout(preloadChart, 1_000);
-  return () => clearTimeout(timer);
-}

@@ -5,26 +5,32 @@ import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { Caution } from '@/components/ui/cautions';
 import { Text } from '@/components/ui/text';
-import type { DaySheet, Flag } from '@/shared/engine/result-types';
+import { withFixes } from '@/shared/engine/check-fixes';
+import type { DaySheet, Fix, Flag } from '@/shared/engine/result-types';
 import { momentText } from '@/shared/engine/flag-text';
 import { hasMoment } from '@/shared/engine/flags';
 import { flagTitle } from '@/shared/flag-titles';
 import type { TripDetail } from '@/shared/schemas/api';
 import type { HookupSupply } from '@/shared/hookup-supply';
+import { QueryError } from '@/components/ui/query-error';
 import { editForFix, type FixChoice } from './apply-fix';
 import { HookupSupplyChoice } from './hookup-supply-choice';
+import type { FixesView } from './use-flag-fixes';
 
 type Props = {
   flags: Flag[];
+  /** The flags' checked fixes: they arrive after the flags (see use-flag-fixes.ts). */
+  fixes: FixesView;
   days: DaySheet[];
   detail: TripDetail;
   canEdit: boolean;
   readOnlyReason?: string;
   busyKey: string | null;
-  onApply: (key: string, flag: Flag, fixIndex: number, choice: FixChoice) => void;
+  onApply: (key: string, fix: Fix, choice: FixChoice) => void;
 };
 
-export function FlagList({ flags, days, detail, canEdit, readOnlyReason, busyKey, onApply }: Props) {
+export function FlagList({ flags: bare, fixes, days, detail, canEdit, readOnlyReason, busyKey, onApply }: Props) {
+  const flags = withFixes(bare, fixes.state === 'ready' ? fixes.fixes : []);
   const where = (f: Flag) =>
     f.where.kind === 'stop'
       ? (detail.stops[f.where.stopIndex]?.stop.name ?? `stop ${f.where.stopIndex + 1}`)
@@ -42,6 +48,7 @@ export function FlagList({ flags, days, detail, canEdit, readOnlyReason, busyKey
           No flags: the plan stays above the reserve all trip.
         </Text>
       ) : null}
+      {flags.length > 0 && fixes.state !== 'ready' ? <FixesPending fixes={fixes} /> : null}
       {flags.map((flag, n) => (
         <View
           key={flag.id}
@@ -86,7 +93,7 @@ export function FlagList({ flags, days, detail, canEdit, readOnlyReason, busyKey
                       accessibilityLabel={`Apply fix: ${edit.summary}`}
                       busy={busyKey === key}
                       disabled={busyKey !== null}
-                      onPress={() => onApply(key, flag, i, choice)}
+                      onPress={() => onApply(key, fix, choice)}
                     />
                   ) : null}
                 </View>
@@ -113,6 +120,16 @@ export function FlagList({ flags, days, detail, canEdit, readOnlyReason, busyKey
       ) : null}
       {hasGeneratorFix ? <Caution kind="generator" testID="caution-generator-fix" /> : null}
     </Card>
+  );
+}
+
+/** "Checking fixes…" while they are worked out, or what went wrong with a way to try again. */
+function FixesPending({ fixes }: { fixes: FixesView }) {
+  if (fixes.state === 'error') return <QueryError testID="fixes-error" error={fixes.error} onRetry={fixes.retry} />;
+  return (
+    <Text variant="caption" color="inkSoft" testID="fixes-loading" role="status">
+      Checking fixes…
+    </Text>
   );
 }
 

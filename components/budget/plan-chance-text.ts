@@ -1,5 +1,6 @@
 // The words for the chance the plan holds and for where stops' skies come from. Pure, so they are tested alone.
 import type { PlanChance, SkySummary } from '@/shared/engine/result-types';
+import type { StopSkySource } from '@/shared/schemas/trip';
 import type { StopWeatherStatus } from '@/shared/schemas/weather';
 
 const pct = (v: number) => `${Math.round(v)}%`;
@@ -26,9 +27,24 @@ export function assumedSkyText(skies: SkySummary | undefined, stopCount: number)
   return `${assumed} of ${stopCount} ${stopCount === 1 ? 'stop uses' : 'stops use'} an assumed sky`;
 }
 
-/** Where one stop's sky comes from, in a line for the Route tab. */
-export function stopSkyText(status: StopWeatherStatus | undefined, presetName: string): string {
-  const forecast = status && status.forecastDays > 0 ? `; forecast for ${status.forecastDays} days` : '';
+/** What a stop asked for: where its sky comes from, its own sky's name, and whether its low and high stand. */
+export type StopSkyChoice = { source: StopSkySource; presetName: string; ownTemperatures: boolean };
+
+/** Where one stop's sky comes from, in a line for the Route tab, with its temperatures when they are the person's. */
+export function stopSkyText(status: StopWeatherStatus | undefined, choice: StopSkyChoice): string {
+  const temperatures = choice.ownTemperatures ? ' · Temperatures: your low and high' : '';
+  return skyLine(status, choice) + temperatures;
+}
+
+function skyLine(status: StopWeatherStatus | undefined, choice: StopSkyChoice): string {
+  const { presetName } = choice;
+  const forecastDays = status?.forecastDays ?? 0;
+  if (choice.source === 'preset') return `Sky: your pick, ${presetName} (the weather record is not used)`;
+  if (choice.source === 'forecast')
+    return forecastDays > 0
+      ? `Sky from the forecast for ${forecastDays} ${forecastDays === 1 ? 'day' : 'days'}; other days assumed ${presetName}`
+      : `Sky: forecast chosen, none for this stop yet: the sky is assumed ${presetName}`;
+  const forecast = forecastDays > 0 ? `; forecast for ${forecastDays} days` : '';
   if (!status) return `Sky: ${presetName} (assumed)`;
   switch (status.state) {
     case 'loading':

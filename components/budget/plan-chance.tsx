@@ -2,14 +2,14 @@ import { StyleSheet, View } from 'react-native';
 import { space } from '@/components/theme/tokens';
 import { Card } from '@/components/ui/card';
 import { Text } from '@/components/ui/text';
-import type { SimulationResult } from '@/shared/engine/result-types';
+import type { BudgetResult } from '@/shared/budget-result';
 import { assumedSkyText, chanceHeadline, chanceYears } from './plan-chance-text';
 
 /** The Budget tab's lead: in how many past years the plan held, its median, bad and worst year, and assumed skies. */
-export function PlanChance({ result, stopCount }: { result: SimulationResult; stopCount: number }) {
+export function PlanChance({ result, stopCount }: { result: BudgetResult; stopCount: number }) {
   // A budget computed before skies were reported has neither figure: it reads as every sky assumed.
-  const chance = (result.chance as SimulationResult['chance'] | undefined) ?? null;
-  const assumed = assumedSkyText(result.skies as SimulationResult['skies'] | undefined, stopCount);
+  const chance = (result.chance as BudgetResult['chance'] | undefined) ?? null;
+  const assumed = assumedSkyText(result.skies as BudgetResult['skies'] | undefined, stopCount);
   const holdsAll = chance !== null && chance.held === chance.years;
   return (
     <Card testID="plan-chance" style={styles.card}>

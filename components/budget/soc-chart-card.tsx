@@ -9,13 +9,15 @@ import { Card } from '@/components/ui/card';
 import { SideScroll } from '@/components/ui/side-scroll';
 import { Text } from '@/components/ui/text';
 import { webData } from '@/components/ui/web-data';
-import type { SimulationResult } from '@/shared/engine/result-types';
-import type { StopRecord } from '@/shared/schemas/api';
+import type { BudgetResult } from '@/shared/budget-result';
+import type { TripDetail } from '@/shared/schemas/api';
+import { whereAt } from '@/shared/ledger-columns';
 import { SocChartSurface } from './soc-chart';
 import { dayRange, socSeries, wholeTrip, type SocSeries } from './soc-series';
 import { solarReadout } from './solar-readout';
+import { useLedgerView } from './use-budget-view';
 
-type Props = { result: SimulationResult; stops: StopRecord[] };
+type Props = { result: BudgetResult; detail: TripDetail };
 
 type Mark = 'fill' | 'dashed' | 'ring' | 'pin';
 
@@ -83,7 +85,8 @@ function RangeChips({
   );
 }
 
-export function SocChartCard({ result, stops }: Props) {
+export function SocChartCard({ result, detail }: Props) {
+  const stops = detail.stops;
   const wide = useIsWide();
   const { width } = useWindowDimensions();
   const [selected, setSelected] = useState<number | null>(null);
@@ -91,7 +94,17 @@ export function SocChartCard({ result, stops }: Props) {
   const [day, setDay] = useState<number | null>(null);
   const series = socSeries(result);
   const range = day === null || !series.days[day] ? wholeTrip(series) : dayRange(series, day);
-  const row = selected === null ? undefined : result.ledger[selected];
+  // The hour's place and charge come with the budget; its other figures from the ledger, asked for on first use.
+  const ledger = useLedgerView(detail, selected !== null);
+  const hour =
+    selected === null || selected >= result.soc.socPct.length
+      ? undefined
+      : {
+          local: result.soc.local[selected] ?? '',
+          where: whereAt(result.soc, selected),
+          socPct: result.soc.socPct[selected] ?? 0,
+        };
+  const row = selected === null || ledger.state !== 'ready' ? undefined : ledger.rows[selected];
   const solar = row ? solarReadout(row) : null;
   const step = (by: number) =>
     setSelected((s) => {
@@ -143,17 +156,27 @@ export function SocChartCard({ result, stops }: Props) {
         ))}
       </View>
       <View style={styles.readout} testID="soc-readout" aria-live="polite">
-        {row ? (
+        {hour ? (
           <>
-            <Text variant="label">{localMoment(row.local)}</Text>
+            <Text variant="label">{localMoment(hour.local)}</Text>
             <Text variant="caption" color="inkSoft">
-              {row.where.kind === 'stop' ? stopName(row.where.stopIndex) : 'On the road'} · charge{' '}
-              {text(percent(row.socPct))} · solar {text(energy(solar?.availableWh ?? 0))} available,{' '}
-              {text(energy(solar?.usedWh ?? 0))} used, {text(energy(solar?.wastedWh ?? 0))} wasted
-              {solar?.batteryFull ? ' (battery full)' : ''} · use {text(energy(row.acLoadWh + row.dcLoadWh))}
-              {row.hookupWh > 0 ? ` · hookup ${text(energy(row.hookupWh))}` : ''}
-              {row.generatorWh > 0 ? ` · generator ${text(energy(row.generatorWh))}` : ''}
-              {row.energyShortWh > 0 ? ` · short ${text(energy(row.energyShortWh))}` : ''}
+              {hour.where.kind === 'stop' ? stopName(hour.where.stopIndex) : 'On the road'} · charge{' '}
+              {text(percent(hour.socPct))}
+              {row ? (
+                <>
+                  {' '}
+                  · solar {text(energy(solar?.availableWh ?? 0))} available, {text(energy(solar?.usedWh ?? 0))} used,{' '}
+                  {text(energy(solar?.wastedWh ?? 0))} wasted
+                  {solar?.batteryFull ? ' (battery full)' : ''} · use {text(energy(row.acLoadWh + row.dcLoadWh))}
+                  {row.hookupWh > 0 ? ` · hookup ${text(energy(row.hookupWh))}` : ''}
+                  {row.generatorWh > 0 ? ` · generator ${text(energy(row.generatorWh))}` : ''}
+                  {row.energyShortWh > 0 ? ` · short ${text(energy(row.energyShortWh))}` : ''}
+                </>
+              ) : ledger.state === 'error' ? (
+                ' · this hour’s other figures could not be loaded.'
+              ) : ledger.state === 'loading' ? (
+                ' · loading this hour’s figures…'
+              ) : null}
             </Text>
           </>
         ) : (

@@ -2,7 +2,8 @@
 // functions, so the Skia chunk stays small and every layout rule (whole trip by default, labels never overprint)
 // is unit tested. Canvas text has no boxes a browser test could compare.
 import { DateTime } from 'luxon';
-import type { Flag, SimulationResult } from '@/shared/engine/result-types';
+import type { BudgetResult } from '@/shared/budget-result';
+import type { Flag } from '@/shared/engine/result-types';
 
 export type SocPoint = { x: number; soc: number; better: number; worse: number };
 export type StopMark = { x: number; stopIndex: number };
@@ -43,40 +44,42 @@ export function flagMarks(flags: Flag[], utcs: number[]): FlagMark[] {
   return [...byX.values()].sort((a, b) => a.x - b.x);
 }
 
-export function socSeries(result: SimulationResult): SocSeries {
+export function socSeries(result: BudgetResult): SocSeries {
   const band = result.band;
   // On recorded years the band is their 10th to 90th percentile, hour by hour; else one preset better and worse.
-  const years = result.socBand as SimulationResult['socBand'] | undefined;
-  const points = result.ledger.map((row, i) => ({
+  const years = result.socBand as BudgetResult['socBand'] | undefined;
+  const soc = result.soc;
+  const points = soc.socPct.map((socPct, i) => ({
     x: i,
-    soc: row.socPct,
-    better: years?.p90[i] ?? band?.better.socPct[i] ?? row.socPct,
-    worse: years?.p10[i] ?? band?.worse.socPct[i] ?? row.socPct,
+    soc: socPct,
+    better: years?.p90[i] ?? band?.better.socPct[i] ?? socPct,
+    worse: years?.p10[i] ?? band?.worse.socPct[i] ?? socPct,
   }));
   const stops: StopMark[] = [];
   let lastStop = -1;
-  result.ledger.forEach((row, i) => {
-    if (row.where.kind === 'stop' && row.where.stopIndex !== lastStop) {
-      stops.push({ x: i, stopIndex: row.where.stopIndex });
-      lastStop = row.where.stopIndex;
+  soc.whereKind.forEach((kind, i) => {
+    const stopIndex = soc.whereIndex[i] ?? -1;
+    if (kind === 's' && stopIndex !== lastStop) {
+      stops.push({ x: i, stopIndex });
+      lastStop = stopIndex;
     }
   });
   const days: DayStart[] = [];
-  result.ledger.forEach((row, i) => {
-    const date = row.local.slice(0, 10);
+  soc.local.forEach((local, i) => {
+    const date = local.slice(0, 10);
     if (date === days[days.length - 1]?.date) return;
-    const t = DateTime.fromISO(row.local, { setZone: true });
+    const t = DateTime.fromISO(local, { setZone: true });
     days.push({ x: i, dayIndex: days.length, date, label: t.isValid ? t.toFormat('ccc d') : date });
   });
-  const utcs = result.ledger.map((r) => Date.parse(r.utc));
+  const utcs = soc.utc.map((utc) => Date.parse(utc));
   const lowestX = indexAtInstant(utcs, result.headline.lowestAtUtc);
   return {
     points,
-    locals: result.ledger.map((r) => r.local),
+    locals: soc.local,
     stops,
     days,
     flags: flagMarks(result.flags, utcs),
-    lowest: { x: lowestX, soc: result.ledger[lowestX]?.socPct ?? result.headline.lowestSocPct },
+    lowest: { x: lowestX, soc: soc.socPct[lowestX] ?? result.headline.lowestSocPct },
     reservePct: result.headline.reservePct,
   };
 }

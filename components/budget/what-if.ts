@@ -2,6 +2,7 @@
 // browser and "keep this change" can send exactly the same edit to the server.
 import { shiftSky } from '@/shared/engine/sky-outlook';
 import type { EngineInputDraft } from '@/shared/schemas/engine-input';
+import type { EngineWeather } from '@/shared/schemas/engine-weather';
 import type { RigInput } from '@/shared/schemas/rig';
 import type { StopInput } from '@/shared/schemas/trip';
 import type { WhatIf, WhatIfKey } from '@/stores/what-if-store';
@@ -39,6 +40,14 @@ export const stopWithWorseSky = (stop: StopInput): StopInput => ({
   ...stop,
   skyOutlook: shiftSky(stop.skyOutlook ?? 'clear', 1),
 });
+
+/** The plan with the recorded years the server's budget runs on (none fetched, or none held: as it is). */
+export function withRecord(
+  input: EngineInputDraft | null,
+  weather: EngineWeather | null | undefined,
+): EngineInputDraft | null {
+  return input && weather ? { ...input, weather } : input;
+}
 
 export function applyWhatIf(input: EngineInputDraft, w: WhatIf): EngineInputDraft {
   let rig = input.rig;

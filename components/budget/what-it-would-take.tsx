@@ -5,9 +5,12 @@ import { Text } from '@/components/ui/text';
 import { findHeadroom } from '@/shared/engine';
 import type { HeadroomLever, HeadroomResult } from '@/shared/engine/headroom';
 import { cheapestLever } from '@/shared/engine/lever-cost';
-import { leverLine } from './headroom-lines';
+import { headroomAim, leverLine } from './headroom-lines';
 import type { TripDetail } from '@/shared/schemas/api';
 import { toEngineInput } from '@/shared/trip-to-engine-input';
+import type { EngineWeather } from '@/shared/schemas/engine-weather';
+import { useTripRecordQuery } from '@/stores/queries/weather';
+import { withRecord } from './what-if';
 
 const LEVER_NAMES: Record<HeadroomLever['lever'], string> = {
   battery: 'Extra battery',
@@ -19,8 +22,8 @@ const LEVER_NAMES: Record<HeadroomLever['lever'], string> = {
 // The last search, keyed by its input: a re-render must not search again (a few battery walks per lever).
 let last: { key: string; value: HeadroomResult | null } | null = null;
 
-function headroomFor(detail: TripDetail): HeadroomResult | null {
-  const input = toEngineInput(detail);
+function headroomFor(detail: TripDetail, weather: EngineWeather | null | undefined): HeadroomResult | null {
+  const input = withRecord(toEngineInput(detail), weather);
   if (!input) return null;
   const key = JSON.stringify(input);
   if (last?.key === key) return last.value;
@@ -36,7 +39,9 @@ function headroomFor(detail: TripDetail): HeadroomResult | null {
 
 /** The headroom finder on screen: the smallest of each lever that keeps the whole trip above the reserve. */
 export function WhatItWouldTake({ detail }: { detail: TripDetail }) {
-  const headroom = headroomFor(detail);
+  const record = useTripRecordQuery(detail, true);
+  const headroom =
+    record.isPending && record.fetchStatus === 'fetching' ? null : headroomFor(detail, record.data?.weather);
   if (!headroom) return null;
   const cheapest = cheapestLever(headroom);
   return (
@@ -46,13 +51,12 @@ export function WhatItWouldTake({ detail }: { detail: TripDetail }) {
       </Text>
       {!headroom.needed ? (
         <Text color="pine" testID="what-it-would-take-none">
-          Nothing: the plan stays above the {headroom.reservePct} % reserve all trip.
+          {headroomAim(headroom)}
         </Text>
       ) : (
         <>
           <Text variant="caption" color="inkSoft">
-            Each on its own, the smallest change that keeps the whole trip above the {headroom.reservePct} % reserve
-            (now the lowest is {headroom.baselineLowestSocPct.toFixed(0)} %).
+            {headroomAim(headroom)}
           </Text>
           {headroom.levers.map((l) => {
             const line = leverLine(l);

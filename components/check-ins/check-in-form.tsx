@@ -9,10 +9,17 @@ import { ConflictNotice } from '@/components/ui/conflict-notice';
 import { NumberField } from '@/components/ui/number-field';
 import { Text } from '@/components/ui/text';
 import { TextField } from '@/components/ui/text-field';
-import type { CheckInRecord } from '@/shared/schemas/check-in';
+import { checkInFieldsSchema, type CheckInRecord } from '@/shared/schemas/check-in';
 import type { PropaneTank } from '@/shared/schemas/rig';
 import { ApiError, conflictCurrent } from '@/stores/queries/api-client';
-import { useCheckInSaveMutation } from '@/stores/queries/check-ins';
+import { useCheckInSaveMutation, type CheckInSave } from '@/stores/queries/check-ins';
+import {
+  keptForLater,
+  queuedSaveKeys,
+  savesWait,
+  useQueuedConflict,
+  useSaveWaiting,
+} from '@/stores/queries/offline-queue';
 import { draftFromRecord, draftToFields, emptyDraft, type CheckInDraft, type CylinderChoice } from './check-in-draft';
 
 const CHOICES: { value: CylinderChoice; label: string }[] = [
@@ -36,12 +43,27 @@ export function CheckInForm({ tripId, tanks, editing, onDone }: Props) {
     editing ? draftFromRecord(editing, tanks.length) : emptyDraft(tanks.length),
   );
   const [errors, setErrors] = useState<Record<string, string>>({});
-  const [theirs, setTheirs] = useState<CheckInRecord | null>(null);
-  const [saved, setSaved] = useState(false);
-  const save = useCheckInSaveMutation(tripId);
+  const [outcome, setOutcome] = useState<'saved' | 'kept' | null>(null);
+  const [touched, setTouched] = useState(false);
+  const save = useCheckInSaveMutation();
+  const isThisReading = (v: CheckInSave) => !!editing && v.checkInId === editing.id;
+  const conflict = useQueuedConflict<CheckInSave, CheckInRecord>(queuedSaveKeys.checkIn, isThisReading);
+  const waiting = useSaveWaiting<CheckInSave>(queuedSaveKeys.checkIn, isThisReading);
+  const theirs = conflict?.theirs ?? null;
+  // A change refused after the form was closed (sent from the queue) comes back as it was typed.
+  const [shownConflict, setShownConflict] = useState<CheckInSave | null>(null);
+  if (conflict && conflict.mine !== shownConflict) {
+    setShownConflict(conflict.mine);
+    if (!touched) {
+      const mine = checkInFieldsSchema.parse(conflict.mine.checkIn);
+      const at = mine.at ?? conflict.theirs.checkIn.at;
+      setDraft(draftFromRecord({ ...conflict.theirs, checkIn: { ...mine, at } }, tanks.length));
+    }
+  }
   const zone = DateTime.local().zoneName ?? 'UTC';
   const set = (change: Partial<CheckInDraft>) => {
-    setSaved(false);
+    setOutcome(null);
+    setTouched(true);
     setDraft((d) => ({ ...d, ...change }));
   };
 
@@ -52,16 +74,28 @@ export function CheckInForm({ tripId, tanks, editing, onDone }: Props) {
       return;
     }
     setErrors({});
+    conflict?.settle();
+    // A reading kept for later is stamped now: "now" on the server would be when the signal came back.
+    const queued = savesWait();
+    const checkIn =
+      queued && !result.fields.at
+        ? { ...result.fields, at: DateTime.now().toISO({ suppressMilliseconds: true, suppressSeconds: true }) }
+        : result.fields;
+    const sent = save.mutateAsync({ tripId, checkInId: editing?.id ?? null, version, checkIn });
+    if (keptForLater(sent)) {
+      setOutcome('kept');
+      if (!editing) setDraft(emptyDraft(tanks.length));
+      return;
+    }
     try {
-      await save.mutateAsync({ checkInId: editing?.id ?? null, version, checkIn: result.fields });
-      setTheirs(null);
-      setSaved(true);
+      await sent;
+      setOutcome('saved');
+      setTouched(false);
       if (!editing) setDraft(emptyDraft(tanks.length));
       onDone?.();
     } catch (error) {
-      const current = conflictCurrent<CheckInRecord>(error);
-      if (current) setTheirs(current);
-      else if (error instanceof ApiError)
+      // A 409 is shown from the queue's record of it (below), with what was typed.
+      if (!conflictCurrent(error) && error instanceof ApiError)
         setErrors({
           form: error.message,
           ...Object.fromEntries(
@@ -147,11 +181,12 @@ export function CheckInForm({ tripId, tanks, editing, onDone }: Props) {
           what="check-in"
           theirVersion={theirs.version}
           theirs={[`${Math.round(theirs.checkIn.socPct)} %`, theirs.checkIn.note].filter(Boolean)}
-          busy={save.isPending}
+          busy={save.isPending && !waiting}
           onKeepMine={() => void submit(theirs.version)}
           onTakeTheirs={() => {
             setDraft(draftFromRecord(theirs, tanks.length));
-            setTheirs(null);
+            setTouched(false);
+            conflict?.settle();
           }}
         />
       ) : null}
@@ -159,16 +194,21 @@ export function CheckInForm({ tripId, tanks, editing, onDone }: Props) {
         <Button
           testID="check-in-save"
           label={editing ? 'Save the change' : 'Check in'}
-          busy={save.isPending}
+          busy={save.isPending && !save.isPaused}
           onPress={() => void submit()}
         />
         {editing && onDone ? (
           <Button testID="check-in-cancel" label="Cancel" tone="secondary" onPress={onDone} />
         ) : null}
       </View>
-      {saved ? (
+      {outcome === 'saved' ? (
         <Text color="pine" role="status" testID="check-in-saved">
           Saved. The forecast now starts from this reading if it is your latest.
+        </Text>
+      ) : null}
+      {outcome === 'kept' || waiting ? (
+        <Text color="lakeInk" role="status" testID="check-in-kept">
+          Kept on this phone: it is sent when you are back online.
         </Text>
       ) : null}
     </Card>

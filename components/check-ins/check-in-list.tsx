@@ -7,8 +7,10 @@ import { Card } from '@/components/ui/card';
 import { Text } from '@/components/ui/text';
 import type { CheckInRecord, PropaneReading } from '@/shared/schemas/check-in';
 import type { PropaneTank } from '@/shared/schemas/rig';
-import { useCheckInDeleteMutation } from '@/stores/queries/check-ins';
+import { useCheckInDeleteMutation, type CheckInSave } from '@/stores/queries/check-ins';
+import { queuedSaveKeys, useRefusedSaves } from '@/stores/queries/offline-queue';
 import { CheckInForm } from './check-in-form';
+import { isKept } from './kept-check-ins';
 
 function propaneText(reading: PropaneReading): string {
   if (reading.kind === 'full') return 'full';
@@ -29,6 +31,8 @@ type Props = {
 export function CheckInList({ tripId, checkIns, tanks, me, canAdd }: Props) {
   const [editing, setEditing] = useState<string | null>(null);
   const remove = useCheckInDeleteMutation(tripId);
+  // A change the server refused while it was away (someone else changed the reading) opens for a choice.
+  const refused = useRefusedSaves<CheckInSave>(queuedSaveKeys.checkIn).map((save) => save.checkInId);
   const newestFirst = [...checkIns].reverse();
   return (
     <Card testID="check-in-list">
@@ -41,7 +45,7 @@ export function CheckInList({ tripId, checkIns, tanks, me, canAdd }: Props) {
         </Text>
       ) : null}
       {newestFirst.map((c) =>
-        editing === c.id ? (
+        editing === c.id || refused.includes(c.id) ? (
           <CheckInForm
             key={`${c.id}-${c.version}`}
             tripId={tripId}
@@ -62,7 +66,12 @@ export function CheckInList({ tripId, checkIns, tanks, me, canAdd }: Props) {
               {c.checkIn.harvestWh !== null ? ` · harvest ${Math.round(c.checkIn.harvestWh)} Wh` : ''}
             </Text>
             {c.checkIn.note ? <Text variant="caption">{c.checkIn.note}</Text> : null}
-            {canAdd && c.authorId === me ? (
+            {isKept(c) ? (
+              <Text variant="caption" color="lakeInk" testID={`check-in-${c.id}-waiting`}>
+                Waiting to sync: kept on this phone until there is a signal.
+              </Text>
+            ) : null}
+            {canAdd && c.authorId === me && !isKept(c) ? (
               <View style={styles.row}>
                 <Button
                   testID={`check-in-${c.id}-edit`}

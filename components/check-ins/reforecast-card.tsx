@@ -3,7 +3,7 @@ import Svg, { Circle, Line, Path } from 'react-native-svg';
 import { colors, space } from '@/components/theme/tokens';
 import { Card } from '@/components/ui/card';
 import { Text } from '@/components/ui/text';
-import type { SimulationResult } from '@/shared/engine/result-types';
+import type { BudgetResult } from '@/shared/budget-result';
 import type { CheckInRecord } from '@/shared/schemas/check-in';
 import type { ReforecastState } from './use-reforecast';
 import { reforecastChart, reforecastHeadline, type ChartPoint } from './reforecast-view';
@@ -27,7 +27,7 @@ function areaPath(points: readonly ChartPoint[], last: number): string {
   return `${linePath(points, last)}L${xOf(end.x, last).toFixed(1)},${yOf(0)}L${xOf(first.x, last).toFixed(1)},${yOf(0)}Z`;
 }
 
-type Props = { plan: SimulationResult; state: ReforecastState; checkIns: readonly CheckInRecord[] };
+type Props = { plan: BudgetResult; state: ReforecastState; checkIns: readonly CheckInRecord[] };
 
 /** The plan as made, the readings as points and the forecast from the latest one, with its headline. */
 export function ReforecastCard({ plan, state, checkIns }: Props) {

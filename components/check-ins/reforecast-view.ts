@@ -2,7 +2,7 @@
 // (the plan as made, the readings as points, the forecast from the latest reading).
 import { DateTime } from 'luxon';
 import type { Reforecast } from '@/shared/engine/reforecast';
-import type { SimulationResult } from '@/shared/engine/result-types';
+import type { BudgetResult } from '@/shared/budget-result';
 import type { CheckInRecord } from '@/shared/schemas/check-in';
 
 /** "Tue 18:00" in the offset the time carries. */
@@ -33,13 +33,13 @@ export type ReforecastChart = {
 };
 
 /** The hour of the plan a time falls in (the first hour starting at or after it), or -1 outside the trip. */
-export function hourOf(plan: SimulationResult, iso: string): number {
+export function hourOf(plan: BudgetResult, iso: string): number {
   const ms = Date.parse(iso);
-  return plan.ledger.findIndex((row) => Date.parse(row.utc) >= ms);
+  return plan.soc.utc.findIndex((utc) => Date.parse(utc) >= ms);
 }
 
 export function reforecastChart(
-  plan: SimulationResult,
+  plan: BudgetResult,
   re: Reforecast | undefined,
   checkIns: readonly CheckInRecord[],
 ): ReforecastChart {
@@ -49,7 +49,7 @@ export function reforecastChart(
     if (x >= 0) readings.push({ id: c.id, x, soc: c.checkIn.socPct });
   }
   return {
-    plan: plan.ledger.map((row, x) => ({ x, soc: row.socPct })),
+    plan: plan.soc.socPct.map((soc, x) => ({ x, soc })),
     // The reading itself starts the forecast line, so the line leaves from the point.
     ahead: re
       ? [
@@ -58,7 +58,7 @@ export function reforecastChart(
         ]
       : [],
     readings,
-    last: plan.ledger.length,
+    last: plan.soc.socPct.length,
     reservePct: plan.headline.reservePct,
   };
 }

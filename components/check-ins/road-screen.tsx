@@ -9,9 +9,11 @@ import type { TripDetail } from '@/shared/schemas/api';
 import { can } from '@/shared/schemas/roles';
 import { useSession } from '@/stores/auth-client';
 import { useBudgetQuery } from '@/stores/queries/budget';
-import { useCheckInsQuery } from '@/stores/queries/check-ins';
+import { useCheckInsQuery, type CheckInSave } from '@/stores/queries/check-ins';
+import { queuedSaveKeys, useKeptSaves } from '@/stores/queries/offline-queue';
 import { CheckInForm } from './check-in-form';
 import { CheckInList } from './check-in-list';
+import { withKeptCheckIns } from './kept-check-ins';
 import { ReforecastCard } from './reforecast-card';
 import { StayControl } from './stay-control';
 import { reforecastFor } from './use-reforecast';
@@ -22,6 +24,7 @@ export function RoadScreen({ detail }: { detail: TripDetail }) {
   const me = useSession().data?.user.id;
   const checkIns = useCheckInsQuery(tripId);
   const budget = useBudgetQuery(tripId);
+  const kept = useKeptSaves<CheckInSave>(queuedSaveKeys.checkIn);
   const canAdd = can(detail.trip.role, 'editLoads');
   const tanks = detail.rig.rig.propaneTanks;
 
@@ -29,21 +32,20 @@ export function RoadScreen({ detail }: { detail: TripDetail }) {
   if (checkIns.isError)
     return <QueryError testID="road-error" error={checkIns.error} onRetry={() => void checkIns.refetch()} />;
   const plan = budget.data?.result;
+  const shown = withKeptCheckIns(checkIns.data, kept, tripId, 'You, waiting to sync');
   return (
     <TabScroll testID="road-screen">
       <Panes
         main={
           <View style={styles.column}>
-            {plan ? (
-              <ReforecastCard plan={plan} state={reforecastFor(detail, checkIns.data)} checkIns={checkIns.data} />
-            ) : null}
+            {plan ? <ReforecastCard plan={plan} state={reforecastFor(detail, shown)} checkIns={shown} /> : null}
             {canAdd ? <CheckInForm key={tripId} tripId={tripId} tanks={tanks} /> : null}
-            <StayControl detail={detail} checkIns={checkIns.data} />
+            <StayControl detail={detail} checkIns={shown} />
           </View>
         }
         side={
           <View style={styles.column}>
-            <CheckInList tripId={tripId} checkIns={checkIns.data} tanks={tanks} me={me} canAdd={canAdd} />
+            <CheckInList tripId={tripId} checkIns={shown} tanks={tanks} me={me} canAdd={canAdd} />
             <Caution kind="generator" />
             {tanks.length > 0 ? <Caution kind="propane" /> : null}
           </View>

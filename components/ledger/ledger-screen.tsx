@@ -1,6 +1,6 @@
 import { useState } from 'react';
 import { FlatList, StyleSheet, View } from 'react-native';
-import { useBudgetView } from '@/components/budget/use-budget-view';
+import { useBudgetView, useLedgerView } from '@/components/budget/use-budget-view';
 import { localDay, localMoment } from '@/components/format/time';
 import { useIsWide } from '@/components/theme/breakpoints';
 import { temperature } from '@/components/format/units';
@@ -55,46 +55,7 @@ function Row({ cells, header, testID, table = false }: RowProps) {
 export function LedgerScreen({ detail }: { detail: TripDetail }) {
   const view = useBudgetView(detail);
   const wide = useIsWide();
-  const [stop, setStop] = useState('all');
-  const [shortOnly, setShortOnly] = useState(false);
   const names = detail.stops.map((s) => s.stop.name);
-  const units = useUnits();
-  const tUnit = temperature(0, units).unit;
-  const cols: Col[] = [
-    { title: 'Time', width: 150, get: (r) => localMoment(r.local) },
-    {
-      title: 'Where',
-      width: 170,
-      get: (r) => (r.where.kind === 'stop' ? (names[r.where.stopIndex] ?? '') : `Drive ${r.where.driveIndex + 1}`),
-    },
-    {
-      title: 'Charge %',
-      width: 80,
-      get: (r) => String(Math.round(r.socPct)),
-      tone: (r) => (r.socPct < (view.state === 'ready' ? view.result.headline.reservePct : 0) ? 'ember' : 'ink'),
-    },
-    { title: 'Solar Wh', width: 80, get: (r) => wh(r.solarUsedWh) },
-    { title: 'Use Wh', width: 80, get: (r) => wh(r.acLoadWh + r.dcLoadWh) },
-    { title: 'Hookup Wh', width: 90, get: (r) => wh(r.hookupWh) },
-    { title: 'Vehicle Wh', width: 90, get: (r) => wh(r.vehicleWh) },
-    { title: 'Gen. Wh', width: 80, get: (r) => wh(r.generatorWh) },
-    {
-      title: 'Short Wh',
-      width: 80,
-      get: (r) => wh(r.energyShortWh),
-      tone: (r) => (r.energyShortWh > 0 ? 'ember' : 'ink'),
-    },
-    { title: `Outside ${tUnit}`, width: 80, get: (r) => temperature(r.ambientC, units).value },
-    { title: `Cabin ${tUnit}`, width: 80, get: (r) => temperature(r.cabinC, units).value },
-    { title: `Battery ${tUnit}`, width: 80, get: (r) => temperature(r.batteryC, units).value },
-    {
-      title: 'Battery gives %',
-      width: 90,
-      get: (r) => String(Math.round(r.batteryCapacityPct)),
-      tone: (r) => (r.batteryCapacityPct < 100 ? 'ember' : 'ink'),
-    },
-  ];
-  const tableWidth = cols.reduce((s, c) => s + c.width, 0) + space.md * 2;
 
   if (view.state === 'loading')
     return (
@@ -120,9 +81,7 @@ export function LedgerScreen({ detail }: { detail: TripDetail }) {
     );
 
   const { result } = view;
-  const rows = filterLedger(result.ledger, { stopIndex: stop === 'all' ? null : Number(stop), shortOnly });
   const slug = detail.trip.name.toLowerCase().replace(/[^a-z0-9]+/g, '-');
-  const header = <Row header cells={cols.map((c) => ({ text: c.title, width: c.width }))} />;
 
   return (
     <TabScroll testID="ledger-screen">
@@ -189,76 +148,133 @@ export function LedgerScreen({ detail }: { detail: TripDetail }) {
           </SideScroll>
         ) : null}
       </Card>
-      <Card testID="hourly-ledger">
-        <View style={styles.titleRow}>
-          <Text variant="title" role="heading" aria-level={2}>
-            Hour by hour
-          </Text>
-          <Button
-            testID="ledger-csv"
-            tone="secondary"
-            label="Download hours (CSV)"
-            onPress={() => downloadFile(`${slug}-ledger.csv`, ledgerCsv(rows, names))}
+      <HourlyLedger detail={detail} names={names} reservePct={result.headline.reservePct} slug={slug} />
+    </TabScroll>
+  );
+}
+
+type HourlyProps = { detail: TripDetail; names: string[]; reservePct: number; slug: string };
+
+/** The hour-by-hour table: its rows come apart from the budget, so the day sheets above never wait for them. */
+function HourlyLedger({ detail, names, reservePct, slug }: HourlyProps) {
+  const ledger = useLedgerView(detail);
+  const [stop, setStop] = useState('all');
+  const [shortOnly, setShortOnly] = useState(false);
+  const units = useUnits();
+  const tUnit = temperature(0, units).unit;
+  const cols: Col[] = [
+    { title: 'Time', width: 150, get: (r) => localMoment(r.local) },
+    {
+      title: 'Where',
+      width: 170,
+      get: (r) => (r.where.kind === 'stop' ? (names[r.where.stopIndex] ?? '') : `Drive ${r.where.driveIndex + 1}`),
+    },
+    {
+      title: 'Charge %',
+      width: 80,
+      get: (r) => String(Math.round(r.socPct)),
+      tone: (r) => (r.socPct < reservePct ? 'ember' : 'ink'),
+    },
+    { title: 'Solar Wh', width: 80, get: (r) => wh(r.solarUsedWh) },
+    { title: 'Use Wh', width: 80, get: (r) => wh(r.acLoadWh + r.dcLoadWh) },
+    { title: 'Hookup Wh', width: 90, get: (r) => wh(r.hookupWh) },
+    { title: 'Vehicle Wh', width: 90, get: (r) => wh(r.vehicleWh) },
+    { title: 'Gen. Wh', width: 80, get: (r) => wh(r.generatorWh) },
+    {
+      title: 'Short Wh',
+      width: 80,
+      get: (r) => wh(r.energyShortWh),
+      tone: (r) => (r.energyShortWh > 0 ? 'ember' : 'ink'),
+    },
+    { title: `Outside ${tUnit}`, width: 80, get: (r) => temperature(r.ambientC, units).value },
+    { title: `Cabin ${tUnit}`, width: 80, get: (r) => temperature(r.cabinC, units).value },
+    { title: `Battery ${tUnit}`, width: 80, get: (r) => temperature(r.batteryC, units).value },
+    {
+      title: 'Battery gives %',
+      width: 90,
+      get: (r) => String(Math.round(r.batteryCapacityPct)),
+      tone: (r) => (r.batteryCapacityPct < 100 ? 'ember' : 'ink'),
+    },
+  ];
+  const tableWidth = cols.reduce((s, c) => s + c.width, 0) + space.md * 2;
+
+  if (ledger.state === 'loading') return <Skeleton testID="hourly-ledger-loading" height={400} />;
+  if (ledger.state === 'error')
+    return <QueryError testID="hourly-ledger-error" error={ledger.error} onRetry={ledger.retry} />;
+  if (ledger.state === 'empty') return null;
+  const rows = filterLedger(ledger.rows, { stopIndex: stop === 'all' ? null : Number(stop), shortOnly });
+  const header = <Row header cells={cols.map((c) => ({ text: c.title, width: c.width }))} />;
+
+  return (
+    <Card testID="hourly-ledger">
+      <View style={styles.titleRow}>
+        <Text variant="title" role="heading" aria-level={2}>
+          Hour by hour
+        </Text>
+        <Button
+          testID="ledger-csv"
+          tone="secondary"
+          label="Download hours (CSV)"
+          onPress={() => downloadFile(`${slug}-ledger.csv`, ledgerCsv(rows, names))}
+        />
+      </View>
+      <ChoiceChips
+        testID="ledger-stop"
+        label="Show"
+        value={stop}
+        onChange={setStop}
+        options={[{ value: 'all', label: 'Whole trip' }, ...names.map((n, i) => ({ value: String(i), label: n }))]}
+      />
+      <ChoiceChips
+        testID="ledger-short"
+        label="Hours"
+        value={shortOnly ? 'short' : 'all'}
+        onChange={(v) => setShortOnly(v === 'short')}
+        options={[
+          { value: 'all', label: 'Every hour' },
+          { value: 'short', label: 'Only shortfalls' },
+        ]}
+      />
+      <Text variant="caption" color="inkSoft" testID="ledger-count">
+        {rows.length} of {ledger.rows.length} hours
+      </Text>
+      <SideScroll
+        testID="ledger-scroll"
+        what="More columns"
+        fadeColor={colors.card}
+        focusable
+        accessibilityLabel="Hourly ledger, scrolls sideways"
+      >
+        <View style={{ width: tableWidth }}>
+          <FlatList
+            testID="ledger-list"
+            // Focusable so keyboard users can scroll the hours (axe: scrollable-region-focusable).
+            focusable
+            accessibilityLabel="Hourly ledger rows"
+            style={styles.list}
+            data={rows}
+            keyExtractor={(r) => String(r.index)}
+            // The header is the list's first item so it sticks while the hours scroll under it.
+            ListHeaderComponent={header}
+            stickyHeaderIndices={[0]}
+            initialNumToRender={30}
+            windowSize={7}
+            getItemLayout={(_d, index) => ({ length: ROW_H, offset: HEADER_H + ROW_H * index, index })}
+            renderItem={({ item }) => (
+              <Row
+                testID={`ledger-row-${item.index}`}
+                cells={cols.map((c) => ({ text: c.get(item), width: c.width, tone: c.tone?.(item) }))}
+              />
+            )}
+            ListEmptyComponent={
+              <Text color="inkSoft" style={styles.emptyList}>
+                No hours match these filters.
+              </Text>
+            }
           />
         </View>
-        <ChoiceChips
-          testID="ledger-stop"
-          label="Show"
-          value={stop}
-          onChange={setStop}
-          options={[{ value: 'all', label: 'Whole trip' }, ...names.map((n, i) => ({ value: String(i), label: n }))]}
-        />
-        <ChoiceChips
-          testID="ledger-short"
-          label="Hours"
-          value={shortOnly ? 'short' : 'all'}
-          onChange={(v) => setShortOnly(v === 'short')}
-          options={[
-            { value: 'all', label: 'Every hour' },
-            { value: 'short', label: 'Only shortfalls' },
-          ]}
-        />
-        <Text variant="caption" color="inkSoft" testID="ledger-count">
-          {rows.length} of {result.ledger.length} hours
-        </Text>
-        <SideScroll
-          testID="ledger-scroll"
-          what="More columns"
-          fadeColor={colors.card}
-          focusable
-          accessibilityLabel="Hourly ledger, scrolls sideways"
-        >
-          <View style={{ width: tableWidth }}>
-            <FlatList
-              testID="ledger-list"
-              // Focusable so keyboard users can scroll the hours (axe: scrollable-region-focusable).
-              focusable
-              accessibilityLabel="Hourly ledger rows"
-              style={styles.list}
-              data={rows}
-              keyExtractor={(r) => String(r.index)}
-              // The header is the list's first item so it sticks while the hours scroll under it.
-              ListHeaderComponent={header}
-              stickyHeaderIndices={[0]}
-              initialNumToRender={30}
-              windowSize={7}
-              getItemLayout={(_d, index) => ({ length: ROW_H, offset: HEADER_H + ROW_H * index, index })}
-              renderItem={({ item }) => (
-                <Row
-                  testID={`ledger-row-${item.index}`}
-                  cells={cols.map((c) => ({ text: c.get(item), width: c.width, tone: c.tone?.(item) }))}
-                />
-              )}
-              ListEmptyComponent={
-                <Text color="inkSoft" style={styles.emptyList}>
-                  No hours match these filters.
-                </Text>
-              }
-            />
-          </View>
-        </SideScroll>
-      </Card>
-    </TabScroll>
+      </SideScroll>
+    </Card>
   );
 }
 

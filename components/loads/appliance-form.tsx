@@ -10,13 +10,15 @@ import { Button } from '@/components/ui/button';
 import { ChoiceChips } from '@/components/ui/choice-chips';
 import { ConflictNotice } from '@/components/ui/conflict-notice';
 import { NumberField } from '@/components/ui/number-field';
+import { Text } from '@/components/ui/text';
 import { TextField } from '@/components/ui/text-field';
 import { Caution } from '@/components/ui/cautions';
 import type { ApplianceRecord } from '@/shared/schemas/api';
 import { applianceFieldsSchema, type ApplianceFields } from '@/shared/schemas/appliance';
 import type { z } from 'zod';
 import { conflictCurrent } from '@/stores/queries/api-client';
-import { useApplianceSaveMutation } from '@/stores/queries/appliances';
+import { useApplianceSaveMutation, type ApplianceSave } from '@/stores/queries/appliances';
+import { keptForLater, queuedSaveKeys, useQueuedConflict, useSaveWaiting } from '@/stores/queries/offline-queue';
 import { showToast } from '@/stores/toast-store';
 
 /** The fields a refusal can name, in the order they appear. */
@@ -66,9 +68,12 @@ function describeDifferences(mine: Partial<Record<keyof ApplianceFields, unknown
 
 /** An appliance's own figures (name, circuit, watts, duty cycle); its routine is edited beside it. */
 export function ApplianceForm({ tripId, record, initial, canEdit, onSaved }: Props) {
-  const save = useApplianceSaveMutation(tripId);
+  const save = useApplianceSaveMutation();
   const [formError, setFormError] = useState<string>();
-  const [conflict, setConflict] = useState<ApplianceRecord | null>(null);
+  const isThisAppliance = (v: ApplianceSave) => !!record && v.applianceId === record.id;
+  const queuedConflict = useQueuedConflict<ApplianceSave, ApplianceRecord>(queuedSaveKeys.appliance, isThisAppliance);
+  const conflict = queuedConflict?.theirs ?? null;
+  const waiting = useSaveWaiting<ApplianceSave>(queuedSaveKeys.appliance, isThisAppliance);
   const { control, handleSubmit, reset, formState, getValues, setError } = useForm<
     z.input<typeof applianceFieldsSchema>,
     unknown,
@@ -78,6 +83,11 @@ export function ApplianceForm({ tripId, record, initial, canEdit, onSaved }: Pro
   // The version this form was opened on: a save names it, so a change made meanwhile by someone else gets a 409.
   const baseVersion = useRef(record?.version);
   const { isDirty } = formState;
+  // A change refused after this form was closed (sent from the queue) comes back as it was typed.
+  const refusedMine = queuedConflict?.mine.appliance;
+  useEffect(() => {
+    if (refusedMine && !isDirty) reset(refusedMine, { keepDefaultValues: true });
+  }, [refusedMine, isDirty, reset]);
   useEffect(() => {
     // A newer record with nothing typed yet is simply shown; with typing in progress, the save decides.
     if (record && record.version !== baseVersion.current && !isDirty) {
@@ -86,26 +96,35 @@ export function ApplianceForm({ tripId, record, initial, canEdit, onSaved }: Pro
     }
   }, [record, isDirty, reset]);
 
+  const rebase = (saved: ApplianceRecord) => {
+    baseVersion.current = saved.version;
+    reset(fieldsOf(saved));
+    onSaved(saved);
+  };
+
   const send = (version: number | undefined) =>
     handleSubmit(async (values) => {
       setFormError(undefined);
+      queuedConflict?.settle();
+      const sent = save.mutateAsync({
+        tripId,
+        applianceId: record?.id ?? null,
+        version,
+        appliance: values,
+        caretakerUserId: record?.caretakerUserId ?? null,
+      });
+      if (keptForLater(sent, rebase)) {
+        showToast(`${values.name} kept on this device; it is sent when you are back online.`);
+        return;
+      }
       try {
-        const saved = await save.mutateAsync({
-          applianceId: record?.id ?? null,
-          version,
-          appliance: values,
-          caretakerUserId: record?.caretakerUserId ?? null,
-        });
-        setConflict(null);
+        const saved = await sent;
         showToast(`${values.name} saved`);
-        baseVersion.current = saved.version;
-        reset(fieldsOf(saved));
-        onSaved(saved);
+        rebase(saved);
       } catch (error) {
-        const current = conflictCurrent<ApplianceRecord>(error);
-        if (current) setConflict(current);
-        // The form keeps what the person typed; refusals land beside their fields.
-        else
+        // A 409 is shown from the queue's record of it, with what was typed; other refusals land beside their
+        // fields.
+        if (!conflictCurrent(error))
           setFormError(
             showServerRefusal(error, {
               order: APPLIANCE_FIELD_ORDER,
@@ -207,14 +226,19 @@ export function ApplianceForm({ tripId, record, initial, canEdit, onSaved }: Pro
           what="appliance"
           theirVersion={conflict.version}
           theirs={describeDifferences(getValues(), fieldsOf(conflict))}
-          busy={save.isPending}
+          busy={save.isPending && !waiting}
           onKeepMine={() => void send(conflict.version)()}
           onTakeTheirs={() => {
             reset(fieldsOf(conflict));
             baseVersion.current = conflict.version;
-            setConflict(null);
+            queuedConflict?.settle();
           }}
         />
+      ) : null}
+      {waiting ? (
+        <Text color="lakeInk" role="status" testID="appliance-kept">
+          Kept on this device: it is sent when you are back online.
+        </Text>
       ) : null}
       {canEdit ? (
         <Button

@@ -15,7 +15,8 @@ import { scheduleSchema, type Schedule } from '@/shared/schemas/appliance';
 import { toEngineInput } from '@/shared/trip-to-engine-input';
 import { fromDisplay, toDisplay } from '@/shared/units';
 import { conflictCurrent } from '@/stores/queries/api-client';
-import { useScheduleSaveMutation } from '@/stores/queries/appliances';
+import { useScheduleSaveMutation, type ScheduleSave } from '@/stores/queries/appliances';
+import { keptForLater, queuedSaveKeys, useQueuedConflict, useSaveWaiting } from '@/stores/queries/offline-queue';
 import { useBudgetQuery } from '@/stores/queries/budget';
 import { showToast } from '@/stores/toast-store';
 import { useUnits } from '@/stores/units-store';
@@ -40,7 +41,8 @@ const STRIPS: { value: StripKey; label: string }[] = [
 /** The routine editor; changes are a draft (with a live estimate) until "Save routine". */
 export function ScheduleEditor({ detail, record, canEdit }: Props) {
   const units = useUnits();
-  const save = useScheduleSaveMutation(detail.trip.id);
+  const tripId = detail.trip.id;
+  const save = useScheduleSaveMutation();
   const budget = useBudgetQuery(detail.trip.id);
   const [draft, setDraft] = useState<Schedule>(record.appliance.schedule);
   const [base, setBase] = useState({ id: record.id, version: record.version, schedule: record.appliance.schedule });
@@ -50,8 +52,20 @@ export function ScheduleEditor({ detail, record, canEdit }: Props) {
     const ws = s.kind === 'routine' ? s.windows : s.kind === 'thermostat' ? (s.activeWindows ?? []) : [];
     return STRIPS.find((o) => ws.some((w) => stripOf(w.days) === o.value))?.value ?? 'all';
   });
-  const [conflict, setConflict] = useState<ApplianceRecord | null>(null);
+  const isThisAppliance = (v: ScheduleSave) => v.applianceId === record.id;
+  const queuedConflict = useQueuedConflict<ScheduleSave, ApplianceRecord>(
+    queuedSaveKeys.applianceSchedule,
+    isThisAppliance,
+  );
+  const conflict = queuedConflict?.theirs ?? null;
+  const waiting = useSaveWaiting<ScheduleSave>(queuedSaveKeys.applianceSchedule, isThisAppliance);
   const dirty = JSON.stringify(draft) !== JSON.stringify(base.schedule);
+  // A routine refused after this editor was closed (sent from the queue) comes back as it was set.
+  const [shownConflict, setShownConflict] = useState<ScheduleSave | null>(null);
+  if (queuedConflict && queuedConflict.mine !== shownConflict) {
+    setShownConflict(queuedConflict.mine);
+    if (!dirty) setDraft(queuedConflict.mine.schedule);
+  }
   // A newer record from the server replaces the draft only while nothing is being edited; otherwise the
   // save names the version the draft started from and a conflict asks the user.
   if ((base.id !== record.id || base.version !== record.version) && !dirty && !conflict) {
@@ -72,17 +86,24 @@ export function ScheduleEditor({ detail, record, canEdit }: Props) {
   const preview = input ? simulateCached(input).result : null;
   const before = budget.data?.result?.headline.lowestSocPct;
 
+  const rebase = (saved: ApplianceRecord) =>
+    setBase({ id: saved.id, version: saved.version, schedule: saved.appliance.schedule });
+
   const submit = async (version: number) => {
     if (!valid.success) return;
+    queuedConflict?.settle();
+    const sent = save.mutateAsync({ tripId, applianceId: record.id, version, schedule: valid.data });
+    if (keptForLater(sent, rebase)) {
+      showToast(`Routine for ${record.appliance.name} kept on this device; it is sent when you are back online.`);
+      return;
+    }
     try {
-      const saved = await save.mutateAsync({ applianceId: record.id, version, schedule: valid.data });
-      setBase({ id: saved.id, version: saved.version, schedule: saved.appliance.schedule });
-      setConflict(null);
+      rebase(await sent);
       showToast(`Routine saved for ${record.appliance.name}`);
     } catch (error) {
-      const current = conflictCurrent<ApplianceRecord>(error);
-      if (current) setConflict(current);
-      else showToast(error instanceof Error ? error.message : 'The routine could not be saved.', { tone: 'danger' });
+      // A 409 is shown from the queue's record of it, with the routine as it was set.
+      if (!conflictCurrent(error))
+        showToast(error instanceof Error ? error.message : 'The routine could not be saved.', { tone: 'danger' });
     }
   };
 
@@ -242,8 +263,8 @@ export function ScheduleEditor({ detail, record, canEdit }: Props) {
             Lowest charge with this routine: {text(percent(preview.headline.lowestSocPct))}
             {before !== undefined ? ` (saved plan: ${text(percent(before))})` : ''}
           </Text>
-          <Text variant="caption" color="inkSoft">
-            Not saved yet.
+          <Text variant="caption" color="inkSoft" testID="routine-preview-state">
+            {waiting ? 'Kept on this device: waiting to sync.' : 'Not saved yet.'}
           </Text>
         </View>
       ) : null}
@@ -252,12 +273,12 @@ export function ScheduleEditor({ detail, record, canEdit }: Props) {
           testID="schedule-conflict"
           what="appliance"
           theirVersion={conflict.version}
-          busy={save.isPending}
+          busy={save.isPending && !waiting}
           onKeepMine={() => void submit(conflict.version)}
           onTakeTheirs={() => {
-            setBase({ id: conflict.id, version: conflict.version, schedule: conflict.appliance.schedule });
+            rebase(conflict);
             setDraft(conflict.appliance.schedule);
-            setConflict(null);
+            queuedConflict?.settle();
           }}
         />
       ) : null}
@@ -266,8 +287,8 @@ export function ScheduleEditor({ detail, record, canEdit }: Props) {
           <Button
             testID="schedule-save"
             label="Save routine"
-            busy={save.isPending}
-            disabled={!dirty || !valid.success}
+            busy={save.isPending && !waiting}
+            disabled={!dirty || !valid.success || waiting}
             onPress={() => void submit(base.version)}
           />
           {dirty ? (

@@ -4,22 +4,27 @@ import { StyleSheet, View } from 'react-native';
 import { colors, radii, space } from '@/components/theme/tokens';
 import { Button } from '@/components/ui/button';
 import { Text } from '@/components/ui/text';
+import { useWaitingSaveCount } from '@/stores/queries/offline-queue';
 import { useAppUpdate } from './use-app-update';
 import { useOnline } from './use-online';
 import { dataAge } from './data-age';
 
-/** "You're offline" with the age of what is shown, and "updated — reload" after a new release took over. */
+/**
+ * "You're offline" with the age of what is shown, how many changes are waiting to sync, and "updated — reload" after
+ * a new release took over.
+ */
 export function ConnectionBanners() {
   const online = useOnline();
   const updated = useAppUpdate();
   const queryClient = useQueryClient();
+  const waiting = useWaitingSaveCount();
   // The age is read once a minute: precise enough for "saved 3 h ago".
   const [now, setNow] = useState(() => Date.now());
   useEffect(() => {
     const timer = setInterval(() => setNow(Date.now()), 60_000);
     return () => clearInterval(timer);
   }, []);
-  if (online && !updated) return null;
+  if (online && !updated && waiting === 0) return null;
   const newest = Math.max(
     0,
     ...queryClient
@@ -36,7 +41,17 @@ export function ConnectionBanners() {
             {newest > 0
               ? `Showing what this device saved ${dataAge(newest, now)}. `
               : 'Nothing saved on this device yet. '}
-            Changes can be saved once you are back online.
+            Check-ins, appliances and routines you change are kept here and sent when you are back online.
+          </Text>
+        </View>
+      ) : null}
+      {waiting > 0 ? (
+        <View style={[styles.banner, styles.waiting]} testID="sync-waiting" role="status">
+          <Text variant="label">
+            {waiting === 1 ? '1 change waiting to sync' : `${waiting} changes waiting to sync`}
+          </Text>
+          <Text variant="caption">
+            {online ? 'Sending now, in the order they were made.' : 'They go out in order once there is a signal.'}
           </Text>
         </View>
       ) : null}
@@ -60,5 +75,6 @@ const styles = StyleSheet.create({
   wrap: { padding: space.lg, paddingBottom: 0, gap: space.sm },
   banner: { padding: space.md, borderRadius: radii.md, gap: space.xs, borderWidth: 1 },
   offline: { backgroundColor: colors.infoSoft, borderColor: colors.lake },
+  waiting: { backgroundColor: colors.sunlitSoft, borderColor: colors.sunlit },
   updated: { backgroundColor: colors.pineSoft, borderColor: colors.pine },
 });

@@ -1,6 +1,6 @@
 import { lazy, Suspense } from 'react';
 import { Skeleton } from '@/components/ui/skeleton';
-import type { SimulationResult } from '@/shared/engine/result-types';
+import type { BudgetResult } from '@/shared/budget-result';
 import { chargeTone, lowestChargeByStop } from '@/shared/route-charge';
 import type { StopRecord } from '@/shared/schemas/api';
 import type { MapStop, RouteMapProps } from './route-map-types';
@@ -18,8 +18,8 @@ export function RouteMap(props: RouteMapProps) {
 }
 
 /** The map's stops from the trip and, when there is one, its budget. */
-export function mapStops(stops: readonly StopRecord[], budget: SimulationResult | null): MapStop[] {
-  const lowest = budget ? lowestChargeByStop(budget.ledger, stops.length) : [];
+export function mapStops(stops: readonly StopRecord[], budget: BudgetResult | null): MapStop[] {
+  const lowest = budget ? lowestChargeByStop(budget.soc, stops.length) : [];
   const reserve = budget?.headline.reservePct ?? 0;
   return stops.map((record, i) => {
     const low = lowest[i] ?? null;

@@ -1,14 +1,14 @@
 import { useRouter } from 'expo-router';
 import { Card } from '@/components/ui/card';
 import { Text } from '@/components/ui/text';
-import type { SimulationResult } from '@/shared/engine/result-types';
+import type { BudgetResult } from '@/shared/budget-result';
 import { chargeTone } from '@/shared/route-charge';
 import type { TripDetail } from '@/shared/schemas/api';
 import type { TripSummary } from '@/shared/schemas/trip-summary';
 import { mapStops, RouteMap } from './route-map';
 
 /** The Budget tab's small map: each marker opens its stop on the Route tab. */
-export function BudgetRouteMap({ detail, result }: { detail: TripDetail; result: SimulationResult }) {
+export function BudgetRouteMap({ detail, result }: { detail: TripDetail; result: BudgetResult }) {
   const router = useRouter();
   if (detail.stops.length === 0) return null;
   return (

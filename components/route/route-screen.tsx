@@ -95,7 +95,11 @@ export function RouteScreen({ detail, initialStopId }: { detail: TripDetail; ini
         <Text variant="caption" color="inkSoft" testID={`stop-${i}-sky`}>
           {stopSkyText(
             weather.data?.stops.find((w) => w.stopId === record.id),
-            (SKY[s.skyOutlook] ?? s.skyOutlook).toLowerCase(),
+            {
+              source: s.skySource,
+              presetName: (SKY[s.skyOutlook] ?? s.skyOutlook).toLowerCase(),
+              ownTemperatures: s.ownTemperatures,
+            },
           )}
         </Text>
         {canEdit ? (

@@ -10,10 +10,12 @@ import {
   type SkyOutlook,
   type Stop,
   type StopInput,
+  type StopSkySource,
 } from '@/shared/schemas/trip';
 import { fieldsSound, RUN_WITH_OTHER_ERRORS } from '@/shared/schemas/cross-field';
 import { timeZoneSchema } from '@/shared/schemas/common';
 import { fromDisplay, toDisplay, type UnitSystem } from '@/shared/units';
+import { insideForecastHorizon } from '@/shared/weather-ranges';
 
 const LOCAL = 'yyyy-MM-dd HH:mm';
 
@@ -71,6 +73,7 @@ const stopFieldsSchema = z.object({
   deciduous: z.boolean(),
   horizon: z.string(),
   canopyPct: z.number({ error: 'Enter a share from 0 to 100.' }).min(0).max(100),
+  skySource: z.enum(['record', 'forecast', 'preset']),
   skyOutlook: z.enum(['clear', 'hazy', 'broken-cloud', 'overcast']),
   hookupOn: z.boolean(),
   amps: z.number({ error: 'Enter the amps.' }).positive().max(100),
@@ -78,6 +81,7 @@ const stopFieldsSchema = z.object({
   generatorOn: z.boolean(),
   generatorStart: hourField(),
   generatorEnd: hourField(),
+  ownTemperatures: z.boolean(),
   low: z.number({ error: 'Enter the expected low.' }),
   high: z.number({ error: 'Enter the expected high.' }),
   notes: z.string().max(4000),
@@ -140,6 +144,7 @@ export function toFormValues(
     deciduous: exposure.kind === 'canopy' && exposure.deciduous,
     horizon: exposure.kind === 'custom' ? exposure.horizonDeg.join(', ') : '0, 0, 0, 0, 0, 0, 0, 0',
     canopyPct: exposure.kind === 'custom' ? Math.round(exposure.canopyTransmittance * 100) : 0,
+    skySource: stop?.skySource ?? 'record',
     skyOutlook: stop?.skyOutlook ?? 'clear',
     hookupOn: !!stop?.hookup,
     amps: stop?.hookup?.amps ?? 16,
@@ -147,6 +152,7 @@ export function toFormValues(
     generatorOn: stop ? stop.generatorHours !== null : true,
     generatorStart: stop?.generatorHours?.startHour ?? 8,
     generatorEnd: stop?.generatorHours?.endHour ?? 20,
+    ownTemperatures: stop?.ownTemperatures ?? false,
     low: t(stop?.lowC ?? 8),
     high: t(stop?.highC ?? 18),
     notes,
@@ -183,6 +189,9 @@ const FIELD_OF: Record<string, keyof StopFormValues> = {
   exposure: 'horizon',
   highC: 'high',
   lowC: 'low',
+  skySource: 'skySource',
+  skyOutlook: 'skyOutlook',
+  ownTemperatures: 'ownTemperatures',
   hookup: 'amps',
   generatorHours: 'generatorStart',
 };
@@ -217,10 +226,12 @@ export function fromFormValues(v: StopFormValues, units: UnitSystem): StopFromFo
         ? canopyExposure(v)
         : { kind: 'custom', horizonDeg, canopyTransmittance: v.canopyPct / 100 },
     skyOutlook: v.skyOutlook as SkyOutlook,
+    skySource: v.skySource,
     hookup: v.hookupOn ? { amps: v.amps, volts: v.volts } : null,
     generatorHours: v.generatorOn ? { startHour: v.generatorStart, endHour: v.generatorEnd } : null,
     lowC: Math.round(fromDisplay(v.low, 'temperature', units) * 10) / 10,
     highC: Math.round(fromDisplay(v.high, 'temperature', units) * 10) / 10,
+    ownTemperatures: v.ownTemperatures,
   };
   const parsed = stopSchema.safeParse(stop);
   if (parsed.success) return { ok: true, stop };
@@ -230,4 +241,18 @@ export function fromFormValues(v: StopFormValues, units: UnitSystem): StopFromFo
     if (field && !errors[field]) errors[field] = issue.message;
   }
   return { ok: false, errors };
+}
+
+/**
+ * The sky sources the form offers: the forecast only while some day of the stop lies inside its horizon (or when
+ * the stop already uses it, so the saved choice stays visible).
+ */
+export function skySourceOptions(
+  v: Pick<StopFormValues, 'arrive' | 'depart' | 'timeZone' | 'skySource'>,
+  today: Date,
+): StopSkySource[] {
+  const arriveAt = LOCAL_PATTERN.test(v.arrive) ? localToIso(v.arrive, v.timeZone) : null;
+  const departAt = LOCAL_PATTERN.test(v.depart) ? localToIso(v.depart, v.timeZone) : null;
+  const near = !!arriveAt && !!departAt && insideForecastHorizon({ arriveAt, departAt }, today);
+  return near || v.skySource === 'forecast' ? ['record', 'forecast', 'preset'] : ['record', 'preset'];
 }

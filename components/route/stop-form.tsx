@@ -33,6 +33,7 @@ import {
 } from './stop-form-values';
 import { NearestTowns } from './nearest-towns';
 import { PlaceSearchField } from './place-search-field';
+import { StopSkyFields, StopTemperatureSource } from './stop-sky-fields';
 
 type Props = {
   tripId: string;
@@ -371,24 +372,7 @@ export function StopForm({ tripId, record, fallbackZone, onDone, newStopTimes }:
           <Num control={control} name="canopyPct" label="Light through the cover" unit="%" testID="stop-canopy" />
         </View>
       )}
-      <Controller
-        control={control}
-        name="skyOutlook"
-        render={({ field }) => (
-          <ChoiceChips
-            testID="stop-sky"
-            label="Sky outlook"
-            value={field.value}
-            onChange={field.onChange}
-            options={[
-              { value: 'clear', label: 'Clear' },
-              { value: 'hazy', label: 'Hazy or smoke' },
-              { value: 'broken-cloud', label: 'Broken cloud' },
-              { value: 'overcast', label: 'Overcast' },
-            ]}
-          />
-        )}
-      />
+      <StopSkyFields control={control} />
       <Controller
         control={control}
         name="hookupOn"
@@ -436,6 +420,7 @@ export function StopForm({ tripId, record, fallbackZone, onDone, newStopTimes }:
           <Caution kind="generator" testID="caution-generator-stop" />
         </>
       ) : null}
+      <StopTemperatureSource control={control} />
       <View style={styles.grid}>
         <Num control={control} name="low" label="Expected low" unit={tUnit} testID="stop-low" />
         <Num control={control} name="high" label="Expected high" unit={tUnit} testID="stop-high" />

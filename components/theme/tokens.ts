@@ -21,6 +21,7 @@ export const colors = {
   emberInk: '#A8431A',
   lakeInk: '#2C5F8C',
   infoSoft: '#E4EEF7',
+  sunlitSoft: '#FDF1D6',
 } as const;
 
 export type ColorName = keyof typeof colors;

@@ -14,7 +14,9 @@ import { CAUTIONS } from '@/components/ui/cautions';
 import { QueryError } from '@/components/ui/query-error';
 import { Skeleton } from '@/components/ui/skeleton';
 import { Text } from '@/components/ui/text';
-import type { SimulationResult } from '@/shared/engine/result-types';
+import type { BudgetResult } from '@/shared/budget-result';
+import { withFixes } from '@/shared/engine/check-fixes';
+import type { FlagFixes } from '@/shared/engine/result-types';
 import { FLAG_TITLE } from '@/shared/flag-titles';
 import { distanceInUnits } from '@/shared/geo/drive-estimate';
 import { chargeTone, lowestChargeByStop } from '@/shared/route-charge';
@@ -22,7 +24,7 @@ import type { TripDetail } from '@/shared/schemas/api';
 import { PLACE_DATA_CREDIT } from '@/shared/schemas/places';
 import type { UnitSystem } from '@/shared/units';
 import { ApiError } from '@/stores/queries/api-client';
-import { useBudgetQuery } from '@/stores/queries/budget';
+import { useBudgetFixesQuery, useBudgetQuery } from '@/stores/queries/budget';
 import { useTripQuery } from '@/stores/queries/trips';
 import { useUnits } from '@/stores/units-store';
 import { Section, Table } from './sheet-parts';
@@ -38,11 +40,13 @@ const EXPOSURE: Record<string, string> = {
 const ESTIMATE =
   'A plan is an estimate: weather, smoke, canopy and appliance behaviour vary. Keep a reserve and a way to leave early — fires and road closures happen.';
 
+/** The first fixes of each flag (the engine ranks them); the rest are a tap away, and the sheet stays on two pages. */
+const SHEET_FIXES_PER_FLAG = 2;
 const when = (iso: string) => DateTime.fromISO(iso, { setZone: true }).toFormat('ccc d LLL HH:mm');
 const pct = (v: number | null) => (v === null ? '—' : `${Math.round(v)} %`);
 
-function stopRows(detail: TripDetail, budget: SimulationResult | null, units: UnitSystem): string[][] {
-  const lowest = budget ? lowestChargeByStop(budget.ledger, detail.stops.length) : [];
+function stopRows(detail: TripDetail, budget: BudgetResult | null, units: UnitSystem): string[][] {
+  const lowest = budget ? lowestChargeByStop(budget.soc, detail.stops.length) : [];
   const reserve = budget?.headline.reservePct ?? 0;
   const rows: string[][] = [];
   detail.stops.forEach(({ stop }, i) => {
@@ -80,7 +84,7 @@ function stopRows(detail: TripDetail, budget: SimulationResult | null, units: Un
   return rows;
 }
 
-function dayRows(detail: TripDetail, budget: SimulationResult, units: UnitSystem): string[][] {
+function dayRows(detail: TripDetail, budget: BudgetResult, units: UnitSystem): string[][] {
   return budget.days.map((day) => [
     DateTime.fromISO(day.date).toFormat('ccc d LLL'),
     day.stopIndexes.map((i) => `${i + 1}`).join(', ') + (day.travel ? ' (drive)' : ''),
@@ -93,7 +97,7 @@ function dayRows(detail: TripDetail, budget: SimulationResult, units: UnitSystem
   ]);
 }
 
-function FuelPlan({ budget, units }: { budget: SimulationResult; units: UnitSystem }) {
+function FuelPlan({ budget, units }: { budget: BudgetResult; units: UnitSystem }) {
   const h = budget.headline;
   const fuel = h.generatorFuel;
   return (
@@ -110,9 +114,12 @@ function FuelPlan({ budget, units }: { budget: SimulationResult; units: UnitSyst
   );
 }
 
-function Sheet({ detail, budget }: { detail: TripDetail; budget: SimulationResult | null }) {
+type SheetProps = { detail: TripDetail; budget: BudgetResult | null; fixes: FlagFixes[] | null };
+
+function Sheet({ detail, budget, fixes }: SheetProps) {
   const units = useUnits();
-  const where = (f: SimulationResult['flags'][number]) =>
+  const flags = budget ? withFixes(budget.flags, fixes ?? []) : [];
+  const where = (f: BudgetResult['flags'][number]) =>
     f.where.kind === 'stop' ? `stop ${f.where.stopIndex + 1}` : `drive ${f.where.driveIndex + 1}`;
   return (
     <View style={styles.sheet} testID="trip-sheet">
@@ -193,17 +200,25 @@ function Sheet({ detail, budget }: { detail: TripDetail; budget: SimulationResul
       {budget ? (
         <Section title={`Flags and fixes (${budget.flags.length})`} testID="trip-sheet-flags">
           {budget.flags.length === 0 ? <Text variant="caption">No flags: the plan holds as it stands.</Text> : null}
-          {budget.flags.map((flag, i) => (
+          {budget.flags.length > 0 && !fixes ? (
+            <Text variant="caption" testID="trip-sheet-fixes-loading">
+              Checking fixes…
+            </Text>
+          ) : null}
+          {flags.map((flag, i) => (
             <View key={flag.id} style={styles.flag} testID={`trip-sheet-flag-${i}`}>
               <Text variant="caption" style={styles.bold}>
                 {i + 1}. {FLAG_TITLE[flag.kind]} — {localMoment(flag.atLocal)}, {where(flag)}
               </Text>
               <Text variant="caption">{flag.cause}</Text>
-              {flag.fixes.map((fix, j) => (
+              {flag.fixes.slice(0, SHEET_FIXES_PER_FLAG).map((fix, j) => (
                 <Text key={j} variant="caption">
                   Fix: {fix.text}
                 </Text>
               ))}
+              {flag.fixes.length > SHEET_FIXES_PER_FLAG ? (
+                <Text variant="caption">{flag.fixes.length - SHEET_FIXES_PER_FLAG} more on the Budget tab</Text>
+              ) : null}
             </View>
           ))}
         </Section>
@@ -226,6 +241,8 @@ export function TripSheetScreen({ tripId }: { tripId: string }) {
   usePrintPage();
   const trip = useTripQuery(tripId);
   const budget = useBudgetQuery(tripId);
+  const version = budget.data?.result ? budget.data.version : null;
+  const fixes = useBudgetFixesQuery(tripId, version, (budget.data?.result?.flags.length ?? 0) > 0);
   const signedOut = trip.error instanceof ApiError && trip.error.status === 401;
   return (
     <ScrollView style={styles.page} contentContainerStyle={styles.content} testID="trip-sheet-screen">
@@ -244,7 +261,11 @@ export function TripSheetScreen({ tripId }: { tripId: string }) {
       ) : !trip.data || budget.isPending ? (
         <Skeleton testID="trip-sheet-loading" height={600} />
       ) : (
-        <Sheet detail={trip.data} budget={budget.data?.result ?? null} />
+        <Sheet
+          detail={trip.data}
+          budget={budget.data?.result ?? null}
+          fixes={fixes.data?.version === version ? fixes.data.fixes : null}
+        />
       )}
     </ScrollView>
   );

@@ -48,7 +48,7 @@ export function useApplyEdit(detail: TripDetail) {
   const queryClient = useQueryClient();
   const rigSave = useTripRigSaveMutation(tripId);
   const stopSave = useStopSaveMutation(tripId);
-  const scheduleSave = useScheduleSaveMutation(tripId);
+  const scheduleSave = useScheduleSaveMutation();
   const undoFix = useUndoFixMutation(tripId);
   const stack = useUndoStack(tripId);
   const [busy, setBusy] = useState<string | null>(null);
@@ -58,6 +58,7 @@ export function useApplyEdit(detail: TripDetail) {
     if (edit.kind === 'appliance')
       return (
         await scheduleSave.mutateAsync({
+          tripId,
           applianceId: edit.record.id,
           version: edit.record.version,
           schedule: edit.schedule,

@@ -83,6 +83,7 @@ export function stopToColumns(stop: Stop) {
     departAt: stop.departAt,
     exposure: stop.exposure,
     skyOutlook: stop.skyOutlook,
+    skySource: stop.skySource,
     linkeTurbidity: stop.linkeTurbidity ?? null,
     hookupAmps: stop.hookup?.amps ?? null,
     hookupVolts: stop.hookup?.volts ?? null,
@@ -90,6 +91,7 @@ export function stopToColumns(stop: Stop) {
     generatorEndHour: stop.generatorHours?.endHour ?? null,
     lowC: stop.lowC,
     highC: stop.highC,
+    ownTemperatures: stop.ownTemperatures,
   };
 }
 
@@ -104,6 +106,7 @@ export function stopFromRow(row: StopRow): Stop {
     departAt: row.departAt,
     exposure: row.exposure,
     skyOutlook: row.skyOutlook,
+    skySource: row.skySource,
     ...(row.linkeTurbidity === null ? {} : { linkeTurbidity: row.linkeTurbidity }),
     hookup:
       row.hookupAmps !== null && row.hookupVolts !== null ? { amps: row.hookupAmps, volts: row.hookupVolts } : null,
@@ -113,6 +116,7 @@ export function stopFromRow(row: StopRow): Stop {
         : null,
     lowC: row.lowC,
     highC: row.highC,
+    ownTemperatures: row.ownTemperatures,
   };
 }
 

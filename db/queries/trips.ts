@@ -40,16 +40,42 @@ export function listTripsForMember(db: DbExecutor, userId: string): { trip: Trip
     .all();
 }
 
+/**
+ * The two look-ups every request on a trip makes (who may read it, and its revision), built and prepared once per
+ * connection: building a query anew costs more than SQLite takes to run it.
+ */
+function prepareHotLookups(db: DbExecutor) {
+  return {
+    membership: db
+      .select({ role: memberships.role })
+      .from(memberships)
+      .where(and(eq(memberships.tripId, sql.placeholder('tripId')), eq(memberships.userId, sql.placeholder('userId'))))
+      .prepare(),
+    trip: db
+      .select()
+      .from(trips)
+      .where(eq(trips.id, sql.placeholder('tripId')))
+      .prepare(),
+  };
+}
+
+const hotLookups = new WeakMap<DbExecutor, ReturnType<typeof prepareHotLookups>>();
+
+function hotLookupsOf(db: DbExecutor): ReturnType<typeof prepareHotLookups> {
+  let lookups = hotLookups.get(db);
+  if (!lookups) {
+    lookups = prepareHotLookups(db);
+    hotLookups.set(db, lookups);
+  }
+  return lookups;
+}
+
 export function findMembership(db: DbExecutor, tripId: string, userId: string): { role: Role } | undefined {
-  return db
-    .select({ role: memberships.role })
-    .from(memberships)
-    .where(and(eq(memberships.tripId, tripId), eq(memberships.userId, userId)))
-    .get();
+  return hotLookupsOf(db).membership.get({ tripId, userId });
 }
 
 export function findTrip(db: DbExecutor, tripId: string): TripRow | undefined {
-  return db.select().from(trips).where(eq(trips.id, tripId)).get();
+  return hotLookupsOf(db).trip.get({ tripId });
 }
 
 export function findTripRig(db: DbExecutor, tripId: string) {

@@ -182,7 +182,7 @@ export function bumpTripsAt(db: DbExecutor, place: { latE1: number; lonE1: numbe
 /**
  * The recorded years and forecasts held for a trip's stops, laid on the trip's calendar for the engine. Years line
  * up by how far back they are from each stop's own dates, so a trip across New Year reads one winter; the most
- * recent MAX_RECORD_YEARS are used. Every stop plans from the record where there is one.
+ * recent MAX_RECORD_YEARS are used. Which of it a stop uses is the stop's own choice, read by the engine.
  */
 export function engineWeatherFor(db: DbExecutor, tripStops: readonly StopPlaceAndTime[]): EngineWeather | null {
   if (tripStops.length === 0) return null;
@@ -235,9 +235,5 @@ export function engineWeatherFor(db: DbExecutor, tripStops: readonly StopPlaceAn
     .slice(0, MAX_RECORD_YEARS)
     .map(([shift, perStop]) => ({ year: firstYear - shift, stops: perStop }));
   if (years.length === 0 && forecast.every((f) => f === null)) return null;
-  return {
-    stops: tripStops.map(() => ({ source: 'record' as const, recordedTemperature: true })),
-    years,
-    forecast,
-  };
+  return { years, forecast };
 }

@@ -21,6 +21,9 @@ export const stops = sqliteTable(
     departAt: text('depart_at').notNull(),
     exposure: text('exposure', { mode: 'json' }).$type<SiteExposure>().notNull(),
     skyOutlook: text('sky_outlook', { enum: ['clear', 'hazy', 'broken-cloud', 'overcast'] }).notNull(),
+    skySource: text('sky_source', { enum: ['record', 'forecast', 'preset'] })
+      .notNull()
+      .default('record'),
     linkeTurbidity: real('linke_turbidity'),
     hookupAmps: real('hookup_amps'),
     hookupVolts: real('hookup_volts'),
@@ -28,6 +31,7 @@ export const stops = sqliteTable(
     generatorEndHour: integer('generator_end_hour'),
     lowC: real('low_c').notNull(),
     highC: real('high_c').notNull(),
+    ownTemperatures: integer('own_temperatures', { mode: 'boolean' }).notNull().default(false),
     notes: text('notes').notNull().default(''),
     version: integer('version').notNull().default(1),
   },

@@ -2,7 +2,7 @@ import { availableParallelism } from 'node:os';
 import path from 'node:path';
 import { MessageChannel } from 'node:worker_threads';
 import { Piscina } from 'piscina';
-import type { TripBudget } from './compute';
+import type { BudgetWork, TripBudget } from './compute';
 
 /** The budget took longer than its time limit (or more memory than a worker has) and was stopped. */
 export class BudgetTooLargeError extends Error {
@@ -22,8 +22,8 @@ export class BudgetBusyError extends Error {
 
 /** Runs one trip's budget off the event loop: reading the plan, simulating it and serialising the result. */
 export type BudgetRunner = {
-  /** Undefined when the trip does not exist (any more). */
-  run: (tripId: string) => Promise<TripBudget | undefined>;
+  /** Undefined when the trip does not exist (any more). `work` is the budget (the default) or its checked fixes. */
+  run: (tripId: string, work?: BudgetWork) => Promise<TripBudget | undefined>;
   /** Starts the workers now, so the first budget does not wait for them. */
   warmUp: () => void;
   close: () => Promise<void>;
@@ -67,7 +67,7 @@ export function createBudgetPool(options: BudgetPoolOptions): BudgetRunner {
 
   return {
     warmUp: () => void open(),
-    async run(tripId) {
+    async run(tripId, work = 'budget') {
       const workers = open();
       if (workers.queueSize >= maxQueue) throw new BudgetBusyError();
       const { port1: startedHere, port2: startedThere } = new MessageChannel();
@@ -81,7 +81,7 @@ export function createBudgetPool(options: BudgetPoolOptions): BudgetRunner {
       });
       try {
         return (await workers.run(
-          { databasePath: options.databasePath, tripId, started: startedThere },
+          { databasePath: options.databasePath, tripId, work, started: startedThere },
           { transferList: [startedThere], signal: abort.signal },
         )) as TripBudget | undefined;
       } catch (error) {

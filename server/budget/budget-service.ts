@@ -1,14 +1,19 @@
 import type { Db } from '@/db/client';
 import { findTrip } from '@/db/queries/trips';
 import { BudgetBusyError, BudgetTooLargeError, type BudgetRunner } from './budget-pool';
+import type { BudgetResult } from '@/shared/budget-result';
 import type { SimulationResult } from '@/shared/engine/result-types';
-import type { BudgetFigures, TripBudget } from './compute';
+import { fromLedgerColumns, type LedgerColumns } from '@/shared/ledger-columns';
+import type { BudgetFigures, BudgetWork, TripBudget } from './compute';
 import { readyBodySize, type ReadyBody } from './ready-body';
 
 export type BudgetAnswer = { revision: number } &
-  /** `body` is the response `{ version, result }`, serialised and compressed by the worker. */
+  /**
+   * `body` is the response `{ version, result }` (or `{ version, fixes }`) and a budget's `ledgerBody`
+   * `{ version, ledger }`, serialised and compressed by the worker.
+   */
   (
-    | { kind: 'ok'; body: ReadyBody; figures: BudgetFigures }
+    | { kind: 'ok'; body: ReadyBody; ledgerBody: ReadyBody | null; figures: BudgetFigures | null }
     /** Nothing to simulate yet, or a plan the engine refuses: the reason is shown in place of the budget. */
     | { kind: 'none'; reason: string }
     | { kind: 'too-large' }
@@ -29,10 +34,11 @@ const TOO_LARGE_KEPT_MS = 60_000;
 const GLANCE_ENTRIES = 10_000;
 const FAULT_REASON = 'The budget could not be computed for this plan. Please report it.';
 
-const sizeOf = (answer: BudgetAnswer): number => (answer.kind === 'ok' ? readyBodySize(answer.body) : 0);
+const sizeOf = (answer: BudgetAnswer): number =>
+  answer.kind === 'ok' ? readyBodySize(answer.body) + (answer.ledgerBody ? readyBodySize(answer.ledgerBody) : 0) : 0;
 
 /**
- * Budgets per (trip, revision), computed off the event loop by a runner (a worker pool that reads the plan itself)
+ * Budgets, and their flags' checked fixes, per (trip, revision), computed off the event loop by a runner (a worker pool that reads the plan itself)
  * and kept: any change to a trip bumps its revision, so a kept budget is never stale and needs no invalidation.
  * The trips list reads `glance`, which never waits: it answers the last figures and starts a computation when
  * they are out of date. On this thread a budget costs one look-up of the trip's revision.
@@ -84,9 +90,9 @@ export function createBudgetService(
     return { revision, kind: 'none', reason: FAULT_REASON };
   }
 
-  async function compute(tripId: string, revision: number): Promise<BudgetAnswer | undefined> {
+  async function compute(tripId: string, revision: number, work: BudgetWork): Promise<BudgetAnswer | undefined> {
     try {
-      const budget = await runner.run(tripId);
+      const budget = await runner.run(tripId, work);
       return budget && toAnswer(tripId, budget);
     } catch (error) {
       if (error instanceof BudgetTooLargeError) return { revision, kind: 'too-large' };
@@ -96,20 +102,24 @@ export function createBudgetService(
     }
   }
 
-  function settle(tripId: string, answer: BudgetAnswer | undefined): BudgetAnswer | undefined {
+  /** Budgets are kept under `trip:revision`, fixes under `trip:revision:fixes`. */
+  const keyOf = (tripId: string, revision: number, work: BudgetWork): string =>
+    work === 'budget' ? `${tripId}:${revision}` : `${tripId}:${revision}:${work}`;
+
+  function settle(tripId: string, work: BudgetWork, answer: BudgetAnswer | undefined): BudgetAnswer | undefined {
     if (!answer) return undefined;
     // Keyed by the revision the worker read, which may be newer than the one asked for.
-    const key = `${tripId}:${answer.revision}`;
+    const key = keyOf(tripId, answer.revision, work);
     if (answer.kind === 'too-large') {
       tooLargeUntil.set(key, Date.now() + TOO_LARGE_KEPT_MS);
       if (tooLargeUntil.size > CACHE_ENTRIES) tooLargeUntil.delete(tooLargeUntil.keys().next().value ?? key);
     } else keep(key, answer);
-    remember(tripId, answer);
+    if (work === 'budget') remember(tripId, answer);
     return answer;
   }
 
-  function start(tripId: string, revision: number): Promise<BudgetAnswer | undefined> {
-    const key = `${tripId}:${revision}`;
+  function start(tripId: string, revision: number, work: BudgetWork = 'budget'): Promise<BudgetAnswer | undefined> {
+    const key = keyOf(tripId, revision, work);
     const kept = answers.get(key);
     if (kept) return Promise.resolve(kept);
     const refusedUntil = tooLargeUntil.get(key);
@@ -119,8 +129,8 @@ export function createBudgetService(
     }
     const pending = running.get(key);
     if (pending) return pending;
-    const job = compute(tripId, revision)
-      .then((answer) => settle(tripId, answer))
+    const job = compute(tripId, revision, work)
+      .then((answer) => settle(tripId, work, answer))
       .finally(() => running.delete(key));
     running.set(key, job);
     return job;
@@ -134,6 +144,13 @@ export function createBudgetService(
       return start(trip.id, trip.revision);
     },
 
+    /** The checked fixes of the budget's flags at the trip's current revision, or undefined when there is no trip. */
+    async fixesForTrip(tripId: string): Promise<BudgetAnswer | undefined> {
+      const trip = findTrip(db, tripId);
+      if (!trip) return undefined;
+      return start(trip.id, trip.revision, 'fixes');
+    },
+
     /**
      * The simulated result for a file made from the trip (a calendar): null when there is none to give — no stops
      * yet, a plan too large to compute, or every worker busy — so the file is still written, without budget lines.
@@ -145,9 +162,12 @@ export function createBudgetService(
         if (error instanceof BudgetBusyError) return undefined;
         throw error;
       });
-      if (answer?.kind !== 'ok') return null;
-      const { result } = JSON.parse(new TextDecoder().decode(answer.body.identity)) as { result: SimulationResult };
-      return result;
+      if (answer?.kind !== 'ok' || !answer.ledgerBody) return null;
+      const read = (body: ReadyBody): unknown => JSON.parse(new TextDecoder().decode(body.identity));
+      const { result } = read(answer.body) as { result: BudgetResult };
+      const { ledger } = read(answer.ledgerBody) as { ledger: LedgerColumns };
+      const { soc: _track, ...rest } = result;
+      return { ...rest, ledger: fromLedgerColumns(ledger) };
     },
 
     /** The trips list's figures for a trip at `revision`, without waiting; starts a computation when they are old. */

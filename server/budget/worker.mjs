@@ -6,15 +6,15 @@ import { tsImport } from 'tsx/esm/api';
 const { computeStoredBudget } = await tsImport('./compute.ts', import.meta.url);
 
 /**
- * One trip's budget. `started` is told first, so the server's time limit counts the work only, not the time the
+ * One trip's budget, or its flags' checked fixes (`work`). `started` is told first, so the server's time limit counts the work only, not the time the
  * task waited in the queue or the worker took to start, and told again once the engine is done (the body is then
  * only written and compressed).
- * @param {{ databasePath: string; tripId: string; started: import('node:worker_threads').MessagePort }} task
+ * @param {{ databasePath: string; tripId: string; work?: 'budget' | 'fixes'; started: import('node:worker_threads').MessagePort }} task
  */
-export default function runBudget({ databasePath, tripId, started }) {
+export default function runBudget({ databasePath, tripId, work, started }) {
   started.postMessage('started');
   try {
-    return computeStoredBudget(databasePath, tripId, () => started.postMessage('simulated'));
+    return computeStoredBudget(databasePath, tripId, () => started.postMessage('simulated'), work ?? 'budget');
   } finally {
     started.close();
   }

@@ -1,10 +1,11 @@
-import { Router } from 'express';
+import { Router, type Request, type Response } from 'express';
 import type { Db } from '@/db/client';
 import { listActivity } from '@/db/queries/trips';
 import packageJson from '@/package.json';
 import { pickEncoding } from '../accept-encoding';
 import { BudgetBusyError } from '../budget/budget-pool';
 import type { BudgetAnswer, BudgetService } from '../budget/budget-service';
+import type { ReadyBody } from '../budget/ready-body';
 import { HttpError, notFound } from '../errors';
 import { tripAccess } from '../middleware/trip-access';
 import { appliancesRouter } from './appliances';
@@ -21,6 +22,9 @@ import { tripExportsRouter } from './trip-exports';
 import type { Mailer } from '../mail/mailer';
 import type { WeatherQueue } from '../weather/weather-queue';
 import { listStopRows } from '@/db/queries/stops';
+import { BUDGET_FORMAT } from '@/shared/budget-result';
+import { stopFromRow } from '@/db/queries/mappers';
+import { engineWeatherFor } from '@/db/queries/weather-series';
 
 /** Everything under /api/trips/:tripId/… once the caller's role is known. */
 export type TripItemsDeps = {
@@ -35,6 +39,63 @@ export type TripItemsDeps = {
 
 /** Anything shaped like an e-mail address: never shown to someone who reads the trip through a club. */
 const EMAIL_LIKE = /[^\s@<>"]+@[^\s@<>"]+\.[^\s@<>"]+/;
+
+/**
+ * The trip's budget (or its checked fixes) at its current revision, or the error to answer instead (busy, too large,
+ * no such trip).
+ */
+async function budgetAnswer(
+  ask: () => Promise<BudgetAnswer | undefined>,
+  res: Response,
+): Promise<Exclude<BudgetAnswer, { kind: 'too-large' }>> {
+  let answer: BudgetAnswer | undefined;
+  try {
+    answer = await ask();
+  } catch (error) {
+    if (!(error instanceof BudgetBusyError)) throw error;
+    res.setHeader('Retry-After', '5');
+    throw new HttpError(503, 'busy', 'Many budgets are being computed just now. Please try again in a few seconds.');
+  }
+  if (!answer) throw notFound('That trip was not found.');
+  if (answer.kind === 'too-large')
+    throw new HttpError(
+      422,
+      'budget_too_large',
+      'This plan is too large to compute in time. Remove some stops, appliances or routine windows, then try again.',
+    );
+  return answer;
+}
+
+/**
+ * Sets the ETag and answers 304 when the browser holds this revision already; true when a body is to be sent.
+ * The revision changes with every edit to the trip; the app version changes when the engine may compute
+ * differently, so a browser never keeps a budget from an older release.
+ */
+function freshOrNotModified(
+  req: Request,
+  res: Response,
+  part: 'budget' | 'ledger' | 'fixes',
+  revision: number,
+): boolean {
+  const etag = `"${part}-${BUDGET_FORMAT}-${packageJson.version}-${revision}"`;
+  res.setHeader('ETag', etag);
+  res.setHeader('Cache-Control', 'private, no-cache');
+  if (req.headers['if-none-match'] !== etag) return true;
+  res.status(304).end();
+  return false;
+}
+
+/** A body the worker handed over serialised and compressed: sent as it is, never parsed or compressed here. */
+function sendReady(req: Request, res: Response, body: ReadyBody): void {
+  const encoding = pickEncoding(req.headers['accept-encoding'], ['br', 'gzip']);
+  const bytes = encoding ? body[encoding] : body.identity;
+  res.locals.precompressed = true;
+  res.setHeader('Vary', 'Accept-Encoding');
+  if (encoding) res.setHeader('Content-Encoding', encoding);
+  res.setHeader('Content-Type', 'application/json; charset=utf-8');
+  res.setHeader('Content-Length', String(bytes.byteLength));
+  res.end(bytes);
+}
 
 export function tripItemsRouter(deps: TripItemsDeps): Router {
   const router = Router({ mergeParams: true });
@@ -51,43 +112,37 @@ export function tripItemsRouter(deps: TripItemsDeps): Router {
   router.use(tripUndoRouter(deps));
 
   router.get('/budget', async (req, res) => {
-    let answer: BudgetAnswer | undefined;
-    try {
-      answer = await deps.budgets.forTrip(tripAccess(res).tripId);
-    } catch (error) {
-      if (!(error instanceof BudgetBusyError)) throw error;
-      res.setHeader('Retry-After', '5');
-      throw new HttpError(503, 'busy', 'Many budgets are being computed just now. Please try again in a few seconds.');
-    }
-    if (!answer) throw notFound('That trip was not found.');
-    if (answer.kind === 'too-large')
-      throw new HttpError(
-        422,
-        'budget_too_large',
-        'This plan is too large to compute in time. Remove some stops, appliances or routine windows, then try again.',
-      );
-    // The revision changes with every edit to the trip; the app version changes when the engine
-    // may compute differently, so a browser never keeps a budget from an older release.
-    const etag = `"budget-${packageJson.version}-${answer.revision}"`;
-    res.setHeader('ETag', etag);
-    res.setHeader('Cache-Control', 'private, no-cache');
-    if (req.headers['if-none-match'] === etag) {
-      res.status(304).end();
-      return;
-    }
+    const answer = await budgetAnswer(() => deps.budgets.forTrip(tripAccess(res).tripId), res);
     if (answer.kind === 'none') {
+      if (!freshOrNotModified(req, res, 'budget', answer.revision)) return;
       res.json({ version: answer.revision, result: null, reason: answer.reason });
       return;
     }
-    // The worker handed the body over serialised and compressed: it is sent as it is, never parsed or compressed here.
-    const encoding = pickEncoding(req.headers['accept-encoding'], ['br', 'gzip']);
-    const bytes = encoding ? answer.body[encoding] : answer.body.identity;
-    res.locals.precompressed = true;
-    res.setHeader('Vary', 'Accept-Encoding');
-    if (encoding) res.setHeader('Content-Encoding', encoding);
-    res.setHeader('Content-Type', 'application/json; charset=utf-8');
-    res.setHeader('Content-Length', String(bytes.byteLength));
-    res.end(bytes);
+    if (freshOrNotModified(req, res, 'budget', answer.revision)) sendReady(req, res, answer.body);
+  });
+
+  // The hourly ledger as columns, for the screens that show it; kept and sent like the budget, under its own ETag.
+  router.get('/ledger', async (req, res) => {
+    const answer = await budgetAnswer(() => deps.budgets.forTrip(tripAccess(res).tripId), res);
+    if (answer.kind === 'none' || !answer.ledgerBody) {
+      if (!freshOrNotModified(req, res, 'ledger', answer.revision)) return;
+      const reason = answer.kind === 'none' ? answer.reason : 'The budget has no hourly ledger.';
+      res.json({ version: answer.revision, ledger: null, reason });
+      return;
+    }
+    if (freshOrNotModified(req, res, 'ledger', answer.revision)) sendReady(req, res, answer.ledgerBody);
+  });
+
+  // The budget's flags with their fixes, each checked by walking the trip again: asked for apart from the budget
+  // (only when someone looks at the flags), computed in the same workers and kept per revision the same way.
+  router.get('/budget/fixes', async (req, res) => {
+    const answer = await budgetAnswer(() => deps.budgets.fixesForTrip(tripAccess(res).tripId), res);
+    if (answer.kind === 'none') {
+      if (!freshOrNotModified(req, res, 'fixes', answer.revision)) return;
+      res.json({ version: answer.revision, fixes: [], reason: answer.reason });
+      return;
+    }
+    if (freshOrNotModified(req, res, 'fixes', answer.revision)) sendReady(req, res, answer.body);
   });
 
   // Where each stop's weather record stands; asking also queues whatever is missing.
@@ -95,6 +150,13 @@ export function tripItemsRouter(deps: TripItemsDeps): Router {
     const stops = listStopRows(deps.db, tripAccess(res).tripId);
     res.setHeader('Cache-Control', 'private, no-store');
     res.json({ stops: deps.weather.statusFor(stops) });
+  });
+
+  // The recorded years and forecast the budget runs on, for the browser's what-ifs to run on the same years.
+  router.get('/weather/record', (_req, res) => {
+    const stops = listStopRows(deps.db, tripAccess(res).tripId).map(stopFromRow);
+    res.setHeader('Cache-Control', 'private, no-cache');
+    res.json({ weather: engineWeatherFor(deps.db, stops) });
   });
 
   router.get('/activity', (_req, res) => {

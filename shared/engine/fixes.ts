@@ -16,6 +16,7 @@ import { climateLoads } from './climate';
 import { hhmm } from './describe';
 import { groupedNumber } from './flag-text';
 import { defaultFuelModel } from './generator';
+import { generatorHoursText, generatorOnlySchedule } from './generator-only';
 import { QUARTERS, withAppliances, type Prepared } from './prepare';
 import type { Fix, FixCheck, Flag } from './result-types';
 import { newLedger, walk, type Scenario } from './walk';
@@ -26,22 +27,42 @@ export const PANEL_W = 100;
 export const ROOF_USABLE_SHARE = 0.6;
 export const PANEL_W_PER_M2 = 200;
 
+/** The share of recorded years a fix must hold in to clear its flag (holds in 9 of 10 years). */
+export const FIX_HOLD_SHARE = 0.9;
+
+/** What a trial is built on: the trip under one sky (the planned run's, or one recorded year's). */
+export type TrialBase = { scenario: Scenario; cabinSolarW: Float64Array; ambientC: Float64Array };
+
 export type FixContext = {
   p: Prepared;
-  scenario: Scenario;
-  cabinSolarW: Float64Array;
+  /** The planned run: the preset sky's, or with a record the median year's. */
+  planned: TrialBase;
+  /** Each recorded year (empty without a record): a fix is checked in every one of them. */
+  years: TrialBase[];
+  /** The share of years a fix must hold in to clear (FIX_HOLD_SHARE unless asked otherwise). */
+  holdShare: number;
   capacityWh: number;
   reservePct: number;
   /** Trials already walked in this run, by what they changed: flags that share a fix share its walk. */
   trials: Map<string, Trial>;
 };
 
-type Trial = { socPct: Float64Array; shortWh: Float64Array; fuel: number; generatorH: number };
+/** One walk of a trial: the charge and the energy short per row. */
+type TrialRun = { socPct: Float64Array; shortWh: Float64Array };
+/** The planned run's walk also keeps what the fixes' text and the overload check read. */
+type PlannedTrialRun = TrialRun & {
+  fuel: number;
+  generatorH: number;
+  genHours: Float64Array;
+  p: Prepared;
+  scenario: Scenario;
+};
+export type Trial = { planned: PlannedTrialRun; years: TrialRun[] };
 
-function runTrial(ctx: FixContext, key: string, make: () => { p: Prepared; scenario: Scenario }): Trial {
-  const known = ctx.trials.get(key);
-  if (known) return known;
-  const { p, scenario } = make();
+type MakeTrial = (base: TrialBase) => { p: Prepared; scenario: Scenario };
+
+function walkPlanned(ctx: FixContext, make: MakeTrial): PlannedTrialRun {
+  const { p, scenario } = make(ctx.planned);
   const l = newLedger(p.n);
   walk(p, scenario, l);
   let fuel = 0;
@@ -50,23 +71,63 @@ function runTrial(ctx: FixContext, key: string, make: () => { p: Prepared; scena
     fuel += l.generatorFuel[i] ?? 0;
     generatorH += l.generatorH[i] ?? 0;
   }
-  const trial = { socPct: l.socPct, shortWh: l.energyShortWh, fuel, generatorH };
+  return { socPct: l.socPct, shortWh: l.energyShortWh, fuel, generatorH, genHours: l.generatorH, p, scenario };
+}
+
+function walkYear(base: TrialBase, make: MakeTrial): TrialRun {
+  const { p, scenario } = make(base);
+  const l = newLedger(p.n);
+  walk(p, scenario, l);
+  return { socPct: l.socPct, shortWh: l.energyShortWh };
+}
+
+/** Walks a trial under the planned sky and each recorded year's (unless only the planned run is wanted). */
+function runTrial(ctx: FixContext, key: string, make: MakeTrial, plannedOnly = false): Trial {
+  const known = ctx.trials.get(key);
+  if (known) return known;
+  const trial = {
+    planned: walkPlanned(ctx, make),
+    years: plannedOnly ? [] : ctx.years.map((base) => walkYear(base, make)),
+  };
   ctx.trials.set(key, trial);
   return trial;
 }
 
-function verdict(ctx: FixContext, flag: Flag, t: Trial): FixCheck {
+/** From the draw-down's start to the window's end: the lowest charge, and whether it held (no shortfall). */
+function windowHolds(ctx: FixContext, flag: Flag, run: TrialRun): { holds: boolean; lowest: number } {
   let lowest = 100;
   let short = 0;
   for (let i = flag.drawdown.firstRow; i <= flag.window.lastRow; i++) {
-    lowest = Math.min(lowest, t.socPct[i] ?? 0);
-    short += t.shortWh[i] ?? 0;
+    lowest = Math.min(lowest, run.socPct[i] ?? 0);
+    short += run.shortWh[i] ?? 0;
   }
-  return { clears: lowest >= ctx.reservePct - 1e-6 && short <= 1e-6, lowestSocPct: lowest };
+  return { holds: lowest >= ctx.reservePct - 1e-6 && short <= 1e-6, lowest };
 }
 
-const notEnough = (check: FixCheck): string =>
-  check.clears ? '' : ` — helps, not enough alone (lowest ${check.lowestSocPct.toFixed(0)} %)`;
+/** Years a fix must hold in: the chosen share of them, rounded up. */
+export const yearsNeeded = (share: number, of: number): number => Math.ceil(share * of - 1e-9);
+
+function verdict(ctx: FixContext, flag: Flag, t: Trial): FixCheck {
+  if (t.years.length === 0) {
+    const { holds, lowest } = windowHolds(ctx, flag, t.planned);
+    return { clears: holds, lowestSocPct: lowest };
+  }
+  const runs = t.years.map((run) => windowHolds(ctx, flag, run));
+  const of = runs.length;
+  const held = runs.filter((r) => r.holds).length;
+  const need = yearsNeeded(ctx.holdShare, of);
+  // The lowest charge that the chosen share of years stays at or above (a bad year's, 1 in 10 by default).
+  const lows = runs.map((r) => r.lowest).sort((a, b) => a - b);
+  return { clears: held >= need, lowestSocPct: lows[of - need] ?? lows[0] ?? 0, years: { held, of } };
+}
+
+/** What the fix's text adds about its check: nothing, the years it holds in, or that it is not enough alone. */
+function checkText(check: FixCheck): string {
+  const lowest = `${check.lowestSocPct.toFixed(0)} %`;
+  if (!check.years) return check.clears ? '' : ` — helps, not enough alone (lowest ${lowest})`;
+  const years = `holds in ${check.years.held} of ${check.years.of} past years with this`;
+  return check.clears ? ` — ${years}` : ` — helps, not enough alone: ${years} (lowest ${lowest} in a bad year)`;
+}
 
 /** Smallest k in 1..max whose trial clears the flag, else max (the most the lever allows). */
 function smallestStep(max: number, clears: (k: number) => boolean): number {
@@ -107,7 +168,7 @@ export function shoreOnlySchedule(p: Prepared, a: Appliance): Schedule | null {
   return { kind: 'routine', windows: onDays(undefined, days) };
 }
 
-function applianceChanges(p: Prepared, a: Appliance): ApplianceChange[] {
+function applianceChanges(p: Prepared, a: Appliance, stopIndex: number | null): ApplianceChange[] {
   const name = a.name.toLowerCase();
   const s = a.schedule;
   const out: ApplianceChange[] = [];
@@ -141,7 +202,32 @@ function applianceChanges(p: Prepared, a: Appliance): ApplianceChange[] {
   }
   const shore = shoreOnlySchedule(p, a);
   if (shore) out.push({ kind: 'appliance-shore-only', text: `run the ${name} only on hookup days`, schedule: shore });
+  const stop = stopIndex === null ? undefined : p.input.trip.stops[stopIndex];
+  const generator = stop?.generatorHours && stopIndex !== null ? generatorOnlySchedule(p, a) : null;
+  if (generator && stopIndex !== null)
+    out.push({
+      kind: 'appliance-generator-only',
+      text: `run the ${name} only while the generator runs (${generatorHoursText(p, stopIndex)})`,
+      schedule: generator,
+    });
   return out;
+}
+
+/** The trip walked with one appliance on another schedule (its loads, heating and cooling worked out again). */
+export function applianceTrial(
+  ctx: FixContext,
+  a: Appliance,
+  change: { kind: Fix['kind']; schedule: Schedule },
+): Trial {
+  const { p } = ctx;
+  let q: Prepared | undefined;
+  return runTrial(ctx, `appliance:${a.id}:${change.kind}`, (base) => {
+    q ??= withAppliances(
+      p,
+      p.input.appliances.map((x) => (x.id === a.id ? { ...x, schedule: change.schedule } : x)),
+    );
+    return { p: q, scenario: { ...base.scenario, loads: climateLoads(q, base.cabinSolarW, base.ambientC) } };
+  });
 }
 
 function applianceFixes(ctx: FixContext, flag: Flag): Fix[] {
@@ -151,16 +237,13 @@ function applianceFixes(ctx: FixContext, flag: Flag): Fix[] {
   const j = p.input.appliances.findIndex((a) => a.id === lead.applianceId);
   const a = p.input.appliances[j];
   if (!a) return [];
-  return applianceChanges(p, a).map((change) => {
-    const trial = runTrial(ctx, `appliance:${a.id}:${change.kind}`, () => {
-      const appliances = p.input.appliances.map((x, k) => (k === j ? { ...x, schedule: change.schedule } : x));
-      const q = withAppliances(p, appliances);
-      return { p: q, scenario: { ...ctx.scenario, loads: climateLoads(q, ctx.cabinSolarW) } };
-    });
+  const stopIndex = flag.where.kind === 'stop' ? flag.where.stopIndex : null;
+  return applianceChanges(p, a, stopIndex).map((change) => {
+    const trial = applianceTrial(ctx, a, change);
     const check = verdict(ctx, flag, trial);
     return {
       kind: change.kind,
-      text: `${change.text}${notEnough(check)}`,
+      text: `${change.text}${checkText(check)}`,
       params: { applianceId: a.id },
       applianceEdit: { applianceId: a.id, schedule: change.schedule },
       check,
@@ -196,40 +279,47 @@ function generatorFix(ctx: FixContext, flag: Flag, stopIndex: number): Fix | nul
   const steps = stopSteps(p, stopIndex);
   const keep = g?.mode.kind === 'routine';
   /** Quarters of each day at the stop, the last q quarter hours before the allowed end. */
-  const trialFor = (q: number): Trial =>
-    runTrial(ctx, `generator:${stopIndex}:${q}`, () => {
-      const genRoutine = keep ? Uint8Array.from(p.genRoutine) : new Uint8Array(p.n);
-      for (const i of steps) {
-        const dtMin = (p.stepH[i] ?? 1) * 60;
-        for (let k = 0; k < QUARTERS; k++) {
-          const qMin = (p.minuteOfDay[i] ?? 0) + ((k + 0.5) * dtMin) / QUARTERS;
-          // Minutes before the allowed end, across midnight too.
-          const before = (((hours.endHour * 60 - qMin) % 1440) + 1440) % 1440;
-          if (before > 0 && before <= q * 15) genRoutine[i] = (genRoutine[i] ?? 0) | (1 << k);
-        }
-      }
-      return { p: { ...p, genRoutine }, scenario: { ...ctx.scenario, generator: plan } };
+  const trialFor = (q: number): Trial => {
+    let withRun: Prepared | undefined;
+    return runTrial(ctx, `generator:${stopIndex}:${q}`, (base) => {
+      withRun ??= { ...p, genRoutine: quartersBeforeEnd(q) };
+      return { p: withRun, scenario: { ...base.scenario, generator: plan } };
     });
+  };
+  /** Each day at the stop, the last q quarter hours before the allowed end (besides the rig's own routine). */
+  const quartersBeforeEnd = (q: number): Uint8Array => {
+    const genRoutine = keep ? Uint8Array.from(p.genRoutine) : new Uint8Array(p.n);
+    for (const i of steps) {
+      const dtMin = (p.stepH[i] ?? 1) * 60;
+      for (let k = 0; k < QUARTERS; k++) {
+        const qMin = (p.minuteOfDay[i] ?? 0) + ((k + 0.5) * dtMin) / QUARTERS;
+        // Minutes before the allowed end, across midnight too.
+        const before = (((hours.endHour * 60 - qMin) % 1440) + 1440) % 1440;
+        if (before > 0 && before <= q * 15) genRoutine[i] = (genRoutine[i] ?? 0) | (1 << k);
+      }
+    }
+    return genRoutine;
+  };
   const q = smallestStep(maxQuarters, (k) => verdict(ctx, flag, trialFor(k)).clears);
   const trial = trialFor(q);
   const check = verdict(ctx, flag, trial);
-  const base = runTrial(ctx, 'base', () => ({ p, scenario: ctx.scenario }));
+  const base = runTrial(ctx, 'base', (b) => ({ p, scenario: b.scenario }), true).planned;
   const minutes = q * 15;
   const startMin = (((hours.endHour * 60 - minutes) % 1440) + 1440) % 1440;
   const startHour = Math.floor(startMin / 60);
   const startMinute = startMin % 60;
   const from = `${String(startHour).padStart(2, '0')}:${String(startMinute).padStart(2, '0')}`;
-  const fuel = Math.max(0, trial.fuel - base.fuel);
+  const fuel = Math.max(0, trial.planned.fuel - base.fuel);
   const unit = fuelKind === 'propane' ? 'kg propane' : `L ${fuelKind}`;
   const what = g ? 'the generator' : `a ${ASSUMED_GENERATOR_W} W portable generator`;
   const dayIndexes = [...new Set(steps.map((i) => p.dayIndex[i] ?? 0))];
-  const runH = Math.max(0, trial.generatorH - base.generatorH);
+  const runH = Math.max(0, trial.planned.generatorH - base.generatorH);
   return {
     kind: 'add-generator-hours',
     text:
       `run ${what} ${Math.floor(minutes / 60)} h ${String(minutes % 60).padStart(2, '0')} min a day, ${from}–` +
       `${hhmm(hours.endHour)}, at stop ${stopIndex + 1} (allowed ${hhmm(hours.startHour)}–${hhmm(hours.endHour)}): ` +
-      `${runH.toFixed(1)} h in all, about ${fuel.toFixed(1)} ${unit}${notEnough(check)}`,
+      `${runH.toFixed(1)} h in all, about ${fuel.toFixed(1)} ${unit}${checkText(check)}`,
     params: {
       stopIndex,
       hours: minutes / 60,
@@ -265,16 +355,17 @@ function hookupFix(ctx: FixContext, flag: Flag, stopIndex: number): Fix | null {
   const picked = p.input.options.assumedHookup;
   const supply = hookupSupplyFor(p, stopIndex);
   if (!supply) return null;
-  const trial = runTrial(ctx, `hookup:${stopIndex}:${supply.amps}x${supply.volts}`, () => {
-    const hookupW = Float64Array.from(ctx.scenario.hookupW);
-    for (const i of stopSteps(p, stopIndex)) hookupW[i] = supply.amps * supply.volts;
-    return { p, scenario: { ...ctx.scenario, hookupW } };
-  });
+  const hookupW = Float64Array.from(p.hookupW);
+  for (const i of stopSteps(p, stopIndex)) hookupW[i] = supply.amps * supply.volts;
+  const trial = runTrial(ctx, `hookup:${stopIndex}:${supply.amps}x${supply.volts}`, (base) => ({
+    p,
+    scenario: { ...base.scenario, hookupW },
+  }));
   const check = verdict(ctx, flag, trial);
   const basis = picked ? 'the supply you chose' : `usual in ${region?.label ?? 'that country'}`;
   return {
     kind: 'add-hookup-night',
-    text: `book a hookup at stop ${stopIndex + 1} (${supply.amps} A at ${supply.volts} V, ${basis})${notEnough(check)}`,
+    text: `book a hookup at stop ${stopIndex + 1} (${supply.amps} A at ${supply.volts} V, ${basis})${checkText(check)}`,
     params: { stopIndex, nights: 1, amps: supply.amps, volts: supply.volts },
     check,
   };
@@ -299,9 +390,9 @@ function batteryFix(ctx: FixContext, flag: Flag): Fix | null {
   const maxModules = Math.floor((plausibleBatteryWh(p) - ctx.capacityWh) / (moduleAh * b.nominalV));
   if (maxModules < 1) return null;
   const trialFor = (k: number): Trial =>
-    runTrial(ctx, `battery:${k}`, () => ({
+    runTrial(ctx, `battery:${k}`, (base) => ({
       p,
-      scenario: { ...ctx.scenario, capacityWh: ctx.capacityWh + k * moduleAh * b.nominalV },
+      scenario: { ...base.scenario, capacityWh: ctx.capacityWh + k * moduleAh * b.nominalV },
     }));
   const k = smallestStep(maxModules, (m) => verdict(ctx, flag, trialFor(m)).clears);
   const check = verdict(ctx, flag, trialFor(k));
@@ -309,7 +400,7 @@ function batteryFix(ctx: FixContext, flag: Flag): Fix | null {
   const cap = check.clears ? '' : ` (the most a rig this size plausibly carries: ${plausibleBatteryWh(p) / 1000} kWh)`;
   return {
     kind: 'add-battery',
-    text: `add ${k} × ${moduleAh} Ah at ${b.nominalV} V (${extraAh} Ah, ${((extraAh * b.nominalV) / 1000).toFixed(2)} kWh)${cap}${notEnough(check)}`,
+    text: `add ${k} × ${moduleAh} Ah at ${b.nominalV} V (${extraAh} Ah, ${((extraAh * b.nominalV) / 1000).toFixed(2)} kWh)${cap}${checkText(check)}`,
     params: { extraAh, moduleAh, modules: k },
     check,
   };
@@ -330,16 +421,16 @@ function solarFix(ctx: FixContext, flag: Flag): Fix | null {
   const maxPanels = roofRoomW(p) / PANEL_W;
   if (ratedW === 0 || maxPanels < 1) return null;
   const trialFor = (k: number): Trial =>
-    runTrial(ctx, `solar:${k}`, () => ({
+    runTrial(ctx, `solar:${k}`, (base) => ({
       p,
-      scenario: { ...ctx.scenario, solarScale: 1 + (k * PANEL_W) / ratedW },
+      scenario: { ...base.scenario, solarScale: 1 + (k * PANEL_W) / ratedW },
     }));
   const k = smallestStep(maxPanels, (m) => verdict(ctx, flag, trialFor(m)).clears);
   const check = verdict(ctx, flag, trialFor(k));
   const cap = check.clears ? '' : ' (all the roof holds)';
   return {
     kind: 'add-solar',
-    text: `add ${k} × ${PANEL_W} W panels (${groupedNumber(k * PANEL_W)} W)${cap}${notEnough(check)}`,
+    text: `add ${k} × ${PANEL_W} W panels (${groupedNumber(k * PANEL_W)} W)${cap}${checkText(check)}`,
     params: { extraW: k * PANEL_W, panels: k },
     check,
   };

@@ -1,15 +1,15 @@
 export { ASSUMED_GENERATOR_W } from './fixes';
-// Flags: where the budget breaks, why, how big, and concrete fixes as data the UI can apply as an edit.
+// Flags: where the budget breaks, why and how big. Their fixes are checked apart (check-fixes.ts), on request.
 import type { Appliance } from '../schemas/appliance';
 import { localIso, utcIso, whereAt, whereText } from './describe';
 import { momentText, shortfallText } from './flag-text';
-import { shoreOnlySchedule, shortfallFixes, type FixContext } from './fixes';
+import { CONTINUOUS_SHARE } from './generator';
 import { dcCurrentA, inverterDcDrawW } from './inverter';
 import type { StepLoads } from './climate';
 import { scheduledShare } from './loads';
 import { prevDayType, type Prepared } from './prepare';
 import { attributeDraw, causesText, drawdownStart } from './causes';
-import type { Cause, Fix, Flag, FlagLowest, FlagWindow } from './result-types';
+import type { Cause, Flag, FlagLowest, FlagWindow } from './result-types';
 import { localLabel, utcIsoString } from './time-grid';
 import type { LedgerColumns } from './walk';
 
@@ -21,8 +21,6 @@ export type FlagContext = {
   loads: StepLoads;
   capacityWh: number;
   reservePct: number;
-  /** The planned scenario and what fixes need to walk variations of it. */
-  fix: FixContext;
 };
 
 /** The rows first..last on the ledger's hour grid: the first row's start and the last row's end. */
@@ -109,30 +107,38 @@ function shortfallFlags(ctx: FlagContext): Flag[] {
       }),
       // The title's figure is the text's: energy short when the battery ran empty, else the distance below reserve.
       size: { value: Math.round(kind === 'energy-short' ? figures.energyShortWh : figures.belowReserveWh), unit: 'Wh' },
-      fixes: [],
     });
   }
-  for (const flag of flags) flag.fixes = shortfallFixes(ctx.fix, flag);
   return flags;
+}
+
+/**
+ * Whether the inverter is asked more than its rating (running, or running plus surges) in step i: not on a hookup,
+ * and not while a generator runs the whole step within its continuous rating (either carries the AC loads then).
+ */
+export function overloadedAt(p: Prepared, loads: StepLoads, generatorH: Float64Array, i: number): boolean {
+  const inv = p.input.rig.inverter;
+  if (!inv || (p.hookupW[i] ?? 0) > 0) return false;
+  const running = loads.acRunningW[i] ?? 0;
+  const gen = p.input.rig.generator;
+  const genCarries = gen !== null && (generatorH[i] ?? 0) >= (p.stepH[i] ?? 1) - 1e-9;
+  if (genCarries && running <= gen.ratedW * CONTINUOUS_SHARE) return false;
+  const surgeW = inv.surgeW ?? inv.ratedW * 2;
+  return running > inv.ratedW || running + (loads.acSurgeExtraW[i] ?? 0) > surgeW;
 }
 
 function overloadFlags(ctx: FlagContext): Flag[] {
   const { p, loads } = ctx;
   const inv = p.input.rig.inverter;
   if (!inv) return [];
-  const surgeW = inv.surgeW ?? inv.ratedW * 2;
   const seen = new Set<number>();
   const flags: Flag[] = [];
   for (let i = 0; i < p.n; i++) {
+    if (seen.has(p.where[i] ?? 0) || !overloadedAt(p, loads, ctx.l.generatorH, i)) continue;
     const running = loads.acRunningW[i] ?? 0;
-    if ((p.hookupW[i] ?? 0) > 0 || seen.has(p.where[i] ?? 0)) continue;
-    const over = running > inv.ratedW || running + (loads.acSurgeExtraW[i] ?? 0) > surgeW;
-    if (!over) continue;
     seen.add(p.where[i] ?? 0);
     const where = whereAt(p, i);
-    const together = runningAc(ctx, i);
-    const names = together.map((a) => a.name.toLowerCase());
-    const ratedW = nextInverterW(Math.max(running, (running + (loads.acSurgeExtraW[i] ?? 0)) / 2));
+    const names = runningAc(ctx, i).map((a) => a.name.toLowerCase());
     flags.push({
       id: `inverter-overload-${i}`,
       kind: 'inverter-overload',
@@ -141,14 +147,13 @@ function overloadFlags(ctx: FlagContext): Flag[] {
       where,
       cause: `At ${whereText(p, where)} at ${momentText(localIso(p, i))} the AC loads scheduled together (${names.join(', ')}) can ask ${Math.round(running)} W of a ${inv.ratedW} W inverter`,
       size: { value: Math.round(running), unit: 'W' },
-      fixes: overloadFixes(ctx, together, inv.ratedW, surgeW, ratedW, names),
     });
   }
   return flags;
 }
 
 /** AC appliances running in step i: scheduled on, or (thermostats) with a running share from the heat balance. */
-function runningAc(ctx: FlagContext, i: number): Appliance[] {
+export function runningAc(ctx: Pick<FlagContext, 'p' | 'loads'>, i: number): Appliance[] {
   const { p, loads } = ctx;
   const step = {
     minuteOfDay: p.minuteOfDay[i] ?? 0,
@@ -162,53 +167,6 @@ function runningAc(ctx: FlagContext, i: number): Appliance[] {
     return run ? (run[i] ?? 0) > 0 : scheduledShare(a.schedule, step, prevDayType(p, i)) > 0;
   });
 }
-/**
- * One appliance alone over the rating: a larger inverter (the next common size) or that appliance only where a
- * hookup carries it; staggering cannot help. Several together: staggering them, or a larger inverter.
- */
-function overloadFixes(
-  ctx: FlagContext,
-  together: Appliance[],
-  ratedW: number,
-  surgeW: number,
-  neededW: number,
-  names: string[],
-): Fix[] {
-  const larger: Fix = { kind: 'larger-inverter', text: `an inverter of ${neededW} W`, params: { ratedW: neededW } };
-  const alone = together.find(
-    (a) => a.quantity * a.runningW > ratedW || a.quantity * (a.surgeW ?? a.runningW) > surgeW,
-  );
-  if (!alone) {
-    return [
-      {
-        kind: 'stagger-appliances',
-        text: `do not run ${names.join(' and ')} in the same minutes`,
-        params: { applianceIds: together.map((a) => a.id) },
-      },
-      larger,
-    ];
-  }
-  const single = nextInverterW(
-    Math.max(alone.quantity * alone.runningW, (alone.quantity * (alone.surgeW ?? alone.runningW)) / 2),
-  );
-  const fixes: Fix[] = [
-    {
-      kind: 'larger-inverter',
-      text: `an inverter of ${single} W: the ${alone.name.toLowerCase()} alone asks ${alone.quantity * alone.runningW} W of the ${ratedW} W one`,
-      params: { ratedW: Math.max(single, neededW) },
-    },
-  ];
-  const shore = shoreOnlySchedule(ctx.p, alone);
-  if (shore)
-    fixes.push({
-      kind: 'appliance-shore-only',
-      text: `run the ${alone.name.toLowerCase()} only on hookup days`,
-      params: { applianceId: alone.id },
-      applianceEdit: { applianceId: alone.id, schedule: shore },
-    });
-  return fixes;
-}
-
 /** Common inverter ratings, W (sizes sold for vans, caravans and trailers; common practice). */
 export const INVERTER_SIZES_W = [300, 600, 1000, 1500, 2000, 2500, 3000, 3500, 4000, 5000, 6000, 8000] as const;
 
@@ -235,13 +193,6 @@ function coldFlags(ctx: FlagContext): Flag[] {
       where,
       cause: `Below 0 °C at ${whereText(p, where)} from ${momentText(localIso(p, i))} the lithium battery must not charge; charging is held off for ${hours.toFixed(0)} h`,
       size: { value: hours, unit: 'h' },
-      fixes: [
-        {
-          kind: 'keep-battery-warm',
-          text: 'keep the battery inside the heated space (or use a self-heating battery)',
-          params: { heatedSpace: true },
-        },
-      ],
     });
   }
   return flags;
@@ -268,9 +219,6 @@ function propaneFlags(ctx: FlagContext): Flag[] {
       where,
       cause: `Propane runs out at ${whereText(p, where)} at ${momentText(localIso(p, outAt))}; the plan burns ${burned.toFixed(1)} kg against ${startKg.toFixed(1)} kg aboard`,
       size: { value: extraKg, unit: 'kg' },
-      fixes: [
-        { kind: 'add-propane', text: `${extraKg} kg more propane (a refill or another cylinder)`, params: { extraKg } },
-      ],
     },
   ];
 }
@@ -291,13 +239,6 @@ function cablingFlags(ctx: FlagContext): Flag[] {
       where,
       cause: `At full output the ${inv.ratedW} W inverter draws about ${Math.round(amps)} A from the ${p.input.rig.battery.nominalV} V bank`,
       size: { value: Math.round(amps), unit: 'A' },
-      fixes: [
-        {
-          kind: 'check-cabling',
-          text: `size cables and fuse for ${Math.round(amps)} A by the applicable code and have a qualified installer check them`,
-          params: { currentA: Math.round(amps), minFuseA: Math.ceil(amps * 1.25) },
-        },
-      ],
     },
   ];
 }

@@ -1,10 +1,14 @@
 // Headroom finder: the smallest extra battery, extra solar, generator time inside the allowed hours, or number
 // of hookup nights that keeps the lowest charge at or above the reserve (and never runs the battery empty).
-// Each lever is a monotone search (bisection) over battery walks that reuse one precomputed trip.
+// With recorded years it aims at a confidence: the change must hold in at least 9 of 10 of those years
+// (HOLD_CONFIDENCE), each year keeping its own sky, air and solar series. Each lever is a monotone search
+// (bisection) over battery walks that reuse one precomputed trip.
 import { engineInputSchema, type EngineInput, type EngineInputDraft } from '../schemas/engine-input';
 import { defaultFuelModel } from './generator';
 import { ASSUMED_GENERATOR_W, hookupSupplyFor, UNKNOWN_COUNTRY_HOOKUP } from './fixes';
 import { prepare, type Prepared } from './prepare';
+import { recordYearSkies } from './record-years';
+import { forecastOnlySky, skyChoices } from './recorded-sky';
 import { plannedScenario, reservePctOf } from './simulate';
 import { solarSeries } from './solar';
 import { walk, type GeneratorPlan, type Scenario, type WalkResult } from './walk';
@@ -19,18 +23,52 @@ export type HeadroomLever = {
   params: Record<string, number | string | boolean | number[]>;
 };
 
+/** The share of recorded years a change must hold in: 9 of 10 (a bad year in ten may still dip below). */
+export const HOLD_CONFIDENCE = { held: 9, of: 10 } as const;
+
+/** What the search aimed at on recorded years: hold in `held` of `of`; `years` run, `baselineHeld` of them hold now. */
+export type HeadroomConfidence = { held: number; of: number; years: number; baselineHeld: number };
+
 export type HeadroomResult = {
   reservePct: number;
+  /** null: no recorded years, the one planned sky must hold. */
+  confidence: HeadroomConfidence | null;
   baselineLowestSocPct: number;
   baselineEnergyShortWh: number;
   needed: boolean;
   levers: HeadroomLever[];
 };
 
-type Search = { p: Prepared; base: Scenario; reservePct: number };
+/**
+ * bases: the planned scenario, or one per recorded year, worst year first (so a failing change is found out
+ * early). need: how many of them must hold.
+ */
+type Search = { p: Prepared; bases: Scenario[]; need: number; reservePct: number };
+type Change = (base: Scenario) => Scenario;
 
 const ok = (r: WalkResult, reservePct: number): boolean =>
   r.lowestSocPct >= reservePct - 1e-6 && r.energyShortWh <= 1e-6;
+
+/** Whether enough years hold under the change; stops walking as soon as the answer is known. */
+function holds(s: Search, change: Change): boolean {
+  const allowedFailures = s.bases.length - s.need;
+  let passed = 0;
+  let failed = 0;
+  for (const base of s.bases) {
+    if (ok(walk(s.p, change(base), null), s.reservePct)) passed += 1;
+    else failed += 1;
+    if (passed >= s.need) return true;
+    if (failed > allowedFailures) return false;
+  }
+  return passed >= s.need;
+}
+
+/** The walk of the year at the confidence (the need-th best) under the change: the one the answer is about. */
+function atConfidence(s: Search, change: Change): WalkResult {
+  const runs = s.bases.map((base) => walk(s.p, change(base), null));
+  runs.sort((a, b) => a.lowestSocPct - b.lowestSocPct);
+  return runs[s.bases.length - s.need] ?? runs[0] ?? walk(s.p, change(s.bases[0] as Scenario), null);
+}
 
 /** Smallest x in [0, hi] with pass(x), to within tol; null if even the cap fails. Grows hi by doubling. */
 function bisect(pass: (x: number) => boolean, start: number, cap: number, tol: number): number | null {
@@ -50,9 +88,12 @@ function bisect(pass: (x: number) => boolean, start: number, cap: number, tol: n
 
 function batteryLever(s: Search): HeadroomLever {
   const nominalV = s.p.input.rig.battery.nominalV;
-  const baseWh = s.base.capacityWh;
-  const run = (ah: number): WalkResult => walk(s.p, { ...s.base, capacityWh: baseWh + ah * nominalV }, null);
-  const found = bisect((ah) => ok(run(ah), s.reservePct), baseWh / nominalV, (16 * baseWh) / nominalV, 1);
+  const baseWh = s.bases[0]?.capacityWh ?? 0;
+  const change =
+    (ah: number): Change =>
+    (base) => ({ ...base, capacityWh: baseWh + ah * nominalV });
+  const run = (ah: number): WalkResult => atConfidence(s, change(ah));
+  const found = bisect((ah) => holds(s, change(ah)), baseWh / nominalV, (16 * baseWh) / nominalV, 1);
   if (found === null)
     return {
       lever: 'battery',
@@ -88,9 +129,12 @@ function solarLever(s: Search): HeadroomLever {
       text: 'the rig has no solar array to extend',
       params: {},
     };
-  const run = (w: number): WalkResult => walk(s.p, { ...s.base, solarScale: 1 + w / ratedW }, null);
+  const change =
+    (w: number): Change =>
+    (base) => ({ ...base, solarScale: 1 + w / ratedW });
+  const run = (w: number): WalkResult => atConfidence(s, change(w));
   const cap = ratedW * 10;
-  const found = bisect((w) => ok(run(w), s.reservePct), ratedW, cap, 5);
+  const found = bisect((w) => holds(s, change(w)), ratedW, cap, 5);
   if (found === null)
     return {
       lever: 'solar',
@@ -142,10 +186,12 @@ function generatorLever(s: Search): HeadroomLever {
     };
   }
   // More margin in the start threshold means earlier, longer runs; search the threshold above the reserve.
-  const run = (margin: number): WalkResult =>
-    walk(s.p, { ...s.base, generator: generatorPlanAt(s, Math.min(100, s.reservePct + margin)) }, null);
+  const change =
+    (margin: number): Change =>
+    (base) => ({ ...base, generator: generatorPlanAt(s, Math.min(100, s.reservePct + margin)) });
+  const run = (margin: number): WalkResult => atConfidence(s, change(margin));
   const maxMargin = 100 - s.reservePct;
-  const found = bisect((m) => ok(run(m), s.reservePct), Math.max(1, maxMargin / 4), maxMargin, 0.5);
+  const found = bisect((m) => holds(s, change(m)), Math.max(1, maxMargin / 4), maxMargin, 0.5);
   const assumed = !s.p.input.rig.generator;
   if (found === null)
     return {
@@ -214,15 +260,17 @@ function hookupLever(s: Search, baseline: WalkResult): HeadroomLever {
   const after = nights.filter((n) => startOf(n) > breach).sort((a, b) => startOf(a) - startOf(b));
   const order = [...before, ...after];
   const supplyAt = (stopIndex: number) => hookupSupplyFor(s.p, stopIndex) ?? UNKNOWN_COUNTRY_HOOKUP;
-  const run = (k: number): WalkResult => {
-    const hookupW = Float64Array.from(s.base.hookupW);
+  // Every year shares the plan's hookups: the nights are laid on them once per trial.
+  const change = (k: number): Change => {
+    const hookupW = Float64Array.from(s.bases[0]?.hookupW ?? s.p.hookupW);
     for (const night of order.slice(0, Math.ceil(k))) {
       const h = supplyAt(night.stopIndex);
       for (const i of night.steps) hookupW[i] = h.amps * h.volts;
     }
-    return walk(s.p, { ...s.base, hookupW }, null);
+    return (base) => ({ ...base, hookupW });
   };
-  const found = bisect((k) => ok(run(k), s.reservePct), 1, order.length, 1);
+  const run = (k: number): WalkResult => atConfidence(s, change(k));
+  const found = bisect((k) => holds(s, change(k)), 1, order.length, 1);
   if (found === null)
     return {
       lever: 'hookup',
@@ -265,14 +313,38 @@ export function findHeadroom(draft: EngineInputDraft): HeadroomResult {
   return findHeadroomParsed(engineInputSchema.parse(draft));
 }
 
+/**
+ * The scenarios the search must hold in: one per recorded year (worst first) with how many must hold, else the one
+ * planned sky (a forecast's where there is one).
+ */
+function searchBases(p: Prepared): { bases: Scenario[]; need: number; years: number } {
+  const weather = p.input.weather;
+  const choices = skyChoices(p.input.trip.stops);
+  const skies = weather && weather.years.length > 0 ? recordYearSkies(p, weather, choices) : [];
+  if (skies.length === 0) {
+    const sky = forecastOnlySky(p, weather, choices);
+    return { bases: [plannedScenario(p, solarSeries(p, 0, sky), sky?.ambientC)], need: 1, years: 0 };
+  }
+  const bases = skies.map((y) => plannedScenario(p, solarSeries(p, 0, y.sky), y.sky.ambientC));
+  const lows = bases.map((b) => walk(p, b, null).lowestSocPct);
+  const order = bases.map((_, i) => i).sort((a, b) => (lows[a] ?? 0) - (lows[b] ?? 0));
+  return {
+    bases: order.map((i) => bases[i] as Scenario),
+    need: Math.ceil((HOLD_CONFIDENCE.held * bases.length) / HOLD_CONFIDENCE.of),
+    years: bases.length,
+  };
+}
+
 /** Search a validated input (no parsing): every trial below is a battery walk over one precomputed trip. */
 export function findHeadroomParsed(input: EngineInput): HeadroomResult {
   const p = prepare(input);
-  const base = plannedScenario(p, solarSeries(p, 0));
+  const { bases, need, years } = searchBases(p);
   const reservePct = reservePctOf(input);
-  const baseline = walk(p, base, null);
-  const s: Search = { p, base, reservePct };
-  const needed = !ok(baseline, reservePct);
+  const s: Search = { p, bases, need, reservePct };
+  const unchanged: Change = (base) => base;
+  const baseline = atConfidence(s, unchanged);
+  const baselineHeld = bases.filter((b) => ok(walk(p, b, null), reservePct)).length;
+  const needed = baselineHeld < need;
   const levers = needed
     ? [batteryLever(s), solarLever(s), generatorLever(s), hookupLever(s, baseline)]
     : (
@@ -285,6 +357,7 @@ export function findHeadroomParsed(input: EngineInput): HeadroomResult {
       ).map(([l, u]) => notNeeded(l, u, baseline.lowestSocPct));
   return {
     reservePct,
+    confidence: years > 0 ? { ...HOLD_CONFIDENCE, years, baselineHeld } : null,
     baselineLowestSocPct: baseline.lowestSocPct,
     baselineEnergyShortWh: baseline.energyShortWh,
     needed,

@@ -31,10 +31,16 @@ export function martinRuizDiffuse(tiltDeg: number, aR = MARTIN_RUIZ_AR): { sky: 
 }
 
 /**
- * What passes one surface's glass, for a loop over many samples: beam (and circumsolar) at the angle of incidence,
- * sky and ground diffuse by the integrals for the surface's tilt.
+ * One surface's glass, for a loop over many samples: the beam's IAM at an angle of incidence (fixed by the
+ * geometry, so worked out once per sample and shared by every sky), and the sky and ground diffuse IAMs for the
+ * surface's tilt. What passes is beam × beamIam + sky × skyIam + ground × groundIam.
  */
-export function glassOf(tiltDeg: number): (beam: number, sky: number, ground: number, cosInc: number) => number {
+export type Glass = { beamIam: (cosInc: number) => number; skyIam: number; groundIam: number };
+
+export function glassOf(tiltDeg: number): Glass {
   const diffuse = martinRuizDiffuse(tiltDeg);
-  return (beam, sky, ground, cosInc) => beam * martinRuizIam(cosInc) + sky * diffuse.sky + ground * diffuse.ground;
+  return { beamIam: (cosInc) => martinRuizIam(cosInc), skyIam: diffuse.sky, groundIam: diffuse.ground };
 }
+
+/** Glass that passes everything: the check that leaves incidence losses out. */
+export const CLEAR_GLASS: Glass = { beamIam: () => 1, skyIam: 1, groundIam: 1 };

@@ -1,5 +1,7 @@
 // Public API of the budget engine. Pure: no I/O, no React, no Node built-ins.
 export { simulateTrip, simulateParsed } from './simulate';
+export { checkFixes, checkFixesParsed, withFixes, type CheckFixesOptions } from './check-fixes';
+export { FIX_HOLD_SHARE } from './fixes';
 export { findHeadroom, findHeadroomParsed } from './headroom';
 export {
   APPLIANCE_LIBRARY,

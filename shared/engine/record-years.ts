@@ -4,16 +4,42 @@
 // and the worst year, and the 10th–90th percentile of state of charge step by step.
 import type { EngineWeather } from '../schemas/engine-weather';
 import type { Prepared } from './prepare';
-import { seriesForRun, stepSky, type StepSky } from './recorded-sky';
+import { seriesForRun, stepSky, type SkyChoice, type StepSky } from './recorded-sky';
 import type { PlanChance, YearLow } from './result-types';
 import type { WalkResult } from './walk';
 
-export type YearRuns = {
+/** One year's run: its sky and whatever the caller's run made of it (at least the walk's result). */
+export type YearRun<R extends { result: WalkResult }> = { year: number; sky: StepSky; run: R };
+
+export type YearRuns<R extends { result: WalkResult }> = {
   chance: PlanChance;
-  /** The median year's sky: the planned run's. */
-  medianSky: StepSky;
+  /** Every year run, in the record's order. */
+  years: YearRun<R>[];
+  /** The median year: the planned run's. */
+  median: YearRun<R>;
   socBand: { p10: number[]; p90: number[] };
 };
+
+/** The recorded years' skies: every year that has a record for at least one stop whose sky is from the record. */
+export function recordYearSkies(
+  p: Prepared,
+  weather: EngineWeather,
+  choices: readonly SkyChoice[],
+): { year: number; sky: StepSky }[] {
+  const temps = choices.map((s) => s.recordedTemperature);
+  const skies: { year: number; sky: StepSky }[] = [];
+  weather.years.forEach((y, index) => {
+    if (!choices.some((s, w) => s.source === 'record' && y.stops[w])) return;
+    skies.push({ year: y.year, sky: stepSky(p, seriesForRun(weather, choices, index), temps) });
+  });
+  return skies;
+}
+
+/** How many of the years' walks keep the lowest charge at or above the reserve. */
+export function yearsHeld(results: readonly WalkResult[], reservePct: number): number {
+  // A float's last bit must not turn a charge that sits on the reserve into a year that fails.
+  return results.filter((r) => r.lowestSocPct >= reservePct - 1e-9).length;
+}
 
 /** The p-quantile (0–1) of sorted values, linear between neighbours. */
 function quantile(sorted: Float64Array, q: number): number {
@@ -25,40 +51,36 @@ function quantile(sorted: Float64Array, q: number): number {
 
 /**
  * Runs every year that has a record for at least one stop whose sky is from the record; undefined when none has.
- * `run` walks the trip under one year's sky without a ledger.
+ * `run` walks the trip under one year's sky without a ledger, and may keep what it built (the solar series, the
+ * scenario) for the caller.
  */
-export function runRecordYears(
+export function runRecordYears<R extends { result: WalkResult }>(
   p: Prepared,
   weather: EngineWeather,
+  choices: readonly SkyChoice[],
   reservePct: number,
-  run: (sky: StepSky) => WalkResult,
-): YearRuns | undefined {
-  const temps = weather.stops.map((s) => s.recordedTemperature);
-  const years: { year: number; sky: StepSky; result: WalkResult }[] = [];
-  weather.years.forEach((y, index) => {
-    const series = seriesForRun(weather, index);
-    const hasRecord = weather.stops.some((s, w) => s.source === 'record' && y.stops[w]);
-    if (!hasRecord) return;
-    const sky = stepSky(p, series, temps);
-    years.push({ year: y.year, sky, result: run(sky) });
-  });
-  const ranked = [...years].sort((a, b) => a.result.lowestSocPct - b.result.lowestSocPct || a.year - b.year);
+  run: (sky: StepSky) => R,
+): YearRuns<R> | undefined {
+  const years: YearRun<R>[] = recordYearSkies(p, weather, choices).map((y) => ({ ...y, run: run(y.sky) }));
+  const ranked = [...years].sort((a, b) => a.run.result.lowestSocPct - b.run.result.lowestSocPct || a.year - b.year);
   // The lower median; the bad year is the one that 1 year in 10 does as badly as or worse than.
   const medianIndex = Math.floor((ranked.length - 1) / 2);
   const median = ranked[medianIndex];
   if (!median) return undefined;
   const low = (i: number): YearLow => {
     const r = ranked[Math.min(ranked.length - 1, Math.max(0, i))] ?? ranked[0];
-    return { year: r?.year ?? 0, lowestSocPct: r?.result.lowestSocPct ?? 0 };
+    return { year: r?.year ?? 0, lowestSocPct: r?.run.result.lowestSocPct ?? 0 };
   };
   const badIndex = Math.ceil(ranked.length / 10) - 1;
-  // A float's last bit must not turn a charge that sits on the reserve into a year that fails.
-  const held = years.filter((y) => y.result.lowestSocPct >= reservePct - 1e-9).length;
+  const held = yearsHeld(
+    years.map((y) => y.run.result),
+    reservePct,
+  );
   const p10 = new Array<number>(p.n);
   const p90 = new Array<number>(p.n);
   const column = new Float64Array(years.length);
   for (let i = 0; i < p.n; i++) {
-    for (let y = 0; y < years.length; y++) column[y] = years[y]?.result.socPct[i] ?? 0;
+    for (let y = 0; y < years.length; y++) column[y] = years[y]?.run.result.socPct[i] ?? 0;
     column.sort();
     p10[i] = quantile(column, 0.1);
     p90[i] = quantile(column, 0.9);
@@ -72,7 +94,8 @@ export function runRecordYears(
       worst: low(0),
       byYear: ranked.map((_, i) => low(i)),
     },
-    medianSky: median.sky,
+    years,
+    median,
     socBand: { p10, p90 },
   };
 }

@@ -107,10 +107,15 @@ export type FixKind =
   | 'thermostat-setting'
   | 'appliance-less'
   | 'appliance-another-time'
-  | 'appliance-shore-only';
+  | 'appliance-shore-only'
+  | 'appliance-generator-only';
 
-/** What walking the battery again with the fix applied gave: whether the flag clears, and the lowest charge then. */
-export type FixCheck = { clears: boolean; lowestSocPct: number };
+/**
+ * What walking the battery again with the fix applied gave: whether the flag clears, and the lowest charge then.
+ * With recorded years the fix is walked in each of them: it clears when the flag's rows hold in at least the
+ * chosen share of years (`years`), and the lowest charge is the one that share of years stays above.
+ */
+export type FixCheck = { clears: boolean; lowestSocPct: number; years?: { held: number; of: number } };
 
 export type Fix = {
   kind: FixKind;
@@ -172,8 +177,13 @@ export type Flag = {
   drawdown: { firstRow: number; lastRow: number };
   /** The battery's draw over the draw-down by cause, largest first (shortfall flags; empty for the others). */
   causes: Cause[];
-  fixes: Fix[];
 };
+
+/** A flag's fixes, checked apart from the budget (checkFixes) and matched to the flag by its id. */
+export type FlagFixes = { flagId: string; fixes: Fix[] };
+
+/** A flag with its fixes, as the screens show it. */
+export type FlagWithFixes = Flag & { fixes: Fix[] };
 
 export type BandRun = { skyShift: -1 | 1; socPct: number[]; lowestSocPct: number };
 

@@ -1,6 +1,8 @@
 // simulateTrip: validate the input, precompute the trip once, walk the battery hour by hour under the planned
 // sky (full ledger) and, together, under one sky level better and one worse (state of charge only). With recorded
-// years, the trip is walked once per year (record-years.ts) and the planned run is the median year.
+// years, the trip is walked once per year (record-years.ts) and the planned run is the median year. Flags come with
+// their causes but no fixes: checking fixes walks the trip dozens of times more, so it is its own step
+// (check-fixes.ts), asked for only when someone looks at the flags.
 import { engineInputSchema, type EngineInput, type EngineInputDraft } from '../schemas/engine-input';
 import { CHEMISTRY } from './battery';
 import { climateLoads, type StepLoads } from './climate';
@@ -8,9 +10,9 @@ import { localIso, utcIso, whereAt } from './describe';
 import { buildFlags, isShortfall } from './flags';
 import { fuelUnit } from './fuel';
 import { prepare, type Prepared } from './prepare';
-import type { BandRun, DaySheet, Headline, LedgerRow, SimulationResult } from './result-types';
-import { runRecordYears } from './record-years';
-import { effectiveSources, seriesForRun, stepSky, type StepSky } from './recorded-sky';
+import type { BandRun, DaySheet, Flag, Headline, LedgerRow, SimulationResult } from './result-types';
+import { runRecordYears, type YearRuns } from './record-years';
+import { effectiveSources, forecastOnlySky, skyChoices, type StepSky } from './recorded-sky';
 import { solarSeries, type SolarSeries } from './solar';
 import { localLabel, utcIsoString } from './time-grid';
 import { generatorPlanFor, newLedger, walk, type LedgerColumns, type Scenario, type WalkResult } from './walk';
@@ -211,42 +213,61 @@ function bandRun(p: Prepared, shift: -1 | 1): BandRun {
 }
 
 /** The planned run's scenario under a sky: the preset's when there is no recorded or forecast one. */
-function scenarioUnder(p: Prepared, sky: StepSky | undefined): { solar: SolarSeries; scenario: Scenario } {
+export function scenarioUnder(p: Prepared, sky: StepSky | undefined): { solar: SolarSeries; scenario: Scenario } {
   const solar = solarSeries(p, 0, sky);
   return { solar, scenario: plannedScenario(p, solar, sky?.ambientC) };
 }
 
-/** Simulate a validated input (no parsing); exposed for callers that already hold an EngineInput. */
-export function simulateParsed(input: EngineInput): SimulationResult {
+/** One recorded year's run: the solar series and scenario it walked, and the walk's result. */
+type YearRunBuilt = { solar: SolarSeries; scenario: Scenario; result: WalkResult };
+
+/** The planned run of a trip and what flags and fixes read of it: the walk under the planned sky, with its ledger. */
+export type PlannedRun = {
+  p: Prepared;
+  solar: SolarSeries;
+  planned: Scenario;
+  l: LedgerColumns;
+  r: WalkResult;
+  sky: StepSky | undefined;
+  years: YearRuns<YearRunBuilt> | undefined;
+  sources: ReturnType<typeof effectiveSources>;
+  capacityWh: number;
+  reservePct: number;
+  flags: Flag[];
+};
+
+/** Prepare the trip, run its recorded years (if any), walk the planned run and find its flags (without fixes). */
+export function planTrip(input: EngineInput): PlannedRun {
   const p = prepare(input);
   const weather = input.weather;
-  const sources = effectiveSources(weather, input.trip.stops.length);
+  const choices = skyChoices(input.trip.stops);
+  const sources = effectiveSources(weather, choices);
   const reservePct = reservePctOf(input);
-  // With a record, the trip runs once per recorded year and the planned run is the median year's.
+  // With a record, the trip runs once per recorded year and the planned run is the median year's, reused as built.
   const years =
     weather && weather.years.length > 0
-      ? runRecordYears(p, weather, reservePct, (sky) => walk(p, scenarioUnder(p, sky).scenario, null))
+      ? runRecordYears(p, weather, choices, reservePct, (sky): YearRunBuilt => {
+          const under = scenarioUnder(p, sky);
+          return { ...under, result: walk(p, under.scenario, null) };
+        })
       : undefined;
-  const forecastOnly =
-    weather && !years && sources.includes('forecast')
-      ? stepSky(
-          p,
-          seriesForRun(weather, null),
-          weather.stops.map((s) => s.recordedTemperature),
-        )
-      : undefined;
-  const sky = years?.medianSky ?? forecastOnly;
-  const { solar, scenario: planned } = scenarioUnder(p, sky);
+  const forecastOnly = years ? undefined : forecastOnlySky(p, weather, choices);
+  const sky = years?.median.sky ?? forecastOnly;
+  const { solar, scenario: planned } = years?.median.run ?? scenarioUnder(p, sky);
   const l = newLedger(p.n);
   const r = walk(p, planned, l);
-  const loads = planned.loads;
   const capacityWh = capacityWhOf(input);
-  const fix = { p, scenario: planned, cabinSolarW: solar.cabinSolarW, capacityWh, reservePct, trials: new Map() };
-  const flags = buildFlags({ p, l, loads, capacityWh, reservePct, fix });
+  const flags = buildFlags({ p, l, loads: planned.loads, capacityWh, reservePct });
+  return { p, solar, planned, l, r, sky, years, sources, capacityWh, reservePct, flags };
+}
+
+/** Simulate a validated input (no parsing); exposed for callers that already hold an EngineInput. */
+export function simulateParsed(input: EngineInput): SimulationResult {
+  const { p, solar, planned, l, r, sky, years, sources, flags } = planTrip(input);
   // The headline's energy short is the flags' own figures added up, so the page shows one number for one thing.
   const energyShortWh = flags.reduce((s, f) => (isShortfall(f) ? s + f.energyShortWh : s), 0);
   return {
-    ledger: ledgerRows(p, l, solar, loads, sky?.ambientC ?? p.ambientC),
+    ledger: ledgerRows(p, l, solar, planned.loads, sky?.ambientC ?? p.ambientC),
     days: daySheets(p, l),
     headline: { ...headline(p, l, r), energyShortWh },
     flags,

@@ -9,7 +9,7 @@ import { CHEMISTRY } from './battery';
 import { cabinModel, solarGainOf } from './cabin';
 import { arrayOutput, controllerLimitW, type ArrayOutput } from './charge-controller';
 import { erbsSplitter, type Split } from './decomposition';
-import { glassOf } from './iam';
+import { CLEAR_GLASS, glassOf, type Glass } from './iam';
 import type { Prepared } from './prepare';
 import type { StepSky } from './recorded-sky';
 import { cellTemperatureOf } from './pv-module';
@@ -26,13 +26,10 @@ export type SolarSeries = {
   cabinSolarW: Float64Array;
 };
 
-/** Glass that passes everything: the check that leaves incidence losses out. */
-const clearGlass = (beam: number, sky: number, ground: number): number => beam + sky + ground;
-
 /** One array's chain of models, each an instance built once for the array. */
 type ArrayModel = {
   transpose: ReturnType<typeof surfaceTransposer>;
-  glass: ReturnType<typeof glassOf>;
+  glass: Glass;
   cellC: ReturnType<typeof cellTemperatureOf>;
   output: ArrayOutput;
 };
@@ -48,6 +45,8 @@ type Geometry = {
   /** Per sample × array: cos of the angle of incidence (clamped at 0) and Hay–Davies' beam ratio. */
   cosInc: Float64Array;
   rb: Float64Array;
+  /** Per sample × array: the beam's incidence angle modifier. */
+  beamIam: Float64Array;
   /** The planned sky's series, kept so the band can copy the steps whose sky the shift leaves unchanged. */
   planned: SolarSeries | null;
 };
@@ -63,7 +62,7 @@ function arrayModels(p: Prepared): { arrays: ArrayModel[]; capW: number } {
     const tilt = a.mounting === 'flat' ? 0 : a.tiltDeg;
     return {
       transpose: surfaceTransposer(tilt, rho),
-      glass: p.input.options.incidenceLosses ? glassOf(tilt) : clearGlass,
+      glass: p.input.options.incidenceLosses ? glassOf(tilt) : CLEAR_GLASS,
       cellC: cellTemperatureOf(a.noctC, a.fit),
       output: ctrl ? arrayOutput(ctrl, a, chargeV) : () => 0,
     };
@@ -86,6 +85,7 @@ function geometry(p: Prepared): Geometry {
     diffF: new Float64Array(p.n),
     cosInc: new Float64Array(ns * m),
     rb: new Float64Array(ns * m),
+    beamIam: new Float64Array(ns * m),
     planned: null,
   };
   const panels = p.input.rig.solarArrays.map((a) => ({
@@ -104,6 +104,7 @@ function geometry(p: Prepared): Geometry {
         const ci = Math.max(0, cosIncidence(90 - alt, az, panel.tiltDeg, panel.azimuthDeg));
         g.cosInc[k * m + j] = ci;
         g.rb[k * m + j] = beamRatio(ci, sun.cosZ[k] ?? 0);
+        g.beamIam[k * m + j] = arrays[j]?.glass.beamIam(ci) ?? 0;
       });
     }
   }
@@ -130,7 +131,7 @@ export function solarSeries(p: Prepared, skyShift: number, sky?: StepSky): Solar
   const cabinSolarW = new Float64Array(p.n);
   const series = { availableW, poaWm2, cabinSolarW };
   if (skyShift === 0 && !sky) g.planned = series;
-  const { arrays, capW, beamF, diffF, cosInc, rb, cabinGain } = g;
+  const { arrays, capW, beamF, diffF, cosInc, rb, beamIam, cabinGain } = g;
   const m = arrays.length;
   const { start, weight, cosZ, cosZTrue, ghiClear } = p.sun;
   const split: Split = { dni: 0, dhi: 0, kt: 0 };
@@ -174,7 +175,9 @@ export function solarSeries(p: Prepared, skyShift: number, sky?: StepSky): Solar
         // Plane-of-array irradiance for the cell temperature and the ledger; what passes the glass for power.
         const poa = parts.beam + parts.sky + parts.ground;
         if (j === 0) poaFirst += (weight[k] ?? 0) * poa;
-        sampleW += a.output(a.glass(parts.beam, parts.sky, parts.ground, ci), a.cellC(ambient, poa));
+        const passed =
+          parts.beam * (beamIam[k * m + j] ?? 0) + parts.sky * a.glass.skyIam + parts.ground * a.glass.groundIam;
+        sampleW += a.output(passed, a.cellC(ambient, poa));
       }
       watts += (weight[k] ?? 0) * Math.min(sampleW, capW);
     }

@@ -8,23 +8,34 @@ const MAX_SERIES_HOURS = (LIMITS.tripDays + 2) * 24;
 /** Most past years a budget runs through. */
 export const MAX_RECORD_YEARS = 40;
 
+/**
+ * Hourly values from min to max, or null for a gap. Checked in one pass over the array: a budget on 20 years
+ * carries tens of thousands of them, and a schema per element cost a tenth of the budget's time.
+ */
+function hourlyValues(min: number, max: number, what: string) {
+  return z.custom<(number | null)[]>(
+    (v) =>
+      Array.isArray(v) &&
+      v.length <= MAX_SERIES_HOURS &&
+      v.every((x) => x === null || (typeof x === 'number' && x >= min && x <= max)),
+    { error: `Expected at most ${MAX_SERIES_HOURS} hourly ${what} values from ${min} to ${max}, or null for a gap.` },
+  );
+}
+
 export const hourlySkySchema = z.object({
   startMs: z.number().int(),
   /** Global horizontal irradiance, W/m²; null where the record has a gap (the preset sky fills it). */
-  ghiWm2: z.array(z.number().min(0).max(1500).nullable()).max(MAX_SERIES_HOURS),
+  ghiWm2: hourlyValues(0, 1500, 'irradiance'),
   /** Air temperature, °C; null where the record has a gap (the stop's low/high curve fills it). */
-  tempC: z.array(z.number().min(-90).max(60).nullable()).max(MAX_SERIES_HOURS),
+  tempC: hourlyValues(-90, 60, 'temperature'),
 });
 export type HourlySky = z.infer<typeof hourlySkySchema>;
 
-export const skySourceSchema = z.enum(['record', 'forecast', 'preset']);
-export type SkySource = z.infer<typeof skySourceSchema>;
+/** Where a stop's sky came from in a budget (a stop asking for the record or forecast may have neither yet). */
+export type SkySource = 'record' | 'forecast' | 'preset';
 
+/** What the past holds for a trip's stops. Which of it each stop uses is the stop's own choice (skySource). */
 export const engineWeatherSchema = z.object({
-  /** Per stop, in trip order: where its sky comes from, and whether recorded temperatures replace its low/high. */
-  stops: z
-    .array(z.object({ source: skySourceSchema, recordedTemperature: z.boolean().default(true) }))
-    .max(LIMITS.stopsPerTrip),
   /** Past years, each with a series per stop (null: that stop has no record for the year). */
   years: z
     .array(z.object({ year: z.number().int(), stops: z.array(hourlySkySchema.nullable()).max(LIMITS.stopsPerTrip) }))

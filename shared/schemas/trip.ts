@@ -18,6 +18,14 @@ export type SitePreset = z.infer<typeof sitePresetSchema>;
 export const skyOutlookSchema = z.enum(['clear', 'hazy', 'broken-cloud', 'overcast']);
 export type SkyOutlook = z.infer<typeof skyOutlookSchema>;
 
+/**
+ * Where a stop's sky comes from: the past years' record at the place (the default), the forecast (for days inside
+ * its horizon), or the stop's own sky outlook (for what no record knows, such as wildfire smoke). Without a record
+ * or forecast the outlook is the assumed sky either way.
+ */
+export const stopSkySourceSchema = z.enum(['record', 'forecast', 'preset']);
+export type StopSkySource = z.infer<typeof stopSkySourceSchema>;
+
 /** Custom horizon: obstruction elevation per compass sector, sectors clockwise from north (e.g. 8 or 16). */
 export const customExposureSchema = z.object({
   kind: z.literal('custom'),
@@ -69,6 +77,7 @@ export const stopSchema = z
     departAt: isoInstantSchema,
     exposure: siteExposureSchema.default({ kind: 'preset', preset: 'open' }),
     skyOutlook: skyOutlookSchema.default('clear'),
+    skySource: stopSkySourceSchema.default('record'),
     /** Linke turbidity; when given the Ineichen–Perez clear sky is used instead of Haurwitz. */
     linkeTurbidity: z.number().min(1).max(10).optional(),
     hookup: hookupSchema.nullable().default(null),
@@ -76,6 +85,8 @@ export const stopSchema = z
     generatorHours: generatorHoursSchema.nullable().default({ startHour: 8, endHour: 20 }),
     lowC: z.number().min(-50).max(60),
     highC: z.number().min(-50).max(60),
+    /** true: the low and high above stand over recorded and forecast air temperatures. */
+    ownTemperatures: z.boolean().default(false),
   })
   .refine((s) => s.highC >= s.lowC, { message: 'The high must be at or above the low.', path: ['highC'] })
   .refine((s) => Date.parse(s.departAt) > Date.parse(s.arriveAt), {

@@ -1,6 +1,7 @@
-import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { useMutation, useQuery, useQueryClient, type QueryClient } from '@tanstack/react-query';
 import type { CheckInFieldsInput, CheckInRecord } from '@/shared/schemas/check-in';
 import { apiFetch } from './api-client';
+import { defineQueuedSave, queuedSaveKeys } from './offline-queue';
 import { STALE } from './stale';
 import { tripKeys } from './trips';
 
@@ -18,20 +19,25 @@ export function useCheckInsQuery(tripId: string) {
   });
 }
 
-export type CheckInSave = { checkInId: string | null; version?: number; checkIn: CheckInFieldsInput };
+export type CheckInSave = { tripId: string; checkInId: string | null; version?: number; checkIn: CheckInFieldsInput };
 
-export function useCheckInSaveMutation(tripId: string) {
-  const queryClient = useQueryClient();
-  return useMutation({
-    mutationFn: ({ checkInId, version, checkIn }: CheckInSave) =>
+/** A check-in is kept on the device while there is no connection and sent when it returns. */
+export function defineCheckInSave(queryClient: QueryClient): void {
+  defineQueuedSave(queryClient, queuedSaveKeys.checkIn, {
+    mutationFn: ({ tripId, checkInId, version, checkIn }: CheckInSave) =>
       checkInId
         ? apiFetch<CheckInRecord>(`${base(tripId)}/${encodeURIComponent(checkInId)}`, {
             method: 'PATCH',
             json: { version, checkIn },
           })
         : apiFetch<CheckInRecord>(base(tripId), { method: 'POST', json: { checkIn } }),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: checkInKeys.list(tripId) }),
+    onSuccess: (_saved: CheckInRecord, { tripId }: CheckInSave) =>
+      queryClient.invalidateQueries({ queryKey: checkInKeys.list(tripId) }),
   });
+}
+
+export function useCheckInSaveMutation() {
+  return useMutation<CheckInRecord, Error, CheckInSave>({ mutationKey: queuedSaveKeys.checkIn });
 }
 
 export function useCheckInDeleteMutation(tripId: string) {

@@ -9,18 +9,23 @@ export const tripKeys = {
   list: () => [...tripKeys.root, 'list'] as const,
   detail: (tripId: string) => [...tripKeys.root, 'detail', tripId] as const,
   budget: (tripId: string) => [...tripKeys.root, 'budget', tripId] as const,
+  /** Under the budget's key, so whatever refreshes a budget refreshes its ledger too. */
+  ledger: (tripId: string) => [...tripKeys.budget(tripId), 'ledger'] as const,
   activity: (tripId: string) => [...tripKeys.root, 'activity', tripId] as const,
   members: (tripId: string) => [...tripKeys.root, 'members', tripId] as const,
+  /** Where each stop's weather record stands: asked again after every change, so a new or moved stop shows loading. */
+  weather: (tripId: string) => [...tripKeys.root, 'weather', tripId] as const,
 };
 
 const tripPath = (tripId: string) => `/api/trips/${encodeURIComponent(tripId)}`;
 
-/** Every mutation on a trip bumps its version: refresh its detail, budget, activity and the list's card. */
+/** Every mutation on a trip bumps its version: refresh its detail, budget, activity, weather and the list's card. */
 export async function invalidateTrip(queryClient: QueryClient, tripId: string): Promise<void> {
   await Promise.all([
     queryClient.invalidateQueries({ queryKey: tripKeys.detail(tripId) }),
     queryClient.invalidateQueries({ queryKey: tripKeys.budget(tripId) }),
     queryClient.invalidateQueries({ queryKey: tripKeys.activity(tripId) }),
+    queryClient.invalidateQueries({ queryKey: tripKeys.weather(tripId) }),
     queryClient.invalidateQueries({ queryKey: tripKeys.list() }),
   ]);
 }

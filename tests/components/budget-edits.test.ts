@@ -1,13 +1,14 @@
 import { describe, expect, it } from 'vitest';
 import { editForFix } from '@/components/budget/apply-fix';
-import { applyWhatIf, rigWithExtraSolar } from '@/components/budget/what-if';
+import { applyWhatIf, rigWithExtraSolar, withRecord } from '@/components/budget/what-if';
 import { daysCsv, filterLedger, ledgerCsv } from '@/components/ledger/ledger-csv';
-import { DEMO_TRIPS, simulateTrip } from '@/shared/engine';
+import { checkFixes, DEMO_TRIPS, simulateTrip, withFixes } from '@/shared/engine';
 import type { Fix } from '@/shared/engine/result-types';
 import { cabinSchema } from '@/shared/schemas/rig';
 import { toEngineInput } from '@/shared/trip-to-engine-input';
 import { NO_WHAT_IF } from '@/stores/what-if-store';
 import { demoDetail } from '../e2e/fixtures';
+import { withSyntheticRecord } from '../factories/recorded-weather';
 
 const detail = demoDetail('highlandLoop');
 const input = toEngineInput(detail);
@@ -48,6 +49,18 @@ describe('what-if edits', () => {
     expect(input.trip.stops.map((s) => s.skyOutlook)).toContain('clear');
     expect(worse.trip.stops.map((s) => s.skyOutlook)).not.toContain('clear');
   });
+  it('when the budget runs on recorded years, then a what-if runs on the same years and only the change differs', () => {
+    const onRecord = withRecord(input, withSyntheticRecord(input, 8).weather);
+    if (!onRecord) throw new Error('no input');
+    const base = simulateTrip(onRecord).chance;
+    const bigger = simulateTrip(applyWhatIf(onRecord, { ...NO_WHAT_IF, extraBattery: true })).chance;
+    expect(base?.years).toBe(8);
+    expect(bigger?.byYear.map((y) => y.year).sort()).toEqual(base?.byYear.map((y) => y.year).sort());
+    expect(bigger?.held).toBeGreaterThanOrEqual(base?.held ?? 0);
+    expect(bigger?.worst.lowestSocPct).toBeGreaterThanOrEqual(base?.worst.lowestSocPct ?? 0);
+    // No record fetched: the plan is left as it is.
+    expect(withRecord(input, null)).toBe(input);
+  });
   it('when a rig has no solar, then more solar adds an array and a controller', () => {
     const rig = rigWithExtraSolar({ ...detail.rig.rig, solarArrays: [], controller: null });
     expect(rig.solarArrays).toHaveLength(1);
@@ -56,7 +69,8 @@ describe('what-if edits', () => {
 });
 
 describe('flag fixes as edits', () => {
-  const fixes = result.flags.flatMap((f) => f.fixes);
+  const flags = withFixes(result.flags, checkFixes(input));
+  const fixes = flags.flatMap((f) => f.fixes);
   const first = (kind: Fix['kind']) => fixes.find((f) => f.kind === kind);
 
   it.each(['add-battery', 'add-hookup-night', 'add-generator-hours', 'larger-inverter'] as const)(
@@ -87,7 +101,7 @@ describe('flag fixes as edits', () => {
   });
 
   it('when a battery fix is applied, then its energy-short flag is gone', () => {
-    const flag = result.flags.find((f) => f.kind === 'energy-short');
+    const flag = flags.find((f) => f.kind === 'energy-short');
     const fix = flag?.fixes.find((f) => f.kind === 'add-battery');
     const edit = fix ? editForFix(detail, fix, result.days) : null;
     if (edit?.kind !== 'rig') throw new Error('expected a rig edit');
@@ -97,7 +111,7 @@ describe('flag fixes as edits', () => {
 
   it('when a fix the engine says clears its flag is applied as an edit, then that stretch holds the reserve', () => {
     let checked = 0;
-    for (const flag of result.flags.filter((f) => f.kind === 'energy-short' || f.kind === 'below-reserve')) {
+    for (const flag of flags.filter((f) => f.kind === 'energy-short' || f.kind === 'below-reserve')) {
       for (const fix of flag.fixes.filter((f) => f.check?.clears)) {
         const edit = editForFix(detail, fix, result.days);
         if (!edit || edit.kind === 'stop') continue;

@@ -1,3 +1,4 @@
+import { toBudgetResult } from '@/shared/budget-result';
 import { describe, expect, it } from 'vitest';
 import { draftFromRecord, draftToFields, emptyDraft } from '@/components/check-ins/check-in-draft';
 import { currentStopIndex, stayOutcome } from '@/components/check-ins/stay-what-if';
@@ -111,7 +112,7 @@ describe('re-forecast view', () => {
 
   it('when the chart is drawn, then the plan spans the trip, the forecast leaves from the reading and the readings sit at their hours', () => {
     const record = { id: 'c1', checkIn: { at, socPct: 68 } } as CheckInRecord;
-    const chart = reforecastChart(plan, re, [record]);
+    const chart = reforecastChart(toBudgetResult(plan), re, [record]);
     expect(chart.plan).toHaveLength(plan.ledger.length);
     expect(chart.ahead[0]).toEqual({ x: 60, soc: 68 });
     expect(chart.ahead).toHaveLength(plan.ledger.length - 60 + 1);

@@ -3,6 +3,7 @@ import { energy, fuelAmount, mass, temperature } from '@/components/format/units
 import {
   fromFormValues,
   presetAt,
+  skySourceOptions,
   stopFieldOf,
   stopFormSchema,
   toFormValues,
@@ -127,5 +128,34 @@ describe('stop form values', () => {
     const gap = { ...values, arrive: '2027-03-28 01:30', depart: '2027-03-29 10:00' };
     expect(fromFormValues(gap, 'metric').ok).toBe(false);
     expect(refusals(gap).arrive).toMatch(/does not exist/);
+  });
+
+  it('when a stop picks its own sky and keeps its own temperatures, then both are saved and read back', () => {
+    const values = toFormValues(stop, '', 'metric', 'Europe/London');
+    expect(values).toMatchObject({ skySource: 'record', ownTemperatures: false });
+    const built = fromFormValues(
+      { ...values, skySource: 'preset', skyOutlook: 'hazy', ownTemperatures: true },
+      'metric',
+    );
+    if (!built.ok) throw new Error(JSON.stringify(built.errors));
+    const back = toFormValues(stopSchema.parse(built.stop), '', 'metric', 'Europe/London');
+    expect(back).toMatchObject({ skySource: 'preset', skyOutlook: 'hazy', ownTemperatures: true });
+  });
+
+  it('when a stop lies beyond the 16-day forecast, then the forecast is not offered unless it is already chosen', () => {
+    const today = new Date('2027-06-01T12:00:00Z');
+    const at = (arrive: string, depart: string) => ({ arrive, depart, timeZone: 'Europe/London' });
+    expect(skySourceOptions({ ...at('2027-06-10 14:00', '2027-06-12 10:00'), skySource: 'record' }, today)).toEqual([
+      'record',
+      'forecast',
+      'preset',
+    ]);
+    expect(skySourceOptions({ ...at('2027-07-10 14:00', '2027-07-12 10:00'), skySource: 'record' }, today)).toEqual([
+      'record',
+      'preset',
+    ]);
+    expect(skySourceOptions({ ...at('2027-07-10 14:00', '2027-07-12 10:00'), skySource: 'forecast' }, today)).toContain(
+      'forecast',
+    );
   });
 });

@@ -12,6 +12,7 @@ import {
 import type { LedgerRow } from '@/shared/engine/result-types';
 import { greatCircleKm } from '@/shared/geo/great-circle';
 import { chargeTone, lowestChargeByStop } from '@/shared/route-charge';
+import { socTrack } from '@/shared/budget-result';
 import type { Drive } from '@/shared/schemas/trip';
 
 const highland = [
@@ -107,7 +108,8 @@ describe('a stop’s charge on the map', () => {
   const drive = { where: { kind: 'drive', driveIndex: 0 }, socPct: 1 } as LedgerRow;
 
   it('when the ledger is read, then each stop gets its own lowest charge and drives do not count', () => {
-    expect(lowestChargeByStop([row(0, 80), row(0, 60), drive, row(1, 40), row(1, 55)], 3)).toEqual([60, 40, null]);
+    const track = socTrack([row(0, 80), row(0, 60), drive, row(1, 40), row(1, 55)]);
+    expect(lowestChargeByStop(track, 3)).toEqual([60, 40, null]);
   });
 
   it.each([

@@ -1,3 +1,4 @@
+import { toBudgetResult } from '@/shared/budget-result';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import {
@@ -25,7 +26,7 @@ const noneOverlap = (labels: PlacedLabel[], gap: number) =>
   labels.every((l, i) => i === 0 || (labels[i - 1]?.left ?? 0) + (labels[i - 1]?.width ?? 0) + gap <= l.left + 1e-9);
 
 describe.each(results)('the %s chart', (_name, result) => {
-  const series = socSeries(result);
+  const series = socSeries(toBudgetResult(result));
 
   it('when nothing is chosen, then the range runs from the first hour of the trip to the last', () => {
     const range = wholeTrip(series);
@@ -158,7 +159,6 @@ describe('flag labels', () => {
     lowest: { socPct: 0, row: 0, atUtc, atLocal: atUtc },
     drawdown: { firstRow: 0, lastRow: 0 },
     causes: [],
-    fixes: [],
   });
   const utcs = Array.from({ length: 48 }, (_, h) => Date.parse('2027-09-12T00:00:00Z') + h * 3_600_000);
 

@@ -85,8 +85,9 @@ describe('the cable check on the Rig tab', () => {
     await expect.poll(() => page.textContent(byTestId('toast'))).toContain('Rig saved');
     await page.reload();
     await page.waitForSelector(byTestId('rig-cable-check'));
-    expect(await page.textContent(byTestId('dc-run-2'))).toContain('16 mm² (≈ 6 AWG)');
-    expect(await page.textContent(byTestId('dc-run-2-headline'))).toBe('Passes');
+    // The device's copy shows first; the server's answer replaces it a moment later.
+    await expect.poll(() => page.textContent(byTestId('dc-run-2'))).toContain('16 mm² (≈ 6 AWG)');
+    await expect.poll(() => page.textContent(byTestId('dc-run-2-headline'))).toBe('Passes');
     expect(errors).toEqual([]);
     await context.close();
   });

@@ -3,6 +3,7 @@
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { DEMO_ACCOUNT, DEMO_VIEWER } from '@/db/seed';
+import type { TripDetail } from '@/shared/schemas/api';
 import {
   byTestId,
   openTrip,
@@ -18,11 +19,18 @@ import { horizontalOverflow, overlappingText } from './layout-probes';
 const suite = useServerAndBrowser();
 const HEADLINE = /^From your check-in Tue 18:00 at 68 %: lowest ahead \d+ % on [A-Z][a-z]{2} \d{2}:\d{2}$/;
 
-async function openCheckIn(page: Page): Promise<void> {
-  await openTrip(page, 'Highland loop');
+async function openCheckIn(page: Page): Promise<string> {
+  const tripId = await openTrip(page, 'Highland loop');
   await page.click(byTestId('tab-check-in'));
   await page.waitForSelector(byTestId('road-screen'));
+  return tripId;
 }
+
+/** When the trip's last stop is left, as the server has it. */
+const lastDeparture = async (page: Page, tripId: string) => {
+  const detail = (await (await page.request.get(`${suite.server.url}/api/trips/${tripId}`)).json()) as TripDetail;
+  return Date.parse(detail.stops.at(-1)?.stop.departAt ?? '');
+};
 
 async function expectTidy(page: Page, name: string): Promise<void> {
   expect(await horizontalOverflow(page)).toEqual([]);
@@ -32,12 +40,12 @@ async function expectTidy(page: Page, name: string): Promise<void> {
 }
 
 describe('check-ins', () => {
-  it('when a planner checks in on a phone, then the reading is listed with its author and the forecast starts from it on both tabs', async () => {
+  it('when a planner checks in on a phone, then the reading is listed with its author, the forecast starts from it on both tabs, and a night more at the current stop shows at once and is kept', async () => {
     const context = await suite.browser.newContext({ viewport: VIEWPORTS.phone, timezoneId: 'Europe/London' });
     const page = await context.newPage();
     const errors = trackPageErrors(page);
     await signIn(page, suite.server.url, DEMO_ACCOUNT.email, DEMO_ACCOUNT.password);
-    await openCheckIn(page);
+    const tripId = await openCheckIn(page);
     await page.waitForSelector(byTestId('check-in-list-empty'));
 
     // A message beside the field when the charge is missing.
@@ -63,6 +71,18 @@ describe('check-ins', () => {
     await page.waitForSelector(byTestId('budget-screen'));
     await page.waitForSelector(byTestId('reforecast-headline'));
     expect((await page.textContent(byTestId('reforecast-headline')))?.trim()).toMatch(HEADLINE);
+
+    // Stay a night longer where the reading was taken: the what-if shows at once, and Keep saves it.
+    const leavingBefore = await lastDeparture(page, tripId);
+    await page.click(byTestId('tab-check-in'));
+    await page.locator(byTestId('stay-more')).scrollIntoViewIfNeeded();
+    await page.click(byTestId('stay-more'));
+    expect(await page.textContent(byTestId('stay-nights'))).toContain('+1');
+    expect(await page.textContent(byTestId('stay-what-if'))).toMatch(/What-if: lowest ahead \d+ % on .+ \(now \d+ %\)/);
+    await page.click(byTestId('stay-keep'));
+    await expect.poll(() => page.textContent(byTestId('toast')), { timeout: 10_000 }).toContain('Saved: +1 night');
+    // The rest of the trip moved by the night: the last stop is left a day later.
+    await expect.poll(() => lastDeparture(page, tripId), { timeout: 10_000 }).toBe(leavingBefore + 86_400_000);
     expect(errors).toEqual([]);
     await context.close();
   });

@@ -129,11 +129,23 @@ describe('a trip leader at 1440 px', () => {
       expect(loads).toContain(name);
     await screenshot(page, 'leader-loads-desktop');
 
+    // The flags' fixes are checked apart from the budget: asked for once the flags are shown.
+    const fixesAsked: string[] = [];
+    page.on('request', (r) => {
+      if (r.url().includes('/budget/fixes')) fixesAsked.push(r.url());
+    });
     await page.click(byTestId('tab-budget'));
     await page.waitForSelector(byTestId('flag-list'));
     await page.waitForSelector(`${byTestId('soc-chart')} canvas`);
     const shortfalls = page.locator('[data-testid^="flag-energy-short"], [data-testid^="flag-below-reserve"]');
     expect(await shortfalls.count()).toBeGreaterThan(0);
+    /** Waits until the fixes of the budget on screen have arrived ("Checking fixes…" gone) and the flag offers one. */
+    const fixesShown = async (flag: ReturnType<typeof shortfalls.first>) => {
+      await expect.poll(() => page.locator(byTestId('fixes-loading')).count(), { timeout: 30_000 }).toBe(0);
+      await flag.locator('[data-testid^="fix-"]').first().waitFor({ timeout: 30_000 });
+    };
+    await fixesShown(shortfalls.first());
+    expect(fixesAsked.length).toBeGreaterThan(0);
     const shortBefore = Number((await page.textContent(byTestId('figure-short-value')))?.replace(/\D/g, ''));
     await screenshot(page, 'leader-budget-flag-desktop');
     // Two fixes in a row, then both undone newest first: the toast's Undo takes back the second, "Undo last fix"
@@ -184,6 +196,8 @@ describe('a trip leader at 1440 px', () => {
       await expect
         .poll(async () => Number((await page.textContent(byTestId('figure-short-value')))?.replace(/\D/g, '')))
         .toBe(shortBefore);
+      // After the undo the fixes are checked again for the budget as it was, and offered again.
+      await fixesShown(page.locator(byTestId(firstFlagId)));
     };
     // "What it would take" marks one lever as the cheapest, in words a screen reader reads.
     const cheapest = page.locator(byTestId('what-it-would-take-cheapest'));
@@ -203,6 +217,7 @@ describe('a trip leader at 1440 px', () => {
     let shortNow = shortBefore;
     for (let round = 0; round < 3 && (await shortfalls.count()) > 0; round++) {
       const flag = shortfalls.first();
+      await fixesShown(flag);
       const clears = !((await flag.textContent()) ?? '').includes('helps, not enough alone');
       const flagId = (await flag.getAttribute('data-testid')) ?? '';
       await flag.locator('[data-testid^="fix-"]').first().click();

@@ -88,7 +88,7 @@ describe('the development Outbox', () => {
     await screenshot(page, 'sign-in-outbox-link-phone');
 
     await signIn(page, suite.server.url, DEMO_ACCOUNT.email, DEMO_ACCOUNT.password);
-    expect(await page.locator('[data-testid^="nav-"]').count()).toBe(3);
+    expect(await page.locator('[data-testid^="nav-"]').count()).toBe(4);
     expect(await page.locator(byTestId('nav-outbox')).count()).toBe(0);
     await page.click(byTestId('nav-account'));
     await page.click(byTestId('account-outbox'));

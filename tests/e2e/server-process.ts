@@ -23,13 +23,13 @@ async function freePort(): Promise<number> {
 
 /**
  * Starts the real server (built web app, fresh database with demo data) on a free port; `env` adds or overrides
- * settings (a mail server of the test's own, say).
+ * settings (a mail server of the test's own, say); `nodeArgs` go to Node (a benchmark's `--cpu-prof`, say).
  */
-export async function startServer(env: Record<string, string> = {}): Promise<RunningServer> {
+export async function startServer(env: Record<string, string> = {}, nodeArgs: string[] = []): Promise<RunningServer> {
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'trailtally-e2e-'));
   const port = await freePort();
   const dbPath = path.join(dir, 'e2e.db');
-  const child: ChildProcess = spawn(path.resolve('node_modules/.bin/tsx'), ['server/index.ts'], {
+  const child: ChildProcess = spawn(path.resolve('node_modules/.bin/tsx'), [...nodeArgs, 'server/index.ts'], {
     env: {
       ...process.env,
       PORT: String(port),

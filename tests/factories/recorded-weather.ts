@@ -9,7 +9,6 @@ const HOUR_MS = 3_600_000;
 export function withSyntheticRecord(draft: EngineInputDraft, years: number): EngineInputDraft {
   const stops = draft.trip.stops;
   const weather: EngineWeather = {
-    stops: stops.map(() => ({ source: 'record', recordedTemperature: true })),
     years: Array.from({ length: years }, (_, k) => ({
       year: 2025 - k,
       stops: stops.map((stop) => {

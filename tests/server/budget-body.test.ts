@@ -3,9 +3,29 @@ import zlib from 'node:zlib';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { asciiJson, readyBody } from '@/server/budget/ready-body';
+import { simulateTrip } from '@/shared/engine';
+import { fromLedgerColumns } from '@/shared/ledger-columns';
+import type { TripDetail } from '@/shared/schemas/api';
+import { budgetResponseSchema, ledgerResponseSchema } from '@/shared/schemas/budget-response';
+import { toEngineInput } from '@/shared/trip-to-engine-input';
 import { listen, rawGet } from '../factories/raw-get';
 import { createTestApp, TEST_ORIGIN, TEST_PASSWORD, signUpAgent, type TestContext } from '../factories/test-app';
 import { addAppliance, addStop, createTrip } from '../factories/trip-factory';
+
+/** A listening test app and a trip with a stop and an appliance, with the owner's cookies for raw requests. */
+async function tripWithCookies(ctx: TestContext): Promise<{ server: http.Server; cookie: string; tripId: string }> {
+  const server = await listen(ctx.app);
+  const { agent, email } = await signUpAgent(ctx.app);
+  const { trip } = await createTrip(agent);
+  await addStop(agent, trip.id);
+  await addAppliance(agent, trip.id);
+  const signIn = await request(ctx.app)
+    .post('/api/auth/sign-in/email')
+    .set('Origin', TEST_ORIGIN)
+    .send({ email, password: TEST_PASSWORD });
+  const cookie = (signIn.headers['set-cookie'] as unknown as string[]).map((c) => c.split(';')[0]).join('; ');
+  return { server, cookie, tripId: trip.id };
+}
 
 describe('the budget body', () => {
   let ctx: TestContext;
@@ -15,18 +35,10 @@ describe('the budget body', () => {
 
   beforeAll(async () => {
     ctx = createTestApp();
-    server = await listen(ctx.app);
-    const { agent, email } = await signUpAgent(ctx.app);
-    const { trip } = await createTrip(agent);
-    await addStop(agent, trip.id);
-    await addAppliance(agent, trip.id);
-    path = `/api/trips/${trip.id}/budget`;
-    const signIn = await request(ctx.app)
-      .post('/api/auth/sign-in/email')
-      .set('Origin', TEST_ORIGIN)
-      .send({ email, password: TEST_PASSWORD });
-    cookie = (signIn.headers['set-cookie'] as unknown as string[]).map((c) => c.split(';')[0]).join('; ');
-    await agent.get(path).expect(200); // computed once, in a worker
+    const made = await tripWithCookies(ctx);
+    ({ server, cookie } = made);
+    path = `/api/trips/${made.tripId}/budget`;
+    await request(ctx.app).get(path).set('Cookie', cookie).expect(200); // computed once, in a worker
   }, 60_000);
   afterAll(async () => {
     await new Promise((resolve) => server.close(resolve));
@@ -44,8 +56,11 @@ describe('the budget body', () => {
     expect(plain.headers['content-encoding']).toBeUndefined();
     expect(Number(plain.headers['content-length'])).toBe(plain.body.length);
     expect(zlib.brotliDecompressSync(br.body).equals(plain.body)).toBe(true);
-    const parsed = JSON.parse(plain.body.toString('utf8')) as { version: number; result: { ledger: unknown[] } };
-    expect(parsed.result.ledger.length).toBeGreaterThanOrEqual(20);
+    const parsed = JSON.parse(plain.body.toString('utf8')) as {
+      version: number;
+      result: { soc: { socPct: unknown[] } };
+    };
+    expect(parsed.result.soc.socPct.length).toBeGreaterThanOrEqual(20);
   });
 
   it('when a client accepts only gzip, then the kept gzip bytes go out', async () => {
@@ -87,5 +102,88 @@ describe('asciiJson and readyBody', () => {
     expect(zlib.gunzipSync(body.gzip).equals(Buffer.from(body.identity))).toBe(true);
     expect(zlib.brotliDecompressSync(body.br).equals(Buffer.from(body.identity))).toBe(true);
     expect(body.br.byteLength).toBeLessThan(body.identity.byteLength / 4);
+  });
+});
+
+describe('the ledger route', () => {
+  let ctx: TestContext;
+  let server: http.Server;
+  let cookie: string;
+  let tripId: string;
+
+  beforeAll(async () => {
+    ctx = createTestApp();
+    ({ server, cookie, tripId } = await tripWithCookies(ctx));
+  }, 60_000);
+  afterAll(async () => {
+    await new Promise((resolve) => server.close(resolve));
+    ctx.close();
+  });
+
+  const get = (part: 'budget' | 'ledger', headers: Record<string, string> = {}) =>
+    rawGet(server, `/api/trips/${tripId}/${part}`, { Cookie: cookie, 'Accept-Encoding': 'identity', ...headers });
+  const json = (body: Buffer): unknown => JSON.parse(body.toString('utf8'));
+
+  it('when both are asked for, then the budget has a state-of-charge track and no ledger, the ledger its columns', async () => {
+    const budget = budgetResponseSchema.parse(json((await get('budget')).body));
+    const ledgerAnswer = await get('ledger');
+    expect(ledgerAnswer.status).toBe(200);
+    expect(ledgerAnswer.headers['content-type']).toBe('application/json; charset=utf-8');
+    const ledger = ledgerResponseSchema.parse(json(ledgerAnswer.body));
+    if (!budget.result || !ledger.ledger) throw new Error('no budget');
+    expect(budget.result).not.toHaveProperty('ledger');
+    expect(ledger.version).toBe(budget.version);
+    expect(ledger.ledger.socPct).toEqual(budget.result.soc.socPct);
+    expect(ledger.ledger.local).toEqual(budget.result.soc.local);
+    expect(ledgerAnswer.body.every((byte) => byte < 0x80)).toBe(true);
+  });
+
+  it("when the stored plan is simulated in the test, then the ledger's rows equal the engine's", async () => {
+    const detail = (await request(ctx.app).get(`/api/trips/${tripId}`).set('Cookie', cookie).expect(200))
+      .body as TripDetail;
+    const input = toEngineInput(detail);
+    if (!input) throw new Error('no input');
+    const ledger = ledgerResponseSchema.parse(json((await get('ledger')).body));
+    if (!ledger.ledger) throw new Error('no ledger');
+    expect(fromLedgerColumns(ledger.ledger)).toEqual(JSON.parse(JSON.stringify(simulateTrip(input).ledger)));
+  });
+
+  it('when a file is made from the trip, then it reads the whole result with the ledger rows rebuilt', async () => {
+    const result = await ctx.app.locals.budgets.resultForFile(tripId);
+    const ledger = ledgerResponseSchema.parse(json((await get('ledger')).body));
+    if (!result || !ledger.ledger) throw new Error('no result');
+    expect(result).not.toHaveProperty('soc');
+    expect(result.ledger).toEqual(fromLedgerColumns(ledger.ledger));
+  });
+
+  it('when asked again with its ETag, then 304; the budget and the ledger carry different ETags', async () => {
+    const first = await get('ledger', { 'Accept-Encoding': 'br' });
+    expect(first.headers['content-encoding']).toBe('br');
+    const etag = String(first.headers.etag);
+    expect(etag).not.toBe(String((await get('budget')).headers.etag));
+    const again = await get('ledger', { 'If-None-Match': etag });
+    expect(again.status).toBe(304);
+    expect(again.body.length).toBe(0);
+    expect((await get('ledger', { 'If-None-Match': String((await get('budget')).headers.etag) })).status).toBe(200);
+  });
+
+  it('when no one is signed in, then 401 in the error shape', async () => {
+    const answer = await rawGet(server, `/api/trips/${tripId}/ledger`, {});
+    expect(answer.status).toBe(401);
+    expect(json(answer.body)).toMatchObject({ error: { code: 'unauthorized' } });
+  });
+
+  it('when someone who is not on the trip asks, then it is not found', async () => {
+    const { agent } = await signUpAgent(ctx.app, 'Stranger');
+    const answer = await agent.get(`/api/trips/${tripId}/ledger`);
+    expect(answer.status).toBe(404);
+    expect(answer.body).toMatchObject({ error: { code: 'not_found' } });
+  });
+
+  it('when the trip has no stops yet, then the ledger is null with the reason', async () => {
+    const { agent } = await signUpAgent(ctx.app, 'Planner');
+    const { trip } = await createTrip(agent);
+    const answer = await agent.get(`/api/trips/${trip.id}/ledger`).expect(200);
+    expect(ledgerResponseSchema.parse(answer.body)).toMatchObject({ ledger: null, reason: expect.any(String) });
   });
 });

@@ -65,6 +65,11 @@ async function readingBy(w: World, actor: Actor): Promise<{ id: string; version:
 const ROWS: Row[] = [
   { name: 'GET trip', prepare: async () => ({ method: 'get', path: base() }), expected: needs('read') },
   { name: 'GET budget', prepare: async () => ({ method: 'get', path: `${base()}/budget` }), expected: needs('read') },
+  {
+    name: 'GET budget fixes',
+    prepare: async () => ({ method: 'get', path: `${base()}/budget/fixes` }),
+    expected: needs('read'),
+  },
   { name: 'GET weather', prepare: async () => ({ method: 'get', path: `${base()}/weather` }), expected: needs('read') },
   {
     name: 'GET activity',

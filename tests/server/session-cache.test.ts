@@ -1,5 +1,5 @@
 import request from 'supertest';
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { session } from '@/db/schema/auth';
 import { createTestApp, signUpAgent, TEST_ORIGIN, TEST_PASSWORD, type TestContext } from '../factories/test-app';
 
@@ -68,5 +68,20 @@ describe('the cached session', () => {
       .send({ currentPassword: TEST_PASSWORD, newPassword: 'brand-new-moorland-walk', revokeOtherSessions: true })
       .expect(200);
     await request(ctx.app).get('/api/trips').set('Cookie', phone).expect(401);
+  });
+
+  it('when the same cookies come again within seconds, then the session is not checked again; other cookies are', async () => {
+    const { email } = await signUpAgent(ctx.app);
+    const cookies = await signInCookies(email);
+    const check = vi.spyOn(ctx.app.locals.auth.api, 'getSession');
+    await request(ctx.app).get('/api/trips').set('Cookie', cookies).expect(200);
+    await request(ctx.app).get('/api/trips').set('Cookie', cookies).expect(200);
+    expect(check).toHaveBeenCalledTimes(1);
+    // A cookie that differs in any way is checked afresh (and refused here: its signature no longer matches).
+    await request(ctx.app)
+      .get('/api/trips')
+      .set('Cookie', cookies.replace(/session_token=./, 'session_token=x'))
+      .expect(401);
+    expect(check).toHaveBeenCalledTimes(2);
   });
 });

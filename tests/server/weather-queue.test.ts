@@ -8,6 +8,7 @@ import type { AppConfig } from '@/server/app';
 import { weatherPlace } from '@/shared/weather-ranges';
 import { startLocalWeather, type LocalWeather } from '@/server/weather/local-weather';
 import type { TripWeather } from '@/shared/schemas/weather';
+import { engineWeatherSchema } from '@/shared/schemas/engine-weather';
 import { createTestApp, signUpAgent, type TestContext } from '../factories/test-app';
 import { addAppliance, addStop, createTrip, stopOnNextFreeDay } from '../factories/trip-factory';
 
@@ -71,7 +72,47 @@ describe('weather records through the local fake', () => {
       2022, 2023, 2024, 2025, 2026,
     ]);
     expect(after.body.result.skies).toEqual({ sources: ['record'], assumedStops: 0 });
-    expect(after.body.result.socBand.p10).toHaveLength(after.body.result.ledger.length);
+    expect(after.body.result.socBand.p10).toHaveLength(after.body.result.soc.socPct.length);
+  });
+
+  it('when a stop picks its own sky over a record that is in, then its budget plans on that sky and says so', async () => {
+    const { app } = appWith({ archiveUrl: fake.archiveUrl, forecastUrl: fake.forecastUrl, years: 3, queue: FAST });
+    const { agent } = await signUpAgent(app);
+    const trip = await createTrip(agent);
+    const stop = await addStop(agent, trip.trip.id, {
+      ...stopOnNextFreeDay(),
+      skySource: 'preset',
+      skyOutlook: 'hazy',
+    });
+    await addAppliance(agent, trip.trip.id);
+    await app.locals.weather.idle();
+    const detail = await agent.get(`/api/trips/${trip.trip.id}`).expect(200);
+    expect(detail.body.stops[0].stop).toMatchObject({ skySource: 'preset', ownTemperatures: false });
+    const picked = await agent.get(`/api/trips/${trip.trip.id}/budget`).expect(200);
+    expect(picked.body.result.chance).toBeNull();
+    expect(picked.body.result.skies).toEqual({ sources: ['preset'], assumedStops: 1 });
+
+    // Back to the record: the same stored years now run.
+    await agent
+      .patch(`/api/trips/${trip.trip.id}/stops/${stop.id}`)
+      .send({ version: stop.version, stop: { ...detail.body.stops[0].stop, skySource: 'record' } })
+      .expect(200);
+    const recorded = await agent.get(`/api/trips/${trip.trip.id}/budget`).expect(200);
+    expect(recorded.body.result.chance).toMatchObject({ years: 3 });
+  });
+
+  it("when the browser asks for a trip's recorded years, then it gets the engine's weather for its stops", async () => {
+    const { app } = appWith({ archiveUrl: fake.archiveUrl, forecastUrl: fake.forecastUrl, years: 3, queue: FAST });
+    const { agent } = await signUpAgent(app);
+    const trip = await createTrip(agent);
+    const empty = await agent.get(`/api/trips/${trip.trip.id}/weather/record`).expect(200);
+    expect(empty.body).toEqual({ weather: null });
+    await addStop(agent, trip.trip.id);
+    await app.locals.weather.idle();
+    const held = await agent.get(`/api/trips/${trip.trip.id}/weather/record`).expect(200);
+    const weather = engineWeatherSchema.parse(held.body.weather);
+    expect(weather.years).toHaveLength(3);
+    expect(weather.years[0]?.stops[0]?.ghiWm2.length).toBeGreaterThan(24);
   });
 
   it('when a stop is inside the forecast horizon, then its forecast days are fetched too', async () => {

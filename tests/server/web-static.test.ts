@@ -29,7 +29,7 @@ describe('static web files', () => {
     fs.writeFileSync(path.join(dir, script), SCRIPT);
     fs.writeFileSync(path.join(dir, wasm), WASM);
     fs.writeFileSync(path.join(dir, 'unlisted.txt'), 'plain '.repeat(400));
-    precompressDir(dir);
+    await precompressDir(dir);
     ctx = createTestApp({ webDir: dir });
     server = await listen(ctx.app);
   });

@@ -3,18 +3,32 @@
 // when one appliance alone overloads the inverter; and each checked fix says whether it clears its flag.
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { simulateParsed } from '@/shared/engine';
+import { checkFixesParsed, simulateParsed, withFixes } from '@/shared/engine';
 import { INVERTER_SIZES_W, isShortfall } from '@/shared/engine/flags';
 import { batteryModuleAh, plausibleBatteryWh, roofRoomW, PANEL_W } from '@/shared/engine/fixes';
+import { generatorWindows } from '@/shared/engine/generator-only';
 import { prepare } from '@/shared/engine/prepare';
-import type { Fix, SimulationResult } from '@/shared/engine/result-types';
+import type { Fix, FlagWithFixes } from '@/shared/engine/result-types';
 import { isUsualHookup } from '@/shared/hookup-supply';
 import { engineInputSchema, type EngineInput, type EngineInputDraft } from '@/shared/schemas';
+import type { RoutineWindow } from '@/shared/schemas/common';
 import { build, tripArb } from '@/tests/factories/random-plan';
 import { fiveNightTrip } from '@/tests/fixtures/five-night-trip';
 import { GOLDEN_CASES } from './golden-inputs';
 
 const num = (v: unknown): number => (typeof v === 'number' ? v : Number.NaN);
+
+/** Whether window w runs only on days and at times generator window g does (across midnight too). */
+function windowInside(w: RoutineWindow, g: RoutineWindow): boolean {
+  const daysInside =
+    g.days.kind === 'all' ||
+    (g.days.kind === 'trip-days' &&
+      w.days.kind === 'trip-days' &&
+      w.days.dayIndexes.every((d) => g.days.kind === 'trip-days' && g.days.dayIndexes.includes(d))) ||
+    (g.days.kind === 'day-type' && w.days.kind === 'day-type' && g.days.dayType === w.days.dayType);
+  const offset = (w.startHour * 60 + w.startMinute - (g.startHour * 60 + g.startMinute) + 1440) % 1440;
+  return daysInside && offset + w.minutes <= g.minutes;
+}
 
 /** Minutes after local midnight inside [start, end) of allowed hours (across midnight too). */
 function insideAllowed(minute: number, startHour: number, endHour: number): boolean {
@@ -23,11 +37,15 @@ function insideAllowed(minute: number, startHour: number, endHour: number): bool
   return (minute - from + 1440) % 1440 < span;
 }
 
-function expectFeasible(input: EngineInput, r: SimulationResult): void {
+/** The planned run's flags with the fixes checkFixes gives them. */
+const checkedFlags = (input: EngineInput): FlagWithFixes[] =>
+  withFixes(simulateParsed(input).flags, checkFixesParsed(input));
+
+function expectFeasible(input: EngineInput, flags: FlagWithFixes[]): void {
   const p = prepare(input);
   const rig = input.rig;
   const capacityWh = rig.battery.capacityAh * rig.battery.nominalV;
-  for (const flag of r.flags) {
+  for (const flag of flags) {
     for (const fix of flag.fixes) expectFixFeasible(input, fix, { capacityWh, p });
     if (isShortfall(flag)) {
       for (const fix of flag.fixes) {
@@ -84,6 +102,15 @@ function expectFixFeasible(input: EngineInput, fix: Fix, ctx: { capacityWh: numb
     case 'larger-inverter':
       expect(INVERTER_SIZES_W).toContain(num(fix.params.ratedW));
       break;
+    case 'appliance-generator-only': {
+      const schedule = fix.applianceEdit?.schedule;
+      const own =
+        schedule?.kind === 'thermostat' ? schedule.activeWindows : schedule?.kind === 'routine' ? schedule.windows : [];
+      const gen = generatorWindows(ctx.p) ?? [];
+      expect(own?.length).toBeGreaterThan(0);
+      for (const w of own ?? []) expect(gen.some((g) => windowInside(w, g))).toBe(true);
+      break;
+    }
     default:
       break;
   }
@@ -91,7 +118,7 @@ function expectFixFeasible(input: EngineInput, fix: Fix, ctx: { capacityWh: numb
 
 const run = (draft: EngineInputDraft): void => {
   const input = engineInputSchema.parse(draft);
-  expectFeasible(input, simulateParsed(input));
+  expectFeasible(input, checkedFlags(input));
 };
 
 describe('feasible fixes', () => {
@@ -108,15 +135,15 @@ describe('feasible fixes', () => {
   }, 600_000);
 
   it('when the five-night trip is simulated, then its first fix acts on the roof air conditioner and clears the flag', () => {
-    const r = simulateParsed(engineInputSchema.parse(fiveNightTrip));
-    const fix = r.flags[0]?.fixes[0];
+    const fix = checkedFlags(engineInputSchema.parse(fiveNightTrip))[0]?.fixes[0];
     expect(fix?.applianceEdit?.applianceId).toBe('roof-ac');
     expect(fix?.check?.clears).toBe(true);
   });
 
   it('when one appliance alone is over the inverter rating, then no fix says to stagger it', () => {
-    const r = simulateParsed(engineInputSchema.parse(fiveNightTrip));
-    const overloads = r.flags.filter((f) => f.kind === 'inverter-overload');
+    const overloads = checkedFlags(engineInputSchema.parse(fiveNightTrip)).filter(
+      (f) => f.kind === 'inverter-overload',
+    );
     expect(overloads.length).toBeGreaterThan(0);
     for (const f of overloads) {
       expect(f.fixes.map((x) => x.kind)).not.toContain('stagger-appliances');
@@ -150,8 +177,9 @@ describe('feasible fixes', () => {
   });
 
   it('when a stop is in the United States, then the hookup fix offers 30 A at 120 V, not a European 16 A', () => {
-    const r = simulateParsed(engineInputSchema.parse(fiveNightTrip));
-    const hookup = r.flags.flatMap((f) => f.fixes).find((f) => f.kind === 'add-hookup-night');
+    const hookup = checkedFlags(engineInputSchema.parse(fiveNightTrip))
+      .flatMap((f) => f.fixes)
+      .find((f) => f.kind === 'add-hookup-night');
     expect(hookup?.params).toMatchObject({ amps: 30, volts: 120 });
   });
 });

@@ -1,8 +1,8 @@
-// What golden.test.ts pins for one input: a sha256 of the JSON of each part of the result (so any change in any
-// digit shows), plus readable spot values (headline, flags, a few ledger rows, first and last day sheet, the
+// What golden.test.ts pins for one input: a sha256 of the JSON of each part of the result, its flags carrying the
+// fixes checkFixes gives them (so any change in any digit shows), plus readable spot values (headline, flags, a few ledger rows, first and last day sheet, the
 // headroom in full) so a failing comparison says where the results part.
 import { createHash } from 'node:crypto';
-import { findHeadroom, simulateTrip } from '@/shared/engine';
+import { checkFixes, findHeadroom, simulateTrip, withFixes } from '@/shared/engine';
 import type { EngineInputDraft } from '@/shared/schemas';
 
 export type GoldenSummary = {
@@ -36,7 +36,9 @@ export function spotIndexes(n: number): number[] {
 }
 
 export function goldenSummary(input: EngineInputDraft): GoldenSummary {
-  const r = simulateTrip(input);
+  // The fixes are checked apart from the budget; put back on their flags, the result reads as it was captured.
+  const budget = simulateTrip(input);
+  const r = { ...budget, flags: withFixes(budget.flags, checkFixes(input)) };
   const h = findHeadroom(input);
   return {
     sha256: {

@@ -1,7 +1,8 @@
 // A hookup fix with another supply: the stop's country's supplies are offered first, then the rest of the table, and
 // a picked supply is checked against its flag exactly as the engine checks its own fixes.
 import { describe, expect, it } from 'vitest';
-import { simulateTrip } from '@/shared/engine';
+import { checkFixes, simulateTrip } from '@/shared/engine';
+import { withFixes } from '@/shared/engine/check-fixes';
 import { checkHookupSupply, hookupSupplyChoices, supplyKey } from '@/shared/engine/hookup-choice';
 import { HOOKUP_REGIONS } from '@/shared/hookup-supply';
 import { fiveNightTrip } from '@/tests/fixtures/five-night-trip';
@@ -21,7 +22,7 @@ describe('hookup supplies to pick from', () => {
 
 describe('a picked supply, checked', () => {
   const result = simulateTrip(fiveNightTrip);
-  const found = result.flags
+  const found = withFixes(result.flags, checkFixes(fiveNightTrip))
     .flatMap((flag) => flag.fixes.map((fix) => ({ flag, fix })))
     .find(({ fix }) => fix.kind === 'add-hookup-night');
   if (!found) throw new Error('the five-night trip offers a hookup fix');

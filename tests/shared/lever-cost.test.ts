@@ -21,6 +21,7 @@ const result = (levers: HeadroomLever[]): HeadroomResult => ({
   baselineEnergyShortWh: 300,
   needed: true,
   levers,
+  confidence: null,
 });
 
 describe('cheapest lever', () => {

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { CHEMISTRY, findHeadroom, pvwattsDcW, simulateTrip } from '@/shared/engine';
+import { CHEMISTRY, checkFixes, findHeadroom, pvwattsDcW, simulateTrip, withFixes } from '@/shared/engine';
 import { desertSpringLoop, highlandLoop } from '@/tests/fixtures/demo-trips';
 import { constantLoad, simpleTrip } from './trip-builder';
 
@@ -128,7 +128,7 @@ describe('demo trips', () => {
   it('when the caravan has no hookup after the loch, then flags name fixes with numbers: generator hours at the rally field or a hookup night', () => {
     const shortfalls = highland.flags.filter((f) => f.kind === 'below-reserve' || f.kind === 'energy-short');
     expect(shortfalls.length).toBeGreaterThan(0);
-    const fixes = shortfalls.flatMap((f) => f.fixes);
+    const fixes = withFixes(shortfalls, checkFixes(highlandLoop)).flatMap((f) => f.fixes);
     const gen = fixes.find((f) => f.kind === 'add-generator-hours' && f.params.stopIndex === 3);
     expect(gen?.text).toMatch(/^run .* \d+ h \d\d min a day, \d\d:\d\d–20:00, at stop 4 \(allowed 09:00–20:00\)/);
     expect(fixes.some((f) => f.kind === 'add-hookup-night')).toBe(true);
@@ -197,8 +197,9 @@ describe('other flags', () => {
         { id: 'heat', name: 'Heater', circuit: 'fuel', runningW: 0, heatInputW: 3000, schedule: { kind: 'always' } },
       ],
     });
-    const r = simulateTrip({ ...input, rig: { ...input.rig, propaneTanks: [{ propaneKg: 2 }] } });
-    const flag = r.flags.find((f) => f.kind === 'propane-out');
+    const planned = { ...input, rig: { ...input.rig, propaneTanks: [{ propaneKg: 2 }] } };
+    const r = simulateTrip(planned);
+    const flag = withFixes(r.flags, checkFixes(planned)).find((f) => f.kind === 'propane-out');
     expect(flag?.fixes[0]?.params.extraKg).toBeCloseTo((3 * 24) / 14.07 - 2, 0);
   });
 });

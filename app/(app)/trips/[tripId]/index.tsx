@@ -1,5 +1,5 @@
 import { useLocalSearchParams } from 'expo-router';
-import { BudgetScreen } from '@/components/budget/budget-screen';
+import { BudgetScreen } from '@/components/trip/lazy-trip-screens';
 import { BasedOnBanner } from '@/components/trip/based-on-banner';
 import { useTripQuery } from '@/stores/queries/trips';
 

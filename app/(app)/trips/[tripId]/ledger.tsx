@@ -1,5 +1,5 @@
 import { useLocalSearchParams } from 'expo-router';
-import { LedgerScreen } from '@/components/ledger/ledger-screen';
+import { LedgerScreen } from '@/components/trip/lazy-trip-screens';
 import { useTripQuery } from '@/stores/queries/trips';
 
 export default function TripLedgerRoute() {

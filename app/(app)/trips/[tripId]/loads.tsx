@@ -1,5 +1,5 @@
 import { useLocalSearchParams } from 'expo-router';
-import { LoadsScreen } from '@/components/loads/loads-screen';
+import { LoadsScreen } from '@/components/trip/lazy-trip-screens';
 import { useTripQuery } from '@/stores/queries/trips';
 
 export default function TripLoadsRoute() {

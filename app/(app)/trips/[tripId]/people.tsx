@@ -1,5 +1,5 @@
 import { useLocalSearchParams } from 'expo-router';
-import { PeopleScreen } from '@/components/people/people-screen';
+import { PeopleScreen } from '@/components/trip/lazy-trip-screens';
 import { useTripQuery } from '@/stores/queries/trips';
 
 export default function TripPeopleRoute() {

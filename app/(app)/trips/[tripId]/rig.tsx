@@ -1,5 +1,5 @@
 import { useLocalSearchParams } from 'expo-router';
-import { RigScreen } from '@/components/rig/rig-screen';
+import { RigScreen } from '@/components/trip/lazy-trip-screens';
 import { useTripQuery } from '@/stores/queries/trips';
 
 export default function TripRigRoute() {

@@ -1,5 +1,5 @@
 import { useLocalSearchParams } from 'expo-router';
-import { RoadScreen } from '@/components/check-ins/road-screen';
+import { RoadScreen } from '@/components/trip/lazy-trip-screens';
 import { useTripQuery } from '@/stores/queries/trips';
 
 export default function TripRoadRoute() {
