@@ -51,6 +51,9 @@ const NEW_ZEALAND: HookupRegion = {
   ],
 };
 
+/** Every region of the table, in the order its supplies are offered after the stop's own. */
+export const HOOKUP_REGIONS: readonly HookupRegion[] = [EUROPE, NORTH_AMERICA, AUSTRALIA, NEW_ZEALAND];
+
 /** IANA zones of the United States and Canada outside the plain America/ list (their areas' own names). */
 const NORTH_AMERICAN_ZONES = new Set([
   'America/New_York',

@@ -1,6 +1,6 @@
-// Display units. The engine works in W, Wh, °C, kg, L, m and km; US display uses °F, lb, US gal, ft and mi.
+// Display units. The engine works in W, Wh, °C, kg, L, m, m² and km; US display uses °F, lb, US gal, ft, ft² and mi.
 export type UnitSystem = 'metric' | 'us';
-export type Quantity = 'temperature' | 'mass' | 'volume' | 'length' | 'distance' | 'heatRate';
+export type Quantity = 'temperature' | 'mass' | 'volume' | 'length' | 'area' | 'distance' | 'heatRate';
 
 const LB_PER_KG = 1 / 0.45359237;
 const L_PER_GAL = 3.785411784;
@@ -16,6 +16,8 @@ export const litresToGal = (l: number): number => l / L_PER_GAL;
 export const galToLitres = (gal: number): number => gal * L_PER_GAL;
 export const metresToFeet = (m: number): number => m / M_PER_FT;
 export const feetToMetres = (ft: number): number => ft * M_PER_FT;
+export const squareMetresToSquareFeet = (m2: number): number => m2 / (M_PER_FT * M_PER_FT);
+export const squareFeetToSquareMetres = (ft2: number): number => ft2 * M_PER_FT * M_PER_FT;
 export const kmToMiles = (km: number): number => km / KM_PER_MI;
 export const milesToKm = (mi: number): number => mi * KM_PER_MI;
 export const wattsToBtuPerH = (w: number): number => w * BTU_PER_H_PER_W;
@@ -28,6 +30,7 @@ export const UNIT_TABLE: Readonly<Record<Quantity, Conversion>> = {
   mass: { metric: 'kg', us: 'lb', toUs: kgToLb, fromUs: lbToKg },
   volume: { metric: 'L', us: 'gal', toUs: litresToGal, fromUs: galToLitres },
   length: { metric: 'm', us: 'ft', toUs: metresToFeet, fromUs: feetToMetres },
+  area: { metric: 'm²', us: 'ft²', toUs: squareMetresToSquareFeet, fromUs: squareFeetToSquareMetres },
   distance: { metric: 'km', us: 'mi', toUs: kmToMiles, fromUs: milesToKm },
   heatRate: { metric: 'W', us: 'Btu/h', toUs: wattsToBtuPerH, fromUs: btuPerHToWatts },
 };

@@ -6,6 +6,7 @@ import type { Schedule } from '@/shared/schemas/appliance';
 import type { ApplianceRecord, StopRecord, TripDetail } from '@/shared/schemas/api';
 import type { RoutineWindow } from '@/shared/schemas/common';
 import type { RigInput } from '@/shared/schemas/rig';
+import type { HookupSupply } from '@/shared/hookup-supply';
 
 export type FixEdit =
   | { kind: 'rig'; rig: RigInput; summary: string }
@@ -50,7 +51,10 @@ function generatorEdit(detail: TripDetail, fix: Fix, days: DaySheet[]): FixEdit 
   };
 }
 
-export function editForFix(detail: TripDetail, fix: Fix, days: DaySheet[]): FixEdit | null {
+/** What the traveller changed on a fix before Apply: a hookup fix's supply. */
+export type FixChoice = { supply?: HookupSupply };
+
+export function editForFix(detail: TripDetail, fix: Fix, days: DaySheet[], choice: FixChoice = {}): FixEdit | null {
   const rig = detail.rig.rig;
   switch (fix.kind) {
     case 'add-battery': {
@@ -98,15 +102,15 @@ export function editForFix(detail: TripDetail, fix: Fix, days: DaySheet[]): FixE
       };
     case 'add-hookup-night': {
       const stopIndex = num(fix.params.stopIndex);
-      const amps = num(fix.params.amps);
-      const volts = num(fix.params.volts);
+      const amps = choice.supply?.amps ?? num(fix.params.amps);
+      const volts = choice.supply?.volts ?? num(fix.params.volts);
       const record = stopIndex === null ? undefined : detail.stops[stopIndex];
       if (!record || amps === null || volts === null) return null;
       return {
         kind: 'stop',
         record,
         stop: { ...record.stop, hookup: { amps, volts } },
-        summary: `Hookup at ${record.stop.name}`,
+        summary: `Hookup at ${record.stop.name} (${amps} A at ${volts} V)`,
       };
     }
     case 'add-generator-hours':

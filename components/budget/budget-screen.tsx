@@ -19,6 +19,7 @@ import { HeadlineFigures } from './headline-figures';
 import { PlanChance } from './plan-chance';
 import { SocChartCard } from './soc-chart-card';
 import { useBudgetView } from './use-budget-view';
+import { UndoLastFix } from './undo-last-fix';
 import { useFlagFixes } from './use-flag-fixes';
 import { WhatItWouldTake } from './what-it-would-take';
 import { editsForWhatIf, WhatIfPanel } from './what-if-panel';
@@ -31,7 +32,7 @@ export function BudgetScreen({ detail }: { detail: TripDetail }) {
   useTripWeatherQuery(detail.trip.id);
   const view = useBudgetView(detail);
   const fixes = useFlagFixes(detail.trip.id, view);
-  const { apply, busy } = useApplyEdit(detail);
+  const { apply, busy, undoLast, lastFix, undoCount } = useApplyEdit(detail);
   const canEdit = can(detail.trip.role, 'editTrip');
   const scrollKey = `budget-${detail.trip.id}`;
 
@@ -100,6 +101,9 @@ export function BudgetScreen({ detail }: { detail: TripDetail }) {
             <BudgetRouteMap detail={detail} result={result} />
             {whatIf}
             {view.whatIf ? null : <WhatItWouldTake detail={detail} />}
+            {lastFix ? (
+              <UndoLastFix summary={lastFix.summary} count={undoCount} busy={busy} onUndo={() => void undoLast()} />
+            ) : null}
             <FlagList
               flags={result.flags}
               fixes={fixes}
@@ -112,8 +116,8 @@ export function BudgetScreen({ detail }: { detail: TripDetail }) {
                   : 'Fixes can be applied once the what-ifs are kept or discarded.'
               }
               busyKey={busy}
-              onApply={(key, fix) => {
-                const edit = editForFix(detail, fix, result.days);
+              onApply={(key, fix, choice) => {
+                const edit = editForFix(detail, fix, result.days, choice);
                 if (edit) void apply(key, [edit], detail.rig.version);
               }}
             />

@@ -1,3 +1,4 @@
+import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { colors, radii, space } from '@/components/theme/tokens';
 import { Button } from '@/components/ui/button';
@@ -10,8 +11,10 @@ import { momentText } from '@/shared/engine/flag-text';
 import { hasMoment } from '@/shared/engine/flags';
 import { flagTitle } from '@/shared/flag-titles';
 import type { TripDetail } from '@/shared/schemas/api';
+import type { HookupSupply } from '@/shared/hookup-supply';
 import { QueryError } from '@/components/ui/query-error';
-import { editForFix } from './apply-fix';
+import { editForFix, type FixChoice } from './apply-fix';
+import { HookupSupplyChoice } from './hookup-supply-choice';
 import type { FixesView } from './use-flag-fixes';
 
 type Props = {
@@ -23,7 +26,7 @@ type Props = {
   canEdit: boolean;
   readOnlyReason?: string;
   busyKey: string | null;
-  onApply: (key: string, fix: Fix) => void;
+  onApply: (key: string, fix: Fix, choice: FixChoice) => void;
 };
 
 export function FlagList({ flags: bare, fixes, days, detail, canEdit, readOnlyReason, busyKey, onApply }: Props) {
@@ -32,6 +35,8 @@ export function FlagList({ flags: bare, fixes, days, detail, canEdit, readOnlyRe
     f.where.kind === 'stop'
       ? (detail.stops[f.where.stopIndex]?.stop.name ?? `stop ${f.where.stopIndex + 1}`)
       : `drive ${f.where.driveIndex + 1}`;
+  // A hookup fix's supply picked by the traveller, by fix key; absent means the one the engine offered.
+  const [supplies, setSupplies] = useState<Record<string, HookupSupply>>({});
   const hasGeneratorFix = flags.some((f) => f.fixes.some((x) => x.kind === 'add-generator-hours'));
   return (
     <Card testID="flag-list">
@@ -70,22 +75,37 @@ export function FlagList({ flags: bare, fixes, days, detail, canEdit, readOnlyRe
           </Text>
           <Text>{flag.cause}</Text>
           {flag.fixes.map((fix, i) => {
-            const edit = canEdit ? editForFix(detail, fix, days) : null;
             const key = `${flag.id}-${i}`;
+            const supply = supplies[key];
+            const choice: FixChoice = supply ? { supply } : {};
+            const edit = canEdit ? editForFix(detail, fix, days, choice) : null;
             return (
-              <View key={key} style={styles.fix}>
-                <Text variant="caption" style={styles.fixText}>
-                  Fix: {fix.text}
-                </Text>
-                {edit ? (
-                  <Button
-                    testID={`fix-${flag.id}-${i}`}
-                    tone="secondary"
-                    label="Apply"
-                    accessibilityLabel={`Apply fix: ${fix.text}`}
-                    busy={busyKey === key}
-                    disabled={busyKey !== null}
-                    onPress={() => onApply(key, fix)}
+              <View key={key} style={styles.fixBlock}>
+                <View style={styles.fix}>
+                  <Text variant="caption" style={styles.fixText}>
+                    Fix: {fix.text}
+                  </Text>
+                  {edit ? (
+                    <Button
+                      testID={`fix-${flag.id}-${i}`}
+                      tone="secondary"
+                      label="Apply"
+                      accessibilityLabel={`Apply fix: ${edit.summary}`}
+                      busy={busyKey === key}
+                      disabled={busyKey !== null}
+                      onPress={() => onApply(key, fix, choice)}
+                    />
+                  ) : null}
+                </View>
+                {/* Under its fix, so the Apply beside the fix's words books the supply picked here. */}
+                {edit && fix.kind === 'add-hookup-night' ? (
+                  <HookupSupplyChoice
+                    detail={detail}
+                    flag={flag}
+                    fix={fix}
+                    testID={`hookup-supply-${flag.id}-${i}`}
+                    value={supply ?? null}
+                    onChange={(s) => setSupplies(({ [key]: _dropped, ...rest }) => (s ? { ...rest, [key]: s } : rest))}
                   />
                 ) : null}
               </View>
@@ -118,6 +138,7 @@ const styles = StyleSheet.create({
   danger: { borderLeftColor: colors.ember },
   warning: { borderLeftColor: colors.sunlit },
   info: { borderLeftColor: colors.lake },
+  fixBlock: { gap: space.xs },
   fix: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.sm, justifyContent: 'space-between' },
   fixText: { flex: 1, minWidth: 160 },
   titleRow: { flexDirection: 'row', alignItems: 'center', gap: space.sm },

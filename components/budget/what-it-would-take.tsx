@@ -4,6 +4,7 @@ import { Card } from '@/components/ui/card';
 import { Text } from '@/components/ui/text';
 import { findHeadroom } from '@/shared/engine';
 import type { HeadroomLever, HeadroomResult } from '@/shared/engine/headroom';
+import { cheapestLever } from '@/shared/engine/lever-cost';
 import { headroomAim, leverLine } from './headroom-lines';
 import type { TripDetail } from '@/shared/schemas/api';
 import { toEngineInput } from '@/shared/trip-to-engine-input';
@@ -42,6 +43,7 @@ export function WhatItWouldTake({ detail }: { detail: TripDetail }) {
   const headroom =
     record.isPending && record.fetchStatus === 'fetching' ? null : headroomFor(detail, record.data?.weather);
   if (!headroom) return null;
+  const cheapest = cheapestLever(headroom);
   return (
     <Card testID="what-it-would-take">
       <Text variant="title" role="heading" aria-level={2}>
@@ -58,15 +60,40 @@ export function WhatItWouldTake({ detail }: { detail: TripDetail }) {
           </Text>
           {headroom.levers.map((l) => {
             const line = leverLine(l);
+            const isCheapest = l.lever === cheapest;
             return (
-              <View key={l.lever} style={styles.lever} testID={`what-it-would-take-${l.lever}`}>
-                <Text variant="label">{LEVER_NAMES[l.lever]}</Text>
+              <View
+                key={l.lever}
+                style={[styles.lever, isCheapest ? styles.cheapestLever : null]}
+                testID={`what-it-would-take-${l.lever}`}
+              >
+                <View style={styles.nameRow}>
+                  <Text variant="label">{LEVER_NAMES[l.lever]}</Text>
+                  {isCheapest ? (
+                    // Words, not only a colour: a screen reader reads "cheapest" with the lever's name.
+                    <Text
+                      variant="caption"
+                      color="white"
+                      style={styles.badge}
+                      testID="what-it-would-take-cheapest"
+                      accessibilityLabel="cheapest of these levers"
+                    >
+                      Cheapest
+                    </Text>
+                  ) : null}
+                </View>
                 <Text variant="caption" color={line.tone}>
                   {line.text}
                 </Text>
               </View>
             );
           })}
+          {cheapest ? (
+            <Text variant="caption" color="inkSoft" testID="what-it-would-take-cheapest-basis">
+              Cheapest by a rough outlay for this trip at common US prices: battery about $0.30 per Wh, solar $1.50 per
+              W, generator $1 an hour ($600 more to buy one), a powered site $20 a night more than an unpowered one.
+            </Text>
+          ) : null}
         </>
       )}
     </Card>
@@ -74,5 +101,20 @@ export function WhatItWouldTake({ detail }: { detail: TripDetail }) {
 }
 
 const styles = StyleSheet.create({
-  lever: { padding: space.sm, borderRadius: radii.sm, backgroundColor: colors.dune, gap: 2 },
+  lever: {
+    padding: space.sm,
+    borderRadius: radii.sm,
+    backgroundColor: colors.dune,
+    gap: 2,
+    borderWidth: 2,
+    borderColor: 'transparent',
+  },
+  cheapestLever: { borderColor: colors.pine, backgroundColor: colors.pineSoft },
+  nameRow: { flexDirection: 'row', flexWrap: 'wrap', alignItems: 'center', gap: space.sm },
+  badge: {
+    backgroundColor: colors.pine,
+    borderRadius: radii.pill,
+    paddingHorizontal: space.sm,
+    overflow: 'hidden',
+  },
 });

@@ -16,8 +16,10 @@ import { authClient } from '@/stores/auth-client';
 import { usePreferencesMutation } from '@/stores/queries/preferences';
 import { showToast } from '@/stores/toast-store';
 import { useUnits } from '@/stores/units-store';
-import { describeAuthError } from './auth-error';
+import { authRefusal } from './auth-error';
+import { FieldSlot } from './field-slot';
 import { passwordProblemOf, usePasswordRulePreload } from './password-rule';
+import { showServerRefusal } from './server-refusal';
 
 export function UnitsCard() {
   const units = useUnits();
@@ -61,16 +63,36 @@ const passwordSchema = z
   })
   .refine((v) => v.newPassword === v.confirm, { message: 'The two new passwords differ.', path: ['confirm'] });
 
+const NAME_ORDER = ['name'] as const;
+const PASSWORD_ORDER = ['currentPassword', 'newPassword', 'confirm'] as const;
+const fieldIn =
+  <F extends string>(order: readonly F[]) =>
+  (apiField: string): F | undefined =>
+    order.find((f) => f === apiField);
+
 export function NameCard({ name }: { name: string }) {
   const [error, setError] = useState<string>();
-  const { control, handleSubmit, formState } = useForm<z.infer<typeof nameSchema>>({
+  const {
+    control,
+    handleSubmit,
+    formState,
+    setError: setFieldError,
+  } = useForm<z.infer<typeof nameSchema>>({
     resolver: zodResolver(nameSchema),
     defaultValues: { name },
   });
   const submit = handleSubmit(async (v) => {
     setError(undefined);
     const result = await authClient.updateUser({ name: v.name });
-    if (result.error) setError(describeAuthError(result.error));
+    if (result.error)
+      setError(
+        showServerRefusal(authRefusal(result.error), {
+          order: NAME_ORDER,
+          fieldOf: fieldIn(NAME_ORDER),
+          setError: setFieldError,
+          fallback: 'Your name could not be saved.',
+        }),
+      );
     else showToast('Name saved');
   });
   return (
@@ -78,22 +100,24 @@ export function NameCard({ name }: { name: string }) {
       <Text variant="title" role="heading" aria-level={2}>
         Your name
       </Text>
-      {error ? <Banner testID="name-error" message={error} /> : null}
       <Controller
         control={control}
         name="name"
         render={({ field, fieldState }) => (
-          <TextField
-            testID="account-name"
-            label="Name"
-            value={field.value}
-            onChangeText={field.onChange}
-            onBlur={field.onBlur}
-            error={fieldState.error?.message}
-            onSubmitEditing={submit}
-          />
+          <FieldSlot fieldRef={field.ref}>
+            <TextField
+              testID="account-name"
+              label="Name"
+              value={field.value}
+              onChangeText={field.onChange}
+              onBlur={field.onBlur}
+              error={fieldState.error?.message}
+              onSubmitEditing={submit}
+            />
+          </FieldSlot>
         )}
       />
+      {error ? <Banner testID="name-error" message={error} /> : null}
       <Button
         testID="account-name-save"
         label="Save name"
@@ -131,10 +155,22 @@ export function PasswordCard({ owner }: { owner?: PasswordOwner }) {
       revokeOtherSessions: true,
     });
     if (result.error) {
-      setError(
+      const refusal =
         result.error.code === 'INVALID_PASSWORD'
-          ? 'Your current password is not right.'
-          : describeAuthError(result.error),
+          ? authRefusal(
+              { ...result.error, message: 'Your current password is not right.', fields: undefined },
+              {
+                INVALID_PASSWORD: 'currentPassword',
+              },
+            )
+          : authRefusal(result.error);
+      setError(
+        showServerRefusal(refusal, {
+          order: PASSWORD_ORDER,
+          fieldOf: fieldIn(PASSWORD_ORDER),
+          setError: setFieldError,
+          fallback: 'The password could not be changed.',
+        }),
       );
       return;
     }
@@ -151,17 +187,19 @@ export function PasswordCard({ owner }: { owner?: PasswordOwner }) {
       control={control}
       name={name}
       render={({ field: f, fieldState }) => (
-        <TextField
-          testID={`account-${name}`}
-          label={label}
-          secureTextEntry
-          autoComplete={autoComplete}
-          hint={hint}
-          value={f.value}
-          onChangeText={f.onChange}
-          onBlur={f.onBlur}
-          error={fieldState.error?.message}
-        />
+        <FieldSlot fieldRef={f.ref}>
+          <TextField
+            testID={`account-${name}`}
+            label={label}
+            secureTextEntry
+            autoComplete={autoComplete}
+            hint={hint}
+            value={f.value}
+            onChangeText={f.onChange}
+            onBlur={f.onBlur}
+            error={fieldState.error?.message}
+          />
+        </FieldSlot>
       )}
     />
   );
@@ -170,12 +208,12 @@ export function PasswordCard({ owner }: { owner?: PasswordOwner }) {
       <Text variant="title" role="heading" aria-level={2}>
         Password
       </Text>
-      {error ? <Banner testID="password-error" message={error} /> : null}
       <View style={styles.fields}>
         {field('currentPassword', 'Current password', 'current-password')}
         {field('newPassword', 'New password', 'new-password', PASSWORD_HINT)}
         {field('confirm', 'New password again', 'new-password')}
       </View>
+      {error ? <Banner testID="password-error" message={error} /> : null}
       <Button
         testID="account-password-save"
         label="Change password"

@@ -52,9 +52,12 @@ export function Num({
       name={name}
       render={({ field, fieldState }) => {
         const stored = typeof field.value === 'number' ? field.value : undefined;
-        const error = fieldState.error
-          ? (message ?? (range ? (shown?.range ?? plainRange(unit))(range[0], range[1]) : fieldState.error.message))
-          : undefined;
+        // The server's own words stand as they are; the form's refusals read in the shown unit.
+        const error = !fieldState.error
+          ? undefined
+          : fieldState.error.type === 'server'
+            ? fieldState.error.message
+            : (message ?? (range ? (shown?.range ?? plainRange(unit))(range[0], range[1]) : fieldState.error.message));
         return (
           <FieldSlot fieldRef={field.ref} style={styles.cell}>
             <NumberField

@@ -42,6 +42,15 @@ export function bodyLength(units: UnitSystem): Shown {
   return { unit, show, store: (t) => round(fromDisplay(t, 'length', units), 3), range: rangeText(unit, show, 1) };
 }
 
+/** The roof's area for panels, in m² or ft² (shown to whole square feet: a roof is not measured finer). */
+export function roofArea(units: UnitSystem): Shown {
+  const unit = toDisplay(0, 'area', units).unit;
+  const raw = (m2: number) => toDisplay(m2, 'area', units).value;
+  const show = (m2: number) => round(raw(m2), units === 'us' ? 0 : 1);
+  // The limits are told to a tenth, so a figure just past a rounded limit is never refused under it.
+  return { unit, show, store: (t) => round(fromDisplay(t, 'area', units), 3), range: rangeText(unit, raw, 1) };
+}
+
 /** The insulation choices in plain words, with the heat they let through (typical, from memory). */
 export const INSULATION_CHOICES = [
   { value: 'basic', label: 'Basic (thin walls, single glazing)' },

@@ -4,6 +4,8 @@ import { Controller, useFieldArray, useForm, useWatch } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 import { mass } from '@/components/format/units';
 import { colors, space } from '@/components/theme/tokens';
+import { FieldSlot } from '@/components/forms/field-slot';
+import { showServerRefusal } from '@/components/forms/server-refusal';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { CautionArea, type CautionKind } from '@/components/ui/cautions';
@@ -30,7 +32,9 @@ import {
   INVERTER_MODE_NOTE,
   newSolarArray,
   percentOfFraction,
+  roofArea,
 } from './rig-form-values';
+import { rigFieldOf, rigFieldOrder } from './rig-refusal';
 import { SolarArrayFields } from './solar-array-fields';
 
 /** The trip's rig in grouped sections; saved as one record with its version. */
@@ -52,7 +56,7 @@ export function RigForm({ save, record, canEdit, dcLoads = [] }: RigFormProps) {
   const units = useUnits();
   const [formError, setFormError] = useState<string>();
   const [conflict, setConflict] = useState<RigRecord | null>(null);
-  const { control, handleSubmit, setValue, reset, formState } = useForm<RigInput, unknown, Rig>({
+  const { control, handleSubmit, setValue, setError, reset, formState } = useForm<RigInput, unknown, Rig>({
     resolver: zodResolver(rigSchema),
     defaultValues: record.rig,
   });
@@ -86,7 +90,15 @@ export function RigForm({ save, record, canEdit, dcLoads = [] }: RigFormProps) {
       } catch (error) {
         const current = conflictCurrent<RigRecord>(error);
         if (current) setConflict(current);
-        else setFormError(error instanceof ApiError ? error.message : 'The rig could not be saved.');
+        else
+          setFormError(
+            showServerRefusal(error, {
+              order: rigFieldOrder(error instanceof ApiError ? Object.keys(error.fields ?? {}) : []),
+              fieldOf: rigFieldOf,
+              setError,
+              fallback: 'The rig could not be saved.',
+            }),
+          );
       }
     });
 
@@ -102,7 +114,6 @@ export function RigForm({ save, record, canEdit, dcLoads = [] }: RigFormProps) {
 
   return (
     <View style={styles.form} testID="rig-form">
-      {formError ? <Banner testID="rig-form-error" message={formError} /> : null}
       {Object.keys(formState.errors).length > 0 ? (
         <Banner testID="rig-form-invalid" message="Some figures need a look: see the messages below." />
       ) : null}
@@ -110,15 +121,17 @@ export function RigForm({ save, record, canEdit, dcLoads = [] }: RigFormProps) {
         control={control}
         name="name"
         render={({ field, fieldState }) => (
-          <TextField
-            testID="rig-name"
-            label="Rig name"
-            editable={canEdit}
-            value={field.value}
-            onChangeText={field.onChange}
-            onBlur={field.onBlur}
-            error={fieldState.error?.message}
-          />
+          <FieldSlot fieldRef={field.ref}>
+            <TextField
+              testID="rig-name"
+              label="Rig name"
+              editable={canEdit}
+              value={field.value}
+              onChangeText={field.onChange}
+              onBlur={field.onBlur}
+              error={fieldState.error?.message}
+            />
+          </FieldSlot>
         )}
       />
       <Section title="Battery bank" testID="rig-battery">
@@ -283,6 +296,18 @@ export function RigForm({ save, record, canEdit, dcLoads = [] }: RigFormProps) {
       </Section>
 
       <Section title="Solar" testID="rig-solar">
+        <Num
+          control={control}
+          disabled={off}
+          optional
+          name="cabin.roofAreaM2"
+          label="Roof area"
+          shown={roofArea(units)}
+          range={[1, 60]}
+          hint="the whole roof, outside; left empty, the body's length × width. More-solar fixes count about 60 % of it as room for panels, less the panels already up there"
+
+          testID="rig-roof-area"
+        />
         {arrays.fields.map((f, i) => (
           <SolarArrayFields
             key={f.id}
@@ -566,7 +591,7 @@ export function RigForm({ save, record, canEdit, dcLoads = [] }: RigFormProps) {
               control={control}
               name={`propaneTanks.${i}.name`}
               render={({ field, fieldState }) => (
-                <View style={styles.cell}>
+                <FieldSlot fieldRef={field.ref} style={styles.cell}>
                   <TextField
                     testID={`rig-tank-${i}-name`}
                     label={`Cylinder ${i + 1} name`}
@@ -574,9 +599,15 @@ export function RigForm({ save, record, canEdit, dcLoads = [] }: RigFormProps) {
                     value={field.value ?? ''}
                     onChangeText={field.onChange}
                     onBlur={field.onBlur}
-                    error={fieldState.error ? 'Give the cylinder a name (up to 80 letters).' : undefined}
+                    error={
+                      fieldState.error?.type === 'server'
+                        ? fieldState.error.message
+                        : fieldState.error
+                          ? 'Give the cylinder a name (up to 80 letters).'
+                          : undefined
+                    }
                   />
-                </View>
+                </FieldSlot>
               )}
             />
             <Controller
@@ -652,6 +683,8 @@ export function RigForm({ save, record, canEdit, dcLoads = [] }: RigFormProps) {
           }}
         />
       ) : null}
+      {/* What no field shows stands beside Save, where the eye is after pressing it. */}
+      {formError ? <Banner testID="rig-form-error" message={formError} /> : null}
       {canEdit ? (
         <Button
           testID="rig-save"

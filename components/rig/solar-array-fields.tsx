@@ -1,6 +1,7 @@
 import { Controller, useWatch, type UseFormSetValue } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 import { colors, space } from '@/components/theme/tokens';
+import { FieldSlot } from '@/components/forms/field-slot';
 import { Button } from '@/components/ui/button';
 import { ChoiceChips } from '@/components/ui/choice-chips';
 import { Text } from '@/components/ui/text';
@@ -31,7 +32,7 @@ export function SolarArrayFields({ control, setValue, index: i, units, disabled,
           control={control}
           name={`solarArrays.${i}.name`}
           render={({ field, fieldState }) => (
-            <View style={styles.cell}>
+            <FieldSlot fieldRef={field.ref} style={styles.cell}>
               <TextField
                 testID={`rig-array-${i}-name`}
                 label={`Array ${n} name`}
@@ -39,9 +40,15 @@ export function SolarArrayFields({ control, setValue, index: i, units, disabled,
                 value={field.value ?? ''}
                 onChangeText={field.onChange}
                 onBlur={field.onBlur}
-                error={fieldState.error ? 'Give the array a name (up to 80 letters).' : undefined}
+                error={
+                  fieldState.error?.type === 'server'
+                    ? fieldState.error.message
+                    : fieldState.error
+                      ? 'Give the array a name (up to 80 letters).'
+                      : undefined
+                }
               />
-            </View>
+            </FieldSlot>
           )}
         />
         <Num
@@ -53,6 +60,28 @@ export function SolarArrayFields({ control, setValue, index: i, units, disabled,
           testID={`rig-array-${i}-watts`}
         />
       </View>
+      <Controller
+        control={control}
+        name={`solarArrays.${i}.portable`}
+        render={({ field }) => (
+          <ChoiceChips
+            testID={`rig-array-${i}-portable`}
+            label={`Where array ${n} sits`}
+            disabled={disabled}
+            value={field.value ? 'portable' : 'roof'}
+            onChange={(v) => field.onChange(v === 'portable')}
+            options={[
+              { value: 'roof', label: 'On the roof' },
+              { value: 'portable', label: 'Portable, set out on the ground' },
+            ]}
+          />
+        )}
+      />
+      {array?.portable ? (
+        <Text variant="caption" color="inkSoft">
+          A portable array takes no roof room, so it leaves the roof free for more panels.
+        </Text>
+      ) : null}
       <Controller
         control={control}
         name={`solarArrays.${i}.mounting`}
@@ -67,7 +96,7 @@ export function SolarArrayFields({ control, setValue, index: i, units, disabled,
                 setValue(`solarArrays.${i}`, withMounting(array, m), { shouldDirty: true, shouldValidate: true });
             }}
             options={[
-              { value: 'flat', label: 'Flat on the roof' },
+              { value: 'flat', label: array?.portable ? 'Flat on the ground' : 'Flat on the roof' },
               { value: 'tilted', label: 'Tilted' },
             ]}
           />

@@ -1,3 +1,4 @@
+import { useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import type { FixEdit } from '@/components/budget/apply-fix';
 import type { TripDetail, UndoFixRequest } from '@/shared/schemas/api';
@@ -5,14 +6,18 @@ import { ApiError } from '@/stores/queries/api-client';
 import { useScheduleSaveMutation } from '@/stores/queries/appliances';
 import { useStopSaveMutation } from '@/stores/queries/route';
 import { useTripRigSaveMutation } from '@/stores/queries/rigs';
-import { useUndoFixMutation } from '@/stores/queries/trips';
-import { showToast } from '@/stores/toast-store';
+import { invalidateTrip, useUndoFixMutation } from '@/stores/queries/trips';
+import { dismissToast, showToast } from '@/stores/toast-store';
+import { dropUndo, latestUndo, pushUndo, useUndoStack } from '@/stores/undo-store';
 
 function failureMessage(error: unknown, what: string): string {
   if (error instanceof ApiError && error.status === 409)
     return 'Someone else changed this trip since you opened it. The screen now shows their version; check it and try again.';
   return error instanceof ApiError ? error.message : `That ${what} could not be saved.`;
 }
+
+// The toast of the latest fix: one Undo on screen at a time, so an older toast's Undo never takes back a newer fix.
+let undoToast: number | null = null;
 
 /** The request that puts a record back as it stood before an edit, once the edit's new version is known. */
 export function undoFor(edit: FixEdit, detail: TripDetail, newVersion: number): UndoFixRequest {
@@ -35,14 +40,17 @@ export function undoFor(edit: FixEdit, detail: TripDetail, newVersion: number): 
 
 /**
  * Sends a one-click edit (a flag's fix, a kept what-if) and reports the outcome in a toast. A single edit (a fix)
- * is offered an Undo that puts the record back as it was, its version included.
+ * goes on the visit's undo stack: the toast's Undo, and "Undo last fix", put back the latest one, its record as it
+ * was, version included, so several fixes come off in reverse order.
  */
 export function useApplyEdit(detail: TripDetail) {
   const tripId = detail.trip.id;
+  const queryClient = useQueryClient();
   const rigSave = useTripRigSaveMutation(tripId);
   const stopSave = useStopSaveMutation(tripId);
   const scheduleSave = useScheduleSaveMutation();
   const undoFix = useUndoFixMutation(tripId);
+  const stack = useUndoStack(tripId);
   const [busy, setBusy] = useState<string | null>(null);
 
   const save = async (edit: FixEdit, rigVersion: number): Promise<number> => {
@@ -66,12 +74,25 @@ export function useApplyEdit(detail: TripDetail) {
     ).version;
   };
 
-  const undo = async (request: UndoFixRequest, summary: string): Promise<void> => {
+  const undoLast = async (): Promise<void> => {
+    const entry = latestUndo(tripId);
+    if (!entry) return;
+    setBusy('undo');
     try {
-      await undoFix.mutateAsync(request);
-      showToast(`Undone: ${summary}`);
+      await undoFix.mutateAsync(entry.request);
+      dropUndo(tripId, entry.id);
+      showToast(`Undone: ${entry.summary}`);
     } catch (error) {
-      showToast(failureMessage(error, 'undo'), { tone: 'danger' });
+      if (error instanceof ApiError && error.status === 409) {
+        // Their change stands and nothing of it is lost; this fix can no longer be taken back as it was.
+        dropUndo(tripId, entry.id);
+        showToast(
+          `Someone changed this since "${entry.summary}" was applied, so it was not undone and their change is kept. Reload to see it.`,
+          { tone: 'danger', action: { label: 'Reload', run: () => void invalidateTrip(queryClient, tripId) } },
+        );
+      } else showToast(failureMessage(error, 'undo'), { tone: 'danger' });
+    } finally {
+      setBusy(null);
     }
   };
 
@@ -82,11 +103,13 @@ export function useApplyEdit(detail: TripDetail) {
       for (const edit of edits) versions.push(await save(edit, rigVersion));
       const summary = edits.map((e) => e.summary).join(', ');
       const only = edits.length === 1 ? edits[0] : undefined;
-      const request = only ? undoFor(only, detail, versions[0] ?? 0) : null;
-      showToast(
+      if (only) pushUndo(tripId, undoFor(only, detail, versions[0] ?? 0), summary);
+      if (only && undoToast !== null) dismissToast(undoToast);
+      const toast = showToast(
         `Saved: ${summary}`,
-        request ? { action: { label: 'Undo', run: () => void undo(request, summary) } } : {},
+        only ? { action: { label: 'Undo', run: () => void undoLast() } } : {},
       );
+      if (only) undoToast = toast;
       return true;
     } catch (error) {
       showToast(failureMessage(error, 'change'), { tone: 'danger' });
@@ -95,5 +118,7 @@ export function useApplyEdit(detail: TripDetail) {
       setBusy(null);
     }
   };
-  return { apply, busy };
+  /** The fix "Undo last fix" would take back, while this visit has one. */
+  const lastFix = stack.at(-1);
+  return { apply, busy, undoLast, lastFix, undoCount: stack.length };
 }

@@ -82,6 +82,17 @@ describe('flag fixes as edits', () => {
     },
   );
 
+  it('when another hookup supply is picked, then the stop is saved with that supply and the summary names it', () => {
+    const fix = first('add-hookup-night');
+    if (!fix) throw new Error('expected a hookup fix');
+    const offered = editForFix(detail, fix, result.days);
+    const picked = editForFix(detail, fix, result.days, { supply: { amps: 10, volts: 230 } });
+    if (offered?.kind !== 'stop' || picked?.kind !== 'stop') throw new Error('expected stop edits');
+    expect(offered.stop.hookup).toEqual({ amps: fix.params.amps, volts: fix.params.volts });
+    expect(picked.stop.hookup).toEqual({ amps: 10, volts: 230 });
+    expect(picked.summary).toContain('10 A at 230 V');
+  });
+
   it('when advice cannot be an edit (stagger, cabling), then no edit is offered', () => {
     for (const kind of ['stagger-appliances', 'check-cabling', 'move-appliance-to-drive'] as const) {
       const fix = first(kind);

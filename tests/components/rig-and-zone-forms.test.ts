@@ -8,6 +8,7 @@ import {
   panelTemperature,
   percentOfFraction,
   perDegree,
+  roofArea,
   withMounting,
 } from '@/components/rig/rig-form-values';
 import { allZones, filterZones, placeOf } from '@/components/route/zone-filter';
@@ -35,6 +36,15 @@ describe('rig form figures', () => {
     expect(t.show(45)).toBe(113);
     expect(t.store(113)).toBe(45);
     expect(panelTemperature('metric').show(45)).toBe(45);
+  });
+
+  it('when the roof area is shown in US units, then 12 m² reads 129 ft² and a typed 129 ft² is stored near 12 m²', () => {
+    const a = roofArea('us');
+    expect(a.unit).toBe('ft²');
+    expect(a.show(12)).toBe(129); // 12 / 0.3048² = 129.17 ft²
+    expect(a.store(129)).toBeCloseTo(11.984, 3);
+    expect(roofArea('metric').show(12)).toBe(12);
+    expect(a.range(1, 60)).toBe('Enter a figure from 10.8 to 645.8 ft².');
   });
 
   it('when the temperature coefficient is shown per °F, then it is 5/9 of the figure per °C', () => {

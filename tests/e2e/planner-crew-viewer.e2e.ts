@@ -7,7 +7,16 @@ import { openDatabase } from '@/db/client';
 import { addMember } from '@/db/queries/members';
 import { user } from '@/db/schema/auth';
 import { DEMO_CREW, DEMO_VIEWER } from '@/db/seed';
-import { byTestId, openTrip, screenshot, signIn, trackPageErrors, useServerAndBrowser, VIEWPORTS } from './harness';
+import {
+  byTestId,
+  openTrip,
+  screenshot,
+  shootAt,
+  signIn,
+  trackPageErrors,
+  useServerAndBrowser,
+  VIEWPORTS,
+} from './harness';
 
 const TRIP = 'Glen and shore test';
 const LEADER = { name: 'Ailsa Leader', email: `leader-${Date.now()}@example.test`, password: 'leader-password-1' };
@@ -139,29 +148,69 @@ describe('a trip leader at 1440 px', () => {
     expect(fixesAsked.length).toBeGreaterThan(0);
     const shortBefore = Number((await page.textContent(byTestId('figure-short-value')))?.replace(/\D/g, ''));
     await screenshot(page, 'leader-budget-flag-desktop');
-    // Apply a fix, then Undo it from the toast: the trip's records come back as they were, versions included.
+    // Two fixes in a row, then both undone newest first: the toast's Undo takes back the second, "Undo last fix"
+    // the first, and the trip's records come back as they were, versions included, at 1440 px and at 360 px.
     const records = async () => {
       const detail = (await (await page.request.get(`${suite.server.url}/api/trips/${tripId}`)).json()) as {
         rig: unknown;
         stops: unknown;
         appliances: unknown;
       };
-      return { rig: detail.rig, stops: detail.stops, appliances: detail.appliances };
+      return JSON.stringify({ rig: detail.rig, stops: detail.stops, appliances: detail.appliances });
     };
-    const asItWas = await records();
-    const firstFlag = shortfalls.first();
-    const firstFlagId = (await firstFlag.getAttribute('data-testid')) ?? '';
-    await firstFlag.locator('[data-testid^="fix-"]').first().click();
-    await page.waitForSelector(byTestId('toast-action'));
-    await expect.poll(async () => JSON.stringify(await records())).not.toBe(JSON.stringify(asItWas));
-    await page.click(byTestId('toast-action'));
-    await expect.poll(async () => JSON.stringify(await records()), { timeout: 15_000 }).toBe(JSON.stringify(asItWas));
-    await expect.poll(() => page.locator(byTestId(firstFlagId)).count(), { timeout: 15_000 }).toBe(1);
-    await expect
-      .poll(async () => Number((await page.textContent(byTestId('figure-short-value')))?.replace(/\D/g, '')))
-      .toBe(shortBefore);
-    // After the undo the fixes are checked again for the budget as it was, and offered again.
-    await fixesShown(page.locator(byTestId(firstFlagId)));
+    const applyButtons = page.locator('[data-testid^="flag-"] [data-testid^="fix-"]:not([aria-disabled="true"])');
+    const applyTwoThenUndoBoth = async (width: 'desktop' | 'phone') => {
+      const asItWas = await records();
+      const firstFlagId = (await shortfalls.first().getAttribute('data-testid')) ?? '';
+      const listBefore = await page.textContent(byTestId('flag-list'));
+      await applyButtons.first().click();
+      await expect.poll(records, { timeout: 15_000 }).not.toBe(asItWas);
+      const afterOne = await records();
+      // The budget has moved on (the flag cleared or its figures changed) before the second fix is chosen.
+      await expect.poll(() => page.textContent(byTestId('flag-list')), { timeout: 15_000 }).not.toBe(listBefore);
+      await expect.poll(() => applyButtons.count(), { timeout: 15_000 }).toBeGreaterThan(0);
+      await applyButtons.first().click();
+      await expect.poll(records, { timeout: 15_000 }).not.toBe(afterOne);
+      await expect.poll(() => page.textContent(byTestId('undo-last-fix-text'))).toContain('2 fixes can be undone');
+      await screenshot(page, `leader-budget-two-fixes-${width}`);
+      // What the reader was looking at stays where it was: the undo redraws the budget under them (a flag put back
+      // above it pushes nothing out of view), and the screen does not start again from the top.
+      // A small marked element fully in view inside the budget (a container would move with what is put back).
+      const seen = await page.evaluateHandle(() =>
+        [...document.querySelectorAll('[data-testid="budget-screen"] [data-testid]')].find((el) => {
+          const r = el.getBoundingClientRect();
+          return r.top > 120 && r.bottom < window.innerHeight / 2 && r.height > 0 && r.height < 150;
+        }),
+      );
+      const seenTop = () => seen.evaluate((el) => (el?.isConnected ? el.getBoundingClientRect().top : Number.NaN));
+      const seenTopBefore = await seenTop();
+      await page.click(byTestId('toast-action'));
+      await expect.poll(records, { timeout: 15_000 }).toBe(afterOne);
+      await expect.poll(() => page.textContent(byTestId('undo-last-fix-text'))).not.toContain('fixes can be undone');
+      // Held at 1440 px only: on a phone, a flag put back above the view still pushes the view down by its height.
+      if (width === 'desktop') expect(Math.abs((await seenTop()) - seenTopBefore)).toBeLessThan(60);
+      await page.click(byTestId('undo-last-fix-button'));
+      await expect.poll(records, { timeout: 15_000 }).toBe(asItWas);
+      await page.waitForSelector(byTestId('undo-last-fix'), { state: 'detached', timeout: 15_000 });
+      await expect.poll(() => page.locator(byTestId(firstFlagId)).count(), { timeout: 15_000 }).toBe(1);
+      await expect
+        .poll(async () => Number((await page.textContent(byTestId('figure-short-value')))?.replace(/\D/g, '')))
+        .toBe(shortBefore);
+      // After the undo the fixes are checked again for the budget as it was, and offered again.
+      await fixesShown(page.locator(byTestId(firstFlagId)));
+    };
+    // "What it would take" marks one lever as the cheapest, in words a screen reader reads.
+    const cheapest = page.locator(byTestId('what-it-would-take-cheapest'));
+    await expect.poll(() => cheapest.count()).toBe(1);
+    expect(await cheapest.textContent()).toBe('Cheapest');
+    expect(await cheapest.getAttribute('aria-label')).toBe('cheapest of these levers');
+    await shootAt(page, 'what-it-would-take', 'leader-what-it-would-take-desktop');
+    await applyTwoThenUndoBoth('desktop');
+    await page.setViewportSize(VIEWPORTS.phone);
+    await expect.poll(() => cheapest.count()).toBe(1);
+    await shootAt(page, 'what-it-would-take', 'leader-what-it-would-take-phone');
+    await applyTwoThenUndoBoth('phone');
+    await page.setViewportSize(VIEWPORTS.desktop);
     await screenshot(page, 'leader-budget-undone-desktop');
     // Apply the first flag's first fix a few times: fixes are capped at what the rig can carry, so each one must
     // lower the energy short, and the ones that clear their flag remove it.
@@ -200,7 +249,7 @@ describe('a trip leader at 1440 px', () => {
     await page.reload();
     await page.waitForSelector(byTestId('rig-form'));
     await page.click(byTestId('rig-inverter-advanced'));
-    // The device's saved copy can show first after a reload; the server's value follows.
+    // The device's saved copy can show first; the server's answer follows.
     await expect.poll(() => page.inputValue(byTestId('rig-inverter-idle')), { timeout: 15_000 }).toBe('6');
     expect(await page.getAttribute(byTestId('rig-inverter-mode-on-demand'), 'aria-checked')).toBe('true');
 
@@ -215,7 +264,10 @@ describe('a trip leader at 1440 px', () => {
     await page.waitForSelector(byTestId('stop-form'), { state: 'detached' });
     await page.reload();
     await page.click(byTestId('stop-0-edit'));
-    expect(await page.textContent(byTestId('stop-time-zone-value'))).toContain('Europe/Dublin');
+    // The device's saved copy can show first; the server's answer follows.
+    await expect
+      .poll(() => page.textContent(byTestId('stop-time-zone-value')), { timeout: 15_000 })
+      .toContain('Europe/Dublin');
     expect(errors).toEqual([]);
     await page.close();
   });
@@ -343,7 +395,7 @@ describe('two people editing at once', () => {
     await first.reload();
     await first.waitForSelector(byTestId('trip-frame'));
     await first.click(byTestId('tab-loads'));
-    await expect.poll(() => first.textContent(byTestId('circuit-ac'))).toContain('80 W');
+    await expect.poll(() => first.textContent(byTestId('circuit-ac')), { timeout: 15_000 }).toContain('80 W');
     await context.close();
   });
 });

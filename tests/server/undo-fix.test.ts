@@ -37,6 +37,37 @@ describe('undo of an applied fix', () => {
     expect(revisionOf(before.trip.id)).toBe(revisionAfterApply + 1);
   });
 
+  it('when two fixes to the rig are applied in a row, then they undo newest first back to the rig as it was', async () => {
+    const { agent } = await signUpAgent(ctx.app);
+    const before = await createTrip(agent);
+    const tripId = before.trip.id;
+    const rig0 = before.rig.rig;
+    const rig1 = { ...rig0, battery: { ...rig0.battery, capacityAh: rig0.battery.capacityAh + 100 } };
+    const first = await agent
+      .put(`/api/trips/${tripId}/rig`)
+      .send({ version: before.rig.version, rig: rig1 })
+      .expect(200);
+    const rig2 = { ...rig1, battery: { ...rig1.battery, heatedSpace: true } };
+    const second = await agent
+      .put(`/api/trips/${tripId}/rig`)
+      .send({ version: first.body.version, rig: rig2 })
+      .expect(200);
+    // Each undo request is what the client pushed on its stack when the fix went through.
+    const undoFirst = { kind: 'rig', version: first.body.version, restore: { version: before.rig.version, rig: rig0 } };
+    const undoSecond = {
+      kind: 'rig',
+      version: second.body.version,
+      restore: { version: first.body.version, rig: rig1 },
+    };
+    // Out of order, the older one finds the record changed since and is refused; nothing is lost.
+    await agent.post(`/api/trips/${tripId}/undo-fix`).send(undoFirst).expect(409);
+    expect((await getDetail(agent, tripId)).rig.rig).toEqual(rig2);
+    await agent.post(`/api/trips/${tripId}/undo-fix`).send(undoSecond).expect(200);
+    expect((await getDetail(agent, tripId)).rig).toEqual({ ...before.rig, version: first.body.version, rig: rig1 });
+    await agent.post(`/api/trips/${tripId}/undo-fix`).send(undoFirst).expect(200);
+    expect((await getDetail(agent, tripId)).rig).toEqual(before.rig);
+  });
+
   it('when a hookup fix on a stop is undone, then the stop is as it was', async () => {
     const { agent } = await signUpAgent(ctx.app);
     const trip = await createTrip(agent);
