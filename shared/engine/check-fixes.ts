@@ -8,7 +8,7 @@ import { isShortfall } from './flags';
 import { dcCurrentA, inverterDcDrawW } from './inverter';
 import { overloadFixes } from './overload-fixes';
 import type { Fix, Flag, FlagFixes, FlagWithFixes } from './result-types';
-import { planTrip, scenarioUnder } from './simulate';
+import { planTrip } from './simulate';
 
 export type CheckFixesOptions = {
   /** Only these flags (by id); all of them when left out. */

@@ -213,7 +213,7 @@ function bandRun(p: Prepared, shift: -1 | 1): BandRun {
 }
 
 /** The planned run's scenario under a sky: the preset's when there is no recorded or forecast one. */
-export function scenarioUnder(p: Prepared, sky: StepSky | undefined): { solar: SolarSeries; scenario: Scenario } {
+function scenarioUnder(p: Prepared, sky: StepSky | undefined): { solar: SolarSeries; scenario: Scenario } {
   const solar = solarSeries(p, 0, sky);
   return { solar, scenario: plannedScenario(p, solar, sky?.ambientC) };
 }
