@@ -60,7 +60,8 @@ export function ClubListScreen() {
       title="Clubs"
       subtitle="Share a rally plan with many households; each copies it onto their own rig."
       actions={
-        !none && !creating ? (
+        // Only once the list is known: while it loads, an empty list may still turn out to hold the form itself.
+        clubs.data && !none && !creating ? (
           <Button testID="clubs-new" label="Create a club" tone="secondary" onPress={() => setCreating(true)} />
         ) : null
       }

@@ -101,7 +101,12 @@ export function GeneratorFields({ control, setValue, disabled }: Props) {
             ? 'Switched off: the budget counts no generator charging.'
             : 'Set hours are not typed here: apply a generator fix on the Budget tab to run it on set hours.'}
       </Text>
-      <Advanced what="fuel use" testID="rig-generator-advanced">
+      <Advanced
+        what="fuel use"
+        testID="rig-generator-advanced"
+        control={control}
+        fields={['generator.fuelModel.idleFuelKwhPerH', 'generator.fuelModel.fuelKwhPerKwhOut']}
+      >
         <Text variant="caption" color="inkSoft">
           Fuel as energy (kWh of fuel, higher heating value). Left out, a typical figure for the fuel and size is used.
         </Text>

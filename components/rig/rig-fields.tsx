@@ -1,7 +1,7 @@
 // Building blocks shared by the rig form's sections: a number bound to a rig path (optionally shown in another
 // unit), a titled section, a row of part presets and a disclosure for the figures most people never change.
 import { useState, type ReactNode } from 'react';
-import { Controller, type Control, type FieldPathByValue } from 'react-hook-form';
+import { Controller, useFormState, type Control, type FieldPathByValue } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 import { colors, radii, space } from '@/components/theme/tokens';
 import { FieldSlot } from '@/components/forms/field-slot';
@@ -139,8 +139,25 @@ export function Presets({
 }
 
 /** Closed by default: these figures have sound defaults, and a phone screen is short. */
-export function Advanced({ what, testID, children }: { what: string; testID: string; children: ReactNode }) {
+type AdvancedProps = {
+  what: string;
+  testID: string;
+  /** The form and the fields inside: a refusal on one of them opens the disclosure, so it is seen and focusable. */
+  control: RigControl;
+  fields: readonly NumPath[];
+  children: ReactNode;
+};
+
+export function Advanced({ what, testID, control, fields, children }: AdvancedProps) {
   const [open, setOpen] = useState(false);
+  const { errors } = useFormState({ control, name: [...fields] });
+  const refused = fields.some((field) => fieldError(errors, field));
+  // Opened when a refusal arrives (not kept open by it: the person may close it again to read the rest).
+  const [wasRefused, setWasRefused] = useState(refused);
+  if (refused !== wasRefused) {
+    setWasRefused(refused);
+    if (refused) setOpen(true);
+  }
   return (
     <View style={[styles.advanced, open ? styles.advancedOpen : null]}>
       <Button
@@ -155,6 +172,16 @@ export function Advanced({ what, testID, children }: { what: string; testID: str
       {open ? <View style={styles.advancedBody}>{children}</View> : null}
     </View>
   );
+}
+
+/** Whether react-hook-form's error tree holds an error at a dotted path (`solarArrays.0.derate`). */
+function fieldError(errors: object, path: string): boolean {
+  let node: unknown = errors;
+  for (const key of path.split('.')) {
+    if (typeof node !== 'object' || node === null) return false;
+    node = (node as Record<string, unknown>)[key];
+  }
+  return node !== undefined;
 }
 
 export const fieldStyles = StyleSheet.create({

@@ -270,7 +270,12 @@ export function RigForm({ save, record, canEdit, dcLoads = [] }: RigFormProps) {
             />
           )}
         />
-        <Advanced what="body size" testID="rig-cabin-advanced">
+        <Advanced
+          what="body size"
+          testID="rig-cabin-advanced"
+          control={control}
+          fields={['cabin.widthM', 'cabin.heightM']}
+        >
           <View style={styles.grid}>
             <Num
               control={control}
@@ -464,7 +469,12 @@ export function RigForm({ save, record, canEdit, dcLoads = [] }: RigFormProps) {
             <Text variant="caption" color="inkSoft">
               {INVERTER_MODE_NOTE[inverter.mode ?? 'on-demand']}
             </Text>
-            <Advanced what="inverter losses" testID="rig-inverter-advanced">
+            <Advanced
+              what="inverter losses"
+              testID="rig-inverter-advanced"
+              control={control}
+              fields={['inverter.efficiency', 'inverter.idleW']}
+            >
               <View style={styles.grid}>
                 <Num
                   control={control}

@@ -147,7 +147,17 @@ export function SolarArrayFields({ control, setValue, index: i, units, disabled,
           />
         )}
       />
-      <Advanced what={`array ${n} datasheet and losses`} testID={`rig-array-${i}-advanced`}>
+      <Advanced
+        what={`array ${n} datasheet and losses`}
+        testID={`rig-array-${i}-advanced`}
+        control={control}
+        fields={[
+          `solarArrays.${i}.noctC`,
+          `solarArrays.${i}.gammaPctPerC`,
+          `solarArrays.${i}.vmpV`,
+          `solarArrays.${i}.derate`,
+        ]}
+      >
         <Text variant="caption" color="inkSoft">
           From the panel&apos;s datasheet. Left alone, these are typical of crystalline panels.
         </Text>

@@ -243,6 +243,12 @@ describe('a trip leader at 1440 px', () => {
     await page.waitForSelector(byTestId('rig-form'));
     // Less idle draw than the preset's, so the plan the flag fixes made to hold still holds for the crew test.
     await page.click(byTestId('rig-inverter-advanced'));
+    // A refused figure inside a closed "Advanced" opens it again on Save, so the message is seen beside its field.
+    await page.fill(byTestId('rig-inverter-idle'), '-5');
+    await page.click(byTestId('rig-inverter-advanced'));
+    expect(await page.locator(byTestId('rig-inverter-idle')).count()).toBe(0);
+    await page.click(byTestId('rig-save'));
+    await page.waitForSelector(`${byTestId('rig-inverter-idle')}[aria-invalid="true"]`);
     await page.fill(byTestId('rig-inverter-idle'), '6');
     await page.click(byTestId('rig-save'));
     await expect.poll(() => page.textContent(byTestId('toast'))).toContain('Rig saved');

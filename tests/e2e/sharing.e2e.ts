@@ -188,7 +188,8 @@ describe.each(Object.entries(VIEWPORTS))('clubs at %s width', (name, viewport) =
     const errors = trackPageErrors(page);
     await signIn(page, suite.server.url, DEMO_ACCOUNT.email, DEMO_ACCOUNT.password);
     await page.click(byTestId('nav-clubs'));
-    await page.waitForSelector(byTestId('clubs-screen'));
+    // Once the list has loaded: the empty state (with the form) or the button that opens the form.
+    await page.waitForSelector(`${byTestId('clubs-empty')}, ${byTestId('clubs-new')}`);
     if (await page.locator(byTestId('clubs-empty')).count()) {
       await screenshot(page, `sharing-clubs-empty-${name}`);
       await expectAccessible(page, `clubs empty (${name})`);
@@ -288,7 +289,7 @@ describe('copy onto my rig', () => {
     const errors = trackPageErrors(page);
     await signIn(page, suite.server.url, DEMO_ACCOUNT.email, DEMO_ACCOUNT.password);
     await page.click(byTestId('nav-clubs'));
-    await page.waitForSelector(byTestId('clubs-screen'));
+    await page.waitForSelector(`${byTestId('clubs-empty')}, ${byTestId('clubs-new')}`);
     if (await page.locator(byTestId('clubs-new')).count()) await page.click(byTestId('clubs-new'));
     await page.fill(byTestId('create-club-name'), 'Firth Caravan Club');
     await page.click(byTestId('create-club-submit'));
