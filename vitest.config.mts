@@ -1,3 +1,4 @@
+import { availableParallelism } from 'node:os';
 import { fileURLToPath } from 'node:url';
 import { defineConfig } from 'vitest/config';
 
@@ -14,6 +15,9 @@ export default defineConfig({
       'tests/scripts/**/*.test.ts',
     ],
     pool: 'forks',
+    // At least two files at once: left to itself vitest keeps one core free, which on a 2-core machine means one file
+    // at a time.
+    maxWorkers: Math.max(2, availableParallelism() - 1),
     environment: 'node',
     testTimeout: 20000,
   },

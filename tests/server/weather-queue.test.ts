@@ -234,9 +234,11 @@ describe('weather records from a broken service', () => {
     await addStop(agent, trip.trip.id);
     await app.locals.weather.idle();
     expect(starts.length).toBe(6);
-    // 10 a second: the k-th request starts at least k × 100 ms after the first, less arrival jitter on a busy machine.
+    // 10 a second: the k-th request starts at least k × 100 ms after the first, less arrival jitter on a busy machine
+    // (the first request's arrival can be late by tens of ms when two test files share the cores). Without the limit
+    // all six arrive within a few ms of each other, so this still fails from the second request on.
     const first = starts[0]?.at ?? 0;
-    starts.forEach((s, k) => expect(s.at - first).toBeGreaterThanOrEqual(k * 100 - 25));
+    starts.forEach((s, k) => expect(s.at - first).toBeGreaterThanOrEqual(k * 100 - 60));
   });
 
   it("when a place's weather arrives, then the budgets of trips stopping there, and only those, are computed again", async () => {
