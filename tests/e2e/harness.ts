@@ -30,7 +30,14 @@ export const VIEWPORTS = {
   desktop: { width: 1440, height: 900 },
 } as const;
 
+/**
+ * Screenshots are for people to review at both widths; CI, where nobody looks at them, turns them off
+ * (`E2E_SCREENSHOTS=off`) to save the minutes that drawing and encoding ~115 pictures (some 6,000 px tall) take.
+ */
+const SCREENSHOTS = process.env.E2E_SCREENSHOTS !== 'off';
+
 export async function screenshot(page: Page, name: string): Promise<void> {
+  if (!SCREENSHOTS) return;
   fs.mkdirSync(SCREENSHOT_DIR, { recursive: true });
   await page.screenshot({ path: path.join(SCREENSHOT_DIR, `${name}.png`), fullPage: true });
 }
@@ -40,6 +47,7 @@ export async function screenshot(page: Page, name: string): Promise<void> {
  * viewport to the tallest scrolling element first, so the whole screen can be reviewed, then restores it.
  */
 export async function screenshotTall(page: Page, name: string): Promise<void> {
+  if (!SCREENSHOTS) return;
   const viewport = page.viewportSize();
   const height = await page.evaluate(() =>
     Math.max(
@@ -59,6 +67,7 @@ export async function screenshotTall(page: Page, name: string): Promise<void> {
 export async function shootAt(page: Page, testId: string, name: string): Promise<void> {
   fs.mkdirSync(SCREENSHOT_DIR, { recursive: true });
   await page.locator(byTestId(testId)).evaluate((el) => el.scrollIntoView({ block: 'start' }));
+  if (!SCREENSHOTS) return;
   await page.waitForTimeout(200);
   await page.screenshot({ path: path.join(SCREENSHOT_DIR, `${name}.png`) });
 }
