@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import { StyleSheet, View } from 'react-native';
+import { Platform, StyleSheet, View, type ViewStyle } from 'react-native';
 import { colors, radii, space } from '@/components/theme/tokens';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
@@ -30,7 +30,9 @@ type Props = {
 };
 
 export function FlagList({ flags: bare, fixes, days, detail, canEdit, readOnlyReason, busyKey, onApply }: Props) {
-  const flags = withFixes(bare, fixes.state === 'ready' ? fixes.fixes : []);
+  const flags = withFixes(bare, fixes.state === 'ready' || fixes.state === 'rechecking' ? fixes.fixes : []);
+  // A held fix belongs to the plan before the last edit: shown so the list keeps its place, applied only once checked.
+  const stale = fixes.state === 'rechecking';
   const where = (f: Flag) =>
     f.where.kind === 'stop'
       ? (detail.stops[f.where.stopIndex]?.stop.name ?? `stop ${f.where.stopIndex + 1}`)
@@ -39,7 +41,7 @@ export function FlagList({ flags: bare, fixes, days, detail, canEdit, readOnlyRe
   const [supplies, setSupplies] = useState<Record<string, HookupSupply>>({});
   const hasGeneratorFix = flags.some((f) => f.fixes.some((x) => x.kind === 'add-generator-hours'));
   return (
-    <Card testID="flag-list">
+    <Card testID="flag-list" style={noScrollAnchor}>
       <Text variant="title" role="heading" aria-level={2}>
         Flags {flags.length > 0 ? `(${flags.length})` : ''}
       </Text>
@@ -92,7 +94,7 @@ export function FlagList({ flags: bare, fixes, days, detail, canEdit, readOnlyRe
                       label="Apply"
                       accessibilityLabel={`Apply fix: ${edit.summary}`}
                       busy={busyKey === key}
-                      disabled={busyKey !== null}
+                      disabled={busyKey !== null || stale}
                       onPress={() => onApply(key, fix, choice)}
                     />
                   ) : null}
@@ -128,10 +130,18 @@ function FixesPending({ fixes }: { fixes: FixesView }) {
   if (fixes.state === 'error') return <QueryError testID="fixes-error" error={fixes.error} onRetry={fixes.retry} />;
   return (
     <Text variant="caption" color="inkSoft" testID="fixes-loading" role="status">
-      Checking fixes…
+      {fixes.state === 'rechecking' ? 'Checking the fixes again for the plan as it is now…' : 'Checking fixes…'}
     </Text>
   );
 }
+
+/**
+ * Applying or undoing a fix adds and removes flags here. A browser keeps its scroll anchor (a node it picked on the
+ * screen) still when the content above it changes, and an anchor picked inside this list made the tab jump by a
+ * flag's height; kept out of the choice, the list grows and shrinks below what the reader sees.
+ */
+const noScrollAnchor: ViewStyle | undefined =
+  Platform.OS === 'web' ? ({ overflowAnchor: 'none' } as unknown as ViewStyle) : undefined;
 
 const styles = StyleSheet.create({
   flag: { borderLeftWidth: 4, borderRadius: radii.sm, padding: space.md, gap: space.xs, backgroundColor: colors.dune },

@@ -10,7 +10,11 @@ import { checkFixesCached } from './simulate-cached';
 import type { BudgetView } from './use-budget-view';
 
 export type FixesView =
-  { state: 'loading' } | { state: 'error'; error: unknown; retry: () => void } | { state: 'ready'; fixes: FlagFixes[] };
+  | { state: 'loading' }
+  | { state: 'error'; error: unknown; retry: () => void }
+  | { state: 'ready'; fixes: FlagFixes[] }
+  /** The last plan's fixes, shown (not applicable) while the edited plan's are checked. */
+  | { state: 'rechecking'; fixes: FlagFixes[] };
 
 const NONE: FixesView = { state: 'ready', fixes: [] };
 
@@ -37,7 +41,25 @@ function useWhatIfFixes(input: EngineInputDraft | null): FixesView {
   return done?.key === key ? done.view : { state: 'loading' };
 }
 
+/**
+ * While the fixes of an edited plan are checked, the last ones stay on screen, marked as being checked again: the
+ * list keeps its height, so an Apply or Undo does not collapse it and spring it back under the reader's eyes.
+ */
+function useHeldWhileChecking(tripId: string, view: FixesView): FixesView {
+  const [held, setHeld] = useState<{ tripId: string; fixes: FlagFixes[] } | null>(null);
+  // Kept as state set while rendering (React's pattern for remembering the last props), not in an effect: the held
+  // list must already be there on the render where the new one starts loading.
+  if (view.state === 'ready' && (held?.tripId !== tripId || held.fixes !== view.fixes))
+    setHeld({ tripId, fixes: view.fixes });
+  if (view.state === 'loading' && held?.tripId === tripId) return { state: 'rechecking', fixes: held.fixes };
+  return view;
+}
+
 export function useFlagFixes(tripId: string, view: BudgetView): FixesView {
+  return useHeldWhileChecking(tripId, useFlagFixesNow(tripId, view));
+}
+
+function useFlagFixesNow(tripId: string, view: BudgetView): FixesView {
   const ready = view.state === 'ready' ? view : null;
   const shown = (ready?.result.flags.length ?? 0) > 0;
   const whatIfInput = shown ? (ready?.input ?? null) : null;

@@ -10,6 +10,7 @@ import { applianceEnergyWh, scheduledShare } from './loads';
 import { localStep, prevDayType, type Prepared } from './prepare';
 import type { Cause } from './result-types';
 import type { LedgerColumns } from './walk';
+import { nameInSentence } from './flag-text';
 
 /** Causes under this share of the draw are left out of the list (they would only crowd it). */
 const SMALLEST_SHARE = 0.005;
@@ -87,6 +88,6 @@ export function attributeDraw(ctx: Ctx, from: number, to: number): Cause[] {
 export function causesText(causes: readonly Cause[], count = 3): string {
   return causes
     .slice(0, count)
-    .map((c) => `${c.kind === 'appliance' ? c.name.toLowerCase() : c.name} ${Math.round(c.sharePct)} %`)
+    .map((c) => `${c.kind === 'appliance' ? nameInSentence(c.name) : c.name} ${Math.round(c.sharePct)} %`)
     .join(', ');
 }

@@ -14,7 +14,7 @@ import type { RoutineWindow } from '../schemas/common';
 import { hookupRegionOf } from '../hookup-supply';
 import { climateLoads } from './climate';
 import { hhmm } from './describe';
-import { groupedNumber } from './flag-text';
+import { groupedNumber, nameInSentence } from './flag-text';
 import { defaultFuelModel } from './generator';
 import { generatorHoursText, generatorOnlySchedule } from './generator-only';
 import { QUARTERS, withAppliances, type Prepared } from './prepare';
@@ -169,7 +169,7 @@ export function shoreOnlySchedule(p: Prepared, a: Appliance): Schedule | null {
 }
 
 function applianceChanges(p: Prepared, a: Appliance, stopIndex: number | null): ApplianceChange[] {
-  const name = a.name.toLowerCase();
+  const name = nameInSentence(a.name);
   const s = a.schedule;
   const out: ApplianceChange[] = [];
   if (s.kind === 'thermostat') {

@@ -67,3 +67,14 @@ export function shortfallText(f: ShortfallWords): string {
 }
 
 export { capitalise };
+
+/**
+ * An appliance's name inside a sentence: "Roof air conditioner" reads "roof air conditioner", but a name that starts
+ * with an abbreviation, a unit or a figure ("TV", "LED strip", "12 V fridge") keeps its capitals.
+ */
+export function nameInSentence(name: string): string {
+  const first = name.split(' ', 1)[0] ?? '';
+  // Only a capital that opens an otherwise lower-case word ("Fridge", "Fan-assisted") is sentence case.
+  const capitalisedWord = /^\p{Lu}[^\p{Lu}\d]+$/u.test(first);
+  return capitalisedWord ? `${first.charAt(0).toLowerCase()}${name.slice(1)}` : name;
+}

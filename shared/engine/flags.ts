@@ -2,7 +2,7 @@ export { ASSUMED_GENERATOR_W } from './fixes';
 // Flags: where the budget breaks, why and how big. Their fixes are checked apart (check-fixes.ts), on request.
 import type { Appliance } from '../schemas/appliance';
 import { localIso, utcIso, whereAt, whereText } from './describe';
-import { momentText, shortfallText } from './flag-text';
+import { momentText, nameInSentence, shortfallText } from './flag-text';
 import { CONTINUOUS_SHARE } from './generator';
 import { dcCurrentA, inverterDcDrawW } from './inverter';
 import type { StepLoads } from './climate';
@@ -138,7 +138,7 @@ function overloadFlags(ctx: FlagContext): Flag[] {
     const running = loads.acRunningW[i] ?? 0;
     seen.add(p.where[i] ?? 0);
     const where = whereAt(p, i);
-    const names = runningAc(ctx, i).map((a) => a.name.toLowerCase());
+    const names = runningAc(ctx, i).map((a) => nameInSentence(a.name));
     flags.push({
       id: `inverter-overload-${i}`,
       kind: 'inverter-overload',

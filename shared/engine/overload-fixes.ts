@@ -8,6 +8,7 @@ import { applianceTrial, shoreOnlySchedule, type FixContext } from './fixes';
 import { nextInverterW, overloadedAt, runningAc } from './flags';
 import { generatorHoursText, generatorOnlySchedule } from './generator-only';
 import type { Fix, FixCheck, Flag } from './result-types';
+import { nameInSentence } from './flag-text';
 
 function generatorOnlyFix(ctx: FixContext, flag: Flag, alone: Appliance): Fix | null {
   const { p } = ctx;
@@ -33,7 +34,7 @@ function generatorOnlyFix(ctx: FixContext, flag: Flag, alone: Appliance): Fix | 
   let lowest = 100;
   for (let i = 0; i < run.p.n; i++) lowest = Math.min(lowest, run.socPct[i] ?? 100);
   const check: FixCheck = { clears: stillAt < 0, lowestSocPct: lowest };
-  const name = alone.name.toLowerCase();
+  const name = nameInSentence(alone.name);
   return {
     kind,
     text:
@@ -56,7 +57,7 @@ export function overloadFixes(ctx: FixContext, loads: StepLoads, flag: Flag): Fi
   const running = loads.acRunningW[i] ?? 0;
   const neededW = nextInverterW(Math.max(running, (running + (loads.acSurgeExtraW[i] ?? 0)) / 2));
   const together = runningAc({ p, loads }, i);
-  const names = together.map((a) => a.name.toLowerCase());
+  const names = together.map((a) => nameInSentence(a.name));
   const larger: Fix = { kind: 'larger-inverter', text: `an inverter of ${neededW} W`, params: { ratedW: neededW } };
   const alone = together.find(
     (a) => a.quantity * a.runningW > ratedW || a.quantity * (a.surgeW ?? a.runningW) > surgeW,
@@ -77,7 +78,7 @@ export function overloadFixes(ctx: FixContext, loads: StepLoads, flag: Flag): Fi
   const fixes: Fix[] = [
     {
       kind: 'larger-inverter',
-      text: `an inverter of ${single} W: the ${alone.name.toLowerCase()} alone asks ${alone.quantity * alone.runningW} W of the ${ratedW} W one`,
+      text: `an inverter of ${single} W: the ${nameInSentence(alone.name)} alone asks ${alone.quantity * alone.runningW} W of the ${ratedW} W one`,
       params: { ratedW: Math.max(single, neededW) },
     },
   ];
@@ -85,7 +86,7 @@ export function overloadFixes(ctx: FixContext, loads: StepLoads, flag: Flag): Fi
   if (shore)
     fixes.push({
       kind: 'appliance-shore-only',
-      text: `run the ${alone.name.toLowerCase()} only on hookup days`,
+      text: `run the ${nameInSentence(alone.name)} only on hookup days`,
       params: { applianceId: alone.id },
       applianceEdit: { applianceId: alone.id, schedule: shore },
     });

@@ -184,11 +184,16 @@ describe('a trip leader at 1440 px', () => {
       );
       const seenTop = () => seen.evaluate((el) => (el?.isConnected ? el.getBoundingClientRect().top : Number.NaN));
       const seenTopBefore = await seenTop();
+      const scrolledTo = () => page.locator(byTestId('budget-screen')).evaluate((el) => el.scrollTop);
+      const scrolledBefore = await scrolledTo();
       await page.click(byTestId('toast-action'));
       await expect.poll(records, { timeout: 15_000 }).toBe(afterOne);
       await expect.poll(() => page.textContent(byTestId('undo-last-fix-text'))).not.toContain('fixes can be undone');
-      // Held at 1440 px only: on a phone, a flag put back above the view still pushes the view down by its height.
-      if (width === 'desktop') expect(Math.abs((await seenTop()) - seenTopBefore)).toBeLessThan(60);
+      // Once the fixes are checked again, the tab is still scrolled where it was, at both widths (a flag put back in
+      // the list shows where the reader is looking; nothing above it moves).
+      await expect.poll(() => page.locator(byTestId('fixes-loading')).count(), { timeout: 30_000 }).toBe(0);
+      expect(Math.abs((await scrolledTo()) - scrolledBefore)).toBeLessThan(60);
+      if (!Number.isNaN(seenTopBefore)) expect(Math.abs((await seenTop()) - seenTopBefore)).toBeLessThan(60);
       await page.click(byTestId('undo-last-fix-button'));
       await expect.poll(records, { timeout: 15_000 }).toBe(asItWas);
       await page.waitForSelector(byTestId('undo-last-fix'), { state: 'detached', timeout: 15_000 });
@@ -212,6 +217,32 @@ describe('a trip leader at 1440 px', () => {
     await applyTwoThenUndoBoth('phone');
     await page.setViewportSize(VIEWPORTS.desktop);
     await screenshot(page, 'leader-budget-undone-desktop');
+    // A hookup fix books the supply usual in the stop's country unless another is picked: the pick is checked on the
+    // device before Apply, and Apply books that supply.
+    await fixesShown(shortfalls.first());
+    const supplyOpen = page.locator('[data-testid^="hookup-supply-"][data-testid$="-open"]').first();
+    const pickerId = ((await supplyOpen.getAttribute('data-testid')) ?? '').replace(/-open$/, '');
+    await supplyOpen.click();
+    const picked = page.locator(`[data-testid="${pickerId}"] [role="radio"]`).nth(1);
+    const [amps, volts] = ((await picked.getAttribute('data-testid')) ?? '').replace(`${pickerId}-`, '').split('A-');
+    await picked.click();
+    await expect
+      .poll(() => page.textContent(byTestId(`${pickerId}-check`)))
+      .toMatch(
+        new RegExp(`^With ${amps} A at ${volts?.replace('V', '')} V: (clears this flag|helps, not enough alone)`),
+      );
+    const beforeHookup = await records();
+    await page.click(byTestId(pickerId.replace(/^hookup-supply-/, 'fix-')));
+    await expect.poll(records, { timeout: 15_000 }).not.toBe(beforeHookup);
+    const booked = JSON.parse(await records()) as {
+      stops: { stop: { hookup: { amps: number; volts: number } | null } }[];
+    };
+    expect(booked.stops.map((s) => s.stop.hookup)).toContainEqual({
+      amps: Number(amps),
+      volts: Number(volts?.replace('V', '')),
+    });
+    await page.click(byTestId('toast-action'));
+    await expect.poll(records, { timeout: 15_000 }).toBe(beforeHookup);
     // Apply the first flag's first fix a few times: fixes are capped at what the rig can carry, so each one must
     // lower the energy short, and the ones that clear their flag remove it.
     let shortNow = shortBefore;

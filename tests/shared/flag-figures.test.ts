@@ -3,7 +3,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { simulateTrip } from '@/shared/engine';
-import { momentText } from '@/shared/engine/flag-text';
+import { momentText, nameInSentence } from '@/shared/engine/flag-text';
 import { hasMoment, isShortfall } from '@/shared/engine/flags';
 import type { SimulationResult } from '@/shared/engine/result-types';
 import { flagTitle } from '@/shared/flag-titles';
@@ -85,5 +85,20 @@ describe('moment text', () => {
     ['2027-04-04T23:00+10:00', 'Sun 4 Apr, 23:00'],
   ])('when the local label is %s, then it reads %s (its own wall clock)', (iso, want) => {
     expect(momentText(iso)).toBe(want);
+  });
+});
+
+describe('appliance names inside a sentence', () => {
+  it.each([
+    ['Roof air conditioner', 'roof air conditioner'],
+    ['Fridge', 'fridge'],
+    ['Fan-assisted propane heater', 'fan-assisted propane heater'],
+    ['A/C unit', 'A/C unit'],
+    ['TV', 'TV'],
+    ['LED strip lights', 'LED strip lights'],
+    ['12 V compressor fridge', '12 V compressor fridge'],
+    ['eBike charger', 'eBike charger'],
+  ])('when the name is %s, then a flag or fix writes %s', (name, want) => {
+    expect(nameInSentence(name)).toBe(want);
   });
 });

@@ -7,6 +7,6 @@ import { goldenSummary } from './golden-summary';
 
 for (const [name, input] of Object.entries(GOLDEN_CASES)) {
   const file = resolve(__dirname, 'golden', `${name}.json`);
-  writeFileSync(file, `${JSON.stringify(goldenSummary(input), null, 1)}\n`);
+  writeFileSync(file, `${JSON.stringify(goldenSummary(input), null, 2)}\n`);
   console.log(`wrote ${file}`);
 }
