@@ -8,13 +8,15 @@ import { checkHookupSupply, hookupSupplyChoices, supplyKey } from '@/shared/engi
 import type { Fix, FixCheck, Flag } from '@/shared/engine/result-types';
 import type { HookupSupply } from '@/shared/hookup-supply';
 import type { TripDetail } from '@/shared/schemas/api';
+import type { EngineInputDraft } from '@/shared/schemas/engine-input';
 import { toEngineInput } from '@/shared/trip-to-engine-input';
+import { useTripRecordQuery } from '@/stores/queries/weather';
+import { withRecord } from './what-if';
 
 // Re-checks keyed by their input, flag and supply: a re-render must not walk the battery again.
 const checks = new Map<string, FixCheck | null>();
 
-function recheck(detail: TripDetail, flag: Flag, stopIndex: number, supply: HookupSupply): FixCheck | null {
-  const input = toEngineInput(detail);
+function recheck(input: EngineInputDraft | null, flag: Flag, stopIndex: number, supply: HookupSupply): FixCheck | null {
   if (!input) return null;
   const key = `${JSON.stringify(input)}|${flag.id}|${stopIndex}|${supplyKey(supply)}`;
   if (checks.has(key)) return checks.get(key) ?? null;
@@ -31,13 +33,15 @@ function recheck(detail: TripDetail, flag: Flag, stopIndex: number, supply: Hook
 
 const supplyLabel = (s: HookupSupply): string => `${s.amps} A · ${s.volts} V`;
 
-export function checkWords(supply: HookupSupply, check: FixCheck | null): string {
+/** The picked supply's check, in the words the fix list uses for its own fixes' checks. */
+function checkWords(supply: HookupSupply, check: FixCheck | null): string {
   const what = `With ${supply.amps} A at ${supply.volts} V`;
   if (!check) return `${what}: could not be checked on this device.`;
-  const lowest = `lowest charge ${check.lowestSocPct.toFixed(0)} %`;
-  return check.clears
-    ? `${what}: clears this flag (${lowest}), checked on this device with the typical sky.`
-    : `${what}: helps, not enough alone (${lowest}), checked on this device with the typical sky.`;
+  const lowest = `${check.lowestSocPct.toFixed(0)} %`;
+  const verdict = check.clears ? 'clears this flag' : 'helps, not enough alone';
+  if (!check.years) return `${what}: ${verdict} (lowest charge ${lowest}), checked on this device.`;
+  const { held, of } = check.years;
+  return `${what}: ${verdict}: holds in ${held} of ${of} past years (lowest ${lowest} in a bad year), checked on this device.`;
 }
 
 type Props = {
@@ -52,6 +56,7 @@ type Props = {
 /** The supply a hookup fix books: the one usual in the stop's country, or another the traveller picks. */
 export function HookupSupplyChoice({ detail, flag, fix, testID, value, onChange }: Props) {
   const [open, setOpen] = useState(false);
+  const record = useTripRecordQuery(detail, true);
   const stopIndex = typeof fix.params.stopIndex === 'number' ? fix.params.stopIndex : -1;
   const stop = detail.stops[stopIndex];
   const offered =
@@ -62,6 +67,8 @@ export function HookupSupplyChoice({ detail, flag, fix, testID, value, onChange 
   const chosen = value ?? offered;
   const other = supplyKey(chosen) !== supplyKey(offered);
   const choices = hookupSupplyChoices(stop.stop.timeZone);
+  // Checked against the recorded years the fix list was checked against, when the trip has them.
+  const input = other ? withRecord(toEngineInput(detail), record.data?.weather) : null;
   return (
     <View style={styles.wrap}>
       {open ? (
@@ -88,7 +95,9 @@ export function HookupSupplyChoice({ detail, flag, fix, testID, value, onChange 
       )}
       {other ? (
         <Text variant="caption" testID={`${testID}-check`} role="status">
-          {checkWords(chosen, recheck(detail, flag, stopIndex, chosen))}
+          {record.isPending && record.fetchStatus === 'fetching'
+            ? 'Checking this supply…'
+            : checkWords(chosen, recheck(input, flag, stopIndex, chosen))}
         </Text>
       ) : null}
     </View>

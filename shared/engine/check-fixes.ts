@@ -51,8 +51,14 @@ function adviceFixes(input: EngineInput, flag: Flag): Fix[] {
   }
 }
 
-/** The checked fixes of each flag of a validated input, in the flags' order. */
-export function checkFixesParsed(input: EngineInput, options: CheckFixesOptions = {}): FlagFixes[] {
+/**
+ * The planned run of a validated input and what its fixes are checked against: the planned walk and, with a record,
+ * each recorded year under its own sky and air, as the chance of holding ran it.
+ */
+export function fixContextOf(
+  input: EngineInput,
+  holdShare = FIX_HOLD_SHARE,
+): { run: ReturnType<typeof planTrip>; ctx: FixContext } {
   const run = planTrip(input);
   const { p, solar, planned, sky, years, capacityWh, reservePct } = run;
   const base = (scenario: typeof planned, cabinSolarW: Float64Array, ambientC: Float64Array): TrialBase => ({
@@ -63,15 +69,21 @@ export function checkFixesParsed(input: EngineInput, options: CheckFixesOptions 
   const ctx: FixContext = {
     p,
     planned: base(planned, solar.cabinSolarW, sky?.ambientC ?? p.ambientC),
-    // Each recorded year under its own sky and air, as the chance of holding ran it.
     years: (years?.years ?? []).map(({ sky: yearSky, run: yearRun }) => {
       return base(yearRun.scenario, yearRun.solar.cabinSolarW, yearSky.ambientC);
     }),
-    holdShare: options.holdShare ?? FIX_HOLD_SHARE,
+    holdShare,
     capacityWh,
     reservePct,
     trials: new Map(),
   };
+  return { run, ctx };
+}
+
+/** The checked fixes of each flag of a validated input, in the flags' order. */
+export function checkFixesParsed(input: EngineInput, options: CheckFixesOptions = {}): FlagFixes[] {
+  const { run, ctx } = fixContextOf(input, options.holdShare);
+  const { planned } = run;
   const wanted = options.flagIds ? new Set(options.flagIds) : null;
   return run.flags
     .filter((flag) => !wanted || wanted.has(flag.id))

@@ -347,7 +347,7 @@ export function hookupSupplyFor(p: Prepared, stopIndex: number): { amps: number;
   return p.input.options.assumedHookup ?? (stop ? (hookupRegionOf(stop.timeZone)?.usual ?? null) : null);
 }
 
-function hookupFix(ctx: FixContext, flag: Flag, stopIndex: number): Fix | null {
+export function hookupFix(ctx: FixContext, flag: Flag, stopIndex: number): Fix | null {
   const { p } = ctx;
   const stop = p.input.trip.stops[stopIndex];
   if (!stop || stop.hookup || !p.input.rig.shoreCharger) return null;

@@ -1,14 +1,11 @@
 // A hookup fix with another supply: the supplies a traveller may pick (the stop's country's first, then the rest of
-// the table in shared/hookup-supply.ts), and the check of a picked supply against its flag, the way every fix is
-// checked: the battery walked again with the hookup on at the stop, and the flag cleared when, from its draw-down's
-// start to its window's end, the charge stays at or above the reserve and nothing runs short.
+// the table in shared/hookup-supply.ts), and the check of a picked supply against its flag by the very code that
+// checks the engine's own hookup fix.
 import { HOOKUP_REGIONS, hookupRegionOf, type HookupSupply } from '../hookup-supply';
 import { engineInputSchema, type EngineInputDraft } from '../schemas/engine-input';
-import { prepare } from './prepare';
+import { fixContextOf } from './check-fixes';
+import { hookupFix } from './fixes';
 import type { FixCheck, Flag } from './result-types';
-import { plannedScenario, reservePctOf } from './simulate';
-import { solarSeries } from './solar';
-import { newLedger, walk } from './walk';
 
 export const supplyKey = (s: HookupSupply): string => `${s.amps}A-${s.volts}V`;
 
@@ -27,26 +24,18 @@ export function hookupSupplyChoices(timeZone: string): HookupSupply[] {
   return out;
 }
 
-/** Whether a hookup of this supply at the stop clears the flag, and the lowest charge it gives inside the flag. */
+/**
+ * Whether a hookup of this supply at the stop clears the flag, and the lowest charge it gives inside the flag: the
+ * engine's own hookup fix, checked as every fix is (in each recorded year when the input carries a record), with the
+ * picked supply as the trip's chosen one. Null when the stop could not take a hookup fix at all.
+ */
 export function checkHookupSupply(
   draft: EngineInputDraft,
   flag: Flag,
   stopIndex: number,
   supply: HookupSupply,
-): FixCheck {
+): FixCheck | null {
   const input = engineInputSchema.parse(draft);
-  const p = prepare(input);
-  const base = plannedScenario(p, solarSeries(p, 0));
-  const hookupW = Float64Array.from(base.hookupW);
-  for (let i = 0; i < p.n; i++) if (p.where[i] === stopIndex) hookupW[i] = supply.amps * supply.volts;
-  const l = newLedger(p.n);
-  walk(p, { ...base, hookupW }, l);
-  const reservePct = reservePctOf(input);
-  let lowest = 100;
-  let short = 0;
-  for (let i = flag.drawdown.firstRow; i <= flag.window.lastRow; i++) {
-    lowest = Math.min(lowest, l.socPct[i] ?? 0);
-    short += l.energyShortWh[i] ?? 0;
-  }
-  return { clears: lowest >= reservePct - 1e-6 && short <= 1e-6, lowestSocPct: lowest };
+  const { ctx } = fixContextOf({ ...input, options: { ...input.options, assumedHookup: supply } });
+  return hookupFix(ctx, flag, stopIndex)?.check ?? null;
 }

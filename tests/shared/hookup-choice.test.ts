@@ -5,6 +5,7 @@ import { checkFixes, simulateTrip } from '@/shared/engine';
 import { withFixes } from '@/shared/engine/check-fixes';
 import { checkHookupSupply, hookupSupplyChoices, supplyKey } from '@/shared/engine/hookup-choice';
 import { HOOKUP_REGIONS } from '@/shared/hookup-supply';
+import { withSyntheticRecord } from '@/tests/factories/recorded-weather';
 import { fiveNightTrip } from '@/tests/fixtures/five-night-trip';
 
 describe('hookup supplies to pick from', () => {
@@ -34,17 +35,41 @@ describe('a picked supply, checked', () => {
       amps: Number(fix.params.amps),
       volts: Number(fix.params.volts),
     });
-    expect(check.clears).toBe(fix.check?.clears);
-    expect(check.lowestSocPct).toBeCloseTo(fix.check?.lowestSocPct ?? Number.NaN, 6);
+    expect(check?.clears).toBe(fix.check?.clears);
+    expect(check?.lowestSocPct).toBeCloseTo(fix.check?.lowestSocPct ?? Number.NaN, 6);
   });
   it('when a larger supply is picked, then the lowest charge is no lower than with a smaller one', () => {
     const small = checkHookupSupply(fiveNightTrip, flag, stopIndex, { amps: 15, volts: 120 });
     const large = checkHookupSupply(fiveNightTrip, flag, stopIndex, { amps: 50, volts: 120 });
-    expect(large.lowestSocPct).toBeGreaterThanOrEqual(small.lowestSocPct - 1e-9);
+    expect(large?.lowestSocPct).toBeGreaterThanOrEqual((small?.lowestSocPct ?? Number.NaN) - 1e-9);
   });
   it('when a tiny supply is picked, then it does not clear a flag the offered supply clears alone', () => {
     const tiny = checkHookupSupply(fiveNightTrip, flag, stopIndex, { amps: 0.1, volts: 120 });
-    if (fix.check?.clears) expect(tiny.clears).toBe(false);
-    expect(tiny.lowestSocPct).toBeLessThanOrEqual(fix.check?.lowestSocPct ?? 100);
+    if (fix.check?.clears) expect(tiny?.clears).toBe(false);
+    expect(tiny?.lowestSocPct).toBeLessThanOrEqual(fix.check?.lowestSocPct ?? 100);
+  });
+});
+
+describe('a picked supply on a trip with recorded years', () => {
+  const onRecord = withSyntheticRecord(fiveNightTrip, 10);
+  const found = withFixes(simulateTrip(onRecord).flags, checkFixes(onRecord))
+    .flatMap((flag) => flag.fixes.map((fix) => ({ flag, fix })))
+    .find(({ fix }) => fix.kind === 'add-hookup-night');
+  if (!found) throw new Error('the five-night trip on record offers a hookup fix');
+  const { flag, fix } = found;
+  const stopIndex = Number(fix.params.stopIndex);
+
+  it('when the offered supply is picked again, then its check counts the same recorded years as the fix list', () => {
+    const check = checkHookupSupply(onRecord, flag, stopIndex, {
+      amps: Number(fix.params.amps),
+      volts: Number(fix.params.volts),
+    });
+    expect(check?.years?.of).toBe(10);
+    expect(check).toEqual(fix.check);
+  });
+  it('when the stop already has a hookup, then there is no hookup fix to check', () => {
+    const stops = onRecord.trip.stops.map((s, i) => (i === stopIndex ? { ...s, hookup: { amps: 16, volts: 230 } } : s));
+    const booked = { ...onRecord, trip: { ...onRecord.trip, stops } };
+    expect(checkHookupSupply(booked, flag, stopIndex, { amps: 30, volts: 120 })).toBeNull();
   });
 });
