@@ -44,7 +44,7 @@ describe('calibration from check-ins', () => {
     for (const r of readings.slice(1)) expect(r.socPct).toBeLessThan(99);
     expect(residuals(truth, readings).every((v) => Math.abs(v) < 1e-9)).toBe(true);
 
-    const fit = calibrate(plan, FOREST, readings, 20);
+    const fit = calibrate(plan, FOREST, readings);
     if (!fit) throw new Error('no fit');
     expect(Math.abs(fit.after.opennessPct - TRUE_OPENNESS) / TRUE_OPENNESS).toBeLessThan(0.05);
     expect(Math.abs(fit.after.loadScale - TRUE_SCALE) / TRUE_SCALE).toBeLessThan(0.05);
