@@ -64,6 +64,10 @@ export function withCalibration(
   return { ...input, trip: { ...input.trip, stops }, appliances };
 }
 
+// The coarse grid the descent starts from (besides the plan's own values): open to closed sky, a half to 2.5 times
+// the loads.
+const SEED_OPENNESS = [10, 30, 60, 100] as const;
+const SEED_LOAD_SCALES = [0.5, 0.75, 1, 1.5, 2.5] as const;
 // Forward-difference steps: half a percent of openness, half a percent of load.
 const DIFF_STEPS: readonly [number, number] = [0.5, 0.005];
 
@@ -141,6 +145,15 @@ export function* calibrationSteps(
   if (r.length < FIT_MIN_RESIDUALS) return undefined;
   const before: CalibrationFit = { opennessPct: p[0], loadScale: p[1], rmsPct: rms(residuals(input, sorted)) };
   yield;
+  // Where the plan runs the battery flat (or fills it) the charge stops answering to either number, and a descent
+  // started there stalls against a bound. Start it from the best point of a coarse grid instead.
+  for (const opennessPct of SEED_OPENNESS)
+    for (const loadScale of SEED_LOAD_SCALES) {
+      const q: [number, number] = [opennessPct, loadScale];
+      const rq = at(q);
+      if (rms(rq) < rms(r)) [p, r] = [q, rq];
+      yield;
+    }
   let lambda = 1e-2;
   for (let step = 0; step < MAX_STEPS; step++) {
     // Jacobian columns by forward differences.
