@@ -1,6 +1,6 @@
 import { useEffect, useRef, useState } from 'react';
 import { StyleSheet, View } from 'react-native';
-import { useApplyEdit } from '@/components/trip/use-apply-edit';
+import { failureMessage, useApplyEdit } from '@/components/trip/use-apply-edit';
 import { colors, radii, space } from '@/components/theme/tokens';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
@@ -10,7 +10,6 @@ import type { Calibration } from '@/shared/engine/calibrate';
 import type { TripDetail } from '@/shared/schemas/api';
 import type { CheckInRecord } from '@/shared/schemas/check-in';
 import { can } from '@/shared/schemas/roles';
-import { ApiError } from '@/stores/queries/api-client';
 import { useApplyCalibrationMutation } from '@/stores/queries/calibration';
 import { showToast } from '@/stores/toast-store';
 import {
@@ -21,6 +20,7 @@ import {
   undoCalibration,
   type CalibrationSide,
 } from './calibration-offer';
+import { UnsavedWhatIf } from './unsaved-what-if';
 
 /** Closed, fitting, or showing a fit; each open state names the offer it was made for, so a stale one reads closed. */
 type Step =
@@ -72,14 +72,7 @@ export function CalibrateCard({ detail, checkIns }: { detail: TripDetail; checkI
       if (undo) offerUndo(undo, `calibrated ${offer.stopName} from check-ins`);
       setStep({ kind: 'closed' });
     } catch (error) {
-      showToast(
-        error instanceof ApiError && error.status === 409
-          ? 'Someone else changed this trip since you opened it. The screen now shows their version; check it and try again.'
-          : error instanceof ApiError
-            ? error.message
-            : 'That calibration could not be saved.',
-        { tone: 'danger' },
-      );
+      showToast(failureMessage(error, 'calibration'), { tone: 'danger' });
     }
   };
 
@@ -109,7 +102,18 @@ export function CalibrateCard({ detail, checkIns }: { detail: TripDetail; checkI
         </View>
       ) : null}
       {current.kind === 'fitted' ? (
-        <View style={styles.panel} testID="calibrate-result" aria-live="polite">
+        <UnsavedWhatIf
+          testID="calibrate-result"
+          save={{
+            testID: 'calibrate-accept',
+            label: 'Accept',
+            busy: save.isPending,
+            disabled: !canAccept || !current.fit,
+            onPress: () => current.fit && void accept(current.fit),
+          }}
+          discard={{ testID: 'calibrate-discard', onPress: discard }}
+          refusal={canAccept ? null : "Only the trip owner or a planner can change a stop's sky."}
+        >
           {view ? (
             <>
               {ROWS.map(({ field, label }) => (
@@ -131,22 +135,7 @@ export function CalibrateCard({ detail, checkIns }: { detail: TripDetail; checkI
           ) : (
             <Text color="emberInk">These check-ins are too few to fit the sky and the loads.</Text>
           )}
-          <View style={styles.buttons}>
-            <Button
-              testID="calibrate-accept"
-              label="Accept"
-              busy={save.isPending}
-              disabled={!canAccept || !current.fit}
-              onPress={() => current.fit && void accept(current.fit)}
-            />
-            <Button testID="calibrate-discard" label="Discard" tone="secondary" onPress={discard} />
-          </View>
-          {!canAccept ? (
-            <Text variant="caption" color="inkSoft">
-              Only the trip owner or a planner can change a stop&apos;s sky.
-            </Text>
-          ) : null}
-        </View>
+        </UnsavedWhatIf>
       ) : null}
     </Card>
   );
@@ -155,5 +144,4 @@ export function CalibrateCard({ detail, checkIns }: { detail: TripDetail; checkI
 const styles = StyleSheet.create({
   panel: { padding: space.md, borderRadius: radii.md, backgroundColor: colors.infoSoft, gap: space.md },
   row: { gap: space.xs },
-  buttons: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
 });

@@ -10,7 +10,8 @@ import { invalidateTrip, useUndoFixMutation } from '@/stores/queries/trips';
 import { dismissToast, showToast } from '@/stores/toast-store';
 import { dropUndo, latestUndo, pushUndo, useUndoStack } from '@/stores/undo-store';
 
-function failureMessage(error: unknown, what: string): string {
+/** What a refused save says in its toast: a 409 explains that the screen now shows the other version. */
+export function failureMessage(error: unknown, what: string): string {
   if (error instanceof ApiError && error.status === 409)
     return 'Someone else changed this trip since you opened it. The screen now shows their version; check it and try again.';
   return error instanceof ApiError ? error.message : `That ${what} could not be saved.`;

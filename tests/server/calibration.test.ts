@@ -100,6 +100,10 @@ describe('accepting a calibration', () => {
         restore: { version: a.version, runningW: a.appliance.runningW, standbyW: a.appliance.standbyW },
       })),
     };
+    // Crew may not put a stop's sky back either: 403, nothing moves.
+    const byCrew = await crew.agent.post(`/api/trips/${before.trip.id}/undo-fix`).send(undo);
+    expect(byCrew.status).toBe(403);
+    expect(touched(await getDetail(owner.agent, before.trip.id))).toEqual(touched(after));
     const response = await owner.agent.post(`/api/trips/${before.trip.id}/undo-fix`).send(undo);
     expect(response.status, response.text).toBe(200);
     expect(touched(await getDetail(owner.agent, before.trip.id))).toEqual(touched(before));
