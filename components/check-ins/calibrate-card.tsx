@@ -19,12 +19,15 @@ import {
   fitInSlices,
   undoCalibration,
   type CalibrationSide,
+  type CalibrationView,
 } from './calibration-offer';
 import { UnsavedWhatIf } from './unsaved-what-if';
 
 /** Closed, fitting, or showing a fit; each open state names the offer it was made for, so a stale one reads closed. */
 type Step =
-  { kind: 'closed' } | { kind: 'fitting'; key: string } | { kind: 'fitted'; key: string; fit: Calibration | undefined };
+  | { kind: 'closed' }
+  | { kind: 'fitting'; key: string }
+  | { kind: 'fitted'; key: string; fit: Calibration | undefined; view: CalibrationView | null };
 
 const ROWS: { field: keyof CalibrationSide; label: string }[] = [
   { field: 'openness', label: 'Sky openness' },
@@ -55,7 +58,14 @@ export function CalibrateCard({ detail, checkIns }: { detail: TripDetail; checkI
     running.current = controller;
     setStep({ kind: 'fitting', key: offer.key });
     fitInSlices(offer, controller.signal).then(
-      (fit) => setStep({ kind: 'fitted', key: offer.key, fit }),
+      // The before/after walks the plan twice more: once, here, not on every render.
+      (fit) =>
+        setStep({
+          kind: 'fitted',
+          key: offer.key,
+          fit,
+          view: fit ? calibrationView(fit, offer.input, checkIns) : null,
+        }),
       () => undefined, // stopped by Discard or by leaving the screen
     );
   };
@@ -76,7 +86,7 @@ export function CalibrateCard({ detail, checkIns }: { detail: TripDetail; checkI
     }
   };
 
-  const view = current.kind === 'fitted' && current.fit ? calibrationView(current.fit, offer.input, checkIns) : null;
+  const view = current.kind === 'fitted' ? current.view : null;
   return (
     <Card testID="calibrate-card">
       <Text variant="title" role="heading" aria-level={2}>
