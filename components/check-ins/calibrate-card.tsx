@@ -153,5 +153,6 @@ export function CalibrateCard({ detail, checkIns }: { detail: TripDetail; checkI
 
 const styles = StyleSheet.create({
   panel: { padding: space.md, borderRadius: radii.md, backgroundColor: colors.infoSoft, gap: space.md },
-  row: { gap: space.xs },
+  // Space between the four figures, so each now/calibrated pair reads as one.
+  row: { gap: space.xs, paddingBottom: space.sm },
 });
