@@ -13,10 +13,15 @@ export function weekdayTime(iso: string): string {
 
 const pct = (v: number) => `${Math.round(v)} %`;
 
+/** "lowest ahead 33 % on Thu 07:00": the figure the headline, the stay what-if and a calibration all quote. */
+export function lowestAheadText(re: Reforecast): string {
+  const h = re.result.headline;
+  return `lowest ahead ${pct(h.lowestSocPct)} on ${weekdayTime(h.lowestAtLocal)}`;
+}
+
 /** "From your check-in Tue 18:00 at 68 %: lowest ahead 33 % on Thu 07:00". */
 export function reforecastHeadline(re: Reforecast): string {
-  const h = re.result.headline;
-  return `From your check-in ${weekdayTime(re.fromLocal)} at ${pct(re.from.socPct)}: lowest ahead ${pct(h.lowestSocPct)} on ${weekdayTime(h.lowestAtLocal)}`;
+  return `From your check-in ${weekdayTime(re.fromLocal)} at ${pct(re.from.socPct)}: ${lowestAheadText(re)}`;
 }
 
 export type ChartPoint = { x: number; soc: number };

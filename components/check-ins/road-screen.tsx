@@ -11,6 +11,7 @@ import { useSession } from '@/stores/auth-client';
 import { useBudgetQuery } from '@/stores/queries/budget';
 import { useCheckInsQuery, type CheckInSave } from '@/stores/queries/check-ins';
 import { queuedSaveKeys, useKeptSaves } from '@/stores/queries/offline-queue';
+import { CalibrateCard } from './calibrate-card';
 import { CheckInForm } from './check-in-form';
 import { CheckInList } from './check-in-list';
 import { withKeptCheckIns } from './kept-check-ins';
@@ -39,6 +40,7 @@ export function RoadScreen({ detail }: { detail: TripDetail }) {
         main={
           <View style={styles.column}>
             {plan ? <ReforecastCard plan={plan} state={reforecastFor(detail, shown)} checkIns={shown} /> : null}
+            <CalibrateCard detail={detail} checkIns={shown} />
             {canAdd ? <CheckInForm key={tripId} tripId={tripId} tanks={tanks} /> : null}
             <StayControl detail={detail} checkIns={shown} />
           </View>

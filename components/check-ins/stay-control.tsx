@@ -1,7 +1,8 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { localMoment } from '@/components/format/time';
-import { colors, radii, space } from '@/components/theme/tokens';
+import { failureMessage } from '@/components/trip/use-apply-edit';
+import { space } from '@/components/theme/tokens';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { ChoiceChips } from '@/components/ui/choice-chips';
@@ -10,10 +11,10 @@ import type { TripDetail } from '@/shared/schemas/api';
 import type { CheckInRecord } from '@/shared/schemas/check-in';
 import { can } from '@/shared/schemas/roles';
 import { MOST_NIGHTS_CHANGED, type StayMode } from '@/shared/schemas/stay';
-import { ApiError } from '@/stores/queries/api-client';
 import { useStayChangeMutation } from '@/stores/queries/stay';
 import { showToast } from '@/stores/toast-store';
 import { currentStopIndex, stayOutcome } from './stay-what-if';
+import { UnsavedWhatIf } from './unsaved-what-if';
 
 const MODES: { value: StayMode; label: string }[] = [
   { value: 'shift-rest', label: 'Move the rest of the trip' },
@@ -41,14 +42,7 @@ export function StayControl({ detail, checkIns }: { detail: TripDetail; checkIns
       showToast(`Saved: ${nightsText(nights)} at ${stop.stop.name}`);
       setNights(0);
     } catch (error) {
-      showToast(
-        error instanceof ApiError && error.status === 409
-          ? 'Someone else changed this trip since you opened it. The screen now shows their version; check it and try again.'
-          : error instanceof ApiError
-            ? error.message
-            : 'That change could not be saved.',
-        { tone: 'danger' },
-      );
+      showToast(failureMessage(error, 'change'), { tone: 'danger' });
     }
   };
 
@@ -88,7 +82,18 @@ export function StayControl({ detail, checkIns }: { detail: TripDetail; checkIns
           : 'The next stop gets fewer nights (or more): the rest of the trip keeps its dates.'}
       </Text>
       {changed ? (
-        <View style={styles.whatIf} testID="stay-what-if" aria-live="polite">
+        <UnsavedWhatIf
+          testID="stay-what-if"
+          save={{
+            testID: 'stay-keep',
+            label: 'Keep',
+            busy: save.isPending,
+            disabled: !canKeep || !changed.ok,
+            onPress: () => void keep(),
+          }}
+          discard={{ testID: 'stay-discard', onPress: () => setNights(0) }}
+          refusal={canKeep ? null : 'Only the trip owner or a planner can move stops.'}
+        >
           {changed.ok && planned.ok ? (
             <Text variant="label">
               What-if: lowest {changed.fromCheckIn ? 'ahead ' : ''}
@@ -102,22 +107,7 @@ export function StayControl({ detail, checkIns }: { detail: TripDetail; checkIns
           <Text variant="caption" color="inkSoft">
             Not saved yet. Keep it to move the stops, or discard it.
           </Text>
-          <View style={styles.row}>
-            <Button
-              testID="stay-keep"
-              label="Keep"
-              busy={save.isPending}
-              disabled={!canKeep || !changed.ok}
-              onPress={() => void keep()}
-            />
-            <Button testID="stay-discard" label="Discard" tone="secondary" onPress={() => setNights(0)} />
-          </View>
-          {!canKeep ? (
-            <Text variant="caption" color="inkSoft">
-              Only the trip owner or a planner can move stops.
-            </Text>
-          ) : null}
-        </View>
+        </UnsavedWhatIf>
       ) : null}
     </Card>
   );
@@ -126,6 +116,4 @@ export function StayControl({ detail, checkIns }: { detail: TripDetail; checkIns
 const styles = StyleSheet.create({
   stepper: { flexDirection: 'row', alignItems: 'center', gap: space.md },
   nights: { flexShrink: 1, textAlign: 'center', minWidth: 120 },
-  whatIf: { padding: space.md, borderRadius: radii.md, backgroundColor: colors.infoSoft, gap: space.sm },
-  row: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
 });

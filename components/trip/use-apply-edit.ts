@@ -10,7 +10,8 @@ import { invalidateTrip, useUndoFixMutation } from '@/stores/queries/trips';
 import { dismissToast, showToast } from '@/stores/toast-store';
 import { dropUndo, latestUndo, pushUndo, useUndoStack } from '@/stores/undo-store';
 
-function failureMessage(error: unknown, what: string): string {
+/** What a refused save says in its toast: a 409 explains that the screen now shows the other version. */
+export function failureMessage(error: unknown, what: string): string {
   if (error instanceof ApiError && error.status === 409)
     return 'Someone else changed this trip since you opened it. The screen now shows their version; check it and try again.';
   return error instanceof ApiError ? error.message : `That ${what} could not be saved.`;
@@ -39,7 +40,7 @@ export function undoFor(edit: FixEdit, detail: TripDetail, newVersion: number): 
 }
 
 /**
- * Sends a one-click edit (a flag's fix, a kept what-if) and reports the outcome in a toast. A single edit (a fix)
+ * Sends a one-click edit (a flag's fix, a kept what-if; an accepted calibration through `offerUndo`) and reports the outcome in a toast. A single edit (a fix)
  * goes on the visit's undo stack: the toast's Undo, and "Undo last fix", put back the latest one, its record as it
  * was, version included, so several fixes come off in reverse order.
  */
@@ -96,6 +97,13 @@ export function useApplyEdit(detail: TripDetail) {
     }
   };
 
+  /** A saved change goes on the undo stack, and its toast offers Undo (one Undo on screen at a time). */
+  const offerUndo = (request: UndoFixRequest, summary: string): void => {
+    pushUndo(tripId, request, summary);
+    if (undoToast !== null) dismissToast(undoToast);
+    undoToast = showToast(`Saved: ${summary}`, { action: { label: 'Undo', run: () => void undoLast() } });
+  };
+
   const apply = async (key: string, edits: FixEdit[], rigVersion: number): Promise<boolean> => {
     setBusy(key);
     try {
@@ -103,13 +111,8 @@ export function useApplyEdit(detail: TripDetail) {
       for (const edit of edits) versions.push(await save(edit, rigVersion));
       const summary = edits.map((e) => e.summary).join(', ');
       const only = edits.length === 1 ? edits[0] : undefined;
-      if (only) pushUndo(tripId, undoFor(only, detail, versions[0] ?? 0), summary);
-      if (only && undoToast !== null) dismissToast(undoToast);
-      const toast = showToast(
-        `Saved: ${summary}`,
-        only ? { action: { label: 'Undo', run: () => void undoLast() } } : {},
-      );
-      if (only) undoToast = toast;
+      if (only) offerUndo(undoFor(only, detail, versions[0] ?? 0), summary);
+      else showToast(`Saved: ${summary}`);
       return true;
     } catch (error) {
       showToast(failureMessage(error, 'change'), { tone: 'danger' });
@@ -120,5 +123,5 @@ export function useApplyEdit(detail: TripDetail) {
   };
   /** The fix "Undo last fix" would take back, while this visit has one. */
   const lastFix = stack.at(-1);
-  return { apply, busy, undoLast, lastFix, undoCount: stack.length };
+  return { apply, offerUndo, busy, undoLast, lastFix, undoCount: stack.length };
 }

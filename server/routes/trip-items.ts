@@ -9,6 +9,7 @@ import type { ReadyBody } from '../budget/ready-body';
 import { HttpError, notFound } from '../errors';
 import { tripAccess } from '../middleware/trip-access';
 import { appliancesRouter } from './appliances';
+import { calibrationRouter } from './calibration';
 import { checkInsRouter } from './check-ins';
 import { drivesRouter } from './drives';
 import { membersRouter } from './members';
@@ -110,6 +111,7 @@ export function tripItemsRouter(deps: TripItemsDeps): Router {
   router.use('/shares', tripSharesRouter(deps));
   router.use(tripExportsRouter(deps));
   router.use(tripUndoRouter(deps));
+  router.use(calibrationRouter(deps));
 
   router.get('/budget', async (req, res) => {
     const answer = await budgetAnswer(() => deps.budgets.forTrip(tripAccess(res).tripId), res);

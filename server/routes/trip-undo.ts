@@ -1,21 +1,56 @@
-// POST /api/trips/:tripId/undo-fix: puts back the one record an applied fix changed, as it was (content and
-// version), if nobody changed it since. The same rules as an edit of that record apply, and the same rights.
+// POST /api/trips/:tripId/undo-fix: puts back the one record an applied fix changed (or the records an accepted
+// calibration changed), as it was (content and version), if nobody changed it since. The same rules as an edit of that record apply, and the same rights.
 import { Router } from 'express';
+import type { z } from 'zod';
 import type { Db } from '@/db/client';
 import { updateAppliance } from '@/db/queries/appliances';
 import { rigRecord, stopRecord } from '@/db/queries/mappers';
 import { updateRigRow } from '@/db/queries/rigs';
 import { findStopRow, updateStop } from '@/db/queries/stops';
-import { findTrip, findTripRig, logActivity, touchTrip } from '@/db/queries/trips';
+import { writeCalibration } from '@/db/queries/calibration';
+import { findTrip, findTripRig, loadTripDetail, logActivity, touchTrip } from '@/db/queries/trips';
 import { setRecordVersion } from '@/db/queries/undo';
-import { undoFixRequestSchema } from '@/shared/schemas/api';
-import { can } from '@/shared/schemas/roles';
+import { undoFixRequestSchema, type TripDetail } from '@/shared/schemas/api';
+import { can, type Role } from '@/shared/schemas/roles';
 import { checkGeneratorInTrip } from '@/shared/trip-rules';
-import { HttpError, notFound, unprocessable } from '../errors';
+import { conflict, HttpError, notFound, unprocessable } from '../errors';
 import { tripAccess } from '../middleware/trip-access';
 import { assertScheduleInTrip } from './appliances';
 import { assertFits } from './stops';
 import { unwrapWrite } from './write-result';
+
+type UndoCalibration = Extract<z.infer<typeof undoFixRequestSchema>, { kind: 'calibration' }>;
+
+/** Puts back a calibration: the stop's exposure and every appliance's draws, versions included, all or none. */
+function undoCalibration(
+  db: Db,
+  who: { tripId: string; userId: string; role: Role; now: Date },
+  body: UndoCalibration,
+): TripDetail | undefined {
+  const { tripId, userId, role, now } = who;
+  const records = [body.stop, ...body.appliances];
+  if (records.some((r) => r.restore.version >= r.version))
+    throw unprocessable('restore.version', 'An undo can only go back to an earlier version.');
+  db.transaction((tx) => {
+    const written = writeCalibration(tx, tripId, {
+      stop: { id: body.stop.stopId, version: body.stop.version, exposure: body.stop.restore.exposure },
+      appliances: body.appliances.map((a) => ({
+        id: a.applianceId,
+        version: a.version,
+        runningW: a.restore.runningW,
+        standbyW: a.restore.standbyW,
+      })),
+    });
+    if (written === 'missing') throw notFound('Something this calibration changed has since been removed.');
+    if (written === 'stale') throw conflict(loadTripDetail(tx, tripId, role));
+    setRecordVersion(tx, 'stop', body.stop.stopId, body.stop.restore.version);
+    for (const a of body.appliances) setRecordVersion(tx, 'appliance', a.applianceId, a.restore.version);
+    touchTrip(tx, tripId, now);
+    const name = findStopRow(tx, tripId, body.stop.stopId)?.name ?? 'a stop';
+    logActivity(tx, { tripId, userId, summary: `undid the calibration of ${name}`, at: now });
+  });
+  return loadTripDetail(db, tripId, role);
+}
 
 export function tripUndoRouter({ db, now }: { db: Db; now: () => Date }): Router {
   const router = Router({ mergeParams: true });
@@ -25,6 +60,10 @@ export function tripUndoRouter({ db, now }: { db: Db; now: () => Date }): Router
     const body = undoFixRequestSchema.parse(req.body);
     if (!can(role, body.kind === 'appliance' ? 'editLoads' : 'editTrip'))
       throw new HttpError(403, 'forbidden', 'Your role on this trip cannot change that.');
+    if (body.kind === 'calibration') {
+      res.json(undoCalibration(db, { tripId, userId, role, now: now() }, body));
+      return;
+    }
     if (body.restore.version >= body.version)
       throw unprocessable('restore.version', 'An undo can only go back to an earlier version.');
     const record = db.transaction((tx) => {

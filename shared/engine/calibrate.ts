@@ -3,10 +3,13 @@
 // charge the walk predicts at each later reading, started from the first reading, against the charge read, and the
 // day's harvest the walk predicts against the charge controller's history (in % of the bank, so both weigh alike).
 // The fit only proposes: callers show it as a before/after and apply it when the traveller accepts.
+import { LOAD_SCALE_RANGE } from '../schemas/api';
+import type { Appliance } from '../schemas/appliance';
 import type { EngineInput } from '../schemas/engine-input';
 import type { SiteExposure } from '../schemas/trip';
 import type { Reading } from './reforecast';
 import { capacityWhOf, simulateParsed } from './simulate';
+import { SITE_PRESETS, skyViewFromHorizon } from './site-exposure';
 
 export type CalibrationReading = Reading & { harvestWh: number | null };
 
@@ -20,9 +23,32 @@ export type Calibration = {
 };
 
 const OPENNESS_RANGE = [0, 100] as const;
-const LOAD_SCALE_RANGE = [0.2, 5] as const;
 const MAX_STEPS = 40;
 const DAY_MS = 86_400_000;
+/** Two numbers are fitted, so at least two residuals are needed (fewer leave the fit undetermined). */
+export const FIT_MIN_RESIDUALS = 2;
+/** A canopy of unknown density is taken as a mid-range stand's (the partial-shade preset's index). */
+const UNKNOWN_LEAF_AREA_INDEX = SITE_PRESETS['partial-shade'].leafAreaIndex;
+
+/** A stop's exposure with the fitted openness: a canopy keeping the leaf-area index the exposure stood for. */
+export function calibratedExposure(exposure: SiteExposure, opennessPct: number): SiteExposure {
+  const leafAreaIndex =
+    exposure.kind === 'canopy'
+      ? exposure.leafAreaIndex
+      : exposure.kind === 'preset'
+        ? SITE_PRESETS[exposure.preset].leafAreaIndex
+        : UNKNOWN_LEAF_AREA_INDEX;
+  const deciduous = exposure.kind === 'canopy' ? exposure.deciduous : false;
+  return { kind: 'canopy', skyOpennessPct: opennessPct, leafAreaIndex, deciduous };
+}
+
+/** An appliance's draws with the fitted load scale (running and standby alike). */
+export function scaledDraws(
+  appliance: Pick<Appliance, 'runningW' | 'standbyW'>,
+  loadScale: number,
+): { runningW: number; standbyW: number } {
+  return { runningW: appliance.runningW * loadScale, standbyW: appliance.standbyW * loadScale };
+}
 
 /** The plan with one stop's sky openness and every appliance's draw scaled: the two things a fit may change. */
 export function withCalibration(
@@ -31,20 +57,19 @@ export function withCalibration(
   opennessPct: number,
   loadScale: number,
 ): EngineInput {
-  const stops = input.trip.stops.map((stop, i) => {
-    if (i !== stopIndex) return stop;
-    const leafAreaIndex = stop.exposure.kind === 'canopy' ? stop.exposure.leafAreaIndex : 3;
-    const deciduous = stop.exposure.kind === 'canopy' ? stop.exposure.deciduous : false;
-    const exposure: SiteExposure = { kind: 'canopy', skyOpennessPct: opennessPct, leafAreaIndex, deciduous };
-    return { ...stop, exposure };
-  });
-  const appliances = input.appliances.map((a) => ({
-    ...a,
-    runningW: a.runningW * loadScale,
-    standbyW: a.standbyW * loadScale,
-  }));
+  const stops = input.trip.stops.map((stop, i) =>
+    i === stopIndex ? { ...stop, exposure: calibratedExposure(stop.exposure, opennessPct) } : stop,
+  );
+  const appliances = input.appliances.map((a) => ({ ...a, ...scaledDraws(a, loadScale) }));
   return { ...input, trip: { ...input.trip, stops }, appliances };
 }
+
+// The coarse grid the descent starts from (besides the plan's own values): open to closed sky, a half to 2.5 times
+// the loads.
+const SEED_OPENNESS = [10, 30, 60, 100] as const;
+const SEED_LOAD_SCALES = [0.5, 0.75, 1, 1.5, 2.5] as const;
+// Forward-difference steps: half a percent of openness, half a percent of load.
+const DIFF_STEPS: readonly [number, number] = [0.5, 0.005];
 
 /** Residuals of a plan against the readings (all in % of the bank), walked from the first reading. */
 export function residuals(input: EngineInput, readings: readonly CalibrationReading[]): number[] {
@@ -79,42 +104,66 @@ export function residuals(input: EngineInput, readings: readonly CalibrationRead
   return out;
 }
 
-const rms = (r: readonly number[]) => (r.length > 0 ? Math.sqrt(r.reduce((s, v) => s + v * v, 0) / r.length) : 0);
+export const rms = (r: readonly number[]) =>
+  r.length > 0 ? Math.sqrt(r.reduce((s, v) => s + v * v, 0) / r.length) : 0;
 const clamp = (v: number, [lo, hi]: readonly [number, number]) => Math.min(hi, Math.max(lo, v));
 
-/** The openness a stop's exposure stands for now (a preset or a custom horizon counts as its sky view). */
-function currentOpenness(input: EngineInput, stopIndex: number, fallback: number): number {
-  const exposure = input.trip.stops[stopIndex]?.exposure;
-  if (exposure?.kind === 'canopy') return exposure.skyOpennessPct;
-  if (exposure?.kind === 'custom' && exposure.skyViewFraction !== undefined) return exposure.skyViewFraction * 100;
-  return fallback;
+/** The openness a stop's exposure stands for now: a preset's named point, a horizon's sky view. */
+export function opennessOf(exposure: SiteExposure): number {
+  if (exposure.kind === 'canopy') return exposure.skyOpennessPct;
+  if (exposure.kind === 'preset') return SITE_PRESETS[exposure.preset].skyOpennessPct;
+  return (exposure.skyViewFraction ?? skyViewFromHorizon(exposure.horizonDeg)) * 100;
 }
 
-/**
- * Fit the stop's openness and the load scale to the readings. `startOpennessPct` seeds the fit for a stop whose
- * exposure is a preset or a horizon. Undefined when there are too few readings to fit two numbers.
- */
+/** Fit the stop's openness and the load scale to the readings. Undefined when there are too few readings. */
 export function calibrate(
   input: EngineInput,
   stopIndex: number,
   readings: readonly CalibrationReading[],
-  startOpennessPct = 50,
 ): Calibration | undefined {
+  const steps = calibrationSteps(input, stopIndex, readings);
+  let next = steps.next();
+  while (!next.done) next = steps.next();
+  return next.value;
+}
+
+/**
+ * The fit as a generator that pauses after each walk of the plan, so a screen can run it in slices between frames
+ * (a fit walks the plan some tens to hundreds of times) and stay responsive; `calibrate` runs it straight through.
+ */
+export function* calibrationSteps(
+  input: EngineInput,
+  stopIndex: number,
+  readings: readonly CalibrationReading[],
+): Generator<void, Calibration | undefined> {
+  const stop = input.trip.stops[stopIndex];
+  if (!stop) return undefined;
   const sorted = [...readings].sort((a, b) => Date.parse(a.at) - Date.parse(b.at));
   const at = (p: readonly [number, number]) => residuals(withCalibration(input, stopIndex, p[0], p[1]), sorted);
-  let p: [number, number] = [currentOpenness(input, stopIndex, startOpennessPct), 1];
+  let p: [number, number] = [opennessOf(stop.exposure), 1];
   let r = at(p);
-  if (r.length < 2) return undefined;
+  if (r.length < FIT_MIN_RESIDUALS) return undefined;
   const before: CalibrationFit = { opennessPct: p[0], loadScale: p[1], rmsPct: rms(residuals(input, sorted)) };
+  yield;
+  // Where the plan runs the battery flat (or fills it) the charge stops answering to either number, and a descent
+  // started there stalls against a bound. Start it from the best point of a coarse grid instead.
+  for (const opennessPct of SEED_OPENNESS)
+    for (const loadScale of SEED_LOAD_SCALES) {
+      const q: [number, number] = [opennessPct, loadScale];
+      const rq = at(q);
+      if (rms(rq) < rms(r)) [p, r] = [q, rq];
+      yield;
+    }
   let lambda = 1e-2;
-  const steps: readonly [number, number] = [0.5, 0.005];
   for (let step = 0; step < MAX_STEPS; step++) {
     // Jacobian columns by forward differences.
-    const cols = steps.map((h, k) => {
+    const cols: number[][] = [];
+    for (const [k, h] of DIFF_STEPS.entries()) {
       const q: [number, number] = [...p];
       q[k] = (q[k] ?? 0) + h;
-      return at(q).map((v, i) => (v - (r[i] ?? 0)) / h);
-    });
+      cols.push(at(q).map((v, i) => (v - (r[i] ?? 0)) / h));
+      yield;
+    }
     const [a, b] = cols;
     if (!a || !b) break;
     let jaa = 0;
@@ -142,6 +191,7 @@ export function calibrate(
       const db = -(m11 * gb - jab * ga) / det;
       const q: [number, number] = [clamp(p[0] + da, OPENNESS_RANGE), clamp(p[1] + db, LOAD_SCALE_RANGE)];
       const rq = at(q);
+      yield;
       if (rms(rq) < rms(r)) {
         const moved = Math.abs(q[0] - p[0]) + Math.abs(q[1] - p[1]) * 100;
         p = q;

@@ -2,12 +2,12 @@
 // the server-owned fields (id, version); requests reuse the same schemas so forms, API and engine agree.
 import { z } from 'zod';
 import { nameText } from './text';
-import { applianceFieldsSchema, applianceSchema, scheduleSchema } from './appliance';
+import { applianceFieldsSchema, applianceSchema, runningWSchema, scheduleSchema, standbyWSchema } from './appliance';
 import { rigSchema } from './rig';
 import { roleSchema } from './roles';
-import { driveSchema, stopSchema } from './trip';
+import { driveSchema, siteExposureSchema, stopSchema } from './trip';
 import { isoDateSchema, tripSummarySchema } from './trip-summary';
-import { timeZoneSchema } from './common';
+import { percentSchema, timeZoneSchema } from './common';
 import { basedOnSchema } from './sharing';
 import { fieldRule, LIMITS, tripDayCount } from './limits';
 
@@ -139,6 +139,59 @@ export const updateScheduleRequestSchema = z.object({ version: versionSchema, sc
 export const updateMemberRoleRequestSchema = z.object({ role: roleSchema }).strict();
 
 /**
+ * The load scale a calibration may fit: a fifth to five times the planned draws. Past either end the readings say
+ * more about a wrong reading or a missing appliance than about how hard the loads run.
+ */
+export const LOAD_SCALE_RANGE = [0.2, 5] as const;
+
+/**
+ * Use what we saw: one stop's sky openness and a scale on every appliance's draws, fitted to the check-ins, saved
+ * together. Every appliance of the trip is named with the version it was fitted on, so a load added, removed or
+ * changed since makes the whole calibration stale (409) rather than scaling a list nobody saw.
+ */
+export const applyCalibrationRequestSchema = z
+  .object({
+    stopId: idSchema,
+    stopVersion: versionSchema,
+    skyOpennessPct: percentSchema,
+    loadScale: z.number().min(LOAD_SCALE_RANGE[0]).max(LOAD_SCALE_RANGE[1]),
+    appliances: z
+      .array(z.object({ id: idSchema, version: versionSchema }).strict())
+      .max(LIMITS.appliancesPerTrip)
+      .refine((list) => new Set(list.map((a) => a.id)).size === list.length, {
+        message: 'Name each appliance once.',
+        params: fieldRule(),
+      }),
+  })
+  .strict();
+export type ApplyCalibrationRequest = z.infer<typeof applyCalibrationRequestSchema>;
+
+/** Undo of an accepted calibration: the stop's exposure and each appliance's draws as they were, with versions. */
+const undoCalibrationSchema = z
+  .object({
+    kind: z.literal('calibration'),
+    stop: z
+      .object({
+        stopId: idSchema,
+        version: versionSchema,
+        restore: z.object({ version: versionSchema, exposure: siteExposureSchema }).strict(),
+      })
+      .strict(),
+    appliances: z
+      .array(
+        z
+          .object({
+            applianceId: idSchema,
+            version: versionSchema,
+            restore: z.object({ version: versionSchema, runningW: runningWSchema, standbyW: standbyWSchema }).strict(),
+          })
+          .strict(),
+      )
+      .max(LIMITS.appliancesPerTrip),
+  })
+  .strict();
+
+/**
  * Undo of an applied fix: the record as it was before (its content and its version), sent with the version it has
  * now. The server writes it back only if nothing changed it since (else 409), and only backwards in versions.
  */
@@ -166,5 +219,6 @@ export const undoFixRequestSchema = z.discriminatedUnion('kind', [
       restore: z.object({ version: versionSchema, schedule: scheduleSchema }).strict(),
     })
     .strict(),
+  undoCalibrationSchema,
 ]);
 export type UndoFixRequest = z.input<typeof undoFixRequestSchema>;

@@ -27,13 +27,17 @@ export const scheduleSchema = z.discriminatedUnion('kind', [
 ]);
 export type Schedule = z.infer<typeof scheduleSchema>;
 
+/** Watts drawn while running, and while idle (a calibration scales both, within these same bounds). */
+export const runningWSchema = z.number().min(0).max(10_000);
+export const standbyWSchema = z.number().min(0).max(500);
+
 const applianceShape = {
   name: nameText(80, { empty: 'Give the appliance a name.' }),
   /** ac: through the inverter or hookup; dc: straight off the battery; fuel: burns propane, runningW is its fan/controls on DC. */
   circuit: circuitSchema,
   quantity: z.number().int().min(1).max(50).default(1),
-  runningW: z.number().min(0).max(10_000),
-  standbyW: z.number().min(0).max(500).default(0),
+  runningW: runningWSchema,
+  standbyW: standbyWSchema.default(0),
   /** Share of the scheduled time the appliance actually draws running watts (a fridge compressor cycles). */
   dutyCycle: fractionSchema.default(1),
   surgeW: z.number().min(0).max(30_000).optional(),

@@ -1,5 +1,6 @@
 // Checking in on the road, at phone width and at laptop width: the reading is saved, listed with who took it, and the
-// forecast from it heads both the Check in tab and the Budget tab; a viewer sees the readings but no form.
+// forecast from it heads both the Check in tab and the Budget tab; readings that disagree with the plan offer a
+// calibration that is accepted and undone; a viewer sees the readings but no form.
 import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { DEMO_ACCOUNT, DEMO_VIEWER } from '@/db/seed';
@@ -39,8 +40,51 @@ async function expectTidy(page: Page, name: string): Promise<void> {
   await screenshotTall(page, name);
 }
 
+async function checkIn(page: Page, time: string, socPct: number): Promise<void> {
+  await page.locator(byTestId('check-in-soc')).scrollIntoViewIfNeeded();
+  await page.fill(byTestId('check-in-soc'), String(socPct));
+  await page.fill(byTestId('check-in-time'), time);
+  await page.click(byTestId('check-in-save'));
+  await expect.poll(() => page.textContent(byTestId('check-in-list')), { timeout: 10_000 }).toContain(`${socPct} %`);
+}
+
+const headline = async (page: Page) => (await page.textContent(byTestId('reforecast-headline')))?.trim() ?? '';
+const shown = async (page: Page, testId: string) => (await page.textContent(byTestId(testId)))?.trim() ?? '';
+
+/** Calibrate from the check-ins: the before/after agrees with the headline, Accept changes it, Undo puts it back. */
+async function useWhatWeSaw(page: Page): Promise<void> {
+  await page.locator(byTestId('calibrate-open')).scrollIntoViewIfNeeded();
+  const before = await headline(page);
+  expect(before).toMatch(/^From your check-in Wed 18:00 at 16 %: lowest ahead \d+ % on [A-Z][a-z]{2} \d{2}:\d{2}$/);
+  expect(await shown(page, 'calibrate-reason')).toMatch(/miss the plan by \d+\.\d % of the bank/);
+  await page.click(byTestId('calibrate-open'));
+  await page.waitForSelector(byTestId('calibrate-result'), { timeout: 20_000 });
+  // "Now" is the figure the headline already says; the calibrated forecast is what the headline will say.
+  const nowAhead = (await shown(page, 'calibrate-lowestAhead-before')).replace(/^Now: /, '');
+  const fittedAhead = (await shown(page, 'calibrate-lowestAhead-after')).replace(/^Calibrated: /, '');
+  expect(before.endsWith(`: ${nowAhead}`)).toBe(true);
+  expect(await shown(page, 'calibrate-openness-before')).toBe('Now: 5.5 % open');
+  expect(await shown(page, 'calibrate-loads-before')).toBe('Now: loads ×1.00 (±0 %)');
+  expect(await shown(page, 'calibrate-loads-after')).toMatch(/^Calibrated: loads ×0\.\d\d \(−\d+ %\)$/);
+  const errorBefore = Number.parseFloat((await shown(page, 'calibrate-fitError-before')).replace(/^Now: /, ''));
+  const errorAfter = Number.parseFloat((await shown(page, 'calibrate-fitError-after')).replace(/^Calibrated: /, ''));
+  expect(errorAfter).toBeLessThan(errorBefore);
+  await page.locator(byTestId('calibrate-result')).scrollIntoViewIfNeeded();
+  await expectTidy(page, 'check-in-calibrate-phone');
+
+  await page.click(byTestId('calibrate-accept'));
+  await expect.poll(() => page.textContent(byTestId('toast')), { timeout: 10_000 }).toContain('Saved: calibrated');
+  await expect.poll(() => headline(page), { timeout: 5_000 }).toBe(before.replace(nowAhead, fittedAhead));
+  // The readings now agree with the plan: nothing more to offer.
+  expect(await page.locator(byTestId('calibrate-card')).count()).toBe(0);
+
+  await page.click(byTestId('toast-action'));
+  await expect.poll(() => headline(page), { timeout: 10_000 }).toBe(before);
+  await page.waitForSelector(byTestId('calibrate-open'));
+}
+
 describe('check-ins', () => {
-  it('when a planner checks in on a phone, then the reading is listed with its author, the forecast starts from it on both tabs, and a night more at the current stop shows at once and is kept', async () => {
+  it('when a planner checks in on a phone, then the reading is listed with its author, the forecast starts from it on both tabs, a night more at the current stop shows at once and is kept, and readings that disagree calibrate the plan until undone', async () => {
     const context = await suite.browser.newContext({ viewport: VIEWPORTS.phone, timezoneId: 'Europe/London' });
     const page = await context.newPage();
     const errors = trackPageErrors(page);
@@ -83,16 +127,25 @@ describe('check-ins', () => {
     await expect.poll(() => page.textContent(byTestId('toast')), { timeout: 10_000 }).toContain('Saved: +1 night');
     // The rest of the trip moved by the night: the last stop is left a day later.
     await expect.poll(() => lastDeparture(page, tripId), { timeout: 10_000 }).toBe(leavingBefore + 86_400_000);
+
+    // Two more readings at the pinewood, fuller than the plan says: the offer to calibrate appears.
+    expect(await page.locator(byTestId('calibrate-open')).count()).toBe(0);
+    await checkIn(page, '2027-09-15 07:00', 37);
+    await checkIn(page, '2027-09-15 18:00', 16);
+    await useWhatWeSaw(page);
     expect(errors).toEqual([]);
     await context.close();
   });
 
-  it('when the trip is opened at laptop width, then the check-in tab lays out in two panes without overflow', async () => {
+  it('when the trip is opened at laptop width, then the check-in tab and the before/after of a calibration lay out in two panes without overflow', async () => {
     const context = await suite.browser.newContext({ viewport: VIEWPORTS.desktop, timezoneId: 'Europe/London' });
     const page = await context.newPage();
     await signIn(page, suite.server.url, DEMO_ACCOUNT.email, DEMO_ACCOUNT.password);
     await openCheckIn(page);
     await page.waitForSelector(byTestId('check-in-form'));
+    // The phone journey above left readings that disagree with the plan: its before/after beside the list.
+    await page.click(byTestId('calibrate-open'));
+    await page.waitForSelector(byTestId('calibrate-result'), { timeout: 20_000 });
     await expectTidy(page, 'check-in-desktop');
     await context.close();
   });

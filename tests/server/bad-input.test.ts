@@ -175,6 +175,19 @@ const ROUTES: Route[] = [
     valid: () => ({ version: 1, rig: snapshot.rig.rig }),
   },
   {
+    name: 'POST calibration',
+    method: 'post',
+    path: () => `/api/trips/${tripId}/calibration`,
+    schema: api.applyCalibrationRequestSchema,
+    valid: () => ({
+      stopId: snapshot.stops[0]?.id,
+      stopVersion: snapshot.stops[0]?.version,
+      skyOpennessPct: 50,
+      loadScale: 1,
+      appliances: snapshot.appliances.map((a) => ({ id: a.id, version: a.version })),
+    }),
+  },
+  {
     name: 'POST invite',
     method: 'post',
     path: () => `/api/trips/${tripId}/invites`,

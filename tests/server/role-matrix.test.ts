@@ -236,6 +236,26 @@ const ROWS: Row[] = [
     expected: needs('trip'),
   },
   {
+    name: 'POST calibration',
+    prepare: async () => {
+      const detail = await getDetail(owner(), world.tripId);
+      const stop = detail.stops[0];
+      if (!stop) throw new Error('no stop');
+      return {
+        method: 'post',
+        path: `${base()}/calibration`,
+        body: {
+          stopId: stop.id,
+          stopVersion: stop.version,
+          skyOpennessPct: 50,
+          loadScale: 1,
+          appliances: detail.appliances.map((a) => ({ id: a.id, version: a.version })),
+        },
+      };
+    },
+    expected: needs('trip'),
+  },
+  {
     name: 'GET check-ins',
     prepare: async () => ({ method: 'get', path: `${base()}/check-ins` }),
     expected: needs('read'),

@@ -44,12 +44,33 @@ describe('calibration from check-ins', () => {
     for (const r of readings.slice(1)) expect(r.socPct).toBeLessThan(99);
     expect(residuals(truth, readings).every((v) => Math.abs(v) < 1e-9)).toBe(true);
 
-    const fit = calibrate(plan, FOREST, readings, 20);
+    const fit = calibrate(plan, FOREST, readings);
     if (!fit) throw new Error('no fit');
     expect(Math.abs(fit.after.opennessPct - TRUE_OPENNESS) / TRUE_OPENNESS).toBeLessThan(0.05);
     expect(Math.abs(fit.after.loadScale - TRUE_SCALE) / TRUE_SCALE).toBeLessThan(0.05);
     expect(fit.after.rmsPct).toBeLessThan(fit.before.rmsPct);
     expect(fit.input.trip.stops[FOREST]?.exposure).toMatchObject({ kind: 'canopy' });
+  });
+
+  it('when the plan as made runs the battery flat between the readings, then the fit still finds both values', () => {
+    // From 68 % on the first evening the plan is empty by the next afternoon, where the charge answers to neither
+    // number: a descent started from the plan's own values stalls against a bound there (rms 5 % of the bank).
+    const truthHere = withCalibration(plan, FOREST, 40, 0.6);
+    const first = '2027-09-14T17:00:00.000Z';
+    const walked = simulateParsed({ ...truthHere, startState: { at: first, socPct: 68, propaneKg: null } });
+    const socBefore = (utc: string) => walked.ledger[walked.ledger.findIndex((row) => row.utc === utc) - 1]?.socPct;
+    const seen: CalibrationReading[] = [first, '2027-09-15T06:00:00.000Z', '2027-09-15T17:00:00.000Z'].map((at, i) => ({
+      at,
+      socPct: i === 0 ? 68 : (socBefore(at) ?? 0),
+      propane: [],
+      harvestWh: null,
+    }));
+    const fit = calibrate(plan, FOREST, seen);
+    if (!fit) throw new Error('no fit');
+    expect(fit.before.rmsPct).toBeGreaterThan(5);
+    expect(fit.after.rmsPct).toBeLessThan(0.1);
+    expect(Math.abs(fit.after.opennessPct - 40) / 40).toBeLessThan(0.05);
+    expect(Math.abs(fit.after.loadScale - 0.6) / 0.6).toBeLessThan(0.05);
   });
 
   it('when there is a single check-in, then there is nothing to fit', () => {
