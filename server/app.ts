@@ -64,7 +64,7 @@ export type AppConfig = {
   /** Hides development-only routes (the Outbox). */
   production?: boolean;
   /** Budgets run in worker threads; one that computes longer than timeLimitMs answers "too large to compute". */
-  budget?: { timeLimitMs?: number; threads?: number };
+  budget?: { timeLimitMs?: number; threads?: number; memoryMb?: number };
   /**
    * Weather endpoints (null: that kind is not fetched) and the past years wanted per stop. Left out, no weather is
    * fetched and every stop plans with its preset sky.
@@ -158,6 +158,7 @@ export function createApp(deps: AppDeps): TrailtallyApp {
       databasePath: databaseFileOf(db),
       ...(config.budget?.timeLimitMs ? { timeLimitMs: config.budget.timeLimitMs } : {}),
       ...(config.budget?.threads ? { threads: config.budget.threads } : {}),
+      ...(config.budget?.memoryMb ? { memoryMb: config.budget.memoryMb } : {}),
     });
   const budgets = createBudgetService(db, budgetRunner, (err, tripId) =>
     deps.logger?.error({ err, tripId }, 'budget failed'),
