@@ -6,6 +6,15 @@ import path from 'node:path';
 
 // The real server as a child process, for the browser tests and the benchmarks (no test runner needed here).
 
+/**
+ * The Node options `npm start` gives the server (its heap bound), read from package.json so the browser tests and
+ * the benchmarks run the server as it is run for real.
+ */
+function startScriptNodeArgs(): string[] {
+  const start = (JSON.parse(fs.readFileSync('package.json', 'utf8')) as { scripts: { start: string } }).scripts.start;
+  return start.split(/\s+/).filter((word) => word.startsWith('--max-old-space-size='));
+}
+
 export type RunningServer = { url: string; dbPath: string; pid: number; stop: () => Promise<void> };
 
 /** A port nobody is listening on, so the server's public URL (checked by better-auth's origin test) is known up front. */
@@ -29,19 +38,23 @@ export async function startServer(env: Record<string, string> = {}, nodeArgs: st
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'trailtally-e2e-'));
   const port = await freePort();
   const dbPath = path.join(dir, 'e2e.db');
-  const child: ChildProcess = spawn(path.resolve('node_modules/.bin/tsx'), [...nodeArgs, 'server/index.ts'], {
-    env: {
-      ...process.env,
-      PORT: String(port),
-      PUBLIC_URL: `http://127.0.0.1:${port}`,
-      HOST: '127.0.0.1',
-      DATABASE_PATH: dbPath,
-      LOG_LEVEL: 'warn',
-      NODE_ENV: 'development',
-      ...env,
+  const child: ChildProcess = spawn(
+    path.resolve('node_modules/.bin/tsx'),
+    [...startScriptNodeArgs(), ...nodeArgs, 'server/index.ts'],
+    {
+      env: {
+        ...process.env,
+        PORT: String(port),
+        PUBLIC_URL: `http://127.0.0.1:${port}`,
+        HOST: '127.0.0.1',
+        DATABASE_PATH: dbPath,
+        LOG_LEVEL: 'warn',
+        NODE_ENV: 'development',
+        ...env,
+      },
+      stdio: ['ignore', 'pipe', 'pipe'],
     },
-    stdio: ['ignore', 'pipe', 'pipe'],
-  });
+  );
   let output = '';
   const url = await new Promise<string>((resolve, reject) => {
     const timer = setTimeout(() => reject(new Error(`server did not start:\n${output}`)), 60_000);
