@@ -7,12 +7,14 @@ import path from 'node:path';
 // The real server as a child process, for the browser tests and the benchmarks (no test runner needed here).
 
 /**
- * The Node options `npm start` gives the server (its heap bound), read from package.json so the browser tests and
- * the benchmarks run the server as it is run for real.
+ * The Node options `npm start` runs the server with (its heap bound, tsx's loader), read from package.json so the
+ * browser tests and the benchmarks run the server as it is run for real.
  */
 function startScriptNodeArgs(): string[] {
   const start = (JSON.parse(fs.readFileSync('package.json', 'utf8')) as { scripts: { start: string } }).scripts.start;
-  return start.split(/\s+/).filter((word) => word.startsWith('--max-old-space-size='));
+  const [command, ...words] = start.split(/\s+/);
+  if (command !== 'node') throw new Error(`npm start is expected to run node directly, not: ${start}`);
+  return words.slice(0, -1);
 }
 
 export type RunningServer = { url: string; dbPath: string; pid: number; stop: () => Promise<void> };
@@ -38,23 +40,19 @@ export async function startServer(env: Record<string, string> = {}, nodeArgs: st
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'trailtally-e2e-'));
   const port = await freePort();
   const dbPath = path.join(dir, 'e2e.db');
-  const child: ChildProcess = spawn(
-    path.resolve('node_modules/.bin/tsx'),
-    [...startScriptNodeArgs(), ...nodeArgs, 'server/index.ts'],
-    {
-      env: {
-        ...process.env,
-        PORT: String(port),
-        PUBLIC_URL: `http://127.0.0.1:${port}`,
-        HOST: '127.0.0.1',
-        DATABASE_PATH: dbPath,
-        LOG_LEVEL: 'warn',
-        NODE_ENV: 'development',
-        ...env,
-      },
-      stdio: ['ignore', 'pipe', 'pipe'],
+  const child: ChildProcess = spawn(process.execPath, [...startScriptNodeArgs(), ...nodeArgs, 'server/index.ts'], {
+    env: {
+      ...process.env,
+      PORT: String(port),
+      PUBLIC_URL: `http://127.0.0.1:${port}`,
+      HOST: '127.0.0.1',
+      DATABASE_PATH: dbPath,
+      LOG_LEVEL: 'warn',
+      NODE_ENV: 'development',
+      ...env,
     },
-  );
+    stdio: ['ignore', 'pipe', 'pipe'],
+  });
   let output = '';
   const url = await new Promise<string>((resolve, reject) => {
     const timer = setTimeout(() => reject(new Error(`server did not start:\n${output}`)), 60_000);
