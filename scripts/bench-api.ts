@@ -14,7 +14,7 @@ const PROFILE_DIR = profileAt >= 0 ? (process.argv[profileAt + 1] ?? 'bench-prof
 /** `BENCH_NODE_ARGS="--max-old-space-size=320"`: Node options for the server, to try a heap setting under load. */
 const SERVER_NODE_ARGS = process.env.BENCH_NODE_ARGS?.split(' ').filter(Boolean) ?? [];
 
-/** A process and everything it started (tsx runs the server in a child process), by id. */
+/** A process and everything it started, by id. */
 function processTree(pid: number): number[] {
   const children = fs
     .readdirSync(`/proc/${pid}/task`)
@@ -27,8 +27,8 @@ function processTree(pid: number): number[] {
 const isNode = (pid: number): boolean => fs.readFileSync(`/proc/${pid}/comm`, 'utf8').trim() === 'node';
 
 /**
- * The server's resident memory, MB, from /proc (Linux): the Node process tsx started (its budget workers are threads
- * in it), not the launcher nor tsx's esbuild service.
+ * The server's resident memory, MB, from /proc (Linux): the Node process (its budget workers are threads in it), or
+ * the Node processes a launcher started, not the launcher itself nor esbuild's service.
  */
 function rssMb(pid: number): number {
   const servers = processTree(pid).slice(1).filter(isNode);

@@ -64,7 +64,7 @@ export type AppConfig = {
   /** Hides development-only routes (the Outbox). */
   production?: boolean;
   /** Budgets run in worker threads; one that computes longer than timeLimitMs answers "too large to compute". */
-  budget?: { timeLimitMs?: number; threads?: number };
+  budget?: { timeLimitMs?: number; threads?: number; memoryMb?: number };
   /**
    * Weather endpoints (null: that kind is not fetched) and the past years wanted per stop. Left out, no weather is
    * fetched and every stop plans with its preset sky.
@@ -96,6 +96,8 @@ export type AppDeps = {
 export type TrailtallyApp = Express & { locals: { auth: Auth; budgets: BudgetService; weather: WeatherQueue } };
 
 const JSON_BODY_LIMIT = '100kb';
+/** The reads answered with a body made ready in every encoding (`server/budget/ready-body.ts`). */
+const READY_BODY_PATH = /^\/api\/trips\/[^/]+\/(?:budget|ledger|budget\/fixes)$/;
 
 /** Budget workers open the database file themselves: a database only in this thread's memory cannot be shared. */
 function databaseFileOf(db: Db): string {
@@ -142,7 +144,11 @@ export function createApp(deps: AppDeps): TrailtallyApp {
     }),
   );
   // Static scripts, fonts and the wasm were compressed at build time (web-static.ts marks them); never again here.
-  app.use(compression({ filter: (req, res) => !res.locals.precompressed && compression.filter(req, res) }));
+  const compress = compression({ filter: (req, res) => !res.locals.precompressed && compression.filter(req, res) });
+  // A trip's budget, ledger and fixes are kept ready in each encoding: those reads skip compression's hooks too.
+  app.use((req, res, next) =>
+    req.method === 'GET' && READY_BODY_PATH.test(req.path) ? next() : compress(req, res, next),
+  );
   if (config.devWebOrigin) app.use('/api', cors({ origin: config.devWebOrigin, credentials: true }));
   app.use('/api', requireTrustedOrigin(origins, config.publicUrl));
 
@@ -158,6 +164,7 @@ export function createApp(deps: AppDeps): TrailtallyApp {
       databasePath: databaseFileOf(db),
       ...(config.budget?.timeLimitMs ? { timeLimitMs: config.budget.timeLimitMs } : {}),
       ...(config.budget?.threads ? { threads: config.budget.threads } : {}),
+      ...(config.budget?.memoryMb ? { memoryMb: config.budget.memoryMb } : {}),
     });
   const budgets = createBudgetService(db, budgetRunner, (err, tripId) =>
     deps.logger?.error({ err, tripId }, 'budget failed'),

@@ -38,6 +38,8 @@ const envSchema = z.object({
   BUDGET_TIME_LIMIT_MS: z.coerce.number().int().min(100).max(600_000).optional(),
   /** Worker threads that compute budgets; unset, one fewer than the cores (1 to 4). */
   BUDGET_WORKERS: z.coerce.number().int().min(1).max(64).optional(),
+  /** Old-generation heap of each budget worker, MB; a plan needing more is answered "too large"; unset, 128. */
+  BUDGET_WORKER_MEMORY_MB: z.coerce.number().int().min(32).max(4096).optional(),
   /** Whether sign-in waits until the e-mail address is verified. Default: on in production, off otherwise. */
   REQUIRE_EMAIL_VERIFICATION: z.enum(['true', 'false']).optional(),
   /** The reverse proxies whose X-Forwarded-For is believed (see server/trust-proxy.ts). Unset: none. */

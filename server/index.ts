@@ -51,7 +51,11 @@ export async function main(): Promise<void> {
       requireEmailVerification: env.REQUIRE_EMAIL_VERIFICATION,
       production,
       weather: { ...weather, years: env.WEATHER_YEARS },
-      budget: { timeLimitMs: env.BUDGET_TIME_LIMIT_MS, threads: env.BUDGET_WORKERS },
+      budget: {
+        timeLimitMs: env.BUDGET_TIME_LIMIT_MS,
+        threads: env.BUDGET_WORKERS,
+        memoryMb: env.BUDGET_WORKER_MEMORY_MB,
+      },
       trustProxy: env.TRUST_PROXY,
     },
   });

@@ -1,6 +1,6 @@
 import { availableParallelism } from 'node:os';
 import path from 'node:path';
-import { MessageChannel } from 'node:worker_threads';
+import { MessageChannel, type ResourceLimits } from 'node:worker_threads';
 import { Piscina } from 'piscina';
 import type { BudgetWork, TripBudget } from './compute';
 
@@ -26,6 +26,8 @@ export type BudgetRunner = {
   run: (tripId: string, work?: BudgetWork) => Promise<TripBudget | undefined>;
   /** Starts the workers now, so the first budget does not wait for them. */
   warmUp: () => void;
+  /** The heap limits each running worker was started with (none before the first starts). */
+  workerLimits: () => ResourceLimits[];
   close: () => Promise<void>;
 };
 
@@ -34,11 +36,11 @@ export type BudgetPoolOptions = {
   databasePath: string;
   /** Longest a budget may compute, counted from when a worker starts on it; by default 5 s. */
   timeLimitMs?: number;
-  /** Worker threads; by default one fewer than the cores (at least one, at most four), leaving one for requests. */
+  /** Worker threads; by default one fewer than the cores (at least one, at most four), never more than the cores. */
   threads?: number;
   /** Budgets that may wait for a worker; more are refused as busy. */
   maxQueue?: number;
-  /** Heap of each worker, MB: a plan that needs more is stopped like one that takes too long. */
+  /** Old-generation heap of each worker, MB: a plan that needs more is stopped like one that takes too long. */
   memoryMb?: number;
 };
 
@@ -46,14 +48,33 @@ const WORKER_FILE = path.join(__dirname, 'worker.mjs');
 
 /** The largest plan the API accepts computes in a quarter of a second: 5 s leaves room for a busy machine. */
 export const DEFAULT_BUDGET_TIME_LIMIT_MS = 5_000;
+/** The largest plan the API accepts, budget or fixes, computes within 48 MB of old generation: 128 leaves room. */
+export const DEFAULT_BUDGET_MEMORY_MB = 128;
+/**
+ * A budget's garbage is short-lived (the engine's hourly arrays, the body's strings): a small young generation
+ * keeps an idle worker's committed heap small without promoting more of it.
+ */
+const WORKER_YOUNG_GENERATION_MB = 16;
 
 export const defaultBudgetThreads = (): number => Math.max(1, Math.min(4, availableParallelism() - 1));
 
+/** How the pool is sized: threads bounded by the cores (each thread is a whole V8 heap), each heap bounded too. */
+export function budgetPoolSettings(options: Omit<BudgetPoolOptions, 'databasePath'>) {
+  const threads = Math.max(1, Math.min(options.threads ?? defaultBudgetThreads(), availableParallelism()));
+  return {
+    threads,
+    maxQueue: options.maxQueue ?? 16 * threads,
+    timeLimitMs: options.timeLimitMs ?? DEFAULT_BUDGET_TIME_LIMIT_MS,
+    resourceLimits: {
+      maxOldGenerationSizeMb: options.memoryMb ?? DEFAULT_BUDGET_MEMORY_MB,
+      maxYoungGenerationSizeMb: WORKER_YOUNG_GENERATION_MB,
+    } satisfies ResourceLimits,
+  };
+}
+
 /** A small pool of worker threads (piscina) with a time limit per budget. Threads start on first use or warmUp(). */
 export function createBudgetPool(options: BudgetPoolOptions): BudgetRunner {
-  const threads = options.threads ?? defaultBudgetThreads();
-  const maxQueue = options.maxQueue ?? 16 * threads;
-  const timeLimitMs = options.timeLimitMs ?? DEFAULT_BUDGET_TIME_LIMIT_MS;
+  const { threads, maxQueue, timeLimitMs, resourceLimits } = budgetPoolSettings(options);
   let pool: Piscina | undefined;
   const open = (): Piscina =>
     (pool ??= new Piscina({
@@ -62,11 +83,12 @@ export function createBudgetPool(options: BudgetPoolOptions): BudgetRunner {
       maxThreads: threads,
       idleTimeout: 60_000,
       maxQueue,
-      resourceLimits: { maxOldGenerationSizeMb: options.memoryMb ?? 256 },
+      resourceLimits,
     }));
 
   return {
     warmUp: () => void open(),
+    workerLimits: () => (pool?.threads ?? []).map((thread) => thread.resourceLimits ?? {}),
     async run(tripId, work = 'budget') {
       const workers = open();
       if (workers.queueSize >= maxQueue) throw new BudgetBusyError();

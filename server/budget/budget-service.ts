@@ -25,9 +25,11 @@ export type BudgetGlance = {
   status: 'current' | 'computing' | 'unavailable';
 };
 
-/** Full answers kept, by count and by size: the largest plan's result is a few megabytes of JSON. */
-const CACHE_ENTRIES = 100;
-const CACHE_BYTES = 64 * 1024 * 1024;
+/**
+ * Full answers kept, by count and by bytes (each in three encodings, outside V8's heap): the largest plan's answer
+ * is about 3 MB, the demo trip's 70 kB. The least recently asked for goes first.
+ */
+export const DEFAULT_BUDGET_CACHE = { entries: 100, bytes: 32 * 1024 * 1024 };
 /** A plan stopped for taking too long is not tried again for this long, so asking again costs nothing. */
 const TOO_LARGE_KEPT_MS = 60_000;
 /** Trips whose last figures are remembered for the list; far more than one server's trips in use at once. */
@@ -47,6 +49,7 @@ export function createBudgetService(
   db: Db,
   runner: BudgetRunner,
   onError: (error: unknown, tripId: string) => void = () => undefined,
+  cache: { entries: number; bytes: number } = DEFAULT_BUDGET_CACHE,
 ) {
   const answers = new Map<string, BudgetAnswer>();
   let answerBytes = 0;
@@ -58,7 +61,7 @@ export function createBudgetService(
     if (answers.has(key)) return;
     answers.set(key, answer);
     answerBytes += sizeOf(answer);
-    while (answers.size > CACHE_ENTRIES || answerBytes > CACHE_BYTES) {
+    while (answers.size > cache.entries || answerBytes > cache.bytes) {
       const oldest = answers.entries().next().value;
       if (!oldest) break;
       answers.delete(oldest[0]);
@@ -112,7 +115,7 @@ export function createBudgetService(
     const key = keyOf(tripId, answer.revision, work);
     if (answer.kind === 'too-large') {
       tooLargeUntil.set(key, Date.now() + TOO_LARGE_KEPT_MS);
-      if (tooLargeUntil.size > CACHE_ENTRIES) tooLargeUntil.delete(tooLargeUntil.keys().next().value ?? key);
+      if (tooLargeUntil.size > cache.entries) tooLargeUntil.delete(tooLargeUntil.keys().next().value ?? key);
     } else keep(key, answer);
     if (work === 'budget') remember(tripId, answer);
     return answer;
@@ -121,7 +124,12 @@ export function createBudgetService(
   function start(tripId: string, revision: number, work: BudgetWork = 'budget'): Promise<BudgetAnswer | undefined> {
     const key = keyOf(tripId, revision, work);
     const kept = answers.get(key);
-    if (kept) return Promise.resolve(kept);
+    if (kept) {
+      // Asked for again: it moves to the end of the Map's order, the last in line to be dropped.
+      answers.delete(key);
+      answers.set(key, kept);
+      return Promise.resolve(kept);
+    }
     const refusedUntil = tooLargeUntil.get(key);
     if (refusedUntil !== undefined) {
       if (refusedUntil > Date.now()) return Promise.resolve({ revision, kind: 'too-large' });

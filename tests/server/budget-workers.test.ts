@@ -1,9 +1,17 @@
 // Budgets run in worker threads with a time limit, never on the event loop: the server keeps answering while one
 // computes, a budget past its limit answers a clear error, and the trips list never waits for a budget.
 import type { Server } from 'node:http';
+import { availableParallelism } from 'node:os';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { BudgetBusyError, BudgetTooLargeError, createBudgetPool, type BudgetRunner } from '@/server/budget/budget-pool';
+import {
+  BudgetBusyError,
+  BudgetTooLargeError,
+  budgetPoolSettings,
+  createBudgetPool,
+  DEFAULT_BUDGET_MEMORY_MB,
+  type BudgetRunner,
+} from '@/server/budget/budget-pool';
 import { computeTripBudget, type TripBudget } from '@/server/budget/compute';
 import { createLargestTrip } from '../factories/largest-trip';
 import { createTestApp, signUpAgent, type TestContext } from '../factories/test-app';
@@ -18,6 +26,7 @@ function heldRunner() {
         waiting.push({ tripId, settle: (budget) => (budget instanceof Error ? reject(budget) : resolve(budget)) }),
       ),
     warmUp: () => undefined,
+    workerLimits: () => [],
     close: async () => undefined,
   };
   return { runner, waiting };
@@ -66,6 +75,19 @@ describe('budgets in worker threads', () => {
       expect(inWorker).toEqual(computeTripBudget(ctx.db, smallId));
       expect(inWorker?.outcome.kind).toBe('ok');
       expect(await pool.run('no-such-trip')).toBeUndefined();
+    } finally {
+      await pool.close();
+    }
+  });
+
+  it('when the pool is given a heap size, then each worker it starts runs with that old generation and a small young one', async () => {
+    const pool = createBudgetPool({ databasePath: ctx.db.$client.name, threads: 1, memoryMb: 72 });
+    try {
+      expect(pool.workerLimits()).toEqual([]);
+      expect((await pool.run(smallId))?.outcome.kind).toBe('ok');
+      const limits = pool.workerLimits();
+      expect(limits).toHaveLength(1);
+      expect(limits[0]).toMatchObject({ maxOldGenerationSizeMb: 72, maxYoungGenerationSizeMb: 16 });
     } finally {
       await pool.close();
     }
@@ -194,5 +216,17 @@ describe('the trips list and the budget cache', () => {
     expect(answered.status).toBe(503);
     expect(answered.headers['retry-after']).toBe('5');
     expect(answered.body.error.code).toBe('busy');
+  });
+});
+
+describe('the size of the budget pool', () => {
+  it('when more threads are asked for than the machine has cores, then the pool has one per core', () => {
+    expect(budgetPoolSettings({ threads: 64 }).threads).toBe(availableParallelism());
+    expect(budgetPoolSettings({ threads: 1 }).threads).toBe(1);
+  });
+
+  it('when no heap size is configured, then each worker gets the default old generation', () => {
+    expect(budgetPoolSettings({}).resourceLimits.maxOldGenerationSizeMb).toBe(DEFAULT_BUDGET_MEMORY_MB);
+    expect(budgetPoolSettings({ memoryMb: 300 }).resourceLimits.maxOldGenerationSizeMb).toBe(300);
   });
 });
