@@ -2,12 +2,12 @@
 // last flag, or the trip's start, to the flag's lowest charge), each step's battery draw is shared out among what it
 // fed in proportion to their energy in that step: the DC loads, the AC loads that went through the inverter (not
 // those a hookup or a running generator carried) and the inverter's own idle draw and conversion loss; the battery's
-// discharge losses are their own cause. An appliance's energy per step is the load model's (loads.ts), or for
-// heating and cooling the running share from the cabin heat balance (climate.ts).
+// discharge losses are their own cause. An appliance's energy per step is the load model's (loads.ts) as the
+// precomputation booked it, or for heating and cooling the running share from the cabin heat balance (climate.ts).
 import type { Appliance } from '../schemas/appliance';
 import type { StepLoads } from './climate';
-import { applianceEnergyWh, scheduledShare } from './loads';
-import { localStep, prevDayType, type Prepared } from './prepare';
+import { applianceEnergyWh } from './loads';
+import type { Prepared } from './prepare';
 import type { Cause } from './result-types';
 import type { LedgerColumns } from './walk';
 
@@ -23,12 +23,13 @@ export function drawdownStart(l: LedgerColumns, from: number, to: number): numbe
   return best;
 }
 
-function applianceWh(ctx: Ctx, a: Appliance, j: number, i: number): number {
-  const dtH = ctx.p.stepH[i] ?? 1;
-  const run = ctx.loads.thermostatRun.get(j);
-  if (run) return applianceEnergyWh(a, run[i] ?? 0, dtH);
-  const share = scheduledShare(a.schedule, localStep(ctx.p, i), prevDayType(ctx.p, i));
-  return applianceEnergyWh(a, share * a.dutyCycle, dtH);
+/** Where an appliance's energy per step comes from: the precomputation's fixed loads, or (heating and cooling) the
+ * running share the cabin heat balance gave under this sky, through the load model. */
+type ApplianceSource = { a: Appliance; fixedWh: Float64Array | undefined; run: Float64Array | undefined };
+
+function applianceWh(ctx: Ctx, src: ApplianceSource, i: number): number {
+  if (src.run) return applianceEnergyWh(src.a, src.run[i] ?? 0, ctx.p.stepH[i] ?? 1);
+  return src.fixedWh?.[i] ?? 0;
 }
 
 /** The AC energy of step i that went through the inverter: what the hookup and a running generator did not carry. */
@@ -44,6 +45,11 @@ export function attributeDraw(ctx: Ctx, from: number, to: number): Cause[] {
   const { p, l } = ctx;
   const appliances = p.input.appliances;
   const byAppliance = new Float64Array(appliances.length);
+  const sources: ApplianceSource[] = appliances.map((a, j) => ({
+    a,
+    fixedWh: p.applianceWh[j],
+    run: ctx.loads.thermostatRun.get(j),
+  }));
   let inverterWh = 0;
   let batteryLossWh = 0;
   for (let i = from; i <= to; i++) {
@@ -57,30 +63,33 @@ export function attributeDraw(ctx: Ctx, from: number, to: number): Cause[] {
     if (demand <= 0) continue;
     const share = Math.min(1, draw / demand);
     const acShare = (l.acLoadWh[i] ?? 0) > 0 ? acInv / (l.acLoadWh[i] ?? 1) : 0;
-    for (let j = 0; j < appliances.length; j++) {
-      const a = appliances[j];
-      if (!a) continue;
-      const wh = applianceWh(ctx, a, j, i);
+    for (let j = 0; j < sources.length; j++) {
+      const src = sources[j];
+      if (!src) continue;
+      const wh = applianceWh(ctx, src, i);
       if (wh <= 0) continue;
-      byAppliance[j] = (byAppliance[j] ?? 0) + wh * share * (a.circuit === 'ac' ? acShare : 1);
+      byAppliance[j] = (byAppliance[j] ?? 0) + wh * share * (src.a.circuit === 'ac' ? acShare : 1);
     }
     inverterWh += invLoss * share;
     if (flow < 0) batteryLossWh += l.batteryLossWh[i] ?? 0;
   }
-  const causes: Omit<Cause, 'sharePct'>[] = appliances.map((a, j) => ({
-    kind: 'appliance' as const,
-    name: a.name,
-    applianceId: a.id,
-    wh: byAppliance[j] ?? 0,
-  }));
-  causes.push({ kind: 'inverter', name: 'inverter idle and conversion', applianceId: null, wh: inverterWh });
-  causes.push({ kind: 'battery-loss', name: 'battery losses', applianceId: null, wh: batteryLossWh });
-  const total = causes.reduce((s, c) => s + c.wh, 0);
+  // Added in the list's order (appliances, the inverter, battery losses), so the total is the same number whichever
+  // causes are left out below.
+  let total = 0;
+  for (let j = 0; j < byAppliance.length; j++) total += byAppliance[j] ?? 0;
+  total += inverterWh;
+  total += batteryLossWh;
   if (total <= 0) return [];
-  return causes
-    .map((c) => ({ ...c, sharePct: (c.wh / total) * 100 }))
-    .filter((c) => c.sharePct / 100 >= SMALLEST_SHARE)
-    .sort((a, b) => b.wh - a.wh);
+  // Only the causes kept are built, each once and in one shape.
+  const causes: Cause[] = [];
+  const keep = (kind: Cause['kind'], name: string, applianceId: string | null, wh: number): void => {
+    const sharePct = (wh / total) * 100;
+    if (sharePct / 100 >= SMALLEST_SHARE) causes.push({ kind, name, applianceId, wh, sharePct });
+  };
+  appliances.forEach((a, j) => keep('appliance', a.name, a.id, byAppliance[j] ?? 0));
+  keep('inverter', 'inverter idle and conversion', null, inverterWh);
+  keep('battery-loss', 'battery losses', null, batteryLossWh);
+  return causes.sort((a, b) => b.wh - a.wh);
 }
 
 /** "roof air conditioner 71 %, fridge 12 %, lights 6 %": the leading causes, as a flag's text names them. */

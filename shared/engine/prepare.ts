@@ -85,8 +85,12 @@ export type Prepared = {
   acStandbyOn: Uint8Array;
   /** Share of the step inside the hours the inverter is kept on (scheduled inverters). */
   inverterOnShare: Float64Array;
-  /** Electric Wh of appliance a at stop w: index a × stops + w, for routine appliances (the loads a flag may suggest moving). */
-  applianceStopWh: Float64Array;
+  /**
+   * Electric Wh of each appliance per step, by its index in the appliance list (the load model's figure, kept so a
+   * flag's causes read it instead of working the schedule out again). Empty for thermostat-run appliances: their
+   * energy depends on the sky (climate.ts).
+   */
+  applianceWh: Float64Array[];
   /** Loads whose running current passes the bank's 20-hour current, with their running energy per step (Peukert). */
   heavy: HeavyLoad[];
   /**
@@ -359,25 +363,15 @@ function fillShares(p: Prepared, a: Appliance, slots: () => { time: Slots; typed
 
 function fillLoads(p: Prepared): void {
   const appliances = p.input.appliances;
-  const stopsCount = p.input.trip.stops.length;
   const n = p.n;
-  const stopWh = new Float64Array(appliances.length * stopsCount);
-  p.applianceStopWh = stopWh;
+  // One buffer for every appliance's step energies (one allocation, not one per appliance).
+  const energies = new ArrayBuffer(8 * n * appliances.length);
+  p.applianceWh = appliances.map((_, j) => new Float64Array(energies, 8 * n * j, n));
   let known: { time: Slots; typed: Slots } | null = null;
   const slots = (): { time: Slots; typed: Slots } =>
     (known ??= { time: stepSlots(p, false), typed: stepSlots(p, true) });
   const share = new Float64Array(n);
-  const { stepH, where, acWh, dcWh, heatWh, acRunningW, acSurgeExtraW, acStandbyOn } = p;
-  // Steps of one stop are consecutive: per-stop totals add each stop's run of steps in time order.
-  const runs: { stop: number; from: number; to: number }[] = [];
-  for (let i = 0; i < n; i++) {
-    const w = where[i] ?? -1;
-    if (w < 0) continue;
-    const last = runs[runs.length - 1];
-    if (last && last.stop === w && last.to === i) last.to = i + 1;
-    else runs.push({ stop: w, from: i, to: i + 1 });
-  }
-  const energy = new Float64Array(n);
+  const { stepH, acWh, dcWh, heatWh, acRunningW, acSurgeExtraW, acStandbyOn } = p;
   const battery = p.input.rig.battery;
   const inverter = p.input.rig.inverter;
   /** Battery current while the appliance runs, A; AC loads through the inverter (none without one: unserved). */
@@ -395,6 +389,7 @@ function fillLoads(p: Prepared): void {
     if (!always) fillShares(p, a, slots, share);
     const currentA = runningCurrentA(a);
     if (a.schedule.kind === 'thermostat') {
+      p.applianceWh[j] = new Float64Array(0);
       // Heating and cooling depend on the sky (solar gain): their duty is worked out per scenario (climate.ts).
       p.thermostats.push({
         index: j,
@@ -412,7 +407,7 @@ function fillLoads(p: Prepared): void {
     const surgeExtra = (a.surgeW ?? a.runningW) - a.runningW;
     // Off with no standby draw, a step adds exactly 0 to every total (which are never −0), so it is skipped.
     const skipOff = !always && a.standbyW === 0;
-    if (skipOff) energy.fill(0);
+    const energy = p.applianceWh[j] ?? new Float64Array(n);
     const running = currentA > i20 ? new Float64Array(n) : null;
     if (running) p.heavy.push({ circuit: isAc ? 'ac' : 'dc', currentA, runningWh: running });
     for (let i = 0; i < n; i++) {
@@ -432,15 +427,6 @@ function fillLoads(p: Prepared): void {
       } else if (heats) heatWh[i] = (heatWh[i] ?? 0) + meter.heatWh(runShare, dtH);
     }
     if (isAc && a.standbyW > 0) acStandbyOn.fill(1, 0, n);
-    // Only routine loads are ever suggested for moving to a drive, so only theirs are totalled per stop.
-    if (a.schedule.kind === 'routine') {
-      const base = j * stopsCount;
-      for (const r of runs) {
-        let sum = stopWh[base + r.stop] ?? 0;
-        for (let i = r.from; i < r.to; i++) sum += energy[i] ?? 0;
-        stopWh[base + r.stop] = sum;
-      }
-    }
   }
 }
 
@@ -544,7 +530,7 @@ function allocate(input: EngineInput, n: number): Prepared {
     travelByDay: new Uint8Array(1),
     exposures: [],
     exposureOf: u8(),
-    applianceStopWh: new Float64Array(0),
+    applianceWh: [],
     heavy: [],
     internalGainW: new Float64Array(n),
     thermostats: [],
@@ -581,7 +567,7 @@ export function withAppliances(p: Prepared, appliances: Appliance[]): Prepared {
     acRunningW: new Float64Array(n),
     acSurgeExtraW: new Float64Array(n),
     acStandbyOn: new Uint8Array(n),
-    applianceStopWh: new Float64Array(0),
+    applianceWh: [],
     heavy: [],
     internalGainW: new Float64Array(n),
     thermostats: [],
