@@ -23,13 +23,17 @@ export function drawdownStart(l: LedgerColumns, from: number, to: number): numbe
   return best;
 }
 
-/** Where an appliance's energy per step comes from: the precomputation's fixed loads, or (heating and cooling) the
- * running share the cabin heat balance gave under this sky, through the load model. */
-type ApplianceSource = { a: Appliance; fixedWh: Float64Array | undefined; run: Float64Array | undefined };
-
-function applianceWh(ctx: Ctx, src: ApplianceSource, i: number): number {
-  if (src.run) return applianceEnergyWh(src.a, src.run[i] ?? 0, ctx.p.stepH[i] ?? 1);
-  return src.fixedWh?.[i] ?? 0;
+/** Appliance j's electric energy in step i: the precomputation's fixed load, or (heating and cooling) the load
+ * model on the running share the cabin heat balance gave under this sky. */
+function applianceWh(
+  ctx: Ctx,
+  a: Appliance,
+  fixedWh: Float64Array | undefined,
+  run: Float64Array | undefined,
+  i: number,
+) {
+  if (run) return applianceEnergyWh(a, run[i] ?? 0, ctx.p.stepH[i] ?? 1);
+  return fixedWh?.[i] ?? 0;
 }
 
 /** The AC energy of step i that went through the inverter: what the hookup and a running generator did not carry. */
@@ -44,12 +48,11 @@ function acThroughInverterWh(ctx: Ctx, i: number): number {
 export function attributeDraw(ctx: Ctx, from: number, to: number): Cause[] {
   const { p, l } = ctx;
   const appliances = p.input.appliances;
-  const byAppliance = new Float64Array(appliances.length);
-  const sources: ApplianceSource[] = appliances.map((a, j) => ({
-    a,
-    fixedWh: p.applianceWh[j],
-    run: ctx.loads.thermostatRun.get(j),
-  }));
+  // Each row's share of its demand the battery met (0: it met none, the row is skipped) and the share of its AC
+  // loads that went through the inverter, worked out once for all the appliances.
+  const rows = Math.max(0, to - from + 1);
+  const share = new Float64Array(rows);
+  const acShare = new Float64Array(rows);
   let inverterWh = 0;
   let batteryLossWh = 0;
   for (let i = from; i <= to; i++) {
@@ -61,17 +64,28 @@ export function attributeDraw(ctx: Ctx, from: number, to: number): Cause[] {
     const dc = l.dcLoadWh[i] ?? 0;
     const demand = dc + acInv + invLoss;
     if (demand <= 0) continue;
-    const share = Math.min(1, draw / demand);
-    const acShare = (l.acLoadWh[i] ?? 0) > 0 ? acInv / (l.acLoadWh[i] ?? 1) : 0;
-    for (let j = 0; j < sources.length; j++) {
-      const src = sources[j];
-      if (!src) continue;
-      const wh = applianceWh(ctx, src, i);
-      if (wh <= 0) continue;
-      byAppliance[j] = (byAppliance[j] ?? 0) + wh * share * (src.a.circuit === 'ac' ? acShare : 1);
-    }
-    inverterWh += invLoss * share;
+    const rowShare = Math.min(1, draw / demand);
+    share[i - from] = rowShare;
+    acShare[i - from] = (l.acLoadWh[i] ?? 0) > 0 ? acInv / (l.acLoadWh[i] ?? 1) : 0;
+    inverterWh += invLoss * rowShare;
     if (flow < 0) batteryLossWh += l.batteryLossWh[i] ?? 0;
+  }
+  const byAppliance = new Float64Array(appliances.length);
+  for (let j = 0; j < appliances.length; j++) {
+    const a = appliances[j];
+    if (!a) continue;
+    const fixedWh = p.applianceWh[j];
+    const run = ctx.loads.thermostatRun.get(j);
+    const ac = a.circuit === 'ac';
+    let wh = 0;
+    for (let k = 0; k < rows; k++) {
+      const rowShare = share[k] ?? 0;
+      if (rowShare === 0) continue;
+      const e = applianceWh(ctx, a, fixedWh, run, from + k);
+      if (e <= 0) continue;
+      wh += e * rowShare * (ac ? (acShare[k] ?? 0) : 1);
+    }
+    byAppliance[j] = wh;
   }
   // Added in the list's order (appliances, the inverter, battery losses), so the total is the same number whichever
   // causes are left out below.

@@ -195,7 +195,65 @@ function dniExtraAt(c: DayCache, utcMs: number, solarConstant: number): number {
   return c.dniExtra;
 }
 
-type SampleLists = { [K in Exclude<keyof SunSamples, 'start'>]: number[] };
+type SampleColumn = Exclude<keyof SunSamples, 'start'>;
+const SAMPLE_COLUMNS: readonly SampleColumn[] = ['weight', 'atMs', 'altDeg', 'azDeg', 'cosZ', 'cosZTrue', 'ghiClear'];
+
+/** The sun samples' columns while they are filled: typed arrays with room to spare, doubled when full. */
+class SampleColumns {
+  length = 0;
+  private cols: Record<SampleColumn, Float64Array>;
+
+  constructor(capacity: number) {
+    this.cols = this.allocate(Math.max(16, capacity));
+  }
+
+  private allocate(capacity: number): Record<SampleColumn, Float64Array> {
+    const buf = new ArrayBuffer(8 * capacity * SAMPLE_COLUMNS.length);
+    const col = (k: number): Float64Array => new Float64Array(buf, 8 * capacity * k, capacity);
+    return {
+      weight: col(0),
+      atMs: col(1),
+      altDeg: col(2),
+      azDeg: col(3),
+      cosZ: col(4),
+      cosZTrue: col(5),
+      ghiClear: col(6),
+    };
+  }
+
+  push(weight: number, atMs: number, altDeg: number, azDeg: number, cosZ: number, cosZTrue: number, ghi: number) {
+    const c = this.cols;
+    if (this.length === c.weight.length) {
+      const bigger = this.allocate(2 * this.length);
+      for (const k of SAMPLE_COLUMNS) bigger[k].set(c[k]);
+      this.cols = bigger;
+    }
+    const at = this.length++;
+    this.cols.weight[at] = weight;
+    this.cols.atMs[at] = atMs;
+    this.cols.altDeg[at] = altDeg;
+    this.cols.azDeg[at] = azDeg;
+    this.cols.cosZ[at] = cosZ;
+    this.cols.cosZTrue[at] = cosZTrue;
+    this.cols.ghiClear[at] = ghi;
+  }
+
+  /** The filled part of each column (views, not copies). */
+  done(start: Int32Array): SunSamples {
+    const c = this.cols;
+    const n = this.length;
+    return {
+      start,
+      weight: c.weight.subarray(0, n),
+      atMs: c.atMs.subarray(0, n),
+      altDeg: c.altDeg.subarray(0, n),
+      azDeg: c.azDeg.subarray(0, n),
+      cosZ: c.cosZ.subarray(0, n),
+      cosZTrue: c.cosZTrue.subarray(0, n),
+      ghiClear: c.ghiClear.subarray(0, n),
+    };
+  }
+}
 
 /** Each stop's exposure for the season of each step: deciduous cover is bare in its leaf-off months. */
 function fillExposures(p: Prepared, stops: readonly Stop[]): void {
@@ -223,23 +281,26 @@ function fillSun(p: Prepared, stops: readonly Stop[], solarConstant: number): vo
   const at = new Float64Array(3);
   const days: DayCache = { utcDay: Number.NaN, dniExtra: 0 };
   const start = new Int32Array(p.n + 1);
-  const lists: SampleLists = { weight: [], atMs: [], altDeg: [], azDeg: [], cosZ: [], cosZTrue: [], ghiClear: [] };
+  // Room for three samples per step (a lit step takes three; only sunrise and sunset steps take more).
+  const lists = new SampleColumns(3 * p.n + 2 * (2 * HORIZON_PANELS + 1));
   const add = (stop: Stop | undefined, ms: number, w: number, v: Float64Array, k: number, dniExtra: number) => {
     const alt = v[k] ?? 0;
     if (alt <= 0) return; // below the horizon: no light, no sample
-    lists.weight.push(w);
-    lists.atMs.push(ms);
-    lists.altDeg.push(alt);
-    lists.azDeg.push(v[k + 1] ?? 0);
-    lists.cosZ.push(Math.cos((90 - alt) * RAD));
-    lists.cosZTrue.push(Math.cos((90 - (v[k + 2] ?? 0)) * RAD));
-    lists.ghiClear.push(clearSkyGhi(stop, alt, dniExtra));
+    lists.push(
+      w,
+      ms,
+      alt,
+      v[k + 1] ?? 0,
+      Math.cos((90 - alt) * RAD),
+      Math.cos((90 - (v[k + 2] ?? 0)) * RAD),
+      clearSkyGhi(stop, alt, dniExtra),
+    );
   };
   let prevEndMs = Number.NaN;
   let prevLat = Number.NaN;
   let prevLon = Number.NaN;
   for (let i = 0; i < p.n; i++) {
-    start[i] = lists.weight.length;
+    start[i] = lists.length;
     const t = p.startMs[i] ?? 0;
     const dt = (p.stepH[i] ?? 1) * HOUR_MS;
     const lat = p.lat[i] ?? 0;
@@ -261,7 +322,7 @@ function fillSun(p: Prepared, stops: readonly Stop[], solarConstant: number): vo
     prevEndMs = t + dt;
     prevLat = lat;
     prevLon = lon;
-    const lit = [pos[0] ?? 0, pos[3] ?? 0, pos[6] ?? 0].filter((alt) => alt > 0).length;
+    const lit = ((pos[0] ?? 0) > 0 ? 1 : 0) + ((pos[3] ?? 0) > 0 ? 1 : 0) + ((pos[6] ?? 0) > 0 ? 1 : 0);
     if (lit === 3) {
       add(stop, t, 1 / 6, pos, 0, dniExtra);
       add(stop, t + dt / 2, 4 / 6, pos, 3, dniExtra);
@@ -282,17 +343,8 @@ function fillSun(p: Prepared, stops: readonly Stop[], solarConstant: number): vo
       }
     }
   }
-  start[p.n] = lists.weight.length;
-  p.sun = {
-    start,
-    weight: Float64Array.from(lists.weight),
-    atMs: Float64Array.from(lists.atMs),
-    altDeg: Float64Array.from(lists.altDeg),
-    azDeg: Float64Array.from(lists.azDeg),
-    cosZ: Float64Array.from(lists.cosZ),
-    cosZTrue: Float64Array.from(lists.cosZTrue),
-    ghiClear: Float64Array.from(lists.ghiClear),
-  };
+  start[p.n] = lists.length;
+  p.sun = lists.done(start);
 }
 
 export function localStep(p: Prepared, i: number): LocalStep {

@@ -266,12 +266,15 @@ export function simulateParsed(input: EngineInput): SimulationResult {
   const { p, solar, planned, l, r, sky, years, sources, flags } = planTrip(input);
   // The headline's energy short is the flags' own figures added up, so the page shows one number for one thing.
   const energyShortWh = flags.reduce((s, f) => (isShortfall(f) ? s + f.energyShortWh : s), 0);
+  // The band's walks run before the ledger rows are built: the rows are the result's largest part, and a garbage
+  // collection during the walks would have to copy every one of them.
+  const band = input.options.skyBand && !years ? { better: bandRun(p, -1), worse: bandRun(p, 1) } : null;
   return {
     ledger: ledgerRows(p, l, solar, planned.loads, sky?.ambientC ?? p.ambientC),
     days: daySheets(p, l),
     headline: { ...headline(p, l, r), energyShortWh },
     flags,
-    band: input.options.skyBand && !years ? { better: bandRun(p, -1), worse: bandRun(p, 1) } : null,
+    band,
     chance: years?.chance ?? null,
     socBand: years?.socBand ?? null,
     skies: { sources, assumedStops: sources.filter((s) => s === 'preset').length },

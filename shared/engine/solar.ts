@@ -100,12 +100,14 @@ function geometry(p: Prepared): Geometry {
       const alt = sun.altDeg[k] ?? 0;
       const az = sun.azDeg[k] ?? 0;
       g.beamF[k] = beamFactor(exp, alt, az);
-      panels.forEach((panel, j) => {
+      for (let j = 0; j < m; j++) {
+        const panel = panels[j];
+        if (!panel) continue;
         const ci = Math.max(0, cosIncidence(90 - alt, az, panel.tiltDeg, panel.azimuthDeg));
         g.cosInc[k * m + j] = ci;
         g.rb[k * m + j] = beamRatio(ci, sun.cosZ[k] ?? 0);
         g.beamIam[k * m + j] = arrays[j]?.glass.beamIam(ci) ?? 0;
-      });
+      }
     }
   }
   geometryCache.set(p, g);
