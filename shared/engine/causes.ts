@@ -4,7 +4,6 @@
 // those a hookup or a running generator carried) and the inverter's own idle draw and conversion loss; the battery's
 // discharge losses are their own cause. An appliance's energy per step is the load model's (loads.ts) as the
 // precomputation booked it, or for heating and cooling the running share from the cabin heat balance (climate.ts).
-import type { Appliance } from '../schemas/appliance';
 import type { StepLoads } from './climate';
 import { applianceEnergyWh } from './loads';
 import type { Prepared } from './prepare';
@@ -21,19 +20,6 @@ export function drawdownStart(l: LedgerColumns, from: number, to: number): numbe
   let best = from;
   for (let i = from; i <= to; i++) if ((l.socPct[i] ?? 0) >= (l.socPct[best] ?? 0)) best = i;
   return best;
-}
-
-/** Appliance j's electric energy in step i: the precomputation's fixed load, or (heating and cooling) the load
- * model on the running share the cabin heat balance gave under this sky. */
-function applianceWh(
-  ctx: Ctx,
-  a: Appliance,
-  fixedWh: Float64Array | undefined,
-  run: Float64Array | undefined,
-  i: number,
-) {
-  if (run) return applianceEnergyWh(a, run[i] ?? 0, ctx.p.stepH[i] ?? 1);
-  return fixedWh?.[i] ?? 0;
 }
 
 /** The AC energy of step i that went through the inverter: what the hookup and a running generator did not carry. */
@@ -74,14 +60,17 @@ export function attributeDraw(ctx: Ctx, from: number, to: number): Cause[] {
   for (let j = 0; j < appliances.length; j++) {
     const a = appliances[j];
     if (!a) continue;
-    const fixedWh = p.applianceWh[j];
+    // Heating and cooling: the load model on the running share the cabin heat balance gave under this sky; any
+    // other appliance: its energy as the precomputation booked it.
     const run = ctx.loads.thermostatRun.get(j);
+    const fixedWh = p.applianceWh[j];
     const ac = a.circuit === 'ac';
     let wh = 0;
     for (let k = 0; k < rows; k++) {
       const rowShare = share[k] ?? 0;
       if (rowShare === 0) continue;
-      const e = applianceWh(ctx, a, fixedWh, run, from + k);
+      const i = from + k;
+      const e = run ? applianceEnergyWh(a, run[i] ?? 0, p.stepH[i] ?? 1) : (fixedWh?.[i] ?? 0);
       if (e <= 0) continue;
       wh += e * rowShare * (ac ? (acShare[k] ?? 0) : 1);
     }

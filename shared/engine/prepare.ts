@@ -201,7 +201,7 @@ const SAMPLE_COLUMNS: readonly SampleColumn[] = ['weight', 'atMs', 'altDeg', 'az
 /** The sun samples' columns while they are filled: typed arrays with room to spare, doubled when full. */
 class SampleColumns {
   length = 0;
-  private cols: Record<SampleColumn, Float64Array>;
+  cols: Record<SampleColumn, Float64Array>;
 
   constructor(capacity: number) {
     this.cols = this.allocate(Math.max(16, capacity));
@@ -221,21 +221,14 @@ class SampleColumns {
     };
   }
 
-  push(weight: number, atMs: number, altDeg: number, azDeg: number, cosZ: number, cosZTrue: number, ghi: number) {
-    const c = this.cols;
-    if (this.length === c.weight.length) {
+  /** The index of a new sample, whose columns the caller then fills. */
+  next(): number {
+    if (this.length === this.cols.weight.length) {
       const bigger = this.allocate(2 * this.length);
-      for (const k of SAMPLE_COLUMNS) bigger[k].set(c[k]);
+      for (const k of SAMPLE_COLUMNS) bigger[k].set(this.cols[k]);
       this.cols = bigger;
     }
-    const at = this.length++;
-    this.cols.weight[at] = weight;
-    this.cols.atMs[at] = atMs;
-    this.cols.altDeg[at] = altDeg;
-    this.cols.azDeg[at] = azDeg;
-    this.cols.cosZ[at] = cosZ;
-    this.cols.cosZTrue[at] = cosZTrue;
-    this.cols.ghiClear[at] = ghi;
+    return this.length++;
   }
 
   /** The filled part of each column (views, not copies). */
@@ -286,15 +279,15 @@ function fillSun(p: Prepared, stops: readonly Stop[], solarConstant: number): vo
   const add = (stop: Stop | undefined, ms: number, w: number, v: Float64Array, k: number, dniExtra: number) => {
     const alt = v[k] ?? 0;
     if (alt <= 0) return; // below the horizon: no light, no sample
-    lists.push(
-      w,
-      ms,
-      alt,
-      v[k + 1] ?? 0,
-      Math.cos((90 - alt) * RAD),
-      Math.cos((90 - (v[k + 2] ?? 0)) * RAD),
-      clearSkyGhi(stop, alt, dniExtra),
-    );
+    const at = lists.next();
+    const c = lists.cols;
+    c.weight[at] = w;
+    c.atMs[at] = ms;
+    c.altDeg[at] = alt;
+    c.azDeg[at] = v[k + 1] ?? 0;
+    c.cosZ[at] = Math.cos((90 - alt) * RAD);
+    c.cosZTrue[at] = Math.cos((90 - (v[k + 2] ?? 0)) * RAD);
+    c.ghiClear[at] = clearSkyGhi(stop, alt, dniExtra);
   };
   let prevEndMs = Number.NaN;
   let prevLat = Number.NaN;
@@ -446,7 +439,7 @@ function fillLoads(p: Prepared): void {
       p.thermostats.push({
         index: j,
         appliance: a,
-        active: Float64Array.from(share.subarray(0, n)),
+        active: share.slice(0, n),
         heavyCurrentA: currentA > i20 ? currentA : 0,
       });
       continue;
