@@ -251,14 +251,22 @@ class SampleColumns {
 /** Each stop's exposure for the season of each step: deciduous cover is bare in its leaf-off months. */
 function fillExposures(p: Prepared, stops: readonly Stop[]): void {
   p.exposures = [resolveExposure({ kind: 'preset', preset: 'open' })];
-  const index = new Map<string, number>();
+  // Exposure k for stop w in leaf (2w) or bare (2w + 1); the month is read once per local day, not per step.
+  const index = new Map<number, number>();
+  let day = Number.NaN;
+  let month = 0;
   for (let i = 0; i < p.n; i++) {
     const w = p.where[i] ?? -1;
     const stop = w >= 0 ? stops[w] : undefined;
     if (!stop) continue; // a drive: open sky
-    const month = localMonth(p.startMs[i] ?? 0, p.offsetMin[i] ?? 0);
+    const t = p.startMs[i] ?? 0;
+    const off = p.offsetMin[i] ?? 0;
+    if (localDayNumber(t, off) !== day) {
+      day = localDayNumber(t, off);
+      month = localMonth(t, off);
+    }
     const bare = stop.exposure.kind === 'canopy' && stop.exposure.deciduous && leafOff(month, stop.lat);
-    const key = `${w}:${bare ? 'bare' : 'leaf'}`;
+    const key = 2 * w + (bare ? 1 : 0);
     let k = index.get(key);
     if (k === undefined) {
       k = p.exposures.length;
