@@ -463,21 +463,33 @@ function fillLoads(p: Prepared): void {
     const energy = p.applianceWh[j] ?? new Float64Array(n);
     const running = currentA > i20 ? new Float64Array(n) : null;
     if (running) p.heavy.push({ circuit: isAc ? 'ac' : 'dc', currentA, runningWh: running });
+    // Steps with the same share and length draw the same energies: worked out when either changes, not per step.
+    let lastShare = Number.NaN;
+    let lastStepH = Number.NaN;
+    let e = 0;
+    let runningE = 0;
+    let heatE = 0;
     for (let i = 0; i < n; i++) {
       const sh = always ? 1 : (share[i] ?? 0);
       if (skipOff && sh === 0) continue;
-      const runShare = sh * a.dutyCycle;
       const dtH = stepH[i] ?? 1;
-      const e = meter.energyWh(runShare, dtH);
+      if (sh !== lastShare || dtH !== lastStepH) {
+        lastShare = sh;
+        lastStepH = dtH;
+        const runShare = sh * a.dutyCycle;
+        e = meter.energyWh(runShare, dtH);
+        runningE = running ? meter.runningWh(runShare, dtH) : 0;
+        heatE = heats ? meter.heatWh(runShare, dtH) : 0;
+      }
       energy[i] = e;
-      if (running) running[i] = meter.runningWh(runShare, dtH);
+      if (running) running[i] = runningE;
       total[i] = (total[i] ?? 0) + e;
       if (isAc) {
         if (sh > 0) {
           acRunningW[i] = (acRunningW[i] ?? 0) + runningTotalW;
           acSurgeExtraW[i] = Math.max(acSurgeExtraW[i] ?? 0, surgeExtra);
         }
-      } else if (heats) heatWh[i] = (heatWh[i] ?? 0) + meter.heatWh(runShare, dtH);
+      } else if (heats) heatWh[i] = (heatWh[i] ?? 0) + heatE;
     }
     if (isAc && a.standbyW > 0) acStandbyOn.fill(1, 0, n);
   }
