@@ -85,14 +85,23 @@ export function attributeDraw(ctx: Ctx, from: number, to: number): Cause[] {
   if (total <= 0) return [];
   // Only the causes kept are built, each once and in one shape.
   const causes: Cause[] = [];
-  const keep = (kind: Cause['kind'], name: string, applianceId: string | null, wh: number): void => {
-    const sharePct = (wh / total) * 100;
-    if (sharePct / 100 >= SMALLEST_SHARE) causes.push({ kind, name, applianceId, wh, sharePct });
-  };
-  appliances.forEach((a, j) => keep('appliance', a.name, a.id, byAppliance[j] ?? 0));
-  keep('inverter', 'inverter idle and conversion', null, inverterWh);
-  keep('battery-loss', 'battery losses', null, batteryLossWh);
+  appliances.forEach((a, j) => keepCause(causes, total, 'appliance', a.name, a.id, byAppliance[j] ?? 0));
+  keepCause(causes, total, 'inverter', 'inverter idle and conversion', null, inverterWh);
+  keepCause(causes, total, 'battery-loss', 'battery losses', null, batteryLossWh);
   return causes.sort((a, b) => b.wh - a.wh);
+}
+
+/** Add a cause to the list when its share of the total draw is large enough to name. */
+function keepCause(
+  causes: Cause[],
+  total: number,
+  kind: Cause['kind'],
+  name: string,
+  applianceId: string | null,
+  wh: number,
+): void {
+  const sharePct = (wh / total) * 100;
+  if (sharePct / 100 >= SMALLEST_SHARE) causes.push({ kind, name, applianceId, wh, sharePct });
 }
 
 /** "roof air conditioner 71 %, fridge 12 %, lights 6 %": the leading causes, as a flag's text names them. */
