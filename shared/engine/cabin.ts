@@ -54,8 +54,12 @@ export function cabinModel(c: Cabin): CabinModel {
     roofGainPerWm2: (roof * ROOF_ABSORPTANCE * u) / OUTSIDE_FILM_W_M2K,
     sideGainPerWm2: (walls * WALL_ABSORPTANCE * u) / OUTSIDE_FILM_W_M2K + windows * WINDOW_SHGC,
     peopleW: c.occupants * PERSON_W,
-    floatC: (outsideC, gainsW) => freeRunningC(m, outsideC, gainsW),
-    heatToMove: (mode, cabinC, setPointC) => heatToMoveW(m, mode, cabinC, setPointC),
+    floatC(outsideC, gainsW) {
+      return freeRunningC(m, outsideC, gainsW);
+    },
+    heatToMove(mode, cabinC, setPointC) {
+      return heatToMoveW(m, mode, cabinC, setPointC);
+    },
   };
   return m;
 }

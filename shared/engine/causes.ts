@@ -2,12 +2,11 @@
 // last flag, or the trip's start, to the flag's lowest charge), each step's battery draw is shared out among what it
 // fed in proportion to their energy in that step: the DC loads, the AC loads that went through the inverter (not
 // those a hookup or a running generator carried) and the inverter's own idle draw and conversion loss; the battery's
-// discharge losses are their own cause. An appliance's energy per step is the load model's (loads.ts), or for
-// heating and cooling the running share from the cabin heat balance (climate.ts).
-import type { Appliance } from '../schemas/appliance';
+// discharge losses are their own cause. An appliance's energy per step is the load model's (loads.ts) as the
+// precomputation booked it, or for heating and cooling the running share from the cabin heat balance (climate.ts).
 import type { StepLoads } from './climate';
-import { applianceEnergyWh, scheduledShare } from './loads';
-import { localStep, prevDayType, type Prepared } from './prepare';
+import { applianceEnergyWh } from './loads';
+import type { Prepared } from './prepare';
 import type { Cause } from './result-types';
 import type { LedgerColumns } from './walk';
 import { nameInSentence } from './flag-text';
@@ -24,14 +23,6 @@ export function drawdownStart(l: LedgerColumns, from: number, to: number): numbe
   return best;
 }
 
-function applianceWh(ctx: Ctx, a: Appliance, j: number, i: number): number {
-  const dtH = ctx.p.stepH[i] ?? 1;
-  const run = ctx.loads.thermostatRun.get(j);
-  if (run) return applianceEnergyWh(a, run[i] ?? 0, dtH);
-  const share = scheduledShare(a.schedule, localStep(ctx.p, i), prevDayType(ctx.p, i));
-  return applianceEnergyWh(a, share * a.dutyCycle, dtH);
-}
-
 /** The AC energy of step i that went through the inverter: what the hookup and a running generator did not carry. */
 function acThroughInverterWh(ctx: Ctx, i: number): number {
   const { p, l } = ctx;
@@ -44,7 +35,11 @@ function acThroughInverterWh(ctx: Ctx, i: number): number {
 export function attributeDraw(ctx: Ctx, from: number, to: number): Cause[] {
   const { p, l } = ctx;
   const appliances = p.input.appliances;
-  const byAppliance = new Float64Array(appliances.length);
+  // Each row's share of its demand the battery met (0: it met none, the row is skipped) and the share of its AC
+  // loads that went through the inverter, worked out once for all the appliances.
+  const rows = Math.max(0, to - from + 1);
+  const share = new Float64Array(rows);
+  const acShare = new Float64Array(rows);
   let inverterWh = 0;
   let batteryLossWh = 0;
   for (let i = from; i <= to; i++) {
@@ -56,32 +51,58 @@ export function attributeDraw(ctx: Ctx, from: number, to: number): Cause[] {
     const dc = l.dcLoadWh[i] ?? 0;
     const demand = dc + acInv + invLoss;
     if (demand <= 0) continue;
-    const share = Math.min(1, draw / demand);
-    const acShare = (l.acLoadWh[i] ?? 0) > 0 ? acInv / (l.acLoadWh[i] ?? 1) : 0;
-    for (let j = 0; j < appliances.length; j++) {
-      const a = appliances[j];
-      if (!a) continue;
-      const wh = applianceWh(ctx, a, j, i);
-      if (wh <= 0) continue;
-      byAppliance[j] = (byAppliance[j] ?? 0) + wh * share * (a.circuit === 'ac' ? acShare : 1);
-    }
-    inverterWh += invLoss * share;
+    const rowShare = Math.min(1, draw / demand);
+    share[i - from] = rowShare;
+    acShare[i - from] = (l.acLoadWh[i] ?? 0) > 0 ? acInv / (l.acLoadWh[i] ?? 1) : 0;
+    inverterWh += invLoss * rowShare;
     if (flow < 0) batteryLossWh += l.batteryLossWh[i] ?? 0;
   }
-  const causes: Omit<Cause, 'sharePct'>[] = appliances.map((a, j) => ({
-    kind: 'appliance' as const,
-    name: a.name,
-    applianceId: a.id,
-    wh: byAppliance[j] ?? 0,
-  }));
-  causes.push({ kind: 'inverter', name: 'inverter idle and conversion', applianceId: null, wh: inverterWh });
-  causes.push({ kind: 'battery-loss', name: 'battery losses', applianceId: null, wh: batteryLossWh });
-  const total = causes.reduce((s, c) => s + c.wh, 0);
+  const byAppliance = new Float64Array(appliances.length);
+  for (let j = 0; j < appliances.length; j++) {
+    const a = appliances[j];
+    if (!a) continue;
+    // Heating and cooling: the load model on the running share the cabin heat balance gave under this sky; any
+    // other appliance: its energy as the precomputation booked it.
+    const run = ctx.loads.thermostatRun.get(j);
+    const fixedWh = p.applianceWh[j];
+    const ac = a.circuit === 'ac';
+    let wh = 0;
+    for (let k = 0; k < rows; k++) {
+      const rowShare = share[k] ?? 0;
+      if (rowShare === 0) continue;
+      const i = from + k;
+      const e = run ? applianceEnergyWh(a, run[i] ?? 0, p.stepH[i] ?? 1) : (fixedWh?.[i] ?? 0);
+      if (e <= 0) continue;
+      wh += e * rowShare * (ac ? (acShare[k] ?? 0) : 1);
+    }
+    byAppliance[j] = wh;
+  }
+  // Added in the list's order (appliances, the inverter, battery losses), so the total is the same number whichever
+  // causes are left out below.
+  let total = 0;
+  for (let j = 0; j < byAppliance.length; j++) total += byAppliance[j] ?? 0;
+  total += inverterWh;
+  total += batteryLossWh;
   if (total <= 0) return [];
-  return causes
-    .map((c) => ({ ...c, sharePct: (c.wh / total) * 100 }))
-    .filter((c) => c.sharePct / 100 >= SMALLEST_SHARE)
-    .sort((a, b) => b.wh - a.wh);
+  // Only the causes kept are built, each once and in one shape.
+  const causes: Cause[] = [];
+  appliances.forEach((a, j) => keepCause(causes, total, 'appliance', a.name, a.id, byAppliance[j] ?? 0));
+  keepCause(causes, total, 'inverter', 'inverter idle and conversion', null, inverterWh);
+  keepCause(causes, total, 'battery-loss', 'battery losses', null, batteryLossWh);
+  return causes.sort((a, b) => b.wh - a.wh);
+}
+
+/** Add a cause to the list when its share of the total draw is large enough to name. */
+function keepCause(
+  causes: Cause[],
+  total: number,
+  kind: Cause['kind'],
+  name: string,
+  applianceId: string | null,
+  wh: number,
+): void {
+  const sharePct = (wh / total) * 100;
+  if (sharePct / 100 >= SMALLEST_SHARE) causes.push({ kind, name, applianceId, wh, sharePct });
 }
 
 /** "roof air conditioner 71 %, fridge 12 %, lights 6 %": the leading causes, as a flag's text names them. */

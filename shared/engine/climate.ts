@@ -50,36 +50,55 @@ export function climateModel(p: Prepared): CabinModel {
   return cabinModel(p.input.rig.cabin);
 }
 
+/** The loads already worked out under another sky with the same air: the steps whose cabin solar gain is the same
+ * number have the same loads, and are copied rather than worked out again (the sky band's skies differ from the
+ * planned one only in daylight, at the stops whose outlook they shift). */
+export type LoadsLike = { cabinSolarW: Float64Array; ambientC: Float64Array; loads: StepLoads };
+
 /**
  * The step loads under a sky whose solar gain into the cabin is cabinSolarW (W, step mean) and whose outside air is
  * ambientC (°C, step mean; the stops' low/high curve unless a record replaces it). The fixed loads are the
  * precomputation's; with no thermostat-run appliance they are used as they are.
  */
-export function climateLoads(p: Prepared, cabinSolarW: Float64Array, ambientC = p.ambientC): StepLoads {
+export function climateLoads(
+  p: Prepared,
+  cabinSolarW: Float64Array,
+  ambientC = p.ambientC,
+  likeLoads?: LoadsLike,
+): StepLoads {
   const cabin = climateModel(p);
   const n = p.n;
   const units = p.thermostats;
-  // With no thermostat-run appliance the fixed loads are the loads: shared, not copied.
-  const own = <T extends Float64Array | Uint8Array>(a: T): T => (units.length === 0 ? a : (a.slice() as T));
-  const acWh = own(p.acWh);
-  const dcWh = own(p.dcWh);
-  const propaneHeatWh = own(p.heatWh);
-  const acRunningW = own(p.acRunningW);
-  const acSurgeExtraW = own(p.acSurgeExtraW);
-  const acStandbyOn = own(p.acStandbyOn);
+  const like = likeLoads && likeLoads.ambientC === ambientC && units.length > 0 ? likeLoads : undefined;
+  // With no thermostat-run appliance the fixed loads are the loads: shared, not copied. Copying the like loads gives
+  // every unchanged step its figures at once.
+  const own = <T extends Float64Array | Uint8Array>(fixed: T, liked: T | undefined): T =>
+    units.length === 0 ? fixed : ((liked ?? fixed).slice() as T);
+  const acWh = own(p.acWh, like?.loads.acWh);
+  const dcWh = own(p.dcWh, like?.loads.dcWh);
+  const propaneHeatWh = own(p.heatWh, like?.loads.propaneHeatWh);
+  const acRunningW = own(p.acRunningW, like?.loads.acRunningW);
+  const acSurgeExtraW = own(p.acSurgeExtraW, like?.loads.acSurgeExtraW);
+  const acStandbyOn = own(p.acStandbyOn, like?.loads.acStandbyOn);
   const heavy = [...p.heavy];
-  const cabinC = new Float64Array(n);
+  const cabinC = like ? like.loads.cabinC.slice() : new Float64Array(n);
   const thermostatRun = new Map<number, Float64Array>();
   // Each unit's fixed figures, worked out once.
   const plans = units.map((t) => {
     const a = t.appliance;
-    const run = new Float64Array(n);
+    const run = like?.loads.thermostatRun.get(t.index)?.slice() ?? new Float64Array(n);
     thermostatRun.set(t.index, run);
     if (a.circuit === 'ac' && a.standbyW > 0) acStandbyOn.fill(1);
-    // Running energy of a unit whose running current passes the bank's 20-hour current, for Peukert.
+    // Running energy of a unit whose running current passes the bank's 20-hour current, for Peukert (the like
+    // loads list the units' in the same order, after the fixed loads').
+    const likeRunningWh = like?.loads.heavy[heavy.length]?.runningWh;
     const load: HeavyLoad | null =
       t.heavyCurrentA > 0
-        ? { circuit: a.circuit === 'ac' ? 'ac' : 'dc', currentA: t.heavyCurrentA, runningWh: new Float64Array(n) }
+        ? {
+            circuit: a.circuit === 'ac' ? 'ac' : 'dc',
+            currentA: t.heavyCurrentA,
+            runningWh: likeRunningWh?.slice() ?? new Float64Array(n),
+          }
         : null;
     if (load) heavy.push(load);
     const s = a.schedule;
@@ -98,6 +117,19 @@ export function climateLoads(p: Prepared, cabinSolarW: Float64Array, ambientC = 
     };
   });
   for (let i = 0; i < n; i++) {
+    if (like) {
+      if (cabinSolarW[i] === like.cabinSolarW[i]) continue;
+      // A step worked out again starts from the fixed loads, as every step does without like loads.
+      acWh[i] = p.acWh[i] ?? 0;
+      dcWh[i] = p.dcWh[i] ?? 0;
+      propaneHeatWh[i] = p.heatWh[i] ?? 0;
+      acRunningW[i] = p.acRunningW[i] ?? 0;
+      acSurgeExtraW[i] = p.acSurgeExtraW[i] ?? 0;
+      for (const u of plans) {
+        u.run[i] = 0;
+        if (u.load) u.load.runningWh[i] = 0;
+      }
+    }
     const dtH = p.stepH[i] ?? 1;
     const gainsW = (cabinSolarW[i] ?? 0) + (p.internalGainW[i] ?? 0) + cabin.peopleW;
     let air = cabin.floatC(ambientC[i] ?? 15, gainsW);

@@ -9,10 +9,15 @@ export const MARTIN_RUIZ_AR = 0.16;
 const C1 = 0.4244; // 4/(3π) as the paper rounds it
 const RAD = Math.PI / 180;
 
+/** Beam IAM from the cosine of the angle of incidence, for one a_r: its normalising term worked out once. */
+export function martinRuizIamOf(aR = MARTIN_RUIZ_AR): (cosIncidence: number) => number {
+  const atNormal = 1 - Math.exp(-1 / aR);
+  return (cosIncidence) => (cosIncidence > 0 ? (1 - Math.exp(-cosIncidence / aR)) / atNormal : 0);
+}
+
 /** Beam IAM from the cosine of the angle of incidence. */
 export function martinRuizIam(cosIncidence: number, aR = MARTIN_RUIZ_AR): number {
-  if (!(cosIncidence > 0)) return 0;
-  return (1 - Math.exp(-cosIncidence / aR)) / (1 - Math.exp(-1 / aR));
+  return martinRuizIamOf(aR)(cosIncidence);
 }
 
 function diffuseIam(trigTerm: number, aR: number): number {
@@ -39,7 +44,7 @@ export type Glass = { beamIam: (cosInc: number) => number; skyIam: number; groun
 
 export function glassOf(tiltDeg: number): Glass {
   const diffuse = martinRuizDiffuse(tiltDeg);
-  return { beamIam: (cosInc) => martinRuizIam(cosInc), skyIam: diffuse.sky, groundIam: diffuse.ground };
+  return { beamIam: martinRuizIamOf(), skyIam: diffuse.sky, groundIam: diffuse.ground };
 }
 
 /** Glass that passes everything: the check that leaves incidence losses out. */

@@ -47,10 +47,18 @@ export type ApplianceMeter = {
   heatWh: (runShare: number, durationH: number) => number;
 };
 
+// Methods, not arrow-function properties: built per appliance and per sky, and under tsx each named arrow would also
+// be given its name by a defineProperty call.
 export function applianceMeter(a: Appliance): ApplianceMeter {
   return {
-    energyWh: (runShare, durationH) => applianceEnergyWh(a, runShare, durationH),
-    runningWh: (runShare, durationH) => applianceRunningWh(a, runShare, durationH),
-    heatWh: (runShare, durationH) => applianceHeatWh(a, runShare, durationH),
+    energyWh(runShare, durationH) {
+      return applianceEnergyWh(a, runShare, durationH);
+    },
+    runningWh(runShare, durationH) {
+      return applianceRunningWh(a, runShare, durationH);
+    },
+    heatWh(runShare, durationH) {
+      return applianceHeatWh(a, runShare, durationH);
+    },
   };
 }

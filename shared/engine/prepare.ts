@@ -85,8 +85,12 @@ export type Prepared = {
   acStandbyOn: Uint8Array;
   /** Share of the step inside the hours the inverter is kept on (scheduled inverters). */
   inverterOnShare: Float64Array;
-  /** Electric Wh of appliance a at stop w: index a × stops + w, for routine appliances (the loads a flag may suggest moving). */
-  applianceStopWh: Float64Array;
+  /**
+   * Electric Wh of each appliance per step, by its index in the appliance list (the load model's figure, kept so a
+   * flag's causes read it instead of working the schedule out again). Empty for thermostat-run appliances: their
+   * energy depends on the sky (climate.ts).
+   */
+  applianceWh: Float64Array[];
   /** Loads whose running current passes the bank's 20-hour current, with their running energy per step (Peukert). */
   heavy: HeavyLoad[];
   /**
@@ -191,19 +195,78 @@ function dniExtraAt(c: DayCache, utcMs: number, solarConstant: number): number {
   return c.dniExtra;
 }
 
-type SampleLists = { [K in Exclude<keyof SunSamples, 'start'>]: number[] };
+type SampleColumn = Exclude<keyof SunSamples, 'start'>;
+const SAMPLE_COLUMNS: readonly SampleColumn[] = ['weight', 'atMs', 'altDeg', 'azDeg', 'cosZ', 'cosZTrue', 'ghiClear'];
+
+/** The sun samples' columns while they are filled: typed arrays with room to spare, doubled when full. */
+class SampleColumns {
+  length = 0;
+  cols: Record<SampleColumn, Float64Array>;
+
+  constructor(capacity: number) {
+    this.cols = this.allocate(Math.max(16, capacity));
+  }
+
+  private allocate(capacity: number): Record<SampleColumn, Float64Array> {
+    const buf = new ArrayBuffer(8 * capacity * SAMPLE_COLUMNS.length);
+    const col = (k: number): Float64Array => new Float64Array(buf, 8 * capacity * k, capacity);
+    return {
+      weight: col(0),
+      atMs: col(1),
+      altDeg: col(2),
+      azDeg: col(3),
+      cosZ: col(4),
+      cosZTrue: col(5),
+      ghiClear: col(6),
+    };
+  }
+
+  /** The index of a new sample, whose columns the caller then fills. */
+  next(): number {
+    if (this.length === this.cols.weight.length) {
+      const bigger = this.allocate(2 * this.length);
+      for (const k of SAMPLE_COLUMNS) bigger[k].set(this.cols[k]);
+      this.cols = bigger;
+    }
+    return this.length++;
+  }
+
+  /** The filled part of each column (views, not copies). */
+  done(start: Int32Array): SunSamples {
+    const c = this.cols;
+    const n = this.length;
+    return {
+      start,
+      weight: c.weight.subarray(0, n),
+      atMs: c.atMs.subarray(0, n),
+      altDeg: c.altDeg.subarray(0, n),
+      azDeg: c.azDeg.subarray(0, n),
+      cosZ: c.cosZ.subarray(0, n),
+      cosZTrue: c.cosZTrue.subarray(0, n),
+      ghiClear: c.ghiClear.subarray(0, n),
+    };
+  }
+}
 
 /** Each stop's exposure for the season of each step: deciduous cover is bare in its leaf-off months. */
 function fillExposures(p: Prepared, stops: readonly Stop[]): void {
   p.exposures = [resolveExposure({ kind: 'preset', preset: 'open' })];
-  const index = new Map<string, number>();
+  // Exposure k for stop w in leaf (2w) or bare (2w + 1); the month is read once per local day, not per step.
+  const index = new Map<number, number>();
+  let day = Number.NaN;
+  let month = 0;
   for (let i = 0; i < p.n; i++) {
     const w = p.where[i] ?? -1;
     const stop = w >= 0 ? stops[w] : undefined;
     if (!stop) continue; // a drive: open sky
-    const month = localMonth(p.startMs[i] ?? 0, p.offsetMin[i] ?? 0);
+    const t = p.startMs[i] ?? 0;
+    const off = p.offsetMin[i] ?? 0;
+    if (localDayNumber(t, off) !== day) {
+      day = localDayNumber(t, off);
+      month = localMonth(t, off);
+    }
     const bare = stop.exposure.kind === 'canopy' && stop.exposure.deciduous && leafOff(month, stop.lat);
-    const key = `${w}:${bare ? 'bare' : 'leaf'}`;
+    const key = 2 * w + (bare ? 1 : 0);
     let k = index.get(key);
     if (k === undefined) {
       k = p.exposures.length;
@@ -219,23 +282,26 @@ function fillSun(p: Prepared, stops: readonly Stop[], solarConstant: number): vo
   const at = new Float64Array(3);
   const days: DayCache = { utcDay: Number.NaN, dniExtra: 0 };
   const start = new Int32Array(p.n + 1);
-  const lists: SampleLists = { weight: [], atMs: [], altDeg: [], azDeg: [], cosZ: [], cosZTrue: [], ghiClear: [] };
+  // Room for three samples per step (a lit step takes three; only sunrise and sunset steps take more).
+  const lists = new SampleColumns(3 * p.n + 2 * (2 * HORIZON_PANELS + 1));
   const add = (stop: Stop | undefined, ms: number, w: number, v: Float64Array, k: number, dniExtra: number) => {
     const alt = v[k] ?? 0;
     if (alt <= 0) return; // below the horizon: no light, no sample
-    lists.weight.push(w);
-    lists.atMs.push(ms);
-    lists.altDeg.push(alt);
-    lists.azDeg.push(v[k + 1] ?? 0);
-    lists.cosZ.push(Math.cos((90 - alt) * RAD));
-    lists.cosZTrue.push(Math.cos((90 - (v[k + 2] ?? 0)) * RAD));
-    lists.ghiClear.push(clearSkyGhi(stop, alt, dniExtra));
+    const at = lists.next();
+    const c = lists.cols;
+    c.weight[at] = w;
+    c.atMs[at] = ms;
+    c.altDeg[at] = alt;
+    c.azDeg[at] = v[k + 1] ?? 0;
+    c.cosZ[at] = Math.cos((90 - alt) * RAD);
+    c.cosZTrue[at] = Math.cos((90 - (v[k + 2] ?? 0)) * RAD);
+    c.ghiClear[at] = clearSkyGhi(stop, alt, dniExtra);
   };
   let prevEndMs = Number.NaN;
   let prevLat = Number.NaN;
   let prevLon = Number.NaN;
   for (let i = 0; i < p.n; i++) {
-    start[i] = lists.weight.length;
+    start[i] = lists.length;
     const t = p.startMs[i] ?? 0;
     const dt = (p.stepH[i] ?? 1) * HOUR_MS;
     const lat = p.lat[i] ?? 0;
@@ -257,7 +323,7 @@ function fillSun(p: Prepared, stops: readonly Stop[], solarConstant: number): vo
     prevEndMs = t + dt;
     prevLat = lat;
     prevLon = lon;
-    const lit = [pos[0] ?? 0, pos[3] ?? 0, pos[6] ?? 0].filter((alt) => alt > 0).length;
+    const lit = ((pos[0] ?? 0) > 0 ? 1 : 0) + ((pos[3] ?? 0) > 0 ? 1 : 0) + ((pos[6] ?? 0) > 0 ? 1 : 0);
     if (lit === 3) {
       add(stop, t, 1 / 6, pos, 0, dniExtra);
       add(stop, t + dt / 2, 4 / 6, pos, 3, dniExtra);
@@ -278,17 +344,8 @@ function fillSun(p: Prepared, stops: readonly Stop[], solarConstant: number): vo
       }
     }
   }
-  start[p.n] = lists.weight.length;
-  p.sun = {
-    start,
-    weight: Float64Array.from(lists.weight),
-    atMs: Float64Array.from(lists.atMs),
-    altDeg: Float64Array.from(lists.altDeg),
-    azDeg: Float64Array.from(lists.azDeg),
-    cosZ: Float64Array.from(lists.cosZ),
-    cosZTrue: Float64Array.from(lists.cosZTrue),
-    ghiClear: Float64Array.from(lists.ghiClear),
-  };
+  start[p.n] = lists.length;
+  p.sun = lists.done(start);
 }
 
 export function localStep(p: Prepared, i: number): LocalStep {
@@ -359,25 +416,15 @@ function fillShares(p: Prepared, a: Appliance, slots: () => { time: Slots; typed
 
 function fillLoads(p: Prepared): void {
   const appliances = p.input.appliances;
-  const stopsCount = p.input.trip.stops.length;
   const n = p.n;
-  const stopWh = new Float64Array(appliances.length * stopsCount);
-  p.applianceStopWh = stopWh;
+  // One buffer for every appliance's step energies (one allocation, not one per appliance).
+  const energies = new ArrayBuffer(8 * n * appliances.length);
+  p.applianceWh = appliances.map((_, j) => new Float64Array(energies, 8 * n * j, n));
   let known: { time: Slots; typed: Slots } | null = null;
   const slots = (): { time: Slots; typed: Slots } =>
     (known ??= { time: stepSlots(p, false), typed: stepSlots(p, true) });
   const share = new Float64Array(n);
-  const { stepH, where, acWh, dcWh, heatWh, acRunningW, acSurgeExtraW, acStandbyOn } = p;
-  // Steps of one stop are consecutive: per-stop totals add each stop's run of steps in time order.
-  const runs: { stop: number; from: number; to: number }[] = [];
-  for (let i = 0; i < n; i++) {
-    const w = where[i] ?? -1;
-    if (w < 0) continue;
-    const last = runs[runs.length - 1];
-    if (last && last.stop === w && last.to === i) last.to = i + 1;
-    else runs.push({ stop: w, from: i, to: i + 1 });
-  }
-  const energy = new Float64Array(n);
+  const { stepH, acWh, dcWh, heatWh, acRunningW, acSurgeExtraW, acStandbyOn } = p;
   const battery = p.input.rig.battery;
   const inverter = p.input.rig.inverter;
   /** Battery current while the appliance runs, A; AC loads through the inverter (none without one: unserved). */
@@ -395,11 +442,12 @@ function fillLoads(p: Prepared): void {
     if (!always) fillShares(p, a, slots, share);
     const currentA = runningCurrentA(a);
     if (a.schedule.kind === 'thermostat') {
+      p.applianceWh[j] = new Float64Array(0);
       // Heating and cooling depend on the sky (solar gain): their duty is worked out per scenario (climate.ts).
       p.thermostats.push({
         index: j,
         appliance: a,
-        active: Float64Array.from(share.subarray(0, n)),
+        active: share.slice(0, n),
         heavyCurrentA: currentA > i20 ? currentA : 0,
       });
       continue;
@@ -412,35 +460,38 @@ function fillLoads(p: Prepared): void {
     const surgeExtra = (a.surgeW ?? a.runningW) - a.runningW;
     // Off with no standby draw, a step adds exactly 0 to every total (which are never −0), so it is skipped.
     const skipOff = !always && a.standbyW === 0;
-    if (skipOff) energy.fill(0);
+    const energy = p.applianceWh[j] ?? new Float64Array(n);
     const running = currentA > i20 ? new Float64Array(n) : null;
     if (running) p.heavy.push({ circuit: isAc ? 'ac' : 'dc', currentA, runningWh: running });
+    // Steps with the same share and length draw the same energies: worked out when either changes, not per step.
+    let lastShare = Number.NaN;
+    let lastStepH = Number.NaN;
+    let e = 0;
+    let runningE = 0;
+    let heatE = 0;
     for (let i = 0; i < n; i++) {
       const sh = always ? 1 : (share[i] ?? 0);
       if (skipOff && sh === 0) continue;
-      const runShare = sh * a.dutyCycle;
       const dtH = stepH[i] ?? 1;
-      const e = meter.energyWh(runShare, dtH);
+      if (sh !== lastShare || dtH !== lastStepH) {
+        lastShare = sh;
+        lastStepH = dtH;
+        const runShare = sh * a.dutyCycle;
+        e = meter.energyWh(runShare, dtH);
+        runningE = running ? meter.runningWh(runShare, dtH) : 0;
+        heatE = heats ? meter.heatWh(runShare, dtH) : 0;
+      }
       energy[i] = e;
-      if (running) running[i] = meter.runningWh(runShare, dtH);
+      if (running) running[i] = runningE;
       total[i] = (total[i] ?? 0) + e;
       if (isAc) {
         if (sh > 0) {
           acRunningW[i] = (acRunningW[i] ?? 0) + runningTotalW;
           acSurgeExtraW[i] = Math.max(acSurgeExtraW[i] ?? 0, surgeExtra);
         }
-      } else if (heats) heatWh[i] = (heatWh[i] ?? 0) + meter.heatWh(runShare, dtH);
+      } else if (heats) heatWh[i] = (heatWh[i] ?? 0) + heatE;
     }
     if (isAc && a.standbyW > 0) acStandbyOn.fill(1, 0, n);
-    // Only routine loads are ever suggested for moving to a drive, so only theirs are totalled per stop.
-    if (a.schedule.kind === 'routine') {
-      const base = j * stopsCount;
-      for (const r of runs) {
-        let sum = stopWh[base + r.stop] ?? 0;
-        for (let i = r.from; i < r.to; i++) sum += energy[i] ?? 0;
-        stopWh[base + r.stop] = sum;
-      }
-    }
   }
 }
 
@@ -544,7 +595,7 @@ function allocate(input: EngineInput, n: number): Prepared {
     travelByDay: new Uint8Array(1),
     exposures: [],
     exposureOf: u8(),
-    applianceStopWh: new Float64Array(0),
+    applianceWh: [],
     heavy: [],
     internalGainW: new Float64Array(n),
     thermostats: [],
@@ -581,7 +632,7 @@ export function withAppliances(p: Prepared, appliances: Appliance[]): Prepared {
     acRunningW: new Float64Array(n),
     acSurgeExtraW: new Float64Array(n),
     acStandbyOn: new Uint8Array(n),
-    applianceStopWh: new Float64Array(0),
+    applianceWh: [],
     heavy: [],
     internalGainW: new Float64Array(n),
     thermostats: [],

@@ -5,7 +5,7 @@
 // (check-fixes.ts), asked for only when someone looks at the flags.
 import { engineInputSchema, type EngineInput, type EngineInputDraft } from '../schemas/engine-input';
 import { CHEMISTRY } from './battery';
-import { climateLoads, type StepLoads } from './climate';
+import { climateLoads, type LoadsLike, type StepLoads } from './climate';
 import { localIso, utcIso, whereAt } from './describe';
 import { buildFlags, isShortfall } from './flags';
 import { fuelUnit } from './fuel';
@@ -26,14 +26,15 @@ export function capacityWhOf(input: EngineInput): number {
   return input.rig.battery.capacityAh * input.rig.battery.nominalV;
 }
 
-export function plannedScenario(p: Prepared, solar: SolarSeries, ambientC = p.ambientC): Scenario {
+/** The walk's scenario under a solar series; `like`: loads under another sky to copy where the sky is the same. */
+export function plannedScenario(p: Prepared, solar: SolarSeries, ambientC = p.ambientC, like?: LoadsLike): Scenario {
   return {
     solarW: solar.availableW,
     solarScale: 1,
     capacityWh: capacityWhOf(p.input),
     hookupW: p.hookupW,
     generator: generatorPlanFor(p),
-    loads: climateLoads(p, solar.cabinSolarW, ambientC),
+    loads: climateLoads(p, solar.cabinSolarW, ambientC, like),
   };
 }
 
@@ -205,8 +206,8 @@ function headline(p: Prepared, l: LedgerColumns, r: WalkResult): Headline {
   };
 }
 
-function bandRun(p: Prepared, shift: -1 | 1): BandRun {
-  const r = walk(p, plannedScenario(p, solarSeries(p, shift)), null);
+function bandRun(p: Prepared, shift: -1 | 1, planned: LoadsLike): BandRun {
+  const r = walk(p, plannedScenario(p, solarSeries(p, shift), p.ambientC, planned), null);
   const socPct = new Array<number>(p.n);
   for (let i = 0; i < p.n; i++) socPct[i] = r.socPct[i] ?? 0;
   return { skyShift: shift, socPct, lowestSocPct: r.lowestSocPct };
@@ -266,12 +267,16 @@ export function simulateParsed(input: EngineInput): SimulationResult {
   const { p, solar, planned, l, r, sky, years, sources, flags } = planTrip(input);
   // The headline's energy short is the flags' own figures added up, so the page shows one number for one thing.
   const energyShortWh = flags.reduce((s, f) => (isShortfall(f) ? s + f.energyShortWh : s), 0);
+  // The band's walks run before the ledger rows are built: the rows are the result's largest part, and a garbage
+  // collection during the walks would have to copy every one of them.
+  const like = { cabinSolarW: solar.cabinSolarW, ambientC: sky?.ambientC ?? p.ambientC, loads: planned.loads };
+  const band = input.options.skyBand && !years ? { better: bandRun(p, -1, like), worse: bandRun(p, 1, like) } : null;
   return {
     ledger: ledgerRows(p, l, solar, planned.loads, sky?.ambientC ?? p.ambientC),
     days: daySheets(p, l),
     headline: { ...headline(p, l, r), energyShortWh },
     flags,
-    band: input.options.skyBand && !years ? { better: bandRun(p, -1), worse: bandRun(p, 1) } : null,
+    band,
     chance: years?.chance ?? null,
     socBand: years?.socBand ?? null,
     skies: { sources, assumedStops: sources.filter((s) => s === 'preset').length },

@@ -15,7 +15,7 @@ import type { StepSky } from './recorded-sky';
 import { cellTemperatureOf } from './pv-module';
 import { beamFactor, diffuseFactor } from './site-exposure';
 import { shiftSky, SKY_CLEARNESS } from './sky-outlook';
-import { beamRatio, cosIncidence, surfaceTransposer, type SurfaceParts } from './transposition';
+import { beamRatio, incidenceOn, surfaceTransposer, type SurfaceParts } from './transposition';
 
 export type SolarSeries = {
   /** Controller output available, W (step average). */
@@ -88,10 +88,9 @@ function geometry(p: Prepared): Geometry {
     beamIam: new Float64Array(ns * m),
     planned: null,
   };
-  const panels = p.input.rig.solarArrays.map((a) => ({
-    tiltDeg: a.mounting === 'tilted' ? a.tiltDeg : 0,
-    azimuthDeg: a.azimuthDeg,
-  }));
+  const incidence = p.input.rig.solarArrays.map((a) =>
+    incidenceOn(a.mounting === 'tilted' ? a.tiltDeg : 0, a.azimuthDeg),
+  );
   for (let i = 0; i < p.n; i++) {
     const exp = p.exposures[p.exposureOf[i] ?? 0] ?? p.exposures[0];
     if (!exp) continue;
@@ -100,12 +99,14 @@ function geometry(p: Prepared): Geometry {
       const alt = sun.altDeg[k] ?? 0;
       const az = sun.azDeg[k] ?? 0;
       g.beamF[k] = beamFactor(exp, alt, az);
-      panels.forEach((panel, j) => {
-        const ci = Math.max(0, cosIncidence(90 - alt, az, panel.tiltDeg, panel.azimuthDeg));
+      for (let j = 0; j < m; j++) {
+        const cosInc = incidence[j];
+        if (!cosInc) continue;
+        const ci = Math.max(0, cosInc(90 - alt, az));
         g.cosInc[k * m + j] = ci;
         g.rb[k * m + j] = beamRatio(ci, sun.cosZ[k] ?? 0);
         g.beamIam[k * m + j] = arrays[j]?.glass.beamIam(ci) ?? 0;
-      });
+      }
     }
   }
   geometryCache.set(p, g);

@@ -168,15 +168,27 @@ function isoDate(days: number): string {
 let lastDays = Number.NaN;
 let lastDate = '';
 
-/** YYYY-MM-DDTHH:MM of a UTC instant, as new Date(ms).toISOString() spells it. */
-function isoMinutes(ms: number): string {
+/**
+ * "HH:MM" and a tail (":00.000Z", "+01:00", or nothing) for each minute of the day, built the first time a label
+ * asks for it: a label is then its date and one of these, one join instead of four.
+ */
+const clockTables = new Map<string, string[]>();
+
+function clockWith(minuteOfDay: number, tail: string): string {
+  let table = clockTables.get(tail);
+  if (!table) clockTables.set(tail, (table = []));
+  return (table[minuteOfDay] ??=
+    `${TWO_DIGITS[Math.floor(minuteOfDay / 60)] ?? ''}:${TWO_DIGITS[minuteOfDay % 60] ?? ''}${tail}`);
+}
+
+/** YYYY-MM-DDTHH:MM of a UTC instant, as new Date(ms).toISOString() spells it, followed by a tail. */
+function isoMinutes(ms: number, tail = ''): string {
   const days = Math.floor(ms / DAY_MS);
   if (days !== lastDays) {
     lastDays = days;
     lastDate = isoDate(days);
   }
-  const minuteOfDay = Math.floor((ms - days * DAY_MS) / 60_000);
-  return `${lastDate}${TWO_DIGITS[Math.floor(minuteOfDay / 60)] ?? ''}:${TWO_DIGITS[minuteOfDay % 60] ?? ''}`;
+  return lastDate + clockWith(Math.floor((ms - days * DAY_MS) / 60_000), tail);
 }
 
 /** Whole milliseconds from 1970 to 9999: the fast path; anything else goes through Date, as before. */
@@ -186,7 +198,7 @@ const plainInstant = (ms: number): boolean => Number.isInteger(ms) && ms >= 0 &&
 export function utcIsoString(ms: number): string {
   if (!plainInstant(ms)) return new Date(ms).toISOString();
   const rest = ms - Math.floor(ms / 60_000) * 60_000;
-  if (rest === 0) return `${isoMinutes(ms)}:00.000Z`;
+  if (rest === 0) return isoMinutes(ms, ':00.000Z');
   const sec = Math.floor(rest / 1000);
   const milli = rest - sec * 1000;
   return `${isoMinutes(ms)}:${TWO_DIGITS[sec] ?? ''}.${String(milli).padStart(3, '0')}Z`;
@@ -210,8 +222,8 @@ function offsetSuffix(offsetMin: number): string {
 /** A local wall-clock label such as 2027-09-12T14:00+01:00, built without Date's local getters. */
 export function localLabel(utcMs: number, offsetMin: number): string {
   const wallMs = utcMs + offsetMin * 60_000;
-  const wall = plainInstant(wallMs) ? isoMinutes(wallMs) : new Date(wallMs).toISOString().slice(0, 16);
-  return `${wall}${offsetSuffix(offsetMin)}`;
+  const suffix = offsetSuffix(offsetMin);
+  return plainInstant(wallMs) ? isoMinutes(wallMs, suffix) : `${new Date(wallMs).toISOString().slice(0, 16)}${suffix}`;
 }
 
 export function localDayNumber(utcMs: number, offsetMin: number): number {

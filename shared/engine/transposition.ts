@@ -2,11 +2,21 @@
 // (Liu & Jordan 1963), Hay & Davies (1980) anisotropic sky, and ground-reflected light.
 const RAD = Math.PI / 180;
 
+/** cos of the angle of incidence on one surface, for a loop over many sun positions: its tilt's sine and cosine
+ * worked out once. Azimuths clockwise from north. */
+export function incidenceOn(tiltDeg: number, surfaceAzDeg: number): (zenithDeg: number, sunAzDeg: number) => number {
+  const b = tiltDeg * RAD;
+  const cosB = Math.cos(b);
+  const sinB = Math.sin(b);
+  return (zenithDeg, sunAzDeg) => {
+    const z = zenithDeg * RAD;
+    return Math.cos(z) * cosB + Math.sin(z) * sinB * Math.cos((sunAzDeg - surfaceAzDeg) * RAD);
+  };
+}
+
 /** cos of the angle of incidence on a surface; azimuths clockwise from north. */
 export function cosIncidence(zenithDeg: number, sunAzDeg: number, tiltDeg: number, surfaceAzDeg: number): number {
-  const z = zenithDeg * RAD;
-  const b = tiltDeg * RAD;
-  return Math.cos(z) * Math.cos(b) + Math.sin(z) * Math.sin(b) * Math.cos((sunAzDeg - surfaceAzDeg) * RAD);
+  return incidenceOn(tiltDeg, surfaceAzDeg)(zenithDeg, sunAzDeg);
 }
 
 /** Share of the sky dome a surface tilted tiltDeg sees (isotropic sky). */

@@ -4,7 +4,12 @@ import { IANAZone } from 'luxon';
 import { describe, expect, it } from 'vitest';
 import { sunPosition } from '@/shared/engine';
 import { sunPositionInto } from '@/shared/engine/sun-position';
+import { climateLoads } from '@/shared/engine/climate';
+import { prepare } from '@/shared/engine/prepare';
+import { solarSeries } from '@/shared/engine/solar';
 import { localLabel, utcIsoString, zoneOffsetMin } from '@/shared/engine/time-grid';
+import { engineInputSchema } from '@/shared/schemas/engine-input';
+import { GOLDEN_CASES } from './golden-inputs';
 
 // A fixed pseudo-random sequence (LCG), so a failure can be replayed.
 function lcg(seed: number): () => number {
@@ -69,5 +74,44 @@ describe('fast paths against the calls they replace', () => {
       if (utcIsoString(ms) !== new Date(ms).toISOString()) mismatches++;
     }
     expect(mismatches).toBe(0);
+  });
+
+  it('when the sky band copies the planned loads where its sky is unchanged, then they equal loads worked out afresh', () => {
+    let compared = 0;
+    for (const [name, draft] of Object.entries(GOLDEN_CASES)) {
+      const p = prepare(engineInputSchema.parse(draft));
+      if (p.thermostats.length === 0) continue;
+      const planned = solarSeries(p, 0);
+      const like = {
+        cabinSolarW: planned.cabinSolarW,
+        ambientC: p.ambientC,
+        loads: climateLoads(p, planned.cabinSolarW),
+      };
+      for (const shift of [-1, 1]) {
+        const band = solarSeries(p, shift);
+        const copied = climateLoads(p, band.cabinSolarW, p.ambientC, like);
+        const afresh = climateLoads(p, band.cabinSolarW, p.ambientC);
+        const columns = [
+          'acWh',
+          'dcWh',
+          'propaneHeatWh',
+          'acRunningW',
+          'acSurgeExtraW',
+          'acStandbyOn',
+          'cabinC',
+        ] as const;
+        for (const c of columns) expect(Array.from(copied[c]), `${name} ${shift} ${c}`).toEqual(Array.from(afresh[c]));
+        for (const [j, run] of afresh.thermostatRun) {
+          expect(Array.from(copied.thermostatRun.get(j) ?? []), `${name} ${shift} run ${j}`).toEqual(Array.from(run));
+        }
+        expect(copied.heavy.map((h) => Array.from(h.runningWh))).toEqual(
+          afresh.heavy.map((h) => Array.from(h.runningWh)),
+        );
+        expect(Array.from(copied.battery.capacityShare)).toEqual(Array.from(afresh.battery.capacityShare));
+        compared++;
+      }
+    }
+    // The benchmark trips (a roof air conditioner and heaters) and the demo trips have thermostat-run appliances.
+    expect(compared).toBeGreaterThan(4);
   });
 });
