@@ -13,9 +13,10 @@ let pool: Piscina<GpxTask, GpxTaskResult> | null = null;
 
 function gpxPool(): Piscina<GpxTask, GpxTaskResult> {
   pool ??= new Piscina<GpxTask, GpxTaskResult>({
-    filename: path.join(__dirname, 'gpx-worker.ts'),
-    // The worker is TypeScript: it loads through tsx, as the server itself does.
-    execArgv: [...process.execArgv.filter((arg) => !arg.startsWith('--inspect')), '--import', 'tsx'],
+    // The worker is TypeScript: its entry registers tsx's loader in the worker's own thread.
+    filename: path.join(__dirname, 'gpx-worker.mjs'),
+    // A GPX file is capped in size (see the route's limit); this bounds what a pathological one may take.
+    resourceLimits: { maxOldGenerationSizeMb: 128, maxYoungGenerationSizeMb: 16 },
     minThreads: 0,
     maxThreads: 1,
     maxQueue: QUEUE_LIMIT,

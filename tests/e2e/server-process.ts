@@ -10,7 +10,7 @@ import path from 'node:path';
  * The Node options `npm start` runs the server with (its heap bound, tsx's loader), read from package.json so the
  * browser tests and the benchmarks run the server as it is run for real.
  */
-function startScriptNodeArgs(): string[] {
+export function startScriptNodeArgs(): string[] {
   const start = (JSON.parse(fs.readFileSync('package.json', 'utf8')) as { scripts: { start: string } }).scripts.start;
   const [command, ...words] = start.split(/\s+/);
   if (command !== 'node') throw new Error(`npm start is expected to run node directly, not: ${start}`);
@@ -67,12 +67,19 @@ export async function startServer(env: Record<string, string> = {}, nodeArgs: st
     child.stderr?.on('data', onData);
     child.on('exit', (code) => reject(new Error(`server exited with ${code}:\n${output}`)));
   });
+  // A server that dies under a test shows why, instead of the test's next page load failing with "connection refused".
+  let stopping = false;
+  child.on('exit', (code, signal) => {
+    if (!stopping)
+      console.error(`The server exited during the tests (${code ?? signal}); its last words:\n${output.slice(-4000)}`);
+  });
   return {
     url,
     dbPath,
     pid: child.pid ?? 0,
     stop: () =>
       new Promise<void>((resolve) => {
+        stopping = true;
         child.once('exit', () => {
           fs.rmSync(dir, { recursive: true, force: true });
           resolve();
