@@ -4,16 +4,15 @@ import cors from 'cors';
 import express from 'express';
 import type { Express } from 'express';
 import helmet from 'helmet';
-import { pinoHttp } from 'pino-http';
 import type { Logger } from 'pino';
 import type { Db } from '../db/client';
 import { createAuth } from './auth';
 import '../shared/schemas/plain-errors';
 import type { Auth } from './auth';
 import { HttpError } from './errors';
-import { httpLogSerializers } from './logger';
 import type { CapturedMail } from './mail/local-smtp';
 import type { Mailer } from './mail/mailer';
+import { accessLog } from './middleware/access-log';
 import { authGuards, DEFAULT_AUTH_LIMITS, type AuthLimits } from './middleware/auth-guards';
 import { errorHandler } from './middleware/error-handler';
 import { loopbackOnly } from './middleware/loopback-only';
@@ -123,14 +122,7 @@ export function createApp(deps: AppDeps): TrailtallyApp {
   app.disable('x-powered-by');
   app.set('trust proxy', config.trustProxy ?? false);
 
-  if (deps.logger)
-    app.use(
-      pinoHttp({
-        logger: deps.logger,
-        serializers: httpLogSerializers,
-        autoLogging: { ignore: (req) => !req.url?.startsWith('/api') },
-      }),
-    );
+  if (deps.logger) app.use(accessLog(deps.logger));
   app.use(
     helmet({
       contentSecurityPolicy: {

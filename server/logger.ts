@@ -14,8 +14,6 @@ export function createLogger(level: Level | 'silent', destination?: DestinationS
 }
 
 type Headers = Record<string, unknown> | undefined;
-type WithHeaders = { headers?: Headers };
-
 function withoutSecrets(headers: Headers): Headers {
   if (!headers) return headers;
   const copy = { ...headers };
@@ -24,11 +22,24 @@ function withoutSecrets(headers: Headers): Headers {
 }
 
 /**
- * pino-http's request and response serializers, censoring credentials themselves so a request log stays clean
- * even under a logger made without `createLogger` (tests, embedding). The headers are copied, never edited: the
- * serialized request shares its headers object with the live request.
+ * What a log line says about a request that went wrong: its id, method, path, client address and headers, credentials
+ * censored even under a logger made without `createLogger` (tests, embedding). The headers are copied, never edited:
+ * they are the live request's own.
  */
-export const httpLogSerializers = {
-  req: <T extends WithHeaders>(req: T): T => ({ ...req, headers: withoutSecrets(req.headers) }),
-  res: <T extends WithHeaders>(res: T): T => ({ ...res, headers: withoutSecrets(res.headers) }),
-};
+export function requestForLog(req: {
+  id?: number;
+  method?: string;
+  originalUrl?: string;
+  url?: string;
+  ip?: string;
+  headers?: Headers;
+}): Record<string, unknown> {
+  return {
+    id: req.id,
+    method: req.method,
+    // The path only: a query string may hold what a log should not.
+    path: (req.originalUrl ?? req.url)?.split('?', 1)[0],
+    remoteAddress: req.ip,
+    headers: withoutSecrets(req.headers),
+  };
+}
