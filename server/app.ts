@@ -4,21 +4,22 @@ import cors from 'cors';
 import express from 'express';
 import type { Express } from 'express';
 import helmet from 'helmet';
-import { pinoHttp } from 'pino-http';
 import type { Logger } from 'pino';
 import type { Db } from '../db/client';
 import { createAuth } from './auth';
 import '../shared/schemas/plain-errors';
 import type { Auth } from './auth';
 import { HttpError } from './errors';
-import { httpLogSerializers } from './logger';
 import type { CapturedMail } from './mail/local-smtp';
 import type { Mailer } from './mail/mailer';
+import { accessLog } from './middleware/access-log';
 import { authGuards, DEFAULT_AUTH_LIMITS, type AuthLimits } from './middleware/auth-guards';
 import { errorHandler } from './middleware/error-handler';
 import { loopbackOnly } from './middleware/loopback-only';
 import { requireSession } from './middleware/require-session';
 import { requireTrustedOrigin } from './middleware/require-trusted-origin';
+import { loadTripAccess } from './middleware/trip-access';
+import { budgetReadRoutes } from './routes/trip-items';
 import { healthRouter } from './routes/health';
 import { preferencesRouter } from './routes/preferences';
 import { rigPresetsRouter, rigsRouter } from './routes/rigs';
@@ -123,41 +124,6 @@ export function createApp(deps: AppDeps): TrailtallyApp {
   app.disable('x-powered-by');
   app.set('trust proxy', config.trustProxy ?? false);
 
-  if (deps.logger)
-    app.use(
-      pinoHttp({
-        logger: deps.logger,
-        serializers: httpLogSerializers,
-        autoLogging: { ignore: (req) => !req.url?.startsWith('/api') },
-      }),
-    );
-  app.use(
-    helmet({
-      contentSecurityPolicy: {
-        directives: {
-          // Skia's chart renderer compiles WebAssembly; nothing else needs eval.
-          'script-src': ["'self'", "'wasm-unsafe-eval'"],
-          'connect-src': ["'self'", ...(config.devWebOrigin ? [config.devWebOrigin] : [])],
-        },
-      },
-      crossOriginEmbedderPolicy: false,
-    }),
-  );
-  // Static scripts, fonts and the wasm were compressed at build time (web-static.ts marks them); never again here.
-  const compress = compression({ filter: (req, res) => !res.locals.precompressed && compression.filter(req, res) });
-  // A trip's budget, ledger and fixes are kept ready in each encoding: those reads skip compression's hooks too.
-  app.use((req, res, next) =>
-    req.method === 'GET' && READY_BODY_PATH.test(req.path) ? next() : compress(req, res, next),
-  );
-  if (config.devWebOrigin) app.use('/api', cors({ origin: config.devWebOrigin, credentials: true }));
-  app.use('/api', requireTrustedOrigin(origins, config.publicUrl));
-
-  app.use('/api/auth', authGuards({ ...DEFAULT_AUTH_LIMITS, ...config.authLimits }));
-  // better-auth reads the body itself (here the text authGuards read): its handler comes before express.json().
-  app.all('/api/auth/*splat', toNodeHandler(auth));
-
-  app.use(express.json({ limit: JSON_BODY_LIMIT }));
-  app.use('/api/health', healthRouter({ db, version: packageJson.version }));
   const budgetRunner =
     deps.budgetRunner ??
     createBudgetPool({
@@ -185,6 +151,41 @@ export function createApp(deps: AppDeps): TrailtallyApp {
     publicUrl: config.publicUrl,
     invitesPerHour: config.invitesPerHour ?? INVITES_PER_HOUR,
   };
+
+  if (deps.logger) app.use(accessLog(deps.logger));
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          // Skia's chart renderer compiles WebAssembly; nothing else needs eval.
+          'script-src': ["'self'", "'wasm-unsafe-eval'"],
+          'connect-src': ["'self'", ...(config.devWebOrigin ? [config.devWebOrigin] : [])],
+        },
+      },
+      crossOriginEmbedderPolicy: false,
+    }),
+  );
+  // Static scripts, fonts and the wasm were compressed at build time (web-static.ts marks them); never again here.
+  const compress = compression({ filter: (req, res) => !res.locals.precompressed && compression.filter(req, res) });
+  // A trip's budget, ledger and fixes are kept ready in each encoding: those reads skip compression's hooks too.
+  app.use((req, res, next) =>
+    req.method === 'GET' && READY_BODY_PATH.test(req.path) ? next() : compress(req, res, next),
+  );
+  if (config.devWebOrigin) app.use('/api', cors({ origin: config.devWebOrigin, credentials: true }));
+  app.use('/api', requireTrustedOrigin(origins, config.publicUrl));
+
+  // A trip's budget, ledger and fixes, the reads repeated most, are matched here rather than after the auth, health
+  // and trip routers, behind the same session and trip-access checks.
+  const tripReadGuards = [signedIn, loadTripAccess(db)];
+  for (const [path, handler] of Object.entries(budgetReadRoutes(budgets)))
+    app.get(`/api/trips/:tripId${path}`, ...tripReadGuards, handler);
+
+  app.use('/api/auth', authGuards({ ...DEFAULT_AUTH_LIMITS, ...config.authLimits }));
+  // better-auth reads the body itself (here the text authGuards read): its handler comes before express.json().
+  app.all('/api/auth/*splat', toNodeHandler(auth));
+
+  app.use(express.json({ limit: JSON_BODY_LIMIT }));
+  app.use('/api/health', healthRouter({ db, version: packageJson.version }));
   app.use('/api/trips', signedIn, tripsRouter({ db, now: deps.now, budgets, weather, ...invites }));
   app.use('/api/invites', inviteLinksRouter({ db, now: deps.now, auth }));
   app.use('/api/clubs', signedIn, clubsRouter({ db, now: deps.now, ...invites }));

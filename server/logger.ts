@@ -14,8 +14,6 @@ export function createLogger(level: Level | 'silent', destination?: DestinationS
 }
 
 type Headers = Record<string, unknown> | undefined;
-type WithHeaders = { headers?: Headers };
-
 function withoutSecrets(headers: Headers): Headers {
   if (!headers) return headers;
   const copy = { ...headers };
@@ -23,12 +21,32 @@ function withoutSecrets(headers: Headers): Headers {
   return copy;
 }
 
+/** Paths whose next segment is a secret (an invite token, a calendar feed's unguessable name). */
+const SECRET_AFTER = /^(\/api\/(?:invites|club-invites|calendar)\/)[^/]+/;
+
+/** The path a log line shows: no query string (it may hold what a log should not), and no secret segment. */
+export function pathForLog(url: string): string {
+  return (url.split('?', 1)[0] ?? '').replace(SECRET_AFTER, '$1[redacted]');
+}
+
 /**
- * pino-http's request and response serializers, censoring credentials themselves so a request log stays clean
- * even under a logger made without `createLogger` (tests, embedding). The headers are copied, never edited: the
- * serialized request shares its headers object with the live request.
+ * What a log line says about a request that went wrong: its id, method, path, client address and headers, credentials
+ * censored even under a logger made without `createLogger` (tests, embedding). The headers are copied, never edited:
+ * they are the live request's own.
  */
-export const httpLogSerializers = {
-  req: <T extends WithHeaders>(req: T): T => ({ ...req, headers: withoutSecrets(req.headers) }),
-  res: <T extends WithHeaders>(res: T): T => ({ ...res, headers: withoutSecrets(res.headers) }),
-};
+export function requestForLog(req: {
+  id?: number;
+  method?: string;
+  originalUrl?: string;
+  url?: string;
+  ip?: string;
+  headers?: Headers;
+}): Record<string, unknown> {
+  return {
+    id: req.id,
+    method: req.method,
+    path: pathForLog(req.originalUrl ?? req.url ?? ''),
+    remoteAddress: req.ip,
+    headers: withoutSecrets(req.headers),
+  };
+}

@@ -2,6 +2,7 @@ import type { NextFunction, Request, Response } from 'express';
 import { ZodError } from 'zod';
 import { isFieldRuleIssue } from '@/shared/schemas/limits';
 import { HttpError } from '../errors';
+import { requestForLog } from '../logger';
 
 type BodyParserError = Error & { type?: string; status?: number };
 
@@ -41,7 +42,7 @@ export function toHttpError(err: unknown): HttpError {
 
 export function errorHandler(err: unknown, req: Request, res: Response, _next: NextFunction) {
   const httpError = toHttpError(err);
-  if (httpError.status >= 500) req.log?.error({ err }, 'request failed');
+  if (httpError.status >= 500) req.log?.error({ err, reqId: req.id, req: requestForLog(req) }, 'request failed');
   if (res.headersSent) return;
   res.status(httpError.status).json(httpError.toBody());
 }

@@ -1,4 +1,4 @@
-import { Router, type Request, type Response } from 'express';
+import { Router, type Request, type RequestHandler, type Response } from 'express';
 import type { Db } from '@/db/client';
 import { listActivity } from '@/db/queries/trips';
 import packageJson from '@/package.json';
@@ -98,44 +98,54 @@ function sendReady(req: Request, res: Response, body: ReadyBody): void {
   res.end(bytes);
 }
 
+/**
+ * The budget, its ledger and its fixes by path under /api/trips/:tripId: the reads a trip's screens repeat most. The
+ * app matches them before its other routers (each router passed on the way costs every request a look at its
+ * routes), behind the same session and trip-access checks as the trip's other routes.
+ */
+export function budgetReadRoutes(
+  budgets: BudgetService,
+): Record<'/budget' | '/ledger' | '/budget/fixes', RequestHandler> {
+  return {
+    '/budget': async (req, res) => {
+      const answer = await budgetAnswer(() => budgets.forTrip(tripAccess(res).tripId), res);
+      if (answer.kind === 'none') {
+        if (!freshOrNotModified(req, res, 'budget', answer.revision)) return;
+        res.json({ version: answer.revision, result: null, reason: answer.reason });
+        return;
+      }
+      if (freshOrNotModified(req, res, 'budget', answer.revision)) sendReady(req, res, answer.body);
+    },
+
+    // The hourly ledger as columns, for the screens that show it; kept and sent like the budget, under its own ETag.
+    '/ledger': async (req, res) => {
+      const answer = await budgetAnswer(() => budgets.forTrip(tripAccess(res).tripId), res);
+      if (answer.kind === 'none' || !answer.ledgerBody) {
+        if (!freshOrNotModified(req, res, 'ledger', answer.revision)) return;
+        const reason = answer.kind === 'none' ? answer.reason : 'The budget has no hourly ledger.';
+        res.json({ version: answer.revision, ledger: null, reason });
+        return;
+      }
+      if (freshOrNotModified(req, res, 'ledger', answer.revision)) sendReady(req, res, answer.ledgerBody);
+    },
+
+    // The budget's flags with their fixes, each checked by walking the trip again: asked for apart from the budget
+    // (only when someone looks at the flags), computed in the same workers and kept per revision the same way.
+    '/budget/fixes': async (req, res) => {
+      const answer = await budgetAnswer(() => budgets.fixesForTrip(tripAccess(res).tripId), res);
+      if (answer.kind === 'none') {
+        if (!freshOrNotModified(req, res, 'fixes', answer.revision)) return;
+        res.json({ version: answer.revision, fixes: [], reason: answer.reason });
+        return;
+      }
+      if (freshOrNotModified(req, res, 'fixes', answer.revision)) sendReady(req, res, answer.body);
+    },
+  };
+}
+
+/** The rest of /api/trips/:tripId/…; the budget reads are in `budgetReadRoutes`. */
 export function tripItemsRouter(deps: TripItemsDeps): Router {
   const router = Router({ mergeParams: true });
-  // The budget, its ledger and its fixes come first: they are the reads a trip's screens repeat most, and each
-  // router passed on the way costs every request a look at its routes.
-  router.get('/budget', async (req, res) => {
-    const answer = await budgetAnswer(() => deps.budgets.forTrip(tripAccess(res).tripId), res);
-    if (answer.kind === 'none') {
-      if (!freshOrNotModified(req, res, 'budget', answer.revision)) return;
-      res.json({ version: answer.revision, result: null, reason: answer.reason });
-      return;
-    }
-    if (freshOrNotModified(req, res, 'budget', answer.revision)) sendReady(req, res, answer.body);
-  });
-
-  // The hourly ledger as columns, for the screens that show it; kept and sent like the budget, under its own ETag.
-  router.get('/ledger', async (req, res) => {
-    const answer = await budgetAnswer(() => deps.budgets.forTrip(tripAccess(res).tripId), res);
-    if (answer.kind === 'none' || !answer.ledgerBody) {
-      if (!freshOrNotModified(req, res, 'ledger', answer.revision)) return;
-      const reason = answer.kind === 'none' ? answer.reason : 'The budget has no hourly ledger.';
-      res.json({ version: answer.revision, ledger: null, reason });
-      return;
-    }
-    if (freshOrNotModified(req, res, 'ledger', answer.revision)) sendReady(req, res, answer.ledgerBody);
-  });
-
-  // The budget's flags with their fixes, each checked by walking the trip again: asked for apart from the budget
-  // (only when someone looks at the flags), computed in the same workers and kept per revision the same way.
-  router.get('/budget/fixes', async (req, res) => {
-    const answer = await budgetAnswer(() => deps.budgets.fixesForTrip(tripAccess(res).tripId), res);
-    if (answer.kind === 'none') {
-      if (!freshOrNotModified(req, res, 'fixes', answer.revision)) return;
-      res.json({ version: answer.revision, fixes: [], reason: answer.reason });
-      return;
-    }
-    if (freshOrNotModified(req, res, 'fixes', answer.revision)) sendReady(req, res, answer.body);
-  });
-
   router.use('/stops', stayRouter(deps));
   router.use('/stops', stopsRouter(deps));
   router.use('/drives', drivesRouter(deps));

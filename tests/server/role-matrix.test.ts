@@ -65,6 +65,7 @@ async function readingBy(w: World, actor: Actor): Promise<{ id: string; version:
 const ROWS: Row[] = [
   { name: 'GET trip', prepare: async () => ({ method: 'get', path: base() }), expected: needs('read') },
   { name: 'GET budget', prepare: async () => ({ method: 'get', path: `${base()}/budget` }), expected: needs('read') },
+  { name: 'GET ledger', prepare: async () => ({ method: 'get', path: `${base()}/ledger` }), expected: needs('read') },
   {
     name: 'GET budget fixes',
     prepare: async () => ({ method: 'get', path: `${base()}/budget/fixes` }),
