@@ -175,11 +175,13 @@ describe('a trip leader at 1440 px', () => {
       await screenshot(page, `leader-budget-two-fixes-${width}`);
       // What the reader was looking at stays where it was: the undo redraws the budget under them (a flag put back
       // above it pushes nothing out of view), and the screen does not start again from the top.
-      // A small marked element fully in view inside the budget (a container would move with what is put back).
+      // A small marked element fully in view inside the budget (a container would move with what is put back), and
+      // not inside the flag list, whose contents the undo itself redraws.
       const seen = await page.evaluateHandle(() =>
         [...document.querySelectorAll('[data-testid="budget-screen"] [data-testid]')].find((el) => {
           const r = el.getBoundingClientRect();
-          return r.top > 120 && r.bottom < window.innerHeight / 2 && r.height > 0 && r.height < 150;
+          const steady = !el.closest('[data-testid="flag-list"]');
+          return steady && r.top > 120 && r.bottom < window.innerHeight / 2 && r.height > 0 && r.height < 150;
         }),
       );
       const seenTop = () => seen.evaluate((el) => (el?.isConnected ? el.getBoundingClientRect().top : Number.NaN));
@@ -232,8 +234,12 @@ describe('a trip leader at 1440 px', () => {
         new RegExp(`^With ${amps} A at ${volts?.replace('V', '')} V: (clears this flag|helps, not enough alone)`),
       );
     const beforeHookup = await records();
+    const headlineBeforeHookup = await page.textContent(byTestId('headline-figures'));
     await page.click(byTestId(pickerId.replace(/^hookup-supply-/, 'fix-')));
     await expect.poll(records, { timeout: 15_000 }).not.toBe(beforeHookup);
+    await expect
+      .poll(() => page.textContent(byTestId('headline-figures')), { timeout: 15_000 })
+      .not.toBe(headlineBeforeHookup);
     const booked = JSON.parse(await records()) as {
       stops: { stop: { hookup: { amps: number; volts: number } | null } }[];
     };
@@ -243,6 +249,11 @@ describe('a trip leader at 1440 px', () => {
     });
     await page.click(byTestId('toast-action'));
     await expect.poll(records, { timeout: 15_000 }).toBe(beforeHookup);
+    // The budget on screen is the undone plan's again (not the hooked-up one's, still shown for a moment) before the
+    // next fixes are read from it.
+    await expect
+      .poll(() => page.textContent(byTestId('headline-figures')), { timeout: 15_000 })
+      .toBe(headlineBeforeHookup);
     // Apply the first flag's first fix a few times: fixes are capped at what the rig can carry, so each one must
     // lower the energy short, and the ones that clear their flag remove it.
     let shortNow = shortBefore;
