@@ -1,6 +1,6 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
-import { Controller, useForm } from 'react-hook-form';
+import { useForm } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 import { z } from 'zod';
 import { space } from '@/components/theme/tokens';
@@ -9,7 +9,6 @@ import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { ChoiceChips } from '@/components/ui/choice-chips';
 import { Text } from '@/components/ui/text';
-import { TextField } from '@/components/ui/text-field';
 import type { PasswordOwner } from '@/shared/password-strength';
 import { PASSWORD_HINT, signUpSchema } from '@/shared/schemas/account';
 import { authClient } from '@/stores/auth-client';
@@ -17,7 +16,7 @@ import { usePreferencesMutation } from '@/stores/queries/preferences';
 import { showToast } from '@/stores/toast-store';
 import { useUnits } from '@/stores/units-store';
 import { authRefusal } from './auth-error';
-import { FieldSlot } from './field-slot';
+import { FormTextField } from './form-text-field';
 import { passwordProblemOf, usePasswordRulePreload } from './password-rule';
 import { showServerRefusal } from './server-refusal';
 
@@ -100,23 +99,7 @@ export function NameCard({ name }: { name: string }) {
       <Text variant="title" role="heading" aria-level={2}>
         Your name
       </Text>
-      <Controller
-        control={control}
-        name="name"
-        render={({ field, fieldState }) => (
-          <FieldSlot fieldRef={field.ref}>
-            <TextField
-              testID="account-name"
-              label="Name"
-              value={field.value}
-              onChangeText={field.onChange}
-              onBlur={field.onBlur}
-              error={fieldState.error?.message}
-              onSubmitEditing={submit}
-            />
-          </FieldSlot>
-        )}
-      />
+      <FormTextField control={control} name="name" testID="account-name" label="Name" onSubmitEditing={submit} />
       {error ? <Banner testID="name-error" message={error} /> : null}
       <Button
         testID="account-name-save"
@@ -183,24 +166,14 @@ export function PasswordCard({ owner }: { owner?: PasswordOwner }) {
     autoComplete: 'current-password' | 'new-password',
     hint?: string,
   ) => (
-    <Controller
+    <FormTextField
       control={control}
       name={name}
-      render={({ field: f, fieldState }) => (
-        <FieldSlot fieldRef={f.ref}>
-          <TextField
-            testID={`account-${name}`}
-            label={label}
-            secureTextEntry
-            autoComplete={autoComplete}
-            hint={hint}
-            value={f.value}
-            onChangeText={f.onChange}
-            onBlur={f.onBlur}
-            error={fieldState.error?.message}
-          />
-        </FieldSlot>
-      )}
+      testID={`account-${name}`}
+      label={label}
+      secureTextEntry
+      autoComplete={autoComplete}
+      hint={hint}
     />
   );
   return (

@@ -10,13 +10,13 @@ import { ChoiceChips } from '@/components/ui/choice-chips';
 import { DateTimeField } from '@/components/ui/date-time-field';
 import { Skeleton } from '@/components/ui/skeleton';
 import { Text } from '@/components/ui/text';
-import { TextField } from '@/components/ui/text-field';
 import { timeZoneSchema } from '@/shared/schemas/common';
 import { fieldsSound, RUN_WITH_OTHER_ERRORS } from '@/shared/schemas/cross-field';
 import { createTripRequestSchema, type CreateTripRequest, type TripDetail } from '@/shared/schemas/api';
 import { useMyRigsQuery, useRigPresetsQuery } from '@/stores/queries/rigs';
 import { useTripCreateMutation } from '@/stores/queries/trips';
 import { FieldSlot } from './field-slot';
+import { FormTextField } from './form-text-field';
 import { showServerRefusal } from './server-refusal';
 import { ZoneField } from './zone-field';
 
@@ -106,23 +106,7 @@ export function NewTripForm({ onCreated }: { onCreated: (detail: TripDetail) => 
   );
   return (
     <View style={styles.form} testID="new-trip-form">
-      <Controller
-        control={control}
-        name="name"
-        render={({ field, fieldState }) => (
-          <FieldSlot fieldRef={field.ref}>
-            <TextField
-              testID="new-trip-name"
-              label="Trip name"
-              value={field.value}
-              onChangeText={field.onChange}
-              onBlur={field.onBlur}
-              error={fieldState.error?.message}
-              onSubmitEditing={submit}
-            />
-          </FieldSlot>
-        )}
-      />
+      <FormTextField control={control} name="name" testID="new-trip-name" label="Trip name" onSubmitEditing={submit} />
       <View style={styles.grid}>
         {day('startDate', 'First day')}
         {day('endDate', 'Last day')}

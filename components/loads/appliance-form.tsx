@@ -4,6 +4,7 @@ import { Controller, useForm, useWatch } from 'react-hook-form';
 import { StyleSheet, View } from 'react-native';
 import { space } from '@/components/theme/tokens';
 import { FieldSlot } from '@/components/forms/field-slot';
+import { FormTextField } from '@/components/forms/form-text-field';
 import { showServerRefusal } from '@/components/forms/server-refusal';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
@@ -11,7 +12,6 @@ import { ChoiceChips } from '@/components/ui/choice-chips';
 import { ConflictNotice } from '@/components/ui/conflict-notice';
 import { NumberField } from '@/components/ui/number-field';
 import { Text } from '@/components/ui/text';
-import { TextField } from '@/components/ui/text-field';
 import { Caution } from '@/components/ui/cautions';
 import type { ApplianceRecord } from '@/shared/schemas/api';
 import { applianceFieldsSchema, type ApplianceFields } from '@/shared/schemas/appliance';
@@ -160,23 +160,7 @@ export function ApplianceForm({ tripId, record, initial, canEdit, onSaved }: Pro
   return (
     <View style={styles.form} testID="appliance-form">
       {formError ? <Banner testID="appliance-form-error" message={formError} /> : null}
-      <Controller
-        control={control}
-        name="name"
-        render={({ field, fieldState }) => (
-          <FieldSlot fieldRef={field.ref}>
-            <TextField
-              testID="appliance-name"
-              label="Name"
-              editable={canEdit}
-              value={field.value}
-              onChangeText={field.onChange}
-              onBlur={field.onBlur}
-              error={fieldState.error?.message}
-            />
-          </FieldSlot>
-        )}
-      />
+      <FormTextField control={control} name="name" testID="appliance-name" label="Name" editable={canEdit} />
       <Controller
         control={control}
         name="circuit"

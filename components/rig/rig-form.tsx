@@ -5,6 +5,7 @@ import { StyleSheet, View } from 'react-native';
 import { mass } from '@/components/format/units';
 import { colors, space } from '@/components/theme/tokens';
 import { FieldSlot } from '@/components/forms/field-slot';
+import { FormTextField } from '@/components/forms/form-text-field';
 import { showServerRefusal } from '@/components/forms/server-refusal';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
@@ -117,23 +118,7 @@ export function RigForm({ save, record, canEdit, dcLoads = [] }: RigFormProps) {
       {Object.keys(formState.errors).length > 0 ? (
         <Banner testID="rig-form-invalid" message="Some figures need a look: see the messages below." />
       ) : null}
-      <Controller
-        control={control}
-        name="name"
-        render={({ field, fieldState }) => (
-          <FieldSlot fieldRef={field.ref}>
-            <TextField
-              testID="rig-name"
-              label="Rig name"
-              editable={canEdit}
-              value={field.value}
-              onChangeText={field.onChange}
-              onBlur={field.onBlur}
-              error={fieldState.error?.message}
-            />
-          </FieldSlot>
-        )}
-      />
+      <FormTextField control={control} name="name" testID="rig-name" label="Rig name" editable={canEdit} />
       <Section title="Battery bank" testID="rig-battery">
         <Presets
           testID="preset-battery"
