@@ -1,4 +1,4 @@
-import { useQuery } from '@tanstack/react-query';
+import { queryOptions, useQuery, type QueryClient } from '@tanstack/react-query';
 import type { BudgetResponse, LedgerResponse } from '@/shared/schemas/budget-response';
 import type { FlagFixes, LedgerRow } from '@/shared/engine/result-types';
 import { fromLedgerColumns } from '@/shared/ledger-columns';
@@ -9,12 +9,23 @@ import { tripKeys } from './trips';
 
 export type { BudgetResponse, LedgerResponse };
 
-export function useBudgetQuery(tripId: string) {
-  return useQuery({
+const budgetQuery = (tripId: string) =>
+  queryOptions({
     queryKey: tripKeys.budget(tripId),
     queryFn: () => apiFetch<BudgetResponse>(`/api/trips/${encodeURIComponent(tripId)}/budget`),
     staleTime: STALE.SECONDS.THIRTY,
   });
+
+export function useBudgetQuery(tripId: string) {
+  return useQuery(budgetQuery(tripId));
+}
+
+/**
+ * Starts the budget's request as soon as a trip opens. The screens that read it live in a chunk of their own, and on a
+ * slow link waiting for that chunk before asking would add its download to the headline's time.
+ */
+export function prefetchBudget(queryClient: QueryClient, tripId: string): void {
+  void queryClient.prefetchQuery(budgetQuery(tripId));
 }
 
 /** The ledger as the screens read it: the engine's rows again, or the reason there are none. */
