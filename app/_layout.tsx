@@ -4,6 +4,7 @@ import { BUDGET_FORMAT } from '@/shared/budget-result';
 import { Stack } from 'expo-router';
 import { useEffect, useEffectEvent, useState } from 'react';
 import { LoadingScreen } from '@/components/layout/loading-screen';
+import { isPrerenderedSignedOutPage } from '@/components/layout/prerendered-page';
 import { colors } from '@/components/theme/tokens';
 import { useAppFonts } from '@/components/theme/use-app-fonts';
 import { useSession } from '@/stores/auth-client';
@@ -28,7 +29,8 @@ export default function RootLayout() {
   // better-auth reports "pending" again while it refetches after a sign-in from signed out; only the
   // first answer may hold the app, or the navigator is torn down and pages outside the groups (an
   // invite being joined) lose their place.
-  const [sessionKnown, setSessionKnown] = useState(false);
+  // A page prerendered for a signed-out visitor already shows its screen: that is the first frame, with no wait.
+  const [sessionKnown, setSessionKnown] = useState(isPrerenderedSignedOutPage);
   if (!session.isPending && !sessionKnown) setSessionKnown(true);
   // Back online, the session answer on hand is the one that failed with no signal: until it is asked again, the
   // device's memory stands (else the app would sign out for a moment and drop the page it was on).

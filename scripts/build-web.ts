@@ -2,8 +2,10 @@ import { spawnSync } from 'node:child_process';
 import crypto from 'node:crypto';
 import fs from 'node:fs';
 import path from 'node:path';
+import { SHELL_FILE } from '../server/web-pages';
 import { precompressDir } from './precompress-web';
-import { addFontsToShell } from './web-fonts';
+import { addFontsToPages } from './web-fonts';
+import { keepServedPages } from './web-pages';
 import { makeOffline } from './web-offline';
 
 const ROOT = path.resolve(__dirname, '..');
@@ -21,8 +23,11 @@ const SOURCES = [
   'tsconfig.json',
   'metro.config.js',
   'scripts/metro',
-  // The service worker and manifest are written after the export.
+  // The pages kept, the fonts' head, the service worker and manifest are written after the export.
   'scripts/web-offline.ts',
+  'scripts/web-pages.ts',
+  'scripts/web-fonts.ts',
+  'server/web-pages.ts',
 ];
 
 function listFiles(entry: string): string[] {
@@ -73,7 +78,7 @@ export function hashedCanvasKitUrl(): string {
 export async function ensureWebBuild({ force = false } = {}): Promise<void> {
   const fingerprint = sourceFingerprint();
   const current = fs.existsSync(STAMP) ? fs.readFileSync(STAMP, 'utf8').trim() : '';
-  if (!force && current === fingerprint && fs.existsSync(path.join(OUT_DIR, 'index.html'))) {
+  if (!force && current === fingerprint && fs.existsSync(path.join(OUT_DIR, SHELL_FILE))) {
     console.log('Web app is up to date (dist/).');
     return;
   }
@@ -113,8 +118,9 @@ export async function ensureWebBuild({ force = false } = {}): Promise<void> {
   const hashedWasm = path.join(OUT_DIR, canvasKitUrl);
   fs.mkdirSync(path.dirname(hashedWasm), { recursive: true });
   fs.copyFileSync(canvasKitSource(), hashedWasm);
-  addFontsToShell(OUT_DIR);
-  const offline = await makeOffline(OUT_DIR);
+  const pages = keepServedPages(OUT_DIR);
+  addFontsToPages(OUT_DIR, pages);
+  const offline = await makeOffline(OUT_DIR, pages);
   console.log(`Service worker precaches ${offline.count} files (${(offline.size / 1e6).toFixed(1)} MB).`);
   console.log('Compressing scripts, fonts and the wasm (Brotli 11 and gzip) …');
   const sizes = await precompressDir(OUT_DIR);

@@ -45,18 +45,24 @@ export function fontHead(urls: Record<string, string>): string {
   return `${links.join('\n')}\n<style id="nunito-faces">${rules.join('\n')}</style>\n`;
 }
 
-/**
- * Writes the fonts' preloads and faces into the exported index.html (the app is exported as a single page, so the
- * document is Expo's template, not a rendered +html.tsx), naming the hashed font files the export wrote.
- */
-export function addFontsToShell(outDir: string): void {
+/** Where the preloads go: first in the head, right after the character set, so they are requested at once. */
+const CHARSET = /<meta charset="utf-8"\s*\/?>/i;
+
+/** Writes the fonts' preloads and faces into each exported page, naming the hashed font files the export wrote. */
+export function addFontsToPages(outDir: string, pages: readonly string[]): void {
   const urls: Record<string, string> = {};
   for (const file of filesUnder(path.join(outDir, 'assets'))) {
     const face = NUNITO_FACES.find((f) => path.basename(file).startsWith(`${f.family}.`) && file.endsWith('.ttf'));
     if (face) urls[face.family] = `/${path.relative(outDir, file).split(path.sep).join('/')}`;
   }
-  const shellPath = path.join(outDir, 'index.html');
-  const shell = fs.readFileSync(shellPath, 'utf8');
-  if (shell.includes('id="nunito-faces"')) return;
-  fs.writeFileSync(shellPath, shell.replace('</title>', `</title>\n${fontHead(urls)}`));
+  for (const page of pages) {
+    const pagePath = path.join(outDir, page);
+    const html = fs.readFileSync(pagePath, 'utf8');
+    if (html.includes('id="nunito-faces"')) continue;
+    if (!CHARSET.test(html)) throw new Error(`${page} has no character set to put the fonts after.`);
+    fs.writeFileSync(
+      pagePath,
+      html.replace(CHARSET, (charset) => `${charset}\n${fontHead(urls)}`),
+    );
+  }
 }

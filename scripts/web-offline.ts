@@ -4,6 +4,7 @@
 import fs from 'node:fs';
 import path from 'node:path';
 import { generateSW } from 'workbox-build';
+import { SHELL_FILE } from '../server/web-pages';
 
 const ROOT = path.resolve(__dirname, '..');
 const ICONS = path.join(ROOT, 'assets', 'icons');
@@ -29,21 +30,27 @@ export const MANIFEST = {
 const HEAD_LINKS =
   '<link rel="manifest" href="/manifest.webmanifest" /><link rel="apple-touch-icon" href="/icons/apple-touch-icon.png" />';
 
-export async function makeOffline(distDir: string): Promise<{ count: number; size: number }> {
+/**
+ * `pages` are the exported pages, which all get the manifest's links; only the shell is kept for use offline (every
+ * route without signal loads it), not the signed-out pages the server prerenders for a first visit.
+ */
+export async function makeOffline(distDir: string, pages: readonly string[]): Promise<{ count: number; size: number }> {
   fs.mkdirSync(path.join(distDir, 'icons'), { recursive: true });
   for (const file of fs.readdirSync(ICONS)) fs.copyFileSync(path.join(ICONS, file), path.join(distDir, 'icons', file));
   fs.writeFileSync(path.join(distDir, 'manifest.webmanifest'), JSON.stringify(MANIFEST, null, 2));
-  const shell = path.join(distDir, 'index.html');
-  const html = fs.readFileSync(shell, 'utf8');
-  if (!html.includes('rel="manifest"')) fs.writeFileSync(shell, html.replace('</head>', `${HEAD_LINKS}</head>`));
+  for (const page of pages) {
+    const pagePath = path.join(distDir, page);
+    const html = fs.readFileSync(pagePath, 'utf8');
+    if (!html.includes('rel="manifest"')) fs.writeFileSync(pagePath, html.replace('</head>', `${HEAD_LINKS}</head>`));
+  }
   const { count, size, warnings } = await generateSW({
     globDirectory: distDir,
     globPatterns: ['**/*.{html,js,css,ttf,wasm,png,json,webmanifest,ico}'],
-    globIgnores: ['sw.js', 'workbox-*.js', '.source-fingerprint'],
+    globIgnores: ['sw.js', 'workbox-*.js', '.source-fingerprint', ...pages.filter((page) => page !== SHELL_FILE)],
     swDest: path.join(distDir, 'sw.js'),
     maximumFileSizeToCacheInBytes: LARGEST_PRECACHED_BYTES,
     // Every client route is the one app shell.
-    navigateFallback: '/index.html',
+    navigateFallback: `/${SHELL_FILE}`,
     navigateFallbackDenylist: [/^\/api\//, /^\/outbox/],
     // A new release takes over at once; the page sees the change of controller and says "updated — reload".
     skipWaiting: true,

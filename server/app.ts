@@ -35,6 +35,7 @@ import type { TrustProxy } from './trust-proxy';
 import { trustedOrigins } from './trusted-origins';
 import { placesRouter } from './routes/places';
 import { calendarFeedRouter } from './routes/calendar-feed';
+import { HYDRATE_FLAG_SCRIPT_HASH } from './web-pages';
 import { webStatic } from './web-static';
 import { createWeatherQueue, type WeatherQueue, type WeatherQueueOptions } from './weather/weather-queue';
 
@@ -157,8 +158,9 @@ export function createApp(deps: AppDeps): TrailtallyApp {
     helmet({
       contentSecurityPolicy: {
         directives: {
-          // Skia's chart renderer compiles WebAssembly; nothing else needs eval.
-          'script-src': ["'self'", "'wasm-unsafe-eval'"],
+          // Skia's chart renderer compiles WebAssembly; nothing else needs eval. The one inline script allowed is
+          // the prerendered pages' flag, by its hash.
+          'script-src': ["'self'", "'wasm-unsafe-eval'", HYDRATE_FLAG_SCRIPT_HASH],
           'connect-src': ["'self'", ...(config.devWebOrigin ? [config.devWebOrigin] : [])],
         },
       },

@@ -1,8 +1,10 @@
 import fs from 'node:fs';
 import path from 'node:path';
+import { getSessionCookie } from 'better-auth/cookies';
 import express from 'express';
-import type { Response, Router } from 'express';
+import type { Request, Response, Router } from 'express';
 import { pickEncoding, type EncodingName } from './accept-encoding';
+import { PRERENDERED_PAGES, SHELL_FILE } from './web-pages';
 
 /** Ready-made compressed copies the build writes beside a file, best first (Brotli is the smaller). */
 const ENCODINGS: readonly { name: EncodingName; suffix: string }[] = [
@@ -34,15 +36,27 @@ function findPrecompressed(root: string): Map<string, EncodingName[]> {
 }
 
 /**
- * Serves the exported web app: hashed assets with a long cache, and index.html for every other
- * GET that is not an API call, so deep links like /trips/abc load the app shell. Scripts, fonts and the wasm go out
+ * The page a request for `urlPath` gets: a signed-out page with its screen already drawn when the visitor has no
+ * session cookie (nobody without one can be signed in), else the shell. A visitor with a cookie always gets the shell,
+ * so nobody signed in sees the sign-in form for a moment, even if the cookie has expired.
+ */
+function pageFile(req: Request, urlPath: string): string {
+  const prerendered = PRERENDERED_PAGES[urlPath];
+  if (!prerendered) return SHELL_FILE;
+  const cookies = new Headers();
+  if (req.headers.cookie) cookies.set('cookie', req.headers.cookie);
+  return getSessionCookie(cookies) ? SHELL_FILE : prerendered;
+}
+
+/**
+ * Serves the exported web app: hashed assets with a long cache, and a page for every other GET that is not an API
+ * call, so deep links like /trips/abc load the app (see `pageFile` for which page). Scripts, fonts and the wasm go out
  * as the Brotli or gzip copy the build wrote (never compressed per request); `res.locals.precompressed` tells the
  * app's compression middleware to leave them alone.
  */
 export function webStatic(webDir: string): Router | undefined {
   const root = path.resolve(webDir);
-  const shell = path.join(root, 'index.html');
-  if (!fs.existsSync(shell)) return undefined;
+  if (!fs.existsSync(path.join(root, SHELL_FILE))) return undefined;
   const precompressed = findPrecompressed(root);
   const router = express.Router();
   router.use((req, res, next) => {
@@ -80,9 +94,13 @@ export function webStatic(webDir: string): Router | undefined {
       },
     }),
   );
-  router.get(/^(?!\/api(\/|$)).*/, (_req, res) => {
+  router.get(/^(?!\/api(\/|$)).*/, (req, res, next) => {
     res.setHeader('Cache-Control', 'no-cache');
-    res.sendFile(shell);
+    // The same address answers with either page, depending on the cookie.
+    res.setHeader('Vary', 'Cookie');
+    res.sendFile(path.join(root, pageFile(req, req.path)), (error) => {
+      if (error) next(error);
+    });
   });
   return router;
 }

@@ -1,6 +1,7 @@
 import { ActivityIndicator, Pressable, StyleSheet, type PressableProps } from 'react-native';
 import { colors, radii, space } from '@/components/theme/tokens';
 import { Text } from './text';
+import { useAppIsLive } from './use-app-is-live';
 
 type Tone = 'primary' | 'secondary' | 'danger' | 'quiet';
 
@@ -20,7 +21,8 @@ const toneStyles: Record<Tone, { bg: string; fg: 'white' | 'pine' | 'ember' | 'i
 
 export function Button({ label, tone = 'primary', busy = false, disabled, style, ...rest }: ButtonProps) {
   const t = toneStyles[tone];
-  const inactive = disabled || busy;
+  const live = useAppIsLive();
+  const inactive = disabled || busy || !live;
   return (
     <Pressable
       accessibilityRole="button"

@@ -26,7 +26,7 @@ const page = (release: string) => `<!doctype html><html><head><title>Release ${r
 </body></html>`;
 
 function writeRelease(dir: string, release: string): void {
-  fs.writeFileSync(path.join(dir, 'index.html'), page(release));
+  fs.writeFileSync(path.join(dir, 'shell.html'), page(release));
   fs.writeFileSync(
     path.join(dir, 'release.js'),
     `window.RELEASE = ${JSON.stringify(release)}; document.getElementById('release').textContent = window.RELEASE;`,
@@ -49,6 +49,7 @@ beforeAll(async () => {
   // As the real server does: the worker script is never cached, so the browser sees a new release.
   app.use(
     express.static(dist, {
+      index: 'shell.html',
       setHeaders: (res, file) => {
         if (path.basename(file) === 'sw.js') res.setHeader('Cache-Control', 'no-cache');
       },
@@ -70,7 +71,7 @@ afterAll(async () => {
 describe('a new release', () => {
   it('when the app is built again with a change, then the new worker takes over, the page says "updated — reload" and a reload runs the new release', async () => {
     writeRelease(dist, 'one');
-    await makeOffline(dist);
+    await makeOffline(dist, ['shell.html']);
     const firstWorker = fs.readFileSync(path.join(dist, 'sw.js'), 'utf8');
     const context = await browser.newContext();
     const tab = await context.newPage();
@@ -83,7 +84,7 @@ describe('a new release', () => {
     expect(await tab.textContent('#banner')).toBe('');
 
     writeRelease(dist, 'two');
-    await makeOffline(dist);
+    await makeOffline(dist, ['shell.html']);
     expect(fs.readFileSync(path.join(dist, 'sw.js'), 'utf8')).not.toBe(firstWorker);
     // What the browser does on its own at the next navigation or within a day, asked for now.
     await tab.evaluate(async () => {

@@ -2,11 +2,14 @@ import fs from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { addFontsToShell, NUNITO_FACES } from '@/scripts/web-fonts';
+import { addFontsToPages, NUNITO_FACES } from '@/scripts/web-fonts';
 
 function exportWithFonts(): string {
   const dir = fs.mkdtempSync(path.join(os.tmpdir(), 'trailtally-fonts-'));
-  fs.writeFileSync(path.join(dir, 'index.html'), '<html><head><title>Trailtally</title></head><body></body></html>');
+  fs.writeFileSync(
+    path.join(dir, 'index.html'),
+    '<html><head><meta charSet="utf-8"/><title>Trailtally</title></head><body></body></html>',
+  );
   for (const { family } of NUNITO_FACES) {
     const folder = path.join(dir, 'assets/__main/node_modules/@expo-google-fonts/nunito', family.split('_')[1] ?? '');
     fs.mkdirSync(folder, { recursive: true });
@@ -18,7 +21,7 @@ function exportWithFonts(): string {
 describe('fonts in the page shell', () => {
   it('when the export is finished, then index.html preloads every Nunito weight by its hashed file, with swap', () => {
     const dir = exportWithFonts();
-    addFontsToShell(dir);
+    addFontsToPages(dir, ['index.html']);
     const shell = fs.readFileSync(path.join(dir, 'index.html'), 'utf8');
     for (const { family } of NUNITO_FACES) {
       const url = `/assets/__main/node_modules/@expo-google-fonts/nunito/${family.split('_')[1]}/${family}.0123abcd.ttf`;
@@ -28,16 +31,17 @@ describe('fonts in the page shell', () => {
       );
       expect(shell).toContain(`font-family:"${family} Fallback";src:local(`);
     }
-    // Before the app's scripts: the preloads sit in the head, right after the title.
-    expect(shell.indexOf('rel="preload"')).toBeLessThan(shell.indexOf('</head>'));
+    // First in the head, right after the character set: requested before the page's styles and scripts.
+    expect(shell.indexOf('rel="preload"')).toBeGreaterThan(shell.indexOf('charSet'));
+    expect(shell.indexOf('rel="preload"')).toBeLessThan(shell.indexOf('<title>'));
     fs.rmSync(dir, { recursive: true, force: true });
   });
 
   it('when the shell already has the faces, then running again adds nothing', () => {
     const dir = exportWithFonts();
-    addFontsToShell(dir);
+    addFontsToPages(dir, ['index.html']);
     const once = fs.readFileSync(path.join(dir, 'index.html'), 'utf8');
-    addFontsToShell(dir);
+    addFontsToPages(dir, ['index.html']);
     expect(fs.readFileSync(path.join(dir, 'index.html'), 'utf8')).toBe(once);
     fs.rmSync(dir, { recursive: true, force: true });
   });
@@ -45,7 +49,7 @@ describe('fonts in the page shell', () => {
   it('when a weight is missing from the export, then the build stops and names it', () => {
     const dir = exportWithFonts();
     fs.rmSync(path.join(dir, 'assets/__main/node_modules/@expo-google-fonts/nunito/700Bold'), { recursive: true });
-    expect(() => addFontsToShell(dir)).toThrow(/Nunito_700Bold/);
+    expect(() => addFontsToPages(dir, ['index.html'])).toThrow(/Nunito_700Bold/);
     fs.rmSync(dir, { recursive: true, force: true });
   });
 });

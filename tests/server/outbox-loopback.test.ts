@@ -46,7 +46,7 @@ describe('the development Outbox answers only on loopback', () => {
 
   beforeAll(async () => {
     webDir = fs.mkdtempSync(path.join(os.tmpdir(), 'trailtally-web-'));
-    fs.writeFileSync(path.join(webDir, 'index.html'), '<!doctype html><title>Trailtally</title>');
+    fs.writeFileSync(path.join(webDir, 'shell.html'), '<!doctype html><title>Trailtally</title>');
     ctx = createTestApp({ outbox: { messages: () => [RESET_MAIL] }, webDir });
     server = ctx.app.listen(0, '0.0.0.0');
     await new Promise((resolve) => server.once('listening', resolve));

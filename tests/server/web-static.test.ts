@@ -1,3 +1,4 @@
+import crypto from 'node:crypto';
 import fs from 'node:fs';
 import type http from 'node:http';
 import os from 'node:os';
@@ -12,6 +13,7 @@ import { createTestApp, type TestContext } from '../factories/test-app';
 
 // A script big enough to be worth compressing, and text the middleware would squeeze on the fly if it ran.
 const SCRIPT = `console.log(${JSON.stringify('trailtally '.repeat(2000))});\n`;
+const SIGN_IN_PAGE = '<!doctype html><title>Trailtally</title><div id="root"><form>Sign in</form></div>';
 const WASM = Buffer.concat([Buffer.from([0, 0x61, 0x73, 0x6d, 1, 0, 0, 0]), Buffer.alloc(4096, 7)]);
 
 describe('static web files', () => {
@@ -23,7 +25,8 @@ describe('static web files', () => {
 
   beforeAll(async () => {
     dir = fs.mkdtempSync(path.join(os.tmpdir(), 'trailtally-web-'));
-    fs.writeFileSync(path.join(dir, 'index.html'), '<!doctype html><title>Trailtally</title>');
+    fs.writeFileSync(path.join(dir, 'shell.html'), '<!doctype html><title>Trailtally</title>');
+    fs.writeFileSync(path.join(dir, 'sign-in.html'), SIGN_IN_PAGE);
     fs.mkdirSync(path.join(dir, '_expo/static/js/web'), { recursive: true });
     fs.mkdirSync(path.join(dir, '_expo/static/wasm'), { recursive: true });
     fs.writeFileSync(path.join(dir, script), SCRIPT);
@@ -43,7 +46,7 @@ describe('static web files', () => {
     expect(zlib.brotliDecompressSync(fs.readFileSync(path.join(dir, `${script}.br`))).toString()).toBe(SCRIPT);
     expect(zlib.gunzipSync(fs.readFileSync(path.join(dir, `${script}.gz`))).toString()).toBe(SCRIPT);
     expect(zlib.brotliDecompressSync(fs.readFileSync(path.join(dir, `${wasm}.br`)))).toEqual(WASM);
-    expect(fs.existsSync(path.join(dir, 'index.html.br'))).toBe(false);
+    expect(fs.existsSync(path.join(dir, 'shell.html.br'))).toBe(false);
   });
 
   it('when a browser accepts Brotli, then the build-time Brotli bytes go out with the script type and their length', async () => {
@@ -87,11 +90,39 @@ describe('static web files', () => {
     expect(again.status).toBe(304);
   });
 
-  it('when an unknown path or the app shell is asked for, then index.html answers with no-cache', async () => {
+  it('when an unknown path or the app shell is asked for, then the shell answers with no-cache', async () => {
     const res = await request(ctx.app).get('/trips/abc').set('Accept-Encoding', 'br');
     expect(res.status).toBe(200);
     expect(res.headers['cache-control']).toBe('no-cache');
-    expect(res.text).toContain('<title>Trailtally</title>');
+    expect(res.text).toBe('<!doctype html><title>Trailtally</title>');
+  });
+
+  it('when a visitor with no session cookie opens the sign-in page, then its prerendered page answers', async () => {
+    const res = await request(ctx.app).get('/sign-in').set('Cookie', 'theme=light');
+    expect(res.status).toBe(200);
+    expect(res.text).toBe(SIGN_IN_PAGE);
+    expect(res.headers.vary).toMatch(/Cookie/);
+  });
+
+  it('when a visitor with a session cookie opens the sign-in page, then the shell answers (no sign-in form flashes)', async () => {
+    for (const cookie of ['better-auth.session_token=abc.def', '__Secure-better-auth.session_token=abc.def']) {
+      const res = await request(ctx.app).get('/sign-in').set('Cookie', `theme=light; ${cookie}`);
+      expect(res.text).toBe('<!doctype html><title>Trailtally</title>');
+    }
+  });
+
+  it('when a page is served, then its content security policy allows the export hydrate flag as its one inline script', async () => {
+    // The exact line Expo Router's static export writes into a rendered page's head.
+    const flag = 'globalThis.__EXPO_ROUTER_HYDRATE__=true;';
+    const hash = crypto.createHash('sha256').update(flag).digest('base64');
+    const res = await request(ctx.app).get('/sign-in');
+    const scriptSrc = /script-src ([^;]*)/.exec(String(res.headers['content-security-policy']))?.[1] ?? '';
+    expect(scriptSrc.split(' ')).toEqual(["'self'", "'wasm-unsafe-eval'", `'sha256-${hash}'`]);
+  });
+
+  it('when a page without a prerendered copy is opened signed out, then the shell answers', async () => {
+    const res = await request(ctx.app).get('/trips');
+    expect(res.text).toBe('<!doctype html><title>Trailtally</title>');
   });
 
   it('when a path tries to leave the folder, then it gets the app shell, not a file outside', async () => {
