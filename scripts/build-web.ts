@@ -3,6 +3,7 @@ import crypto from 'node:crypto';
 import fs from 'node:fs';
 import path from 'node:path';
 import { SHELL_FILE } from '../server/web-pages';
+import CANVASKIT_BUILD from './metro/canvaskit-build';
 import { precompressDir } from './precompress-web';
 import { addFontsToPages } from './web-fonts';
 import { keepServedPages } from './web-pages';
@@ -52,10 +53,11 @@ export function sourceFingerprint(): string {
 
 /**
  * Skia on the web needs canvaskit.wasm beside the app. It comes from the installed canvaskit-wasm package
- * (so it always matches Skia's JS) and is copied into public/ for the export; it is never committed.
+ * (the build scripts/metro/canvaskit-build.js names, whose loader Metro bundles) and is copied into public/ for the
+ * export; it is never committed.
  */
 const canvasKitSource = (): string =>
-  require.resolve('canvaskit-wasm/bin/full/canvaskit.wasm', {
+  require.resolve(CANVASKIT_BUILD.WASM, {
     paths: [path.join(ROOT, 'node_modules/@shopify/react-native-skia')],
   });
 

@@ -51,6 +51,9 @@ export async function makeOffline(distDir: string, pages: readonly string[]): Pr
     maximumFileSizeToCacheInBytes: LARGEST_PRECACHED_BYTES,
     // Every client route is the one app shell.
     navigateFallback: `/${SHELL_FILE}`,
+    // Scripts, fonts and the wasm carry a hash of their contents in their names: the worker may take them from the
+    // browser's cache (where the page's own requests put them) instead of downloading them a second time.
+    dontCacheBustURLsMatching: /^(_expo\/static|assets)\//,
     navigateFallbackDenylist: [/^\/api\//, /^\/outbox/],
     // A new release takes over at once; the page sees the change of controller and says "updated — reload".
     skipWaiting: true,

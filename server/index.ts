@@ -77,6 +77,11 @@ export async function main(): Promise<void> {
       warmBasemap();
     });
   });
+  // A client that reuses an idle kept-alive connection just as the server closes it gets a reset (a request lost,
+  // not retried by every client). Node closes idle connections after 5 s; clients and proxies keep them for up to a
+  // minute, so the server keeps them a little longer than that (common practice), and waits for headers past it.
+  server.keepAliveTimeout = 65_000;
+  server.headersTimeout = 66_000;
 
   let closing = false;
   const shutdown = (signal: string) => {

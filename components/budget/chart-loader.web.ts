@@ -3,6 +3,13 @@ import { CANVASKIT_URL } from './canvaskit-url';
 import type { SocChartCanvasProps } from './soc-chart-canvas';
 
 let loading: Promise<ComponentType<SocChartCanvasProps>> | undefined;
+let firstLoadSettled: () => void = () => undefined;
+const firstLoad = new Promise<void>((resolve) => (firstLoadSettled = resolve));
+
+/** Settles when the chart's bytes have first arrived (or failed to): what may wait for the chart's share of the link. */
+export function chartBytesFirstSettled(): Promise<void> {
+  return firstLoad;
+}
 
 /** Fetches the wasm into the HTTP cache (it is cached for a year), so Skia's own request for it is answered there. */
 async function fetchWasm(): Promise<void> {
@@ -25,7 +32,8 @@ export function loadChartCanvas(): Promise<ComponentType<SocChartCanvasProps>> {
     await LoadSkiaWeb({ locateFile: () => CANVASKIT_URL });
     return (await chart).chartCanvas();
   })();
-  loading.catch(() => {
+  loading.then(firstLoadSettled, () => {
+    firstLoadSettled();
     loading = undefined;
   });
   return loading;

@@ -17,9 +17,15 @@ function loadTripScreens(): Promise<TripScreens> {
   return loading;
 }
 
-/** Starts fetching the trip's screens in the background (opening a trip, or idle time on the Trips screen). */
-export function preloadTripScreens(): void {
-  loadTripScreens().catch(() => undefined);
+/**
+ * Starts fetching the trip's screens in the background (opening a trip, or idle time on the Trips screen); settles
+ * when they have arrived or failed, so what comes next can wait for them.
+ */
+export function preloadTripScreens(): Promise<void> {
+  return loadTripScreens().then(
+    () => undefined,
+    () => undefined,
+  );
 }
 
 /** A tab screen that renders a placeholder of the tab's size while its chunk arrives. */

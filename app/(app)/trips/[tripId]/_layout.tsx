@@ -14,7 +14,7 @@ export default function TripLayout() {
   // The chart's wasm and code start now, beside the budget's request, whichever tab the trip opens on.
   useEffect(preloadChart, []);
   // The tabs' own chunk too, so a tab switched to later opens at once.
-  useEffect(preloadTripScreens, []);
+  useEffect(() => void preloadTripScreens(), []);
   return (
     <TripFrame tripId={tripId}>
       <Slot />
