@@ -18,6 +18,7 @@ const ENTRIES: Record<string, string> = {
   server: 'server/index.ts',
   'budget-worker': 'server/budget/worker-task.ts',
   'gpx-worker': 'server/places/gpx-worker.ts',
+  'password-worker': 'server/password/password-worker.ts',
 };
 
 /**

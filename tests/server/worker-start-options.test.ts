@@ -6,6 +6,8 @@ import { execFileSync } from 'node:child_process';
 import fs from 'node:fs';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { DEMO_ACCOUNT } from '@/db/seed';
+import { SERVER_BUNDLE } from '@/scripts/build-server';
+import { PASSWORD_MESSAGES } from '@/shared/password-strength';
 import { startScriptNodeArgs, startServer, type RunningServer } from '../e2e/server-process';
 
 const GPX_FILE = 'tests/fixtures/gpx/four-waypoints-track.gpx';
@@ -77,5 +79,24 @@ describe('the compiled server, run as npm start runs it', () => {
     });
     expect(response.status).toBe(200);
     expect(((await response.json()) as { stops: unknown[] }).stops).toHaveLength(4);
+  });
+
+  it('when sign-up chooses a common password, then the password worker refuses it', async () => {
+    const response = await call('/api/auth/sign-up/email', {
+      method: 'POST',
+      headers: { 'Content-Type': 'application/json' },
+      body: JSON.stringify({ name: 'Ailsa', email: 'ailsa@example.test', password: 'password1' }),
+    });
+    expect(response.status).toBe(400);
+    expect(await response.json()).toMatchObject({
+      code: 'PASSWORD_TOO_WEAK',
+      fields: { password: [PASSWORD_MESSAGES.common] },
+    });
+  });
+
+  it("when the server is compiled, then zxcvbn's word lists are left to the password worker", () => {
+    const server = fs.readFileSync(SERVER_BUNDLE, 'utf8');
+    expect(server).toContain('password-worker.cjs');
+    expect(server).not.toMatch(/require\("@zxcvbn-ts/);
   });
 });
