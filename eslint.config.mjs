@@ -69,7 +69,19 @@ const nodeBuiltins = [
 ];
 
 export default tseslint.config(
-  { ignores: ['node_modules/', 'dist/', '.expo/', 'data/', 'test-results/', 'drizzle/', 'public/', 'expo-env.d.ts'] },
+  {
+    ignores: [
+      'node_modules/',
+      'dist/',
+      'build/',
+      '.expo/',
+      'data/',
+      'test-results/',
+      'drizzle/',
+      'public/',
+      'expo-env.d.ts',
+    ],
+  },
   js.configs.recommended,
   ...tseslint.configs.recommended,
   {

@@ -1,6 +1,7 @@
 import { APIError, createAuthMiddleware, getSessionFromCtx } from 'better-auth/api';
-import { passwordProblem, type PasswordOwner } from '@/shared/password-strength';
+import type { PasswordOwner } from '@/shared/password-strength';
 import { PASSWORD_MIN_LENGTH, PASSWORD_MAX_LENGTH, userNameSchema } from '@/shared/schemas/account';
+import { passwordChecks } from './password/password-pool';
 
 type Body = Record<string, unknown>;
 
@@ -20,12 +21,20 @@ function checkedName(value: unknown): string {
 }
 
 /**
- * Refuses a guessable password. Wrong types and lengths are left to better-auth, which names them itself;
- * checking length first also keeps the estimator away from oversized input.
+ * Refuses a guessable password (judged in the password worker thread). Wrong types and lengths are left to
+ * better-auth, which names them itself; checking length first also keeps the estimator away from oversized input.
  */
-function checkPassword(value: unknown, field: string, owner: PasswordOwner): void {
+async function checkPassword(value: unknown, field: string, owner: PasswordOwner): Promise<void> {
   if (typeof value !== 'string' || value.length < PASSWORD_MIN_LENGTH || value.length > PASSWORD_MAX_LENGTH) return;
-  const problem = passwordProblem(value, owner);
+  let problem: string | undefined;
+  try {
+    problem = await passwordChecks.problem(value, owner);
+  } catch {
+    throw new APIError('SERVICE_UNAVAILABLE', {
+      code: 'PASSWORD_CHECK_UNAVAILABLE',
+      message: 'Passwords cannot be checked just now. Try again in a moment.',
+    });
+  }
   if (problem) refuse('PASSWORD_TOO_WEAK', field, 'Password', problem);
 }
 
@@ -60,7 +69,7 @@ export const authRules = createAuthMiddleware(async (ctx) => {
     case '/sign-up/email': {
       checkImage(body.image);
       const name = checkedName(body.name);
-      checkPassword(body.password, 'password', { email: text(body.email), name });
+      await checkPassword(body.password, 'password', { email: text(body.email), name });
       return { context: { body: { ...body, name } } };
     }
     case '/update-user': {
@@ -73,13 +82,13 @@ export const authRules = createAuthMiddleware(async (ctx) => {
       if (!token) return;
       const verification = await ctx.context.internalAdapter.findVerificationValue(`reset-password:${token}`);
       const user = verification ? await ctx.context.internalAdapter.findUserById(verification.value) : null;
-      if (user) checkPassword(body.newPassword, 'newPassword', user);
+      if (user) await checkPassword(body.newPassword, 'newPassword', user);
       return;
     }
     case '/change-password': {
       const session = await getSessionFromCtx(ctx);
       if (!session) return;
-      checkPassword(body.newPassword, 'newPassword', session.user);
+      await checkPassword(body.newPassword, 'newPassword', session.user);
       // A changed password ends every other session, so a stolen cookie stops working with the old password.
       return { context: { body: { ...body, revokeOtherSessions: true } } };
     }

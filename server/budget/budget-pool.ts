@@ -1,7 +1,7 @@
 import { availableParallelism } from 'node:os';
-import path from 'node:path';
 import { MessageChannel, type ResourceLimits } from 'node:worker_threads';
 import { Piscina } from 'piscina';
+import { workerFile } from '../worker-file';
 import type { BudgetWork, TripBudget } from './compute';
 
 /** The budget took longer than its time limit (or more memory than a worker has) and was stopped. */
@@ -44,7 +44,7 @@ export type BudgetPoolOptions = {
   memoryMb?: number;
 };
 
-const WORKER_FILE = path.join(__dirname, 'worker.mjs');
+const WORKER_FILE = workerFile(__dirname, 'budget-worker.cjs', 'worker.mjs');
 
 /** The largest plan the API accepts computes in a quarter of a second: 5 s leaves room for a busy machine. */
 export const DEFAULT_BUDGET_TIME_LIMIT_MS = 5_000;

@@ -5,7 +5,7 @@ import type { BudgetResult } from '@/shared/budget-result';
 import type { SimulationResult } from '@/shared/engine/result-types';
 import { fromLedgerColumns, type LedgerColumns } from '@/shared/ledger-columns';
 import type { BudgetFigures, BudgetWork, TripBudget } from './compute';
-import { readyBodySize, type ReadyBody } from './ready-body';
+import { readyBodySize, readyJson, type ReadyBody } from './ready-body';
 
 export type BudgetAnswer = { revision: number } &
   /**
@@ -26,8 +26,8 @@ export type BudgetGlance = {
 };
 
 /**
- * Full answers kept, by count and by bytes (each in three encodings, outside V8's heap): the largest plan's answer
- * is about 3 MB, the demo trip's 70 kB. The least recently asked for goes first.
+ * Full answers kept, by count and by bytes (each as gzip and Brotli only, outside V8's heap; the plain JSON, several
+ * times larger, is not kept). The least recently asked for goes first.
  */
 export const DEFAULT_BUDGET_CACHE = { entries: 100, bytes: 32 * 1024 * 1024 };
 /** A plan stopped for taking too long is not tried again for this long, so asking again costs nothing. */
@@ -171,9 +171,8 @@ export function createBudgetService(
         throw error;
       });
       if (answer?.kind !== 'ok' || !answer.ledgerBody) return null;
-      const read = (body: ReadyBody): unknown => JSON.parse(new TextDecoder().decode(body.identity));
-      const { result } = read(answer.body) as { result: BudgetResult };
-      const { ledger } = read(answer.ledgerBody) as { ledger: LedgerColumns };
+      const { result } = (await readyJson(answer.body)) as { result: BudgetResult };
+      const { ledger } = (await readyJson(answer.ledgerBody)) as { ledger: LedgerColumns };
       const { soc: _track, ...rest } = result;
       return { ...rest, ledger: fromLedgerColumns(ledger) };
     },

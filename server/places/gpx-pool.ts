@@ -1,9 +1,9 @@
 // One worker thread reads GPX files off the main thread (see gpx-worker.ts). The machine has few cores and the
 // budget engine needs them, so one thread, a short queue, and a time limit per file.
-import path from 'node:path';
 import { Piscina } from 'piscina';
 import type { GpxPreview } from '@/shared/schemas/gpx';
 import { HttpError } from '../errors';
+import { workerFile } from '../worker-file';
 import type { GpxTask, GpxTaskResult } from './gpx-worker';
 
 const QUEUE_LIMIT = 4;
@@ -13,8 +13,8 @@ let pool: Piscina<GpxTask, GpxTaskResult> | null = null;
 
 function gpxPool(): Piscina<GpxTask, GpxTaskResult> {
   pool ??= new Piscina<GpxTask, GpxTaskResult>({
-    // The worker is TypeScript: its entry registers tsx's loader in the worker's own thread.
-    filename: path.join(__dirname, 'gpx-worker.mjs'),
+    // The compiled worker under `npm start`; from the sources, an entry that registers tsx in the worker's thread.
+    filename: workerFile(__dirname, 'gpx-worker.cjs', 'gpx-worker.mjs'),
     // A GPX file is capped in size (see the route's limit); this bounds what a pathological one may take.
     resourceLimits: { maxOldGenerationSizeMb: 128, maxYoungGenerationSizeMb: 16 },
     minThreads: 0,

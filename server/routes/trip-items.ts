@@ -5,7 +5,7 @@ import packageJson from '@/package.json';
 import { pickEncoding } from '../accept-encoding';
 import { BudgetBusyError } from '../budget/budget-pool';
 import type { BudgetAnswer, BudgetService } from '../budget/budget-service';
-import type { ReadyBody } from '../budget/ready-body';
+import { plainBytes, type ReadyBody } from '../budget/ready-body';
 import { HttpError, notFound } from '../errors';
 import { tripAccess } from '../middleware/trip-access';
 import { appliancesRouter } from './appliances';
@@ -86,10 +86,13 @@ function freshOrNotModified(
   return false;
 }
 
-/** A body the worker handed over serialised and compressed: sent as it is, never parsed or compressed here. */
-function sendReady(req: Request, res: Response, body: ReadyBody): void {
+/**
+ * A body the worker handed over serialised and compressed: sent as it is, never parsed or compressed here; unpacked
+ * only for a client that takes no compression.
+ */
+async function sendReady(req: Request, res: Response, body: ReadyBody): Promise<void> {
   const encoding = pickEncoding(req.headers['accept-encoding'], ['br', 'gzip']);
-  const bytes = encoding ? body[encoding] : body.identity;
+  const bytes = encoding ? body[encoding] : await plainBytes(body);
   res.locals.precompressed = true;
   res.setHeader('Vary', 'Accept-Encoding');
   if (encoding) res.setHeader('Content-Encoding', encoding);
@@ -114,7 +117,7 @@ export function budgetReadRoutes(
         res.json({ version: answer.revision, result: null, reason: answer.reason });
         return;
       }
-      if (freshOrNotModified(req, res, 'budget', answer.revision)) sendReady(req, res, answer.body);
+      if (freshOrNotModified(req, res, 'budget', answer.revision)) await sendReady(req, res, answer.body);
     },
 
     // The hourly ledger as columns, for the screens that show it; kept and sent like the budget, under its own ETag.
@@ -126,7 +129,7 @@ export function budgetReadRoutes(
         res.json({ version: answer.revision, ledger: null, reason });
         return;
       }
-      if (freshOrNotModified(req, res, 'ledger', answer.revision)) sendReady(req, res, answer.ledgerBody);
+      if (freshOrNotModified(req, res, 'ledger', answer.revision)) await sendReady(req, res, answer.ledgerBody);
     },
 
     // The budget's flags with their fixes, each checked by walking the trip again: asked for apart from the budget
@@ -138,7 +141,7 @@ export function budgetReadRoutes(
         res.json({ version: answer.revision, fixes: [], reason: answer.reason });
         return;
       }
-      if (freshOrNotModified(req, res, 'fixes', answer.revision)) sendReady(req, res, answer.body);
+      if (freshOrNotModified(req, res, 'fixes', answer.revision)) await sendReady(req, res, answer.body);
     },
   };
 }

@@ -1,5 +1,6 @@
 import request from 'supertest';
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { PasswordCheckUnavailableError, passwordChecks } from '@/server/password/password-pool';
 import { PASSWORD_MESSAGES } from '@/shared/password-strength';
 import { createTestApp, signUpAgent, TEST_PASSWORD, type TestContext } from '../factories/test-app';
 
@@ -9,7 +10,10 @@ let ctx: TestContext;
 beforeEach(() => {
   ctx = createTestApp();
 });
-afterEach(() => ctx.close());
+afterEach(() => {
+  vi.restoreAllMocks();
+  ctx.close();
+});
 
 const signUp = (body: Record<string, unknown>) =>
   request(ctx.app).post('/api/auth/sign-up/email').set('Origin', ORIGIN).send(body);
@@ -75,6 +79,14 @@ describe('passwords', () => {
     expect(response.status).toBe(400);
     expect(response.body.code).toBe('PASSWORD_TOO_WEAK');
     expect(response.body.fields.password).toEqual([message]);
+    expect(userCount()).toBe(0);
+  });
+
+  it('when the password cannot be checked just now, then sign-up answers 503 and no user is made', async () => {
+    vi.spyOn(passwordChecks, 'problem').mockRejectedValue(new PasswordCheckUnavailableError(new Error('queue full')));
+    const response = await signUp({ name: 'Ailsa', email: 'ailsa@example.test', password: TEST_PASSWORD });
+    expect(response.status).toBe(503);
+    expect(response.body.code).toBe('PASSWORD_CHECK_UNAVAILABLE');
     expect(userCount()).toBe(0);
   });
 

@@ -2,7 +2,7 @@ import type http from 'node:http';
 import zlib from 'node:zlib';
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { asciiJson, readyBody } from '@/server/budget/ready-body';
+import { asciiJson, plainBytes, readyBody, readyBodySize } from '@/server/budget/ready-body';
 import { simulateTrip } from '@/shared/engine';
 import { fromLedgerColumns } from '@/shared/ledger-columns';
 import type { TripDetail } from '@/shared/schemas/api';
@@ -97,11 +97,15 @@ describe('asciiJson and readyBody', () => {
     expect(JSON.parse(json)).toEqual(value);
   });
 
-  it('when a body is made ready, then its gzip and Brotli forms decode to its plain bytes', () => {
-    const body = readyBody(JSON.stringify({ hours: Array.from({ length: 200 }, (_, i) => ({ i, soc: 80 - i / 10 })) }));
-    expect(zlib.gunzipSync(body.gzip).equals(Buffer.from(body.identity))).toBe(true);
-    expect(zlib.brotliDecompressSync(body.br).equals(Buffer.from(body.identity))).toBe(true);
-    expect(body.br.byteLength).toBeLessThan(body.identity.byteLength / 4);
+  it('when a body is made ready, then only its gzip and Brotli forms are kept, both decoding to the same JSON', async () => {
+    const json = JSON.stringify({ hours: Array.from({ length: 200 }, (_, i) => ({ i, soc: 80 - i / 10 })) });
+    const body = readyBody(json);
+    expect(Object.keys(body).sort()).toEqual(['br', 'gzip']);
+    const plain = await plainBytes(body);
+    expect(plain.toString('latin1')).toBe(json);
+    expect(zlib.brotliDecompressSync(body.br).equals(plain)).toBe(true);
+    expect(body.br.byteLength).toBeLessThan(plain.byteLength / 4);
+    expect(readyBodySize(body)).toBe(body.gzip.byteLength + body.br.byteLength);
   });
 });
 

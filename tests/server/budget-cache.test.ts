@@ -10,7 +10,7 @@ import { createTrip } from '../factories/trip-factory';
 
 const BODY_BYTES = 1_000;
 
-/** Answers every trip with a body of BODY_BYTES plain bytes (no compressed forms), noting each trip it ran. */
+/** Answers every trip with a body of BODY_BYTES kept bytes (a stand-in gzip form), noting each trip it ran. */
 function sizedRunner(db: () => Db) {
   const runs: string[] = [];
   const runner: BudgetRunner = {
@@ -18,7 +18,7 @@ function sizedRunner(db: () => Db) {
       runs.push(tripId);
       const trip = findTrip(db(), tripId);
       if (!trip) return undefined;
-      const body = { identity: new Uint8Array(BODY_BYTES), gzip: new Uint8Array(0), br: new Uint8Array(0) };
+      const body = { gzip: new Uint8Array(BODY_BYTES), br: new Uint8Array(0) };
       return { revision: trip.revision, outcome: { kind: 'ok', body, ledgerBody: null, figures: null } };
     },
     warmUp: () => undefined,
