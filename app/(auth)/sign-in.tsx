@@ -36,7 +36,7 @@ export default function SignInScreen() {
               Forgot your password?
             </Text>
           </Link>
-          <OutboxLink testID="sign-in-outbox" />
+          <OutboxLink testID="sign-in-outbox" centered />
         </>
       }
     >

@@ -7,12 +7,12 @@ import { useOutboxAvailableQuery } from '@/stores/queries/outbox';
  * server, opened on the machine it runs on). The exported web app is always a production build, so the server's
  * answer decides, not a build-time flag.
  */
-export function OutboxLink({ testID }: { testID: string }) {
+export function OutboxLink({ testID, centered = false }: { testID: string; centered?: boolean }) {
   const available = useOutboxAvailableQuery();
   if (available.data !== true) return null;
   return (
     <Link href="/outbox" testID={testID} accessibilityLabel="Open the development Outbox">
-      <Text variant="label" color="pine">
+      <Text variant="label" color="pine" style={centered ? { textAlign: 'center' } : undefined}>
         Development Outbox: mail this server has kept
       </Text>
     </Link>
